@@ -1,0 +1,70 @@
+package dev.proofrun.arch;
+
+import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.noClasses;
+
+import com.tngtech.archunit.core.domain.JavaClasses;
+import com.tngtech.archunit.core.importer.ClassFileImporter;
+import com.tngtech.archunit.core.importer.ImportOption;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+
+/**
+ * The layers: stats (pure math) ← control, design, schedule, plan, grade (the job) ← sheet, report
+ * (files out) ← cli, app (people in). Arrows point one way; only {@code app} may touch JavaFX.
+ */
+class LayeringTest {
+
+    private static JavaClasses classes;
+
+    @BeforeAll
+    static void load() {
+        classes = new ClassFileImporter()
+                .withImportOption(ImportOption.Predefined.DO_NOT_INCLUDE_TESTS)
+                .importPackages("dev.proofrun");
+    }
+
+    @Test
+    void onlyTheWizardUsesJavaFx() {
+        noClasses().that().resideOutsideOfPackage("dev.proofrun.app..")
+                .should().dependOnClassesThat().resideInAnyPackage("javafx..")
+                .check(classes);
+    }
+
+    @Test
+    void statisticsDependOnNothingOfOurs() {
+        noClasses().that().resideInAPackage("dev.proofrun.stats..")
+                .should().dependOnClassesThat().resideInAnyPackage(
+                        "dev.proofrun.control..", "dev.proofrun.design..", "dev.proofrun.schedule..",
+                        "dev.proofrun.plan..", "dev.proofrun.grade..", "dev.proofrun.sheet..",
+                        "dev.proofrun.report..", "dev.proofrun.cli..", "dev.proofrun.app..",
+                        "dev.proofrun.estimate..", "dev.proofrun.readings..")
+                .check(classes);
+    }
+
+    @Test
+    void theJobDoesNotReachForFilesOutOrPeopleIn() {
+        noClasses().that().resideInAnyPackage("dev.proofrun.stats..", "dev.proofrun.control..",
+                        "dev.proofrun.design..", "dev.proofrun.schedule..", "dev.proofrun.plan..",
+                        "dev.proofrun.grade..", "dev.proofrun.estimate..", "dev.proofrun.readings..")
+                .should().dependOnClassesThat().resideInAnyPackage(
+                        "dev.proofrun.sheet..", "dev.proofrun.report..", "dev.proofrun.cli..", "dev.proofrun.app..")
+                .check(classes);
+    }
+
+    @Test
+    void filesOutDoNotReachForPeopleIn() {
+        noClasses().that().resideInAnyPackage("dev.proofrun.sheet..", "dev.proofrun.report..")
+                .should().dependOnClassesThat().resideInAnyPackage("dev.proofrun.cli..", "dev.proofrun.app..")
+                .check(classes);
+    }
+
+    @Test
+    void commandLineAndWizardAreIndependent() {
+        noClasses().that().resideInAPackage("dev.proofrun.cli..")
+                .should().dependOnClassesThat().resideInAPackage("dev.proofrun.app..")
+                .check(classes);
+        noClasses().that().resideInAPackage("dev.proofrun.app..")
+                .should().dependOnClassesThat().resideInAPackage("dev.proofrun.cli..")
+                .check(classes);
+    }
+}
