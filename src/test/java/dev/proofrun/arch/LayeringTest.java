@@ -37,7 +37,7 @@ class LayeringTest {
                         "dev.proofrun.control..", "dev.proofrun.design..", "dev.proofrun.schedule..",
                         "dev.proofrun.plan..", "dev.proofrun.grade..", "dev.proofrun.sheet..",
                         "dev.proofrun.report..", "dev.proofrun.cli..", "dev.proofrun.app..",
-                        "dev.proofrun.estimate..", "dev.proofrun.readings..")
+                        "dev.proofrun.estimate..", "dev.proofrun.readings..", "dev.proofrun.capability..")
                 .check(classes);
     }
 
@@ -45,7 +45,7 @@ class LayeringTest {
     void theJobDoesNotReachForFilesOutOrPeopleIn() {
         noClasses().that().resideInAnyPackage("dev.proofrun.stats..", "dev.proofrun.control..",
                         "dev.proofrun.design..", "dev.proofrun.schedule..", "dev.proofrun.plan..",
-                        "dev.proofrun.grade..", "dev.proofrun.estimate..", "dev.proofrun.readings..")
+                        "dev.proofrun.grade..", "dev.proofrun.estimate..", "dev.proofrun.readings..", "dev.proofrun.capability..")
                 .should().dependOnClassesThat().resideInAnyPackage(
                         "dev.proofrun.sheet..", "dev.proofrun.report..", "dev.proofrun.cli..", "dev.proofrun.app..")
                 .check(classes);
