@@ -1,0 +1,69 @@
+package dev.proofrun.app;
+
+import dev.proofrun.text.MessageKey;
+
+/** What the wizard itself says (the core's messages come from the core's own enums). */
+public enum AppMessage implements MessageKey {
+    STEP_START("Open"),
+    STEP_START_HINT("Pick up a recent plan, open one from a folder, or begin a new one."),
+    STEP_PART("Part"),
+    STEP_PART_HINT("The part and the characteristics the study must cover."),
+    STEP_GOAL("Goal"),
+    STEP_GOAL_HINT("What the study must show, and what you expect of the process."),
+    STEP_SIZING("Sample size"),
+    STEP_SIZING_HINT("How many subgroups of what size, and what each choice costs."),
+    STEP_TIMING("Timing"),
+    STEP_TIMING_HINT("When the subgroups are taken over the days and shifts of the span."),
+    STEP_HANDOUT("Hand-out"),
+    STEP_HANDOUT_HINT("Issue the plan and export the collection sheet and fill-in files."),
+    STEP_GRADING("Grading"),
+    STEP_GRADING_HINT("Check the returned readings against the plan and read the verdict."),
+
+    MISSING_PREFIX("Before going on: %s"),
+    READY("This step is complete."),
+    NO_PLAN("open or start a plan"),
+    DRAFT_SAVED("Draft kept in %s"),
+    DRAFT_RESTORED("Unsaved changes from %s were restored."),
+    DRAFT_FAILED("The draft could not be written: %s"),
+    CLOSE_TITLE("Unsaved changes"),
+    CLOSE_QUESTION("This plan has changes not yet saved into its plan file."),
+    CLOSE_SAVE("Save the plan"),
+    CLOSE_KEEP("Keep as a draft"),
+    CLOSE_STAY("Stay"),
+    DIRTY_MARK("unsaved changes"),
+
+    PART_NO_ROWS("add at least one characteristic"),
+    PART_ROW_PROBLEM("row %d (%s): %s"),
+    PART_ID_MISSING("give it an id"),
+    PART_ID_REPEATED("the id %s is used twice"),
+    PART_UNIT_MISSING("give the unit"),
+    PART_UNIT_BAD("'%s' is not a unit (letters and symbols such as mm, N·m, %%)"),
+    PART_NOT_A_NUMBER("%s '%s' is not a number"),
+    PART_NO_LIMIT("give LSL, USL or both"),
+    PART_LIMITS_ORDER("LSL %s must be below USL %s"),
+    PART_OUTSIDE("%s %s lies outside the limits"),
+    PART_EXPECTED_BAD("expected index must be above zero"),
+    PART_PLAN_ID_MISSING("give the plan an id"),
+    PART_NAME_MISSING("name the part"),
+    PART_IMPORTED("%d characteristics read from %s"),
+
+    GOAL_MINIMUM_BAD("the required minimum must be a number above zero"),
+    GOAL_CONFIDENCE_BAD("the confidence must be between 0.5 and 0.9999 (e.g. 0.95)"),
+    GOAL_INDEX_SIDES("%s needs both limits, and %s has only one"),
+    GOAL_EXPECTED_MISSING("give the expected %s for %s (in the Part table or here)"),
+    GOAL_MEAN_SIGMA_BAD("give the expected mean and a sigma above zero"),
+    GOAL_PILOT_MISSING("load the pilot readings"),
+    GOAL_PILOT_BAD("the pilot readings could not be used: %s"),
+    GOAL_EXPECTED_NOT_ABOVE("the expected %s (%.3f) must be above the required %.3f, or no study can show it");
+
+    private final String english;
+
+    AppMessage(String english) {
+        this.english = english;
+    }
+
+    @Override
+    public String english() {
+        return english;
+    }
+}

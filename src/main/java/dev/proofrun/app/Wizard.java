@@ -1,0 +1,77 @@
+package dev.proofrun.app;
+
+import dev.proofrun.app.goal.GoalView;
+import dev.proofrun.app.goal.GoalViewModel;
+import dev.proofrun.app.part.PartView;
+import dev.proofrun.app.part.PartViewModel;
+import dev.proofrun.app.session.AppHome;
+import dev.proofrun.app.session.Session;
+import dev.proofrun.app.shell.ShellView;
+import dev.proofrun.app.shell.ShellViewModel;
+import dev.proofrun.app.shell.StepView;
+import dev.proofrun.app.shell.StepViewModel;
+import dev.proofrun.app.start.StartView;
+import dev.proofrun.app.start.StartViewModel;
+import java.util.List;
+import javafx.application.HostServices;
+
+/**
+ * Puts the wizard together: one session, one view-model per step, their views, and the shell.
+ * Tests build it with a temporary {@link AppHome}.
+ */
+public final class Wizard {
+
+    private final Session session;
+    private final ShellViewModel shell;
+    private final ShellView view;
+    private final StartViewModel start;
+    private final PartViewModel part;
+    private final GoalViewModel goal;
+
+    private Wizard(AppHome home, HostServices host) {
+        session = new Session(home);
+        start = new StartViewModel(session);
+        part = new PartViewModel(session.draft());
+        goal = new GoalViewModel(session.draft());
+        List<StepViewModel> steps = List.of(start, part, goal);
+        shell = new ShellViewModel(session, steps);
+        List<StepView> views = List.of(new StartView(start), new PartView(part), new GoalView(goal));
+        view = new ShellView(shell, views);
+    }
+
+    public static Wizard create(AppHome home, HostServices host) {
+        return new Wizard(home, host);
+    }
+
+    /** After the window shows: the first start opens a plan at once, later starts show the recent plans. */
+    public void opened() {
+        if (session.recent().isFirstStart()) {
+            start.newPlan();
+            shell.goTo(1);
+        }
+    }
+
+    public Session session() {
+        return session;
+    }
+
+    public ShellViewModel shell() {
+        return shell;
+    }
+
+    public ShellView view() {
+        return view;
+    }
+
+    public StartViewModel start() {
+        return start;
+    }
+
+    public PartViewModel part() {
+        return part;
+    }
+
+    public GoalViewModel goal() {
+        return goal;
+    }
+}

@@ -1,0 +1,217 @@
+package dev.proofrun.app.goal;
+
+import dev.proofrun.app.AppMessage;
+import dev.proofrun.app.session.CharacteristicDraft;
+import dev.proofrun.app.session.CharacteristicField;
+import dev.proofrun.app.session.DraftField;
+import dev.proofrun.app.session.ExpectationSource;
+import dev.proofrun.app.session.Numbers;
+import dev.proofrun.app.session.StudyDraft;
+import dev.proofrun.app.shell.StepViewModel;
+import dev.proofrun.design.Expectation;
+import dev.proofrun.design.Requirement;
+import dev.proofrun.stats.IndexKind;
+import dev.proofrun.stats.SpecLimits;
+import java.util.List;
+import java.util.Optional;
+import java.util.OptionalDouble;
+import javafx.beans.Observable;
+import javafx.beans.binding.Bindings;
+import javafx.beans.binding.ObjectBinding;
+import javafx.beans.property.ObjectProperty;
+import javafx.beans.property.SimpleObjectProperty;
+import javafx.beans.property.StringProperty;
+import javafx.collections.ObservableList;
+
+/**
+ * The requirement (index, minimum, confidence) and the expectation of the process for the characteristic
+ * in focus. {@link #requirementBinding()} and {@link #expectationBinding()} are what the sizing step designs
+ * for; both are empty while the inputs are not usable, and {@link #missingProperty()} then says why.
+ */
+public final class GoalViewModel extends StepViewModel {
+
+    private final StudyDraft draft;
+    private final ObjectProperty<IndexKind> index = new SimpleObjectProperty<>(this, "index", IndexKind.CPK);
+    private final ObjectProperty<ExpectationSource> source = new SimpleObjectProperty<>(this, "source", ExpectationSource.VALUE);
+    private final ObjectBinding<Optional<CharacteristicDraft>> focus;
+    private final ObjectBinding<Optional<Requirement>> requirement;
+    private final ObjectBinding<Optional<Expectation>> expectation;
+
+    public GoalViewModel(StudyDraft draft) {
+        this.draft = draft;
+        syncEnum(index, draft.field(DraftField.INDEX), IndexKind::token, t -> {
+            try {
+                return IndexKind.fromToken(t);
+            } catch (IllegalArgumentException e) {
+                return IndexKind.CPK;
+            }
+        });
+        syncEnum(source, draft.field(DraftField.EXPECTATION_SOURCE), ExpectationSource::token, ExpectationSource::fromToken);
+        ObservableList<CharacteristicDraft> rows = draft.characteristics();
+        focus = Bindings.createObjectBinding(this::findFocus, rows, draft.field(DraftField.FOCUS));
+        Observable[] inputs = {rows, index, source, focus, draft.field(DraftField.MINIMUM), draft.field(DraftField.CONFIDENCE),
+            draft.field(DraftField.EXPECTED_MEAN), draft.field(DraftField.EXPECTED_SIGMA)};
+        requirement = Bindings.createObjectBinding(this::computeRequirement, inputs);
+        expectation = Bindings.createObjectBinding(this::computeExpectation, inputs);
+        bindMissing(Bindings.createStringBinding(this::computeMissing, inputs));
+    }
+
+    private static <E> void syncEnum(ObjectProperty<E> value, StringProperty text,
+            java.util.function.Function<E, String> token, java.util.function.Function<String, E> parse) {
+        value.set(parse.apply(text.get()));
+        text.addListener((obs, was, now) -> {
+            E e = parse.apply(now);
+            if (e != value.get()) {
+                value.set(e);
+            }
+        });
+        value.addListener((obs, was, now) -> {
+            if (now != null && !token.apply(now).equals(text.get())) {
+                text.set(token.apply(now));
+            }
+        });
+    }
+
+    @Override
+    public String title() {
+        return AppMessage.STEP_GOAL.english();
+    }
+
+    @Override
+    public String hint() {
+        return AppMessage.STEP_GOAL_HINT.english();
+    }
+
+    public ObjectProperty<IndexKind> indexProperty() {
+        return index;
+    }
+
+    public ObjectProperty<ExpectationSource> sourceProperty() {
+        return source;
+    }
+
+    public StringProperty minimum() {
+        return draft.field(DraftField.MINIMUM);
+    }
+
+    public StringProperty confidence() {
+        return draft.field(DraftField.CONFIDENCE);
+    }
+
+    public StringProperty expectedMean() {
+        return draft.field(DraftField.EXPECTED_MEAN);
+    }
+
+    public StringProperty expectedSigma() {
+        return draft.field(DraftField.EXPECTED_SIGMA);
+    }
+
+    /** The id of the characteristic in focus (empty = the first). */
+    public StringProperty focusId() {
+        return draft.field(DraftField.FOCUS);
+    }
+
+    public ObservableList<CharacteristicDraft> characteristics() {
+        return draft.characteristics();
+    }
+
+    public ObjectBinding<Optional<CharacteristicDraft>> focusBinding() {
+        return focus;
+    }
+
+    public ObjectBinding<Optional<Requirement>> requirementBinding() {
+        return requirement;
+    }
+
+    public ObjectBinding<Optional<Expectation>> expectationBinding() {
+        return expectation;
+    }
+
+    /** The indices the requirement can name for the focus characteristic's limits. */
+    public List<IndexKind> indices() {
+        return List.of(IndexKind.CPK, IndexKind.PPK, IndexKind.CP, IndexKind.PP,
+                IndexKind.CPU, IndexKind.CPL, IndexKind.PPU, IndexKind.PPL);
+    }
+
+    private Optional<CharacteristicDraft> findFocus() {
+        List<CharacteristicDraft> rows = draft.characteristics();
+        String id = draft.text(DraftField.FOCUS);
+        for (CharacteristicDraft r : rows) {
+            if (r.id().equalsIgnoreCase(id)) {
+                return Optional.of(r);
+            }
+        }
+        return rows.isEmpty() ? Optional.empty() : Optional.of(rows.get(0));
+    }
+
+    private Optional<Requirement> computeRequirement() {
+        OptionalDouble min = Numbers.parse(draft.text(DraftField.MINIMUM));
+        OptionalDouble conf = Numbers.parse(draft.text(DraftField.CONFIDENCE));
+        if (min.isEmpty() || !(min.getAsDouble() > 0) || conf.isEmpty()
+                || !(conf.getAsDouble() > 0.5 && conf.getAsDouble() < 0.9999) || index.get() == null) {
+            return Optional.empty();
+        }
+        return Optional.of(Requirement.of(index.get(), min.getAsDouble(), conf.getAsDouble()));
+    }
+
+    private Optional<Expectation> computeExpectation() {
+        Optional<CharacteristicDraft> row = focus.get();
+        if (row.isEmpty() || row.get().limits().isEmpty() || index.get() == null || !fits(index.get(), row.get().limits().get())) {
+            return Optional.empty();
+        }
+        SpecLimits limits = row.get().limits().get();
+        switch (source.get()) {
+            case VALUE: {
+                OptionalDouble v = row.get().number(CharacteristicField.EXPECTED);
+                return v.isPresent() && v.getAsDouble() > 0 ? Optional.of(Expectation.centred(v.getAsDouble())) : Optional.empty();
+            }
+            case MEAN_SIGMA: {
+                OptionalDouble mean = Numbers.parse(draft.text(DraftField.EXPECTED_MEAN));
+                OptionalDouble sigma = Numbers.parse(draft.text(DraftField.EXPECTED_SIGMA));
+                if (mean.isEmpty() || sigma.isEmpty() || !(sigma.getAsDouble() > 0)) {
+                    return Optional.empty();
+                }
+                return dev.proofrun.app.session.ExpectedProcess.expectation(index.get(), limits, mean.getAsDouble(), sigma.getAsDouble());
+            }
+            default:
+                return Optional.empty();
+        }
+    }
+
+    /** Whether the index exists for these limits (Cp/Pp need both, Cpu an upper, Cpl a lower limit). */
+    static boolean fits(IndexKind kind, SpecLimits limits) {
+        return switch (kind.side()) {
+            case BOTH -> limits.isTwoSided();
+            case UPPER -> limits.upper().isPresent();
+            case LOWER -> limits.lower().isPresent();
+            case NEAREST -> true;
+        };
+    }
+
+    private String computeMissing() {
+        if (computeRequirement().isEmpty()) {
+            OptionalDouble min = Numbers.parse(draft.text(DraftField.MINIMUM));
+            return min.isEmpty() || !(min.getAsDouble() > 0) ? AppMessage.GOAL_MINIMUM_BAD.format() : AppMessage.GOAL_CONFIDENCE_BAD.format();
+        }
+        Optional<CharacteristicDraft> row = focus.get();
+        if (row.isEmpty() || row.get().limits().isEmpty()) {
+            return AppMessage.PART_NO_ROWS.format();
+        }
+        if (!fits(index.get(), row.get().limits().get())) {
+            return AppMessage.GOAL_INDEX_SIDES.format(index.get().symbol(), row.get().id());
+        }
+        Optional<Expectation> e = expectation.get();
+        if (e.isEmpty()) {
+            return switch (source.get()) {
+                case VALUE -> AppMessage.GOAL_EXPECTED_MISSING.format(index.get().symbol(), row.get().id());
+                case MEAN_SIGMA -> AppMessage.GOAL_MEAN_SIGMA_BAD.format();
+                case PILOT -> AppMessage.GOAL_PILOT_MISSING.format();
+            };
+        }
+        double min = requirement.get().get().minimum();
+        if (!(e.get().index() > min)) {
+            return AppMessage.GOAL_EXPECTED_NOT_ABOVE.format(index.get().symbol(), e.get().index(), min);
+        }
+        return "";
+    }
+}

@@ -1,0 +1,166 @@
+package dev.proofrun.app.part;
+
+import dev.proofrun.app.session.CharacteristicDraft;
+import dev.proofrun.app.session.CharacteristicField;
+import dev.proofrun.app.shell.StepView;
+import java.io.File;
+import java.nio.file.Files;
+import javafx.beans.binding.Bindings;
+import javafx.scene.Node;
+import javafx.scene.control.Button;
+import javafx.scene.control.Label;
+import javafx.scene.control.TableColumn;
+import javafx.scene.control.TableView;
+import javafx.scene.control.TextField;
+import javafx.scene.control.Tooltip;
+import javafx.scene.control.cell.TextFieldTableCell;
+import javafx.scene.layout.GridPane;
+import javafx.scene.layout.HBox;
+import javafx.scene.layout.VBox;
+import javafx.stage.FileChooser;
+
+/** The part's header fields and the editable table of characteristics. */
+public final class PartView implements StepView {
+
+    private final VBox root = new VBox();
+    private final TextField planId = new TextField();
+
+    public PartView(PartViewModel vm) {
+        root.setSpacing(12);
+        GridPane form = new GridPane();
+        form.getStyleClass().addAll("pr-card", "pr-form");
+        planId.setId("plan-id");
+        planId.textProperty().bindBidirectional(vm.planId());
+        TextField number = new TextField();
+        number.setId("part-number");
+        number.textProperty().bindBidirectional(vm.partNumber());
+        TextField name = new TextField();
+        name.setId("part-name");
+        name.textProperty().bindBidirectional(vm.partName());
+        TextField by = new TextField();
+        by.setId("prepared-by");
+        by.textProperty().bindBidirectional(vm.preparedBy());
+        form.addRow(0, label("Plan id", planId), planId, label("Part number", number), number);
+        form.addRow(1, label("Part name", name), name, label("Prepared by", by), by);
+
+        TableView<CharacteristicDraft> table = new TableView<>(vm.rows());
+        table.setId("characteristics");
+        table.setEditable(true);
+        table.setPrefHeight(300);
+        table.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY_FLEX_LAST_COLUMN);
+        for (CharacteristicField f : CharacteristicField.values()) {
+            TableColumn<CharacteristicDraft, String> c = new TableColumn<>(PartViewModel.label(f));
+            c.setId("col-" + f.header());
+            c.setCellValueFactory(cd -> cd.getValue().cell(f));
+            c.setCellFactory(col -> new CheckedCell(vm, f));
+            c.setOnEditCommit(e -> e.getRowValue().cell(f).set(e.getNewValue()));
+            table.getColumns().add(c);
+        }
+        table.getSelectionModel().selectedIndexProperty().addListener((obs, was, now) -> vm.selectedProperty().set(now.intValue()));
+        vm.selectedProperty().addListener((obs, was, now) -> {
+            if (table.getSelectionModel().getSelectedIndex() != now.intValue()) {
+                table.getSelectionModel().select(now.intValue());
+            }
+        });
+
+        Label rowProblem = new Label();
+        rowProblem.setId("row-problem");
+        rowProblem.getStyleClass().add("pr-problem");
+        rowProblem.setWrapText(true);
+        rowProblem.textProperty().bind(Bindings.when(vm.selectedProblemBinding().isEmpty())
+                .then(vm.firstProblemBinding()).otherwise(vm.selectedProblemBinding()));
+
+        Button add = new Button("_Add characteristic");
+        add.setId("add-row");
+        add.setOnAction(e -> {
+            vm.addRow();
+            table.edit(vm.rows().size() - 1, table.getColumns().get(1));
+        });
+        Button remove = new Button("_Remove");
+        remove.setId("remove-row");
+        remove.disableProperty().bind(table.getSelectionModel().selectedIndexProperty().lessThan(0));
+        remove.setOnAction(e -> vm.removeRow(table.getSelectionModel().getSelectedIndex()));
+        Button importCsv = new Button("_Import list…");
+        importCsv.setId("import-list");
+        importCsv.setTooltip(new Tooltip("A CSV file with the columns id,name,unit,nominal,lsl,usl,target,expected"));
+        importCsv.setOnAction(e -> {
+            FileChooser fc = new FileChooser();
+            fc.getExtensionFilters().add(new FileChooser.ExtensionFilter("CSV list", "*.csv"));
+            File f = fc.showOpenDialog(root.getScene().getWindow());
+            if (f != null && Files.isRegularFile(f.toPath())) {
+                vm.importList(f.toPath());
+            }
+        });
+        Label imported = new Label();
+        imported.setId("import-message");
+        imported.getStyleClass().add("pr-note");
+        imported.textProperty().bind(vm.importMessageProperty());
+        HBox actions = new HBox(8, add, remove, importCsv, imported);
+        VBox card = new VBox(new Label("Characteristics (double-click or start typing in a cell to edit)"), table, rowProblem, actions);
+        card.getStyleClass().add("pr-card");
+        root.getChildren().addAll(form, card);
+    }
+
+    private static Label label(String text, Node field) {
+        Label l = new Label(text);
+        l.setLabelFor(field);
+        return l;
+    }
+
+    @Override
+    public Node root() {
+        return root;
+    }
+
+    @Override
+    public Node firstFocus() {
+        return planId;
+    }
+
+    /** A text cell that is marked when the view-model finds a problem in it, with the problem as tooltip. */
+    private static final class CheckedCell extends TextFieldTableCell<CharacteristicDraft, String> {
+        private final PartViewModel vm;
+        private final CharacteristicField field;
+
+        CheckedCell(PartViewModel vm, CharacteristicField field) {
+            super(new javafx.util.converter.DefaultStringConverter());
+            this.vm = vm;
+            this.field = field;
+            vm.rows().addListener((javafx.collections.ListChangeListener<CharacteristicDraft>) c -> mark());
+        }
+
+        /** Writes each keystroke into the draft, so the cell is validated as it is typed. */
+        @Override
+        public void startEdit() {
+            super.startEdit();
+            CharacteristicDraft row = getTableRow() == null ? null : getTableRow().getItem();
+            if (isEditing() && row != null && getGraphic() instanceof TextField tf) {
+                tf.setId("editing-" + field.header());
+                tf.textProperty().addListener((obs, was, now) -> {
+                    if (isEditing()) {
+                        row.cell(field).set(now);
+                    }
+                });
+            }
+        }
+
+        @Override
+        public void updateItem(String item, boolean empty) {
+            super.updateItem(item, empty);
+            mark();
+        }
+
+        private void mark() {
+            getStyleClass().remove("pr-invalid");
+            setTooltip(null);
+            CharacteristicDraft row = getTableRow() == null ? null : getTableRow().getItem();
+            if (row == null || isEmpty()) {
+                return;
+            }
+            vm.problem(row, field).ifPresent(p -> {
+                getStyleClass().add("pr-invalid");
+                setTooltip(new Tooltip(p));
+            });
+        }
+    }
+}

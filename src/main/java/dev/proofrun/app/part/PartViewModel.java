@@ -1,0 +1,237 @@
+package dev.proofrun.app.part;
+
+import static dev.proofrun.app.session.CharacteristicField.EXPECTED;
+import static dev.proofrun.app.session.CharacteristicField.ID;
+import static dev.proofrun.app.session.CharacteristicField.LSL;
+import static dev.proofrun.app.session.CharacteristicField.NOMINAL;
+import static dev.proofrun.app.session.CharacteristicField.TARGET;
+import static dev.proofrun.app.session.CharacteristicField.UNIT;
+import static dev.proofrun.app.session.CharacteristicField.USL;
+
+import dev.proofrun.app.AppMessage;
+import dev.proofrun.app.session.CharacteristicDraft;
+import dev.proofrun.app.session.CharacteristicField;
+import dev.proofrun.app.session.CharacteristicListFile;
+import dev.proofrun.app.session.DraftField;
+import dev.proofrun.app.session.Numbers;
+import dev.proofrun.app.session.StudyDraft;
+import dev.proofrun.app.shell.StepViewModel;
+import dev.proofrun.text.UserException;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Optional;
+import java.util.OptionalDouble;
+import java.util.regex.Pattern;
+import javafx.beans.binding.Bindings;
+import javafx.beans.binding.StringBinding;
+import javafx.beans.property.IntegerProperty;
+import javafx.beans.property.SimpleIntegerProperty;
+import javafx.beans.property.SimpleStringProperty;
+import javafx.beans.property.StringProperty;
+import javafx.collections.ObservableList;
+
+/**
+ * The part and its characteristics. Every cell is validated as it is typed: {@link #problem} gives the
+ * cell's message (the view marks the cell and shows the message under the table), {@link #firstProblemBinding}
+ * the first problem of the whole table, which is also what the step misses.
+ */
+public final class PartViewModel extends StepViewModel {
+
+    /** Units: a letter or unit sign first, then letters, digits and the usual joiners (mm, N·m, m/s^2, %). */
+    private static final Pattern UNIT_TEXT = Pattern.compile("[\\p{L}µ°%Ω‰][\\p{L}\\p{N}µ°%Ω‰/·.^*²³-]{0,15}");
+
+    private final StudyDraft draft;
+    private final IntegerProperty selected = new SimpleIntegerProperty(this, "selected", -1);
+    private final StringProperty importMessage = new SimpleStringProperty(this, "importMessage", "");
+    private final StringBinding firstProblem;
+    private final StringBinding selectedProblem;
+
+    public PartViewModel(StudyDraft draft) {
+        this.draft = draft;
+        ObservableList<CharacteristicDraft> rows = draft.characteristics();
+        firstProblem = Bindings.createStringBinding(this::computeFirstProblem, rows,
+                draft.field(DraftField.PLAN_ID), draft.field(DraftField.PART_NAME));
+        selectedProblem = Bindings.createStringBinding(() -> {
+            int i = selected.get();
+            return i >= 0 && i < rows.size() ? rowProblem(i).orElse("") : "";
+        }, rows, selected);
+        bindMissing(firstProblem);
+    }
+
+    @Override
+    public String title() {
+        return AppMessage.STEP_PART.english();
+    }
+
+    @Override
+    public String hint() {
+        return AppMessage.STEP_PART_HINT.english();
+    }
+
+    public StringProperty planId() {
+        return draft.field(DraftField.PLAN_ID);
+    }
+
+    public StringProperty partNumber() {
+        return draft.field(DraftField.PART_NUMBER);
+    }
+
+    public StringProperty partName() {
+        return draft.field(DraftField.PART_NAME);
+    }
+
+    public StringProperty preparedBy() {
+        return draft.field(DraftField.PREPARED_BY);
+    }
+
+    public ObservableList<CharacteristicDraft> rows() {
+        return draft.characteristics();
+    }
+
+    /** The table row the user is on (-1 for none); its problem is shown under the table. */
+    public IntegerProperty selectedProperty() {
+        return selected;
+    }
+
+    public StringBinding firstProblemBinding() {
+        return firstProblem;
+    }
+
+    /** The problem of the selected row, empty when it is fine. */
+    public StringBinding selectedProblemBinding() {
+        return selectedProblem;
+    }
+
+    public StringProperty importMessageProperty() {
+        return importMessage;
+    }
+
+    public CharacteristicDraft addRow() {
+        CharacteristicDraft d = CharacteristicDraft.empty();
+        d.cell(ID).set("C" + (rows().size() + 1));
+        rows().add(d);
+        selected.set(rows().size() - 1);
+        return d;
+    }
+
+    public void removeRow(int index) {
+        if (index >= 0 && index < rows().size()) {
+            rows().remove(index);
+            selected.set(Math.min(index, rows().size() - 1));
+        }
+    }
+
+    /**
+     * Replaces the table with the characteristics of a CSV list. On a bad file the table is left as it
+     * was and the message (file, row, column) is shown.
+     */
+    public boolean importList(Path file) {
+        try {
+            List<CharacteristicDraft> read = CharacteristicListFile.read(file);
+            rows().setAll(read);
+            selected.set(0);
+            importMessage.set(AppMessage.PART_IMPORTED.format(read.size(), file.getFileName()));
+            return true;
+        } catch (UserException e) {
+            importMessage.set(e.getMessage());
+            return false;
+        }
+    }
+
+    /** The problem of one cell, or empty when the cell is fine. */
+    public Optional<String> problem(CharacteristicDraft row, CharacteristicField field) {
+        String text = row.text(field).trim();
+        switch (field) {
+            case ID:
+                if (text.isEmpty()) {
+                    return Optional.of(AppMessage.PART_ID_MISSING.format());
+                }
+                long same = rows().stream().filter(r -> r.text(ID).trim().equalsIgnoreCase(text)).count();
+                return same > 1 ? Optional.of(AppMessage.PART_ID_REPEATED.format(text)) : Optional.empty();
+            case NAME:
+                return Optional.empty();
+            case UNIT:
+                if (text.isEmpty()) {
+                    return Optional.of(AppMessage.PART_UNIT_MISSING.format());
+                }
+                return UNIT_TEXT.matcher(text).matches() ? Optional.empty()
+                        : Optional.of(AppMessage.PART_UNIT_BAD.format(text));
+            default:
+                break;
+        }
+        if (!Numbers.blankOrNumber(text)) {
+            return Optional.of(AppMessage.PART_NOT_A_NUMBER.format(label(field), text));
+        }
+        OptionalDouble lsl = Numbers.parse(row.text(LSL));
+        OptionalDouble usl = Numbers.parse(row.text(USL));
+        boolean limitsTyped = Numbers.blankOrNumber(row.text(LSL)) && Numbers.blankOrNumber(row.text(USL));
+        if (field == LSL || field == USL) {
+            if (limitsTyped && lsl.isEmpty() && usl.isEmpty()) {
+                return Optional.of(AppMessage.PART_NO_LIMIT.format());
+            }
+            if (lsl.isPresent() && usl.isPresent() && !(lsl.getAsDouble() < usl.getAsDouble())) {
+                return Optional.of(AppMessage.PART_LIMITS_ORDER.format(row.text(LSL).trim(), row.text(USL).trim()));
+            }
+            return Optional.empty();
+        }
+        if (field == NOMINAL || field == TARGET) {
+            OptionalDouble v = Numbers.parse(text);
+            if (v.isPresent() && ((lsl.isPresent() && v.getAsDouble() < lsl.getAsDouble())
+                    || (usl.isPresent() && v.getAsDouble() > usl.getAsDouble()))) {
+                return Optional.of(AppMessage.PART_OUTSIDE.format(label(field), text));
+            }
+            return Optional.empty();
+        }
+        if (field == EXPECTED) {
+            OptionalDouble v = Numbers.parse(text);
+            return v.isPresent() && !(v.getAsDouble() > 0) ? Optional.of(AppMessage.PART_EXPECTED_BAD.format()) : Optional.empty();
+        }
+        return Optional.empty();
+    }
+
+    /** The first problem of row i as "row 2 (C2): ...". */
+    public Optional<String> rowProblem(int i) {
+        CharacteristicDraft row = rows().get(i);
+        for (CharacteristicField f : CharacteristicField.values()) {
+            Optional<String> p = problem(row, f);
+            if (p.isPresent()) {
+                String id = row.text(ID).isBlank() ? "?" : row.text(ID).trim();
+                return Optional.of(AppMessage.PART_ROW_PROBLEM.format(i + 1, id, p.get()));
+            }
+        }
+        return Optional.empty();
+    }
+
+    private String computeFirstProblem() {
+        if (draft.text(DraftField.PLAN_ID).isEmpty()) {
+            return AppMessage.PART_PLAN_ID_MISSING.format();
+        }
+        if (draft.text(DraftField.PART_NAME).isEmpty()) {
+            return AppMessage.PART_NAME_MISSING.format();
+        }
+        if (rows().isEmpty()) {
+            return AppMessage.PART_NO_ROWS.format();
+        }
+        for (int i = 0; i < rows().size(); i++) {
+            Optional<String> p = rowProblem(i);
+            if (p.isPresent()) {
+                return p.get();
+            }
+        }
+        return "";
+    }
+
+    /** The column title as the table shows it. */
+    public static String label(CharacteristicField f) {
+        return switch (f) {
+            case ID -> "Id";
+            case NAME -> "Name";
+            case UNIT -> "Unit";
+            case NOMINAL -> "Nominal";
+            case LSL -> "LSL";
+            case USL -> "USL";
+            case TARGET -> "Target";
+            case EXPECTED -> "Expected index";
+        };
+    }
+}

@@ -1,0 +1,14 @@
+package dev.proofrun.app.session;
+
+/**
+ * The columns of one characteristic as the wizard edits it, in the order of the import list
+ * {@code id,name,unit,nominal,lsl,usl,target,expected} (the header names are the lower-case names).
+ */
+public enum CharacteristicField {
+    ID, NAME, UNIT, NOMINAL, LSL, USL, TARGET, EXPECTED;
+
+    /** The column header of the import list. */
+    public String header() {
+        return name().toLowerCase(java.util.Locale.ROOT);
+    }
+}

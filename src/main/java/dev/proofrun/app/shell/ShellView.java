@@ -1,0 +1,178 @@
+package dev.proofrun.app.shell;
+
+import dev.proofrun.app.AppMessage;
+import java.util.ArrayList;
+import java.util.List;
+import javafx.animation.PauseTransition;
+import javafx.beans.binding.Bindings;
+import javafx.geometry.Pos;
+import javafx.scene.Node;
+import javafx.scene.Parent;
+import javafx.scene.control.Button;
+import javafx.scene.control.Label;
+import javafx.scene.control.ScrollPane;
+import javafx.scene.control.Tooltip;
+import javafx.scene.input.KeyCode;
+import javafx.scene.input.KeyCodeCombination;
+import javafx.scene.input.KeyCombination;
+import javafx.scene.layout.BorderPane;
+import javafx.scene.layout.HBox;
+import javafx.scene.layout.Priority;
+import javafx.scene.layout.Region;
+import javafx.scene.layout.StackPane;
+import javafx.scene.layout.VBox;
+import javafx.util.Duration;
+
+/**
+ * The window's frame: the step rail on the left, the current step in the middle, and the footer with
+ * what is missing, the status line and Back / Next. Keys: Alt+→ / Alt+← (also Ctrl+Page Down / Up) move
+ * between steps, Ctrl+1 … Ctrl+7 jump to a step, Tab moves through the fields.
+ */
+public final class ShellView {
+
+    private final ShellViewModel vm;
+    private final List<StepView> views;
+    private final BorderPane root = new BorderPane();
+    private final StackPane stage = new StackPane();
+    private final List<Button> railButtons = new ArrayList<>();
+
+    public ShellView(ShellViewModel vm, List<StepView> views) {
+        if (views.size() != vm.steps().size()) {
+            throw new IllegalArgumentException("one view per step is needed");
+        }
+        this.vm = vm;
+        this.views = List.copyOf(views);
+        root.getStyleClass().add("pr-shell");
+        root.setLeft(rail());
+        root.setCenter(stage);
+        root.setBottom(footer());
+        stage.getStyleClass().add("pr-stage");
+        show(vm.currentProperty().get());
+        vm.currentProperty().addListener((obs, was, now) -> show(now.intValue()));
+        keys();
+        autosave();
+    }
+
+    public Parent root() {
+        return root;
+    }
+
+    private Node rail() {
+        VBox rail = new VBox();
+        rail.getStyleClass().add("pr-rail");
+        Label brand = new Label("proofrun");
+        brand.getStyleClass().add("pr-brand");
+        rail.getChildren().add(brand);
+        for (int i = 0; i < vm.steps().size(); i++) {
+            StepViewModel s = vm.steps().get(i);
+            int index = i;
+            Button b = new Button((i + 1) + "  " + s.title());
+            b.setId("rail-" + i);
+            b.getStyleClass().add("pr-rail-step");
+            b.setMaxWidth(Double.MAX_VALUE);
+            b.setAlignment(Pos.CENTER_LEFT);
+            b.setTooltip(new Tooltip(s.hint()));
+            b.setOnAction(e -> vm.goTo(index));
+            s.completeBinding().addListener((obs, was, now) -> styleRail());
+            railButtons.add(b);
+            rail.getChildren().add(b);
+        }
+        Region fill = new Region();
+        VBox.setVgrow(fill, Priority.ALWAYS);
+        Label dirty = new Label(AppMessage.DIRTY_MARK.english());
+        dirty.setId("dirty-mark");
+        dirty.getStyleClass().add("pr-dirty");
+        dirty.visibleProperty().bind(vm.session().draft().dirtyProperty());
+        rail.getChildren().addAll(fill, dirty);
+        styleRail();
+        return rail;
+    }
+
+    private void styleRail() {
+        int cur = vm.currentProperty().get();
+        for (int i = 0; i < railButtons.size(); i++) {
+            Button b = railButtons.get(i);
+            b.getStyleClass().removeAll("pr-rail-current", "pr-rail-done", "pr-rail-open");
+            b.getStyleClass().add(i == cur ? "pr-rail-current"
+                    : vm.steps().get(i).completeBinding().get() ? "pr-rail-done" : "pr-rail-open");
+        }
+    }
+
+    private Node footer() {
+        Label missing = new Label();
+        missing.setId("missing");
+        missing.getStyleClass().add("pr-missing");
+        missing.textProperty().bind(vm.missingBinding());
+        missing.setWrapText(true);
+        Label status = new Label();
+        status.setId("status");
+        status.getStyleClass().add("pr-status");
+        status.textProperty().bind(vm.statusProperty());
+        VBox texts = new VBox(missing, status);
+        texts.getStyleClass().add("pr-footer-texts");
+        HBox.setHgrow(texts, Priority.ALWAYS);
+        Button back = new Button("_Back");
+        back.setId("back");
+        back.setMnemonicParsing(true);
+        back.disableProperty().bind(vm.canGoBackBinding().not());
+        back.setOnAction(e -> vm.back());
+        Button next = new Button("_Next");
+        next.setId("next");
+        next.setMnemonicParsing(true);
+        next.getStyleClass().add("pr-primary");
+        next.disableProperty().bind(vm.canGoForwardBinding().not());
+        next.setOnAction(e -> vm.next());
+        next.visibleProperty().bind(Bindings.createBooleanBinding(
+                () -> vm.currentProperty().get() < vm.steps().size() - 1, vm.currentProperty()));
+        HBox bar = new HBox(texts, back, next);
+        bar.getStyleClass().add("pr-footer");
+        bar.setAlignment(Pos.CENTER_LEFT);
+        return bar;
+    }
+
+    private void show(int index) {
+        StepView v = views.get(index);
+        StepViewModel s = vm.steps().get(index);
+        Label title = new Label((index + 1) + " · " + s.title());
+        title.getStyleClass().add("pr-step-title");
+        Label hint = new Label(s.hint());
+        hint.getStyleClass().add("pr-step-hint");
+        hint.setWrapText(true);
+        VBox page = new VBox(title, hint, v.root());
+        page.getStyleClass().add("pr-page");
+        page.setId("page-" + index);
+        ScrollPane scroll = new ScrollPane(page);
+        scroll.setFitToWidth(true);
+        scroll.getStyleClass().add("pr-scroll");
+        stage.getChildren().setAll(scroll);
+        styleRail();
+        Node focus = v.firstFocus();
+        focus.requestFocus();
+        javafx.application.Platform.runLater(focus::requestFocus);
+    }
+
+    private void keys() {
+        root.sceneProperty().addListener((obs, was, scene) -> {
+            if (scene == null) {
+                return;
+            }
+            scene.getAccelerators().put(new KeyCodeCombination(KeyCode.RIGHT, KeyCombination.ALT_DOWN), vm::next);
+            scene.getAccelerators().put(new KeyCodeCombination(KeyCode.LEFT, KeyCombination.ALT_DOWN), vm::back);
+            scene.getAccelerators().put(new KeyCodeCombination(KeyCode.PAGE_DOWN, KeyCombination.SHORTCUT_DOWN), vm::next);
+            scene.getAccelerators().put(new KeyCodeCombination(KeyCode.PAGE_UP, KeyCombination.SHORTCUT_DOWN), vm::back);
+            KeyCode[] digits = {KeyCode.DIGIT1, KeyCode.DIGIT2, KeyCode.DIGIT3, KeyCode.DIGIT4, KeyCode.DIGIT5,
+                KeyCode.DIGIT6, KeyCode.DIGIT7, KeyCode.DIGIT8, KeyCode.DIGIT9};
+            for (int i = 0; i < Math.min(digits.length, vm.steps().size()); i++) {
+                int index = i;
+                scene.getAccelerators().put(new KeyCodeCombination(digits[i], KeyCombination.SHORTCUT_DOWN), () -> vm.goTo(index));
+            }
+        });
+    }
+
+    /** Autosave two seconds after the last edit. */
+    private void autosave() {
+        PauseTransition quiet = new PauseTransition(Duration.seconds(2));
+        quiet.setOnFinished(e -> vm.autosave());
+        vm.session().draft().editsProperty().addListener((obs, was, now) -> quiet.playFromStart());
+    }
+}
