@@ -1,0 +1,318 @@
+package dev.proofrun.plan;
+
+import com.fasterxml.jackson.core.JsonParser;
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.core.JsonStreamContext;
+import com.fasterxml.jackson.core.io.JsonEOFException;
+import com.fasterxml.jackson.core.util.DefaultIndenter;
+import com.fasterxml.jackson.core.util.DefaultPrettyPrinter;
+import com.fasterxml.jackson.core.util.Separators;
+import com.fasterxml.jackson.databind.DeserializationFeature;
+import com.fasterxml.jackson.databind.JsonMappingException;
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.MapperFeature;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.exc.MismatchedInputException;
+import com.fasterxml.jackson.databind.exc.UnrecognizedPropertyException;
+import com.fasterxml.jackson.databind.json.JsonMapper;
+import dev.proofrun.text.Location;
+import dev.proofrun.text.UserException;
+import java.io.IOException;
+import java.nio.ByteBuffer;
+import java.nio.channels.FileChannel;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.nio.file.StandardOpenOption;
+import java.security.MessageDigest;
+import java.security.NoSuchAlgorithmException;
+import java.util.HexFormat;
+
+/**
+ * Plan files: JSON, UTF-8, one plan per file, format version {@value PlanJson#VERSION}.
+ *
+ * <ul>
+ * <li><b>Reading</b> refuses an empty, truncated or malformed file, another format, an unknown version,
+ * unknown fields and bad values with a one-line message naming the file and the JSON path of the problem.
+ * Nothing in the file picks a class: the mapper has no default typing and reads fixed records only.</li>
+ * <li><b>Fingerprint</b>: the first 12 hex digits of SHA-256 over the canonical form — the plan written as
+ * compact JSON (UTF-8, the fixed property order of {@link PlanJson}, no whitespace, numbers as Java's
+ * shortest round-trip decimal) with {@code state} and {@code revision} left out; everything else, including
+ * {@code supersedes}, is in. The layout of the file does not matter; a changed value does.</li>
+ * <li><b>An issued plan that was edited</b> no longer matches its revision: {@link #read} refuses it,
+ * {@link #inspect} reports it, {@link #issue(Path)} issues the change as a new revision that names the old
+ * one in {@code supersedes}.</li>
+ * <li><b>Saving</b> writes a temporary file beside the target, forces it to disk, copies the previous file
+ * to {@code NAME.bak}, then moves the new file over the target (atomically where the file system can).
+ * An issued plan file is only ever replaced by its successor revision.</li>
+ * </ul>
+ */
+public final class PlanFiles {
+
+    /** Length of the revision fingerprint in hex digits. */
+    public static final int FINGERPRINT_LENGTH = 12;
+
+    private static final ObjectMapper MAPPER = JsonMapper.builder()
+            .enable(DeserializationFeature.FAIL_ON_UNKNOWN_PROPERTIES)
+            .enable(DeserializationFeature.FAIL_ON_NULL_FOR_PRIMITIVES)
+            .enable(DeserializationFeature.FAIL_ON_TRAILING_TOKENS)
+            .disable(DeserializationFeature.ACCEPT_FLOAT_AS_INT)
+            .disable(MapperFeature.ALLOW_COERCION_OF_SCALARS)
+            .disable(MapperFeature.SORT_PROPERTIES_ALPHABETICALLY)
+            .build();
+
+    private static final DefaultPrettyPrinter PRETTY = new DefaultPrettyPrinter(Separators.createDefaultInstance()
+            .withObjectFieldValueSpacing(Separators.Spacing.AFTER))
+            .withObjectIndenter(new DefaultIndenter("  ", "\n"))
+            .withArrayIndenter(new DefaultIndenter("  ", "\n"));
+
+    private PlanFiles() {
+    }
+
+    /** How a plan file stands. */
+    public enum Integrity {
+        /** A draft: no revision to check. */
+        DRAFT,
+        /** Issued, and the content still gives the recorded revision. */
+        INTACT,
+        /** Issued, but the content was changed afterwards. */
+        CHANGED_AFTER_ISSUE
+    }
+
+    /**
+     * A plan as found on disk.
+     *
+     * @param plan      the plan as read (for a changed issued plan: the changed content, still marked issued)
+     * @param integrity how it stands
+     * @param computed  the fingerprint of the content as found
+     */
+    public record Inspection(StudyPlan plan, Integrity integrity, String computed) {
+    }
+
+    /**
+     * Reads a plan for use (sheets, grading, showing).
+     *
+     * @throws UserException if the file is unreadable or malformed, or an issued plan was changed after issue
+     */
+    public static StudyPlan read(Path path) {
+        Inspection in = inspect(path);
+        if (in.integrity() == Integrity.CHANGED_AFTER_ISSUE) {
+            throw new UserException(Location.file(path.toString()), PlanMessage.EDITED_AFTER_ISSUE,
+                    in.plan().revision().orElseThrow(), in.computed());
+        }
+        return in.plan();
+    }
+
+    /** Reads a plan and says whether an issued one still matches its revision. */
+    public static Inspection inspect(Path path) {
+        Location where = Location.file(path.toString());
+        byte[] bytes;
+        try {
+            bytes = Files.readAllBytes(path);
+        } catch (IOException e) {
+            throw new UserException(where, PlanMessage.CANNOT_READ, describe(e));
+        }
+        return inspect(bytes, where);
+    }
+
+    /** Reads plan bytes (from a file named by {@code where}). */
+    public static Inspection inspect(byte[] bytes, Location where) {
+        StudyPlan plan = PlanCodec.fromJson(parse(bytes, where), where);
+        String computed = fingerprint(plan);
+        if (!plan.isIssued()) {
+            return new Inspection(plan, Integrity.DRAFT, computed);
+        }
+        return new Inspection(plan, plan.revision().orElseThrow().equals(computed)
+                ? Integrity.INTACT : Integrity.CHANGED_AFTER_ISSUE, computed);
+    }
+
+    /** The bytes of the plan file: pretty JSON, two-space indent, LF line ends, final newline. */
+    public static byte[] toBytes(StudyPlan plan) {
+        try {
+            String text = MAPPER.writer(PRETTY).writeValueAsString(PlanCodec.toJson(plan));
+            return (text + "\n").getBytes(StandardCharsets.UTF_8);
+        } catch (JsonProcessingException e) {
+            throw new IllegalStateException("plan could not be written as JSON", e);
+        }
+    }
+
+    /** The canonical form the fingerprint is taken over: compact JSON without state and revision. */
+    public static byte[] canonical(StudyPlan plan) {
+        PlanJson.File f = PlanCodec.toJson(plan);
+        PlanJson.File content = new PlanJson.File(f.format(), f.formatVersion(), f.id(), null, null, f.supersedes(),
+                f.part(), f.people(), f.design(), f.characteristics(), f.calendar(), f.span(), f.spacing(), f.seed(),
+                f.schedule());
+        try {
+            return MAPPER.writeValueAsBytes(content);
+        } catch (JsonProcessingException e) {
+            throw new IllegalStateException("plan could not be written as JSON", e);
+        }
+    }
+
+    /** First {@value #FINGERPRINT_LENGTH} hex digits of SHA-256 over {@link #canonical}. */
+    public static String fingerprint(StudyPlan plan) {
+        try {
+            byte[] hash = MessageDigest.getInstance("SHA-256").digest(canonical(plan));
+            return HexFormat.of().formatHex(hash).substring(0, FINGERPRINT_LENGTH);
+        } catch (NoSuchAlgorithmException e) {
+            throw new IllegalStateException("SHA-256 is missing from this Java", e);
+        }
+    }
+
+    /** The plan issued: frozen, with its fingerprint as revision. An issued plan is returned unchanged. */
+    public static StudyPlan issue(StudyPlan plan) {
+        return plan.isIssued() ? plan : plan.issuedAs(fingerprint(plan));
+    }
+
+    /**
+     * Issues the plan in a file. A draft is issued and saved (the draft kept as {@code .bak}); an intact
+     * issued plan is left as it is; an issued plan changed after issue becomes a new revision that
+     * supersedes the recorded one (the file as found kept as {@code .bak}).
+     *
+     * @return the issued plan now in the file
+     * @throws UserException if the file cannot be read or written
+     */
+    public static StudyPlan issue(Path path) {
+        Inspection in = inspect(path);
+        switch (in.integrity()) {
+            case INTACT:
+                return in.plan();
+            case CHANGED_AFTER_ISSUE: {
+                StudyPlan next = issue(in.plan().reopen());
+                save(path, next);
+                return next;
+            }
+            case DRAFT:
+            default: {
+                StudyPlan issued = issue(in.plan());
+                save(path, issued);
+                return issued;
+            }
+        }
+    }
+
+    /**
+     * Saves a plan. An existing issued plan is only replaced by a plan issued as its successor (supersedes
+     * its revision) or by the same revision; a file that is not a plan is never replaced.
+     *
+     * @throws UserException if the target is protected or cannot be written
+     */
+    public static void write(Path path, StudyPlan plan) {
+        if (Files.exists(path)) {
+            Inspection old;
+            try {
+                old = inspect(path);
+            } catch (UserException e) {
+                throw new UserException(Location.file(path.toString()), PlanMessage.NOT_A_PLAN_FILE_TO_REPLACE, path);
+            }
+            if (old.plan().isIssued()) {
+                String rev = old.plan().revision().orElseThrow();
+                boolean same = plan.revision().map(rev::equals).orElse(false) && old.integrity() == Integrity.INTACT;
+                boolean successor = plan.isIssued() && plan.supersedes().map(rev::equals).orElse(false);
+                if (!same && !successor) {
+                    throw new UserException(Location.file(path.toString()), PlanMessage.ISSUED_FILE_PROTECTED, path, rev);
+                }
+            }
+        }
+        save(path, plan);
+    }
+
+    private static void save(Path path, StudyPlan plan) {
+        byte[] bytes = toBytes(plan);
+        Path target = path.toAbsolutePath();
+        Path dir = target.getParent();
+        String name = target.getFileName().toString();
+        Path tmp = null;
+        try {
+            Files.createDirectories(dir);
+            tmp = Files.createTempFile(dir, "." + name + ".", ".tmp");
+            try (FileChannel ch = FileChannel.open(tmp, StandardOpenOption.WRITE, StandardOpenOption.TRUNCATE_EXISTING)) {
+                ByteBuffer buf = ByteBuffer.wrap(bytes);
+                while (buf.hasRemaining()) {
+                    ch.write(buf);
+                }
+                ch.force(true);
+            }
+            if (Files.exists(target)) {
+                Files.copy(target, dir.resolve(name + ".bak"), StandardCopyOption.REPLACE_EXISTING,
+                        StandardCopyOption.COPY_ATTRIBUTES);
+            }
+            try {
+                Files.move(tmp, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
+            } catch (AtomicMoveNotSupportedException e) {
+                Files.move(tmp, target, StandardCopyOption.REPLACE_EXISTING);
+            }
+            tmp = null;
+        } catch (IOException e) {
+            throw new UserException(Location.file(path.toString()), PlanMessage.CANNOT_WRITE, describe(e));
+        } finally {
+            if (tmp != null) {
+                try {
+                    Files.deleteIfExists(tmp);
+                } catch (IOException ignored) {
+                    // the temporary file is all that is left; the target is untouched
+                }
+            }
+        }
+    }
+
+    private static PlanJson.File parse(byte[] bytes, Location where) {
+        JsonNode tree;
+        try {
+            tree = MAPPER.readTree(bytes);
+        } catch (JsonProcessingException e) {
+            throw syntax(e, where);
+        } catch (IOException e) {
+            throw new UserException(where, PlanMessage.CANNOT_READ, describe(e));
+        }
+        if (tree == null || tree.isMissingNode()) {
+            throw new UserException(where, PlanMessage.EMPTY_FILE);
+        }
+        if (!tree.isObject()) {
+            throw new UserException(where, PlanMessage.WRONG_TYPE, "$", "an object");
+        }
+        JsonNode format = tree.get("format");
+        if (format == null || !format.isTextual() || !PlanJson.FORMAT.equals(format.asText())) {
+            throw new UserException(where, PlanMessage.NOT_A_PLAN, format == null ? "missing" : format.toString());
+        }
+        JsonNode version = tree.get("formatVersion");
+        if (version == null || !version.isInt() || version.asInt() != PlanJson.VERSION) {
+            throw new UserException(where, PlanMessage.UNKNOWN_VERSION, version == null ? "missing" : version.toString(),
+                    PlanJson.VERSION);
+        }
+        try {
+            return MAPPER.readValue(bytes, PlanJson.File.class);
+        } catch (UnrecognizedPropertyException e) {
+            throw new UserException(where, PlanMessage.UNKNOWN_FIELD, JsonPaths.of(e.getPath()), e.getPropertyName());
+        } catch (MismatchedInputException e) {
+            String wanted = e.getTargetType() == null ? "another kind of value" : JsonPaths.kind(e.getTargetType());
+            throw new UserException(where, PlanMessage.WRONG_TYPE, JsonPaths.of(e.getPath()), wanted);
+        } catch (JsonMappingException e) {
+            throw new UserException(where, PlanMessage.BAD_VALUE, JsonPaths.of(e.getPath()), e.getOriginalMessage());
+        } catch (JsonProcessingException e) {
+            throw syntax(e, where);
+        } catch (IOException e) {
+            throw new UserException(where, PlanMessage.CANNOT_READ, describe(e));
+        }
+    }
+
+    private static UserException syntax(JsonProcessingException e, Location where) {
+        int line = e.getLocation() == null ? 0 : e.getLocation().getLineNr();
+        int column = e.getLocation() == null ? 0 : e.getLocation().getColumnNr();
+        String path = "$";
+        if (e.getProcessor() instanceof JsonParser) {
+            JsonStreamContext ctx = ((JsonParser) e.getProcessor()).getParsingContext();
+            path = JsonPaths.of(ctx);
+        }
+        if (e instanceof JsonEOFException) {
+            return new UserException(where, PlanMessage.TRUNCATED, path, line);
+        }
+        return new UserException(where, PlanMessage.NOT_JSON, path, line, column, e.getOriginalMessage().replace('\n', ' '));
+    }
+
+    private static String describe(IOException e) {
+        return e.getClass().getSimpleName().replace("Exception", "") + (e.getMessage() == null ? "" : " " + e.getMessage());
+    }
+}

@@ -1,0 +1,34 @@
+package dev.proofrun.plan;
+
+import dev.proofrun.text.MessageKey;
+
+/** Messages of the plan package: reading, writing and issuing plan files. */
+public enum PlanMessage implements MessageKey {
+    CANNOT_READ("cannot read the plan file: %s"),
+    CANNOT_WRITE("cannot write the plan file: %s"),
+    EMPTY_FILE("the file is empty; expected a proofrun plan (JSON)"),
+    TRUNCATED("the file ends too early inside %s (line %d); is it truncated?"),
+    NOT_JSON("not valid JSON at %s (line %d, column %d): %s"),
+    NOT_A_PLAN("not a proofrun plan: $.format is %s, expected \"" + PlanJson.FORMAT + "\""),
+    UNKNOWN_VERSION("at $.formatVersion: plan format version %s is not known; this proofrun reads version %d"),
+    UNKNOWN_FIELD("at %s: unknown field \"%s\""),
+    WRONG_TYPE("at %s: expected %s"),
+    MISSING("at %s: a value is required"),
+    BAD_VALUE("at %s: %s"),
+    EDITED_AFTER_ISSUE("the plan was changed after it was issued as revision %s (its content now gives %s);"
+            + " run 'proofrun plan issue' on it to issue the change as a new revision"),
+    ISSUED_FILE_PROTECTED("%s holds issued revision %s; an issued plan is not overwritten: issue the change"
+            + " as a new revision or save it under another name"),
+    NOT_A_PLAN_FILE_TO_REPLACE("%s exists and is not a proofrun plan; it is left untouched");
+
+    private final String english;
+
+    PlanMessage(String english) {
+        this.english = english;
+    }
+
+    @Override
+    public String english() {
+        return english;
+    }
+}

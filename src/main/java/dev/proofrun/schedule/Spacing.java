@@ -1,0 +1,44 @@
+package dev.proofrun.schedule;
+
+import java.util.Locale;
+
+/**
+ * How the k slots are spread over the working time W of the span. The working time is cut into k equal
+ * intervals of length Δ = W/k; with d the running time n consecutive parts take, slot i (0-based) starts at
+ * working minute
+ * <ul>
+ * <li>{@link #EVEN}: t_i = i·Δ + (Δ − d)/2, the subgroup centred in its interval; neighbours are exactly Δ
+ * apart in working time.</li>
+ * <li>{@link #RANDOM}: t_i = i·Δ + u_i·(Δ − d), u_i uniform on [0, 1) from {@code java.util.Random} seeded
+ * with the plan's seed (that generator's algorithm is fixed by its specification, so the same seed gives
+ * the same schedule on every Java). Stratified: one random time inside each interval, and the subgroup
+ * still ends inside it, so neighbours are at least d apart. Random times avoid aliasing with a periodic
+ * cause such as a tool-wear cycle or the break pattern (common practice).</li>
+ * </ul>
+ * Working time skips breaks, non-working days and time between shifts; see {@link Scheduler}.
+ */
+public enum Spacing {
+    EVEN("even"),
+    RANDOM("random");
+
+    private final String token;
+
+    Spacing(String token) {
+        this.token = token;
+    }
+
+    /** The word used on the command line and in plan files. */
+    public String token() {
+        return token;
+    }
+
+    /** @throws IllegalArgumentException for an unknown token */
+    public static Spacing fromToken(String token) {
+        for (Spacing s : values()) {
+            if (s.token.equalsIgnoreCase(token.trim())) {
+                return s;
+            }
+        }
+        throw new IllegalArgumentException(String.format(Locale.ROOT, "unknown spacing '%s' (even or random)", token));
+    }
+}
