@@ -17,6 +17,7 @@ import picocli.CommandLine.Command;
                 + "Run without arguments to open the wizard.",
         subcommands = {
             CommandLine.HelpCommand.class,
+            SizeCommand.class,
         })
 public final class ProofrunCommand implements Runnable {
 

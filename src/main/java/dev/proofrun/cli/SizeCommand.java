@@ -1,0 +1,228 @@
+package dev.proofrun.cli;
+
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.SerializationFeature;
+import dev.proofrun.design.ChartRisk;
+import dev.proofrun.design.DesignMessage;
+import dev.proofrun.design.DesignRequest;
+import dev.proofrun.design.DesignRow;
+import dev.proofrun.design.DesignTable;
+import dev.proofrun.design.Expectation;
+import dev.proofrun.design.Floors;
+import dev.proofrun.design.OcPoint;
+import dev.proofrun.design.PowerPoint;
+import dev.proofrun.design.ProcessFacts;
+import dev.proofrun.design.Requirement;
+import dev.proofrun.design.StudyDesigner;
+import dev.proofrun.stats.BoundMethod;
+import dev.proofrun.stats.IndexKind;
+import dev.proofrun.stats.SigmaMethod;
+import dev.proofrun.stats.SpecLimits;
+import dev.proofrun.text.UserException;
+import java.io.PrintWriter;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Optional;
+import java.util.OptionalDouble;
+import java.util.concurrent.Callable;
+import java.util.stream.IntStream;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+
+/** {@code proofrun size}: how many subgroups of what size demonstrate the required index. */
+@Command(name = "size", mixinStandardHelpOptions = true,
+        description = "How many subgroups of what size show the required index with the wanted power.")
+public final class SizeCommand implements Callable<Integer> {
+
+    @CommandLine.Spec
+    CommandLine.Model.CommandSpec spec;
+
+    @Option(names = "--spec", paramLabel = "two-sided|upper|lower",
+            description = "Which specification limits exist (default two-sided, or as --lsl/--usl give).")
+    String sides;
+
+    @Option(names = "--index", paramLabel = "cpk|ppk|cp|pp|cpu|cpl|ppu|ppl", defaultValue = "cpk",
+            description = "The required index (default ${DEFAULT-VALUE}).")
+    String index;
+
+    @Option(names = "--target", required = true, paramLabel = "C0", description = "The required minimum c0.")
+    double target;
+
+    @Option(names = "--confidence", defaultValue = "0.95", description = "Confidence of the lower bound (default ${DEFAULT-VALUE}).")
+    double confidence;
+
+    @Option(names = "--expected", paramLabel = "C1", description = "The index the process is believed to have.")
+    Double expected;
+
+    @Option(names = "--expected-cp", paramLabel = "CP1",
+            description = "The expected Cp (Pp) for a two-sided Cpk/Ppk; without it the process is taken as centred.")
+    Double expectedCp;
+
+    @Option(names = "--lsl", description = "Lower specification limit (with --mean and --sd instead of --expected).")
+    Double lsl;
+
+    @Option(names = "--usl", description = "Upper specification limit (with --mean and --sd instead of --expected).")
+    Double usl;
+
+    @Option(names = "--mean", description = "Expected process mean.")
+    Double mean;
+
+    @Option(names = "--sd", description = "Expected process standard deviation.")
+    Double sd;
+
+    @Option(names = "--gauge-sd", description = "Gauge standard deviation (needs --sd): plan for the observed index.")
+    Double gaugeSd;
+
+    @Option(names = "--resolution", description = "Gauge resolution; warned above a tenth of the tolerance.")
+    Double resolution;
+
+    @Option(names = "--power", defaultValue = "0.9", description = "Wanted power (default ${DEFAULT-VALUE}).")
+    double power;
+
+    @Option(names = "--subgroup-size", paramLabel = "N", description = "Candidate subgroup size (repeatable; default 1-10).")
+    List<Integer> subgroupSizes;
+
+    @Option(names = "--sigma", paramLabel = "rbar|sbar|pooled|mr",
+            description = "Within-sigma estimator for n >= 2 (default rbar up to 10, sbar above; n = 1 uses mr).")
+    String sigma;
+
+    @Option(names = "--bound", defaultValue = "exact", paramLabel = "exact|bissell", description = "Bound method (default ${DEFAULT-VALUE}).")
+    String bound;
+
+    @Option(names = "--min-subgroups", defaultValue = "25", description = "Floor on subgroups (default ${DEFAULT-VALUE}).")
+    int minSubgroups;
+
+    @Option(names = "--min-readings", defaultValue = "100", description = "Floor on readings (default ${DEFAULT-VALUE}).")
+    int minReadings;
+
+    @Option(names = "--shift", defaultValue = "1.0", paramLabel = "DELTA",
+            description = "Mean shift, in within standard deviations, the chart should catch (default ${DEFAULT-VALUE}).")
+    double shift;
+
+    @Option(names = "--json", description = "Print one JSON object.")
+    boolean json;
+
+    @Override
+    public Integer call() throws Exception {
+        DesignTable table = StudyDesigner.design(request());
+        PrintWriter out = spec.commandLine().getOut();
+        if (json) {
+            ObjectMapper mapper = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
+            out.println(mapper.writeValueAsString(SizeJson.of(table)));
+        } else {
+            print(out, table);
+        }
+        out.flush();
+        return 0;
+    }
+
+    DesignRequest request() {
+        IndexKind kind = IndexKind.fromToken(index);
+        if (!(confidence > 0.5 && confidence < 0.9999)) {
+            throw new UserException(DesignMessage.CONFIDENCE_OUT_OF_RANGE, confidence);
+        }
+        SpecLimits.Sides specSides = sides();
+        List<String> notes = new ArrayList<>();
+        Expectation expectation;
+        if (expected != null) {
+            expectation = expectedCp == null ? Expectation.centred(expected) : wrap(() -> Expectation.offCentre(expected, expectedCp));
+        } else {
+            if (mean == null || sd == null) {
+                throw new UserException(DesignMessage.BAD_EXPECTATION,
+                        "give --expected (with --expected-cp if off centre), or --mean and --sd with --lsl/--usl");
+            }
+            ProcessFacts facts = ProcessFacts.of(SpecLimits.of(lsl, usl), mean, sd)
+                    .withGauge(optional(gaugeSd), optional(resolution));
+            expectation = facts.expectationFor(kind, notes);
+        }
+        if (expected != null && (gaugeSd != null || resolution != null)) {
+            throw new UserException(DesignMessage.BAD_EXPECTATION, "--gauge-sd and --resolution need --mean, --sd and the limits");
+        }
+        Requirement requirement = Requirement.of(kind, target, confidence);
+        List<Integer> sizes = subgroupSizes == null || subgroupSizes.isEmpty()
+                ? IntStream.rangeClosed(1, 10).boxed().toList() : subgroupSizes;
+        Floors floors = wrap(() -> new Floors(minSubgroups, minReadings));
+        return new DesignRequest(specSides, requirement, expectation, power, sizes,
+                Optional.ofNullable(sigma).map(SigmaMethod::fromToken), BoundMethod.fromToken(bound), floors, shift,
+                notes);
+    }
+
+    private SpecLimits.Sides sides() {
+        SpecLimits.Sides fromLimits = null;
+        if (lsl != null || usl != null) {
+            fromLimits = SpecLimits.of(lsl, usl).sides();
+        }
+        if (sides == null) {
+            return fromLimits == null ? SpecLimits.Sides.TWO_SIDED : fromLimits;
+        }
+        SpecLimits.Sides given;
+        switch (sides.trim().toLowerCase(Locale.ROOT)) {
+            case "two-sided":
+                given = SpecLimits.Sides.TWO_SIDED;
+                break;
+            case "upper":
+                given = SpecLimits.Sides.UPPER_ONLY;
+                break;
+            case "lower":
+                given = SpecLimits.Sides.LOWER_ONLY;
+                break;
+            default:
+                throw new UserException(DesignMessage.BAD_EXPECTATION,
+                        String.format(Locale.ROOT, "unknown --spec '%s' (two-sided, upper or lower)", sides));
+        }
+        if (fromLimits != null && fromLimits != given) {
+            throw new UserException(DesignMessage.BAD_EXPECTATION, "--spec does not match the limits given");
+        }
+        return given;
+    }
+
+    private static OptionalDouble optional(Double v) {
+        return v == null ? OptionalDouble.empty() : OptionalDouble.of(v);
+    }
+
+    private static <T> T wrap(java.util.function.Supplier<T> s) {
+        try {
+            return s.get();
+        } catch (IllegalArgumentException e) {
+            throw new UserException(DesignMessage.BAD_EXPECTATION, e.getMessage());
+        }
+    }
+
+    private void print(PrintWriter out, DesignTable t) {
+        out.println("   n     k      N   power    c*      df  limited by      false alarm       detection");
+        out.println("                                                          3σ   all rules    3σ   all rules");
+        for (DesignRow r : t.rows()) {
+            out.printf(Locale.ROOT, "%s%3d %5d %6d  %6.3f  %6.3f  %6.1f  %-13s %6.3f  %6s  %6.3f  %6s%n",
+                    r == t.recommended() ? "*" : " ", r.subgroupSize(), r.subgroups(), r.readings(), r.power(),
+                    r.criticalEstimate(), r.degreesOfFreedom(), r.limitedBy().token(), r.falseAlarm().beyondLimits(),
+                    rules(r.falseAlarm()), r.detection().beyondLimits(), rules(r.detection()));
+        }
+        out.println();
+        out.println("Recommended: " + t.reason());
+        out.println();
+        out.println("Probability of demonstrating against the true index (recommended design):");
+        List<OcPoint> oc = t.operatingCharacteristic();
+        for (int i = 0; i < oc.size(); i += 4) {
+            out.printf(Locale.ROOT, "  %6.3f  %6.3f%n", oc.get(i).trueIndex(), oc.get(i).probability());
+        }
+        out.println();
+        out.printf(Locale.ROOT, "Power against the number of subgroups (n = %d):%n", t.recommended().subgroupSize());
+        List<PowerPoint> curve = t.powerCurve();
+        int stride = Math.max(1, curve.size() / 10);
+        for (int i = 0; i < curve.size(); i += stride) {
+            out.printf(Locale.ROOT, "  k = %4d  N = %5d  %6.3f%n", curve.get(i).subgroups(), curve.get(i).readings(),
+                    curve.get(i).power());
+        }
+        for (String w : t.warnings()) {
+            out.println("warning: " + w);
+        }
+        out.println();
+        out.println(DesignMessage.CAUTION.english());
+    }
+
+    private static String rules(ChartRisk r) {
+        return Double.isNaN(r.allRules()) ? "n/a" : String.format(Locale.ROOT, "%.3f", r.allRules());
+    }
+}

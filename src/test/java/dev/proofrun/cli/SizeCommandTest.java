@@ -1,0 +1,67 @@
+package dev.proofrun.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.util.List;
+import org.junit.jupiter.api.Test;
+
+class SizeCommandTest {
+
+    private record Run(int code, String out, String err) {
+    }
+
+    private static Run run(String... args) {
+        StringWriter out = new StringWriter();
+        StringWriter err = new StringWriter();
+        int code = ProofrunCommand.run(new PrintWriter(out), new PrintWriter(err), args);
+        return new Run(code, out.toString(), err.toString());
+    }
+
+    @Test
+    void jsonHasTheListedShape() throws Exception {
+        Run r = run("size", "--target", "1.33", "--expected", "1.67", "--expected-cp", "2.0", "--json",
+                "--subgroup-size", "4", "--subgroup-size", "5");
+        assertEquals(0, r.code(), r.err());
+        JsonNode root = new ObjectMapper().readTree(r.out());
+        assertEquals(List.of("designs", "recommended", "operatingCharacteristic", "warnings"),
+                iterate(root.fieldNames()));
+        JsonNode d = root.get("designs").get(0);
+        assertEquals(List.of("subgroupSize", "subgroups", "readings", "power", "criticalEstimate", "degreesOfFreedom",
+                "limitedBy", "falseAlarm", "detection"), iterate(d.fieldNames()));
+        assertEquals(4, d.get("subgroupSize").asInt());
+        assertTrue(root.get("recommended").has("reason"));
+        JsonNode oc = root.get("operatingCharacteristic").get(0);
+        assertEquals(List.of("trueIndex", "probability"), iterate(oc.fieldNames()));
+    }
+
+    @Test
+    void limitsMeanAndSdWork() {
+        Run r = run("size", "--target", "1.33", "--lsl", "9.90", "--usl", "10.10", "--mean", "10.01", "--sd", "0.018",
+                "--subgroup-size", "5");
+        assertEquals(0, r.code(), r.err());
+        assertTrue(r.out().contains("Recommended"), r.out());
+    }
+
+    @Test
+    void refusalsExitTwoWithOneLine() {
+        Run r = run("size", "--target", "1.33", "--expected", "1.2");
+        assertEquals(2, r.code());
+        assertTrue(r.err().contains("the process must improve first"), r.err());
+        assertEquals(1, r.err().strip().lines().count(), r.err());
+        assertEquals("", r.out());
+        Run c = run("size", "--target", "1.33", "--expected", "1.67", "--confidence", "0.9999");
+        assertEquals(2, c.code());
+        assertTrue(c.err().contains("confidence"), c.err());
+    }
+
+    private static List<String> iterate(java.util.Iterator<String> it) {
+        List<String> list = new java.util.ArrayList<>();
+        it.forEachRemaining(list::add);
+        return list;
+    }
+}
