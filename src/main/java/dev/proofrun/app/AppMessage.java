@@ -23,6 +23,7 @@ public enum AppMessage implements MessageKey {
     READY("This step is complete."),
     NO_PLAN("open or start a plan"),
     DRAFT_SAVED("Draft kept in %s"),
+    OPENED("Opened %s."),
     DRAFT_RESTORED("Unsaved changes from %s were restored."),
     DRAFT_FAILED("The draft could not be written: %s"),
     CLOSE_TITLE("Unsaved changes"),
@@ -54,6 +55,18 @@ public enum AppMessage implements MessageKey {
     GOAL_MEAN_SIGMA_BAD("give the expected mean and a sigma above zero"),
     GOAL_PILOT_MISSING("load the pilot readings"),
     GOAL_PILOT_BAD("the pilot readings could not be used: %s"),
+    SIZING_GOAL_FIRST("complete the goal first"),
+    SIZING_BUSY("the design table is being computed"),
+    SIZING_FAILED("the design could not be computed: %s"),
+    SIZING_RECOMMENDED_CHOSEN("Chosen: the recommended design, %d subgroups of %d (%d readings), power %.3f."),
+    SIZING_OTHER_CHOSEN("Chosen: %d subgroups of %d = %d readings (%s against the recommended %d); "
+            + "power %.3f against %.3f; chance of a false alarm (3σ rule) %s against %s."),
+    TIMING_COUNT("the span needs a whole number of days or shifts, 1 or more"),
+    TIMING_SEED("'%s' is not a whole number"),
+    TIMING_ZONE("'%s' is not a time zone such as Europe/Berlin"),
+    TIMING_KIND("'%s': the span is counted in days or shifts"),
+    TIMING_DESIGN_FIRST("choose a design first"),
+    TIMING_CALENDAR_BAD("the calendar does not hold together: check the shifts and breaks"),
     GOAL_EXPECTED_NOT_ABOVE("the expected %s (%.3f) must be above the required %.3f, or no study can show it");
 
     private final String english;

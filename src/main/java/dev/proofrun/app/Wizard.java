@@ -12,7 +12,12 @@ import dev.proofrun.app.shell.StepView;
 import dev.proofrun.app.shell.StepViewModel;
 import dev.proofrun.app.start.StartView;
 import dev.proofrun.app.start.StartViewModel;
+import dev.proofrun.app.sizing.SizingView;
+import dev.proofrun.app.sizing.SizingViewModel;
+import dev.proofrun.app.timing.TimingView;
+import dev.proofrun.app.timing.TimingViewModel;
 import java.util.List;
+import javafx.beans.binding.Bindings;
 import javafx.application.HostServices;
 
 /**
@@ -27,15 +32,21 @@ public final class Wizard {
     private final StartViewModel start;
     private final PartViewModel part;
     private final GoalViewModel goal;
+    private final SizingViewModel sizing;
+    private final TimingViewModel timing;
 
     private Wizard(AppHome home, HostServices host) {
         session = new Session(home);
         start = new StartViewModel(session);
         part = new PartViewModel(session.draft());
-        goal = new GoalViewModel(session.draft());
-        List<StepViewModel> steps = List.of(start, part, goal);
+        goal = new GoalViewModel(session.draft(), session.baseProperty());
+        sizing = new SizingViewModel(session.draft(), goal);
+        timing = new TimingViewModel(session.draft(),
+                Bindings.createObjectBinding(sizing::design, sizing.chosenProperty()));
+        List<StepViewModel> steps = List.of(start, part, goal, sizing, timing);
         shell = new ShellViewModel(session, steps);
-        List<StepView> views = List.of(new StartView(start), new PartView(part), new GoalView(goal));
+        List<StepView> views = List.of(new StartView(start), new PartView(part), new GoalView(goal),
+                new SizingView(sizing), new TimingView(timing));
         view = new ShellView(shell, views);
     }
 
@@ -45,10 +56,14 @@ public final class Wizard {
 
     /** After the window shows: the first start opens a plan at once, later starts show the recent plans. */
     public void opened() {
-        if (session.recent().isFirstStart()) {
-            start.newPlan();
+        if (session.recent().isFirstStart() && start.openDemo()) {
             shell.goTo(1);
         }
+    }
+
+    /** True while a step computes in the background. */
+    public boolean busy() {
+        return sizing.busyProperty().get();
     }
 
     public Session session() {
@@ -73,5 +88,13 @@ public final class Wizard {
 
     public GoalViewModel goal() {
         return goal;
+    }
+
+    public SizingViewModel sizing() {
+        return sizing;
+    }
+
+    public TimingViewModel timing() {
+        return timing;
     }
 }

@@ -31,7 +31,7 @@ public final class GoalView implements StepView {
 
     public GoalView(GoalViewModel vm) {
         GridPane req = new GridPane();
-        req.getStyleClass().addAll("pr-card", "pr-form");
+        req.getStyleClass().add("pr-form");
         index.setId("index");
         index.setItems(FXCollections.observableArrayList(vm.indices()));
         index.valueProperty().bindBidirectional(vm.indexProperty());

@@ -6,6 +6,12 @@ import dev.proofrun.app.session.CharacteristicField;
 import dev.proofrun.app.session.DraftField;
 import dev.proofrun.app.session.ExpectationSource;
 import dev.proofrun.app.session.Numbers;
+import dev.proofrun.app.session.PlanBridge;
+import dev.proofrun.design.ProcessFacts;
+import dev.proofrun.plan.StudyPlan;
+import dev.proofrun.text.UserException;
+import java.util.ArrayList;
+import javafx.beans.value.ObservableValue;
 import dev.proofrun.app.session.StudyDraft;
 import dev.proofrun.app.shell.StepViewModel;
 import dev.proofrun.design.Expectation;
@@ -31,14 +37,16 @@ import javafx.collections.ObservableList;
 public final class GoalViewModel extends StepViewModel {
 
     private final StudyDraft draft;
+    private final ObservableValue<StudyPlan> base;
     private final ObjectProperty<IndexKind> index = new SimpleObjectProperty<>(this, "index", IndexKind.CPK);
     private final ObjectProperty<ExpectationSource> source = new SimpleObjectProperty<>(this, "source", ExpectationSource.VALUE);
     private final ObjectBinding<Optional<CharacteristicDraft>> focus;
     private final ObjectBinding<Optional<Requirement>> requirement;
     private final ObjectBinding<Optional<Expectation>> expectation;
 
-    public GoalViewModel(StudyDraft draft) {
+    public GoalViewModel(StudyDraft draft, ObservableValue<StudyPlan> base) {
         this.draft = draft;
+        this.base = base;
         syncEnum(index, draft.field(DraftField.INDEX), IndexKind::token, t -> {
             try {
                 return IndexKind.fromToken(t);
@@ -49,7 +57,7 @@ public final class GoalViewModel extends StepViewModel {
         syncEnum(source, draft.field(DraftField.EXPECTATION_SOURCE), ExpectationSource::token, ExpectationSource::fromToken);
         ObservableList<CharacteristicDraft> rows = draft.characteristics();
         focus = Bindings.createObjectBinding(this::findFocus, rows, draft.field(DraftField.FOCUS));
-        Observable[] inputs = {rows, index, source, focus, draft.field(DraftField.MINIMUM), draft.field(DraftField.CONFIDENCE),
+        Observable[] inputs = {rows, index, source, focus, base, draft.field(DraftField.MINIMUM), draft.field(DraftField.CONFIDENCE),
             draft.field(DraftField.EXPECTED_MEAN), draft.field(DraftField.EXPECTED_SIGMA)};
         requirement = Bindings.createObjectBinding(this::computeRequirement, inputs);
         expectation = Bindings.createObjectBinding(this::computeExpectation, inputs);
@@ -161,21 +169,43 @@ public final class GoalViewModel extends StepViewModel {
         }
         SpecLimits limits = row.get().limits().get();
         switch (source.get()) {
-            case VALUE: {
-                OptionalDouble v = row.get().number(CharacteristicField.EXPECTED);
-                return v.isPresent() && v.getAsDouble() > 0 ? Optional.of(Expectation.centred(v.getAsDouble())) : Optional.empty();
-            }
+            case VALUE:
+                return typedExpectation(row.get());
             case MEAN_SIGMA: {
                 OptionalDouble mean = Numbers.parse(draft.text(DraftField.EXPECTED_MEAN));
                 OptionalDouble sigma = Numbers.parse(draft.text(DraftField.EXPECTED_SIGMA));
                 if (mean.isEmpty() || sigma.isEmpty() || !(sigma.getAsDouble() > 0)) {
                     return Optional.empty();
                 }
-                return dev.proofrun.app.session.ExpectedProcess.expectation(index.get(), limits, mean.getAsDouble(), sigma.getAsDouble());
+                try {
+                    return Optional.of(ProcessFacts.of(limits, mean.getAsDouble(), sigma.getAsDouble())
+                            .expectationFor(index.get(), new ArrayList<>()));
+                } catch (UserException | IllegalArgumentException e) {
+                    return Optional.empty();
+                }
             }
             default:
                 return Optional.empty();
         }
+    }
+
+    /**
+     * The expectation for any characteristic of the plan: the one worked out on this step for the
+     * characteristic in focus, the typed expected index (with the plan's centring) for the others.
+     */
+    public Optional<Expectation> expectationFor(CharacteristicDraft row) {
+        if (focus.get().isPresent() && focus.get().get() == row) {
+            return expectation.get();
+        }
+        return typedExpectation(row);
+    }
+
+    private Optional<Expectation> typedExpectation(CharacteristicDraft row) {
+        OptionalDouble v = row.number(CharacteristicField.EXPECTED);
+        if (v.isEmpty() || !(v.getAsDouble() > 0)) {
+            return Optional.empty();
+        }
+        return Optional.of(PlanBridge.withCentringOf(Optional.ofNullable(base.getValue()), row.id(), v.getAsDouble()));
     }
 
     /** Whether the index exists for these limits (Cp/Pp need both, Cpu an upper, Cpl a lower limit). */

@@ -9,7 +9,9 @@ public enum DraftField {
     PLAN_ID(""),
     PART_NUMBER(""),
     PART_NAME(""),
+    PART_REVISION(""),
     PREPARED_BY(""),
+    COLLECTOR(""),
     /** Token of {@link dev.proofrun.stats.IndexKind}. */
     INDEX("cpk"),
     MINIMUM("1.33"),
@@ -21,13 +23,26 @@ public enum DraftField {
     EXPECTED_MEAN(""),
     EXPECTED_SIGMA(""),
     PILOT_FILE(""),
-    /** The design picked by the user; empty = the recommended one. */
+    /** The wanted power of the study, 1 − β. */
+    POWER("0.90"),
+    /** The subgroup size picked by the user; empty = the recommended design. */
     CHOSEN_SUBGROUP_SIZE(""),
-    CHOSEN_SUBGROUPS(""),
-    START_DATE(""),
-    SPAN_DAYS("5"),
-    SHIFTS("06:00-14:00,14:00-22:00"),
+    /** The study's first minute, "yyyy-MM-dd HH:mm" in the plant's zone. */
+    START(""),
+    /** "days" or "shifts". */
+    SPAN_KIND("days"),
+    SPAN_COUNT("5"),
     ZONE("Europe/Berlin"),
+    /** "Mon-Fri" or a list "Mon, Tue, Thu". */
+    WORKING_DAYS("Mon-Fri"),
+    /** "early 06:00-14:00, late 14:00-22:00". */
+    SHIFTS("early 06:00-14:00, late 14:00-22:00"),
+    /** "09:30-09:45, 12:00-12:30". */
+    BREAKS(""),
+    /** "2027-03-26, 2027-03-29". */
+    NON_WORKING(""),
+    /** "40 s" (seconds per part) or "90/h" (parts per hour). */
+    RATE("60/h"),
     SPACING("random"),
     SEED("1"),
     RETURNED_FILE("");

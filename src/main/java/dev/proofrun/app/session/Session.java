@@ -1,14 +1,26 @@
 package dev.proofrun.app.session;
 
+import dev.proofrun.plan.DemoPlan;
+import dev.proofrun.plan.PlanFiles;
+import dev.proofrun.plan.StudyPlan;
+import java.nio.file.Files;
+import java.nio.file.Path;
 import java.util.Objects;
+import java.util.Optional;
+import javafx.beans.property.ObjectProperty;
+import javafx.beans.property.SimpleObjectProperty;
 
-/** The wizard's state for one window: the draft being edited and where its files go. */
+/**
+ * The wizard's state for one window: the draft being edited, the plan it was opened from (the base) and
+ * where its files go. Opening a plan restores a newer autosaved draft of it, so edits never get lost.
+ */
 public final class Session {
 
     private final AppHome home;
     private final StudyDraft draft = new StudyDraft();
     private final RecentPlans recent;
     private final DraftStore drafts;
+    private final ObjectProperty<StudyPlan> base = new SimpleObjectProperty<>(this, "base");
 
     public Session(AppHome home) {
         this.home = Objects.requireNonNull(home, "home");
@@ -32,8 +44,77 @@ public final class Session {
         return drafts;
     }
 
+    /** The plan as last read from or written to its file; null for a new plan. */
+    public ObjectProperty<StudyPlan> baseProperty() {
+        return base;
+    }
+
+    public Optional<StudyPlan> base() {
+        return Optional.ofNullable(base.get());
+    }
+
     /** Writes the draft's side file now. */
     public void autosave() {
         drafts.write(draft.snapshot());
+    }
+
+    /**
+     * Opens a plan file into the draft.
+     *
+     * @return true when a newer autosaved draft of it was restored over the file's content
+     * @throws dev.proofrun.text.UserException when the file is not a readable plan
+     */
+    public boolean open(Path file) {
+        Path p = file.toAbsolutePath().normalize();
+        StudyPlan plan = PlanFiles.read(p);
+        base.set(plan);
+        Optional<DraftSnapshot> newer = drafts.newerDraft(p);
+        if (newer.isPresent()) {
+            draft.restore(newer.get(), true);
+            draft.planFileProperty().set(p);
+        } else {
+            draft.restore(PlanBridge.snapshotOf(plan, p), false);
+        }
+        recent.remember(p);
+        return newer.isPresent();
+    }
+
+    /** The bundled demo plan in the plans folder, written there first if it is not there yet. */
+    public Path demoFile() {
+        Path f = home.plansFolder().resolve(DemoPlan.FILE_NAME);
+        if (!Files.exists(f)) {
+            PlanFiles.write(f, DemoPlan.create());
+        }
+        return f;
+    }
+
+    /** Starts a new plan (a fresh draft, or the draft of a new plan left unsaved last time). */
+    public boolean startNew() {
+        base.set(null);
+        Optional<DraftSnapshot> left = drafts.newerDraft(null);
+        if (left.isPresent()) {
+            draft.restore(left.get(), true);
+            draft.planFileProperty().set(null);
+            return true;
+        }
+        draft.restore(new StudyDraft().snapshot(), false);
+        return false;
+    }
+
+    /**
+     * Writes a plan to its file, remembers it and drops the autosaved draft.
+     *
+     * @throws dev.proofrun.text.UserException when the file is protected (an issued plan) or cannot be written
+     */
+    public void saved(Path file, StudyPlan plan) {
+        Path p = file.toAbsolutePath().normalize();
+        Path oldDraft = draft.planFileProperty().get();
+        PlanFiles.write(p, plan);
+        drafts.discard(oldDraft);
+        drafts.discard(p);
+        base.set(plan);
+        draft.planFileProperty().set(p);
+        draft.markSaved();
+        recent.remember(p);
     }
 }

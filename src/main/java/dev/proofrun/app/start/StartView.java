@@ -36,7 +36,39 @@ public final class StartView implements StepView {
         fresh.setId("new-plan");
         fresh.setMnemonicParsing(true);
         fresh.setOnAction(e -> vm.newPlan());
-        HBox actions = new HBox(fresh);
+        Button open = new Button("_Open a plan file…");
+        open.setId("open-plan");
+        open.setMnemonicParsing(true);
+        open.setOnAction(e -> {
+            javafx.stage.FileChooser fc = new javafx.stage.FileChooser();
+            fc.getExtensionFilters().add(new javafx.stage.FileChooser.ExtensionFilter("proofrun plan", "*.json"));
+            if (java.nio.file.Files.isDirectory(vm.plansFolder())) {
+                fc.setInitialDirectory(vm.plansFolder().toFile());
+            }
+            java.io.File f = fc.showOpenDialog(root.getScene().getWindow());
+            if (f != null) {
+                vm.open(f.toPath());
+            }
+        });
+        Button demo = new Button("Open the _demo plan");
+        demo.setId("open-demo");
+        demo.setMnemonicParsing(true);
+        demo.setOnAction(e -> vm.openDemo());
+        Button again = new Button("Open the selected plan");
+        again.setId("open-recent");
+        again.disableProperty().bind(recent.getSelectionModel().selectedItemProperty().isNull());
+        again.setOnAction(e -> vm.open(recent.getSelectionModel().getSelectedItem()));
+        recent.setOnMouseClicked(e -> {
+            if (e.getClickCount() == 2 && recent.getSelectionModel().getSelectedItem() != null) {
+                vm.open(recent.getSelectionModel().getSelectedItem());
+            }
+        });
+        recent.setOnKeyPressed(e -> {
+            if (e.getCode() == javafx.scene.input.KeyCode.ENTER && recent.getSelectionModel().getSelectedItem() != null) {
+                vm.open(recent.getSelectionModel().getSelectedItem());
+            }
+        });
+        HBox actions = new HBox(again, open, fresh, demo);
         actions.setSpacing(8);
         actions.setAlignment(Pos.CENTER_LEFT);
         Label message = new Label();
@@ -54,10 +86,5 @@ public final class StartView implements StepView {
     @Override
     public Node firstFocus() {
         return recent;
-    }
-
-    /** The actions row, for the steps wired later (open, demo) to add their buttons. */
-    HBox actions() {
-        return (HBox) root.getChildren().get(2);
     }
 }

@@ -1,11 +1,10 @@
 package dev.proofrun.app.start;
 
 import dev.proofrun.app.AppMessage;
-import dev.proofrun.app.session.DraftSnapshot;
+import dev.proofrun.text.UserException;
 import dev.proofrun.app.session.Session;
 import dev.proofrun.app.shell.StepViewModel;
 import java.nio.file.Path;
-import java.util.Optional;
 import javafx.beans.binding.Bindings;
 import javafx.beans.property.BooleanProperty;
 import javafx.beans.property.SimpleBooleanProperty;
@@ -63,14 +62,33 @@ public final class StartViewModel extends StepViewModel {
      * Begins a new plan. If a draft of an unsaved plan was left behind, it is restored instead of lost.
      */
     public void newPlan() {
-        Optional<DraftSnapshot> left = session.drafts().newerDraft(null);
-        if (left.isPresent()) {
-            session.draft().restore(left.get(), true);
-            message.set(AppMessage.DRAFT_RESTORED.format(session.drafts().sideFile(null).getFileName()));
-        } else {
-            session.draft().restore(new dev.proofrun.app.session.StudyDraft().snapshot(), false);
-            message.set("");
-        }
+        boolean restored = session.startNew();
+        message.set(restored ? AppMessage.DRAFT_RESTORED.format(session.drafts().sideFile(null).getFileName()) : "");
         loaded.set(true);
+    }
+
+    /** Opens a plan file; a problem with the file is shown as one line and nothing changes. */
+    public boolean open(Path file) {
+        try {
+            boolean restored = session.open(file);
+            message.set(restored ? AppMessage.DRAFT_RESTORED.format(session.drafts().sideFile(file).getFileName())
+                    : AppMessage.OPENED.format(file.getFileName()));
+            loaded.set(true);
+            refresh();
+            return true;
+        } catch (UserException | java.io.UncheckedIOException e) {
+            message.set(e.getMessage());
+            return false;
+        }
+    }
+
+    /** Opens the bundled demo plan (written to the plans folder the first time). */
+    public boolean openDemo() {
+        try {
+            return open(session.demoFile());
+        } catch (UserException e) {
+            message.set(e.getMessage());
+            return false;
+        }
     }
 }

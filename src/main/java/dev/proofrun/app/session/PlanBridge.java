@@ -1,0 +1,121 @@
+package dev.proofrun.app.session;
+
+import dev.proofrun.design.Design;
+import dev.proofrun.design.Expectation;
+import dev.proofrun.design.Requirement;
+import dev.proofrun.plan.Characteristic;
+import dev.proofrun.plan.Gauge;
+import dev.proofrun.plan.Part;
+import dev.proofrun.plan.People;
+import dev.proofrun.plan.StudyPlan;
+import dev.proofrun.schedule.ProductionCalendar;
+import dev.proofrun.schedule.Spacing;
+import dev.proofrun.schedule.StudySpan;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Optional;
+import java.util.OptionalDouble;
+import java.util.function.Function;
+
+/**
+ * Between the plan model and the draft the wizard edits: a plan file becomes text fields
+ * ({@link #snapshotOf}), and the checked inputs of the steps become a plan again ({@link #compose}).
+ * What the wizard does not edit (gauges, the expected centring) is carried over from the plan the draft
+ * was opened from, matched by characteristic id.
+ */
+public final class PlanBridge {
+
+    private PlanBridge() {
+    }
+
+    /** The plan as the wizard's text fields. One requirement is shown for the plan: the first characteristic's. */
+    public static DraftSnapshot snapshotOf(StudyPlan plan, java.nio.file.Path file) {
+        Map<String, String> f = new LinkedHashMap<>();
+        for (DraftField d : DraftField.values()) {
+            f.put(d.name(), d.initial());
+        }
+        f.put(DraftField.PLAN_ID.name(), plan.id());
+        f.put(DraftField.PART_NAME.name(), plan.part().name());
+        f.put(DraftField.PART_NUMBER.name(), plan.part().number());
+        f.put(DraftField.PART_REVISION.name(), plan.part().revision());
+        f.put(DraftField.PREPARED_BY.name(), plan.people().author());
+        f.put(DraftField.COLLECTOR.name(), plan.people().collector());
+        Characteristic first = plan.characteristics().get(0);
+        f.put(DraftField.INDEX.name(), first.requirement().index().token());
+        f.put(DraftField.MINIMUM.name(), num(first.requirement().minimum()));
+        f.put(DraftField.CONFIDENCE.name(), num(first.requirement().confidence()));
+        f.put(DraftField.FOCUS.name(), first.id());
+        f.put(DraftField.CHOSEN_SUBGROUP_SIZE.name(), Integer.toString(plan.design().subgroupSize()));
+        StudySpan span = plan.span();
+        f.put(DraftField.START.name(), CalendarText.start(span.start()));
+        f.put(DraftField.SPAN_KIND.name(), span.kind().name().toLowerCase(Locale.ROOT));
+        f.put(DraftField.SPAN_COUNT.name(), Integer.toString(span.count()));
+        ProductionCalendar c = plan.calendar();
+        f.put(DraftField.ZONE.name(), c.zone().getId());
+        f.put(DraftField.WORKING_DAYS.name(), CalendarText.workingDays(c.workingDaysInOrder()));
+        f.put(DraftField.SHIFTS.name(), CalendarText.shifts(c.shifts()));
+        f.put(DraftField.BREAKS.name(), CalendarText.breaks(c.breaks()));
+        f.put(DraftField.NON_WORKING.name(), CalendarText.dates(c.nonWorkingDates()));
+        f.put(DraftField.RATE.name(), CalendarText.rate(c.rate()));
+        f.put(DraftField.SPACING.name(), plan.spacing().token());
+        f.put(DraftField.SEED.name(), Long.toString(plan.seed()));
+        List<Map<String, String>> rows = new ArrayList<>();
+        for (Characteristic ch : plan.characteristics()) {
+            Map<String, String> r = new LinkedHashMap<>();
+            r.put("id", ch.id());
+            r.put("name", ch.name());
+            r.put("unit", ch.unit());
+            r.put("nominal", ch.nominal().isPresent() ? num(ch.nominal().getAsDouble()) : "");
+            r.put("lsl", ch.limits().lower().isPresent() ? num(ch.limits().lower().getAsDouble()) : "");
+            r.put("usl", ch.limits().upper().isPresent() ? num(ch.limits().upper().getAsDouble()) : "");
+            r.put("target", "");
+            r.put("expected", num(ch.expectation().index()));
+            rows.add(r);
+        }
+        return new DraftSnapshot(DraftSnapshot.FORMAT, file == null ? "" : file.toString(), f, rows);
+    }
+
+    /**
+     * A draft plan from the steps' checked inputs.
+     *
+     * @param base        the plan the draft was opened from, for what the wizard does not edit
+     * @param expectation the expectation for each characteristic row
+     * @throws dev.proofrun.text.UserException  when the calendar cannot hold the schedule
+     * @throws IllegalArgumentException when a value is refused by the plan model
+     */
+    public static StudyPlan compose(StudyDraft d, Optional<StudyPlan> base, Requirement requirement,
+            Function<CharacteristicDraft, Expectation> expectation, ProductionCalendar calendar, StudySpan span,
+            Design design, Spacing spacing, long seed) {
+        List<Characteristic> chars = new ArrayList<>();
+        for (CharacteristicDraft row : d.characteristics()) {
+            Optional<Characteristic> was = base.flatMap(b -> b.characteristic(row.id()));
+            Optional<Gauge> gauge = was.flatMap(Characteristic::gauge);
+            Expectation e = expectation.apply(row);
+            OptionalDouble nominal = row.number(CharacteristicField.NOMINAL);
+            chars.add(new Characteristic(row.id(), row.text(CharacteristicField.NAME).trim(),
+                    row.text(CharacteristicField.UNIT).trim(), nominal, row.limits().orElseThrow(), gauge, requirement, e));
+        }
+        Part part = new Part(d.text(DraftField.PART_NAME), d.text(DraftField.PART_NUMBER), d.text(DraftField.PART_REVISION));
+        People people = new People(d.text(DraftField.PREPARED_BY), d.text(DraftField.COLLECTOR));
+        return StudyPlan.draft(d.text(DraftField.PLAN_ID), part, people, chars, calendar, span, design, spacing, seed);
+    }
+
+    /** The expected centring of the plan the draft came from, kept when it still fits the index typed. */
+    public static Expectation withCentringOf(Optional<StudyPlan> base, String id, double index) {
+        Optional<OptionalDouble> p = base.flatMap(b -> b.characteristic(id)).map(c -> c.expectation().potential());
+        if (p.isPresent() && p.get().isPresent() && p.get().getAsDouble() >= index) {
+            return Expectation.offCentre(index, p.get().getAsDouble());
+        }
+        return Expectation.centred(index);
+    }
+
+    static String num(double v) {
+        if (v == Math.rint(v) && Math.abs(v) < 1e15) {
+            return String.format(Locale.ROOT, "%.1f", v);
+        }
+        return java.math.BigDecimal.valueOf(v).stripTrailingZeros().toPlainString();
+    }
+}

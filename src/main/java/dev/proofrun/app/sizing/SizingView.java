@@ -1,0 +1,189 @@
+package dev.proofrun.app.sizing;
+
+import dev.proofrun.app.chart.Charts;
+import dev.proofrun.app.shell.StepView;
+import dev.proofrun.design.DesignRow;
+import dev.proofrun.design.DesignTable;
+import dev.proofrun.design.OcPoint;
+import dev.proofrun.design.PowerPoint;
+import java.util.List;
+import java.util.function.Function;
+import javafx.beans.binding.Bindings;
+import javafx.beans.property.ReadOnlyStringWrapper;
+import javafx.scene.Node;
+import javafx.scene.chart.LineChart;
+import javafx.scene.control.Label;
+import javafx.scene.control.ProgressIndicator;
+import javafx.scene.control.TableColumn;
+import javafx.scene.control.TableRow;
+import javafx.scene.control.TableView;
+import javafx.scene.control.TextField;
+import javafx.scene.control.Tooltip;
+import javafx.scene.layout.GridPane;
+import javafx.scene.layout.HBox;
+import javafx.scene.layout.Priority;
+import javafx.scene.layout.VBox;
+
+/** The candidate designs, the recommendation, the chosen design's cost and its curves. */
+public final class SizingView implements StepView {
+
+    private final VBox root = new VBox(12);
+    private final TableView<DesignRow> table = new TableView<>();
+    private final LineChart<Number, Number> powerChart =
+            Charts.probability("power-chart", "Power against the number of subgroups", "subgroups k", "power");
+    private final LineChart<Number, Number> ocChart =
+            Charts.probability("oc-chart", "Chance to demonstrate against the true index", "true index", "probability");
+
+    public SizingView(SizingViewModel vm) {
+        TextField power = new TextField();
+        power.setId("power");
+        power.setPrefColumnCount(6);
+        power.textProperty().bindBidirectional(vm.power());
+        ProgressIndicator spinner = new ProgressIndicator();
+        spinner.setId("design-busy");
+        spinner.setMaxSize(24, 24);
+        spinner.visibleProperty().bind(vm.busyProperty());
+        Label refusal = new Label();
+        refusal.setId("design-refusal");
+        refusal.getStyleClass().add("pr-problem");
+        refusal.setWrapText(true);
+        refusal.textProperty().bind(vm.refusalProperty());
+        GridPane form = new GridPane();
+        form.getStyleClass().add("pr-form");
+        Label powerLabel = new Label("Wanted power (chance to show the goal if the process is as expected)");
+        powerLabel.setLabelFor(power);
+        form.addRow(0, powerLabel, power, spinner);
+
+        table.setId("designs");
+        table.setItems(vm.rows());
+        table.setPrefHeight(300);
+        table.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY_FLEX_LAST_COLUMN);
+        table.getColumns().addAll(List.of(
+                column("n", "Subgroup size n: consecutive parts taken at each slot", r -> Integer.toString(r.subgroupSize())),
+                column("k", "Number of subgroups k", r -> Integer.toString(r.subgroups())),
+                column("N", "Readings N = n·k", r -> Integer.toString(r.readings())),
+                column("Power", "P(lower bound ≥ required minimum | the process is as expected)", r -> SizingViewModel.fmt(r.power())),
+                column("ĉ* to pass", "ĉ*: the smallest estimated index whose lower bound reaches the "
+                        + "required minimum, at the expected centring", r -> SizingViewModel.fmt(r.criticalEstimate())),
+                column("ν", "Degrees of freedom of the within-sigma estimate (effective, after Patnaik 1950, for "
+                        + "R̄/d2, S̄/c4 and moving range)", r -> String.format(java.util.Locale.ROOT, "%.1f", r.degreesOfFreedom())),
+                column("Set by", "What fixed k: the wanted power, or a practice floor (25 subgroups, 100 readings)",
+                        r -> r.limitedBy().token()),
+                column("False alarm\n3σ / all rules", "Chance that the mean chart of a stable process signals at least "
+                        + "once in the study: 1 − (1 − 0.0027)^k with the 3σ rule alone; simulated with all eight run rules",
+                        r -> SizingViewModel.fmt(r.falseAlarm().beyondLimits()) + " / " + SizingViewModel.fmtOrDash(r.falseAlarm().allRules())),
+                column("Detection\n3σ / all rules", "Chance that the chart signals at least once when the mean moves by "
+                        + "δ·σ_w for the second half of the study; per subgroup Φ(−3+δ√n) + Φ(−3−δ√n)",
+                        r -> SizingViewModel.fmt(r.detection().beyondLimits()) + " / " + SizingViewModel.fmtOrDash(r.detection().allRules()))));
+        table.setRowFactory(t -> new TableRow<>() {
+            @Override
+            protected void updateItem(DesignRow r, boolean empty) {
+                super.updateItem(r, empty);
+                getStyleClass().remove("pr-recommended");
+                DesignTable dt = vm.tableProperty().get();
+                if (!empty && r != null && dt != null && dt.recommended().subgroupSize() == r.subgroupSize()) {
+                    getStyleClass().add("pr-recommended");
+                }
+            }
+        });
+        table.getSelectionModel().selectedItemProperty().addListener((obs, was, now) -> {
+            if (now != null && (vm.chosenProperty().get() == null || vm.chosenProperty().get().subgroupSize() != now.subgroupSize())) {
+                vm.choose(now);
+            }
+        });
+        vm.chosenProperty().addListener((obs, was, now) -> selectChosen(vm));
+
+        Label reason = new Label();
+        reason.setId("design-reason");
+        reason.setWrapText(true);
+        reason.getStyleClass().add("pr-fine");
+        reason.textProperty().bind(Bindings.createStringBinding(() -> vm.tableProperty().get() == null ? ""
+                : "Recommended: " + vm.tableProperty().get().reason(), vm.tableProperty()));
+        Label cost = new Label();
+        cost.setId("design-cost");
+        cost.setWrapText(true);
+        cost.textProperty().bind(vm.costBinding());
+        Label warnings = new Label();
+        warnings.setId("design-warnings");
+        warnings.setWrapText(true);
+        warnings.getStyleClass().add("pr-note");
+        warnings.textProperty().bind(Bindings.createStringBinding(() -> vm.tableProperty().get() == null ? ""
+                : String.join("\n", vm.tableProperty().get().warnings()), vm.tableProperty()));
+
+        vm.chosenTableProperty().addListener((obs, was, now) -> drawCurves(vm, now));
+        HBox charts = new HBox(12, powerChart, ocChart);
+        HBox.setHgrow(powerChart, Priority.ALWAYS);
+        HBox.setHgrow(ocChart, Priority.ALWAYS);
+
+        Label hint = new Label("Pick a row to use another subgroup size; the line below says what it costs.");
+        hint.getStyleClass().add("pr-note");
+        VBox card = new VBox(form, refusal, table, hint, reason, cost, warnings);
+        card.getStyleClass().add("pr-card");
+        root.getChildren().addAll(card, charts);
+    }
+
+    private void selectChosen(SizingViewModel vm) {
+        DesignRow c = vm.chosenProperty().get();
+        if (c == null) {
+            return;
+        }
+        for (int i = 0; i < table.getItems().size(); i++) {
+            if (table.getItems().get(i).subgroupSize() == c.subgroupSize()) {
+                if (table.getSelectionModel().getSelectedIndex() != i) {
+                    table.getSelectionModel().select(i);
+                }
+                table.refresh();
+                return;
+            }
+        }
+    }
+
+    private void drawCurves(SizingViewModel vm, DesignTable t) {
+        powerChart.getData().clear();
+        ocChart.getData().clear();
+        if (t == null) {
+            return;
+        }
+        DesignRow c = t.recommended();
+        List<PowerPoint> pc = t.powerCurve();
+        if (!pc.isEmpty()) {
+            powerChart.getData().add(Charts.series("power, n = " + c.subgroupSize(),
+                    pc.stream().map(p -> new double[] {p.subgroups(), p.power()}).toList()));
+            double wanted = vm.request().map(r -> r.power()).orElse(0.9);
+            powerChart.getData().add(Charts.horizontal("wanted " + SizingViewModel.fmt(wanted), wanted,
+                    pc.get(0).subgroups(), pc.get(pc.size() - 1).subgroups()));
+            powerChart.getData().add(Charts.vertical("chosen k = " + c.subgroups(), c.subgroups(), 0, 1));
+        }
+        List<OcPoint> oc = t.operatingCharacteristic();
+        if (!oc.isEmpty()) {
+            ocChart.getData().add(Charts.series(c.subgroups() + " × " + c.subgroupSize(),
+                    oc.stream().map(p -> new double[] {p.trueIndex(), p.probability()}).toList()));
+            vm.request().ifPresent(r -> {
+                ocChart.getData().add(Charts.vertical("required " + r.requirement().minimum(), r.requirement().minimum(), 0, 1));
+                ocChart.getData().add(Charts.vertical("expected " + SizingViewModel.fmt(r.expectation().index()),
+                        r.expectation().index(), 0, 1));
+            });
+        }
+    }
+
+    private static TableColumn<DesignRow, String> column(String title, String tip, Function<DesignRow, String> text) {
+        TableColumn<DesignRow, String> c = new TableColumn<>();
+        Label header = new Label(title);
+        header.setTooltip(new Tooltip(tip));
+        header.setWrapText(true);
+        c.setGraphic(header);
+        c.setSortable(false);
+        c.setCellValueFactory(cd -> new ReadOnlyStringWrapper(text.apply(cd.getValue())));
+        return c;
+    }
+
+    @Override
+    public Node root() {
+        return root;
+    }
+
+    @Override
+    public Node firstFocus() {
+        return table;
+    }
+}

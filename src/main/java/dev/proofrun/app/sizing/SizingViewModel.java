@@ -1,0 +1,274 @@
+package dev.proofrun.app.sizing;
+
+import dev.proofrun.app.AppMessage;
+import dev.proofrun.app.goal.GoalViewModel;
+import dev.proofrun.app.session.DraftField;
+import dev.proofrun.app.session.Numbers;
+import dev.proofrun.app.session.StudyDraft;
+import dev.proofrun.app.shell.StepViewModel;
+import dev.proofrun.design.Design;
+import dev.proofrun.design.DesignRequest;
+import dev.proofrun.design.DesignRow;
+import dev.proofrun.design.DesignTable;
+import dev.proofrun.design.StudyDesigner;
+import dev.proofrun.stats.SigmaMethod;
+import dev.proofrun.text.UserException;
+import java.util.List;
+import java.util.Locale;
+import java.util.Optional;
+import java.util.OptionalDouble;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import javafx.beans.binding.Bindings;
+import javafx.beans.binding.ObjectBinding;
+import javafx.beans.binding.StringBinding;
+import javafx.beans.property.BooleanProperty;
+import javafx.beans.property.ObjectProperty;
+import javafx.beans.property.SimpleBooleanProperty;
+import javafx.beans.property.SimpleObjectProperty;
+import javafx.beans.property.SimpleStringProperty;
+import javafx.beans.property.StringProperty;
+import javafx.collections.FXCollections;
+import javafx.collections.ObservableList;
+import javafx.concurrent.Task;
+
+/**
+ * The design table, recomputed whenever an input changes: the request is built on the FX thread, the
+ * designer runs in a {@link Task} on a worker thread, and only the latest request's answer is applied
+ * (an older task is cancelled and its answer dropped). The user may pick a row other than the
+ * recommended one; its cost against the recommendation is spelled out and its own power and OC curves
+ * are computed the same way.
+ */
+public final class SizingViewModel extends StepViewModel {
+
+    private static final ExecutorService WORKER = Executors.newSingleThreadExecutor(r -> {
+        Thread t = new Thread(r, "proofrun-design");
+        t.setDaemon(true);
+        return t;
+    });
+
+    private final StudyDraft draft;
+    private final GoalViewModel goal;
+    private final ObjectBinding<Optional<DesignRequest>> request;
+    private final ObjectProperty<DesignTable> table = new SimpleObjectProperty<>(this, "table");
+    private final ObjectProperty<DesignTable> chosenTable = new SimpleObjectProperty<>(this, "chosenTable");
+    private final ObservableList<DesignRow> rows = FXCollections.observableArrayList();
+    private final ObjectProperty<DesignRow> chosen = new SimpleObjectProperty<>(this, "chosen");
+    private final BooleanProperty busy = new SimpleBooleanProperty(this, "busy", false);
+    private final StringProperty refusal = new SimpleStringProperty(this, "refusal", "");
+    private final StringBinding cost;
+    private Task<DesignTable[]> running;
+    private long generation;
+
+    public SizingViewModel(StudyDraft draft, GoalViewModel goal) {
+        this.draft = draft;
+        this.goal = goal;
+        request = Bindings.createObjectBinding(this::buildRequest, goal.requirementBinding(), goal.expectationBinding(),
+                goal.focusBinding(), draft.field(DraftField.POWER), draft.field(DraftField.CHOSEN_SUBGROUP_SIZE),
+                draft.characteristics());
+        request.addListener((obs, was, now) -> recompute());
+        cost = Bindings.createStringBinding(this::describeCost, chosen, table);
+        bindMissing(Bindings.createStringBinding(() -> {
+            if (goal.requirementBinding().get().isEmpty() || goal.expectationBinding().get().isEmpty()) {
+                return AppMessage.SIZING_GOAL_FIRST.format();
+            }
+            if (!refusal.get().isEmpty()) {
+                return refusal.get();
+            }
+            if (busy.get() || chosen.get() == null) {
+                return AppMessage.SIZING_BUSY.format();
+            }
+            return "";
+        }, goal.requirementBinding(), goal.expectationBinding(), refusal, busy, chosen));
+    }
+
+    @Override
+    public String title() {
+        return AppMessage.STEP_SIZING.english();
+    }
+
+    @Override
+    public String hint() {
+        return AppMessage.STEP_SIZING_HINT.english();
+    }
+
+    @Override
+    public void entered() {
+        if (table.get() == null && !busy.get()) {
+            recompute();
+        }
+    }
+
+    public StringProperty power() {
+        return draft.field(DraftField.POWER);
+    }
+
+    public ObservableList<DesignRow> rows() {
+        return rows;
+    }
+
+    public ObjectProperty<DesignTable> tableProperty() {
+        return table;
+    }
+
+    /** The table computed for the chosen subgroup size alone (its power and OC curves). */
+    public ObjectProperty<DesignTable> chosenTableProperty() {
+        return chosenTable;
+    }
+
+    public ObjectProperty<DesignRow> chosenProperty() {
+        return chosen;
+    }
+
+    public BooleanProperty busyProperty() {
+        return busy;
+    }
+
+    /** The designer's refusal (c₁ ≤ c₀, power out of reach), empty when there is a table. */
+    public StringProperty refusalProperty() {
+        return refusal;
+    }
+
+    public StringBinding costBinding() {
+        return cost;
+    }
+
+    public Optional<DesignRequest> request() {
+        return request.get();
+    }
+
+    /** The chosen design as the plan keeps it. */
+    public Optional<Design> design() {
+        DesignRow r = chosen.get();
+        Optional<DesignRequest> q = request.get();
+        if (r == null || q.isEmpty()) {
+            return Optional.empty();
+        }
+        SigmaMethod m = r.subgroupSize() == 1 ? SigmaMethod.MOVING_RANGE
+                : q.get().sigmaMethod().orElse(SigmaMethod.defaultFor(r.subgroupSize()));
+        return Optional.of(new Design(r.subgroupSize(), r.subgroups(), m, q.get().boundMethod()));
+    }
+
+    /** Picks the row with this subgroup size (the choice survives recomputation). */
+    public void choose(DesignRow row) {
+        if (row == null) {
+            return;
+        }
+        DesignTable t = table.get();
+        boolean recommended = t != null && t.recommended().subgroupSize() == row.subgroupSize();
+        draft.field(DraftField.CHOSEN_SUBGROUP_SIZE).set(recommended ? "" : Integer.toString(row.subgroupSize()));
+    }
+
+    private Optional<DesignRequest> buildRequest() {
+        Optional<dev.proofrun.design.Requirement> req = goal.requirementBinding().get();
+        Optional<dev.proofrun.design.Expectation> exp = goal.expectationBinding().get();
+        if (req.isEmpty() || exp.isEmpty() || goal.focusBinding().get().isEmpty()
+                || goal.focusBinding().get().get().limits().isEmpty()) {
+            return Optional.empty();
+        }
+        OptionalDouble p = Numbers.parse(draft.text(DraftField.POWER));
+        double power = p.isPresent() ? p.getAsDouble() : DesignRequest.DEFAULT_POWER;
+        try {
+            DesignRequest r = DesignRequest.of(goal.focusBinding().get().get().limits().get().sides(), req.get(), exp.get());
+            return Optional.of(p.isPresent() ? r.withPower(power) : r);
+        } catch (UserException | IllegalArgumentException e) {
+            refusal.set(e.getMessage());
+            return Optional.empty();
+        }
+    }
+
+    /** Starts a new computation for the current inputs; any older one is cancelled and its answer dropped. */
+    public void recompute() {
+        if (running != null) {
+            running.cancel(true);
+            running = null;
+        }
+        Optional<DesignRequest> q = request.get();
+        if (q.isEmpty()) {
+            busy.set(false);
+            table.set(null);
+            chosenTable.set(null);
+            rows.clear();
+            chosen.set(null);
+            return;
+        }
+        refusal.set("");
+        DesignRequest req = q.get();
+        int wanted = Numbers.parse(draft.text(DraftField.CHOSEN_SUBGROUP_SIZE)).isPresent()
+                ? (int) Numbers.parse(draft.text(DraftField.CHOSEN_SUBGROUP_SIZE)).getAsDouble() : 0;
+        long mine = ++generation;
+        Task<DesignTable[]> task = new Task<>() {
+            @Override
+            protected DesignTable[] call() {
+                DesignTable all = StudyDesigner.design(req);
+                DesignTable own = null;
+                if (wanted > 0 && wanted != all.recommended().subgroupSize()
+                        && all.rows().stream().anyMatch(r -> r.subgroupSize() == wanted) && !isCancelled()) {
+                    own = StudyDesigner.design(req.withSubgroupSizes(List.of(wanted)));
+                }
+                return new DesignTable[] {all, own};
+            }
+        };
+        task.setOnSucceeded(e -> {
+            if (mine == generation) {
+                apply(task.getValue(), wanted);
+            }
+        });
+        task.setOnFailed(e -> {
+            if (mine == generation) {
+                busy.set(false);
+                Throwable ex = task.getException();
+                refusal.set(ex instanceof UserException || ex instanceof IllegalArgumentException
+                        ? ex.getMessage() : AppMessage.SIZING_FAILED.format(String.valueOf(ex)));
+                table.set(null);
+                rows.clear();
+                chosen.set(null);
+            }
+        });
+        running = task;
+        busy.set(true);
+        WORKER.execute(task);
+    }
+
+    private void apply(DesignTable[] answer, int wanted) {
+        DesignTable all = answer[0];
+        table.set(all);
+        rows.setAll(all.rows());
+        DesignRow pick = all.recommended();
+        DesignTable own = all;
+        if (answer[1] != null) {
+            pick = answer[1].recommended();
+            own = answer[1];
+        }
+        chosenTable.set(own);
+        chosen.set(pick);
+        busy.set(false);
+        running = null;
+    }
+
+    private String describeCost() {
+        DesignRow c = chosen.get();
+        DesignTable t = table.get();
+        if (c == null || t == null) {
+            return "";
+        }
+        DesignRow r = t.recommended();
+        if (c.subgroupSize() == r.subgroupSize()) {
+            return AppMessage.SIZING_RECOMMENDED_CHOSEN.format(c.subgroups(), c.subgroupSize(), c.readings(), c.power());
+        }
+        int extra = c.readings() - r.readings();
+        return AppMessage.SIZING_OTHER_CHOSEN.format(c.subgroups(), c.subgroupSize(), c.readings(),
+                extra >= 0 ? "+" + extra : Integer.toString(extra), r.readings(), c.power(), r.power(),
+                fmtOrDash(c.falseAlarm().beyondLimits()), fmtOrDash(r.falseAlarm().beyondLimits()));
+    }
+
+    /** "0.903", or "—" when the core has no value (NaN). */
+    public static String fmtOrDash(double v) {
+        return Double.isNaN(v) ? "—" : fmt(v);
+    }
+
+    /** "0.903" */
+    public static String fmt(double v) {
+        return String.format(Locale.ROOT, "%.3f", v);
+    }
+}
