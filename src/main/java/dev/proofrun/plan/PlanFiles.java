@@ -263,7 +263,7 @@ public final class PlanFiles {
         try {
             tree = MAPPER.readTree(bytes);
         } catch (JsonProcessingException e) {
-            throw syntax(e, where);
+            throw syntax(e, where, bytes.length);
         } catch (IOException e) {
             throw new UserException(where, PlanMessage.CANNOT_READ, describe(e));
         }
@@ -292,13 +292,13 @@ public final class PlanFiles {
         } catch (JsonMappingException e) {
             throw new UserException(where, PlanMessage.BAD_VALUE, JsonPaths.of(e.getPath()), e.getOriginalMessage());
         } catch (JsonProcessingException e) {
-            throw syntax(e, where);
+            throw syntax(e, where, bytes.length);
         } catch (IOException e) {
             throw new UserException(where, PlanMessage.CANNOT_READ, describe(e));
         }
     }
 
-    private static UserException syntax(JsonProcessingException e, Location where) {
+    private static UserException syntax(JsonProcessingException e, Location where, int length) {
         int line = e.getLocation() == null ? 0 : e.getLocation().getLineNr();
         int column = e.getLocation() == null ? 0 : e.getLocation().getColumnNr();
         String path = "$";
@@ -306,7 +306,8 @@ public final class PlanFiles {
             JsonStreamContext ctx = ((JsonParser) e.getProcessor()).getParsingContext();
             path = JsonPaths.of(ctx);
         }
-        if (e instanceof JsonEOFException) {
+        boolean atEnd = e.getLocation() != null && e.getLocation().getByteOffset() >= length;
+        if (e instanceof JsonEOFException || atEnd) {
             return new UserException(where, PlanMessage.TRUNCATED, path, line);
         }
         return new UserException(where, PlanMessage.NOT_JSON, path, line, column, e.getOriginalMessage().replace('\n', ' '));

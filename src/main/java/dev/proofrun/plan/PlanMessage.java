@@ -7,7 +7,7 @@ public enum PlanMessage implements MessageKey {
     CANNOT_READ("cannot read the plan file: %s"),
     CANNOT_WRITE("cannot write the plan file: %s"),
     EMPTY_FILE("the file is empty; expected a proofrun plan (JSON)"),
-    TRUNCATED("the file ends too early inside %s (line %d); is it truncated?"),
+    TRUNCATED("the file ends too early, after %s (line %d); is it truncated?"),
     NOT_JSON("not valid JSON at %s (line %d, column %d): %s"),
     NOT_A_PLAN("not a proofrun plan: $.format is %s, expected \"" + PlanJson.FORMAT + "\""),
     UNKNOWN_VERSION("at $.formatVersion: plan format version %s is not known; this proofrun reads version %d"),

@@ -1,0 +1,197 @@
+package dev.proofrun.plan;
+
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertNotEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import dev.proofrun.text.UserException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Arrays;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+class PlanFilesTest {
+
+    @TempDir
+    Path dir;
+
+    private Path saved(StudyPlan plan) {
+        Path p = dir.resolve("plan.json");
+        PlanFiles.write(p, plan);
+        return p;
+    }
+
+    private String demoText() {
+        return new String(PlanFiles.toBytes(DemoPlan.create()), StandardCharsets.UTF_8);
+    }
+
+    private UserException refused(String text) throws Exception {
+        Path p = dir.resolve("broken.json");
+        Files.writeString(p, text);
+        return assertThrows(UserException.class, () -> PlanFiles.read(p));
+    }
+
+    @Test
+    void roundTripFileModelFileIsByteIdentical() throws Exception {
+        for (StudyPlan plan : new StudyPlan[] {DemoPlan.draft(), DemoPlan.create()}) {
+            Path p = saved(plan);
+            byte[] first = Files.readAllBytes(p);
+            StudyPlan back = PlanFiles.inspect(p).plan();
+            assertEquals(plan, back);
+            assertArrayEquals(first, PlanFiles.toBytes(back));
+        }
+    }
+
+    @Test
+    void issuingFreezesWithTheFingerprintOfTheContent() {
+        StudyPlan draft = DemoPlan.draft();
+        StudyPlan issued = PlanFiles.issue(draft);
+        assertEquals(PlanState.ISSUED, issued.state());
+        assertEquals(PlanFiles.fingerprint(draft), issued.revision().orElseThrow());
+        assertEquals(PlanFiles.fingerprint(draft), PlanFiles.fingerprint(issued), "state and revision are not content");
+        assertTrue(issued.revision().orElseThrow().matches("[0-9a-f]{12}"));
+        assertEquals("PR-2027-0311@" + issued.revision().orElseThrow(), issued.reference());
+        assertEquals("PR-2027-0311@draft", draft.reference());
+        StudyPlan other = StudyPlan.draft("PR-2027-0312", draft.part(), draft.people(), draft.characteristics(),
+                draft.calendar(), draft.span(), draft.design(), draft.spacing(), draft.seed());
+        assertNotEquals(PlanFiles.fingerprint(draft), PlanFiles.fingerprint(other));
+    }
+
+    @Test
+    void fingerprintIsSha256OfTheCanonicalForm() throws Exception {
+        // independent recomputation with the JDK's digest, over the documented canonical bytes
+        StudyPlan plan = DemoPlan.create();
+        byte[] canonical = PlanFiles.canonical(plan);
+        String text = new String(canonical, StandardCharsets.UTF_8);
+        assertFalse(text.contains("\"state\"") || text.contains("\"revision\":\"" + plan.revision().orElseThrow()));
+        assertFalse(text.contains("\n"));
+        byte[] hash = java.security.MessageDigest.getInstance("SHA-256").digest(canonical);
+        StringBuilder hex = new StringBuilder();
+        for (int i = 0; i < 6; i++) {
+            hex.append(String.format("%02x", hash[i]));
+        }
+        assertEquals(hex.toString(), plan.revision().orElseThrow());
+    }
+
+    @Test
+    void anEditedIssuedPlanIsDetectedAndReissuedAsANewRevision() throws Exception {
+        StudyPlan issued = DemoPlan.create();
+        Path p = saved(issued);
+        String text = Files.readString(p).replace("\"usl\": 22.013", "\"usl\": 22.015");
+        Files.writeString(p, text);
+        UserException e = assertThrows(UserException.class, () -> PlanFiles.read(p));
+        assertEquals(PlanMessage.EDITED_AFTER_ISSUE, e.key());
+        assertTrue(e.getMessage().contains(issued.revision().orElseThrow()), e.getMessage());
+        assertEquals(PlanFiles.Integrity.CHANGED_AFTER_ISSUE, PlanFiles.inspect(p).integrity());
+
+        StudyPlan next = PlanFiles.issue(p);
+        assertNotEquals(issued.revision(), next.revision());
+        assertEquals(issued.revision(), next.supersedes());
+        assertEquals(PlanFiles.Integrity.INTACT, PlanFiles.inspect(p).integrity());
+        assertEquals(text, Files.readString(dir.resolve("plan.json.bak")), "the file as found is kept");
+        // issuing an intact plan again changes nothing
+        byte[] before = Files.readAllBytes(p);
+        assertEquals(next, PlanFiles.issue(p));
+        assertArrayEquals(before, Files.readAllBytes(p));
+    }
+
+    @Test
+    void anIssuedFileIsNeverOverwrittenByAnotherPlan() throws Exception {
+        Path p = saved(DemoPlan.create());
+        byte[] before = Files.readAllBytes(p);
+        UserException e = assertThrows(UserException.class, () -> PlanFiles.write(p, DemoPlan.draft()));
+        assertEquals(PlanMessage.ISSUED_FILE_PROTECTED, e.key());
+        assertArrayEquals(before, Files.readAllBytes(p));
+        // a reopened plan issued as the successor may replace it, the old one kept as .bak
+        StudyPlan successor = PlanFiles.issue(DemoPlan.create().reopen());
+        PlanFiles.write(p, successor);
+        assertArrayEquals(before, Files.readAllBytes(dir.resolve("plan.json.bak")));
+        Path notAPlan = dir.resolve("notes.json");
+        Files.writeString(notAPlan, "{\"shopping\": [1, 2]}");
+        assertEquals(PlanMessage.NOT_A_PLAN_FILE_TO_REPLACE,
+                assertThrows(UserException.class, () -> PlanFiles.write(notAPlan, DemoPlan.draft())).key());
+        assertEquals("{\"shopping\": [1, 2]}", Files.readString(notAPlan));
+    }
+
+    @Test
+    void savingKeepsThePreviousVersionAndLeavesNoTemporaryFiles() throws Exception {
+        Path p = saved(DemoPlan.draft());
+        byte[] draft = Files.readAllBytes(p);
+        PlanFiles.issue(p);
+        assertArrayEquals(draft, Files.readAllBytes(dir.resolve("plan.json.bak")));
+        try (var files = Files.list(dir)) {
+            assertEquals(2, files.count(), "plan.json and plan.json.bak only");
+        }
+    }
+
+    @Test
+    void truncatedFileIsRefusedWithThePath() throws Exception {
+        String text = demoText();
+        int cut = text.indexOf("\"lsl\": 21.987");
+        UserException e = refused(text.substring(0, cut));
+        assertEquals(PlanMessage.TRUNCATED, e.key());
+        assertTrue(e.getMessage().contains("$.characteristics[0]"), e.getMessage());
+        assertTrue(e.getMessage().startsWith(dir.resolve("broken.json").toString()), e.getMessage());
+        assertEquals(PlanMessage.EMPTY_FILE, refused("").key());
+    }
+
+    @Test
+    void handBrokenFilesAreRefusedWithThePath() throws Exception {
+        String text = demoText();
+        UserException type = refused(text.replace("\"usl\": 0.8", "\"usl\": \"zero point eight\""));
+        assertEquals(PlanMessage.WRONG_TYPE, type.key());
+        assertTrue(type.getMessage().contains("$.characteristics[1].usl"), type.getMessage());
+
+        UserException unknown = refused(text.replace("\"unit\": \"kN\"", "\"unit\": \"kN\", \"colour\": \"red\""));
+        assertEquals(PlanMessage.UNKNOWN_FIELD, unknown.key());
+        assertTrue(unknown.getMessage().contains("$.characteristics[2].colour"), unknown.getMessage());
+
+        UserException reversed = refused(text.replace("\"lsl\": 21.987", "\"lsl\": 22.02"));
+        assertEquals(PlanMessage.BAD_VALUE, reversed.key());
+        assertTrue(reversed.getMessage().contains("$.characteristics[0]") && reversed.getMessage().contains("LSL must be below USL"),
+                reversed.getMessage());
+
+        UserException zone = refused(text.replace("Europe/Berlin", "Europe/Atlantis"));
+        assertTrue(zone.getMessage().contains("$.calendar.zone"), zone.getMessage());
+
+        UserException time = refused(text.replace("\"start\": \"2027-03-24T07:53+01:00\"", "\"start\": \"yesterday\""));
+        assertTrue(time.getMessage().contains("$.schedule.slots[0].start"), time.getMessage());
+
+        UserException missing = refused(text.replace("\"subgroups\": 25,", ""));
+        assertEquals(PlanMessage.MISSING, missing.key());
+        assertTrue(missing.getMessage().contains("$.design.subgroups"), missing.getMessage());
+
+        UserException syntax = refused(text.replace("\"days\": 3", "\"days\": 3,,"));
+        assertEquals(PlanMessage.NOT_JSON, syntax.key());
+        assertTrue(syntax.getMessage().contains("$.span"), syntax.getMessage());
+
+        UserException typing = refused(text.replace("\"part\": {", "\"part\": {\"@class\": \"java.lang.ProcessBuilder\","));
+        assertEquals(PlanMessage.UNKNOWN_FIELD, typing.key(), "no type information is taken from the file");
+    }
+
+    @Test
+    void unknownVersionAndOtherFormatsAreRefused() throws Exception {
+        String text = demoText();
+        UserException v2 = refused(text.replace("\"formatVersion\": 1", "\"formatVersion\": 2"));
+        assertEquals(PlanMessage.UNKNOWN_VERSION, v2.key());
+        assertTrue(v2.getMessage().contains("$.formatVersion") && v2.getMessage().contains(" 2 "), v2.getMessage());
+        assertEquals(PlanMessage.NOT_A_PLAN, refused(text.replace("proofrun-plan", "shopping-list")).key());
+        assertEquals(PlanMessage.WRONG_TYPE, refused("[1, 2, 3]").key());
+    }
+
+    @Test
+    void slotCountMustMatchTheDesign() throws Exception {
+        String text = demoText();
+        String cut = text.replaceAll(",\\n      \\{\\n        \"id\": \"S25\"[^}]*\\}", "");
+        assertNotEquals(text, cut);
+        UserException e = refused(cut.replace("\"state\": \"issued\"", "\"state\": \"draft\"")
+                .replaceFirst("\"revision\": \"[0-9a-f]{12}\",\n  ", ""));
+        assertTrue(e.getMessage().contains("does not match the design"), e.getMessage());
+        assertTrue(Arrays.asList(PlanMessage.values()).contains(e.key()));
+    }
+}
