@@ -18,6 +18,7 @@ import picocli.CommandLine.Command;
         subcommands = {
             CommandLine.HelpCommand.class,
             SizeCommand.class,
+            PlanCommand.class,
         })
 public final class ProofrunCommand implements Runnable {
 

@@ -19,7 +19,12 @@ public enum PlanMessage implements MessageKey {
             + " run 'proofrun plan issue' on it to issue the change as a new revision"),
     ISSUED_FILE_PROTECTED("%s holds issued revision %s; an issued plan is not overwritten: issue the change"
             + " as a new revision or save it under another name"),
-    NOT_A_PLAN_FILE_TO_REPLACE("%s exists and is not a proofrun plan; it is left untouched");
+    NOT_A_PLAN_FILE_TO_REPLACE("%s exists and is not a proofrun plan; it is left untouched"),
+    CSV_MISSING_COLUMN("the column '%s' is missing; the header needs %s"),
+    CSV_BAD_CELL("%s"),
+    CSV_NO_ROWS("no characteristics in the file (only a header?)"),
+    NO_COMMON_DESIGN("no subgroup size among %s lets every characteristic reach the wanted power; plan them separately"
+            + " or lower the power");
 
     private final String english;
 

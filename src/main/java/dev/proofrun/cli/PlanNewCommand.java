@@ -1,0 +1,245 @@
+package dev.proofrun.cli;
+
+import dev.proofrun.design.Expectation;
+import dev.proofrun.design.Requirement;
+import dev.proofrun.plan.Characteristic;
+import dev.proofrun.plan.CharacteristicsCsv;
+import dev.proofrun.plan.CommonDesign;
+import dev.proofrun.plan.Gauge;
+import dev.proofrun.plan.Part;
+import dev.proofrun.plan.People;
+import dev.proofrun.plan.PlanFiles;
+import dev.proofrun.plan.StudyPlan;
+import dev.proofrun.schedule.ProductionCalendar;
+import dev.proofrun.schedule.ProductionRate;
+import dev.proofrun.schedule.Spacing;
+import dev.proofrun.schedule.StudySpan;
+import dev.proofrun.stats.IndexKind;
+import dev.proofrun.stats.SpecLimits;
+import dev.proofrun.text.UserException;
+import java.io.PrintWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.security.SecureRandom;
+import java.time.LocalDate;
+import java.time.LocalDateTime;
+import java.time.ZoneId;
+import java.time.format.DateTimeParseException;
+import java.util.List;
+import java.util.Locale;
+import java.util.Optional;
+import java.util.OptionalDouble;
+import java.util.OptionalInt;
+import java.util.concurrent.Callable;
+import java.util.function.Supplier;
+import picocli.CommandLine;
+import picocli.CommandLine.ArgGroup;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+
+/** {@code proofrun plan new}: a draft plan from the command line, scheduled on the given calendar. */
+@Command(name = "new", mixinStandardHelpOptions = true, sortOptions = false,
+        description = "Make a draft plan: characteristics, design (solved unless --subgroup-size and --subgroups"
+                + " are given), calendar, span and the dated slots. Writes nothing when anything is refused.")
+public final class PlanNewCommand implements Callable<Integer> {
+
+    /** Assumed when neither --rate nor --cycle-seconds is given. */
+    static final double DEFAULT_RATE = 60;
+
+    @CommandLine.Spec
+    CommandLine.Model.CommandSpec spec;
+
+    @Option(names = "--out", required = true, paramLabel = "FILE.json", description = "The plan file to write.")
+    Path out;
+    @Option(names = "--force", description = "Replace an existing draft (kept as FILE.bak); an issued plan is never replaced.")
+    boolean force;
+    @Option(names = "--id", description = "Plan id (default PR-<start year>-<4 random digits>).")
+    String id;
+    @Option(names = "--part", required = true, paramLabel = "NAME", description = "Part name.")
+    String part;
+    @Option(names = "--part-number", description = "Drawing or part number.")
+    String partNumber;
+    @Option(names = "--part-revision", description = "Drawing revision.")
+    String partRevision;
+    @Option(names = "--author", description = "Who writes the plan.")
+    String author;
+    @Option(names = "--collector", description = "Who takes and measures the parts (team, supplier).")
+    String collector;
+
+    @Option(names = "--characteristics", paramLabel = "FILE.csv",
+            description = "Many characteristics: columns id,name,unit,nominal,lsl,usl,target,expected (optional index,confidence,expected_cp).")
+    Path characteristicsCsv;
+    @Option(names = "--characteristic", paramLabel = "NAME", description = "One characteristic's name.")
+    String characteristic;
+    @Option(names = "--characteristic-id", paramLabel = "ID", description = "Its id on the drawing (default C1).")
+    String characteristicId;
+    @Option(names = "--unit", paramLabel = "U", description = "Unit of the readings.")
+    String unit;
+    @Option(names = "--lsl", paramLabel = "X", description = "Lower specification limit.")
+    Double lsl;
+    @Option(names = "--usl", paramLabel = "X", description = "Upper specification limit.")
+    Double usl;
+    @Option(names = "--nominal", paramLabel = "X", description = "Nominal value.")
+    Double nominal;
+    @Option(names = "--gauge", paramLabel = "NAME", description = "Gauge name (with --resolution).")
+    String gauge;
+    @Option(names = "--resolution", paramLabel = "R", description = "Gauge resolution.")
+    Double resolution;
+    @Option(names = "--gauge-sd", paramLabel = "SD", description = "Gauge standard deviation, if known.")
+    Double gaugeSd;
+    @Option(names = "--index", defaultValue = "cpk", paramLabel = "cpk|ppk|cpu|cpl|...", description = "Required index (default ${DEFAULT-VALUE}).")
+    String index;
+    @Option(names = "--target", paramLabel = "C0", description = "Required minimum of the index.")
+    Double target;
+    @Option(names = "--confidence", defaultValue = "0.95", description = "Confidence of the lower bound (default ${DEFAULT-VALUE}).")
+    double confidence;
+    @Option(names = "--expected", paramLabel = "C1", description = "The index the process is believed to have.")
+    Double expected;
+    @Option(names = "--expected-cp", paramLabel = "CP1", description = "Expected Cp for a two-sided Cpk (default: centred).")
+    Double expectedCp;
+    @Option(names = "--power", defaultValue = "0.9", description = "Wanted power when the design is solved (default ${DEFAULT-VALUE}).")
+    double power;
+    @Option(names = "--subgroup-size", paramLabel = "N", description = "Subgroup size n (default: solved).")
+    Integer subgroupSize;
+    @Option(names = "--subgroups", paramLabel = "K", description = "Number of subgroups k (fixes k instead of solving for it).")
+    Integer subgroups;
+
+    @Option(names = "--zone", paramLabel = "ZONE", description = "Time zone of the plant (default: this computer's).")
+    String zone;
+    @Option(names = "--days", defaultValue = "MON-FRI", paramLabel = "MON-FRI",
+            description = "Working days: a range MON-FRI or a list MON,TUE,SAT (default ${DEFAULT-VALUE}).")
+    String days;
+    @Option(names = "--shifts", defaultValue = "06:00-14:00,14:00-22:00", paramLabel = "[NAME=]HH:MM-HH:MM,...",
+            description = "Shifts; one may run past midnight (22:00-06:00); unnamed shifts are A, B, C... (default ${DEFAULT-VALUE}).")
+    String shifts;
+    @Option(names = "--breaks", paramLabel = "HH:MM-HH:MM,...", description = "Breaks repeated every working day.")
+    String breaks;
+    @Option(names = "--non-working", paramLabel = "DATE,...", description = "Dates without shifts (holidays).")
+    String nonWorking;
+    @Option(names = "--rate", paramLabel = "PARTS_PER_HOUR", description = "Production rate (default 60 parts per hour).")
+    Double rate;
+    @Option(names = "--cycle-seconds", paramLabel = "S", description = "Cycle time instead of --rate.")
+    Double cycleSeconds;
+    @Option(names = "--start", required = true, paramLabel = "2027-03-01T06:00", description = "Study start, local time; must be inside a shift.")
+    String start;
+
+    @ArgGroup(exclusive = true, multiplicity = "0..1")
+    SpanChoice span;
+
+    /** The span options, one at most (default: one working day). */
+    static final class SpanChoice {
+        @Option(names = "--span-shifts", paramLabel = "S", description = "Span at least S shifts.")
+        Integer shifts;
+        @Option(names = "--span-days", paramLabel = "D", description = "Span D working days.")
+        Integer days;
+        @ArgGroup(exclusive = false)
+        Lots lots;
+        @Option(names = "--until", paramLabel = "DATE", description = "Span every shift starting up to DATE.")
+        String until;
+    }
+
+    /** A span of material lots. */
+    static final class Lots {
+        @Option(names = "--span-lots", required = true, paramLabel = "L", description = "Span L material lots...")
+        int lots;
+        @Option(names = "--lot-parts", required = true, paramLabel = "P", description = "...of P parts each.")
+        long lotParts;
+    }
+
+    @Option(names = "--spacing", defaultValue = "even", paramLabel = "even|random",
+            description = "Even over the running time, or one random time in each interval (default ${DEFAULT-VALUE}).")
+    String spacing;
+    @Option(names = "--seed", paramLabel = "N", description = "Seed of the random spacing (default: a new one, stored in the plan).")
+    Long seed;
+
+    @Override
+    public Integer call() {
+        if (Files.exists(out) && !force) {
+            throw new UserException(PlanOptionMessage.OUT_EXISTS, out);
+        }
+        List<Characteristic> chars = characteristics();
+        ProductionCalendar calendar = calendar();
+        StudySpan studySpan = studySpan();
+        CommonDesign design = CommonDesign.choose(chars, power,
+                subgroupSize == null ? OptionalInt.empty() : OptionalInt.of(subgroupSize),
+                subgroups == null ? OptionalInt.empty() : OptionalInt.of(subgroups));
+        Spacing sp = option("--spacing", () -> Spacing.fromToken(spacing));
+        long s = seed != null ? seed : sp == Spacing.RANDOM ? new SecureRandom().nextInt(1_000_000_000) : 0L;
+        String planId = id != null ? id : String.format(Locale.ROOT, "PR-%d-%04d", studySpan.start().getYear(),
+                new SecureRandom().nextInt(10_000));
+        StudyPlan plan = option("--id", () -> StudyPlan.draft(planId,
+                new Part(part, partNumber, partRevision), new People(author, collector), chars, calendar, studySpan,
+                design.design(), sp, s));
+        PlanFiles.write(out, plan);
+        PrintWriter w = spec.commandLine().getOut();
+        if (rate == null && cycleSeconds == null) {
+            w.println(PlanOptionMessage.RATE_ASSUMED.format(PlanSyntax.number(DEFAULT_RATE)));
+        }
+        w.println(design.reason());
+        w.println(PlanOptionMessage.WROTE.format(out, plan.summary()));
+        w.flush();
+        return 0;
+    }
+
+    private List<Characteristic> characteristics() {
+        IndexKind kind = option("--index", () -> IndexKind.fromToken(index));
+        if (characteristicsCsv != null) {
+            if (characteristic != null || target != null || expected != null || lsl != null || usl != null) {
+                throw new UserException(PlanOptionMessage.BOTH_CHARACTERISTIC_FORMS);
+            }
+            return CharacteristicsCsv.read(characteristicsCsv, kind, confidence);
+        }
+        if (characteristic == null || unit == null || target == null || expected == null) {
+            throw new UserException(PlanOptionMessage.NEED_CHARACTERISTIC);
+        }
+        SpecLimits limits = option("--lsl/--usl", () -> SpecLimits.of(lsl, usl));
+        Requirement req = option("--target", () -> Requirement.of(kind, target, confidence));
+        Expectation exp = option("--expected", () -> expectedCp == null ? Expectation.centred(expected)
+                : Expectation.offCentre(expected, expectedCp));
+        Optional<Gauge> g = gauge == null ? Optional.empty() : Optional.of(option("--gauge", () -> new Gauge(gauge,
+                resolution == null ? Double.NaN : resolution, gaugeSd == null ? OptionalDouble.empty() : OptionalDouble.of(gaugeSd))));
+        return List.of(option("--characteristic", () -> new Characteristic(characteristicId == null ? "C1" : characteristicId,
+                characteristic, unit, nominal == null ? OptionalDouble.empty() : OptionalDouble.of(nominal), limits, g, req, exp)));
+    }
+
+    private ProductionCalendar calendar() {
+        ZoneId z = zone == null ? ZoneId.systemDefault() : option("--zone", () -> ZoneId.of(zone));
+        if (rate != null && cycleSeconds != null) {
+            throw new UserException(PlanOptionMessage.BAD_OPTION, "--rate/--cycle-seconds", "give one of them, not both");
+        }
+        ProductionRate r = option(rate != null ? "--rate" : "--cycle-seconds", () -> cycleSeconds != null
+                ? ProductionRate.cycleSeconds(cycleSeconds) : ProductionRate.perHour(rate != null ? rate : DEFAULT_RATE));
+        return option("--shifts", () -> new ProductionCalendar(z, option("--days", () -> PlanSyntax.days(days)),
+                option("--shifts", () -> PlanSyntax.shifts(shifts)),
+                option("--breaks", () -> PlanSyntax.breaks(breaks)),
+                option("--non-working", () -> PlanSyntax.dates(nonWorking)), r));
+    }
+
+    private StudySpan studySpan() {
+        LocalDateTime t = option("--start", () -> LocalDateTime.parse(start));
+        if (span == null) {
+            return StudySpan.days(t, 1);
+        }
+        if (span.shifts != null) {
+            return option("--span-shifts", () -> StudySpan.shifts(t, span.shifts));
+        }
+        if (span.days != null) {
+            return option("--span-days", () -> StudySpan.days(t, span.days));
+        }
+        if (span.lots != null) {
+            return option("--span-lots", () -> StudySpan.lots(t, span.lots.lots, span.lots.lotParts));
+        }
+        return option("--until", () -> StudySpan.until(t, LocalDate.parse(span.until)));
+    }
+
+    /** Runs a parse or a model constructor; its refusal becomes a message naming the option. */
+    static <T> T option(String name, Supplier<T> make) {
+        try {
+            return make.get();
+        } catch (IllegalArgumentException | DateTimeParseException e) {
+            throw new UserException(PlanOptionMessage.BAD_OPTION, name, e.getMessage());
+        } catch (java.time.DateTimeException e) {
+            throw new UserException(PlanOptionMessage.BAD_OPTION, name, e.getMessage());
+        }
+    }
+}

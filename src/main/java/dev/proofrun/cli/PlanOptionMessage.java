@@ -1,0 +1,30 @@
+package dev.proofrun.cli;
+
+import dev.proofrun.text.MessageKey;
+
+/** Messages of {@code proofrun plan}: option values that cannot be used, and what the command did. */
+public enum PlanOptionMessage implements MessageKey {
+    BAD_OPTION("%s: %s"),
+    NEED_CHARACTERISTIC("give either --characteristics FILE.csv or --characteristic with --unit, --target and --expected"),
+    BOTH_CHARACTERISTIC_FORMS("give either --characteristics FILE.csv or a single --characteristic, not both"),
+    OUT_EXISTS("%s exists; add --force to replace it (the old file is kept as .bak)"),
+    RATE_ASSUMED("no --rate or --cycle-seconds given: assumed %s parts per hour"),
+    WROTE("wrote %s: %s, draft"),
+    ISSUED("issued %s as revision %s (%s)"),
+    ALREADY_ISSUED("%s is already issued as revision %s; nothing changed"),
+    REISSUED("%s was changed after it was issued as revision %s; issued the change as revision %s (it supersedes %s);"
+            + " the file as found is kept as %s.bak"),
+    CHANGED_WARNING("warning: this plan was changed after it was issued as revision %s (its content gives %s);"
+            + " it cannot be used until the change is issued ('proofrun plan issue')");
+
+    private final String english;
+
+    PlanOptionMessage(String english) {
+        this.english = english;
+    }
+
+    @Override
+    public String english() {
+        return english;
+    }
+}
