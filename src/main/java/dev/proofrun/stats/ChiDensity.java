@@ -10,7 +10,10 @@ import org.hipparchus.special.Gamma;
  *
  * <pre>  f(w) = 2·(ν/2)^{ν/2} / Γ(ν/2) · w^{ν−1} · exp(−ν·w²/2),   w &gt; 0,</pre>
  *
- * evaluated in log space (Hipparchus {@link Gamma#logGamma}) so that ν up to 10⁶ does not overflow.
+ * evaluated in log space as
+ * log f(w) = log 2 + ½·log(ν/2) − ½·log(2π) − R(ν/2) + (ν−1)·log w + (ν/2)·(1 − w²), with R the
+ * remainder of Stirling's formula ({@link #stirlingRemainder}), so that large ν neither overflows nor
+ * loses digits to cancellation.
  * The mode is sqrt((ν−1)/ν) for ν &gt; 1 and 0 otherwise.
  *
  * <p>{@link #lower()} and {@link #upper()} bound the effective support: outside them the density is
@@ -35,7 +38,7 @@ final class ChiDensity {
     private ChiDensity(double nu) {
         this.nu = nu;
         double halfNu = 0.5 * nu;
-        this.logNormaliser = Math.log(2) + halfNu * Math.log(halfNu) - Gamma.logGamma(halfNu);
+        this.logNormaliser = Math.log(2) + 0.5 * Math.log(halfNu) - 0.5 * Math.log(2 * Math.PI) - stirlingRemainder(halfNu);
         this.mode = nu > 1 ? Math.sqrt((nu - 1) / nu) : 0;
         this.lower = nu > 1 ? endOfSupport(-1) : 0;
         this.upper = endOfSupport(+1);
@@ -74,6 +77,11 @@ final class ChiDensity {
         return upper;
     }
 
+    /** The length over which f changes appreciably: about its standard deviation, 1/sqrt(2ν). */
+    double scale() {
+        return 1 / Math.sqrt(2 * nu);
+    }
+
     /** P(W ≤ w) = P(χ²_ν ≤ ν·w²) (Commons Statistics chi-square); 0 for w ≤ 0. */
     double cdf(double w) {
         return w > 0 ? chiSquare.cumulativeProbability(nu * w * w) : 0;
@@ -89,7 +97,21 @@ final class ChiDensity {
         if (!(w > 0)) {
             return 0;
         }
-        return Math.exp(logNormaliser + (nu - 1) * Math.log(w) - 0.5 * nu * w * w);
+        return Math.exp(logNormaliser + (nu - 1) * Math.log(w) + 0.5 * nu * (1 - w * w));
+    }
+
+    /**
+     * log Γ(k) − [(k − ½)·log k − k + ½·log(2π)], the remainder of Stirling's formula. For k ≥ 10 from
+     * its asymptotic series (Abramowitz &amp; Stegun 6.1.41; truncation error below 2e-14), which avoids
+     * the cancellation of terms of size k·log k in f for large ν; below 10 from Hipparchus logGamma.
+     */
+    static double stirlingRemainder(double k) {
+        if (k < 10) {
+            return Gamma.logGamma(k) - ((k - 0.5) * Math.log(k) - k + 0.5 * Math.log(2 * Math.PI));
+        }
+        double r = 1 / k;
+        double r2 = r * r;
+        return r * (1.0 / 12 - r2 * (1.0 / 360 - r2 * (1.0 / 1260 - r2 * (1.0 / 1680 - r2 * (1.0 / 1188 - r2 * 691.0 / 360360)))));
     }
 
     /** log f(w) − log f(mode) for ν &gt; 1; log f(w) − the same at w = 1 otherwise. */

@@ -121,14 +121,7 @@ public final class IndexDistribution {
         if (!(b > a)) {
             return inside;
         }
-        double[] breaks = new double[3];
-        int count = 0;
-        breaks[count++] = a;
-        double mode = chi.mode();
-        if (mode > a && mode < b) {
-            breaks[count++] = mode;
-        }
-        breaks[count++] = b;
+        double scale = c != 0 ? Math.min(1 / (3 * Math.abs(c) * rootN), chi.scale()) : chi.scale();
         double threeCp = 3 * trueCp;
         double threeC = 3 * c;
         return inside + Quadrature.integrate(w -> {
@@ -139,7 +132,7 @@ public final class IndexDistribution {
             }
             double far = STANDARD_NORMAL.cumulativeProbability(-rootN * (r + offset));
             return (near - far) * chi.density(w);
-        }, breaks, count, TOLERANCE);
+        }, a, b, scale, TOLERANCE);
     }
 
     static void checkFinite(String name, double value) {

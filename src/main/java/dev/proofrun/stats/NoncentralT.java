@@ -15,7 +15,8 @@ import org.apache.commons.statistics.distribution.NormalDistribution;
  * (the representation used, for instance, by Owen 1968, Technometrics 10:445–478). The integral runs
  * over the support of f_W found by {@link ChiDensity} (density above e^{−40} of its mode). Where the
  * normal argument is beyond ±{@value #TRANSITION} the normal factor is 0 or 1 to 1e-16 and that part is a
- * chi-square probability; the band in between is split at the mode of f_W and integrated by
+ * chi-square probability; the band in between is cut into panels of a few units of the integrand's scale
+ * and integrated by
  * adaptive Gauss–Legendre ({@link Quadrature}) to an absolute tolerance of {@value #TOLERANCE}. Both
  * tails are integrated directly, so {@link #sf} keeps its relative accuracy far into the upper tail.
  *
@@ -138,19 +139,12 @@ public final class NoncentralT {
         if (!(b > a)) {
             return outside;
         }
-        double[] breaks = new double[3];
-        int count = 0;
-        breaks[count++] = a;
-        double mode = chi.mode();
-        if (mode > a && mode < b) {
-            breaks[count++] = mode;
-        }
-        breaks[count++] = b;
+        double scale = Math.min(1 / Math.abs(t), chi.scale());
         return outside + Quadrature.integrate(w -> {
             double x = t * w - ncp;
             double phi = upper ? STANDARD_NORMAL.survivalProbability(x) : STANDARD_NORMAL.cumulativeProbability(x);
             return phi == 0 ? 0 : phi * chi.density(w);
-        }, breaks, count, TOLERANCE);
+        }, a, b, scale, TOLERANCE);
     }
 
     private static void check(double t, double df, double ncp) {
