@@ -40,4 +40,14 @@ class CommonDesignTest {
             assertTrue(r.subgroups() <= d.design().subgroups());
         }
     }
+
+    @Test
+    void oneCharacteristicGetsTheDesignersRecommendation() {
+        Characteristic c = chars.get(0);
+        DesignRow rec = StudyDesigner.design(DesignRequest.of(c.limits().sides(), c.requirement(), c.expectation())
+                .withPower(0.9)).recommended();
+        CommonDesign d = CommonDesign.choose(List.of(c), 0.9, OptionalInt.empty(), OptionalInt.empty());
+        assertEquals(rec.subgroupSize(), d.design().subgroupSize());
+        assertEquals(rec.subgroups(), d.design().subgroups());
+    }
 }
