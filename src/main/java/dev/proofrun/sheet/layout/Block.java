@@ -1,0 +1,36 @@
+package dev.proofrun.sheet.layout;
+
+/**
+ * Something laid out top to bottom that must not be split across pages: a paragraph, a table row, a
+ * chart. {@link Flow} asks its height for the width available and then draws it.
+ */
+public interface Block {
+
+    /** Height in points when laid out at the given width. */
+    float height(float width);
+
+    /**
+     * Draws the block.
+     *
+     * @param canvas where to draw
+     * @param left   left edge, points from the page's left
+     * @param top    top edge, points from the page's bottom
+     * @param width  width available (the same as passed to {@link #height})
+     */
+    void draw(Canvas canvas, float left, float top, float width);
+
+    /** An empty block of a fixed height: vertical space. */
+    static Block space(float height) {
+        return new Block() {
+            @Override
+            public float height(float width) {
+                return height;
+            }
+
+            @Override
+            public void draw(Canvas canvas, float left, float top, float width) {
+                // nothing to draw
+            }
+        };
+    }
+}
