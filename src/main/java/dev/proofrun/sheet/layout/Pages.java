@@ -154,9 +154,9 @@ public final class Pages implements AutoCloseable {
         float titleBase = top - bold.ascent(TITLE_SIZE);
         float identityWidth = bold.width(heading.identity(), 10f);
         float titleRoom = right - left - identityWidth - 12;
-        c.text(bold, TITLE_SIZE, left, titleBase, fit(heading.title(), bold, TITLE_SIZE, titleRoom));
+        c.text(bold, TITLE_SIZE, left, titleBase, Text.fit(heading.title(), bold, TITLE_SIZE, titleRoom));
         c.textRight(bold, 10f, right, titleBase, heading.identity());
-        c.text(regular, SMALL + 1, left, titleBase - 13, fit(heading.subtitle(), regular, SMALL + 1, right - left));
+        c.text(regular, SMALL + 1, left, titleBase - 13, Text.fit(heading.subtitle(), regular, SMALL + 1, right - left));
         c.pen(Pen.RULE);
         float rule = top - HEAD + 6;
         c.line(left, rule, right, rule);
@@ -168,7 +168,7 @@ public final class Pages implements AutoCloseable {
         float footBase = MARGIN + 2;
         c.textRight(bold, SMALL + 1, right, footBase, pageText);
         float room = right - left - bold.width(pageText, SMALL + 1) - 12;
-        c.text(regular, SMALL, left, footBase, fit(heading.footnote(), regular, SMALL, room));
+        c.text(regular, SMALL, left, footBase, Text.fit(heading.footnote(), regular, SMALL, room));
     }
 
     private void draftMark(Canvas c) {
@@ -184,20 +184,6 @@ public final class Pages implements AutoCloseable {
         c.fillGray(0.85f);
         c.textRotated(bold, size, x, y, angle, word);
         c.fillGray(0);
-    }
-
-    /** The text shortened with an ellipsis so that it fits the width. */
-    static String fit(String text, Typeface face, float size, float width) {
-        String s = face.printable(text);
-        if (face.width(s, size) <= width) {
-            return s;
-        }
-        String dots = "\u2026";
-        int end = s.length();
-        while (end > 0 && face.width(s.substring(0, end) + dots, size) > width) {
-            end--;
-        }
-        return s.substring(0, end) + dots;
     }
 
     private void closeCanvas() {

@@ -68,4 +68,22 @@ public final class Text {
         }
         lines.add(line.toString());
     }
+
+    /**
+     * The text shortened with an ellipsis so that it fits the width (whole text when it fits).
+     *
+     * @return the printable text, shortened if needed
+     */
+    public static String fit(String text, Typeface face, float size, float width) {
+        String s = face.printable(text);
+        if (face.width(s, size) <= width) {
+            return s;
+        }
+        String dots = "\u2026";
+        int end = s.length();
+        while (end > 0 && face.width(s.substring(0, end) + dots, size) > width) {
+            end--;
+        }
+        return s.substring(0, end) + dots;
+    }
 }

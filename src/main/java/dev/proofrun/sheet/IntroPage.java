@@ -1,0 +1,135 @@
+package dev.proofrun.sheet;
+
+import dev.proofrun.plan.Characteristic;
+import dev.proofrun.plan.StudyPlan;
+import dev.proofrun.schedule.Slot;
+import dev.proofrun.sheet.layout.Block;
+import dev.proofrun.sheet.layout.Flow;
+import dev.proofrun.sheet.layout.Framed;
+import dev.proofrun.sheet.layout.Item;
+import dev.proofrun.sheet.layout.Pages;
+import dev.proofrun.sheet.layout.Paragraph;
+import dev.proofrun.sheet.layout.Pen;
+import dev.proofrun.sheet.layout.TextTable;
+import dev.proofrun.sheet.layout.TextTable.Column;
+import dev.proofrun.sheet.layout.Typeface;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+
+/**
+ * The opening pages of the collection sheet, in the order a collector reads them: what this is, what to
+ * measure, how often, how to collect, what the study can and cannot show, and who signs.
+ */
+final class IntroPage {
+
+    private static final float BODY = 9f;
+    private static final float HEAD = 11f;
+
+    private final StudyPlan plan;
+    private final Typeface regular;
+    private final Typeface bold;
+
+    IntroPage(StudyPlan plan, Pages pages) {
+        this.plan = plan;
+        this.regular = pages.regular();
+        this.bold = pages.bold();
+    }
+
+    void place(Flow flow, boolean draft) {
+        flow.place(Paragraph.of("Collection plan", bold, 18));
+        flow.gap(4);
+        String partLine = "Part: " + plan.part().name()
+                + (plan.part().number().isBlank() ? "" : "   No. " + plan.part().number())
+                + (plan.part().revision().isBlank() ? "" : "   Rev. " + plan.part().revision());
+        flow.place(Paragraph.of(partLine, bold, 10));
+        String state = plan.revision().map(r -> "issued, revision " + r)
+                .orElse("DRAFT: not issued; readings collected against a draft cannot be graded");
+        flow.place(Paragraph.of("Plan " + plan.id() + " (" + state + ")", regular, BODY));
+        flow.place(Paragraph.of("Prepared by: " + orDash(plan.people().author()) + "      To be collected by: "
+                + orDash(plan.people().collector()), regular, BODY));
+        if (draft && !plan.isIssued()) {
+            flow.gap(2);
+            flow.place(Paragraph.of("This sheet is marked DRAFT. Use it to review the plan, not to collect data.",
+                    bold, BODY));
+        }
+
+        TextTable table = characteristicTable();
+        flow.gap(10);
+        flow.placeTogether(List.of(Paragraph.of("What to measure", bold, HEAD), Block.space(3)));
+        flow.startTable(table.header());
+        for (Characteristic c : plan.characteristics()) {
+            int d = Values.decimals(c);
+            flow.place(table.row(c.id(), c.name(), c.unit(), Values.number(c.nominal(), d), Values.tolerance(c),
+                    c.gauge().map(g -> g.name()).orElse("not named"), Values.resolution(c)));
+        }
+        flow.endTable();
+
+        List<Slot> slots = plan.schedule().slots();
+        Slot first = slots.get(0);
+        Slot last = slots.get(slots.size() - 1);
+        int n = plan.design().subgroupSize();
+        String often = String.format(Locale.ROOT,
+                "Subgroup: %s at every slot. %s. %d slots, from %s %s %s to %s %s %s (times in %s).",
+                n == 1 ? "1 part" : n + " consecutive parts", capitalised(plan.summary()), slots.size(),
+                first.id(), Values.DAY.format(first.start()), Values.CLOCK.format(first.start()), last.id(),
+                Values.DAY.format(last.start()), Values.CLOCK.format(last.start()), plan.calendar().zone().getId());
+        section(flow, "How often", List.of(Paragraph.of(often, regular, BODY)));
+
+        List<Block> items = new ArrayList<>();
+        List<String> steps = SheetWording.instructions(n);
+        for (int i = 0; i < steps.size(); i++) {
+            items.add(new Item((i + 1) + ".", new Paragraph(steps.get(i), regular, BODY, 1.3f, 0), 14));
+            items.add(Block.space(2));
+        }
+        flow.gap(10);
+        flow.placeTogether(List.of(Paragraph.of("How to collect", bold, HEAD), Block.space(3), items.get(0)));
+        for (Block b : items.subList(1, items.size())) {
+            flow.place(b);
+        }
+
+        flow.gap(10);
+        List<Block> caution = new ArrayList<>();
+        caution.add(Paragraph.of("What a capability study shows, and what it does not", bold, BODY));
+        caution.add(Block.space(2));
+        for (String line : SheetWording.CAUTION) {
+            caution.add(Paragraph.of(line, regular, BODY));
+            caution.add(Block.space(2));
+        }
+        flow.place(new Framed(caution, 6f, Pen.RULE, 1f));
+
+        flow.gap(10);
+        TextTable sign = TextTable.of(List.of(Column.left("Who", 3), Column.left("Name", 3),
+                Column.left("Signature", 3), Column.left("Date", 2)), regular, bold, BODY);
+        List<Block> signing = new ArrayList<>(List.of(Paragraph.of("Signatures", bold, HEAD), Block.space(3),
+                sign.header()));
+        for (String who : List.of("Plan prepared by", "Plan received by (collector)", "Readings returned by",
+                "Readings checked by")) {
+            signing.add(sign.row(who + "\n ", "", "", ""));
+        }
+        flow.placeTogether(signing);
+    }
+
+    private TextTable characteristicTable() {
+        return TextTable.of(List.of(Column.left("Id", 1.1f), Column.left("Characteristic", 3f),
+                Column.left("Unit", 0.9f), Column.right("Nominal", 1.4f), Column.left("Tolerance", 2.4f),
+                Column.left("Gauge", 2.4f), Column.right("Resolution", 1.4f)), regular, bold, BODY - 0.5f);
+    }
+
+    /** A heading kept with the first block under it; the rest flows. */
+    private void section(Flow flow, String title, List<Block> body) {
+        flow.gap(10);
+        flow.placeTogether(List.of(Paragraph.of(title, bold, HEAD), Block.space(3), body.get(0)));
+        for (Block b : body.subList(1, body.size())) {
+            flow.place(b);
+        }
+    }
+
+    private static String orDash(String s) {
+        return s == null || s.isBlank() ? "\u2014" : s;
+    }
+
+    private static String capitalised(String s) {
+        return s.isEmpty() ? s : Character.toUpperCase(s.charAt(0)) + s.substring(1);
+    }
+}

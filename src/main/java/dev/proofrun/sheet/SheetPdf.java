@@ -1,0 +1,54 @@
+package dev.proofrun.sheet;
+
+import dev.proofrun.plan.StudyPlan;
+import dev.proofrun.schedule.Slot;
+import dev.proofrun.sheet.layout.Flow;
+import dev.proofrun.sheet.layout.PageHeading;
+import dev.proofrun.sheet.layout.Pages;
+import dev.proofrun.sheet.layout.Paper;
+import java.io.OutputStream;
+
+/**
+ * Writes the printed collection sheet: the opening pages ({@link IntroPage}), then the slot table
+ * ({@link SlotTable}) from a new page. Every page carries the part, the plan id with its revision and
+ * "page x of y"; a draft is marked DRAFT across every page.
+ */
+public final class SheetPdf {
+
+    private SheetPdf() {
+    }
+
+    /**
+     * Writes the sheet. The caller decides whether a draft may be printed ({@link SheetFiles} refuses it
+     * without {@code --draft}); here an unissued plan is always marked DRAFT.
+     *
+     * @param plan  the plan
+     * @param paper A4 or Letter
+     * @param out   where to write; not closed
+     */
+    public static void write(StudyPlan plan, Paper paper, OutputStream out) {
+        boolean draft = !plan.isIssued();
+        String identity = "Plan " + plan.id() + " @ " + plan.revision().orElse("DRAFT");
+        PageHeading heading = new PageHeading(plan.part().name() + partSuffix(plan), "Collection sheet", identity,
+                "proofrun collection sheet. Fill-in file: " + plan.id() + "-fill-in.csv / .xlsx. "
+                        + "Keep the plan, slot and characteristic columns as printed.", draft);
+        try (Pages pages = Pages.open(paper, heading)) {
+            Flow flow = new Flow(pages);
+            new IntroPage(plan, pages).place(flow, draft);
+            SlotTable table = new SlotTable(plan.characteristics(), plan.design().subgroupSize(), pages.regular(),
+                    pages.bold(), flow.width());
+            flow.newPage();
+            flow.startTable(table.header());
+            for (Slot slot : plan.schedule().slots()) {
+                flow.place(table.slot(slot));
+            }
+            flow.endTable();
+            pages.write(out);
+        }
+    }
+
+    private static String partSuffix(StudyPlan plan) {
+        String number = plan.part().number();
+        return number == null || number.isBlank() ? "" : "  (" + number + ")";
+    }
+}

@@ -1,0 +1,51 @@
+package dev.proofrun.sheet;
+
+import java.util.List;
+import java.util.Locale;
+
+/**
+ * The words of the collection sheet: the instructions for the people who take the readings and the
+ * caution about what a capability study shows. Plain sentences, one idea each, in the order a collector
+ * needs them.
+ */
+final class SheetWording {
+
+    /** The caution shown wherever a study's outcome is discussed (team rule; see DOMAIN.md "Cautions"). */
+    static final List<String> CAUTION = List.of(
+            "A capability study gives a statistical statement under assumptions: a stable process, independent "
+                    + "readings, a fitting distribution model and a capable gauge.",
+            "Its result does not replace the customer's requirements, the applicable standards and local codes, "
+                    + "licensed professional practice, or the extra controls that safety-critical characteristics "
+                    + "need.");
+
+    private SheetWording() {
+    }
+
+    /**
+     * The numbered instructions.
+     *
+     * @param n subgroup size
+     */
+    static List<String> instructions(int n) {
+        String parts = n == 1 ? "one part" : String.format(Locale.ROOT, "%d consecutive parts", n);
+        String readings = n == 1 ? "its reading" : String.format(Locale.ROOT, "the %d readings", n);
+        return List.of(
+                String.format(Locale.ROOT, "At each slot, take %s as they come off the process, inside the slot's "
+                        + "window. Do not pick parts, do not skip parts.", parts),
+                String.format(Locale.ROOT, "Measure every characteristic listed above on each part and write %s in "
+                        + "the boxes 1 to %d of its line, in the order the parts were made.", readings, n),
+                "Write each reading to the gauge's resolution, exactly as the gauge shows it: no rounding, no "
+                        + "dropped digits, no units in the boxes.",
+                "Write the time the parts were taken (hh:mm), the material lot and your initials for every slot.",
+                "Run the process as usual. Do not adjust, re-set or tune it because of the study; a change that "
+                        + "production needs anyway goes in the remark with its time.",
+                "Slot missed (no production, machine down, too late for the window): leave its boxes empty and "
+                        + "write the reason in the remark. Do not make it up later.",
+                "Part scrapped, damaged or lost before it was measured: leave its box empty, write which box and "
+                        + "why in the remark. Do not replace it with another part.",
+                "A reading that looks wrong: measure again, write the value you trust and note it in the remark. "
+                        + "Never erase: strike through and write beside.",
+                "Return this sheet and the fill-in file (CSV or XLSX) unchanged in layout: the prefilled plan, "
+                        + "slot, characteristic and planned columns must stay as they are.");
+    }
+}

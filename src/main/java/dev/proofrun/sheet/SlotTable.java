@@ -1,0 +1,214 @@
+package dev.proofrun.sheet;
+
+import dev.proofrun.plan.Characteristic;
+import dev.proofrun.schedule.Slot;
+import dev.proofrun.sheet.layout.Block;
+import dev.proofrun.sheet.layout.Canvas;
+import dev.proofrun.sheet.layout.Pen;
+import dev.proofrun.sheet.layout.Text;
+import dev.proofrun.sheet.layout.TextTable;
+import dev.proofrun.sheet.layout.Typeface;
+import java.util.List;
+import java.util.Locale;
+
+/**
+ * The slot table of the collection sheet: one block per slot, one band per characteristic inside it.
+ *
+ * <p><b>Why one block per slot, not one table per characteristic, and not all readings in one row.</b> At a
+ * slot a collector takes n parts and measures every characteristic on them at once; the sheet follows that
+ * work: the slot's id, planned time and window, shift, time taken, lot, operator and remark appear once, and
+ * each characteristic gets its own band of n boxes below the previous one. The width of a box therefore
+ * does not depend on the number of characteristics: boxes stay at least {@value #MIN_BOX} pt (12 mm) wide
+ * and {@value #LINE} pt (6.7 mm) tall, enough to write a six-digit reading by hand, and no text on the sheet
+ * is set below 7.5 pt. Putting all characteristics' readings in one row would shrink each box below
+ * handwriting size as soon as there are more than one or two characteristics; a table per characteristic
+ * would make the collector page back and forth for one subgroup and repeat time, lot and operator per
+ * characteristic (and give them the chance to disagree). When n boxes do not fit across the page at the
+ * minimum width, a characteristic's band takes two or more lines of boxes, numbered inside the box.
+ * A block never splits across pages ({@link dev.proofrun.sheet.layout.Flow}).
+ */
+final class SlotTable {
+
+    /** Minimum box width for one handwritten reading (12 mm). */
+    static final float MIN_BOX = 34f;
+    /** Boxes wider than this (20 mm) give their room to the remark. */
+    static final float MAX_BOX = 56f;
+    /** Height of one line of boxes (6.7 mm). */
+    static final float LINE = 19f;
+    /** Smallest slot block: room for the slot cell's three lines. */
+    static final float MIN_BLOCK = 38f;
+
+    static final float SLOT_W = 84f;
+    static final float CHAR_W = 58f;
+    static final float TAKEN_W = 44f;
+    static final float LOT_W = 46f;
+    static final float OPERATOR_W = 46f;
+    static final float REMARK_MIN = 52f;
+
+    private static final float PAD = 3f;
+    private static final float ID_SIZE = 10f;
+    private static final float TEXT = 8f;
+    private static final float SMALL = 7.5f;
+
+    private final List<Characteristic> characteristics;
+    private final int n;
+    private final Typeface regular;
+    private final Typeface bold;
+    private final float width;
+    private final float box;
+    private final int perLine;
+    private final int linesPerBand;
+    private final float remark;
+
+    SlotTable(List<Characteristic> characteristics, int n, Typeface regular, Typeface bold, float width) {
+        this.characteristics = characteristics;
+        this.n = n;
+        this.regular = regular;
+        this.bold = bold;
+        this.width = width;
+        float fixed = SLOT_W + CHAR_W + TAKEN_W + LOT_W + OPERATOR_W + REMARK_MIN;
+        float area = width - fixed;
+        if (area < MIN_BOX) {
+            throw new IllegalArgumentException(String.format(Locale.ROOT, "page too narrow for the slot table: %.0f pt", width));
+        }
+        this.perLine = Math.min(n, (int) Math.floor(area / MIN_BOX));
+        this.linesPerBand = (n + perLine - 1) / perLine;
+        this.box = Math.min(MAX_BOX, area / perLine);
+        this.remark = width - (SLOT_W + CHAR_W + TAKEN_W + LOT_W + OPERATOR_W) - box * perLine;
+    }
+
+    /** Height of every slot block. */
+    float blockHeight() {
+        return Math.max(characteristics.size() * linesPerBand * LINE, MIN_BLOCK);
+    }
+
+    /** Boxes across one line. */
+    int boxesPerLine() {
+        return perLine;
+    }
+
+    /** The header block, repeated on every page of the table. */
+    Block header() {
+        return new Block() {
+            @Override
+            public float height(float w) {
+                return 27f;
+            }
+
+            @Override
+            public void draw(Canvas c, float left, float top, float w) {
+                float h = height(w);
+                c.fillRect(left, top - h, width, h, TextTable.HEADER_GRAY);
+                c.pen(Pen.HAIR);
+                c.rect(left, top - h, width, h);
+                float b1 = top - 11;
+                float b2 = top - 22;
+                float x = left;
+                label(c, x, SLOT_W, b1, b2, "Slot", "planned, window");
+                x += SLOT_W;
+                label(c, x, CHAR_W, b1, b2, "Char.", "limits");
+                x += CHAR_W;
+                float readingsW = box * perLine;
+                c.line(x, top, x, top - h);
+                if (linesPerBand == 1) {
+                    c.textCentred(bold, TEXT, x + readingsW / 2, b1, "Readings, part 1 to " + n);
+                    for (int i = 0; i < perLine; i++) {
+                        c.textCentred(bold, TEXT, x + box * i + box / 2, b2, Integer.toString(i + 1));
+                    }
+                } else {
+                    c.textCentred(bold, TEXT, x + readingsW / 2, b1, "Readings, part 1 to " + n);
+                    c.textCentred(regular, TEXT, x + readingsW / 2, b2, "numbered in the box");
+                }
+                x += readingsW;
+                label(c, x, TAKEN_W, b1, b2, "Taken", "hh:mm");
+                x += TAKEN_W;
+                label(c, x, LOT_W, b1, b2, "Lot", "");
+                x += LOT_W;
+                label(c, x, OPERATOR_W, b1, b2, "Operator", "initials");
+                x += OPERATOR_W;
+                label(c, x, remark, b1, b2, "Remark", "missed, scrapped, ...");
+            }
+        };
+    }
+
+    private void label(Canvas c, float x, float w, float b1, float b2, String head, String hint) {
+        c.line(x, b1 + 11, x, b2 - 5);
+        c.text(bold, TEXT, x + PAD, b1, head);
+        if (!hint.isEmpty()) {
+            c.text(regular, SMALL, x + PAD, b2, Text.fit(hint, regular, SMALL, w - 2 * PAD));
+        }
+    }
+
+    /** The block of one slot. */
+    Block slot(Slot slot) {
+        return new Block() {
+            @Override
+            public float height(float w) {
+                return blockHeight();
+            }
+
+            @Override
+            public void draw(Canvas c, float left, float top, float w) {
+                drawSlot(c, slot, left, top);
+            }
+        };
+    }
+
+    private void drawSlot(Canvas c, Slot slot, float left, float top) {
+        float h = blockHeight();
+        float bottom = top - h;
+        c.pen(Pen.HAIR);
+        c.rect(left, bottom, width, h);
+        // slot cell
+        float base = top - PAD - bold.ascent(ID_SIZE);
+        c.text(bold, ID_SIZE, left + PAD, base, slot.id());
+        c.textRight(regular, TEXT, left + SLOT_W - PAD, base, Text.fit(slot.shift(), regular, TEXT, SLOT_W - 40));
+        base -= 11;
+        c.text(regular, TEXT, left + PAD, base, Values.DAY.format(slot.start()));
+        base -= 10.5f;
+        String window = Values.CLOCK.format(slot.start().minusMinutes(slot.windowMinutes())) + "\u2013"
+                + Values.CLOCK.format(slot.start().plusMinutes(slot.windowMinutes()));
+        float tw = c.text(bold, TEXT + 1, left + PAD, base, Values.CLOCK.format(slot.start()));
+        c.text(regular, SMALL, left + PAD + tw + 3, base, window);
+        float x = left + SLOT_W;
+        c.line(x, top, x, bottom);
+        // characteristic bands
+        float band = h / characteristics.size();
+        float readingsLeft = x + CHAR_W;
+        for (int k = 0; k < characteristics.size(); k++) {
+            Characteristic ch = characteristics.get(k);
+            float bandTop = top - k * band;
+            if (k > 0) {
+                c.line(x, bandTop, readingsLeft + box * perLine, bandTop);
+            }
+            float b = bandTop - PAD - bold.ascent(TEXT);
+            c.text(bold, TEXT, x + PAD, b, Text.fit(ch.id() + (ch.unit().isEmpty() ? "" : " " + ch.unit()), bold, TEXT,
+                    CHAR_W - 2 * PAD));
+            String range = Values.range(ch);
+            if (band >= 17 && regular.width(range, SMALL) <= CHAR_W - 2 * PAD) {
+                // the limits as a reminder; left out rather than cut when they do not fit (page 1 has them)
+                c.text(regular, SMALL, x + PAD, b - 8.5f, range);
+            }
+            float line = band / linesPerBand;
+            for (int i = 0; i < n; i++) {
+                int row = i / perLine;
+                int col = i % perLine;
+                float bx = readingsLeft + col * box;
+                float by = bandTop - (row + 1) * line;
+                c.rect(bx, by, box, line);
+                if (linesPerBand > 1) {
+                    c.text(regular, SMALL, bx + 2, by + line - SMALL, Integer.toString(i + 1));
+                }
+            }
+        }
+        c.line(readingsLeft, top, readingsLeft, bottom);
+        x = readingsLeft + box * perLine;
+        for (float w : new float[] {TAKEN_W, LOT_W, OPERATOR_W}) {
+            c.line(x, top, x, bottom);
+            x += w;
+        }
+        c.line(x, top, x, bottom);
+        c.pen(Pen.RULE);
+        c.line(left, top, left + width, top);
+    }
+}
