@@ -19,6 +19,7 @@ import picocli.CommandLine.Command;
             CommandLine.HelpCommand.class,
             SizeCommand.class,
             PlanCommand.class,
+            SheetCommand.class,
         })
 public final class ProofrunCommand implements Runnable {
 

@@ -12,13 +12,14 @@ import org.apache.poi.ss.usermodel.DataValidationConstraint;
 import org.apache.poi.ss.usermodel.DataValidationHelper;
 import org.apache.poi.ss.usermodel.Font;
 import org.apache.poi.ss.util.CellRangeAddressList;
-import org.apache.poi.xssf.usermodel.XSSFCell;
-import org.apache.poi.xssf.usermodel.XSSFRow;
-import org.apache.poi.xssf.usermodel.XSSFSheet;
-import org.apache.poi.xssf.usermodel.XSSFWorkbook;
+import org.apache.poi.ss.usermodel.Cell;
+import org.apache.poi.ss.usermodel.Row;
+import org.apache.poi.xssf.streaming.SXSSFSheet;
+import org.apache.poi.xssf.streaming.SXSSFWorkbook;
 
 /**
- * Writes the fill-in workbook (Apache POI, XLSX).
+ * Writes the fill-in workbook (Apache POI, XLSX). Rows are streamed ({@code SXSSFWorkbook}, a window of
+ * {@value #WINDOW} rows in memory), which keeps a plan of thousands of rows fast.
  *
  * <p>First sheet {@value #FILL_IN}: the columns of {@link FillInColumns}, the header row frozen, every cell
  * a string cell except the readings. The sheet is protected without a password: the four prefilled columns
@@ -41,6 +42,9 @@ public final class FillInXlsx {
     /** Readings beyond ±1e300 are refused by the validation: in practice, "any decimal number". */
     private static final String READING_BOUND = "1E+300";
 
+    /** Rows kept in memory while streaming. */
+    private static final int WINDOW = 200;
+
     private FillInXlsx() {
     }
 
@@ -50,32 +54,36 @@ public final class FillInXlsx {
      * @throws IOException if writing fails
      */
     public static void write(StudyPlan plan, OutputStream out) throws IOException {
-        try (XSSFWorkbook wb = new XSSFWorkbook()) {
+        SXSSFWorkbook wb = new SXSSFWorkbook(WINDOW);
+        try {
             Styles styles = new Styles(wb);
             fillIn(plan, wb.createSheet(FILL_IN), styles);
             PlanSummarySheet.write(plan, wb.createSheet(SUMMARY), styles.header, styles.prefilled, styles.prefilledQuoted);
             wb.setActiveSheet(0);
             wb.write(out);
+        } finally {
+            wb.dispose();
+            wb.close();
         }
         out.flush();
     }
 
-    private static void fillIn(StudyPlan plan, XSSFSheet sheet, Styles styles) {
+    private static void fillIn(StudyPlan plan, SXSSFSheet sheet, Styles styles) {
         int n = plan.design().subgroupSize();
         List<String> header = FillInColumns.header(n);
-        XSSFRow head = sheet.createRow(0);
+        Row head = sheet.createRow(0);
         for (int i = 0; i < header.size(); i++) {
-            XSSFCell cell = head.createCell(i);
+            Cell cell = head.createCell(i);
             cell.setCellValue(header.get(i));
             cell.setCellStyle(styles.header);
         }
         int r = 1;
         for (Slot slot : plan.schedule().slots()) {
             for (Characteristic c : plan.characteristics()) {
-                XSSFRow row = sheet.createRow(r++);
+                Row row = sheet.createRow(r++);
                 List<String> pre = FillInColumns.prefilled(plan, slot, c);
                 for (int i = 0; i < pre.size(); i++) {
-                    XSSFCell cell = row.createCell(i);
+                    Cell cell = row.createCell(i);
                     cell.setCellValue(pre.get(i));
                     cell.setCellStyle(CellText.risky(pre.get(i)) ? styles.prefilledQuoted : styles.prefilled);
                 }
@@ -109,7 +117,7 @@ public final class FillInXlsx {
     }
 
     /** Protection without a password; people may still resize columns and select any cell. */
-    static void protect(XSSFSheet sheet) {
+    static void protect(SXSSFSheet sheet) {
         sheet.enableLocking();
         sheet.lockFormatColumns(false);
         sheet.lockFormatRows(false);
@@ -125,7 +133,7 @@ public final class FillInXlsx {
         final CellStyle reading;
         final CellStyle editableText;
 
-        Styles(XSSFWorkbook wb) {
+        Styles(SXSSFWorkbook wb) {
             short text = wb.createDataFormat().getFormat("@");
             Font bold = wb.createFont();
             bold.setBold(true);

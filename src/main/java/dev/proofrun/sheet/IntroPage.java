@@ -37,7 +37,7 @@ final class IntroPage {
     }
 
     void place(Flow flow, boolean draft) {
-        flow.place(Paragraph.of("Collection plan", bold, 18));
+        flow.place(Paragraph.of("Collection plan", bold, 16));
         flow.gap(4);
         String partLine = "Part: " + plan.part().name()
                 + (plan.part().number().isBlank() ? "" : "   No. " + plan.part().number())
@@ -55,7 +55,7 @@ final class IntroPage {
         }
 
         TextTable table = characteristicTable();
-        flow.gap(10);
+        flow.gap(8);
         flow.placeTogether(List.of(Paragraph.of("What to measure", bold, HEAD), Block.space(3)));
         flow.startTable(table.header());
         for (Characteristic c : plan.characteristics()) {
@@ -80,15 +80,15 @@ final class IntroPage {
         List<String> steps = SheetWording.instructions(n);
         for (int i = 0; i < steps.size(); i++) {
             items.add(new Item((i + 1) + ".", new Paragraph(steps.get(i), regular, BODY, 1.3f, 0), 14));
-            items.add(Block.space(2));
+            items.add(Block.space(1));
         }
-        flow.gap(10);
+        flow.gap(8);
         flow.placeTogether(List.of(Paragraph.of("How to collect", bold, HEAD), Block.space(3), items.get(0)));
         for (Block b : items.subList(1, items.size())) {
             flow.place(b);
         }
 
-        flow.gap(10);
+        flow.gap(8);
         List<Block> caution = new ArrayList<>();
         caution.add(Paragraph.of("What a capability study shows, and what it does not", bold, BODY));
         caution.add(Block.space(2));
@@ -98,14 +98,14 @@ final class IntroPage {
         }
         flow.place(new Framed(caution, 6f, Pen.RULE, 1f));
 
-        flow.gap(10);
+        flow.gap(8);
         TextTable sign = TextTable.of(List.of(Column.left("Who", 3), Column.left("Name", 3),
                 Column.left("Signature", 3), Column.left("Date", 2)), regular, bold, BODY);
         List<Block> signing = new ArrayList<>(List.of(Paragraph.of("Signatures", bold, HEAD), Block.space(3),
                 sign.header()));
         for (String who : List.of("Plan prepared by", "Plan received by (collector)", "Readings returned by",
                 "Readings checked by")) {
-            signing.add(sign.row(who + "\n ", "", "", ""));
+            signing.add(sign.row(24f, List.of(who, "", "", "")));
         }
         flow.placeTogether(signing);
     }
@@ -118,7 +118,7 @@ final class IntroPage {
 
     /** A heading kept with the first block under it; the rest flows. */
     private void section(Flow flow, String title, List<Block> body) {
-        flow.gap(10);
+        flow.gap(8);
         flow.placeTogether(List.of(Paragraph.of(title, bold, HEAD), Block.space(3), body.get(0)));
         for (Block b : body.subList(1, body.size())) {
             flow.place(b);

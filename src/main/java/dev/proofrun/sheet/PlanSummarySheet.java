@@ -5,9 +5,9 @@ import dev.proofrun.plan.StudyPlan;
 import dev.proofrun.schedule.Slot;
 import java.util.List;
 import org.apache.poi.ss.usermodel.CellStyle;
-import org.apache.poi.xssf.usermodel.XSSFCell;
-import org.apache.poi.xssf.usermodel.XSSFRow;
-import org.apache.poi.xssf.usermodel.XSSFSheet;
+import org.apache.poi.ss.usermodel.Cell;
+import org.apache.poi.ss.usermodel.Row;
+import org.apache.poi.xssf.streaming.SXSSFSheet;
 
 /** The second sheet of the fill-in workbook: the plan in brief, protected. */
 final class PlanSummarySheet {
@@ -15,7 +15,7 @@ final class PlanSummarySheet {
     private PlanSummarySheet() {
     }
 
-    static void write(StudyPlan plan, XSSFSheet sheet, CellStyle header, CellStyle plain, CellStyle quoted) {
+    static void write(StudyPlan plan, SXSSFSheet sheet, CellStyle header, CellStyle plain, CellStyle quoted) {
         Writer w = new Writer(sheet, plain, quoted);
         List<Slot> slots = plan.schedule().slots();
         w.row(header, "Plan", plan.id());
@@ -53,21 +53,21 @@ final class PlanSummarySheet {
     }
 
     private static final class Writer {
-        private final XSSFSheet sheet;
+        private final SXSSFSheet sheet;
         private final CellStyle plain;
         private final CellStyle quoted;
         private int next;
 
-        Writer(XSSFSheet sheet, CellStyle plain, CellStyle quoted) {
+        Writer(SXSSFSheet sheet, CellStyle plain, CellStyle quoted) {
             this.sheet = sheet;
             this.plain = plain;
             this.quoted = quoted;
         }
 
         void row(CellStyle style, String... cells) {
-            XSSFRow row = sheet.createRow(next++);
+            Row row = sheet.createRow(next++);
             for (int i = 0; i < cells.length; i++) {
-                XSSFCell cell = row.createCell(i);
+                Cell cell = row.createCell(i);
                 String value = cells[i] == null ? "" : cells[i];
                 cell.setCellValue(value);
                 cell.setCellStyle(CellText.risky(value) ? quoted : (style != null ? style : plain));

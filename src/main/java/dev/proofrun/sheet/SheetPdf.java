@@ -30,8 +30,8 @@ public final class SheetPdf {
         boolean draft = !plan.isIssued();
         String identity = "Plan " + plan.id() + " @ " + plan.revision().orElse("DRAFT");
         PageHeading heading = new PageHeading(plan.part().name() + partSuffix(plan), "Collection sheet", identity,
-                "proofrun collection sheet. Fill-in file: " + plan.id() + "-fill-in.csv / .xlsx. "
-                        + "Keep the plan, slot and characteristic columns as printed.", draft);
+                "Fill-in file: " + plan.id() + "-fill-in.csv or .xlsx (keep the prefilled columns as printed)",
+                draft);
         try (Pages pages = Pages.open(paper, heading)) {
             Flow flow = new Flow(pages);
             new IntroPage(plan, pages).place(flow, draft);

@@ -39,7 +39,7 @@ final class SlotTable {
     static final float MIN_BLOCK = 38f;
 
     static final float SLOT_W = 84f;
-    static final float CHAR_W = 58f;
+    static final float CHAR_W = 70f;
     static final float TAKEN_W = 44f;
     static final float LOT_W = 46f;
     static final float OPERATOR_W = 46f;
@@ -126,7 +126,7 @@ final class SlotTable {
                 x += LOT_W;
                 label(c, x, OPERATOR_W, b1, b2, "Operator", "initials");
                 x += OPERATOR_W;
-                label(c, x, remark, b1, b2, "Remark", "missed, scrapped, ...");
+                label(c, x, remark, b1, b2, "Remark", "if any");
             }
         };
     }
@@ -181,13 +181,13 @@ final class SlotTable {
             if (k > 0) {
                 c.line(x, bandTop, readingsLeft + box * perLine, bandTop);
             }
-            float b = bandTop - PAD - bold.ascent(TEXT);
+            float b = bandTop - 8.5f;
             c.text(bold, TEXT, x + PAD, b, Text.fit(ch.id() + (ch.unit().isEmpty() ? "" : " " + ch.unit()), bold, TEXT,
                     CHAR_W - 2 * PAD));
             String range = Values.range(ch);
             if (band >= 17 && regular.width(range, SMALL) <= CHAR_W - 2 * PAD) {
                 // the limits as a reminder; left out rather than cut when they do not fit (page 1 has them)
-                c.text(regular, SMALL, x + PAD, b - 8.5f, range);
+                c.text(regular, SMALL, x + PAD, b - 8f, range);
             }
             float line = band / linesPerBand;
             for (int i = 0; i < n; i++) {

@@ -73,7 +73,7 @@ public final class TextTable {
         for (Column c : columns) {
             labels.add(c.label());
         }
-        return new Row(labels, bold, true);
+        return new Row(labels, bold, true, 0);
     }
 
     /**
@@ -85,7 +85,15 @@ public final class TextTable {
         if (cells.size() != columns.size()) {
             throw new IllegalArgumentException("a row needs one cell per column");
         }
-        return new Row(List.copyOf(cells), regular, false);
+        return new Row(List.copyOf(cells), regular, false, 0);
+    }
+
+    /** A body row at least {@code minHeight} points tall (room to write or sign by hand). */
+    public Block row(float minHeight, List<String> cells) {
+        if (cells.size() != columns.size()) {
+            throw new IllegalArgumentException("a row needs one cell per column");
+        }
+        return new Row(List.copyOf(cells), regular, false, minHeight);
     }
 
     /** A body row. */
@@ -109,13 +117,15 @@ public final class TextTable {
         private final List<String> cells;
         private final Typeface face;
         private final boolean head;
+        private final float minHeight;
         private float laidOutWidth = -1;
         private List<List<String>> lines;
 
-        Row(List<String> cells, Typeface face, boolean head) {
+        Row(List<String> cells, Typeface face, boolean head, float minHeight) {
             this.cells = cells;
             this.face = face;
             this.head = head;
+            this.minHeight = minHeight;
         }
 
         private List<List<String>> lines(float width) {
@@ -136,7 +146,7 @@ public final class TextTable {
             for (List<String> l : lines(width)) {
                 most = Math.max(most, l.size());
             }
-            return most * size * 1.25f + 2 * PAD;
+            return Math.max(minHeight, most * size * 1.25f + 2 * PAD);
         }
 
         @Override

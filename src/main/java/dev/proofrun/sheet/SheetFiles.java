@@ -1,0 +1,113 @@
+package dev.proofrun.sheet;
+
+import dev.proofrun.plan.StudyPlan;
+import dev.proofrun.sheet.layout.Paper;
+import dev.proofrun.text.Location;
+import dev.proofrun.text.UserException;
+import java.io.IOException;
+import java.io.OutputStream;
+import java.io.UncheckedIOException;
+import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.nio.file.StandardOpenOption;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.UUID;
+
+/**
+ * Writes the three files of a collection sheet into a directory: {@code <plan id>-sheet.pdf},
+ * {@code <plan id>-fill-in.csv} and {@code <plan id>-fill-in.xlsx}.
+ *
+ * <p>All three are written to temporary files in the directory first and moved into place only when all
+ * three are complete, so a failure leaves no partial file behind (files of an earlier run with the same
+ * names are replaced only on success).
+ */
+public final class SheetFiles {
+
+    /**
+     * The files written.
+     *
+     * @param pdf  the printed sheet
+     * @param csv  the fill-in CSV
+     * @param xlsx the fill-in workbook
+     */
+    public record Written(Path pdf, Path csv, Path xlsx) {
+        /** The three paths in the order the command prints them. */
+        public List<Path> all() {
+            return List.of(pdf, csv, xlsx);
+        }
+    }
+
+    private interface Body {
+        void write(OutputStream out) throws IOException;
+    }
+
+    private SheetFiles() {
+    }
+
+    /**
+     * Writes the sheet files for a plan.
+     *
+     * @param plan       the plan
+     * @param dir        the output directory; created if missing
+     * @param paper      A4 or Letter
+     * @param allowDraft whether an unissued plan may be printed (marked DRAFT)
+     * @return the paths written
+     * @throws UserException if the plan is a draft and drafts are not allowed, the directory is a file, or
+     *                       writing fails
+     */
+    public static Written write(StudyPlan plan, Path dir, Paper paper, boolean allowDraft) {
+        if (!plan.isIssued() && !allowDraft) {
+            throw new UserException(SheetMessage.DRAFT_REFUSED, plan.id());
+        }
+        if (Files.exists(dir) && !Files.isDirectory(dir)) {
+            throw new UserException(Location.file(dir.toString()), SheetMessage.OUT_NOT_DIRECTORY, dir);
+        }
+        Written target = new Written(dir.resolve(plan.id() + "-sheet.pdf"), dir.resolve(plan.id() + "-fill-in.csv"),
+                dir.resolve(plan.id() + "-fill-in.xlsx"));
+        List<Path> temps = new ArrayList<>();
+        try {
+            Files.createDirectories(dir);
+            temps.add(temp(dir, out -> SheetPdf.write(plan, paper, out)));
+            temps.add(temp(dir, out -> FillInCsv.write(plan, out)));
+            temps.add(temp(dir, out -> FillInXlsx.write(plan, out)));
+            List<Path> finals = target.all();
+            for (int i = 0; i < finals.size(); i++) {
+                move(temps.get(i), finals.get(i));
+            }
+            return target;
+        } catch (IOException | UncheckedIOException e) {
+            throw new UserException(Location.file(dir.toString()), SheetMessage.WRITE_FAILED, e.getMessage());
+        } finally {
+            for (Path t : temps) {
+                try {
+                    Files.deleteIfExists(t);
+                } catch (IOException ignored) {
+                    // best effort: a temporary file we could not delete is named .proofrun-*.tmp
+                }
+            }
+        }
+    }
+
+    private static Path temp(Path dir, Body body) throws IOException {
+        // not Files.createTempFile: that makes the file private to its owner, and the sheet files are for sharing
+        Path t = dir.resolve(".proofrun-" + UUID.randomUUID() + ".tmp");
+        try (OutputStream out = Files.newOutputStream(t, StandardOpenOption.CREATE_NEW, StandardOpenOption.WRITE)) {
+            body.write(out);
+        } catch (IOException | RuntimeException e) {
+            Files.deleteIfExists(t);
+            throw e;
+        }
+        return t;
+    }
+
+    private static void move(Path from, Path to) throws IOException {
+        try {
+            Files.move(from, to, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
+        } catch (AtomicMoveNotSupportedException e) {
+            Files.move(from, to, StandardCopyOption.REPLACE_EXISTING);
+        }
+    }
+}
