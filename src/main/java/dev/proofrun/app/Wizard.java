@@ -2,9 +2,12 @@ package dev.proofrun.app;
 
 import dev.proofrun.app.goal.GoalView;
 import dev.proofrun.app.goal.GoalViewModel;
+import dev.proofrun.app.handout.HandoutView;
+import dev.proofrun.app.handout.HandoutViewModel;
 import dev.proofrun.app.part.PartView;
 import dev.proofrun.app.part.PartViewModel;
 import dev.proofrun.app.session.AppHome;
+import dev.proofrun.app.session.Background;
 import dev.proofrun.app.session.Session;
 import dev.proofrun.app.shell.ShellView;
 import dev.proofrun.app.shell.ShellViewModel;
@@ -17,7 +20,6 @@ import dev.proofrun.app.sizing.SizingViewModel;
 import dev.proofrun.app.timing.TimingView;
 import dev.proofrun.app.timing.TimingViewModel;
 import java.util.List;
-import javafx.beans.binding.Bindings;
 import javafx.application.HostServices;
 
 /**
@@ -34,19 +36,23 @@ public final class Wizard {
     private final GoalViewModel goal;
     private final SizingViewModel sizing;
     private final TimingViewModel timing;
+    private final HandoutViewModel handout;
 
     private Wizard(AppHome home, HostServices host) {
         session = new Session(home);
         start = new StartViewModel(session);
         part = new PartViewModel(session.draft());
         goal = new GoalViewModel(session.draft(), session.baseProperty());
-        sizing = new SizingViewModel(session.draft(), goal);
-        timing = new TimingViewModel(session.draft(),
-                Bindings.createObjectBinding(sizing::design, sizing.chosenProperty()));
-        List<StepViewModel> steps = List.of(start, part, goal, sizing, timing);
+        sizing = new SizingViewModel(session.draft(), goal, Background.fx("proofrun-design"));
+        timing = new TimingViewModel(session.draft(), sizing.designBinding(), Background.fx("proofrun-schedule"));
+        handout = new HandoutViewModel(session, goal, sizing, timing, Background.fx("proofrun-preview"));
+        if (host != null) {
+            handout.setOpener(host::showDocument);
+        }
+        List<StepViewModel> steps = List.of(start, part, goal, sizing, timing, handout);
         shell = new ShellViewModel(session, steps);
         List<StepView> views = List.of(new StartView(start), new PartView(part), new GoalView(goal),
-                new SizingView(sizing), new TimingView(timing));
+                new SizingView(sizing), new TimingView(timing), new HandoutView(handout));
         view = new ShellView(shell, views);
     }
 
@@ -63,7 +69,7 @@ public final class Wizard {
 
     /** True while a step computes in the background. */
     public boolean busy() {
-        return sizing.busyProperty().get();
+        return sizing.busyProperty().get() || timing.busyProperty().get() || handout.busyProperty().get();
     }
 
     public Session session() {
@@ -96,5 +102,9 @@ public final class Wizard {
 
     public TimingViewModel timing() {
         return timing;
+    }
+
+    public HandoutViewModel handout() {
+        return handout;
     }
 }

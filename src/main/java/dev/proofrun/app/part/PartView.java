@@ -150,17 +150,22 @@ public final class PartView implements StepView {
             mark();
         }
 
+        private String shown = "";
+
+        /** Marks the cell when its problem changed (cheap when nothing changed: no new tooltip, no restyle). */
         private void mark() {
-            getStyleClass().remove("pr-invalid");
-            setTooltip(null);
             CharacteristicDraft row = getTableRow() == null ? null : getTableRow().getItem();
-            if (row == null || isEmpty()) {
+            String now = row == null || isEmpty() ? "" : vm.problem(row, field).orElse("");
+            if (now.equals(shown)) {
                 return;
             }
-            vm.problem(row, field).ifPresent(p -> {
+            shown = now;
+            getStyleClass().remove("pr-invalid");
+            setTooltip(null);
+            if (!now.isEmpty()) {
                 getStyleClass().add("pr-invalid");
-                setTooltip(new Tooltip(p));
-            });
+                setTooltip(new Tooltip(now));
+            }
         }
     }
 }

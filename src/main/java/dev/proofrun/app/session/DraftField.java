@@ -27,6 +27,8 @@ public enum DraftField {
     POWER("0.90"),
     /** The subgroup size picked by the user; empty = the recommended design. */
     CHOSEN_SUBGROUP_SIZE(""),
+    /** The number of subgroups kept from a plan file; empty = the table's k for the chosen size. */
+    CHOSEN_SUBGROUPS(""),
     /** The study's first minute, "yyyy-MM-dd HH:mm" in the plant's zone. */
     START(""),
     /** "days" or "shifts". */

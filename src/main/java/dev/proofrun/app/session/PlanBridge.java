@@ -49,6 +49,7 @@ public final class PlanBridge {
         f.put(DraftField.CONFIDENCE.name(), num(first.requirement().confidence()));
         f.put(DraftField.FOCUS.name(), first.id());
         f.put(DraftField.CHOSEN_SUBGROUP_SIZE.name(), Integer.toString(plan.design().subgroupSize()));
+        f.put(DraftField.CHOSEN_SUBGROUPS.name(), Integer.toString(plan.design().subgroups()));
         StudySpan span = plan.span();
         f.put(DraftField.START.name(), CalendarText.start(span.start()));
         f.put(DraftField.SPAN_KIND.name(), span.kind().name().toLowerCase(Locale.ROOT));
@@ -83,12 +84,12 @@ public final class PlanBridge {
      *
      * @param base        the plan the draft was opened from, for what the wizard does not edit
      * @param expectation the expectation for each characteristic row
-     * @throws dev.proofrun.text.UserException  when the calendar cannot hold the schedule
+     * @param schedule    the schedule computed for this calendar, span, design, spacing and seed
      * @throws IllegalArgumentException when a value is refused by the plan model
      */
     public static StudyPlan compose(StudyDraft d, Optional<StudyPlan> base, Requirement requirement,
             Function<CharacteristicDraft, Expectation> expectation, ProductionCalendar calendar, StudySpan span,
-            Design design, Spacing spacing, long seed) {
+            Design design, Spacing spacing, long seed, dev.proofrun.schedule.Schedule schedule) {
         List<Characteristic> chars = new ArrayList<>();
         for (CharacteristicDraft row : d.characteristics()) {
             Optional<Characteristic> was = base.flatMap(b -> b.characteristic(row.id()));
@@ -100,7 +101,9 @@ public final class PlanBridge {
         }
         Part part = new Part(d.text(DraftField.PART_NAME), d.text(DraftField.PART_NUMBER), d.text(DraftField.PART_REVISION));
         People people = new People(d.text(DraftField.PREPARED_BY), d.text(DraftField.COLLECTOR));
-        return StudyPlan.draft(d.text(DraftField.PLAN_ID), part, people, chars, calendar, span, design, spacing, seed);
+        // The schedule the Timing step already had the core compute for these inputs (not computed again).
+        return new StudyPlan(d.text(DraftField.PLAN_ID), part, people, chars, calendar, span, design, spacing, seed,
+                schedule, dev.proofrun.plan.PlanState.DRAFT, Optional.empty(), Optional.empty());
     }
 
     /** The expected centring of the plan the draft came from, kept when it still fits the index typed. */

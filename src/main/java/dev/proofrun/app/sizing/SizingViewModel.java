@@ -2,6 +2,7 @@ package dev.proofrun.app.sizing;
 
 import dev.proofrun.app.AppMessage;
 import dev.proofrun.app.goal.GoalViewModel;
+import dev.proofrun.app.session.Background;
 import dev.proofrun.app.session.DraftField;
 import dev.proofrun.app.session.Numbers;
 import dev.proofrun.app.session.StudyDraft;
@@ -17,8 +18,6 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 import java.util.OptionalDouble;
-import java.util.concurrent.ExecutorService;
-import java.util.concurrent.Executors;
 import javafx.beans.binding.Bindings;
 import javafx.beans.binding.ObjectBinding;
 import javafx.beans.binding.StringBinding;
@@ -30,22 +29,15 @@ import javafx.beans.property.SimpleStringProperty;
 import javafx.beans.property.StringProperty;
 import javafx.collections.FXCollections;
 import javafx.collections.ObservableList;
-import javafx.concurrent.Task;
 
 /**
  * The design table, recomputed whenever an input changes: the request is built on the FX thread, the
- * designer runs in a {@link Task} on a worker thread, and only the latest request's answer is applied
+ * designer runs in a JavaFX Task on a worker thread ({@link Background}), and only the latest request's answer is applied
  * (an older task is cancelled and its answer dropped). The user may pick a row other than the
  * recommended one; its cost against the recommendation is spelled out and its own power and OC curves
  * are computed the same way.
  */
 public final class SizingViewModel extends StepViewModel {
-
-    private static final ExecutorService WORKER = Executors.newSingleThreadExecutor(r -> {
-        Thread t = new Thread(r, "proofrun-design");
-        t.setDaemon(true);
-        return t;
-    });
 
     private final StudyDraft draft;
     private final GoalViewModel goal;
@@ -57,17 +49,21 @@ public final class SizingViewModel extends StepViewModel {
     private final BooleanProperty busy = new SimpleBooleanProperty(this, "busy", false);
     private final StringProperty refusal = new SimpleStringProperty(this, "refusal", "");
     private final StringBinding cost;
-    private Task<DesignTable[]> running;
+    private final ObjectBinding<Optional<Design>> designBinding;
+    private final Background background;
+    private Background.Job running;
     private long generation;
 
-    public SizingViewModel(StudyDraft draft, GoalViewModel goal) {
+    public SizingViewModel(StudyDraft draft, GoalViewModel goal, Background background) {
         this.draft = draft;
+        this.background = background;
         this.goal = goal;
         request = Bindings.createObjectBinding(this::buildRequest, goal.requirementBinding(), goal.expectationBinding(),
-                goal.focusBinding(), draft.field(DraftField.POWER), draft.field(DraftField.CHOSEN_SUBGROUP_SIZE),
-                draft.characteristics());
+                goal.focusBinding(), draft.field(DraftField.POWER), draft.characteristics());
         request.addListener((obs, was, now) -> recompute());
-        cost = Bindings.createStringBinding(this::describeCost, chosen, table);
+        draft.field(DraftField.CHOSEN_SUBGROUP_SIZE).addListener((obs, was, now) -> recompute());
+        cost = Bindings.createStringBinding(this::describeCost, chosen, table, chosenTable, draft.field(DraftField.CHOSEN_SUBGROUPS));
+        designBinding = Bindings.createObjectBinding(this::design, chosen, draft.field(DraftField.CHOSEN_SUBGROUPS));
         bindMissing(Bindings.createStringBinding(() -> {
             if (goal.requirementBinding().get().isEmpty() || goal.expectationBinding().get().isEmpty()) {
                 return AppMessage.SIZING_GOAL_FIRST.format();
@@ -137,7 +133,7 @@ public final class SizingViewModel extends StepViewModel {
         return request.get();
     }
 
-    /** The chosen design as the plan keeps it. */
+    /** The chosen design as the plan keeps it: the chosen row, or its size with the k kept from the plan file. */
     public Optional<Design> design() {
         DesignRow r = chosen.get();
         Optional<DesignRequest> q = request.get();
@@ -146,7 +142,18 @@ public final class SizingViewModel extends StepViewModel {
         }
         SigmaMethod m = r.subgroupSize() == 1 ? SigmaMethod.MOVING_RANGE
                 : q.get().sigmaMethod().orElse(SigmaMethod.defaultFor(r.subgroupSize()));
-        return Optional.of(new Design(r.subgroupSize(), r.subgroups(), m, q.get().boundMethod()));
+        int k = keptSubgroups().orElse(r.subgroups());
+        return Optional.of(new Design(r.subgroupSize(), k, m, q.get().boundMethod()));
+    }
+
+    public ObjectBinding<Optional<Design>> designBinding() {
+        return designBinding;
+    }
+
+    /** The k kept from the plan file, when there is one (at least 2). */
+    public Optional<Integer> keptSubgroups() {
+        OptionalDouble k = Numbers.parse(draft.text(DraftField.CHOSEN_SUBGROUPS));
+        return k.isPresent() && k.getAsDouble() >= 2 ? Optional.of((int) k.getAsDouble()) : Optional.empty();
     }
 
     /** Picks the row with this subgroup size (the choice survives recomputation). */
@@ -156,6 +163,10 @@ public final class SizingViewModel extends StepViewModel {
         }
         DesignTable t = table.get();
         boolean recommended = t != null && t.recommended().subgroupSize() == row.subgroupSize();
+        if (chosen.get() != null && chosen.get().subgroupSize() == row.subgroupSize()) {
+            return;
+        }
+        draft.field(DraftField.CHOSEN_SUBGROUPS).set("");
         draft.field(DraftField.CHOSEN_SUBGROUP_SIZE).set(recommended ? "" : Integer.toString(row.subgroupSize()));
     }
 
@@ -180,7 +191,7 @@ public final class SizingViewModel extends StepViewModel {
     /** Starts a new computation for the current inputs; any older one is cancelled and its answer dropped. */
     public void recompute() {
         if (running != null) {
-            running.cancel(true);
+            running.cancel();
             running = null;
         }
         Optional<DesignRequest> q = request.get();
@@ -197,27 +208,22 @@ public final class SizingViewModel extends StepViewModel {
         int wanted = Numbers.parse(draft.text(DraftField.CHOSEN_SUBGROUP_SIZE)).isPresent()
                 ? (int) Numbers.parse(draft.text(DraftField.CHOSEN_SUBGROUP_SIZE)).getAsDouble() : 0;
         long mine = ++generation;
-        Task<DesignTable[]> task = new Task<>() {
-            @Override
-            protected DesignTable[] call() {
-                DesignTable all = StudyDesigner.design(req);
-                DesignTable own = null;
-                if (wanted > 0 && wanted != all.recommended().subgroupSize()
-                        && all.rows().stream().anyMatch(r -> r.subgroupSize() == wanted) && !isCancelled()) {
-                    own = StudyDesigner.design(req.withSubgroupSizes(List.of(wanted)));
-                }
-                return new DesignTable[] {all, own};
+        busy.set(true);
+        running = background.submit(() -> {
+            DesignTable all = StudyDesigner.design(req);
+            DesignTable own = null;
+            if (wanted > 0 && wanted != all.recommended().subgroupSize()
+                    && all.rows().stream().anyMatch(r -> r.subgroupSize() == wanted)) {
+                own = StudyDesigner.design(req.withSubgroupSizes(List.of(wanted)));
             }
-        };
-        task.setOnSucceeded(e -> {
+            return new DesignTable[] {all, own};
+        }, answer -> {
             if (mine == generation) {
-                apply(task.getValue(), wanted);
+                apply(answer);
             }
-        });
-        task.setOnFailed(e -> {
+        }, ex -> {
             if (mine == generation) {
                 busy.set(false);
-                Throwable ex = task.getException();
                 refusal.set(ex instanceof UserException || ex instanceof IllegalArgumentException
                         ? ex.getMessage() : AppMessage.SIZING_FAILED.format(String.valueOf(ex)));
                 table.set(null);
@@ -225,12 +231,9 @@ public final class SizingViewModel extends StepViewModel {
                 chosen.set(null);
             }
         });
-        running = task;
-        busy.set(true);
-        WORKER.execute(task);
     }
 
-    private void apply(DesignTable[] answer, int wanted) {
+    private void apply(DesignTable[] answer) {
         DesignTable all = answer[0];
         table.set(all);
         rows.setAll(all.rows());
@@ -243,7 +246,6 @@ public final class SizingViewModel extends StepViewModel {
         chosenTable.set(own);
         chosen.set(pick);
         busy.set(false);
-        running = null;
     }
 
     private String describeCost() {
@@ -253,6 +255,14 @@ public final class SizingViewModel extends StepViewModel {
             return "";
         }
         DesignRow r = t.recommended();
+        Optional<Integer> kept = keptSubgroups();
+        if (kept.isPresent() && kept.get() != c.subgroups()) {
+            DesignTable own = chosenTable.get();
+            OptionalDouble p = own == null ? OptionalDouble.empty() : own.powerCurve().stream()
+                    .filter(pp -> pp.subgroups() == kept.get()).mapToDouble(pp -> pp.power()).findFirst();
+            return AppMessage.SIZING_KEPT.format(kept.get(), c.subgroupSize(), kept.get() * c.subgroupSize(),
+                    p.isPresent() ? fmt(p.getAsDouble()) : "not on the power curve", c.subgroups(), fmt(c.power()));
+        }
         if (c.subgroupSize() == r.subgroupSize()) {
             return AppMessage.SIZING_RECOMMENDED_CHOSEN.format(c.subgroups(), c.subgroupSize(), c.readings(), c.power());
         }

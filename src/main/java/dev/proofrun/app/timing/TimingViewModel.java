@@ -1,6 +1,7 @@
 package dev.proofrun.app.timing;
 
 import dev.proofrun.app.AppMessage;
+import dev.proofrun.app.session.Background;
 import dev.proofrun.app.session.CalendarText;
 import dev.proofrun.app.session.DraftField;
 import dev.proofrun.app.session.StudyDraft;
@@ -23,13 +24,18 @@ import javafx.beans.Observable;
 import javafx.beans.binding.Bindings;
 import javafx.beans.binding.ObjectBinding;
 import javafx.beans.binding.StringBinding;
+import javafx.beans.property.BooleanProperty;
+import javafx.beans.property.ObjectProperty;
+import javafx.beans.property.SimpleBooleanProperty;
+import javafx.beans.property.SimpleObjectProperty;
 import javafx.beans.property.StringProperty;
 import javafx.beans.value.ObservableValue;
 
 /**
  * The plant calendar, the span of the study and the spacing of its subgroups; the schedule is the
- * core's {@link Scheduler} run on them for the chosen design, and the frequency sentence is the
- * schedule's own summary. Each text field has its own inline problem.
+ * core's {@link Scheduler} run on them for the chosen design, off the FX thread ({@link Background},
+ * latest request wins), and the frequency sentence is the schedule's own summary. Each text field has
+ * its own inline problem.
  */
 public final class TimingViewModel extends StepViewModel {
 
@@ -43,24 +49,36 @@ public final class TimingViewModel extends StepViewModel {
     private final Map<DraftField, StringBinding> problems = new EnumMap<>(DraftField.class);
     private final ObjectBinding<Optional<ProductionCalendar>> calendar;
     private final ObjectBinding<Optional<StudySpan>> span;
-    private final ObjectBinding<Outcome> outcome;
+    private final ObjectBinding<Optional<Request>> request;
+    private final ObjectProperty<Outcome> outcome = new SimpleObjectProperty<>(this, "outcome", new Outcome(Optional.empty(), ""));
+    private final BooleanProperty busy = new SimpleBooleanProperty(this, "busy", false);
+    private final Background background;
+    private Background.Job running;
+    private long generation;
 
     /** The schedule, or why there is none. */
     private record Outcome(Optional<Schedule> schedule, String problem) {
     }
 
-    public TimingViewModel(StudyDraft draft, ObservableValue<Optional<Design>> design) {
+    /** Everything the scheduler needs. */
+    private record Request(ProductionCalendar calendar, StudySpan span, Design design, Spacing spacing, long seed) {
+    }
+
+    public TimingViewModel(StudyDraft draft, ObservableValue<Optional<Design>> design, Background background) {
         this.draft = draft;
         this.design = design;
+        this.background = background;
         for (DraftField f : FIELDS) {
             problems.put(f, Bindings.createStringBinding(() -> check(f), draft.field(f)));
         }
         Observable[] fields = FIELDS.stream().map(draft::field).toArray(Observable[]::new);
         calendar = Bindings.createObjectBinding(this::buildCalendar, fields);
         span = Bindings.createObjectBinding(this::buildSpan, fields);
-        outcome = Bindings.createObjectBinding(this::buildSchedule, calendar, span, design,
+        request = Bindings.createObjectBinding(this::buildRequest, calendar, span, design,
                 draft.field(DraftField.SPACING), draft.field(DraftField.SEED));
-        bindMissing(Bindings.createStringBinding(this::computeMissing, outcome, calendar, span, design));
+        request.addListener((o, a, b) -> reschedule());
+        bindMissing(Bindings.createStringBinding(this::computeMissing, outcome, calendar, span, design, busy));
+        reschedule();
     }
 
     @Override
@@ -111,8 +129,13 @@ public final class TimingViewModel extends StepViewModel {
     }
 
     /** Observable for anything that redraws with the schedule. */
-    public ObjectBinding<?> scheduleChanges() {
+    public ObjectProperty<?> scheduleChanges() {
         return outcome;
+    }
+
+    /** True while the scheduler runs. */
+    public BooleanProperty busyProperty() {
+        return busy;
     }
 
     /** "one subgroup of 5 consecutive parts about every 45 minutes over 3 shifts on 2 days", or empty. */
@@ -206,18 +229,41 @@ public final class TimingViewModel extends StepViewModel {
         }
     }
 
-    private Outcome buildSchedule() {
+    private Optional<Request> buildRequest() {
         Optional<Design> d = design.getValue();
         if (calendar.get().isEmpty() || span.get().isEmpty() || d == null || d.isEmpty()
                 || spacing().isEmpty() || seed().isEmpty()) {
-            return new Outcome(Optional.empty(), "");
+            return Optional.empty();
         }
-        try {
-            return new Outcome(Optional.of(Scheduler.schedule(calendar.get().get(), span.get().get(),
-                    d.get().subgroups(), d.get().subgroupSize(), spacing().get(), seed().get())), "");
-        } catch (UserException | IllegalArgumentException e) {
-            return new Outcome(Optional.empty(), e.getMessage());
+        return Optional.of(new Request(calendar.get().get(), span.get().get(), d.get(), spacing().get(), seed().get()));
+    }
+
+    /** Runs the scheduler for the current inputs in the background; the latest request wins. */
+    private void reschedule() {
+        if (running != null) {
+            running.cancel();
         }
+        Optional<Request> q = request.get();
+        long mine = ++generation;
+        if (q.isEmpty()) {
+            busy.set(false);
+            outcome.set(new Outcome(Optional.empty(), ""));
+            return;
+        }
+        Request r = q.get();
+        busy.set(true);
+        running = background.submit(() -> Scheduler.schedule(r.calendar(), r.span(), r.design().subgroups(),
+                r.design().subgroupSize(), r.spacing(), r.seed()), s -> {
+                    if (mine == generation) {
+                        busy.set(false);
+                        outcome.set(new Outcome(Optional.of(s), ""));
+                    }
+                }, ex -> {
+                    if (mine == generation) {
+                        busy.set(false);
+                        outcome.set(new Outcome(Optional.empty(), ex.getMessage()));
+                    }
+                });
     }
 
     private String computeMissing() {
@@ -236,6 +282,9 @@ public final class TimingViewModel extends StepViewModel {
         String p = outcome.get().problem();
         if (!p.isEmpty()) {
             return p;
+        }
+        if (busy.get()) {
+            return AppMessage.TIMING_BUSY.format();
         }
         return outcome.get().schedule().isPresent() ? "" : AppMessage.TIMING_CALENDAR_BAD.format();
     }

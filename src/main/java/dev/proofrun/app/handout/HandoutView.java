@@ -1,0 +1,123 @@
+package dev.proofrun.app.handout;
+
+import dev.proofrun.app.shell.StepView;
+import dev.proofrun.sheet.layout.Paper;
+import java.io.File;
+import java.nio.file.Path;
+import javafx.beans.binding.Bindings;
+import javafx.collections.FXCollections;
+import javafx.collections.ListChangeListener;
+import javafx.scene.Node;
+import javafx.scene.control.Button;
+import javafx.scene.control.ChoiceBox;
+import javafx.scene.control.Label;
+import javafx.scene.control.ProgressIndicator;
+import javafx.scene.control.ScrollPane;
+import javafx.scene.control.TextField;
+import javafx.scene.image.Image;
+import javafx.scene.image.ImageView;
+import javafx.scene.layout.GridPane;
+import javafx.scene.layout.HBox;
+import javafx.scene.layout.Priority;
+import javafx.scene.layout.VBox;
+import javafx.stage.DirectoryChooser;
+
+/** Issue, preview, export and open the collection sheet. */
+public final class HandoutView implements StepView {
+
+    private final VBox root = new VBox(12);
+    private final Button issue = new Button("_Issue the plan");
+
+    public HandoutView(HandoutViewModel vm) {
+        Label state = new Label();
+        state.setId("plan-state");
+        state.getStyleClass().add("pr-big");
+        state.setWrapText(true);
+        state.textProperty().bind(vm.stateBinding());
+        issue.setId("issue");
+        issue.getStyleClass().add("pr-primary");
+        issue.setOnAction(e -> vm.issue());
+        issue.disableProperty().bind(Bindings.createBooleanBinding(() -> vm.composedBinding().get().plan().isEmpty()
+                || vm.issuedNow().isPresent(), vm.composedBinding(), vm.stateBinding()));
+        Label message = new Label();
+        message.setId("handout-message");
+        message.setWrapText(true);
+        message.textProperty().bind(vm.messageProperty());
+        VBox issueCard = new VBox(state, new HBox(8, issue), message);
+        issueCard.getStyleClass().add("pr-card");
+
+        ChoiceBox<Paper> paper = new ChoiceBox<>(FXCollections.observableArrayList(Paper.values()));
+        paper.setId("paper");
+        paper.valueProperty().bindBidirectional(vm.paperProperty());
+        paper.valueProperty().addListener((o, a, b) -> vm.refreshPreview());
+        TextField folder = new TextField(vm.exportFolder().toString());
+        folder.setId("export-folder");
+        folder.setPrefColumnCount(36);
+        HBox.setHgrow(folder, Priority.ALWAYS);
+        Button choose = new Button("Choose…");
+        choose.setOnAction(e -> {
+            DirectoryChooser dc = new DirectoryChooser();
+            File start = new File(folder.getText());
+            if (start.isDirectory()) {
+                dc.setInitialDirectory(start);
+            }
+            File f = dc.showDialog(root.getScene().getWindow());
+            if (f != null) {
+                folder.setText(f.toString());
+            }
+        });
+        Button export = new Button("_Export PDF, CSV and XLSX");
+        export.setId("export");
+        export.disableProperty().bind(Bindings.createBooleanBinding(() -> vm.issuedNow().isEmpty(), vm.stateBinding()));
+        export.setOnAction(e -> vm.export(Path.of(folder.getText().trim())));
+        Button open = new Button("_Open the PDF");
+        open.setId("open-pdf");
+        open.disableProperty().bind(vm.exportedProperty().isNull());
+        open.setOnAction(e -> vm.openPdf());
+        GridPane form = new GridPane();
+        form.getStyleClass().add("pr-form");
+        Label folderLabel = new Label("Folder");
+        folderLabel.setLabelFor(folder);
+        form.addRow(0, new Label("Paper"), paper);
+        form.addRow(1, folderLabel, new HBox(8, folder, choose));
+        form.addRow(2, new Label(""), new HBox(8, export, open));
+        Label filesTitle = new Label("Sheet and fill-in files");
+        filesTitle.getStyleClass().add("pr-card-title");
+        VBox filesCard = new VBox(filesTitle, form);
+        filesCard.getStyleClass().add("pr-card");
+
+        HBox strip = new HBox(12);
+        strip.setId("preview");
+        vm.pages().addListener((ListChangeListener<Image>) c -> {
+            strip.getChildren().clear();
+            for (Image img : vm.pages()) {
+                ImageView v = new ImageView(img);
+                v.setPreserveRatio(true);
+                v.setFitHeight(420);
+                v.getStyleClass().add("pr-page-image");
+                strip.getChildren().add(v);
+            }
+        });
+        ScrollPane pages = new ScrollPane(strip);
+        pages.setPrefViewportHeight(430);
+        pages.setFitToHeight(true);
+        ProgressIndicator spinner = new ProgressIndicator();
+        spinner.setMaxSize(24, 24);
+        spinner.visibleProperty().bind(vm.busyProperty());
+        Label previewTitle = new Label("Preview of the printed sheet");
+        previewTitle.getStyleClass().add("pr-card-title");
+        VBox previewCard = new VBox(new HBox(8, previewTitle, spinner), pages);
+        previewCard.getStyleClass().add("pr-card");
+        root.getChildren().addAll(issueCard, filesCard, previewCard);
+    }
+
+    @Override
+    public Node root() {
+        return root;
+    }
+
+    @Override
+    public Node firstFocus() {
+        return issue;
+    }
+}

@@ -1,0 +1,309 @@
+package dev.proofrun.app.handout;
+
+import dev.proofrun.app.AppMessage;
+import dev.proofrun.app.goal.GoalViewModel;
+import dev.proofrun.app.session.Background;
+import dev.proofrun.app.session.CharacteristicDraft;
+import dev.proofrun.app.session.PlanBridge;
+import dev.proofrun.app.session.Session;
+import dev.proofrun.app.shell.StepViewModel;
+import dev.proofrun.app.sizing.SizingViewModel;
+import dev.proofrun.app.timing.TimingViewModel;
+import dev.proofrun.design.Design;
+import dev.proofrun.plan.PlanFiles;
+import dev.proofrun.plan.PlanState;
+import dev.proofrun.plan.StudyPlan;
+import dev.proofrun.sheet.SheetFiles;
+import dev.proofrun.sheet.SheetPdf;
+import dev.proofrun.sheet.layout.Paper;
+import dev.proofrun.text.UserException;
+import java.awt.image.BufferedImage;
+import java.io.ByteArrayOutputStream;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import java.util.function.Consumer;
+import javafx.beans.binding.Bindings;
+import javafx.beans.binding.ObjectBinding;
+import javafx.beans.binding.StringBinding;
+import javafx.beans.property.BooleanProperty;
+import javafx.beans.property.ObjectProperty;
+import javafx.beans.property.SimpleBooleanProperty;
+import javafx.beans.property.SimpleObjectProperty;
+import javafx.beans.property.SimpleStringProperty;
+import javafx.beans.property.StringProperty;
+import javafx.collections.FXCollections;
+import javafx.collections.ObservableList;
+import javafx.embed.swing.SwingFXUtils;
+import javafx.scene.image.Image;
+import org.apache.pdfbox.Loader;
+import org.apache.pdfbox.pdmodel.PDDocument;
+import org.apache.pdfbox.rendering.PDFRenderer;
+
+/**
+ * Issues the plan (the core fingerprints it and the file is written), previews the collection sheet
+ * (the core writes the PDF, PDFBox renders its pages in a JavaFX Task, see {@link Background}), exports the three files and
+ * opens the PDF with the system viewer.
+ */
+public final class HandoutViewModel extends StepViewModel {
+
+    private static final float PREVIEW_DPI = 60f;
+    private final Session session;
+    private final GoalViewModel goal;
+    private final SizingViewModel sizing;
+    private final TimingViewModel timing;
+    private final ObjectBinding<Composed> composed;
+    private final ObjectProperty<Paper> paper = new SimpleObjectProperty<>(this, "paper", Paper.A4);
+    private final ObservableList<Image> pages = FXCollections.observableArrayList();
+    private final BooleanProperty busy = new SimpleBooleanProperty(this, "busy", false);
+    private final StringProperty message = new SimpleStringProperty(this, "message", "");
+    private final ObjectProperty<SheetFiles.Written> exported = new SimpleObjectProperty<>(this, "exported");
+    private final StringBinding state;
+    private Consumer<String> opener = uri -> { };
+    private final Background background;
+    private Background.Job preview;
+    private long generation;
+
+    /** The plan the steps describe now, or why there is none. */
+    public record Composed(Optional<StudyPlan> plan, String problem) {
+    }
+
+    public HandoutViewModel(Session session, GoalViewModel goal, SizingViewModel sizing, TimingViewModel timing,
+            Background background) {
+        this.session = session;
+        this.background = background;
+        this.goal = goal;
+        this.sizing = sizing;
+        this.timing = timing;
+        composed = Bindings.createObjectBinding(this::compose, session.draft().editsProperty(), sizing.designBinding(),
+                timing.scheduleChanges(), timing.busyProperty(), goal.requirementBinding(), session.baseProperty());
+        state = Bindings.createStringBinding(this::describeState, composed, session.baseProperty());
+        bindMissing(Bindings.createStringBinding(() -> {
+            Composed c = composed.get();
+            if (c.plan().isEmpty()) {
+                return c.problem().isEmpty() ? AppMessage.HANDOUT_EARLIER.format() : c.problem();
+            }
+            return issuedNow().isPresent() ? "" : AppMessage.HANDOUT_ISSUE.format();
+        }, composed, session.baseProperty()));
+        composed.addListener((o, a, b) -> exported.set(null));
+    }
+
+    @Override
+    public String title() {
+        return AppMessage.STEP_HANDOUT.english();
+    }
+
+    @Override
+    public String hint() {
+        return AppMessage.STEP_HANDOUT_HINT.english();
+    }
+
+    @Override
+    public void entered() {
+        refreshPreview();
+    }
+
+    /** How the PDF is opened (the window passes HostServices.showDocument). */
+    public void setOpener(Consumer<String> opener) {
+        this.opener = opener;
+    }
+
+    public ObjectProperty<Paper> paperProperty() {
+        return paper;
+    }
+
+    public ObservableList<Image> pages() {
+        return pages;
+    }
+
+    public BooleanProperty busyProperty() {
+        return busy;
+    }
+
+    public StringProperty messageProperty() {
+        return message;
+    }
+
+    public ObjectProperty<SheetFiles.Written> exportedProperty() {
+        return exported;
+    }
+
+    /** "Issued as revision 3f2a9c01b7de", "Draft, not issued", "Changed since revision … was issued". */
+    public StringBinding stateBinding() {
+        return state;
+    }
+
+    public ObjectBinding<Composed> composedBinding() {
+        return composed;
+    }
+
+    /** The issued plan when the file's issued plan is exactly what the steps describe. */
+    public Optional<StudyPlan> issuedNow() {
+        StudyPlan base = session.baseProperty().get();
+        Optional<StudyPlan> now = composed.get().plan();
+        if (base == null || !base.isIssued() || now.isEmpty()) {
+            return Optional.empty();
+        }
+        StudyPlan same = withSupersedes(now.get(), base.supersedes());
+        return PlanFiles.fingerprint(same).equals(base.revision().orElse("")) ? Optional.of(base) : Optional.empty();
+    }
+
+    private static StudyPlan withSupersedes(StudyPlan p, Optional<String> supersedes) {
+        return new StudyPlan(p.id(), p.part(), p.people(), p.characteristics(), p.calendar(), p.span(), p.design(),
+                p.spacing(), p.seed(), p.schedule(), PlanState.DRAFT, Optional.empty(), supersedes);
+    }
+
+    /** The folder exports go to by default: beside the plan file, else the plans folder. */
+    public Path exportFolder() {
+        Path f = session.draft().planFileProperty().get();
+        return f != null ? f.toAbsolutePath().getParent() : session.home().plansFolder();
+    }
+
+    private Composed compose() {
+        Optional<Design> design = sizing.designBinding().get();
+        Optional<dev.proofrun.design.Requirement> req = goal.requirementBinding().get();
+        if (design.isEmpty() || req.isEmpty() || timing.calendarBinding().get().isEmpty()
+                || timing.spanBinding().get().isEmpty() || timing.spacing().isEmpty() || timing.seed().isEmpty()
+                || timing.busyProperty().get() || timing.schedule().isEmpty()) {
+            return new Composed(Optional.empty(), "");
+        }
+        List<String> lacking = new ArrayList<>();
+        for (CharacteristicDraft row : session.draft().characteristics()) {
+            if (goal.expectationFor(row).isEmpty() || row.limits().isEmpty()) {
+                lacking.add(row.id());
+            }
+        }
+        if (!lacking.isEmpty()) {
+            return new Composed(Optional.empty(), AppMessage.HANDOUT_NO_EXPECTATION.format(String.join(", ", lacking)));
+        }
+        try {
+            StudyPlan p = PlanBridge.compose(session.draft(), session.base(), req.get(),
+                    row -> goal.expectationFor(row).orElseThrow(), timing.calendarBinding().get().get(),
+                    timing.spanBinding().get().get(), design.get(), timing.spacing().get(), timing.seed().get(),
+                    timing.schedule().get());
+            return new Composed(Optional.of(p), "");
+        } catch (UserException | IllegalArgumentException | java.util.NoSuchElementException e) {
+            return new Composed(Optional.empty(), e.getMessage());
+        }
+    }
+
+    private String describeState() {
+        StudyPlan base = session.baseProperty().get();
+        if (issuedNow().isPresent()) {
+            return AppMessage.HANDOUT_ISSUED.format(base.revision().orElse(""));
+        }
+        if (base != null && base.isIssued()) {
+            return AppMessage.HANDOUT_CHANGED.format(base.revision().orElse(""));
+        }
+        return AppMessage.HANDOUT_DRAFT.format();
+    }
+
+    /**
+     * Issues what the steps describe and writes it to the plan file (a new plan goes to the plans folder as
+     * {@code <id>.json}). A changed issued plan becomes a new revision that supersedes the old one.
+     */
+    public boolean issue() {
+        Optional<StudyPlan> now = composed.get().plan();
+        if (now.isEmpty()) {
+            message.set(getMissing());
+            return false;
+        }
+        if (issuedNow().isPresent()) {
+            message.set(AppMessage.HANDOUT_ALREADY.format(issuedNow().get().revision().orElse("")));
+            return true;
+        }
+        StudyPlan draft = now.get();
+        StudyPlan base = session.baseProperty().get();
+        if (base != null && base.isIssued()) {
+            draft = withSupersedes(draft, base.revision());
+        }
+        try {
+            StudyPlan issued = PlanFiles.issue(draft);
+            Path file = session.draft().planFileProperty().get();
+            if (file == null) {
+                file = session.home().plansFolder().resolve(issued.id() + ".json");
+            }
+            session.saved(file, issued);
+            message.set(AppMessage.HANDOUT_ISSUED_NOW.format(issued.revision().orElse(""), file.getFileName()));
+            refreshPreview();
+            return true;
+        } catch (UserException | IllegalArgumentException e) {
+            message.set(e.getMessage());
+            return false;
+        }
+    }
+
+    private String getMissing() {
+        return missingProperty().get();
+    }
+
+    /** Writes the sheet PDF and both fill-in files of the issued plan into the folder. */
+    public Optional<SheetFiles.Written> export(Path dir) {
+        Optional<StudyPlan> issued = issuedNow();
+        if (issued.isEmpty()) {
+            message.set(AppMessage.HANDOUT_ISSUE.format());
+            return Optional.empty();
+        }
+        try {
+            SheetFiles.Written w = SheetFiles.write(issued.get(), dir, paper.get(), false);
+            exported.set(w);
+            message.set(AppMessage.HANDOUT_EXPORTED.format(dir, w.pdf().getFileName(), w.csv().getFileName(),
+                    w.xlsx().getFileName()));
+            return Optional.of(w);
+        } catch (UserException | IllegalArgumentException e) {
+            message.set(e.getMessage());
+            return Optional.empty();
+        }
+    }
+
+    /** Opens the exported PDF with the system's viewer. */
+    public boolean openPdf() {
+        SheetFiles.Written w = exported.get();
+        if (w == null) {
+            return false;
+        }
+        opener.accept(w.pdf().toUri().toString());
+        return true;
+    }
+
+    /** Renders the sheet of the plan as it stands (issued or marked DRAFT) in the background. */
+    public void refreshPreview() {
+        if (preview != null) {
+            preview.cancel();
+        }
+        long mine = ++generation;
+        Optional<StudyPlan> plan = issuedNow().or(() -> composed.get().plan());
+        if (plan.isEmpty()) {
+            pages.clear();
+            busy.set(false);
+            return;
+        }
+        StudyPlan p = plan.get();
+        Paper size = paper.get();
+        busy.set(true);
+        preview = background.submit(() -> {
+            ByteArrayOutputStream bytes = new ByteArrayOutputStream();
+            SheetPdf.write(p, size, bytes);
+            List<Image> out = new ArrayList<>();
+            try (PDDocument doc = Loader.loadPDF(bytes.toByteArray())) {
+                PDFRenderer r = new PDFRenderer(doc);
+                for (int i = 0; i < doc.getNumberOfPages() && !Thread.currentThread().isInterrupted(); i++) {
+                    BufferedImage img = r.renderImageWithDPI(i, PREVIEW_DPI);
+                    out.add(SwingFXUtils.toFXImage(img, null));
+                }
+            }
+            return out;
+        }, images -> {
+            if (mine == generation) {
+                pages.setAll(images);
+                busy.set(false);
+            }
+        }, ex -> {
+            if (mine == generation) {
+                busy.set(false);
+                message.set(AppMessage.HANDOUT_PREVIEW_FAILED.format(String.valueOf(ex.getMessage())));
+            }
+        });
+    }
+}

@@ -1,0 +1,65 @@
+package dev.proofrun.app.session;
+
+import java.util.concurrent.Callable;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.function.Consumer;
+import javafx.concurrent.Task;
+
+/**
+ * Runs the core's long work off the FX thread. {@link #fx} wraps each job in a JavaFX {@link Task} on a
+ * daemon worker, and delivers the answer on the FX thread; {@link #inline} runs the job at once on the
+ * calling thread (plain view-model tests). View-models keep "latest wins" themselves: they cancel the
+ * older job and drop its answer.
+ */
+public interface Background {
+
+    /** A submitted job. */
+    interface Job {
+        void cancel();
+    }
+
+    <T> Job submit(Callable<T> work, Consumer<T> done, Consumer<Throwable> failed);
+
+    /** One daemon worker thread with the given name, answers on the FX thread. */
+    static Background fx(String threadName) {
+        ExecutorService worker = Executors.newSingleThreadExecutor(r -> {
+            Thread t = new Thread(r, threadName);
+            t.setDaemon(true);
+            return t;
+        });
+        return new Background() {
+            @Override
+            public <T> Job submit(Callable<T> work, Consumer<T> done, Consumer<Throwable> failed) {
+                Task<T> task = new Task<>() {
+                    @Override
+                    protected T call() throws Exception {
+                        return work.call();
+                    }
+                };
+                task.setOnSucceeded(e -> done.accept(task.getValue()));
+                task.setOnFailed(e -> failed.accept(task.getException()));
+                worker.execute(task);
+                return () -> task.cancel(true);
+            }
+        };
+    }
+
+    /** Runs each job at once on the caller's thread. */
+    static Background inline() {
+        return new Background() {
+            @Override
+            public <T> Job submit(Callable<T> work, Consumer<T> done, Consumer<Throwable> failed) {
+                T value;
+                try {
+                    value = work.call();
+                } catch (Exception | Error e) {
+                    failed.accept(e);
+                    return () -> { };
+                }
+                done.accept(value);
+                return () -> { };
+            }
+        };
+    }
+}

@@ -1,0 +1,87 @@
+package dev.proofrun.app;
+
+import java.util.concurrent.Executors;
+import java.util.concurrent.ScheduledExecutorService;
+import java.util.concurrent.TimeUnit;
+import java.util.concurrent.atomic.AtomicBoolean;
+import java.util.concurrent.atomic.AtomicLong;
+import javafx.application.Platform;
+
+/**
+ * Measures how long the FX thread is kept from running queued work: every 5 ms (when no probe is
+ * waiting) a probe is queued with {@link Platform#runLater}; the time from queueing to running is the
+ * FX thread's latency at that moment. The worst latency is what a user would feel as a frozen window.
+ */
+final class FxProbe implements AutoCloseable {
+
+    private final ScheduledExecutorService timer = Executors.newSingleThreadScheduledExecutor(r -> {
+        Thread t = new Thread(r, "fx-probe");
+        t.setDaemon(true);
+        return t;
+    });
+    private final AtomicBoolean waiting = new AtomicBoolean(false);
+    private final AtomicLong worstNanos = new AtomicLong(0);
+    private final AtomicLong probes = new AtomicLong(0);
+
+    FxProbe() {
+        timer.scheduleAtFixedRate(this::probe, 0, 5, TimeUnit.MILLISECONDS);
+    }
+
+    private volatile long postedAt;
+    private volatile boolean dumped;
+    private volatile long dumps;
+    private final long born = System.nanoTime();
+    private final StringBuilder blocks = new StringBuilder();
+
+    private void probe() {
+        if (!waiting.compareAndSet(false, true)) {
+            long late = System.nanoTime() - postedAt;
+            if (late > 100_000_000L && late / 400_000_000L >= dumps) {
+                dumps++;
+                dumped = true;
+                Thread.getAllStackTraces().forEach((t, st) -> {
+                    if (t.getName().contains("JavaFX Application")) {
+                        synchronized (blocks) {
+                            blocks.append(String.format(java.util.Locale.ROOT, "FX thread busy %.0f ms, %.1f s after start, at:%n",
+                                    late / 1e6, (System.nanoTime() - born) / 1e9));
+                            for (int i = 0; i < Math.min(Integer.getInteger("probe.depth", 12), st.length); i++) {
+                                blocks.append("    ").append(st[i]).append('\n');
+                            }
+                        }
+                    }
+                });
+            }
+            return;
+        }
+        long posted = System.nanoTime();
+        postedAt = posted;
+        dumped = false;
+        dumps = 0;
+        Platform.runLater(() -> {
+            long gap = System.nanoTime() - posted;
+            worstNanos.accumulateAndGet(gap, Math::max);
+            probes.incrementAndGet();
+            waiting.set(false);
+        });
+    }
+
+    /** Where the FX thread was when it was busy for more than 100 ms (one stack per episode). */
+    String blocks() {
+        synchronized (blocks) {
+            return blocks.toString();
+        }
+    }
+
+    double worstMillis() {
+        return worstNanos.get() / 1e6;
+    }
+
+    long probes() {
+        return probes.get();
+    }
+
+    @Override
+    public void close() {
+        timer.shutdownNow();
+    }
+}

@@ -1,0 +1,76 @@
+package dev.proofrun.app.goal;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import dev.proofrun.app.session.CharacteristicDraft;
+import dev.proofrun.app.session.CharacteristicField;
+import dev.proofrun.app.session.DraftField;
+import dev.proofrun.app.session.ExpectationSource;
+import dev.proofrun.app.session.StudyDraft;
+import dev.proofrun.design.Expectation;
+import dev.proofrun.plan.StudyPlan;
+import dev.proofrun.stats.IndexKind;
+import java.util.Map;
+import javafx.beans.property.SimpleObjectProperty;
+import org.junit.jupiter.api.Test;
+
+/** The goal step's validation and the expectation it hands to the designer. */
+class GoalViewModelTest {
+
+    private final StudyDraft draft = new StudyDraft();
+    private final GoalViewModel vm = new GoalViewModel(draft, new SimpleObjectProperty<StudyPlan>());
+
+    private CharacteristicDraft bore() {
+        CharacteristicDraft row = CharacteristicDraft.of(Map.of("id", "D1", "unit", "mm", "lsl", "9.9", "usl", "10.1",
+                "expected", "1.8"));
+        draft.characteristics().add(row);
+        return row;
+    }
+
+    @Test
+    void aTypedValueIsTheExpectation() {
+        bore();
+        assertTrue(vm.completeBinding().get(), vm.missingProperty().get());
+        assertEquals(1.8, vm.expectationBinding().get().orElseThrow().index(), 0.0);
+        assertEquals(1.33, vm.requirementBinding().get().orElseThrow().minimum(), 0.0);
+    }
+
+    @Test
+    void anExpectationNotAboveTheMinimumIsRefusedInline() {
+        bore().cell(CharacteristicField.EXPECTED).set("1.2");
+        assertFalse(vm.completeBinding().get());
+        assertEquals("the expected Cpk (1.200) must be above the required 1.330, or no study can show it",
+                vm.missingProperty().get());
+    }
+
+    @Test
+    void aConfidenceOutOfRangeIsNamed() {
+        bore();
+        draft.field(DraftField.CONFIDENCE).set("95");
+        assertEquals("the confidence must be between 0.5 and 0.9999 (e.g. 0.95)", vm.missingProperty().get());
+    }
+
+    @Test
+    void cpNeedsBothLimits() {
+        draft.characteristics().add(CharacteristicDraft.of(Map.of("id", "R4", "unit", "µm", "usl", "0.8", "expected", "2")));
+        vm.indexProperty().set(IndexKind.CP);
+        assertEquals("Cp needs both limits, and R4 has only one", vm.missingProperty().get());
+        assertEquals("cp", draft.text(DraftField.INDEX), "the choice is kept in the draft");
+    }
+
+    @Test
+    void meanAndSigmaGoThroughTheDesignCore() {
+        bore();
+        vm.sourceProperty().set(ExpectationSource.MEAN_SIGMA);
+        assertEquals("give the expected mean and a sigma above zero", vm.missingProperty().get());
+        draft.field(DraftField.EXPECTED_MEAN).set("10.02");
+        draft.field(DraftField.EXPECTED_SIGMA).set("0.015");
+        Expectation e = vm.expectationBinding().get().orElseThrow();
+        // By definition: Cpk = min(10.1 - 10.02, 10.02 - 9.9) / (3 * 0.015) = 0.08 / 0.045; Cp = 0.2 / 0.09.
+        assertEquals(0.08 / 0.045, e.index(), 1e-12);
+        assertEquals(0.2 / 0.09, e.potential().getAsDouble(), 1e-12);
+        assertTrue(vm.completeBinding().get());
+    }
+}

@@ -1,0 +1,67 @@
+package dev.proofrun.app.sizing;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import dev.proofrun.app.goal.GoalViewModel;
+import dev.proofrun.app.session.Background;
+import dev.proofrun.app.session.CharacteristicDraft;
+import dev.proofrun.app.session.CharacteristicField;
+import dev.proofrun.app.session.DraftField;
+import dev.proofrun.app.session.StudyDraft;
+import dev.proofrun.design.DesignRequest;
+import dev.proofrun.design.DesignRow;
+import dev.proofrun.design.Expectation;
+import dev.proofrun.design.Requirement;
+import dev.proofrun.design.StudyDesigner;
+import dev.proofrun.plan.StudyPlan;
+import dev.proofrun.stats.IndexKind;
+import dev.proofrun.stats.SpecLimits;
+import java.util.Map;
+import javafx.beans.property.SimpleObjectProperty;
+import org.junit.jupiter.api.Test;
+
+/** The sizing step shows the core's table for the goal, recomputes on any input and keeps the user's pick. */
+class SizingViewModelTest {
+
+    private final StudyDraft draft = new StudyDraft();
+    private final GoalViewModel goal = new GoalViewModel(draft, new SimpleObjectProperty<StudyPlan>());
+    private final SizingViewModel vm = new SizingViewModel(draft, goal, Background.inline());
+    private final CharacteristicDraft row = CharacteristicDraft.of(Map.of("id", "D1", "unit", "mm", "lsl", "9.9",
+            "usl", "10.1", "expected", "1.8"));
+
+    @Test
+    void theTableIsTheDesignersAndFollowsTheExpectedIndex() {
+        row.cell(CharacteristicField.EXPECTED).set("1.5");
+        draft.characteristics().add(row);
+        assertTrue(vm.completeBinding().get(), vm.missingProperty().get());
+        DesignRow shown = vm.chosenProperty().get();
+        DesignRow core = StudyDesigner.design(DesignRequest.of(SpecLimits.Sides.TWO_SIDED,
+                Requirement.of(IndexKind.CPK, 1.33, 0.95), Expectation.centred(1.5))).recommended();
+        assertEquals(core, shown, "nothing computed twice: the row is the core's");
+        int before = vm.tableProperty().get().recommended().readings();
+        row.cell(CharacteristicField.EXPECTED).set("2.2");
+        assertTrue(vm.tableProperty().get().recommended().readings() < before, "a better process needs fewer readings");
+    }
+
+    @Test
+    void anotherRowIsKeptAndItsCostSpelledOut() {
+        draft.characteristics().add(row);
+        DesignRow three = vm.rows().stream().filter(r -> r.subgroupSize() == 3).findFirst().orElseThrow();
+        vm.choose(three);
+        assertEquals(3, vm.chosenProperty().get().subgroupSize());
+        assertEquals(3, vm.design().orElseThrow().subgroupSize());
+        assertTrue(vm.costBinding().get().contains("subgroups of 3"), vm.costBinding().get());
+        assertTrue(vm.costBinding().get().contains("against the recommended"), vm.costBinding().get());
+        assertEquals("3", draft.text(DraftField.CHOSEN_SUBGROUP_SIZE));
+    }
+
+    @Test
+    void aRefusalOfTheCoreIsShownAsWhatIsMissing() {
+        draft.characteristics().add(row);
+        draft.field(DraftField.POWER).set("0.99999");
+        assertFalse(vm.completeBinding().get());
+        assertFalse(vm.refusalProperty().get().isEmpty());
+    }
+}
