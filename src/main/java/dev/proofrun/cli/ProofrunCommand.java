@@ -20,6 +20,7 @@ import picocli.CommandLine.Command;
             SizeCommand.class,
             PlanCommand.class,
             SheetCommand.class,
+            EstimateCommand.class,
         })
 public final class ProofrunCommand implements Runnable {
 

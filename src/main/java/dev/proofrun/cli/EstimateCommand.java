@@ -1,0 +1,118 @@
+package dev.proofrun.cli;
+
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.SerializationFeature;
+import dev.proofrun.capability.CapabilityAnalysis;
+import dev.proofrun.capability.CapabilityJson;
+import dev.proofrun.capability.CapabilityMessage;
+import dev.proofrun.capability.CapabilityResult;
+import dev.proofrun.readings.Readings;
+import dev.proofrun.readings.ReadingsCsv;
+import dev.proofrun.stats.BoundMethod;
+import dev.proofrun.stats.CapabilityBounds;
+import dev.proofrun.stats.SigmaMethod;
+import dev.proofrun.stats.SpecLimits;
+import dev.proofrun.text.Location;
+import dev.proofrun.text.UserException;
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.OptionalInt;
+import java.util.concurrent.Callable;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+
+/**
+ * {@code proofrun estimate}: the capability of readings already at hand (a pilot run, old data), with
+ * lower confidence bounds, expected and observed nonconforming parts and a normality test.
+ */
+@Command(name = "estimate", mixinStandardHelpOptions = true,
+        description = "Capability of readings you already have: indices, lower confidence bounds, ppm, normality.%n"
+                + "FILE.csv has a 'value' column (optionally 'subgroup'), or one subgroup per row in x1..xn.")
+public final class EstimateCommand implements Callable<Integer> {
+
+    @CommandLine.Spec
+    CommandLine.Model.CommandSpec spec;
+
+    @Parameters(index = "0", paramLabel = "FILE.csv", description = "The readings.")
+    Path file;
+
+    @Option(names = "--lsl", paramLabel = "X", description = "Lower specification limit.")
+    Double lsl;
+
+    @Option(names = "--usl", paramLabel = "X", description = "Upper specification limit.")
+    Double usl;
+
+    @Option(names = "--nominal", paramLabel = "T",
+            description = "Target for Cpm (default: the midpoint of two-sided limits; none for one-sided).")
+    Double nominal;
+
+    @Option(names = "--subgroup-size", paramLabel = "N",
+            description = "Group consecutive readings of a 'value' column into subgroups of N (default: individuals).")
+    Integer subgroupSize;
+
+    @Option(names = "--sigma", paramLabel = "rbar|sbar|pooled|mr",
+            description = "Within-sigma estimator (default rbar for n <= 10, sbar above or for unequal sizes, mr for individuals).")
+    String sigma;
+
+    @Option(names = "--confidence", defaultValue = "0.95", description = "Confidence of the lower bounds (default ${DEFAULT-VALUE}).")
+    double confidence;
+
+    @Option(names = "--bound", defaultValue = "exact", paramLabel = "exact|bissell",
+            description = "Bound for two-sided Cpk/Ppk (default ${DEFAULT-VALUE}); one-sided ones are always exact.")
+    String bound;
+
+    @Option(names = "--json", description = "Print one JSON object.")
+    boolean json;
+
+    @Override
+    public Integer call() throws JsonProcessingException {
+        SpecLimits limits = limits();
+        SigmaMethod method = sigma == null ? null : option(() -> SigmaMethod.fromToken(sigma));
+        BoundMethod boundMethod = option(() -> BoundMethod.fromToken(bound));
+        if (!(confidence > CapabilityBounds.MIN_CONFIDENCE && confidence < CapabilityBounds.MAX_CONFIDENCE)) {
+            throw new UserException(CapabilityMessage.CONFIDENCE_OUT_OF_RANGE, confidence);
+        }
+        Readings readings = ReadingsCsv.read(file,
+                subgroupSize == null ? OptionalInt.empty() : OptionalInt.of(subgroupSize));
+        CapabilityResult result;
+        try {
+            result = CapabilityAnalysis.of(readings.subgroups(), limits, nominal, method, confidence, boundMethod);
+        } catch (UserException e) {
+            throw e.location().isPresent() ? e : new UserException(Location.file(file.toString()), e.key(), e.args());
+        }
+        String text = json
+                ? new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT).writeValueAsString(CapabilityJson.of(result))
+                : EstimateText.of(file.toString(), result);
+        PrintWriter out = spec.commandLine().getOut();
+        out.println(text);
+        out.flush();
+        return 0;
+    }
+
+    private SpecLimits limits() {
+        if (lsl == null && usl == null) {
+            throw new UserException(EstimateMessage.NO_LIMIT);
+        }
+        if (lsl != null && !Double.isFinite(lsl)) {
+            throw new UserException(EstimateMessage.LIMIT_NOT_FINITE, "--lsl", lsl);
+        }
+        if (usl != null && !Double.isFinite(usl)) {
+            throw new UserException(EstimateMessage.LIMIT_NOT_FINITE, "--usl", usl);
+        }
+        if (lsl != null && usl != null && lsl >= usl) {
+            throw new UserException(EstimateMessage.LIMITS_REVERSED, lsl, usl);
+        }
+        return SpecLimits.of(lsl, usl);
+    }
+
+    private static <T> T option(java.util.function.Supplier<T> parse) {
+        try {
+            return parse.get();
+        } catch (IllegalArgumentException e) {
+            throw new UserException(EstimateMessage.BAD_OPTION, e.getMessage());
+        }
+    }
+}

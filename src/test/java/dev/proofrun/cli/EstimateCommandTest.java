@@ -1,0 +1,154 @@
+package dev.proofrun.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+class EstimateCommandTest {
+
+    @TempDir
+    Path dir;
+
+    private final StringWriter out = new StringWriter();
+    private final StringWriter err = new StringWriter();
+
+    private int run(String... args) {
+        return ProofrunCommand.run(new PrintWriter(out, true), new PrintWriter(err, true), args);
+    }
+
+    /** The shaft demo data of CapabilityAnalysisTest in the x1..x4 layout. */
+    private Path shaft() throws IOException {
+        StringBuilder sb = new StringBuilder("slot,x1,x2,x3,x4\n");
+        int i = 1;
+        for (double[] g : dev.proofrun.capability.CapabilityAnalysisTest.SHAFT) {
+            sb.append("S").append(i++);
+            for (double x : g) {
+                sb.append(',').append(x);
+            }
+            sb.append('\n');
+        }
+        Path p = dir.resolve("shaft.csv");
+        Files.writeString(p, sb);
+        return p;
+    }
+
+    @Test
+    void textReportShowsIndicesBoundsAndTheCaution() throws IOException {
+        assertEquals(0, run("estimate", shaft().toString(), "--lsl", "11.97", "--usl", "12.03"), err.toString());
+        String text = out.toString();
+        assertTrue(text.contains("40 readings in 10 subgroups of 4"), text);
+        assertTrue(text.contains("Cpk"), text);
+        assertTrue(text.contains("1.596"), text); // Cpk, see CapabilityAnalysisTest
+        assertTrue(text.contains("Caution:"), text);
+        assertEquals("", err.toString());
+    }
+
+    @Test
+    void jsonHasTheAgreedKeysAndNulls() throws IOException {
+        assertEquals(0, run("estimate", shaft().toString(), "--usl", "12.03", "--json", "--bound", "bissell"));
+        JsonNode j = new ObjectMapper().readTree(out.toString());
+        List<String> keys = new ArrayList<>();
+        j.fieldNames().forEachRemaining(keys::add);
+        assertEquals(List.of("readings", "subgroups", "subgroupSize", "mean", "sigmaWithin", "sigmaOverall",
+                "sigmaMethod", "cp", "cpu", "cpl", "cpk", "pp", "ppu", "ppl", "ppk", "cpm", "confidence", "bound",
+                "lower", "degreesOfFreedom", "ppm", "normality"), keys);
+        assertTrue(j.get("cp").isNull());
+        assertTrue(j.get("cpm").isNull());
+        assertEquals(40, j.get("readings").asInt());
+        assertEquals("bissell", j.get("bound").asText());
+        // one-sided: exact noncentral-t bound, SciPy 1.17.1 (see CapabilityAnalysisTest)
+        assertEquals(1.395889270151466, j.get("lower").get("ppk").asDouble(), 1e-7);
+    }
+
+    @Test
+    void nominalSetsTheCpmTarget() throws IOException {
+        assertEquals(0, run("estimate", shaft().toString(), "--lsl", "11.97", "--usl", "12.03", "--nominal", "12.004",
+                "--json", "--sigma", "pooled", "--confidence", "0.9"));
+        JsonNode j = new ObjectMapper().readTree(out.toString());
+        assertEquals("pooled", j.get("sigmaMethod").asText());
+        assertEquals(30, j.get("degreesOfFreedom").get("within").asDouble(), 0);
+        assertEquals(0.9, j.get("confidence").asDouble(), 0);
+        assertFalse(j.get("cpm").isNull());
+    }
+
+    private void refused(String expected, String... args) {
+        assertEquals(2, run(args), out.toString());
+        String e = err.toString();
+        assertTrue(e.contains(expected), e);
+        assertEquals(1, e.strip().lines().count(), "one line: " + e);
+        assertFalse(e.contains("Exception") || e.contains("\tat "), e);
+        assertEquals("", out.toString(), "no partial output");
+    }
+
+    @Test
+    void missingFile() {
+        refused("none.csv: file not found", "estimate", dir.resolve("none.csv").toString(), "--usl", "1");
+    }
+
+    @Test
+    void noHeader() throws IOException {
+        Path p = Files.writeString(dir.resolve("h.csv"), "1.0\n2.0\n");
+        refused("h.csv, row 1: no header", "estimate", p.toString(), "--usl", "3");
+    }
+
+    @Test
+    void nonNumericCell() throws IOException {
+        Path p = Files.writeString(dir.resolve("n.csv"), "value\n1.0\n2,0\n");
+        refused("n.csv, row 3: 2 cells but the header has 1", "estimate", p.toString(), "--usl", "3");
+        Path q = Files.writeString(dir.resolve("m.csv"), "value\n1.0\n2.0 mm\n");
+        out.getBuffer().setLength(0);
+        err.getBuffer().setLength(0);
+        refused("m.csv, row 3, column value: not a number: '2.0 mm'", "estimate", q.toString(), "--usl", "3");
+    }
+
+    @Test
+    void emptyFile() throws IOException {
+        Path p = Files.writeString(dir.resolve("e.csv"), "");
+        refused("e.csv: the file is empty", "estimate", p.toString(), "--usl", "3");
+    }
+
+    @Test
+    void reversedLimits() throws IOException {
+        refused("--lsl 12.03 must be below --usl 11.97", "estimate", shaft().toString(), "--lsl", "12.03", "--usl", "11.97");
+    }
+
+    @Test
+    void noLimit() throws IOException {
+        refused("give at least one specification limit", "estimate", shaft().toString());
+    }
+
+    @Test
+    void fewerThanTwoReadings() throws IOException {
+        Path p = Files.writeString(dir.resolve("one.csv"), "value\n1.0\n");
+        refused("one.csv: need at least 2 readings, found 1", "estimate", p.toString(), "--usl", "3");
+    }
+
+    @Test
+    void unequalSizesRefusedForRanges() throws IOException {
+        Path p = Files.writeString(dir.resolve("u.csv"), "x1,x2,x3\n1,2,3\n2,3,\n1,2,2\n");
+        refused("R-bar/d2 needs equal subgroup sizes", "estimate", p.toString(), "--usl", "9", "--sigma", "rbar");
+    }
+
+    @Test
+    void badOptions() throws IOException {
+        refused("unknown sigma method 'foo'", "estimate", shaft().toString(), "--usl", "12.03", "--sigma", "foo");
+    }
+
+    @Test
+    void badConfidence() throws IOException {
+        refused("confidence must lie between 0.5 and 0.9999", "estimate", shaft().toString(), "--usl", "12.03",
+                "--confidence", "1.5");
+    }
+}
