@@ -1,0 +1,143 @@
+package dev.proofrun.grade;
+
+import dev.proofrun.control.ChartKind;
+import dev.proofrun.control.ChartPair;
+import dev.proofrun.control.ControlCharts;
+import dev.proofrun.control.RunRule;
+import dev.proofrun.control.RunRules;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Set;
+import org.apache.commons.rng.UniformRandomProvider;
+import org.apache.commons.rng.sampling.distribution.ZigguratSampler;
+import org.apache.commons.rng.simple.RandomSource;
+import org.hipparchus.distribution.continuous.NormalDistribution;
+
+/**
+ * How many signals a stable process gives by chance on a study's charts, found by simulation: stable
+ * normal subgroups of the study's size and number, with limits estimated from each simulated study as the
+ * real one estimates them (so the estimation of the limits is part of the chance), scanned with the same
+ * rules. The count that matters is the number of <em>points</em> at which some rule fires (a long run fires
+ * at several points in a row, so counts of points cluster; the simulation keeps that).
+ *
+ * <p>Work is bounded: about {@value #READINGS_BUDGET} simulated readings. When fewer than
+ * {@value #BLOCKS} whole studies fit the budget, {@value #BLOCKS} shorter series ("blocks") of kb subgroups
+ * are simulated instead and their mean and variance scaled by k/kb (counts over a long series are sums of
+ * many weakly dependent blocks; the limits of a block of thousands of subgroups are as good as known).
+ * With fewer than {@value #EMPIRICAL_STUDIES} simulated studies the tail probability comes from a normal
+ * approximation with the simulated (scaled) mean and variance; otherwise it is the empirical share of
+ * simulated studies with at least the observed count. Seeded: the same study gives the same figures.
+ */
+final class ChanceSignals {
+
+    static final long READINGS_BUDGET = 3_000_000L;
+    static final int BLOCKS = 64;
+    static final int MAX_STUDIES = 2000;
+    static final int EMPIRICAL_STUDIES = 400;
+    private static final long SEED = 0x5eed_6a1eL;
+
+    /** Simulated counts for the location and the spread chart. */
+    private final double[] location;
+    private final double[] spread;
+
+    /** k/kb when blocks were simulated, 1 otherwise. */
+    private final double scale;
+
+    private ChanceSignals(double[] location, double[] spread, double scale) {
+        this.location = location;
+        this.spread = spread;
+        this.scale = scale;
+    }
+
+    /**
+     * Simulates stable studies like the real one.
+     *
+     * @param kind  the charts
+     * @param n     subgroup size
+     * @param k     number of subgroups
+     * @param rules the rules on the location chart
+     */
+    static ChanceSignals simulate(ChartKind kind, int n, int k, Set<RunRule> rules) {
+        long perStudy = (long) n * k;
+        int studies = (int) Math.min(MAX_STUDIES, READINGS_BUDGET / Math.max(1, perStudy));
+        int length = k;
+        double scale = 1;
+        if (studies < BLOCKS) {
+            studies = BLOCKS;
+            length = (int) Math.min(k, Math.max(2, READINGS_BUDGET / ((long) BLOCKS * n)));
+            scale = k / (double) length;
+        }
+        UniformRandomProvider rng = RandomSource.XO_RO_SHI_RO_128_PP.create(SEED ^ ((long) n << 32) ^ k);
+        ZigguratSampler.NormalizedGaussian g = ZigguratSampler.NormalizedGaussian.of(rng);
+        double[] loc = new double[studies];
+        double[] spr = new double[studies];
+        for (int s = 0; s < studies; s++) {
+            List<double[]> groups = new ArrayList<>(length);
+            for (int i = 0; i < length; i++) {
+                double[] x = new double[n];
+                for (int j = 0; j < n; j++) {
+                    x[j] = g.sample();
+                }
+                groups.add(x);
+            }
+            ChartPair p = ControlCharts.of(kind, groups, rules);
+            loc[s] = RunRules.signalledPoints(p.location().z(), rules);
+            spr[s] = p.spread().signals().size();
+        }
+        return new ChanceSignals(loc, spr, scale);
+    }
+
+    double expectedLocation() {
+        return mean(location) * scale;
+    }
+
+    double expectedSpread() {
+        return mean(spread) * scale;
+    }
+
+    /** P(a stable study signals at ≥ observed points of the location chart). */
+    double locationTail(int observed) {
+        return tail(location, observed);
+    }
+
+    /** P(a stable study has ≥ observed points beyond the spread chart's limits). */
+    double spreadTail(int observed) {
+        return tail(spread, observed);
+    }
+
+    private static double mean(double[] a) {
+        double s = 0;
+        for (double v : a) {
+            s += v;
+        }
+        return s / a.length;
+    }
+
+    private double tail(double[] counts, int observed) {
+        if (observed <= 0) {
+            return 1.0;
+        }
+        if (scale == 1 && counts.length >= EMPIRICAL_STUDIES) {
+            int at = 0;
+            for (double c : counts) {
+                if (c >= observed) {
+                    at++;
+                }
+            }
+            // (at + 1)/(studies + 1): never exactly zero from a finite simulation
+            return (at + 1.0) / (counts.length + 1.0);
+        }
+        double m0 = mean(counts);
+        double v = 0;
+        for (double c : counts) {
+            v += (c - m0) * (c - m0);
+        }
+        v = v / (counts.length - 1) * scale;
+        double m = m0 * scale;
+        double sd = Math.sqrt(Math.max(v, m)); // at least Poisson spread
+        if (!(sd > 0)) {
+            return observed > m ? 0.0 : 1.0;
+        }
+        return new NormalDistribution(0, 1).cumulativeProbability(-(observed - 0.5 - m) / sd);
+    }
+}

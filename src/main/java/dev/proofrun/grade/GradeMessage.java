@@ -1,0 +1,67 @@
+package dev.proofrun.grade;
+
+import dev.proofrun.text.MessageKey;
+
+/** What the grading tells people: problems in returned files, reasons for verdicts, the caution. */
+public enum GradeMessage implements MessageKey {
+    // the file as a whole (fatal: a UserException)
+    FILE_UNREADABLE("cannot read the file: %s"),
+    UNSUPPORTED_FORMAT("unsupported file type '%s': use .csv or .xlsx"),
+    NO_HEADER("no header row: expected plan,slot,characteristic,planned,taken,lot,operator,x1..xn,remark or plan,slot,characteristic,taken,value"),
+    MISSING_COLUMN("the header has no column '%s'"),
+    NO_READING_COLUMNS("the header has neither a 'value' column nor reading columns x1, x2, ..."),
+    PLAN_MISMATCH("the file was written for plan %s, but the plan given is %s; the plan wins: grade the file against its own plan"),
+    NO_ROWS("the file has no data rows"),
+    // rows and cells
+    UNKNOWN_SLOT("slot '%s' is not in the plan; the row is not used"),
+    UNKNOWN_CHARACTERISTIC("characteristic '%s' is not in the plan; the row is not used"),
+    DUPLICATE_ROW("slot %s of %s appears again (first at row %d); this row is not used"),
+    MISSING_SLOT("slot %s of %s did not come back"),
+    MISSING_READINGS("slot %s of %s has %d of %d readings; the subgroup is not graded"),
+    EXTRA_READINGS("slot %s of %s has %d readings, the plan asks for %d; the subgroup is not graded"),
+    NOT_NUMERIC("'%s' is not a number; the reading is missing"),
+    OFF_RESOLUTION("%s is not a multiple of the gauge's resolution %s; kept"),
+    IMPLAUSIBLE("%s lies more than one tolerance width beyond the limits (%s to %s): probably a typing error; kept and graded, check it"),
+    TAKEN_UNREADABLE("'%s' is not a time (ISO-8601, yyyy-MM-dd HH:mm, or HH:mm on the planned day)"),
+    TAKEN_OUTSIDE_WINDOW("taken %s, outside the slot's window %s to %s; kept"),
+    OUT_OF_ORDER("slot %s was taken %s, before slot %s (taken %s); kept"),
+    MORE_LIKE_THIS("%d more problems like the one at %s (%s) are not listed"),
+    // reasons
+    REASON_COMPLETE("Complete: %d of %d planned subgroups of %d came back usable (%d readings)."),
+    REASON_SHORT_ALLOWED("Usable: %d of %d planned subgroups (the plan allows %d unusable); %d incomplete, %d missing."),
+    REASON_SHORT("Not complete: only %d of %d planned subgroups are usable (the plan allows %d unusable); %d incomplete, %d missing."),
+    REASON_LATE("%d subgroups were taken outside their slot's window or out of order; they are graded, but the spread over time may differ from the plan."),
+    REASON_FLAGGED("%d readings are flagged (off the gauge's resolution or probably mistyped) and were kept."),
+    REASON_STABLE_QUIET("Stable: no run rule fired on the %s chart or the %s chart (%d subgroups; about %.2f chance signals expected from a stable process)."),
+    REASON_STABLE_CHANCE("Stable: %d signalled points on the %s chart and %d on the %s chart, within what chance explains for %d subgroups and these rules (about %.2f and %.2f expected; P = %.3f and %.3f). Signals: %s."),
+    REASON_UNSTABLE_SIGNALS("Unstable: %d signalled points on the %s chart and %d on the %s chart, more than chance explains for %d subgroups (about %.2f and %.2f expected; P = %.2g and %.2g). Signals: %s."),
+    REASON_UNSTABLE_BETWEEN("Unstable: the subgroup means vary more than the variation within explains: sigma overall/within = %.2f, ANOVA F = %.2f, p = %.2g; Cpk then overstates what the process delivers."),
+    REASON_RATIO("Sigma overall/within = %.2f (ANOVA F = %.2f, p = %.2g)."),
+    REASON_RATIO_INDIVIDUALS("Sigma overall/within = %.2f (individuals: no ANOVA)."),
+    REASON_TOO_FEW_FOR_CHARTS("Fewer than 2 usable subgroups: no control chart, no capability."),
+    REASON_NORMAL("Shape: normal model fair (Anderson-Darling A2 = %.3f, p = %.3f)."),
+    REASON_NOT_NORMAL_MODEL("Shape: normality rejected (A2 = %.3f, p = %.2g); the %s model fits best (%s) and the capability is computed under it."),
+    REASON_NO_MODEL("Shape: normality rejected (A2 = %.3f, p = %.2g) and neither Box-Cox, lognormal nor Weibull fits; no capability statement can be made."),
+    REASON_TOO_FEW_FOR_SHAPE("Shape: too few readings (%d) to judge the distribution."),
+    REASON_DEMONSTRATED("Capability: %s = %.3f, lower %.0f%% bound %.3f >= %.2f required: demonstrated."),
+    REASON_INCONCLUSIVE("Capability: %s = %.3f reaches %.2f, but the lower %.0f%% bound is %.3f: not yet shown."),
+    REASON_MORE_SUBGROUPS("About %d more subgroups (%s at the plan's frequency) would settle it if the estimate holds."),
+    REASON_NO_AMOUNT_SETTLES("No reasonable number of extra subgroups settles it: the estimate is too close to the requirement."),
+    REASON_NOT_DEMONSTRATED("Capability: %s = %.3f is below %.2f required (upper %.0f%% bound %.3f)."),
+    REASON_EVEN_UPPER_BELOW("Even the upper bound is below the requirement: the process does not reach it."),
+    REASON_UPPER_ABOVE("The upper bound is above the requirement: the process might reach it, this study does not show it."),
+    REASON_INDEX_UNDEFINED("Capability: %s is not defined for this specification."),
+    REASON_CAPABILITY_NOT_VALID("Capability: %s = %.3f (lower bound %.3f) describes the study's past, not the process."),
+    CAUTION("Caution: a statistical statement under assumptions (stability, independence, the fitted distribution, a capable gauge). It does not replace the customer's requirements, applicable standards or local codes, licensed practice, or the extra controls that safety-critical characteristics need.");
+
+    private final String english;
+
+    GradeMessage(String english) {
+        this.english = english;
+    }
+
+    @Override
+    public String english() {
+        return english;
+    }
+}

@@ -1,0 +1,31 @@
+package dev.proofrun.grade;
+
+import dev.proofrun.design.Requirement;
+import dev.proofrun.stats.SpecLimits;
+import java.util.Locale;
+import java.util.Objects;
+
+/**
+ * A characteristic as the plan states it, for grading.
+ *
+ * @param id          as on the drawing or inspection list, e.g. "D1"
+ * @param name        e.g. "bore diameter"
+ * @param unit        e.g. "mm"
+ * @param limits      the specification limits
+ * @param nominal     the target for Cpm, or {@code null} (then the midpoint of two-sided limits)
+ * @param resolution  the gauge's resolution (smallest step it shows), or 0 when not stated
+ * @param requirement what must be shown
+ */
+public record GradedCharacteristic(String id, String name, String unit, SpecLimits limits, Double nominal,
+        double resolution, Requirement requirement) {
+
+    /** @throws IllegalArgumentException if the resolution is negative or not finite */
+    public GradedCharacteristic {
+        Objects.requireNonNull(id, "id");
+        Objects.requireNonNull(limits, "limits");
+        Objects.requireNonNull(requirement, "requirement");
+        if (!(resolution >= 0) || !Double.isFinite(resolution)) {
+            throw new IllegalArgumentException(String.format(Locale.ROOT, "resolution must be zero or positive: %s", resolution));
+        }
+    }
+}

@@ -1,0 +1,310 @@
+package dev.proofrun.grade;
+
+import dev.proofrun.text.Location;
+import dev.proofrun.text.UserException;
+import java.time.ZonedDateTime;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.TreeMap;
+
+/**
+ * Collects a returned table against its plan, row by row, into primitive arrays per characteristic (no row
+ * objects are kept, so a million readings fit in a small heap), and records every problem with its file,
+ * row and column.
+ *
+ * <p>Two layouts, told apart by the header: the fill-in form (one row per slot and characteristic with
+ * readings in {@code x1..xn}) and the long form automatic gauges write (one reading per row in
+ * {@code value}). Columns are found by header name, in any order and any letter case. Rules:
+ * <ul>
+ * <li>A {@code plan} cell other than the plan's "id@revision" refuses the whole file (the plan wins);
+ *     a blank plan cell is accepted.</li>
+ * <li>Unknown slot or characteristic: the row is not used (error). In the fill-in form a second row for
+ *     the same slot and characteristic is not used (error).</li>
+ * <li>A non-numeric reading is missing (error); a subgroup with fewer or more readings than the plan's n is
+ *     not graded (error) — a reading is never moved between subgroups.</li>
+ * <li>Kept but flagged (warning): a reading not on the gauge's resolution; a reading more than one tolerance
+ *     width beyond a limit (probable typing error — for a one-sided specification the width is the distance
+ *     from the limit to the nominal, and without a nominal no such check is made); a subgroup taken
+ *     outside its slot's window or before the slot planned ahead of it.</li>
+ * </ul>
+ */
+final class ReturnedData implements RowHandler {
+
+    private static final double RESOLUTION_SLACK = 1e-6;
+
+    private final GradingPlan plan;
+    private final String display;
+    private final Map<String, Integer> slotIndex;
+    private final Map<String, Integer> characteristicIndex = new HashMap<>();
+    private final Collected[] collected;
+    private final ProblemLog log = new ProblemLog();
+    private final int n;
+
+    private boolean longForm;
+    private int planCol = -1;
+    private int slotCol = -1;
+    private int characteristicCol = -1;
+    private int takenCol = -1;
+    private int valueCol = -1;
+    private int[] readingCols;
+    private String[] header;
+    private long rows;
+
+    ReturnedData(GradingPlan plan, String display) {
+        this.plan = plan;
+        this.display = display;
+        this.slotIndex = plan.slotIndex();
+        this.n = plan.design().subgroupSize();
+        this.collected = new Collected[plan.characteristics().size()];
+        for (int c = 0; c < collected.length; c++) {
+            characteristicIndex.put(plan.characteristics().get(c).id(), c);
+            collected[c] = new Collected(plan.slots().size(), n);
+        }
+    }
+
+    @Override
+    public void header(long row, String[] cells) {
+        header = cells;
+        TreeMap<Integer, Integer> readings = new TreeMap<>();
+        for (int i = 0; i < cells.length; i++) {
+            String h = cells[i].toLowerCase(Locale.ROOT);
+            switch (h) {
+                case "plan": planCol = i; break;
+                case "slot": slotCol = i; break;
+                case "characteristic": characteristicCol = i; break;
+                case "taken": takenCol = i; break;
+                case "value": valueCol = i; break;
+                default:
+                    if (h.length() > 1 && h.charAt(0) == 'x' && h.substring(1).chars().allMatch(Character::isDigit)) {
+                        readings.put(Integer.parseInt(h.substring(1)), i);
+                    }
+            }
+        }
+        if (slotCol < 0 && characteristicCol < 0 && valueCol < 0 && readings.isEmpty()) {
+            throw new UserException(Location.cell(display, row, null), GradeMessage.NO_HEADER);
+        }
+        for (String[] need : new String[][] {{"slot", String.valueOf(slotCol)}, {"characteristic", String.valueOf(characteristicCol)}}) {
+            if (Integer.parseInt(need[1]) < 0) {
+                throw new UserException(Location.cell(display, row, null), GradeMessage.MISSING_COLUMN, need[0]);
+            }
+        }
+        if (valueCol < 0 && readings.isEmpty()) {
+            throw new UserException(Location.cell(display, row, null), GradeMessage.NO_READING_COLUMNS);
+        }
+        longForm = valueCol >= 0 && readings.isEmpty();
+        readingCols = readings.values().stream().mapToInt(Integer::intValue).toArray();
+    }
+
+    private String cell(String[] cells, int count, int col) {
+        return col >= 0 && col < count ? cells[col] : "";
+    }
+
+    private String name(int col) {
+        return header[col];
+    }
+
+    @Override
+    public void row(long row, String[] cells, int count) {
+        rows++;
+        String planCell = cell(cells, count, planCol);
+        if (!planCell.isEmpty() && !planCell.equals(plan.reference())) {
+            throw new UserException(Location.cell(display, row, name(planCol)), GradeMessage.PLAN_MISMATCH, planCell, plan.reference());
+        }
+        String charCell = cell(cells, count, characteristicCol);
+        Integer ci = characteristicIndex.get(charCell);
+        if (ci == null) {
+            log.add(Location.cell(display, row, name(characteristicCol)), Severity.ERROR, null, GradeMessage.UNKNOWN_CHARACTERISTIC, charCell);
+            return;
+        }
+        String id = plan.characteristics().get(ci).id();
+        String slotCell = cell(cells, count, slotCol);
+        Integer si = slotIndex.get(slotCell);
+        if (si == null) {
+            log.add(Location.cell(display, row, name(slotCol)), Severity.ERROR, id, GradeMessage.UNKNOWN_SLOT, slotCell);
+            return;
+        }
+        Collected col = collected[ci];
+        if (longForm) {
+            if (col.row[si] == 0) {
+                col.row[si] = row;
+                taken(col, si, row, cells, count, id);
+            }
+            reading(col, ci, si, row, cell(cells, count, valueCol), valueCol, id);
+            return;
+        }
+        if (col.row[si] != 0) {
+            log.add(Location.cell(display, row, name(slotCol)), Severity.ERROR, id, GradeMessage.DUPLICATE_ROW,
+                    slotCell, id, col.row[si]);
+            return;
+        }
+        col.row[si] = row;
+        taken(col, si, row, cells, count, id);
+        for (int j = 0; j < readingCols.length; j++) {
+            int c = readingCols[j];
+            String text = cell(cells, count, c);
+            if (!text.isEmpty()) {
+                reading(col, ci, si, row, text, c, id);
+            }
+        }
+    }
+
+    private void taken(Collected col, int si, long row, String[] cells, int count, String id) {
+        String text = cell(cells, count, takenCol);
+        if (text.isEmpty()) {
+            return;
+        }
+        PlannedSlot slot = plan.slots().get(si);
+        ZonedDateTime t = Cells.taken(text, plan.zone(), slot.start().withZoneSameInstant(plan.zone()).toLocalDate());
+        if (t == null) {
+            log.add(Location.cell(display, row, name(takenCol)), Severity.WARNING, id, GradeMessage.TAKEN_UNREADABLE, text);
+            return;
+        }
+        col.taken[si] = t.toEpochSecond();
+        if (t.isBefore(slot.begin()) || t.isAfter(slot.end())) {
+            col.late[si] = true;
+            log.add(Location.cell(display, row, name(takenCol)), Severity.WARNING, id, GradeMessage.TAKEN_OUTSIDE_WINDOW,
+                    text, slot.begin().toOffsetDateTime(), slot.end().toOffsetDateTime());
+        }
+    }
+
+    private void reading(Collected col, int ci, int si, long row, String text, int column, String id) {
+        double v = Cells.number(text);
+        if (Double.isNaN(v)) {
+            col.spoiled[si] = true;
+            log.add(Location.cell(display, row, name(column)), Severity.ERROR, id, GradeMessage.NOT_NUMERIC, text);
+            return;
+        }
+        GradedCharacteristic gc = plan.characteristics().get(ci);
+        boolean flagged = false;
+        double res = gc.resolution();
+        if (res > 0) {
+            double steps = v / res;
+            if (Math.abs(steps - Math.rint(steps)) > RESOLUTION_SLACK * Math.max(1, Math.abs(steps))) {
+                flagged = true;
+                log.add(Location.cell(display, row, name(column)), Severity.WARNING, id, GradeMessage.OFF_RESOLUTION,
+                        text, Cells.show(res));
+            }
+        }
+        if (implausible(gc, v)) {
+            flagged = true;
+            log.add(Location.cell(display, row, name(column)), Severity.WARNING, id, GradeMessage.IMPLAUSIBLE, text,
+                    gc.limits().lower().isPresent() ? Cells.show(gc.limits().lower().getAsDouble()) : "-",
+                    gc.limits().upper().isPresent() ? Cells.show(gc.limits().upper().getAsDouble()) : "-");
+        }
+        if (flagged) {
+            col.flagged++;
+        }
+        int k = col.count[si];
+        if (k < n) {
+            col.values[si * n + k] = v;
+        }
+        col.count[si] = k + 1;
+    }
+
+    private static boolean implausible(GradedCharacteristic gc, double v) {
+        double width;
+        if (gc.limits().isTwoSided()) {
+            width = gc.limits().width().getAsDouble();
+        } else if (gc.nominal() != null) {
+            double limit = gc.limits().lower().isPresent() ? gc.limits().lower().getAsDouble() : gc.limits().upper().getAsDouble();
+            width = Math.abs(limit - gc.nominal());
+            if (!(width > 0)) {
+                return false;
+            }
+        } else {
+            return false;
+        }
+        return (gc.limits().lower().isPresent() && v < gc.limits().lower().getAsDouble() - width)
+                || (gc.limits().upper().isPresent() && v > gc.limits().upper().getAsDouble() + width);
+    }
+
+    /** Rows read (not blank, header excluded). */
+    long rows() {
+        return rows;
+    }
+
+    /** Finishes one characteristic: which subgroups are graded, and the problems of missing, short and late ones. */
+    Collection finish(int ci) {
+        Collected col = collected[ci];
+        String id = plan.characteristics().get(ci).id();
+        int k = plan.slots().size();
+        List<double[]> subgroups = new ArrayList<>();
+        List<String> slots = new ArrayList<>();
+        int missing = 0;
+        int incomplete = 0;
+        int lateCount = 0;
+        int previous = -1;
+        for (int s = 0; s < k; s++) {
+            String slotId = plan.slots().get(s).id();
+            if (col.row[s] == 0) {
+                missing++;
+                log.add(Location.file(display), Severity.ERROR, id, GradeMessage.MISSING_SLOT, slotId, id);
+                continue;
+            }
+            boolean late = col.late[s];
+            if (col.taken[s] != Long.MIN_VALUE) {
+                if (previous >= 0 && col.taken[s] < col.taken[previous]) {
+                    late = true;
+                    log.add(Location.cell(display, col.row[s], takenCol >= 0 ? name(takenCol) : null), Severity.WARNING, id,
+                            GradeMessage.OUT_OF_ORDER, slotId, java.time.Instant.ofEpochSecond(col.taken[s]).atZone(plan.zone()).toOffsetDateTime(),
+                            plan.slots().get(previous).id(),
+                            java.time.Instant.ofEpochSecond(col.taken[previous]).atZone(plan.zone()).toOffsetDateTime());
+                }
+                previous = s;
+            }
+            if (late) {
+                lateCount++;
+            }
+            int c = col.count[s];
+            if (c < n || col.spoiled[s]) {
+                incomplete++;
+                log.add(Location.cell(display, col.row[s], null), Severity.ERROR, id, GradeMessage.MISSING_READINGS,
+                        slotId, id, c, n);
+            } else if (c > n) {
+                incomplete++;
+                log.add(Location.cell(display, col.row[s], null), Severity.ERROR, id, GradeMessage.EXTRA_READINGS, slotId, id, c, n);
+            } else {
+                double[] g = new double[n];
+                System.arraycopy(col.values, s * n, g, 0, n);
+                subgroups.add(g);
+                slots.add(slotId);
+            }
+        }
+        Completeness completeness = new Completeness(k, n, subgroups.size(), incomplete, missing,
+                (long) subgroups.size() * n, col.flagged, lateCount, plan.allowedShortfall());
+        return new Collection(completeness, subgroups, slots);
+    }
+
+    /** All problems so far, in the order found, then the counts of those not listed. */
+    List<Problem> problems() {
+        return log.all(display);
+    }
+
+    /** One characteristic's graded subgroups. */
+    record Collection(Completeness completeness, List<double[]> subgroups, List<String> slots) {
+    }
+
+    /** Per-slot state of one characteristic, in primitive arrays. */
+    private static final class Collected {
+        final double[] values;
+        final int[] count;
+        final long[] row;
+        final long[] taken;
+        final boolean[] spoiled;
+        final boolean[] late;
+        int flagged;
+
+        Collected(int k, int n) {
+            values = new double[k * n];
+            count = new int[k];
+            row = new long[k];
+            taken = new long[k];
+            java.util.Arrays.fill(taken, Long.MIN_VALUE);
+            spoiled = new boolean[k];
+            late = new boolean[k];
+        }
+    }
+}

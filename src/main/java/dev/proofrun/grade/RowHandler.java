@@ -1,0 +1,22 @@
+package dev.proofrun.grade;
+
+/** Receives a returned table one row at a time, so large files never sit in memory. */
+interface RowHandler {
+
+    /**
+     * The first non-blank row.
+     *
+     * @param row   its 1-based row number as a spreadsheet shows it
+     * @param cells the header cells, trimmed
+     */
+    void header(long row, String[] cells);
+
+    /**
+     * A data row that is not blank. The array may be reused for the next row; copy what you keep.
+     *
+     * @param row   its 1-based row number
+     * @param cells the cells, trimmed; {@code count} of them are valid, missing trailing cells are absent
+     * @param count how many cells the row has
+     */
+    void row(long row, String[] cells, int count);
+}
