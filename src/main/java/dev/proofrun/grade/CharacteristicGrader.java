@@ -1,0 +1,119 @@
+package dev.proofrun.grade;
+
+import dev.proofrun.control.ChartKind;
+import dev.proofrun.design.Design;
+import dev.proofrun.design.Requirement;
+import java.time.Duration;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.OptionalInt;
+
+/**
+ * Grades one characteristic from its usable subgroups: completeness, stability, shape, capability, then the
+ * verdict with its reasons in that order.
+ *
+ * <p>Verdict rules (first that applies): not valid when the shortfall exceeds the plan's allowance, when
+ * fewer than 2 subgroups are usable, when the process is unstable ({@link StabilityJudge}), when no
+ * distribution model fits ({@link ShapeJudge}) or when the required index does not exist for the
+ * (transformed) limits; not demonstrated when the estimate is below c₀; demonstrated when the lower bound is
+ * at or above c₀; otherwise inconclusive, with about how many more subgroups would settle it. When the
+ * process is unstable the capability is still computed and shown, labelled as describing the past.
+ */
+final class CharacteristicGrader {
+
+    private CharacteristicGrader() {
+    }
+
+    static CharacteristicGrade grade(GradedCharacteristic gc, Design design, Duration interval, ReturnedData.Collection data) {
+        Completeness c = data.completeness();
+        List<double[]> subgroups = data.subgroups();
+        Requirement req = gc.requirement();
+        List<Reason> reasons = new ArrayList<>();
+        boolean valid = true;
+
+        if (c.adequate() && c.shortfall() == 0) {
+            reasons.add(new Reason(Step.COMPLETENESS, false, GradeMessage.REASON_COMPLETE.format(c.completeSubgroups(),
+                    c.plannedSubgroups(), c.subgroupSize(), c.readings())));
+        } else if (c.adequate()) {
+            reasons.add(new Reason(Step.COMPLETENESS, false, GradeMessage.REASON_SHORT_ALLOWED.format(c.completeSubgroups(),
+                    c.plannedSubgroups(), c.allowedShortfall(), c.incompleteSubgroups(), c.missingSubgroups())));
+        } else {
+            valid = false;
+            reasons.add(new Reason(Step.COMPLETENESS, true, GradeMessage.REASON_SHORT.format(c.completeSubgroups(),
+                    c.plannedSubgroups(), c.allowedShortfall(), c.incompleteSubgroups(), c.missingSubgroups())));
+        }
+        if (c.lateSubgroups() > 0) {
+            reasons.add(new Reason(Step.COMPLETENESS, false, GradeMessage.REASON_LATE.format(c.lateSubgroups())));
+        }
+        if (c.flaggedReadings() > 0) {
+            reasons.add(new Reason(Step.COMPLETENESS, false, GradeMessage.REASON_FLAGGED.format(c.flaggedReadings())));
+        }
+        if (subgroups.size() < 2) {
+            reasons.add(new Reason(Step.STABILITY, true, GradeMessage.REASON_TOO_FEW_FOR_CHARTS.format()));
+            return new CharacteristicGrade(gc.id(), gc.name(), gc.unit(), gc.limits(), req, c, subgroups, data.slots(),
+                    null, null, null, Verdict.NOT_VALID, reasons, OptionalInt.empty());
+        }
+
+        Stability stability = StabilityJudge.judge(ChartKind.forMethod(design.sigmaMethod()), subgroups, data.slots(), reasons);
+        valid &= stability.stable();
+        Shape shape = ShapeJudge.judge(subgroups, reasons);
+        valid &= shape.modelFits();
+
+        JudgedIndex judged = shape.modelFits() || shape.normal() ? CapabilityJudge.judge(gc, design, subgroups, shape) : null;
+        String symbol = req.index().symbol();
+        if (judged == null) {
+            if (shape.modelFits()) {
+                reasons.add(new Reason(Step.CAPABILITY, true, GradeMessage.REASON_INDEX_UNDEFINED.format(symbol)));
+            }
+            return new CharacteristicGrade(gc.id(), gc.name(), gc.unit(), gc.limits(), req, c, subgroups, data.slots(),
+                    stability, shape, null, Verdict.NOT_VALID, reasons, OptionalInt.empty());
+        }
+        double conf = req.confidence();
+        double c0 = req.minimum();
+        IndexEvidence ev = judged.evidence(req, shape.model());
+        double percent = 100 * conf;
+        Verdict verdict;
+        OptionalInt more = OptionalInt.empty();
+        if (!valid) {
+            verdict = Verdict.NOT_VALID;
+            reasons.add(new Reason(Step.CAPABILITY, false,
+                    GradeMessage.REASON_CAPABILITY_NOT_VALID.format(symbol, ev.estimate(), ev.lower())));
+        } else if (ev.estimate() < c0) {
+            verdict = Verdict.NOT_DEMONSTRATED;
+            reasons.add(new Reason(Step.CAPABILITY, true,
+                    GradeMessage.REASON_NOT_DEMONSTRATED.format(symbol, ev.estimate(), c0, percent, ev.upper())));
+            reasons.add(new Reason(Step.CAPABILITY, false, ev.upper() < c0
+                    ? GradeMessage.REASON_EVEN_UPPER_BELOW.format() : GradeMessage.REASON_UPPER_ABOVE.format()));
+        } else if (ev.lower() >= c0) {
+            verdict = Verdict.DEMONSTRATED;
+            reasons.add(new Reason(Step.CAPABILITY, true,
+                    GradeMessage.REASON_DEMONSTRATED.format(symbol, ev.estimate(), percent, ev.lower(), c0)));
+        } else {
+            verdict = Verdict.INCONCLUSIVE;
+            reasons.add(new Reason(Step.CAPABILITY, true,
+                    GradeMessage.REASON_INCONCLUSIVE.format(symbol, ev.estimate(), c0, percent, ev.lower())));
+            more = CapabilityJudge.additionalSubgroups(judged, design, subgroups.size(), c0, conf);
+            if (more.isPresent()) {
+                reasons.add(new Reason(Step.CAPABILITY, false,
+                        GradeMessage.REASON_MORE_SUBGROUPS.format(more.getAsInt(), span(interval.multipliedBy(more.getAsInt())))));
+            } else {
+                reasons.add(new Reason(Step.CAPABILITY, false, GradeMessage.REASON_NO_AMOUNT_SETTLES.format()));
+            }
+        }
+        return new CharacteristicGrade(gc.id(), gc.name(), gc.unit(), gc.limits(), req, c, subgroups, data.slots(),
+                stability, shape, ev, verdict, reasons, more);
+    }
+
+    /** "about 6 h 30 min of running time". */
+    static String span(Duration d) {
+        long minutes = Math.round(d.getSeconds() / 60.0);
+        if (minutes < 60) {
+            return String.format(Locale.ROOT, "about %d min of running time", minutes);
+        }
+        long h = minutes / 60;
+        long m = minutes % 60;
+        return m == 0 ? String.format(Locale.ROOT, "about %d h of running time", h)
+                : String.format(Locale.ROOT, "about %d h %d min of running time", h, m);
+    }
+}

@@ -1,0 +1,97 @@
+package dev.proofrun.grade;
+
+import dev.proofrun.design.Requirement;
+import dev.proofrun.stats.BoundMethod;
+import dev.proofrun.stats.CapabilityBounds;
+import dev.proofrun.stats.IndexKind;
+import dev.proofrun.stats.SpecLimits;
+
+/**
+ * The required index estimated from one set of readings (on the scale of the chosen model), with what its
+ * confidence bounds need, so the bounds can be recomputed for a larger study ({@link #lowerAt}).
+ *
+ * <p>Bounds, by the kind of index: Cp/Pp exact chi-square, Ĉ·sqrt(χ²_{α,ν}/ν); one-sided Cpu/Cpl/Ppu/Ppl
+ * (and Cpk/Ppk of a one-sided specification) exact noncentral t; two-sided Cpk/Ppk by the plan's bound
+ * method (exact, centring from the data, or Bissell) — all from {@link CapabilityBounds}. For the Weibull
+ * percentile indices no exact theory exists: Cp-like indices use the chi-square bound with ν = N − 1 and the
+ * others Bissell's approximation with ν = N − 1 (an approximation, named in the reasons by the model).
+ *
+ * @param kind       the required index
+ * @param estimate   its estimate
+ * @param cp         Ĉp (Ĉpp for the overall family) for the exact two-sided Cpk bound, NaN when one-sided
+ * @param readings   N
+ * @param df         ν of the sigma estimate behind it
+ * @param side       which formula the bounds use
+ * @param method     the plan's bound method
+ */
+record JudgedIndex(IndexKind kind, double estimate, double cp, int readings, double df, BoundSide side, BoundMethod method) {
+
+    /** Which bound formula applies. */
+    enum BoundSide { POTENTIAL, ONE_SIDED, TWO_SIDED, APPROXIMATE_POTENTIAL, APPROXIMATE }
+
+    /** The index from a mean, a sigma and the limits; NaN when it does not exist for these limits. */
+    static double value(IndexKind kind, SpecLimits limits, double mean, double sigma) {
+        double cpu = limits.upper().isPresent() ? (limits.upper().getAsDouble() - mean) / (3 * sigma) : Double.NaN;
+        double cpl = limits.lower().isPresent() ? (mean - limits.lower().getAsDouble()) / (3 * sigma) : Double.NaN;
+        switch (kind.side()) {
+            case BOTH:
+                return limits.isTwoSided() ? limits.width().getAsDouble() / (6 * sigma) : Double.NaN;
+            case UPPER:
+                return cpu;
+            case LOWER:
+                return cpl;
+            default:
+                return limits.isTwoSided() ? Math.min(cpu, cpl) : (Double.isNaN(cpu) ? cpl : cpu);
+        }
+    }
+
+    static BoundSide sideFor(IndexKind kind, SpecLimits limits) {
+        switch (kind.side()) {
+            case BOTH:
+                return BoundSide.POTENTIAL;
+            case UPPER:
+            case LOWER:
+                return BoundSide.ONE_SIDED;
+            default:
+                return limits.isTwoSided() ? BoundSide.TWO_SIDED : BoundSide.ONE_SIDED;
+        }
+    }
+
+    double lower(double confidence) {
+        return lowerAt(readings, df, confidence);
+    }
+
+    double upper(double confidence) {
+        switch (side) {
+            case POTENTIAL:
+            case APPROXIMATE_POTENTIAL:
+                return CapabilityBounds.upperCp(estimate, df, confidence);
+            case ONE_SIDED:
+                return CapabilityBounds.upperOneSided(estimate, readings, df, confidence);
+            case TWO_SIDED:
+                return CapabilityBounds.upperCpk(estimate, cp, readings, df, confidence, method);
+            default:
+                return CapabilityBounds.upperCpk(estimate, Double.NaN, readings, df, confidence, BoundMethod.BISSELL);
+        }
+    }
+
+    /** The lower bound a study of {@code n} readings and ν = {@code nu} would give with the same estimates. */
+    double lowerAt(int n, double nu, double confidence) {
+        switch (side) {
+            case POTENTIAL:
+            case APPROXIMATE_POTENTIAL:
+                return CapabilityBounds.lowerCp(estimate, nu, confidence);
+            case ONE_SIDED:
+                return CapabilityBounds.lowerOneSided(estimate, n, nu, confidence);
+            case TWO_SIDED:
+                return CapabilityBounds.lowerCpk(estimate, cp, n, nu, confidence, method);
+            default:
+                return CapabilityBounds.lowerCpk(estimate, Double.NaN, n, nu, confidence, BoundMethod.BISSELL);
+        }
+    }
+
+    /** The evidence record for the result. */
+    IndexEvidence evidence(Requirement r, ShapeModel model) {
+        return new IndexEvidence(kind, r.minimum(), r.confidence(), estimate, lower(r.confidence()), upper(r.confidence()), model);
+    }
+}
