@@ -21,6 +21,8 @@ import picocli.CommandLine.Command;
             PlanCommand.class,
             SheetCommand.class,
             EstimateCommand.class,
+            GradeCommand.class,
+            DemoCommand.class,
         })
 public final class ProofrunCommand implements Runnable {
 

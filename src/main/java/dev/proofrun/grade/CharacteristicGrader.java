@@ -52,12 +52,13 @@ final class CharacteristicGrader {
         if (subgroups.size() < 2) {
             reasons.add(new Reason(Step.STABILITY, true, GradeMessage.REASON_TOO_FEW_FOR_CHARTS.format()));
             return new CharacteristicGrade(gc.id(), gc.name(), gc.unit(), gc.limits(), req, c, subgroups, data.slots(),
-                    null, null, null, Verdict.NOT_VALID, reasons, OptionalInt.empty());
+                    null, null, null, null, Verdict.NOT_VALID, reasons, OptionalInt.empty());
         }
 
         Stability stability = StabilityJudge.judge(ChartKind.forMethod(design.sigmaMethod()), subgroups, data.slots(), reasons);
         valid &= stability.stable();
         Shape shape = ShapeJudge.judge(subgroups, reasons);
+        CapabilityFigures figures = CapabilityFigures.of(gc, design, subgroups);
         valid &= shape.modelFits();
 
         JudgedIndex judged = shape.modelFits() || shape.normal() ? CapabilityJudge.judge(gc, design, subgroups, shape) : null;
@@ -67,7 +68,7 @@ final class CharacteristicGrader {
                 reasons.add(new Reason(Step.CAPABILITY, true, GradeMessage.REASON_INDEX_UNDEFINED.format(symbol)));
             }
             return new CharacteristicGrade(gc.id(), gc.name(), gc.unit(), gc.limits(), req, c, subgroups, data.slots(),
-                    stability, shape, null, Verdict.NOT_VALID, reasons, OptionalInt.empty());
+                    stability, shape, null, figures, Verdict.NOT_VALID, reasons, OptionalInt.empty());
         }
         double conf = req.confidence();
         double c0 = req.minimum();
@@ -102,7 +103,7 @@ final class CharacteristicGrader {
             }
         }
         return new CharacteristicGrade(gc.id(), gc.name(), gc.unit(), gc.limits(), req, c, subgroups, data.slots(),
-                stability, shape, ev, verdict, reasons, more);
+                stability, shape, ev, figures, verdict, reasons, more);
     }
 
     /** "about 6 h 30 min of running time". */

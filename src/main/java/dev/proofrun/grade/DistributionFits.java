@@ -14,7 +14,7 @@ import org.hipparchus.distribution.continuous.NormalDistribution;
  *     {@code boxcox_normmax(method='mle')} maximizes the same function).</li>
  * <li><b>Lognormal</b>: μ = mean of ln x, σ² = mean of (ln x − μ)² (divisor N): the closed-form MLE.</li>
  * <li><b>Weibull</b> (two parameters, location 0): the shape k solves
- *     Σ xᵏ ln x / Σ xᵏ − 1/k − mean(ln x) = 0 (Brent's method on [0.01, 500]); scale c = (mean xᵏ)^(1/k).</li>
+ *     Σ xᵏ ln x / Σ xᵏ − 1/k − mean(ln x) = 0 (Brent's method from 0.01 up to a widened upper end); scale c = (mean xᵏ)^(1/k).</li>
  * </ul>
  * Log-likelihoods are of the readings on their original scale (the Jacobian of a transform included), so
  * models can be compared by AIC.
@@ -135,8 +135,7 @@ final class DistributionFits {
         final double mLog = meanLog;
         final double shift = maxLog;
         // scaled by exp(-k·max ln x) against overflow; the ratio is unchanged
-        BrentSolver solver = new BrentSolver(1e-12, 1e-12);
-        double k = solver.solve(500, kk -> {
+        org.hipparchus.analysis.UnivariateFunction score = kk -> {
             double s0 = 0;
             double s1 = 0;
             for (double lv : logs) {
@@ -145,7 +144,14 @@ final class DistributionFits {
                 s1 += w * lv;
             }
             return s1 / s0 - 1 / kk - mLog;
-        }, 0.01, 500);
+        };
+        // the score rises from -inf (k -> 0) to max ln x - mean ln x > 0 (k -> inf): widen until it brackets
+        double hi = 16;
+        while (score.value(hi) < 0 && hi < 1e7) {
+            hi *= 4;
+        }
+        BrentSolver solver = new BrentSolver(1e-12, 1e-12);
+        double k = solver.solve(1000, score, 0.01, hi);
         double s0 = 0;
         for (double lv : logs) {
             s0 += Math.exp(k * (lv - shift));

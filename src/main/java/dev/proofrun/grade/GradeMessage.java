@@ -12,6 +12,8 @@ public enum GradeMessage implements MessageKey {
     NO_READING_COLUMNS("the header has neither a 'value' column nor reading columns x1, x2, ..."),
     PLAN_MISMATCH("the file was written for plan %s, but the plan given is %s; the plan wins: grade the file against its own plan"),
     NO_ROWS("the file has no data rows"),
+    PLAN_NOT_ISSUED("the plan is a draft; grade against the issued plan"),
+    DEMO_EXISTS("%s already exists; choose an empty directory"),
     // rows and cells
     UNKNOWN_SLOT("slot '%s' is not in the plan; the row is not used"),
     UNKNOWN_CHARACTERISTIC("characteristic '%s' is not in the plan; the row is not used"),

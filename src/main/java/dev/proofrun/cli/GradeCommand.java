@@ -1,0 +1,105 @@
+package dev.proofrun.cli;
+
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.SerializationFeature;
+import dev.proofrun.grade.CharacteristicGrade;
+import dev.proofrun.grade.GradeMessage;
+import dev.proofrun.text.Location;
+import dev.proofrun.text.UserException;
+import dev.proofrun.grade.GradeResult;
+import dev.proofrun.grade.Grader;
+import dev.proofrun.grade.GradingPlan;
+import dev.proofrun.grade.PlanAdapter;
+import dev.proofrun.grade.Problem;
+import dev.proofrun.grade.Reason;
+import dev.proofrun.plan.PlanFiles;
+import dev.proofrun.plan.StudyPlan;
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.UncheckedIOException;
+import java.nio.file.Path;
+import java.util.Locale;
+import java.util.concurrent.Callable;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+
+/**
+ * {@code proofrun grade PLAN.json DATA.(csv|xlsx) [--json] [--report FILE.pdf] [--require-demonstrated]}.
+ * Exit 0 when graded (whatever the verdict), 1 with {@code --require-demonstrated} when a characteristic is
+ * not demonstrated, 2 for unusable input.
+ */
+@Command(name = "grade", mixinStandardHelpOptions = true,
+        description = "Grade returned readings against their plan: completeness, stability, shape, capability, verdict.")
+public final class GradeCommand implements Callable<Integer> {
+
+    /** Exit code when --require-demonstrated and something is not demonstrated. */
+    public static final int EXIT_NOT_DEMONSTRATED = 1;
+    private static final int LISTED_PROBLEMS = 20;
+
+    @CommandLine.Spec
+    CommandLine.Model.CommandSpec spec;
+
+    @Parameters(index = "0", paramLabel = "PLAN.json", description = "The issued plan.")
+    Path planFile;
+
+    @Parameters(index = "1", paramLabel = "DATA", description = "The returned fill-in file (.csv or .xlsx) or a gauge's long-form CSV.")
+    Path dataFile;
+
+    @Option(names = "--json", description = "Print one JSON object instead of text.")
+    boolean json;
+
+    @Option(names = "--report", paramLabel = "FILE.pdf", description = "Also write the grade report as PDF.")
+    Path report;
+
+    @Option(names = "--require-demonstrated", description = "Exit 1 unless every characteristic is demonstrated.")
+    boolean requireDemonstrated;
+
+    @Override
+    public Integer call() {
+        StudyPlan plan = PlanFiles.read(planFile);
+        if (!plan.isIssued()) {
+            throw new UserException(Location.file(planFile.toString()), GradeMessage.PLAN_NOT_ISSUED);
+        }
+        GradingPlan gp = PlanAdapter.of(plan);
+        GradeResult result = Grader.grade(gp, dataFile, dataFile.toString());
+        PrintWriter out = spec.commandLine().getOut();
+        if (report != null) {
+            GradeReports.write(result, plan, report, spec.commandLine().getErr());
+        }
+        if (json) {
+            try {
+                out.println(new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT).writeValueAsString(GradeJson.of(result)));
+            } catch (IOException e) {
+                throw new UncheckedIOException(e);
+            }
+        } else {
+            text(result, out);
+        }
+        out.flush();
+        return requireDemonstrated && !result.allDemonstrated() ? EXIT_NOT_DEMONSTRATED : 0;
+    }
+
+    static void text(GradeResult r, PrintWriter out) {
+        out.printf(Locale.ROOT, "Plan %s@%s, file %s%n", r.planId(), r.revision(), r.file());
+        out.printf(Locale.ROOT, "Part verdict: %s%n", r.verdict().id());
+        for (CharacteristicGrade g : r.characteristics()) {
+            out.println();
+            out.printf(Locale.ROOT, "%s %s: %s%n", g.id(), g.name(), g.verdict().id());
+            for (Reason reason : g.reasons()) {
+                out.println("  - " + reason.text());
+            }
+        }
+        if (!r.problems().isEmpty()) {
+            out.println();
+            out.printf(Locale.ROOT, "Problems in the file (%d):%n", r.problems().size());
+            r.problems().stream().limit(LISTED_PROBLEMS).forEach((Problem p) -> out.println("  " + p));
+            if (r.problems().size() > LISTED_PROBLEMS) {
+                out.printf(Locale.ROOT, "  ... %d more (all of them with --json)%n", r.problems().size() - LISTED_PROBLEMS);
+            }
+        }
+        out.println();
+        out.println(r.caution());
+    }
+}

@@ -1,0 +1,106 @@
+package dev.proofrun.cli;
+
+import dev.proofrun.control.ChartPair;
+import dev.proofrun.control.ControlChart;
+import dev.proofrun.grade.CharacteristicGrade;
+import dev.proofrun.grade.ChartSignal;
+import dev.proofrun.grade.GradeResult;
+import dev.proofrun.grade.Problem;
+import dev.proofrun.grade.Reason;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * The {@code proofrun grade --json} object: plan {id, revision}, problems, characteristics, verdict.
+ * Undefined values are {@code null}. The capability keys shared with {@code proofrun estimate} come from
+ * {@link CapabilityKeys}.
+ */
+final class GradeJson {
+
+    private GradeJson() {
+    }
+
+    static Map<String, Object> of(GradeResult r) {
+        Map<String, Object> root = new LinkedHashMap<>();
+        Map<String, Object> plan = new LinkedHashMap<>();
+        plan.put("id", r.planId());
+        plan.put("revision", r.revision());
+        root.put("plan", plan);
+        List<Object> problems = new ArrayList<>();
+        for (Problem p : r.problems()) {
+            Map<String, Object> m = new LinkedHashMap<>();
+            m.put("file", p.location().file());
+            m.put("row", p.location().row() > 0 ? p.location().row() : null);
+            m.put("column", p.location().column());
+            m.put("severity", p.severity().id());
+            m.put("message", p.message());
+            problems.add(m);
+        }
+        root.put("problems", problems);
+        List<Object> cs = new ArrayList<>();
+        for (CharacteristicGrade g : r.characteristics()) {
+            cs.add(characteristic(g));
+        }
+        root.put("characteristics", cs);
+        root.put("verdict", r.verdict().id());
+        root.put("caution", r.caution());
+        return root;
+    }
+
+    private static Map<String, Object> characteristic(CharacteristicGrade g) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("id", g.id());
+        m.put("name", g.name());
+        m.putAll(CapabilityKeys.of(g));
+        Map<String, Object> control = null;
+        Double ratio = null;
+        if (g.stability() != null) {
+            ChartPair charts = g.stability().charts();
+            control = new LinkedHashMap<>();
+            control.put("location", limits(charts.location()));
+            control.put("spread", limits(charts.spread()));
+            List<Object> signals = new ArrayList<>();
+            for (ChartSignal s : g.stability().signals()) {
+                Map<String, Object> sm = new LinkedHashMap<>();
+                sm.put("chart", s.chart().id());
+                sm.put("rule", s.rule().id());
+                sm.put("subgroup", s.slot());
+                signals.add(sm);
+            }
+            control.put("signals", signals);
+            ratio = finite(g.stability().stabilityRatio());
+        }
+        m.put("control", control);
+        m.put("stabilityRatio", ratio);
+        Map<String, Object> normality = null;
+        if (g.shape() != null) {
+            normality = new LinkedHashMap<>();
+            normality.put("andersonDarling", finite(g.shape().andersonDarling()));
+            normality.put("pValue", finite(g.shape().pValue()));
+            normality.put("model", g.shape().model().id());
+        }
+        m.put("normality", normality);
+        m.put("verdict", g.verdict().id());
+        List<String> reasons = new ArrayList<>();
+        for (Reason reason : g.reasons()) {
+            reasons.add(reason.text());
+        }
+        m.put("reasons", reasons);
+        m.put("additionalSubgroups", g.additionalSubgroups().isPresent() ? g.additionalSubgroups().getAsInt() : null);
+        return m;
+    }
+
+    private static Map<String, Object> limits(ControlChart c) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("center", finite(c.center()));
+        m.put("ucl", finite(c.ucl()));
+        m.put("lcl", finite(c.lcl()));
+        return m;
+    }
+
+    static Double finite(double v) {
+        return Double.isFinite(v) ? v : null;
+    }
+}
