@@ -1,45 +1,34 @@
 package dev.proofrun.cli;
 
-import static dev.proofrun.cli.GradeJson.finite;
-
-import dev.proofrun.grade.CapabilityFigures;
+import dev.proofrun.capability.CapabilityJson;
 import dev.proofrun.grade.CharacteristicGrade;
 import java.util.LinkedHashMap;
 import java.util.Map;
 
 /**
- * The capability keys of {@code grade --json}: readings, subgroups, subgroupSize, mean, sigmaWithin,
- * sigmaOverall, cp, cpu, cpl, cpk, pp, ppu, ppl, ppk, cpm, lower {cp, cpk, pp, ppk}, ppm {within, overall,
- * observed}; null where undefined.
+ * The capability keys of {@code grade --json}, from {@link CapabilityJson} — the same code and keys as
+ * {@code estimate --json}. Without figures (fewer than 2 usable subgroups, no spread) the keys are present
+ * with null values; readings/subgroups/subgroupSize then come from the completeness count.
  */
 final class CapabilityKeys {
+
+    private static final String[] NULL_KEYS = {"mean", "sigmaWithin", "sigmaOverall", "sigmaMethod", "cp", "cpu", "cpl",
+        "cpk", "pp", "ppu", "ppl", "ppk", "cpm", "confidence", "bound", "lower", "degreesOfFreedom", "ppm"};
 
     private CapabilityKeys() {
     }
 
     static Map<String, Object> of(CharacteristicGrade g) {
+        if (g.capability() != null) {
+            return CapabilityJson.of(g.capability());
+        }
         Map<String, Object> m = new LinkedHashMap<>();
-        CapabilityFigures f = g.capability();
         m.put("readings", g.completeness().readings());
         m.put("subgroups", g.completeness().completeSubgroups());
         m.put("subgroupSize", g.completeness().subgroupSize());
-        String[] keys = {"mean", "sigmaWithin", "sigmaOverall", "cp", "cpu", "cpl", "cpk", "pp", "ppu", "ppl", "ppk", "cpm"};
-        double[] values = f == null ? null : new double[] {f.mean(), f.sigmaWithin(), f.sigmaOverall(), f.cp(), f.cpu(),
-            f.cpl(), f.cpk(), f.pp(), f.ppu(), f.ppl(), f.ppk(), f.cpm()};
-        for (int i = 0; i < keys.length; i++) {
-            m.put(keys[i], values == null ? null : finite(values[i]));
+        for (String k : NULL_KEYS) {
+            m.put(k, null);
         }
-        Map<String, Object> lower = new LinkedHashMap<>();
-        lower.put("cp", f == null ? null : finite(f.lowerCp()));
-        lower.put("cpk", f == null ? null : finite(f.lowerCpk()));
-        lower.put("pp", f == null ? null : finite(f.lowerPp()));
-        lower.put("ppk", f == null ? null : finite(f.lowerPpk()));
-        m.put("lower", lower);
-        Map<String, Object> ppm = new LinkedHashMap<>();
-        ppm.put("within", f == null ? null : finite(f.ppmWithin()));
-        ppm.put("overall", f == null ? null : finite(f.ppmOverall()));
-        ppm.put("observed", f == null ? null : finite(f.ppmObserved()));
-        m.put("ppm", ppm);
         return m;
     }
 }

@@ -21,8 +21,9 @@ import java.util.OptionalInt;
  * @param stability            the stability evidence, or {@code null} when fewer than 2 subgroups are usable
  * @param shape                the shape evidence, or {@code null} when fewer than 8 readings are usable
  * @param judged               the required index with its bounds, or {@code null} when not computable
- * @param capability           all indices on the readings' own scale (normal model), or {@code null} with
- *                             fewer than 2 usable subgroups
+ * @param capability           all indices on the readings' own scale (normal model) from
+ *                             {@code capability.CapabilityAnalysis} — the same figures {@code estimate}
+ *                             shows — or {@code null} with fewer than 2 usable subgroups or no spread
  * @param verdict              the verdict
  * @param reasons              the reasons, in the order of the steps
  * @param additionalSubgroups  for an inconclusive verdict: about how many more subgroups at the plan's
@@ -30,7 +31,7 @@ import java.util.OptionalInt;
  */
 public record CharacteristicGrade(String id, String name, String unit, SpecLimits limits, Requirement requirement,
         Completeness completeness, List<double[]> subgroups, List<String> slots, Stability stability, Shape shape,
-        IndexEvidence judged, CapabilityFigures capability, Verdict verdict, List<Reason> reasons, OptionalInt additionalSubgroups) {
+        IndexEvidence judged, dev.proofrun.capability.CapabilityResult capability, Verdict verdict, List<Reason> reasons, OptionalInt additionalSubgroups) {
 
     public CharacteristicGrade {
         Objects.requireNonNull(id, "id");

@@ -1,6 +1,9 @@
 package dev.proofrun.grade;
 
+import dev.proofrun.capability.CapabilityAnalysis;
+import dev.proofrun.capability.CapabilityResult;
 import dev.proofrun.control.ChartKind;
+import dev.proofrun.text.UserException;
 import dev.proofrun.design.Design;
 import dev.proofrun.design.Requirement;
 import java.time.Duration;
@@ -58,7 +61,7 @@ final class CharacteristicGrader {
         Stability stability = StabilityJudge.judge(ChartKind.forMethod(design.sigmaMethod()), subgroups, data.slots(), reasons);
         valid &= stability.stable();
         Shape shape = ShapeJudge.judge(subgroups, reasons);
-        CapabilityFigures figures = CapabilityFigures.of(gc, design, subgroups);
+        CapabilityResult figures = figures(gc, design, subgroups);
         valid &= shape.modelFits();
 
         JudgedIndex judged = shape.modelFits() || shape.normal() ? CapabilityJudge.judge(gc, design, subgroups, shape) : null;
@@ -104,6 +107,16 @@ final class CharacteristicGrader {
         }
         return new CharacteristicGrade(gc.id(), gc.name(), gc.unit(), gc.limits(), req, c, subgroups, data.slots(),
                 stability, shape, ev, figures, verdict, reasons, more);
+    }
+
+    /** The shared capability figures (as {@code estimate} computes them), or null when they cannot be computed. */
+    private static CapabilityResult figures(GradedCharacteristic gc, Design design, List<double[]> subgroups) {
+        try {
+            return CapabilityAnalysis.of(subgroups, gc.limits(), gc.nominal(), design.sigmaMethod(),
+                    gc.requirement().confidence(), design.boundMethod());
+        } catch (UserException e) {
+            return null;
+        }
     }
 
     /** "about 6 h 30 min of running time". */

@@ -5,7 +5,7 @@ import java.util.List;
 /**
  * The shape evidence for one characteristic.
  *
- * @param andersonDarling A² against the normal with estimated mean and s (Stephens' adjustment applied to the p-value)
+ * @param andersonDarling A*² = A²(1 + 0.75/N + 2.25/N²) against the normal with estimated mean and s (as {@code estimate} reports it)
  * @param pValue          its p-value
  * @param normal          true when normality is not rejected at 5 %
  * @param model           the model the capability is computed under

@@ -4,13 +4,13 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
-import org.hipparchus.special.Erf;
+import dev.proofrun.stats.AndersonDarling;
 
 /**
  * The shape step: is the normal model fair, and if not, which alternative is.
  *
  * <p>Normality: Anderson–Darling A² against the normal with the readings' mean and s, p-value with
- * Stephens' adjustment ({@link AndersonDarlingFit}); not rejected when p ≥ {@value #LEVEL}. When rejected and
+ * Stephens' adjustment ({@link AndersonDarling}, shared with {@code estimate}); not rejected when p ≥ {@value #LEVEL}. When rejected and
  * every reading is positive, the Box–Cox, lognormal and Weibull models are fitted by maximum likelihood
  * ({@link DistributionFits}); a model "fits" when its own A² test does not reject it at 5 % (for Box–Cox and
  * lognormal: normality of the transformed readings — somewhat lenient for Box–Cox since λ is estimated).
@@ -56,8 +56,8 @@ final class ShapeJudge {
         if (!(s > 0)) {
             return new double[] {Double.POSITIVE_INFINITY, 0};
         }
-        double a2 = AndersonDarlingFit.statistic(x, v -> 0.5 * Erf.erfc(-(v - mean) / (s * Math.sqrt(2))));
-        return new double[] {a2, AndersonDarlingFit.normalPValue(a2, n)};
+        AndersonDarling.Result r = AndersonDarling.test(x);
+        return new double[] {r.adjusted(), r.pValue()};
     }
 
     static Shape judge(List<double[]> subgroups, List<Reason> reasons) {
