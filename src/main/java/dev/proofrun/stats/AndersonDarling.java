@@ -2,7 +2,7 @@ package dev.proofrun.stats;
 
 import java.util.Arrays;
 import java.util.Locale;
-import org.hipparchus.special.Erf;
+import org.apache.commons.statistics.distribution.NormalDistribution;
 
 /**
  * Anderson–Darling test of normality with mean and standard deviation estimated from the readings
@@ -26,6 +26,8 @@ public final class AndersonDarling {
 
     /** Smallest sample for which the p-value formulas are used. */
     public static final int MIN_READINGS = 8;
+
+    private static final NormalDistribution STANDARD_NORMAL = NormalDistribution.of(0, 1);
 
     private AndersonDarling() {
     }
@@ -71,11 +73,25 @@ public final class AndersonDarling {
         if (!(s > 0)) {
             throw new IllegalArgumentException("the Anderson-Darling test needs readings that are not all equal");
         }
+        // ln Φ and ln(1 − Φ) of each standardized reading, from one tail evaluation each: the smaller
+        // tail directly (keeps its relative accuracy), the larger one as log1p of minus the smaller.
+        double[] logBelow = new double[n];
+        double[] logAbove = new double[n];
+        for (int i = 0; i < n; i++) {
+            double z = (x[i] - mean) / s;
+            if (z <= 0) {
+                double p = STANDARD_NORMAL.cumulativeProbability(z);
+                logBelow[i] = Math.log(p);
+                logAbove[i] = Math.log1p(-p);
+            } else {
+                double q = STANDARD_NORMAL.survivalProbability(z);
+                logBelow[i] = Math.log1p(-q);
+                logAbove[i] = Math.log(q);
+            }
+        }
         double acc = 0;
         for (int i = 0; i < n; i++) {
-            double lowTail = logLowerTail((x[i] - mean) / s);           // ln z_i
-            double highTail = logLowerTail(-(x[n - 1 - i] - mean) / s); // ln(1 − z_{N+1−i})
-            acc += (2.0 * i + 1) * (lowTail + highTail);
+            acc += (2.0 * i + 1) * (logBelow[i] + logAbove[n - 1 - i]);
         }
         double a2 = -n - acc / n;
         double adjusted = a2 * (1 + 0.75 / n + 2.25 / ((double) n * n));
@@ -96,10 +112,5 @@ public final class AndersonDarling {
             p = 1 - Math.exp(-13.436 + 101.14 * a - 223.73 * a * a);
         }
         return Math.min(1, Math.max(0, p));
-    }
-
-    /** ln Φ(z), from erfc so that the far lower tail keeps its accuracy. */
-    private static double logLowerTail(double z) {
-        return Math.log(0.5 * Erf.erfc(-z / Math.sqrt(2)));
     }
 }
