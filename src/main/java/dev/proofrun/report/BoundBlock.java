@@ -1,0 +1,87 @@
+package dev.proofrun.report;
+
+import dev.proofrun.grade.IndexEvidence;
+import dev.proofrun.sheet.layout.Block;
+import dev.proofrun.sheet.layout.Canvas;
+import dev.proofrun.sheet.layout.Pen;
+import dev.proofrun.sheet.layout.PlotArea;
+import dev.proofrun.sheet.layout.Typeface;
+
+/**
+ * The capability argument in one picture: a scale of the index, the requirement c₀ as a heavy vertical line,
+ * the estimate as a filled square and the confidence interval from the lower to the upper bound as a bar.
+ * Demonstrated means the whole bar's left end is at or right of the line.
+ */
+final class BoundBlock implements Block {
+
+    private static final float HEIGHT = 70f;
+
+    private final IndexEvidence e;
+    private final Typeface regular;
+    private final Typeface bold;
+
+    BoundBlock(IndexEvidence e, Typeface regular, Typeface bold) {
+        this.e = e;
+        this.regular = regular;
+        this.bold = bold;
+    }
+
+    @Override
+    public float height(float width) {
+        return HEIGHT;
+    }
+
+    @Override
+    public void draw(Canvas c, float left, float top, float width) {
+        String sym = e.index().symbol();
+        double lo = min(e.lower(), e.required(), e.estimate());
+        double hi = max(e.upper(), e.required(), e.estimate());
+        double pad = (hi - lo) * 0.12 + 0.05;
+        PlotArea area = PlotArea.of(left + 46, top - HEIGHT + 26, width - 46 - 20, 22, lo - pad, hi + pad, 0, 1);
+        c.pen(Pen.HAIR);
+        c.line(area.left(), area.bottom(), area.right(), area.bottom());
+        for (double t : PlotArea.ticks(lo - pad, hi + pad, 8)) {
+            float x = area.x(t);
+            c.line(x, area.bottom() - 3, x, area.bottom());
+            c.textCentred(regular, 7.5f, x, area.bottom() - 11, Fmt.index(t));
+        }
+        float mid = area.y(0.5);
+        if (Double.isFinite(e.lower()) && Double.isFinite(e.upper())) {
+            c.pen(Pen.solid(2.2f));
+            c.line(area.x(e.lower()), mid, area.x(e.upper()), mid);
+            c.pen(Pen.solid(0.9f));
+            c.line(area.x(e.lower()), mid - 5, area.x(e.lower()), mid + 5);
+            c.line(area.x(e.upper()), mid - 5, area.x(e.upper()), mid + 5);
+            c.textCentred(regular, 7.5f, area.x(e.lower()), mid + 8, "lower " + Fmt.index(e.lower()));
+            c.textCentred(regular, 7.5f, area.x(e.upper()), mid + 8, "upper " + Fmt.index(e.upper()));
+        }
+        c.marker(Canvas.Marker.SQUARE, area.x(e.estimate()), mid, 5f);
+        c.pen(Pen.dashed(1.4f, 3, 1.5f));
+        float rx = area.x(e.required());
+        c.line(rx, area.bottom(), rx, area.top() + 4);
+        c.text(bold, 7.5f, rx + 3, area.top() + 1, "required " + Fmt.index(e.required()));
+        c.text(regular, 7.5f, left, mid - 2.6f, sym);
+        c.text(regular, 7.5f, area.left(), top - HEIGHT + 1, "square: estimate " + Fmt.index(e.estimate())
+                + "; bar: " + Fmt.fixed(e.confidence() * 100, 0) + " % confidence bounds; dashed: the requirement");
+    }
+
+    private static double min(double... v) {
+        double m = Double.POSITIVE_INFINITY;
+        for (double d : v) {
+            if (Double.isFinite(d)) {
+                m = Math.min(m, d);
+            }
+        }
+        return Double.isFinite(m) ? m : 0;
+    }
+
+    private static double max(double... v) {
+        double m = Double.NEGATIVE_INFINITY;
+        for (double d : v) {
+            if (Double.isFinite(d)) {
+                m = Math.max(m, d);
+            }
+        }
+        return Double.isFinite(m) ? m : 1;
+    }
+}

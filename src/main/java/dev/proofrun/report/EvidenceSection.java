@@ -1,0 +1,238 @@
+package dev.proofrun.report;
+
+import dev.proofrun.grade.CapabilityFigures;
+import dev.proofrun.grade.ChartSignal;
+import dev.proofrun.grade.CharacteristicGrade;
+import dev.proofrun.grade.Completeness;
+import dev.proofrun.grade.ModelFit;
+import dev.proofrun.grade.Reason;
+import dev.proofrun.grade.Shape;
+import dev.proofrun.grade.Stability;
+import dev.proofrun.grade.Step;
+import dev.proofrun.sheet.layout.Block;
+import dev.proofrun.sheet.layout.Flow;
+import dev.proofrun.sheet.layout.Item;
+import dev.proofrun.sheet.layout.Paragraph;
+import dev.proofrun.sheet.layout.TextTable;
+import dev.proofrun.sheet.layout.TextTable.Column;
+import dev.proofrun.sheet.layout.Typeface;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+
+/**
+ * The evidence for one characteristic, in the order of the argument: 1 completeness, 2 stability (control
+ * charts), 3 shape (histogram with limits and fitted curve, probability plot), 4 capability (the bound
+ * against the requirement, then every index). Each step opens with the reasons the grade gave for it.
+ */
+final class EvidenceSection {
+
+    private final Typeface regular;
+    private final Typeface bold;
+
+    EvidenceSection(Typeface regular, Typeface bold) {
+        this.regular = regular;
+        this.bold = bold;
+    }
+
+    void place(Flow flow, CharacteristicGrade g, double nominal) {
+        flow.newPage();
+        String unit = g.unit() == null || g.unit().isEmpty() ? "" : " (" + g.unit() + ")";
+        flow.place(Paragraph.of(g.id() + "  " + g.name() + unit + ": " + g.verdict().id(), bold, 14));
+        flow.place(Paragraph.of(VerdictSection.gloss(g.verdict()) + ".", regular, 9));
+        g.additionalSubgroups().ifPresent(k -> flow.place(Paragraph.of(String.format(Locale.ROOT,
+                "About %d more subgroups at the plan's frequency would likely settle it.", k), regular, 9)));
+
+        List<Block> c = new ArrayList<>();
+        Completeness m = g.completeness();
+        if (m != null) {
+            TextTable t = table();
+            c.add(t.header());
+            c.add(t.row("planned subgroups", Integer.toString(m.plannedSubgroups()), "subgroup size", Integer.toString(m.subgroupSize())));
+            c.add(t.row("complete (graded)", Integer.toString(m.completeSubgroups()), "readings graded", Long.toString(m.readings())));
+            c.add(t.row("incomplete", Integer.toString(m.incompleteSubgroups()), "missing slots", Integer.toString(m.missingSubgroups())));
+            c.add(t.row("taken late or out of order", Integer.toString(m.lateSubgroups()), "readings flagged", Integer.toString(m.flaggedReadings())));
+            c.add(t.row("unusable subgroups allowed", Integer.toString(m.allowedShortfall()), "shortfall", Integer.toString(m.shortfall())));
+        }
+        step(flow, "1  Completeness: was the plan followed?", g, Step.COMPLETENESS, c);
+
+        List<Block> s = new ArrayList<>();
+        Stability st = g.stability();
+        if (st != null) {
+            var charts = st.charts();
+            s.add(new ControlChartBlock(charts.location(), chartTitle(charts.location().statistic().id()), regular, bold));
+            s.add(Block.space(4));
+            s.add(new ControlChartBlock(charts.spread(), chartTitle(charts.spread().statistic().id()), regular, bold));
+            TextTable t = table();
+            s.add(Block.space(4));
+            s.add(t.header());
+            s.add(t.row("location points signalling", st.locationSignalPoints() + " (by chance " + Fmt.fixed(st.expectedLocationByChance(), 1) + ")",
+                    "chance of as many", Fmt.p(st.locationChance())));
+            s.add(t.row("spread points beyond limits", st.spreadSignalPoints() + " (by chance " + Fmt.fixed(st.expectedSpreadByChance(), 1) + ")",
+                    "chance of as many", Fmt.p(st.spreadChance())));
+            s.add(t.row("\u03c3 overall / \u03c3 within", Fmt.fixed(st.stabilityRatio(), 3), "ANOVA F (p)",
+                    st.anovaF().isPresent() ? Fmt.fixed(st.anovaF().getAsDouble(), 2) + " (" + Fmt.p(st.anovaP().orElse(Double.NaN)) + ")" : Fmt.NONE));
+            if (!st.signals().isEmpty()) {
+                s.add(Block.space(3));
+                s.add(Paragraph.of("Signals by rule: " + signals(st.signals()), regular, 8.5f));
+            }
+        }
+        step(flow, "2  Stability: was the process in control?", g, Step.STABILITY, s);
+
+        List<Block> h = new ArrayList<>();
+        Shape sh = g.shape();
+        double[] x = flatten(g.subgroups());
+        if (sh != null && x.length > 0) {
+            ModelCurve curve = curve(sh, x);
+            h.add(new HistogramBlock(x, g.limits(), nominal, curve, "Readings against the limits", regular, bold));
+            h.add(Block.space(4));
+            h.add(new ProbabilityPlotBlock(x, curve, "Probability plot under the " + curve.model().id() + " model", regular, bold));
+            h.add(Block.space(4));
+            TextTable t = TextTable.of(List.of(Column.left("Model", 2), Column.right("parameter 1", 2),
+                    Column.right("parameter 2", 2), Column.right("AIC", 2), Column.right("A\u00b2", 1.5f),
+                    Column.left("fits at 5 %", 1.5f)), regular, bold, 8);
+            h.add(t.header());
+            h.add(t.row("normal (A\u00b2 test)", Fmt.value(mean(x)), Fmt.value(sd(x)), Fmt.NONE,
+                    Fmt.fixed(sh.andersonDarling(), 3), (sh.normal() ? "yes" : "no") + ", p " + Fmt.p(sh.pValue())));
+            for (ModelFit f : sh.fits()) {
+                h.add(t.row(f.model().id(), Fmt.value(f.first()), Fmt.value(f.second()), Fmt.fixed(f.aic(), 1),
+                        Fmt.fixed(f.andersonDarling(), 3), f.fits() ? "yes" : "no"));
+            }
+            h.add(Paragraph.of("Capability is computed under the " + sh.model().id() + " model"
+                    + (sh.modelFits() ? "." : ", which does not fit well either."), regular, 8.5f));
+        }
+        step(flow, "3  Shape: is the distribution model fair?", g, Step.SHAPE, h);
+
+        List<Block> k = new ArrayList<>();
+        if (g.judged() != null) {
+            k.add(new BoundBlock(g.judged(), regular, bold));
+        }
+        CapabilityFigures f = g.capability();
+        if (f != null) {
+            TextTable t = TextTable.of(List.of(Column.left("Index", 1.3f), Column.right("estimate", 1.3f),
+                    Column.right("lower bound", 1.3f), Column.left("", 0.4f), Column.left("Index", 1.3f),
+                    Column.right("estimate", 1.3f), Column.right("lower bound", 1.3f)), regular, bold, 8);
+            k.add(Block.space(4));
+            k.add(t.header());
+            k.add(t.row("Cp", Fmt.index(f.cp()), Fmt.index(f.lowerCp()), "", "Pp", Fmt.index(f.pp()), Fmt.index(f.lowerPp())));
+            k.add(t.row("Cpk", Fmt.index(f.cpk()), Fmt.index(f.lowerCpk()), "", "Ppk", Fmt.index(f.ppk()), Fmt.index(f.lowerPpk())));
+            k.add(t.row("Cpu", Fmt.index(f.cpu()), "", "", "Ppu", Fmt.index(f.ppu()), ""));
+            k.add(t.row("Cpl", Fmt.index(f.cpl()), "", "", "Ppl", Fmt.index(f.ppl()), ""));
+            k.add(t.row("Cpm", Fmt.index(f.cpm()), "", "", "", "", ""));
+            k.add(Block.space(4));
+            k.add(Paragraph.of(String.format(Locale.ROOT,
+                    "Mean %s, \u03c3 within %s, \u03c3 overall %s from %d readings in %d subgroups of %d. Parts per million "
+                            + "outside the tolerance: expected %s (within), %s (overall); observed %s. These figures "
+                            + "assume the normal model on the readings' own scale.",
+                    Fmt.value(f.mean()), Fmt.value(f.sigmaWithin()), Fmt.value(f.sigmaOverall()), f.readings(),
+                    f.subgroups(), f.subgroupSize(), Fmt.ppm(f.ppmWithin()), Fmt.ppm(f.ppmOverall()),
+                    Fmt.ppm(f.ppmObserved())), regular, 8.5f));
+        }
+        step(flow, "4  Capability: does the bound reach the requirement?", g, Step.CAPABILITY, k);
+    }
+
+    private TextTable table() {
+        return TextTable.of(List.of(Column.left("Figure", 3), Column.right("value", 2), Column.left("Figure", 3),
+                Column.right("value", 2)), regular, bold, 8);
+    }
+
+    /** A step: heading and its reasons kept with the first evidence block; the rest flows. */
+    private void step(Flow flow, String title, CharacteristicGrade g, Step step, List<Block> evidence) {
+        flow.gap(10);
+        List<Block> head = new ArrayList<>();
+        head.add(Paragraph.of(title, bold, 11));
+        head.add(Block.space(3));
+        for (Reason r : g.reasons()) {
+            if (r.step() == step) {
+                head.add(new Item(r.decisive() ? "\u25a0" : "\u2013", new Paragraph(r.text(), regular, 9, 1.3f, 0), 11));
+            }
+        }
+        if (evidence.isEmpty()) {
+            head.add(Paragraph.of("Not enough usable data for this step.", regular, 9));
+            flow.placeTogether(head);
+            return;
+        }
+        head.add(Block.space(4));
+        head.add(evidence.get(0));
+        flow.placeTogether(head);
+        for (Block b : evidence.subList(1, evidence.size())) {
+            flow.place(b);
+        }
+    }
+
+    private static String chartTitle(String statistic) {
+        switch (statistic) {
+            case "mean":
+                return "Subgroup means";
+            case "range":
+                return "Subgroup ranges";
+            case "sd":
+                return "Subgroup standard deviations";
+            case "individual":
+                return "Individual readings";
+            default:
+                return "Moving ranges";
+        }
+    }
+
+    private static String signals(List<ChartSignal> signals) {
+        Map<String, List<String>> byRule = new LinkedHashMap<>();
+        for (ChartSignal s : signals) {
+            byRule.computeIfAbsent(s.chart().id() + " " + s.rule().id(), r -> new ArrayList<>()).add(s.slot());
+        }
+        StringBuilder sb = new StringBuilder();
+        for (var e : byRule.entrySet()) {
+            if (sb.length() > 0) {
+                sb.append("; ");
+            }
+            List<String> slots = e.getValue();
+            sb.append(e.getKey()).append(" at ").append(String.join(", ", slots.subList(0, Math.min(12, slots.size()))));
+            if (slots.size() > 12) {
+                sb.append(" and ").append(slots.size() - 12).append(" more");
+            }
+        }
+        return sb.toString();
+    }
+
+    private static ModelCurve curve(Shape sh, double[] x) {
+        for (ModelFit f : sh.fits()) {
+            if (f.model() == sh.model()) {
+                return ModelCurve.of(f, x);
+            }
+        }
+        return ModelCurve.normal(mean(x), sd(x));
+    }
+
+    static double[] flatten(List<double[]> subgroups) {
+        int n = 0;
+        for (double[] s : subgroups) {
+            n += s.length;
+        }
+        double[] x = new double[n];
+        int i = 0;
+        for (double[] s : subgroups) {
+            System.arraycopy(s, 0, x, i, s.length);
+            i += s.length;
+        }
+        return x;
+    }
+
+    static double mean(double[] x) {
+        double sum = 0;
+        for (double v : x) {
+            sum += v;
+        }
+        return sum / x.length;
+    }
+
+    static double sd(double[] x) {
+        double m = mean(x);
+        double ss = 0;
+        for (double v : x) {
+            ss += (v - m) * (v - m);
+        }
+        return x.length > 1 ? Math.sqrt(ss / (x.length - 1)) : Double.NaN;
+    }
+}

@@ -1,0 +1,82 @@
+package dev.proofrun.report;
+
+import dev.proofrun.grade.CharacteristicGrade;
+import dev.proofrun.grade.GradeResult;
+import dev.proofrun.plan.StudyPlan;
+import dev.proofrun.sheet.layout.Flow;
+import dev.proofrun.sheet.layout.PageHeading;
+import dev.proofrun.sheet.layout.Pages;
+import dev.proofrun.sheet.layout.Paper;
+import dev.proofrun.text.Location;
+import dev.proofrun.text.UserException;
+import java.io.IOException;
+import java.io.OutputStream;
+import java.io.UncheckedIOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.nio.file.StandardOpenOption;
+import java.util.UUID;
+
+/**
+ * The grade report PDF, written as an argument: first the verdict for the part and each characteristic
+ * with the reasons that decided it and the caution ({@link VerdictSection}), then for each characteristic
+ * the evidence in the order that matters ({@link EvidenceSection}): completeness, stability with its
+ * control charts, shape with histogram and probability plot, capability with the bound against the
+ * requirement and every index. Vector charts, black and white, fonts embedded (the sheet's toolkit).
+ */
+public final class GradeReport {
+
+    private GradeReport() {
+    }
+
+    /**
+     * Writes the report to a stream (not closed).
+     *
+     * @param result the grade
+     * @param plan   the plan it was graded against (part, nominal values)
+     * @param paper  A4 or Letter
+     * @param out    where to write
+     */
+    public static void write(GradeResult result, StudyPlan plan, Paper paper, OutputStream out) {
+        PageHeading heading = new PageHeading(plan.part().name(), "Grade report: returned file " + result.file(),
+                "Plan " + result.planId() + " @ " + result.revision(),
+                "Verdict " + result.verdict().id() + ". A statistical statement under assumptions; see page 1.",
+                false);
+        try (Pages pages = Pages.open(paper, heading)) {
+            Flow flow = new Flow(pages);
+            new VerdictSection(pages.regular(), pages.bold()).place(flow, result, plan);
+            EvidenceSection evidence = new EvidenceSection(pages.regular(), pages.bold());
+            for (CharacteristicGrade g : result.characteristics()) {
+                double nominal = plan.characteristic(g.id()).flatMap(c -> c.nominal().isPresent()
+                        ? java.util.Optional.of(c.nominal().getAsDouble()) : java.util.Optional.empty()).orElse(Double.NaN);
+                evidence.place(flow, g, nominal);
+            }
+            pages.write(out);
+        }
+    }
+
+    /**
+     * Writes the report to a file: to a temporary file beside it first, moved into place when complete.
+     *
+     * @throws UserException if the file cannot be written
+     */
+    public static void write(GradeResult result, StudyPlan plan, Paper paper, Path file) {
+        Path dir = file.toAbsolutePath().getParent();
+        Path temp = dir.resolve(".proofrun-" + UUID.randomUUID() + ".tmp");
+        try {
+            try (OutputStream out = Files.newOutputStream(temp, StandardOpenOption.CREATE_NEW, StandardOpenOption.WRITE)) {
+                write(result, plan, paper, out);
+            }
+            Files.move(temp, file, StandardCopyOption.REPLACE_EXISTING);
+        } catch (IOException | UncheckedIOException e) {
+            throw new UserException(Location.file(file.toString()), ReportMessage.WRITE_FAILED, e.getMessage());
+        } finally {
+            try {
+                Files.deleteIfExists(temp);
+            } catch (IOException ignored) {
+                // best effort
+            }
+        }
+    }
+}

@@ -1,0 +1,20 @@
+package dev.proofrun.report;
+
+import dev.proofrun.text.MessageKey;
+
+/** What the report step tells people. */
+public enum ReportMessage implements MessageKey {
+    /** Writing the report failed. */
+    WRITE_FAILED("could not write the grade report: %s");
+
+    private final String english;
+
+    ReportMessage(String english) {
+        this.english = english;
+    }
+
+    @Override
+    public String english() {
+        return english;
+    }
+}

@@ -1,0 +1,123 @@
+package dev.proofrun.report;
+
+import dev.proofrun.grade.CharacteristicGrade;
+import dev.proofrun.grade.GradeResult;
+import dev.proofrun.grade.Problem;
+import dev.proofrun.grade.Reason;
+import dev.proofrun.grade.Verdict;
+import dev.proofrun.plan.StudyPlan;
+import dev.proofrun.sheet.layout.Block;
+import dev.proofrun.sheet.layout.Flow;
+import dev.proofrun.sheet.layout.Framed;
+import dev.proofrun.sheet.layout.Item;
+import dev.proofrun.sheet.layout.Paragraph;
+import dev.proofrun.sheet.layout.Pen;
+import dev.proofrun.sheet.layout.TextTable;
+import dev.proofrun.sheet.layout.TextTable.Column;
+import dev.proofrun.sheet.layout.Typeface;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+
+/**
+ * The first part of the report: the verdict and why, before any evidence. A framed box with the part's
+ * verdict, one entry per characteristic with the reasons that decided it, and the caution as its last
+ * line; then the problems found in the returned file.
+ */
+final class VerdictSection {
+
+    /** Problems listed in full; the rest are counted. */
+    static final int PROBLEMS_LISTED = 40;
+
+    private final Typeface regular;
+    private final Typeface bold;
+
+    VerdictSection(Typeface regular, Typeface bold) {
+        this.regular = regular;
+        this.bold = bold;
+    }
+
+    static String gloss(Verdict v) {
+        switch (v) {
+            case DEMONSTRATED:
+                return "the lower confidence bound reaches the requirement, and the evidence is complete, stable and fits its model";
+            case INCONCLUSIVE:
+                return "the estimate reaches the requirement but its lower confidence bound does not yet";
+            case NOT_DEMONSTRATED:
+                return "the estimate itself is below the requirement";
+            default:
+                return "the evidence cannot carry a capability statement (incomplete, unstable or no fitting model)";
+        }
+    }
+
+    void place(Flow flow, GradeResult result, StudyPlan plan) {
+        flow.place(Paragraph.of("Grade of the capability study", bold, 16));
+        flow.gap(3);
+        flow.place(Paragraph.of("Part: " + plan.part().name() + (plan.part().number().isBlank() ? "" : "   No. "
+                + plan.part().number()), bold, 10));
+        flow.place(Paragraph.of("Plan " + result.planId() + ", revision " + result.revision() + ". Returned file: "
+                + result.file() + ".", regular, 9));
+        flow.gap(8);
+
+        List<Block> box = new ArrayList<>();
+        box.add(Paragraph.of("Verdict for the part: " + result.verdict().id(), bold, 14));
+        box.add(Paragraph.of("The worst of its characteristics: " + gloss(result.verdict()) + ".", regular, 9));
+        box.add(Block.space(6));
+        for (CharacteristicGrade g : result.characteristics()) {
+            box.add(Paragraph.of(g.id() + "  " + g.name() + ": " + g.verdict().id() + headline(g), bold, 9.5f));
+            for (Reason r : decisive(g)) {
+                box.add(new Item("\u2013", new Paragraph(r.text(), regular, 9, 1.3f, 0), 10));
+            }
+            box.add(Block.space(4));
+        }
+        box.add(Block.space(2));
+        box.add(Paragraph.of(result.caution(), regular, 8.5f));
+        flow.place(new Framed(box, 8f, Pen.solid(1.4f), 0.96f));
+
+        flow.gap(10);
+        List<Problem> problems = result.problems();
+        String count = problems.isEmpty() ? "No problems were found in the returned file."
+                : String.format(Locale.ROOT, "%d problem%s found in the returned file%s.", problems.size(),
+                        problems.size() == 1 ? " was" : "s were",
+                        problems.size() > PROBLEMS_LISTED ? "; the first " + PROBLEMS_LISTED + " are listed" : "");
+        flow.placeTogether(List.of(Paragraph.of("Problems in the returned file", bold, 11), Block.space(3),
+                Paragraph.of(count, regular, 9)));
+        if (!problems.isEmpty()) {
+            flow.gap(4);
+            TextTable t = TextTable.of(List.of(Column.left("Where", 3), Column.left("Severity", 1.2f),
+                    Column.left("Problem", 6)), regular, bold, 8);
+            flow.startTable(t.header());
+            for (Problem p : problems.subList(0, Math.min(PROBLEMS_LISTED, problems.size()))) {
+                flow.place(t.row(p.location().toString(), p.severity().id(), p.message()));
+            }
+            flow.endTable();
+            if (problems.size() > PROBLEMS_LISTED) {
+                flow.place(Paragraph.of("\u2026 and " + (problems.size() - PROBLEMS_LISTED)
+                        + " more (proofrun grade --json lists them all).", regular, 8.5f));
+            }
+        }
+    }
+
+    private static String headline(CharacteristicGrade g) {
+        if (g.judged() == null) {
+            return "";
+        }
+        var e = g.judged();
+        return String.format(Locale.ROOT, " (%s estimate %s, lower bound %s, required %s)", e.index().symbol(),
+                Fmt.index(e.estimate()), Fmt.index(e.lower()), Fmt.index(e.required()));
+    }
+
+    /** The reasons that decided the verdict; all of them when none is marked decisive. */
+    static List<Reason> decisive(CharacteristicGrade g) {
+        List<Reason> out = new ArrayList<>();
+        for (Reason r : g.reasons()) {
+            if (r.decisive()) {
+                out.add(r);
+            }
+        }
+        if (out.isEmpty() && !g.reasons().isEmpty()) {
+            out.add(g.reasons().get(g.reasons().size() - 1));
+        }
+        return out;
+    }
+}

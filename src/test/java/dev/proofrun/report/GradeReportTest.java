@@ -1,0 +1,91 @@
+package dev.proofrun.report;
+
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import dev.proofrun.grade.CharacteristicGrade;
+import dev.proofrun.grade.GradeResult;
+import dev.proofrun.grade.Grader;
+import dev.proofrun.grade.GradingPlan;
+import dev.proofrun.grade.PlanAdapter;
+import dev.proofrun.grade.Reason;
+import dev.proofrun.grade.SimulatedReturn;
+import dev.proofrun.plan.DemoPlan;
+import dev.proofrun.plan.StudyPlan;
+import dev.proofrun.sheet.layout.Paper;
+import java.awt.image.BufferedImage;
+import java.io.ByteArrayOutputStream;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Map;
+import org.apache.pdfbox.Loader;
+import org.apache.pdfbox.pdmodel.PDDocument;
+import org.apache.pdfbox.rendering.PDFRenderer;
+import org.apache.pdfbox.text.PDFTextStripper;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * The grade report of the demo plan with an invented, seeded return: D1 from a stable process well inside
+ * its limits, R4 skewed, F7 with a step in the mean half way (so its verdict is not-valid). The report must
+ * name every verdict and reason, in text a reader can extract, and draw its pages.
+ */
+class GradeReportTest {
+
+    @TempDir
+    Path dir;
+
+    @Test
+    void theReportStatesVerdictsAndReasonsAndDrawsItsCharts() throws IOException {
+        StudyPlan plan = DemoPlan.create();
+        GradingPlan gp = PlanAdapter.of(plan);
+        Path returned = dir.resolve("returned.csv");
+        SimulatedReturn.writeCsv(gp, Map.of(
+                "D1", SimulatedReturn.Process.stable(22.0, 0.002),
+                "R4", SimulatedReturn.Process.skewed(0.35, 0.2),
+                "F7", SimulatedReturn.Process.stepping(6.0, 0.2, 0.5, 1.0)), 7L, returned);
+        GradeResult result = Grader.grade(gp, returned, "returned.csv");
+
+        ByteArrayOutputStream out = new ByteArrayOutputStream();
+        GradeReport.write(result, plan, Paper.A4, out);
+        Files.write(dir.resolve("report.pdf"), out.toByteArray());
+        if (System.getProperty("proofrun.keepReport") != null) {
+            Files.write(Path.of(System.getProperty("proofrun.keepReport")), out.toByteArray());
+        }
+        try (PDDocument doc = Loader.loadPDF(out.toByteArray())) {
+            String first = text(doc, 1, 1).replaceAll("\\s+", " ");
+            assertTrue(first.contains("Verdict for the part: " + result.verdict().id()), first);
+            String all = text(doc, 1, doc.getNumberOfPages()).replaceAll("\\s+", " ");
+            for (CharacteristicGrade g : result.characteristics()) {
+                assertTrue(first.contains(g.id() + " " + g.name() + ": " + g.verdict().id()), "verdict of " + g.id());
+                for (Reason r : g.reasons()) {
+                    assertTrue(all.contains(r.text().replaceAll("\\s+", " ")), "reason: " + r.text());
+                }
+            }
+            assertTrue(first.contains(result.caution().replaceAll("\\s+", " ")), "the caution in the verdict box");
+            assertTrue(all.contains("Subgroup means") && all.contains("Probability plot"));
+            assertTrue(all.contains("USL") && all.contains("LSL"));
+            PDFRenderer r = new PDFRenderer(doc);
+            for (int p = 0; p < doc.getNumberOfPages(); p++) {
+                BufferedImage image = r.renderImage(p, 0.4f);
+                long dark = 0;
+                for (int y = 0; y < image.getHeight(); y++) {
+                    for (int x = 0; x < image.getWidth(); x++) {
+                        int rgb = image.getRGB(x, y);
+                        if (((rgb >> 16 & 0xff) + (rgb >> 8 & 0xff) + (rgb & 0xff)) / 3 < 128) {
+                            dark++;
+                        }
+                    }
+                }
+                assertTrue(dark > 300, "page " + (p + 1) + " has ink");
+            }
+        }
+    }
+
+    private static String text(PDDocument doc, int from, int to) throws IOException {
+        PDFTextStripper s = new PDFTextStripper();
+        s.setStartPage(from);
+        s.setEndPage(to);
+        return s.getText(doc);
+    }
+}
