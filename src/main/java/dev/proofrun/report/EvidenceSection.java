@@ -1,6 +1,6 @@
 package dev.proofrun.report;
 
-import dev.proofrun.grade.CapabilityFigures;
+import dev.proofrun.capability.CapabilityResult;
 import dev.proofrun.grade.ChartSignal;
 import dev.proofrun.grade.CharacteristicGrade;
 import dev.proofrun.grade.Completeness;
@@ -109,28 +109,36 @@ final class EvidenceSection {
         if (g.judged() != null) {
             k.add(new BoundBlock(g.judged(), regular, bold));
         }
-        CapabilityFigures f = g.capability();
+        CapabilityResult f = g.capability();
         if (f != null) {
+            var i = f.indices();
+            var lb = f.lower();
             TextTable t = TextTable.of(List.of(Column.left("Index", 1.3f), Column.right("estimate", 1.3f),
                     Column.right("lower bound", 1.3f), Column.left("", 0.4f), Column.left("Index", 1.3f),
                     Column.right("estimate", 1.3f), Column.right("lower bound", 1.3f)), regular, bold, 8);
             k.add(Block.space(4));
             k.add(t.header());
-            k.add(t.row("Cp", Fmt.index(f.cp()), Fmt.index(f.lowerCp()), "", "Pp", Fmt.index(f.pp()), Fmt.index(f.lowerPp())));
-            k.add(t.row("Cpk", Fmt.index(f.cpk()), Fmt.index(f.lowerCpk()), "", "Ppk", Fmt.index(f.ppk()), Fmt.index(f.lowerPpk())));
-            k.add(t.row("Cpu", Fmt.index(f.cpu()), "", "", "Ppu", Fmt.index(f.ppu()), ""));
-            k.add(t.row("Cpl", Fmt.index(f.cpl()), "", "", "Ppl", Fmt.index(f.ppl()), ""));
-            k.add(t.row("Cpm", Fmt.index(f.cpm()), "", "", "", "", ""));
+            k.add(t.row("Cp", ix(i.cp()), ix(lb.cp()), "", "Pp", ix(i.pp()), ix(lb.pp())));
+            k.add(t.row("Cpk", ix(i.cpk()), ix(lb.cpk()), "", "Ppk", ix(i.ppk()), ix(lb.ppk())));
+            k.add(t.row("Cpu", ix(i.cpu()), "", "", "Ppu", ix(i.ppu()), ""));
+            k.add(t.row("Cpl", ix(i.cpl()), "", "", "Ppl", ix(i.ppl()), ""));
+            k.add(t.row("Cpm", ix(i.cpm()), "", "", "", "", ""));
             k.add(Block.space(4));
+            String size = f.subgroupSize().isPresent() ? " of " + f.subgroupSize().getAsInt() : "";
             k.add(Paragraph.of(String.format(Locale.ROOT,
-                    "Mean %s, \u03c3 within %s, \u03c3 overall %s from %d readings in %d subgroups of %d. Parts per million "
-                            + "outside the tolerance: expected %s (within), %s (overall); observed %s. These figures "
-                            + "assume the normal model on the readings' own scale.",
-                    Fmt.value(f.mean()), Fmt.value(f.sigmaWithin()), Fmt.value(f.sigmaOverall()), f.readings(),
-                    f.subgroups(), f.subgroupSize(), Fmt.ppm(f.ppmWithin()), Fmt.ppm(f.ppmOverall()),
-                    Fmt.ppm(f.ppmObserved())), regular, 8.5f));
+                    "Mean %s, \u03c3 within %s (%s), \u03c3 overall %s from %d readings in %d subgroups%s. Parts per "
+                            + "million outside the tolerance: expected %s (within), %s (overall); observed %s. Lower "
+                            + "bounds at %s %% confidence. These figures assume the normal model on the readings' own scale.",
+                    Fmt.value(f.mean()), Fmt.value(f.within().value()), f.within().method().token(),
+                    Fmt.value(f.sigmaOverall()), f.readings(), f.subgroups(), size, Fmt.ppm(f.ppm().within()),
+                    Fmt.ppm(f.ppm().overall()), Fmt.ppm(f.ppm().observed()), Fmt.fixed(f.confidence() * 100, 0)),
+                    regular, 8.5f));
         }
         step(flow, "4  Capability: does the bound reach the requirement?", g, Step.CAPABILITY, k);
+    }
+
+    private static String ix(java.util.OptionalDouble v) {
+        return v.isPresent() ? Fmt.index(v.getAsDouble()) : Fmt.NONE;
     }
 
     private TextTable table() {
