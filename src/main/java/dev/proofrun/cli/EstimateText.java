@@ -120,6 +120,9 @@ final class EstimateText {
         if (x == 0) {
             return "0";
         }
+        if (x < 0.001) {
+            return "< 0.001";
+        }
         return x >= 100 ? String.format(Locale.ROOT, "%.0f", x) : String.format(Locale.ROOT, "%.3g", x);
     }
 
