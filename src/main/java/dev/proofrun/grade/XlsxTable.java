@@ -56,6 +56,12 @@ final class XlsxTable {
         } catch (IOException | OpenXML4JException | SAXException | ParserConfigurationException
                 | org.apache.poi.ooxml.POIXMLException | org.apache.poi.openxml4j.exceptions.InvalidOperationException e) {
             throw new UserException(Location.file(display), GradeMessage.FILE_UNREADABLE, String.valueOf(e.getMessage()));
+        } catch (UserException e) {
+            throw e;
+        } catch (RuntimeException e) {
+            // POI signals a file that is not a workbook with unchecked exceptions (NotOfficeXmlFileException, ...)
+            throw new UserException(Location.file(display), GradeMessage.FILE_UNREADABLE,
+                    "not a readable XLSX workbook (" + e.getClass().getSimpleName() + ")");
         }
     }
 
