@@ -84,6 +84,8 @@ public enum AppMessage implements MessageKey {
     GRADING_NO_FILE("name the returned file"),
     GRADING_NOT_FOUND("no such file: %s"),
     GRADING_FAILED("the file could not be graded: %s"),
+    GRADING_NOTHING("grade a returned file first"),
+    GRADING_REPORT("Report written to %s"),
     GRADING_DONE("%s graded: %s, %d problems listed"),
     GOAL_EXPECTED_NOT_ABOVE("the expected %s (%.3f) must be above the required %.3f, or no study can show it");
 

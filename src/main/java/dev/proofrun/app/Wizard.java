@@ -2,6 +2,8 @@ package dev.proofrun.app;
 
 import dev.proofrun.app.goal.GoalView;
 import dev.proofrun.app.goal.GoalViewModel;
+import dev.proofrun.app.grading.GradingView;
+import dev.proofrun.app.grading.GradingViewModel;
 import dev.proofrun.app.handout.HandoutView;
 import dev.proofrun.app.handout.HandoutViewModel;
 import dev.proofrun.app.part.PartView;
@@ -37,6 +39,7 @@ public final class Wizard {
     private final SizingViewModel sizing;
     private final TimingViewModel timing;
     private final HandoutViewModel handout;
+    private final GradingViewModel grading;
 
     private Wizard(AppHome home, HostServices host) {
         session = new Session(home);
@@ -49,10 +52,12 @@ public final class Wizard {
         if (host != null) {
             handout.setOpener(host::showDocument);
         }
-        List<StepViewModel> steps = List.of(start, part, goal, sizing, timing, handout);
+        grading = new GradingViewModel(session, Background.fx("proofrun-grade"));
+        List<StepViewModel> steps = List.of(start, part, goal, sizing, timing, handout, grading);
         shell = new ShellViewModel(session, steps);
         List<StepView> views = List.of(new StartView(start), new PartView(part), new GoalView(goal),
-                new SizingView(sizing), new TimingView(timing), new HandoutView(handout));
+                new SizingView(sizing), new TimingView(timing), new HandoutView(handout),
+                new GradingView(grading));
         view = new ShellView(shell, views);
     }
 
@@ -69,7 +74,8 @@ public final class Wizard {
 
     /** True while a step computes in the background. */
     public boolean busy() {
-        return sizing.busyProperty().get() || timing.busyProperty().get() || handout.busyProperty().get();
+        return sizing.busyProperty().get() || timing.busyProperty().get() || handout.busyProperty().get()
+                || grading.busyProperty().get();
     }
 
     public Session session() {
@@ -106,5 +112,9 @@ public final class Wizard {
 
     public HandoutViewModel handout() {
         return handout;
+    }
+
+    public GradingViewModel grading() {
+        return grading;
     }
 }

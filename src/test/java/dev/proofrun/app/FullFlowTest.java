@@ -10,6 +10,11 @@ import dev.proofrun.design.DesignRow;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.Map;
+import dev.proofrun.grade.PlanAdapter;
+import dev.proofrun.grade.SimulatedReturn;
+import dev.proofrun.grade.Verdict;
+import dev.proofrun.plan.StudyPlan;
 import java.util.concurrent.TimeUnit;
 import javafx.scene.Node;
 import javafx.scene.control.Label;
@@ -127,5 +132,32 @@ class FullFlowTest {
         for (String name : List.of(id + "-sheet.pdf", id + "-fill-in.csv", id + "-fill-in.xlsx")) {
             assertTrue(Files.size(out.resolve(name)) > 0, name);
         }
+
+        // grade: a returned file written by the demo command's code for the plan just issued
+        Path returned = out.resolve("returned.csv");
+        StudyPlan issued = app.wizard().session().base().orElseThrow();
+        SimulatedReturn.writeCsv(PlanAdapter.of(issued), demoProcesses(), 99L, returned);
+        robot.clickOn("#next");
+        replaceText(robot, "#returned-file", returned.toString());
+        robot.clickOn("#grade");
+        settle();
+        String verdict = robot.lookup("#verdict").queryAs(Label.class).getText();
+        assertTrue(verdict.startsWith("Verdict for plan " + id + "@" + issued.revision().orElseThrow() + ": "), verdict);
+        Verdict overall = app.wizard().grading().resultProperty().get().verdict();
+        assertTrue(verdict.endsWith(dev.proofrun.app.grading.GradingViewModel.verdictWords(overall)), verdict);
+        String caution = robot.lookup("#caution").queryAs(Label.class).getText();
+        assertTrue(caution.startsWith("Caution: a statistical statement under assumptions"), caution);
+        assertTrue(robot.lookup("#char-caution").queryAs(Label.class).isVisible());
+        robot.clickOn("#export-report");
+        WaitForAsyncUtils.waitForFxEvents();
+        assertTrue(Files.size(out.resolve(id + "-report.pdf")) > 0);
+    }
+
+    /** The processes of {@code cli.DemoCommand.processes()} (package-private there), copied as they are. */
+    private static Map<String, SimulatedReturn.Process> demoProcesses() {
+        return Map.of(
+                "D1", SimulatedReturn.Process.stable(22.0012, 0.0021),
+                "R4", SimulatedReturn.Process.stable(0.42, 0.086),
+                "F7", SimulatedReturn.Process.stepping(6.1, 0.22, 0.6, -0.55));
     }
 }

@@ -13,7 +13,8 @@ final class Snapshots {
 
     /** Returns once no step is busy: polls the FX thread, each poll queued behind the previous events. */
     static void settle(Wizard w, Path work) throws Exception {
-        for (int i = 0; i < 6000; i++) {
+        long deadline = System.nanoTime() + 90_000_000_000L;
+        while (System.nanoTime() < deadline) {
             CompletableFuture<Boolean> busy = new CompletableFuture<>();
             Platform.runLater(() -> busy.complete(w.busy()));
             if (!busy.get(10, TimeUnit.SECONDS)) {

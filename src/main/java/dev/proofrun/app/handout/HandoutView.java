@@ -38,7 +38,7 @@ public final class HandoutView implements StepView {
         issue.getStyleClass().add("pr-primary");
         issue.setOnAction(e -> vm.issue());
         issue.disableProperty().bind(Bindings.createBooleanBinding(() -> vm.composedBinding().get().plan().isEmpty()
-                || vm.issuedNow().isPresent(), vm.composedBinding(), vm.stateBinding()));
+                || vm.issuedBinding().get().isPresent(), vm.composedBinding(), vm.issuedBinding()));
         Label message = new Label();
         message.setId("handout-message");
         message.setWrapText(true);
@@ -68,7 +68,7 @@ public final class HandoutView implements StepView {
         });
         Button export = new Button("_Export PDF, CSV and XLSX");
         export.setId("export");
-        export.disableProperty().bind(Bindings.createBooleanBinding(() -> vm.issuedNow().isEmpty(), vm.stateBinding()));
+        export.disableProperty().bind(Bindings.createBooleanBinding(() -> vm.issuedBinding().get().isEmpty(), vm.issuedBinding()));
         export.setOnAction(e -> vm.export(Path.of(folder.getText().trim())));
         Button open = new Button("_Open the PDF");
         open.setId("open-pdf");

@@ -60,6 +60,7 @@ public final class HandoutViewModel extends StepViewModel {
     private final StringProperty message = new SimpleStringProperty(this, "message", "");
     private final ObjectProperty<SheetFiles.Written> exported = new SimpleObjectProperty<>(this, "exported");
     private final StringBinding state;
+    private final ObjectBinding<Optional<StudyPlan>> issued;
     private Consumer<String> opener = uri -> { };
     private final Background background;
     private Background.Job preview;
@@ -78,14 +79,15 @@ public final class HandoutViewModel extends StepViewModel {
         this.timing = timing;
         composed = Bindings.createObjectBinding(this::compose, session.draft().editsProperty(), sizing.designBinding(),
                 timing.scheduleChanges(), timing.busyProperty(), goal.requirementBinding(), session.baseProperty());
-        state = Bindings.createStringBinding(this::describeState, composed, session.baseProperty());
+        issued = Bindings.createObjectBinding(this::computeIssued, composed, session.baseProperty());
+        state = Bindings.createStringBinding(this::describeState, issued, session.baseProperty());
         bindMissing(Bindings.createStringBinding(() -> {
             Composed c = composed.get();
             if (c.plan().isEmpty()) {
                 return c.problem().isEmpty() ? AppMessage.HANDOUT_EARLIER.format() : c.problem();
             }
-            return issuedNow().isPresent() ? "" : AppMessage.HANDOUT_ISSUE.format();
-        }, composed, session.baseProperty()));
+            return issued.get().isPresent() ? "" : AppMessage.HANDOUT_ISSUE.format();
+        }, composed, issued, session.baseProperty()));
         composed.addListener((o, a, b) -> exported.set(null));
     }
 
@@ -140,6 +142,15 @@ public final class HandoutViewModel extends StepViewModel {
 
     /** The issued plan when the file's issued plan is exactly what the steps describe. */
     public Optional<StudyPlan> issuedNow() {
+        return issued.get();
+    }
+
+    /** {@link #issuedNow()} as a binding for the view. */
+    public ObjectBinding<Optional<StudyPlan>> issuedBinding() {
+        return issued;
+    }
+
+    private Optional<StudyPlan> computeIssued() {
         StudyPlan base = session.baseProperty().get();
         Optional<StudyPlan> now = composed.get().plan();
         if (base == null || !base.isIssued() || now.isEmpty()) {

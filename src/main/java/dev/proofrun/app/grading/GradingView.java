@@ -1,0 +1,285 @@
+package dev.proofrun.app.grading;
+
+import dev.proofrun.app.chart.Charts;
+import dev.proofrun.app.shell.IndexTips;
+import dev.proofrun.app.shell.StepView;
+import dev.proofrun.control.ControlChart;
+import dev.proofrun.grade.CharacteristicGrade;
+import dev.proofrun.grade.GradeResult;
+import dev.proofrun.grade.IndexEvidence;
+import dev.proofrun.grade.Problem;
+import dev.proofrun.grade.Step;
+import dev.proofrun.grade.Verdict;
+import java.io.File;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.function.Function;
+import javafx.beans.property.ReadOnlyStringWrapper;
+import javafx.scene.Node;
+import javafx.scene.chart.LineChart;
+import javafx.scene.control.Button;
+import javafx.scene.control.Label;
+import javafx.scene.control.ProgressIndicator;
+import javafx.scene.control.TableColumn;
+import javafx.scene.control.TableView;
+import javafx.scene.control.TextField;
+import javafx.scene.control.Tooltip;
+import javafx.scene.layout.HBox;
+import javafx.scene.layout.Priority;
+import javafx.scene.layout.VBox;
+import javafx.stage.FileChooser;
+
+/** The returned file, its problems, and per characteristic the evidence chain, verdict, caution and charts. */
+public final class GradingView implements StepView {
+
+    private final VBox root = new VBox(12);
+    private final TextField file = new TextField();
+    private final Label verdict = new Label();
+    private final Label charVerdict = new Label();
+    private final VBox chain = new VBox(6);
+    private final LineChart<Number, Number> location = Charts.lines("location-chart", "Location chart", "subgroup", "");
+    private final LineChart<Number, Number> spread = Charts.lines("spread-chart", "Spread chart", "subgroup", "");
+    private final LineChart<Number, Number> readings = Charts.lines("readings-chart", "Readings against the limits", "reading", "");
+
+    public GradingView(GradingViewModel vm) {
+        file.setId("returned-file");
+        file.setPrefColumnCount(40);
+        file.textProperty().bindBidirectional(vm.returnedFile());
+        HBox.setHgrow(file, Priority.ALWAYS);
+        Button browse = new Button("Choose…");
+        browse.setOnAction(e -> {
+            FileChooser fc = new FileChooser();
+            fc.getExtensionFilters().add(new FileChooser.ExtensionFilter("Fill-in file", "*.csv", "*.xlsx"));
+            File f = fc.showOpenDialog(root.getScene().getWindow());
+            if (f != null) {
+                file.setText(f.toString());
+            }
+        });
+        Button grade = new Button("_Grade");
+        grade.setId("grade");
+        grade.getStyleClass().add("pr-primary");
+        grade.setOnAction(e -> vm.grade());
+        grade.disableProperty().bind(vm.busyProperty());
+        ProgressIndicator spinner = new ProgressIndicator();
+        spinner.setMaxSize(24, 24);
+        spinner.visibleProperty().bind(vm.busyProperty());
+        Label message = new Label();
+        message.setId("grading-message");
+        message.setWrapText(true);
+        message.textProperty().bind(vm.messageProperty());
+        Button report = new Button("Export the _report PDF");
+        report.setId("export-report");
+        report.disableProperty().bind(vm.resultProperty().isNull());
+        report.setOnAction(e -> vm.exportReport(vm.defaultReport()));
+        Label fileLabel = new Label("Returned file");
+        fileLabel.setLabelFor(file);
+        VBox fileCard = new VBox(new HBox(8, fileLabel, file, browse, grade, spinner, report), message);
+        fileCard.getStyleClass().add("pr-card");
+
+        verdict.setId("verdict");
+        verdict.getStyleClass().add("pr-verdict");
+        Label caution = caution(vm, "caution");
+        VBox verdictCard = new VBox(verdict, caution);
+        verdictCard.getStyleClass().add("pr-card");
+        verdictCard.visibleProperty().bind(vm.resultProperty().isNotNull());
+        verdictCard.managedProperty().bind(verdictCard.visibleProperty());
+
+        TableView<Problem> problems = new TableView<>(vm.problems());
+        problems.setId("problems");
+        problems.setPrefHeight(170);
+        problems.setPlaceholder(new Label("No problems in the file."));
+        problems.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY_FLEX_LAST_COLUMN);
+        problems.getColumns().add(col("Row", p -> p.location().row() > 0 ? Long.toString(p.location().row()) : ""));
+        problems.getColumns().add(col("Column", p -> p.location().column() == null ? "" : p.location().column()));
+        problems.getColumns().add(col("Kind", p -> p.severity().id()));
+        problems.getColumns().add(col("Characteristic", p -> p.characteristic() == null ? "" : p.characteristic()));
+        problems.getColumns().add(col("Problem", Problem::message));
+        Label problemsTitle = new Label("Problems in the file");
+        problemsTitle.getStyleClass().add("pr-card-title");
+        VBox problemsCard = new VBox(problemsTitle, problems);
+        problemsCard.getStyleClass().add("pr-card");
+        problemsCard.visibleProperty().bind(vm.resultProperty().isNotNull());
+        problemsCard.managedProperty().bind(problemsCard.visibleProperty());
+
+        TableView<CharacteristicGrade> grades = new TableView<>(vm.grades());
+        grades.setId("grades");
+        grades.setPrefHeight(130);
+        grades.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY_FLEX_LAST_COLUMN);
+        grades.getColumns().add(col("Id", CharacteristicGrade::id));
+        grades.getColumns().add(col("Name", CharacteristicGrade::name));
+        grades.getColumns().add(col("Verdict", g -> GradingViewModel.verdictWords(g.verdict())));
+        TableColumn<CharacteristicGrade, String> est = col("Estimate", g -> g.judged() == null ? "—"
+                : g.judged().index().symbol() + " " + GradingViewModel.fmt(g.judged().estimate()));
+        est.setGraphic(tipped("Estimate", "The index computed from the returned readings; hover an index in the "
+                + "evidence below for its formula."));
+        est.setText(null);
+        grades.getColumns().add(est);
+        TableColumn<CharacteristicGrade, String> low = col("Lower bound", g -> g.judged() == null ? "—"
+                : GradingViewModel.fmt(g.judged().lower()) + " vs " + GradingViewModel.fmt(g.judged().required()));
+        low.setGraphic(tipped("Lower bound vs required", "The lower confidence bound of the index; the requirement is "
+                + "demonstrated when it reaches the required minimum."));
+        low.setText(null);
+        grades.getColumns().add(low);
+        grades.getSelectionModel().selectedItemProperty().addListener((o, a, b) -> {
+            if (b != null) {
+                vm.selectedProperty().set(b);
+            }
+        });
+        charVerdict.setId("char-verdict");
+        charVerdict.getStyleClass().add("pr-verdict");
+        Label charCaution = caution(vm, "char-caution");
+        chain.setId("evidence");
+        HBox charts = new HBox(12, location, spread, readings);
+        for (Node c : charts.getChildren()) {
+            HBox.setHgrow(c, Priority.ALWAYS);
+        }
+        Label gradesTitle = new Label("Per characteristic");
+        gradesTitle.getStyleClass().add("pr-card-title");
+        VBox gradesCard = new VBox(gradesTitle, grades, charVerdict, charCaution, chain, charts);
+        gradesCard.getStyleClass().add("pr-card");
+        gradesCard.visibleProperty().bind(vm.resultProperty().isNotNull());
+        gradesCard.managedProperty().bind(gradesCard.visibleProperty());
+
+        vm.resultProperty().addListener((o, a, r) -> showResult(r));
+        vm.selectedProperty().addListener((o, a, g) -> {
+            showCharacteristic(g);
+            if (g != null && grades.getSelectionModel().getSelectedItem() != g) {
+                grades.getSelectionModel().select(g);
+            }
+        });
+        root.getChildren().addAll(fileCard, verdictCard, problemsCard, gradesCard);
+    }
+
+    private void showResult(GradeResult r) {
+        if (r == null) {
+            verdict.setText("");
+            return;
+        }
+        verdict.setText("Verdict for plan " + r.planId() + "@" + r.revision() + ": " + GradingViewModel.verdictWords(r.verdict()));
+        style(verdict, r.verdict());
+    }
+
+    private void showCharacteristic(CharacteristicGrade g) {
+        chain.getChildren().clear();
+        location.getData().clear();
+        spread.getData().clear();
+        readings.getData().clear();
+        if (g == null) {
+            charVerdict.setText("");
+            return;
+        }
+        charVerdict.setText(g.id() + " " + g.name() + ": " + GradingViewModel.verdictWords(g.verdict())
+                + (g.additionalSubgroups().isPresent()
+                        ? " (about " + g.additionalSubgroups().getAsInt() + " more subgroups would settle it)" : ""));
+        style(charVerdict, g.verdict());
+        String[] titles = {"1 Complete?", "2 Stable?", "3 Shape", "4 Capable?"};
+        Step[] steps = {Step.COMPLETENESS, Step.STABILITY, Step.SHAPE, Step.CAPABILITY};
+        for (int i = 0; i < steps.length; i++) {
+            Label head = new Label(titles[i]);
+            head.getStyleClass().add("pr-card-title");
+            Label body = new Label(String.join("\n", GradingViewModel.reasons(g, steps[i])));
+            body.setWrapText(true);
+            body.setId("evidence-" + steps[i].id());
+            chain.getChildren().addAll(head, body);
+        }
+        IndexEvidence e = g.judged();
+        if (e != null) {
+            Label idx = new Label(String.format(Locale.ROOT, "%s = %.3f, lower %.0f %% bound %.3f, required %.3f (model: %s)",
+                    e.index().symbol(), e.estimate(), 100 * e.confidence(), e.lower(), e.required(), e.model().id()));
+            idx.setId("index-evidence");
+            Tooltip t = new Tooltip(IndexTips.of(e.index()) + "\n\n" + IndexTips.lowerBound(e.index(), e.confidence()));
+            t.setWrapText(true);
+            t.setMaxWidth(480);
+            idx.setTooltip(t);
+            chain.getChildren().add(idx);
+        }
+        if (g.stability() != null) {
+            chart(location, g.stability().charts().location(), g.unit());
+            chart(spread, g.stability().charts().spread(), g.unit());
+        }
+        List<double[]> pts = new ArrayList<>();
+        int i = 1;
+        for (double[] sub : g.subgroups()) {
+            for (double v : sub) {
+                pts.add(new double[] {i++, v});
+            }
+        }
+        if (!pts.isEmpty()) {
+            readings.getData().add(Charts.series("readings", pts));
+            if (g.limits().lower().isPresent()) {
+                readings.getData().add(Charts.horizontal("LSL " + num(g.limits().lower().getAsDouble()),
+                        g.limits().lower().getAsDouble(), 1, pts.size()));
+            }
+            if (g.limits().upper().isPresent()) {
+                readings.getData().add(Charts.horizontal("USL " + num(g.limits().upper().getAsDouble()),
+                        g.limits().upper().getAsDouble(), 1, pts.size()));
+            }
+        }
+    }
+
+    private static void chart(LineChart<Number, Number> c, ControlChart cc, String unit) {
+        c.setTitle(cc.statistic().name().toLowerCase(Locale.ROOT).replace('_', ' ') + " chart" + (unit.isEmpty() ? "" : " (" + unit + ")"));
+        List<double[]> pts = new ArrayList<>();
+        for (int i = 0; i < cc.points().length; i++) {
+            pts.add(new double[] {cc.subgroupOf(i) + 1, cc.points()[i]});
+        }
+        if (pts.isEmpty()) {
+            return;
+        }
+        double x0 = pts.get(0)[0];
+        double x1 = pts.get(pts.size() - 1)[0];
+        c.getData().add(Charts.series(cc.statistic().name().toLowerCase(Locale.ROOT), pts));
+        c.getData().add(Charts.horizontal("UCL " + num(cc.ucl()), cc.ucl(), x0, x1));
+        c.getData().add(Charts.horizontal("centre " + num(cc.center()), cc.center(), x0, x1));
+        c.getData().add(Charts.horizontal("LCL " + num(cc.lcl()), cc.lcl(), x0, x1));
+    }
+
+    private static String num(double v) {
+        return String.format(Locale.ROOT, "%.4g", v);
+    }
+
+    private static void style(Label l, Verdict v) {
+        l.getStyleClass().removeAll("pr-verdict-good", "pr-verdict-short", "pr-verdict-open");
+        l.getStyleClass().add(switch (v) {
+            case DEMONSTRATED -> "pr-verdict-good";
+            case INCONCLUSIVE -> "pr-verdict-open";
+            default -> "pr-verdict-short";
+        });
+    }
+
+    private static Label caution(GradingViewModel vm, String id) {
+        Label c = new Label(vm.caution());
+        c.setId(id);
+        c.getStyleClass().add("pr-caution");
+        c.setWrapText(true);
+        vm.resultProperty().addListener((o, a, b) -> c.setText(vm.caution()));
+        return c;
+    }
+
+    private static Label tipped(String text, String tip) {
+        Label l = new Label(text);
+        Tooltip t = new Tooltip(tip);
+        t.setWrapText(true);
+        t.setMaxWidth(420);
+        l.setTooltip(t);
+        return l;
+    }
+
+    private static <T> TableColumn<T, String> col(String title, Function<T, String> text) {
+        TableColumn<T, String> c = new TableColumn<>(title);
+        c.setSortable(false);
+        c.setCellValueFactory(cd -> new ReadOnlyStringWrapper(text.apply(cd.getValue())));
+        return c;
+    }
+
+    @Override
+    public Node root() {
+        return root;
+    }
+
+    @Override
+    public Node firstFocus() {
+        return file;
+    }
+}
