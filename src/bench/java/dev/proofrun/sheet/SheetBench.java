@@ -41,7 +41,7 @@ public class SheetBench {
 
     /** All three files into a directory, first call in a fresh JVM. */
     @Benchmark
-    @Fork(5)
+    @Fork(3)
     @Warmup(iterations = 0)
     @Measurement(iterations = 1)
     public Object cold() {

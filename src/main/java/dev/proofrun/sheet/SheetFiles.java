@@ -15,6 +15,8 @@ import java.nio.file.StandardOpenOption;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.UUID;
+import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.CompletionException;
 
 /**
  * Writes the three files of a collection sheet into a directory: {@code <plan id>-sheet.pdf},
@@ -70,9 +72,21 @@ public final class SheetFiles {
         List<Path> temps = new ArrayList<>();
         try {
             Files.createDirectories(dir);
-            temps.add(temp(dir, out -> SheetPdf.write(plan, paper, out)));
-            temps.add(temp(dir, out -> FillInCsv.write(plan, out)));
-            temps.add(temp(dir, out -> FillInXlsx.write(plan, out)));
+            // The workbook is written on a second thread while the PDF is laid out: on a fresh JVM most of
+            // the time is class loading of PDFBox and POI, which two cores do side by side.
+            CompletableFuture<Path> xlsx = CompletableFuture.supplyAsync(() -> {
+                try {
+                    return temp(dir, out -> FillInXlsx.write(plan, out));
+                } catch (IOException e) {
+                    throw new UncheckedIOException(e);
+                }
+            });
+            try {
+                temps.add(temp(dir, out -> SheetPdf.write(plan, paper, out)));
+                temps.add(temp(dir, out -> FillInCsv.write(plan, out)));
+            } finally {
+                temps.add(join(xlsx));
+            }
             List<Path> finals = target.all();
             for (int i = 0; i < finals.size(); i++) {
                 move(temps.get(i), finals.get(i));
@@ -88,6 +102,22 @@ public final class SheetFiles {
                     // best effort: a temporary file we could not delete is named .proofrun-*.tmp
                 }
             }
+        }
+    }
+
+    /** The result of the workbook thread; its failure surfaces here as the I/O failure it was. */
+    private static Path join(CompletableFuture<Path> f) throws IOException {
+        try {
+            return f.join();
+        } catch (CompletionException e) {
+            Throwable cause = e.getCause();
+            if (cause instanceof UncheckedIOException u) {
+                throw u.getCause();
+            }
+            if (cause instanceof RuntimeException r) {
+                throw r;
+            }
+            throw new IOException(cause);
         }
     }
 
