@@ -14,15 +14,15 @@ import org.apache.commons.numbers.gamma.Erfc;
  * first term alone, which is the noncentral t tail of Chou, Owen &amp; Borrego (1990, JQT 22:223–229).
  *
  * <p>This is a fast fixed-node version for the designer, which evaluates the tail thousands of times per
- * table: where Φ is within 1e-17 of 1 the integral is the chi distribution function, and only the
- * transition of width ±8.5/(3c√N) around each edge is integrated with 40-node Gauss–Legendre. Its results
+ * table: where Φ is within 1e-13 of 1 the integral is the chi distribution function, and only the
+ * transition of width ±7.5/(3c√N) around each edge is integrated with 28-node Gauss–Legendre. Its results
  * are checked against {@code stats.IndexDistribution} (adaptive quadrature) in {@code IndexTailTest}.
  * Requires c &gt; 0.
  */
 final class IndexTail {
 
-    private static final GaussLegendre GL = GaussLegendre.of(40);
-    private static final double EDGE = 8.5;
+    private static final GaussLegendre GL = GaussLegendre.of(28);
+    private static final double EDGE = 7.5;
     private static final double SQRT_HALF = Math.sqrt(0.5);
 
     private final ChiScale chi;
@@ -57,10 +57,27 @@ final class IndexTail {
 
     /** P(Ĉpk ≥ c) for a true Cpk L and Cp (Cp = +∞: one-sided). */
     double minAtLeast(double c, double trueCpk, double trueCp) {
+        return evaluate(c, trueCpk, trueCp, null);
+    }
+
+    /**
+     * P(Ĉpk ≥ c) and, in {@code slope[0]}, its derivative in c:
+     * −3√N·∫ f_W(w)·w·[φ(√N(3L − 3cw)) + φ(√N(3cw + 3L − 6Cp))] dw (the integrand vanishes at the moving
+     * end w = Cp/c, so no boundary term).
+     */
+    double minAtLeast(double c, double trueCpk, double trueCp, double[] slope) {
+        return evaluate(c, trueCpk, trueCp, slope);
+    }
+
+    private double evaluate(double c, double trueCpk, double trueCp, double[] slope) {
         double s = 3 * c * rootN;
         double lower = chi.lower();
         double cap = Math.min(chi.upper(), trueCp / c);
+        double d = 0;
         if (!(cap > lower)) {
+            if (slope != null) {
+                slope[0] = 0;
+            }
             return 0;
         }
         double m1 = trueCpk / c;
@@ -70,7 +87,12 @@ final class IndexTail {
         double hi = Math.min(cap, m1 + EDGE / s);
         for (int i = 0, n = GL.order(); hi > lo && i < n; i++) {
             double w = GL.node(i, lo, hi);
-            t1 += GL.weight(i, lo, hi) * chi.density(w) * phi(s * (m1 - w));
+            double fw = GL.weight(i, lo, hi) * chi.density(w);
+            double x = s * (m1 - w);
+            t1 += fw * phi(x);
+            if (slope != null) {
+                d += fw * w * Math.exp(-0.5 * x * x);
+            }
         }
         double t2 = 0;
         if (trueCp != Double.POSITIVE_INFINITY) {
@@ -78,8 +100,16 @@ final class IndexTail {
             double lo2 = Math.max(lower, m2 - EDGE / s);
             for (int i = 0, n = GL.order(); cap > lo2 && i < n; i++) {
                 double w = GL.node(i, lo2, cap);
-                t2 += GL.weight(i, lo2, cap) * chi.density(w) * phi(s * (w - m2));
+                double fw = GL.weight(i, lo2, cap) * chi.density(w);
+                double x = s * (w - m2);
+                t2 += fw * phi(x);
+                if (slope != null) {
+                    d += fw * w * Math.exp(-0.5 * x * x);
+                }
             }
+        }
+        if (slope != null) {
+            slope[0] = -3 * rootN * d / Math.sqrt(2 * Math.PI);
         }
         return Math.max(0, Math.min(1, t1 - t2));
     }

@@ -30,7 +30,7 @@ public final class StudyDesigner {
     public static final int MAX_READINGS = 10_000;
     static final int STEP_BACK = 3;
     private static final int OC_POINTS = 41;
-    private static final int CURVE_POINTS = 40;
+    private static final int CURVE_POINTS = 20;
 
     private StudyDesigner() {
     }

@@ -134,7 +134,7 @@ final class StudyPower {
             case SPREAD:
                 return target * Math.sqrt(nu / ChiSquaredDistribution.of(nu).inverseCumulativeProbability(alpha));
             case ONE_SIDED:
-                return solveCritical(c -> tail.oneSidedAtLeast(c, target), bissellCritical());
+                return exactCriticalAt(1, bissellCritical());
             default:
                 if (method == BoundMethod.BISSELL) {
                     return bissellCritical();
@@ -163,11 +163,36 @@ final class StudyPower {
 
     /** ĉ* for the exact two-sided bound at a relative offset k̂ ∈ [0, 1); k̂ = 1 gives the one-sided value. */
     double exactCriticalAt(double relativeOffset, double guess) {
-        if (relativeOffset >= 1) {
-            return solveCritical(c -> tail.oneSidedAtLeast(c, target), guess);
+        double cp = relativeOffset >= 1 ? Double.POSITIVE_INFINITY : target / (1 - relativeOffset);
+        double c = newton(cp, guess);
+        if (Double.isNaN(c)) {
+            c = solveCritical(x -> tail.minAtLeast(x, target, cp), guess);
         }
-        double cp = target / (1 - relativeOffset);
-        return solveCritical(c -> tail.minAtLeast(c, target, cp), guess);
+        return c;
+    }
+
+    /** Newton's method on tail(c) − α from the guess; NaN when it leaves the safe region or stalls. */
+    private double newton(double cp, double guess) {
+        if (!(Double.isFinite(guess) && guess > target)) {
+            return Double.NaN;
+        }
+        double[] slope = new double[1];
+        double c = guess;
+        for (int i = 0; i < 12; i++) {
+            double f = tail.minAtLeast(c, target, cp, slope) - alpha;
+            if (!(slope[0] < 0)) {
+                return Double.NaN;
+            }
+            double next = c - f / slope[0];
+            if (!(next > target) || next > 3 * guess) {
+                return Double.NaN;
+            }
+            if (Math.abs(next - c) < 1e-9) {
+                return next;
+            }
+            c = next;
+        }
+        return Double.NaN;
     }
 
     /**
