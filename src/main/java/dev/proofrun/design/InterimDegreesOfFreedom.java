@@ -21,6 +21,11 @@ final class InterimDegreesOfFreedom {
     private InterimDegreesOfFreedom() {
     }
 
+    /** d2(n) from the ASTM E2587 table (interim, for tests until stats.ChartConstants lands). */
+    static double d2(int n) {
+        return D2[n];
+    }
+
     static double of(SigmaMethod m, int n, int k) {
         switch (m) {
             case POOLED:

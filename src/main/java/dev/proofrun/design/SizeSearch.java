@@ -50,7 +50,8 @@ final class SizeSearch {
 
     StudyPower model(int k) {
         return models.computeIfAbsent(k, kk -> new StudyPower(request.shape(), request.boundMethod(),
-                request.requirement().minimum(), request.requirement().confidence(), n * kk, nu(kk)));
+                request.requirement().minimum(), request.requirement().confidence(), n * kk, nu(kk),
+                request.requirement().index().usesWithinSigma()));
     }
 
     double power(int k) {
