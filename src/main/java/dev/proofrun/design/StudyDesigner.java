@@ -2,6 +2,7 @@ package dev.proofrun.design;
 
 import dev.proofrun.stats.IndexKind;
 import dev.proofrun.stats.SigmaMethod;
+import dev.proofrun.stats.WithinSigma;
 import dev.proofrun.text.UserException;
 import java.util.ArrayList;
 import java.util.Comparator;
@@ -134,6 +135,6 @@ public final class StudyDesigner {
         if (!kind.usesWithinSigma()) {
             return n * k - 1.0;
         }
-        return InterimDegreesOfFreedom.of(method, n, k);
+        return WithinSigma.degreesOfFreedom(method, n, k);
     }
 }

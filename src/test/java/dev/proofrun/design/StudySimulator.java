@@ -3,6 +3,9 @@ package dev.proofrun.design;
 import dev.proofrun.stats.BoundMethod;
 import dev.proofrun.stats.CapabilityBounds;
 import dev.proofrun.stats.SigmaMethod;
+import dev.proofrun.stats.WithinSigma;
+import java.util.ArrayList;
+import java.util.List;
 import org.apache.commons.rng.UniformRandomProvider;
 import org.apache.commons.rng.sampling.distribution.ZigguratSampler;
 import org.apache.commons.rng.simple.RandomSource;
@@ -12,8 +15,8 @@ import org.apache.commons.rng.simple.RandomSource;
  * σ_w with the chosen estimator, computes Ĉp and Ĉpk (or the one-sided index, or Ppk from the overall s),
  * applies the real lower bound ({@link CapabilityBounds}) and counts the studies whose bound reaches c₀.
  *
- * <p>INTERIM estimator: R̄/d2, MR̄/d2(2) and pooled s are computed here until stats.WithinSigma lands on
- * main (d2 from the ASTM E2587 table); the degrees of freedom are those the designer uses.
+ * <p>The estimator is the real one, {@link WithinSigma#estimate} (the grade uses it), with its effective
+ * degrees of freedom; Ppk uses the ordinary overall s with ν = N − 1.
  */
 final class StudySimulator {
 
@@ -29,7 +32,7 @@ final class StudySimulator {
         ZigguratSampler.NormalizedGaussian gauss = ZigguratSampler.NormalizedGaussian.of(rng);
         int readings = n * k;
         SigmaMethod sigma = SigmaMethod.defaultFor(n);
-        double nu = index == Index.PPK ? readings - 1.0 : InterimDegreesOfFreedom.of(sigma, n, k);
+        double nu = index == Index.PPK ? readings - 1.0 : WithinSigma.degreesOfFreedom(sigma, n, k);
         // σ = 1, midpoint 0; half tolerance 3·Cp1; mean 3·(Cp1 − c1) above the midpoint.
         double half = 3 * cp1;
         double mu = index == Index.CPU ? 0 : 3 * (cp1 - c1);
@@ -41,7 +44,7 @@ final class StudySimulator {
             for (int i = 0; i < readings; i++) {
                 x[i] = mu + gauss.sample();
             }
-            double sd = index == Index.PPK ? overall(x) : within(x, n, k);
+            double sd = index == Index.PPK ? overall(x) : within(x, n, k, sigma);
             double mean = mean(x);
             double bound;
             switch (index) {
@@ -84,24 +87,11 @@ final class StudySimulator {
         return Math.sqrt(ss / (x.length - 1));
     }
 
-    private static double within(double[] x, int n, int k) {
-        if (n == 1) {
-            double sum = 0;
-            for (int i = 1; i < x.length; i++) {
-                sum += Math.abs(x[i] - x[i - 1]);
-            }
-            return sum / (x.length - 1) / InterimDegreesOfFreedom.d2(2);
-        }
-        double sum = 0;
+    private static double within(double[] x, int n, int k, SigmaMethod sigma) {
+        List<double[]> groups = new ArrayList<>(k);
         for (int g = 0; g < k; g++) {
-            double lo = Double.POSITIVE_INFINITY;
-            double hi = Double.NEGATIVE_INFINITY;
-            for (int i = g * n; i < (g + 1) * n; i++) {
-                lo = Math.min(lo, x[i]);
-                hi = Math.max(hi, x[i]);
-            }
-            sum += hi - lo;
+            groups.add(java.util.Arrays.copyOfRange(x, g * n, (g + 1) * n));
         }
-        return sum / k / InterimDegreesOfFreedom.d2(n);
+        return WithinSigma.estimate(sigma, groups).value();
     }
 }
