@@ -62,7 +62,13 @@ class GradeReportTest {
                     assertTrue(all.contains(r.text().replaceAll("\\s+", " ")), "reason: " + r.text());
                 }
             }
-            assertTrue(first.contains(result.caution().replaceAll("\\s+", " ")), "the caution in the verdict box");
+            String caution = result.caution().replaceAll("\\s+", " ");
+            assertTrue(first.contains(caution), "the caution in the verdict box");
+            CharacteristicGrade last = result.characteristics().get(result.characteristics().size() - 1);
+            String lastReason = VerdictSection.decisive(last).get(0).text().replaceAll("\\s+", " ");
+            assertTrue(first.indexOf(lastReason) < first.indexOf(caution)
+                    && first.indexOf(caution) < first.indexOf("Problems in the returned file"),
+                    "the caution closes the verdict box, after the last reason");
             assertTrue(all.contains("Subgroup means") && all.contains("Probability plot"));
             assertTrue(all.contains("USL") && all.contains("LSL"));
             PDFRenderer r = new PDFRenderer(doc);
@@ -79,6 +85,28 @@ class GradeReportTest {
                 }
                 assertTrue(dark > 300, "page " + (p + 1) + " has ink");
             }
+        }
+    }
+
+    @Test
+    void aReturnWithTooLittleDataStillGivesAReport() throws IOException {
+        StudyPlan plan = DemoPlan.create();
+        GradingPlan gp = PlanAdapter.of(plan);
+        Path full = dir.resolve("full.csv");
+        SimulatedReturn.writeCsv(gp, Map.of(
+                "D1", SimulatedReturn.Process.stable(22.0, 0.002),
+                "R4", SimulatedReturn.Process.stable(0.4, 0.05),
+                "F7", SimulatedReturn.Process.stable(6.0, 0.2)), 11L, full);
+        // only the header and slot S01 come back: one subgroup per characteristic, no stability or shape evidence
+        Path shortFile = dir.resolve("short.csv");
+        Files.write(shortFile, Files.readAllLines(full).subList(0, 4));
+        GradeResult result = Grader.grade(gp, shortFile, "short.csv");
+        ByteArrayOutputStream out = new ByteArrayOutputStream();
+        GradeReport.write(result, plan, Paper.LETTER, out);
+        try (PDDocument doc = Loader.loadPDF(out.toByteArray())) {
+            String all = text(doc, 1, doc.getNumberOfPages()).replaceAll("\\s+", " ");
+            assertTrue(all.contains("Verdict for the part: " + result.verdict().id()));
+            assertTrue(all.contains("Not enough usable data for this step."), all);
         }
     }
 
