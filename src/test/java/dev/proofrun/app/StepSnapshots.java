@@ -48,10 +48,33 @@ public final class StepSnapshots {
                 return null;
             });
             Snapshots.settle(app.wizard(), work);
+            if (index == steps - 1) {
+                Path returned = work.resolve("returned.csv");
+                dev.proofrun.grade.SimulatedReturn.writeCsv(dev.proofrun.grade.PlanAdapter.of(
+                        app.wizard().session().base().orElseThrow()), java.util.Map.of(
+                        "D1", dev.proofrun.grade.SimulatedReturn.Process.stable(22.0012, 0.0021),
+                        "R4", dev.proofrun.grade.SimulatedReturn.Process.stable(0.42, 0.086),
+                        "F7", dev.proofrun.grade.SimulatedReturn.Process.stepping(6.1, 0.22, 0.6, -0.55)), 99L, returned);
+                onFx(() -> {
+                    app.wizard().grading().returnedFile().set(returned.toString());
+                    return app.wizard().grading().grade();
+                });
+                Snapshots.settle(app.wizard(), work);
+            }
             WritableImage img = onFx(() -> app.wizard().view().root().getScene().snapshot(null));
             File f = out.resolve(String.format("step-%d.png", index + 1)).toFile();
             ImageIO.write(SwingFXUtils.fromFXImage(img, null), "png", f);
             System.out.println("wrote " + f);
+            if (index == steps - 1) {
+                onFx(() -> {
+                    javafx.scene.Node page = app.wizard().view().root().lookup("#page-" + index);
+                    ((javafx.scene.control.ScrollPane) page.getParent().getParent().getParent()).setVvalue(1.0);
+                    return null;
+                });
+                Snapshots.settle(app.wizard(), work);
+                ImageIO.write(SwingFXUtils.fromFXImage(onFx(() -> app.wizard().view().root().getScene().snapshot(null)), null),
+                        "png", out.resolve(String.format("step-%d-lower.png", index + 1)).toFile());
+            }
         }
         Platform.exit();
     }

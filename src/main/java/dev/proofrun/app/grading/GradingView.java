@@ -236,7 +236,7 @@ public final class GradingView implements StepView {
     }
 
     private static String num(double v) {
-        return String.format(Locale.ROOT, "%.4g", v);
+        return String.format(Locale.ROOT, "%.6g", v);
     }
 
     private static void style(Label l, Verdict v) {

@@ -67,8 +67,10 @@ public final class PartView implements StepView {
         rowProblem.setId("row-problem");
         rowProblem.getStyleClass().add("pr-problem");
         rowProblem.setWrapText(true);
-        rowProblem.textProperty().bind(Bindings.when(vm.selectedProblemBinding().isEmpty())
-                .then(vm.firstProblemBinding()).otherwise(vm.selectedProblemBinding()));
+        rowProblem.textProperty().bind(Bindings.when(vm.typingProblemProperty().isNotEmpty())
+                .then(vm.typingProblemProperty())
+                .otherwise(Bindings.when(vm.selectedProblemBinding().isEmpty())
+                        .then(vm.firstProblemBinding()).otherwise(vm.selectedProblemBinding())));
 
         Button add = new Button("_Add characteristic");
         add.setId("add-row");
@@ -129,7 +131,7 @@ public final class PartView implements StepView {
             vm.rows().addListener((javafx.collections.ListChangeListener<CharacteristicDraft>) c -> mark());
         }
 
-        /** Writes each keystroke into the draft, so the cell is validated as it is typed. */
+        /** Checks each keystroke (the view-model's rules on the text as typed); commits on Enter or leaving the cell. */
         @Override
         public void startEdit() {
             super.startEdit();
@@ -138,10 +140,27 @@ public final class PartView implements StepView {
                 tf.setId("editing-" + field.header());
                 tf.textProperty().addListener((obs, was, now) -> {
                     if (isEditing()) {
-                        row.cell(field).set(now);
+                        vm.typing(row, field, now);
+                    }
+                });
+                tf.focusedProperty().addListener((obs, was, now) -> {
+                    if (!now && isEditing()) {
+                        commitEdit(tf.getText());
                     }
                 });
             }
+        }
+
+        @Override
+        public void commitEdit(String value) {
+            super.commitEdit(value);
+            vm.typingDone();
+        }
+
+        @Override
+        public void cancelEdit() {
+            super.cancelEdit();
+            vm.typingDone();
         }
 
         @Override

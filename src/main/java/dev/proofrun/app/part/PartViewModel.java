@@ -43,6 +43,7 @@ public final class PartViewModel extends StepViewModel {
     private final StudyDraft draft;
     private final IntegerProperty selected = new SimpleIntegerProperty(this, "selected", -1);
     private final StringProperty importMessage = new SimpleStringProperty(this, "importMessage", "");
+    private final StringProperty typing = new SimpleStringProperty(this, "typing", "");
     private final StringBinding firstProblem;
     private final StringBinding selectedProblem;
 
@@ -136,6 +137,44 @@ public final class PartViewModel extends StepViewModel {
             importMessage.set(e.getMessage());
             return false;
         }
+    }
+
+    /** The problem of the cell being typed into, checked on each keystroke before it is committed. */
+    public StringProperty typingProblemProperty() {
+        return typing;
+    }
+
+    /**
+     * Checks text being typed into a cell with the same rules as a committed cell, on a copy of the row,
+     * so the message follows each keystroke.
+     */
+    public void typing(CharacteristicDraft row, CharacteristicField field, String text) {
+        CharacteristicDraft copy = CharacteristicDraft.of(row.values());
+        copy.cell(field).set(text);
+        int i = rows().indexOf(row);
+        String id = copy.id().isEmpty() ? "?" : copy.id();
+        for (CharacteristicField f : CharacteristicField.values()) {
+            Optional<String> p = f == CharacteristicField.ID ? idProblem(copy, row) : problem(copy, f);
+            if (p.isPresent()) {
+                typing.set(AppMessage.PART_ROW_PROBLEM.format(i + 1, id, p.get()));
+                return;
+            }
+        }
+        typing.set("");
+    }
+
+    /** The edit ended (committed or cancelled). */
+    public void typingDone() {
+        typing.set("");
+    }
+
+    private Optional<String> idProblem(CharacteristicDraft copy, CharacteristicDraft original) {
+        String text = copy.id();
+        if (text.isEmpty()) {
+            return Optional.of(AppMessage.PART_ID_MISSING.format());
+        }
+        boolean clash = rows().stream().anyMatch(r -> r != original && r.id().equalsIgnoreCase(text));
+        return clash ? Optional.of(AppMessage.PART_ID_REPEATED.format(text)) : Optional.empty();
     }
 
     /** The problem of one cell, or empty when the cell is fine. */

@@ -37,7 +37,10 @@ public final class StudyDraft {
     public StudyDraft() {
         for (DraftField f : DraftField.values()) {
             StringProperty p = new SimpleStringProperty(this, f.name(), f.initial());
-            p.addListener((obs, was, now) -> touched());
+            if (f != DraftField.RETURNED_FILE) {
+                // the returned file is remembered in the draft but is not a change to the plan
+                p.addListener((obs, was, now) -> touched());
+            }
             fields.put(f, p);
         }
         characteristics.addListener((ListChangeListener<CharacteristicDraft>) c -> touched());

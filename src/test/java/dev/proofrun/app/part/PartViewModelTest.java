@@ -113,4 +113,18 @@ class PartViewModelTest {
                 + "(expected id,name,unit,nominal,lsl,usl,target,expected)", vm.importMessageProperty().get());
         assertEquals(1, vm.rows().size());
     }
+
+    @Test
+    void textBeingTypedIsCheckedBeforeItIsCommitted() {
+        CharacteristicDraft row = goodRow();
+        vm.typing(row, CharacteristicField.LSL, "12.1");
+        assertEquals("row 1 (D1): Nominal 12.00 lies outside the limits", vm.typingProblemProperty().get());
+        assertEquals("11.95", row.text(CharacteristicField.LSL), "nothing is committed while typing");
+        vm.typing(row, CharacteristicField.LSL, "11.96");
+        assertEquals("", vm.typingProblemProperty().get());
+        vm.typing(row, CharacteristicField.ID, "");
+        assertEquals("row 1 (?): give it an id", vm.typingProblemProperty().get());
+        vm.typingDone();
+        assertEquals("", vm.typingProblemProperty().get());
+    }
 }
