@@ -87,6 +87,8 @@ public enum AppMessage implements MessageKey {
     GRADING_NOTHING("grade a returned file first"),
     GRADING_REPORT("Report written to %s"),
     GRADING_DONE("%s graded: %s, %d problems listed"),
+    GOAL_PILOT_SHOWN("%d pilot readings in %d subgroups: %s estimate %s, lower %d %% bound %s. The design uses the estimate; "
+            + "the bound shows how uncertain a pilot is."),
     GOAL_EXPECTED_NOT_ABOVE("the expected %s (%.3f) must be above the required %.3f, or no study can show it");
 
     private final String english;

@@ -10,6 +10,7 @@ import java.util.Optional;
 import javafx.beans.binding.Bindings;
 import javafx.collections.FXCollections;
 import javafx.scene.Node;
+import javafx.scene.control.Button;
 import javafx.scene.control.ComboBox;
 import javafx.scene.control.Label;
 import javafx.scene.control.ListCell;
@@ -114,6 +115,35 @@ public final class GoalView implements StepView {
         meanForm.visibleProperty().bind(vm.sourceProperty().isEqualTo(ExpectationSource.MEAN_SIGMA));
         meanForm.managedProperty().bind(meanForm.visibleProperty());
 
+        TextField pilotFile = field("pilot-file", vm.pilotFile());
+        pilotFile.setPrefColumnCount(36);
+        Button choose = new Button("Choose…");
+        choose.setOnAction(e -> {
+            javafx.stage.FileChooser fc = new javafx.stage.FileChooser();
+            fc.getExtensionFilters().add(new javafx.stage.FileChooser.ExtensionFilter("Readings", "*.csv"));
+            java.io.File f = fc.showOpenDialog(root.getScene().getWindow());
+            if (f != null) {
+                pilotFile.setText(f.toString());
+                vm.loadPilot(f.toPath());
+            }
+        });
+        Button load = new Button("_Load");
+        load.setId("load-pilot");
+        load.setOnAction(e -> vm.loadPilot(java.nio.file.Path.of(pilotFile.getText().trim())));
+        Label pilotShown = new Label();
+        pilotShown.setId("pilot-estimate");
+        pilotShown.setWrapText(true);
+        pilotShown.textProperty().bind(vm.pilotMessageProperty());
+        Tooltip pilotTip = new Tooltip();
+        pilotTip.setWrapText(true);
+        pilotTip.setMaxWidth(480);
+        pilotTip.textProperty().bind(Bindings.createStringBinding(() -> vm.indexProperty().get() == null ? ""
+                : IndexTips.of(vm.indexProperty().get()) + "\n\n" + IndexTips.lowerBound(vm.indexProperty().get(), 0.95)
+                        .replace("95 %", "the stated"), vm.indexProperty()));
+        pilotShown.setTooltip(pilotTip);
+        Label pilotLabel = new Label("Readings file (CSV)");
+        pilotLabel.setLabelFor(pilotFile);
+        pilotBox.getChildren().addAll(new HBox(8, pilotLabel, pilotFile, choose, load), pilotShown);
         pilotBox.visibleProperty().bind(vm.sourceProperty().isEqualTo(ExpectationSource.PILOT));
         pilotBox.managedProperty().bind(pilotBox.visibleProperty());
 
@@ -138,11 +168,6 @@ public final class GoalView implements StepView {
         VBox expCard = new VBox(expTitle, focusRow, sourceRow, valueForm, meanForm, pilotBox, result, problem);
         expCard.getStyleClass().add("pr-card");
         root.getChildren().addAll(reqCard, expCard);
-    }
-
-    /** Where the pilot-readings controls go. */
-    VBox pilotBox() {
-        return pilotBox;
     }
 
     private static void bindExpected(TextField field, Optional<CharacteristicDraft> row) {

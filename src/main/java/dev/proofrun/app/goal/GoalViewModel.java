@@ -11,6 +11,15 @@ import dev.proofrun.design.ProcessFacts;
 import dev.proofrun.plan.StudyPlan;
 import dev.proofrun.text.UserException;
 import java.util.ArrayList;
+import java.nio.file.Path;
+import java.util.OptionalInt;
+import dev.proofrun.capability.CapabilityAnalysis;
+import dev.proofrun.capability.CapabilityResult;
+import dev.proofrun.readings.Readings;
+import dev.proofrun.readings.ReadingsCsv;
+import dev.proofrun.stats.BoundMethod;
+import dev.proofrun.design.Requirement;
+import javafx.beans.property.SimpleStringProperty;
 import javafx.beans.value.ObservableValue;
 import dev.proofrun.app.session.StudyDraft;
 import dev.proofrun.app.shell.StepViewModel;
@@ -43,6 +52,8 @@ public final class GoalViewModel extends StepViewModel {
     private final ObjectBinding<Optional<CharacteristicDraft>> focus;
     private final ObjectBinding<Optional<Requirement>> requirement;
     private final ObjectBinding<Optional<Expectation>> expectation;
+    private final ObjectProperty<CapabilityResult> pilot = new SimpleObjectProperty<>(this, "pilot");
+    private final StringProperty pilotMessage = new SimpleStringProperty(this, "pilotMessage", "");
 
     public GoalViewModel(StudyDraft draft, ObservableValue<StudyPlan> base) {
         this.draft = draft;
@@ -57,7 +68,7 @@ public final class GoalViewModel extends StepViewModel {
         syncEnum(source, draft.field(DraftField.EXPECTATION_SOURCE), ExpectationSource::token, ExpectationSource::fromToken);
         ObservableList<CharacteristicDraft> rows = draft.characteristics();
         focus = Bindings.createObjectBinding(this::findFocus, rows, draft.field(DraftField.FOCUS));
-        Observable[] inputs = {rows, index, source, focus, base, draft.field(DraftField.MINIMUM), draft.field(DraftField.CONFIDENCE),
+        Observable[] inputs = {rows, index, source, focus, base, pilot, draft.field(DraftField.MINIMUM), draft.field(DraftField.CONFIDENCE),
             draft.field(DraftField.EXPECTED_MEAN), draft.field(DraftField.EXPECTED_SIGMA)};
         requirement = Bindings.createObjectBinding(this::computeRequirement, inputs);
         expectation = Bindings.createObjectBinding(this::computeExpectation, inputs);
@@ -184,9 +195,81 @@ public final class GoalViewModel extends StepViewModel {
                     return Optional.empty();
                 }
             }
+            case PILOT: {
+                CapabilityResult r = pilot.get();
+                if (r == null) {
+                    return Optional.empty();
+                }
+                OptionalDouble est = r.indices().of(index.get());
+                if (est.isEmpty() || !(est.getAsDouble() > 0)) {
+                    return Optional.empty();
+                }
+                OptionalDouble cp = r.indices().cp();
+                boolean offCentre = index.get().side() == dev.proofrun.stats.IndexKind.Side.NEAREST && cp.isPresent()
+                        && cp.getAsDouble() >= est.getAsDouble();
+                return Optional.of(offCentre ? Expectation.offCentre(est.getAsDouble(), cp.getAsDouble())
+                        : Expectation.centred(est.getAsDouble()));
+            }
             default:
                 return Optional.empty();
         }
+    }
+
+    public ObjectProperty<CapabilityResult> pilotProperty() {
+        return pilot;
+    }
+
+    /** What the pilot readings gave (estimate and lower bound of the index), or why they could not be used. */
+    public StringProperty pilotMessageProperty() {
+        return pilotMessage;
+    }
+
+    public StringProperty pilotFile() {
+        return draft.field(DraftField.PILOT_FILE);
+    }
+
+    /**
+     * Reads pilot readings (the core's readings reader) and estimates the index with its lower bound (the
+     * core's capability analysis) against the limits of the characteristic in focus. The estimate becomes
+     * the expectation; the bound is shown beside it, because a pilot estimate is itself uncertain.
+     */
+    public boolean loadPilot(Path file) {
+        pilot.set(null);
+        Optional<CharacteristicDraft> row = focus.get();
+        Optional<Requirement> req = requirement.get();
+        if (row.isEmpty() || row.get().limits().isEmpty() || req.isEmpty()) {
+            pilotMessage.set(AppMessage.GOAL_PILOT_BAD.format(AppMessage.HANDOUT_EARLIER.format()));
+            return false;
+        }
+        try {
+            Readings readings = ReadingsCsv.read(file, OptionalInt.empty());
+            OptionalDouble nominal = row.get().number(CharacteristicField.NOMINAL);
+            CapabilityResult r = CapabilityAnalysis.of(readings.subgroups(), row.get().limits().get(),
+                    nominal.isPresent() ? nominal.getAsDouble() : null, null, req.get().confidence(), BoundMethod.EXACT);
+            draft.field(DraftField.PILOT_FILE).set(file.toString());
+            pilot.set(r);
+            IndexKind k = index.get();
+            OptionalDouble est = r.indices().of(k);
+            OptionalDouble low = lowerOf(r, k);
+            pilotMessage.set(AppMessage.GOAL_PILOT_SHOWN.format(r.readings(), r.subgroups(), k.symbol(),
+                    est.isPresent() ? String.format(java.util.Locale.ROOT, "%.3f", est.getAsDouble()) : "—",
+                    Math.round(100 * req.get().confidence()),
+                    low.isPresent() ? String.format(java.util.Locale.ROOT, "%.3f", low.getAsDouble()) : "—"));
+            return true;
+        } catch (UserException | IllegalArgumentException e) {
+            pilotMessage.set(AppMessage.GOAL_PILOT_BAD.format(e.getMessage()));
+            return false;
+        }
+    }
+
+    private static OptionalDouble lowerOf(CapabilityResult r, IndexKind k) {
+        return switch (k) {
+            case CP -> r.lower().cp();
+            case CPK -> r.lower().cpk();
+            case PP -> r.lower().pp();
+            case PPK -> r.lower().ppk();
+            default -> OptionalDouble.empty();
+        };
     }
 
     /**

@@ -73,4 +73,34 @@ class GoalViewModelTest {
         assertEquals(0.2 / 0.09, e.potential().getAsDouble(), 1e-12);
         assertTrue(vm.completeBinding().get());
     }
+
+    @Test
+    void pilotReadingsGiveTheCoresEstimateAndBound(@org.junit.jupiter.api.io.TempDir java.nio.file.Path dir) throws Exception {
+        bore();
+        vm.sourceProperty().set(ExpectationSource.PILOT);
+        assertEquals("load the pilot readings", vm.missingProperty().get());
+        java.nio.file.Path csv = dir.resolve("pilot.csv");
+        // invented demo readings, five subgroups of four
+        java.nio.file.Files.writeString(csv, "x1,x2,x3,x4\n10.01,9.99,10.00,10.02\n9.98,10.00,10.01,9.99\n"
+                + "10.02,10.01,9.99,10.00\n10.00,9.98,10.01,10.02\n9.99,10.00,10.00,10.01\n");
+        assertTrue(vm.loadPilot(csv), vm.pilotMessageProperty().get());
+        dev.proofrun.capability.CapabilityResult core = dev.proofrun.capability.CapabilityAnalysis.of(
+                dev.proofrun.readings.ReadingsCsv.read(csv, java.util.OptionalInt.empty()).subgroups(),
+                dev.proofrun.stats.SpecLimits.twoSided(9.9, 10.1), null, null, 0.95, dev.proofrun.stats.BoundMethod.EXACT);
+        assertEquals(core.indices().cpk().getAsDouble(), vm.expectationBinding().get().orElseThrow().index(), 0.0,
+                "the estimate is the core's, not recomputed");
+        assertTrue(vm.pilotMessageProperty().get().startsWith("20 pilot readings in 5 subgroups: Cpk estimate "),
+                vm.pilotMessageProperty().get());
+    }
+
+    @Test
+    void aBadPilotFileIsOneLine(@org.junit.jupiter.api.io.TempDir java.nio.file.Path dir) throws Exception {
+        bore();
+        java.nio.file.Path csv = dir.resolve("pilot.csv");
+        java.nio.file.Files.writeString(csv, "value\n10.01\nabc\n");
+        assertFalse(vm.loadPilot(csv));
+        assertTrue(vm.pilotMessageProperty().get().startsWith("the pilot readings could not be used: ")
+                && vm.pilotMessageProperty().get().contains("pilot.csv, row 3, column value"),
+                vm.pilotMessageProperty().get());
+    }
 }
