@@ -18,8 +18,8 @@ import org.openjdk.jmh.annotations.Warmup;
 
 /**
  * Cost per call of the statistics-core bounds. Run:
- * {@code mvn -B -Pbench test-compile exec:exec -Dbench=BoundsBenchmark} (add JMH options after the
- * regex through -Dbench, e.g. {@code -Dbench="BoundsBenchmark -f 1 -wi 2 -i 3"}).
+ * {@code mvn -B -Pbench test-compile exec:exec -Dbench=BoundsBenchmark} (-Dbench takes only the regex;
+ * for other JMH options run {@code org.openjdk.jmh.Main} on the bench test classpath, see DEVELOPERS.md).
  *
  * <p>Cases: a 30-reading study near Cpk 1.33 (df 29) and a 1,000-reading study at Cpk 2 (df 999,
  * noncentrality near 190), which span what the design tables ask for.
