@@ -114,7 +114,8 @@ public final class CapabilityBounds {
      * and Brent's method. P is increasing in L for fixed k̂ (the acceptance interval for x̄ widens), so
      * the root is unique. Holding the centring at its estimate is not a pivot: the coverage depends on
      * the true centring, and for a centred process it is conservative (the estimated |x̄ − m| is never
-     * below the true 0); {@code CapabilityBoundsCoverageTest} measures it.
+     * below the true 0); {@code CapabilityBoundsCoverageTest} measures it: 95 % lower bounds covered
+     * 94.8–95.1 % off-centre (Cp = Cpk + 0.5) and 96.0–96.6 % centred, for N = 30–300.
      *
      * <p>Edge cases of EXACT:
      * <ul>
@@ -144,7 +145,10 @@ public final class CapabilityBounds {
 
     /**
      * Upper confidence bound of Cpk (or Ppk); the mirror of {@link #lowerCpk}: BISSELL adds the half
-     * width, EXACT solves P(Ĉpk ≥ ĉpk | Cpk = U, k̂ fixed) = 1 − α, with the same edge cases.
+     * width, EXACT solves P(Ĉpk ≥ ĉpk | Cpk = U, k̂ fixed) = 1 − α, with the same edge cases. For the
+     * upper bound the noncentral-t fallback (Ĉp NaN, Ĉpk ≤ 0) is at most the two-sided solution, so it
+     * is not on the safe side; with the mean at or beyond a limit the far limit adds almost nothing and
+     * the two agree closely.
      *
      * @throws IllegalArgumentException as {@link #lowerCpk}
      */
