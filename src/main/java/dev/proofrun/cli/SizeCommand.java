@@ -25,6 +25,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 import java.util.OptionalDouble;
+import java.util.OptionalInt;
 import java.util.concurrent.Callable;
 import java.util.stream.IntStream;
 import picocli.CommandLine;
@@ -101,6 +102,14 @@ public final class SizeCommand implements Callable<Integer> {
             description = "Mean shift, in within standard deviations, the chart should catch (default ${DEFAULT-VALUE}).")
     double shift;
 
+    @Option(names = "--pilot", paramLabel = "FILE.csv",
+            description = "Pilot readings (read as 'estimate' reads them, needs --lsl/--usl): the expected index.")
+    java.nio.file.Path pilot;
+
+    @Option(names = "--pilot-subgroup-size", paramLabel = "N",
+            description = "Consecutive readings per subgroup in a one-column pilot file.")
+    Integer pilotSubgroupSize;
+
     @Option(names = "--json", description = "Print one JSON object.")
     boolean json;
 
@@ -126,7 +135,13 @@ public final class SizeCommand implements Callable<Integer> {
         SpecLimits.Sides specSides = sides();
         List<String> notes = new ArrayList<>();
         Expectation expectation;
-        if (expected != null) {
+        if (pilot != null) {
+            if (expected != null || mean != null || sd != null || gaugeSd != null) {
+                throw new UserException(DesignMessage.BAD_EXPECTATION,
+                        "--pilot replaces --expected, --mean, --sd and --gauge-sd; give one of them");
+            }
+            expectation = fromPilot(kind, notes);
+        } else if (expected != null) {
             expectation = expectedCp == null ? Expectation.centred(expected) : wrap(() -> Expectation.offCentre(expected, expectedCp));
         } else {
             if (mean == null || sd == null) {
@@ -147,6 +162,23 @@ public final class SizeCommand implements Callable<Integer> {
         return new DesignRequest(specSides, requirement, expectation, power, sizes,
                 Optional.ofNullable(sigma).map(SigmaMethod::fromToken), BoundMethod.fromToken(bound), floors, shift,
                 notes);
+    }
+
+    private Expectation fromPilot(IndexKind kind, List<String> notes) {
+        if (lsl == null && usl == null) {
+            throw new UserException(DesignMessage.BAD_EXPECTATION, "--pilot needs the specification limits --lsl/--usl");
+        }
+        dev.proofrun.readings.Readings readings = dev.proofrun.readings.ReadingsCsv.read(pilot,
+                pilotSubgroupSize == null ? OptionalInt.empty() : OptionalInt.of(pilotSubgroupSize));
+        dev.proofrun.capability.CapabilityResult result;
+        try {
+            result = dev.proofrun.capability.CapabilityAnalysis.of(readings.subgroups(), SpecLimits.of(lsl, usl), null,
+                    sigma == null ? null : SigmaMethod.fromToken(sigma), confidence, BoundMethod.fromToken(bound));
+        } catch (UserException e) {
+            throw e.location().isPresent() ? e
+                    : new UserException(dev.proofrun.text.Location.file(pilot.toString()), e.key(), e.args());
+        }
+        return dev.proofrun.design.PilotExpectation.from(result, kind, notes);
     }
 
     private SpecLimits.Sides sides() {

@@ -59,6 +59,30 @@ class SizeCommandTest {
         assertTrue(c.err().contains("confidence"), c.err());
     }
 
+    @Test
+    void pilotReadingsGiveTheExpectationWithAWarning(@org.junit.jupiter.api.io.TempDir java.nio.file.Path dir)
+            throws Exception {
+        // Invented demo readings: a bore of 10.00 +- 0.10 mm, 30 pilot parts, about 10.01 +- 0.018.
+        StringBuilder csv = new StringBuilder("value\n");
+        double[] offsets = {-0.021, 0.004, 0.017, -0.008, 0.026, -0.015, 0.009, 0.001, -0.030, 0.012};
+        for (int i = 0; i < 30; i++) {
+            csv.append(String.format(java.util.Locale.ROOT, "%.3f%n", 10.01 + offsets[i % 10] + 0.001 * (i % 3)));
+        }
+        java.nio.file.Path file = dir.resolve("pilot.csv");
+        java.nio.file.Files.writeString(file, csv);
+        byte[] before = java.nio.file.Files.readAllBytes(file);
+        Run r = run("size", "--target", "1.0", "--lsl", "9.90", "--usl", "10.10", "--pilot", file.toString(),
+                "--subgroup-size", "5", "--json");
+        assertEquals(0, r.code(), r.err());
+        JsonNode warnings = new ObjectMapper().readTree(r.out()).get("warnings");
+        assertTrue(warnings.get(0).asText().contains("pilot's own uncertainty is not in the power"), warnings.toString());
+        assertTrue(java.util.Arrays.equals(before, java.nio.file.Files.readAllBytes(file)));
+        Run missing = run("size", "--target", "1.33", "--lsl", "9.90", "--usl", "10.10", "--pilot",
+                dir.resolve("none.csv").toString());
+        assertEquals(2, missing.code());
+        assertTrue(missing.err().contains("none.csv"), missing.err());
+    }
+
     private static List<String> iterate(java.util.Iterator<String> it) {
         List<String> list = new java.util.ArrayList<>();
         it.forEachRemaining(list::add);
