@@ -30,7 +30,7 @@ import org.hipparchus.distribution.continuous.NormalDistribution;
  */
 final class ChanceSignals {
 
-    static final long READINGS_BUDGET = 3_000_000L;
+    static final long READINGS_BUDGET = 1_000_000L;
     static final int BLOCKS = 64;
     static final int MAX_STUDIES = 2000;
     static final int EMPIRICAL_STUDIES = 400;

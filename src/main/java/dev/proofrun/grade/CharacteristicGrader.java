@@ -60,7 +60,7 @@ final class CharacteristicGrader {
 
         Stability stability = StabilityJudge.judge(ChartKind.forMethod(design.sigmaMethod()), subgroups, data.slots(), reasons);
         valid &= stability.stable();
-        Shape shape = ShapeJudge.judge(subgroups, reasons);
+        Shape shape = ShapeJudge.judge(subgroups, gc.resolution(), reasons);
         CapabilityResult figures = figures(gc, design, subgroups);
         valid &= shape.modelFits();
 

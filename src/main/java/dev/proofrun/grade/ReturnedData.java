@@ -42,6 +42,9 @@ final class ReturnedData implements RowHandler {
     private final Collected[] collected;
     private final ProblemLog log = new ProblemLog();
     private final int n;
+    private final java.time.LocalDate[] plannedDay;
+    private final long[] windowBegin;
+    private final long[] windowEnd;
 
     private boolean longForm;
     private int planCol = -1;
@@ -58,6 +61,16 @@ final class ReturnedData implements RowHandler {
         this.display = display;
         this.slotIndex = plan.slotIndex();
         this.n = plan.design().subgroupSize();
+        int k = plan.slots().size();
+        this.plannedDay = new java.time.LocalDate[k];
+        this.windowBegin = new long[k];
+        this.windowEnd = new long[k];
+        for (int s = 0; s < k; s++) {
+            PlannedSlot slot = plan.slots().get(s);
+            plannedDay[s] = slot.start().withZoneSameInstant(plan.zone()).toLocalDate();
+            windowBegin[s] = slot.begin().toEpochSecond();
+            windowEnd[s] = slot.end().toEpochSecond();
+        }
         this.collected = new Collected[plan.characteristics().size()];
         for (int c = 0; c < collected.length; c++) {
             characteristicIndex.put(plan.characteristics().get(c).id(), c);
@@ -156,14 +169,15 @@ final class ReturnedData implements RowHandler {
         if (text.isEmpty()) {
             return;
         }
-        PlannedSlot slot = plan.slots().get(si);
-        ZonedDateTime t = Cells.taken(text, plan.zone(), slot.start().withZoneSameInstant(plan.zone()).toLocalDate());
+        ZonedDateTime t = Cells.taken(text, plan.zone(), plannedDay[si]);
         if (t == null) {
             log.add(Location.cell(display, row, name(takenCol)), Severity.WARNING, id, GradeMessage.TAKEN_UNREADABLE, text);
             return;
         }
-        col.taken[si] = t.toEpochSecond();
-        if (t.isBefore(slot.begin()) || t.isAfter(slot.end())) {
+        long epoch = t.toEpochSecond();
+        col.taken[si] = epoch;
+        if (epoch < windowBegin[si] || epoch > windowEnd[si]) {
+            PlannedSlot slot = plan.slots().get(si);
             col.late[si] = true;
             log.add(Location.cell(display, row, name(takenCol)), Severity.WARNING, id, GradeMessage.TAKEN_OUTSIDE_WINDOW,
                     text, slot.begin().toOffsetDateTime(), slot.end().toOffsetDateTime());

@@ -17,6 +17,12 @@ import dev.proofrun.stats.AndersonDarling;
  * The chosen model is the fitting one with the smallest AIC (Box–Cox counts λ as a third parameter);
  * when none fits the best by AIC is named and the shape step fails. With fewer than {@value #MIN_READINGS}
  * readings the shape is not judged and the normal model is assumed (said in the reasons).
+ *
+ * <p><b>Gauge resolution.</b> The tests assume a continuous distribution; readings on a gauge's grid are
+ * tied, and with many readings (hundreds of thousands) the ties alone make A² reject any model. So before
+ * the shape tests each reading is spread uniformly over its resolution cell, x + r·(U − ½), U uniform,
+ * seeded (a continuity correction; it adds r²/12 to the variance, negligible when the gauge meets the rule
+ * of ten). The capability figures use the readings as returned.
  */
 final class ShapeJudge {
 
@@ -40,6 +46,22 @@ final class ShapeJudge {
         return x;
     }
 
+    private static final long SPREAD_SEED = 0x5ba9eL;
+
+    /** The readings spread over their resolution cells (a copy; unchanged when r = 0). */
+    static double[] spread(double[] x, double resolution) {
+        if (!(resolution > 0)) {
+            return x;
+        }
+        org.apache.commons.rng.UniformRandomProvider rng =
+                org.apache.commons.rng.simple.RandomSource.XO_RO_SHI_RO_128_PP.create(SPREAD_SEED);
+        double[] y = new double[x.length];
+        for (int i = 0; i < x.length; i++) {
+            y[i] = x[i] + resolution * (rng.nextDouble() - 0.5);
+        }
+        return y;
+    }
+
     /** A² and p of the normal model with mean and s (divisor N − 1) from the readings. */
     static double[] normality(double[] x) {
         int n = x.length;
@@ -60,8 +82,8 @@ final class ShapeJudge {
         return new double[] {r.adjusted(), r.pValue()};
     }
 
-    static Shape judge(List<double[]> subgroups, List<Reason> reasons) {
-        double[] x = flatten(subgroups);
+    static Shape judge(List<double[]> subgroups, double resolution, List<Reason> reasons) {
+        double[] x = spread(flatten(subgroups), resolution);
         if (x.length < MIN_READINGS) {
             reasons.add(new Reason(Step.SHAPE, false, GradeMessage.REASON_TOO_FEW_FOR_SHAPE.format(x.length)));
             return new Shape(Double.NaN, Double.NaN, true, ShapeModel.NORMAL, List.of(), true);
