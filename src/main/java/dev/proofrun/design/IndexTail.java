@@ -1,5 +1,6 @@
 package dev.proofrun.design;
 
+import dev.proofrun.stats.GaussLegendreRule;
 import org.apache.commons.numbers.gamma.Erfc;
 
 /**
@@ -21,7 +22,7 @@ import org.apache.commons.numbers.gamma.Erfc;
  */
 final class IndexTail {
 
-    private static final GaussLegendre GL = GaussLegendre.of(28);
+    private static final GaussLegendreRule GL = GaussLegendreRule.of(28);
     private static final double EDGE = 7.5;
     private static final double SQRT_HALF = Math.sqrt(0.5);
 

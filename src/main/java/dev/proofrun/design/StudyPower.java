@@ -1,5 +1,6 @@
 package dev.proofrun.design;
 
+import dev.proofrun.stats.GaussLegendreRule;
 import dev.proofrun.stats.BoundMethod;
 import java.util.function.DoubleUnaryOperator;
 import org.apache.commons.statistics.distribution.ChiSquaredDistribution;
@@ -33,7 +34,7 @@ import org.apache.commons.statistics.distribution.NormalDistribution;
  */
 final class StudyPower {
 
-    private static final GaussLegendre GL = GaussLegendre.of(32);
+    private static final GaussLegendreRule GL = GaussLegendreRule.of(32);
     private static final double EDGE = 8.5;
     private static final NormalDistribution NORMAL = NormalDistribution.of(0, 1);
 

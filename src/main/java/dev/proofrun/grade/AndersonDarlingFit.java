@@ -1,5 +1,6 @@
 package dev.proofrun.grade;
 
+import dev.proofrun.stats.AndersonDarling;
 import java.util.Arrays;
 import java.util.function.DoubleUnaryOperator;
 
@@ -44,19 +45,9 @@ final class AndersonDarlingFit {
         return Math.min(Math.max(p, 1e-300), 1 - 1e-16);
     }
 
-    /** p-value of A² for the normal with estimated parameters (Stephens' approximation). */
+    /** p-value of A² for the normal with estimated parameters: the shared Table 4.9 formula. */
     static double normalPValue(double a2, int n) {
-        double a = a2 * (1 + 0.75 / n + 2.25 / ((double) n * n));
-        if (a >= 0.6) {
-            return Math.exp(1.2937 - 5.709 * a + 0.0186 * a * a);
-        }
-        if (a >= 0.34) {
-            return Math.exp(0.9177 - 4.279 * a - 1.38 * a * a);
-        }
-        if (a >= 0.2) {
-            return 1 - Math.exp(-8.318 + 42.796 * a - 59.938 * a * a);
-        }
-        return 1 - Math.exp(-13.436 + 101.14 * a - 223.73 * a * a);
+        return AndersonDarling.pValue(a2 * (1 + 0.75 / n + 2.25 / ((double) n * n)));
     }
 
     /** True when a Weibull fit with both parameters estimated is not rejected at 5 %. */
