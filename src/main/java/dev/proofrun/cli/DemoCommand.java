@@ -16,6 +16,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.util.Map;
+import java.util.UUID;
 import java.util.concurrent.Callable;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -62,7 +63,8 @@ public final class DemoCommand implements Callable<Integer> {
         GradingPlan gp = PlanAdapter.of(plan);
         try {
             Files.createDirectories(out);
-            Path tmp = Files.createTempFile(out, ".demo-returned.", ".tmp");
+            // not Files.createTempFile: that file would be private to its owner, and the demo is for sharing
+            Path tmp = out.resolve(".demo-returned." + UUID.randomUUID() + ".tmp");
             try {
                 SimulatedReturn.writeCsv(gp, processes(), SEED, tmp);
                 PlanFiles.write(planFile, plan);

@@ -26,9 +26,11 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.nio.file.StandardOpenOption;
+import java.nio.file.attribute.PosixFileAttributeView;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
 import java.util.HexFormat;
+import java.util.UUID;
 
 /**
  * Plan files: JSON, UTF-8, one plan per file, format version {@value PlanJson#VERSION}.
@@ -219,6 +221,14 @@ public final class PlanFiles {
         save(path, plan);
     }
 
+    private static void keepPermissions(Path from, Path to) throws IOException {
+        PosixFileAttributeView source = Files.getFileAttributeView(from, PosixFileAttributeView.class);
+        PosixFileAttributeView target = Files.getFileAttributeView(to, PosixFileAttributeView.class);
+        if (source != null && target != null) {
+            target.setPermissions(source.readAttributes().permissions());
+        }
+    }
+
     private static void save(Path path, StudyPlan plan) {
         byte[] bytes = toBytes(plan);
         Path target = path.toAbsolutePath();
@@ -227,8 +237,10 @@ public final class PlanFiles {
         Path tmp = null;
         try {
             Files.createDirectories(dir);
-            tmp = Files.createTempFile(dir, "." + name + ".", ".tmp");
-            try (FileChannel ch = FileChannel.open(tmp, StandardOpenOption.WRITE, StandardOpenOption.TRUNCATE_EXISTING)) {
+            // not Files.createTempFile: that makes the file private to its owner, and plans are for sharing;
+            // a new file gets the ordinary permissions (umask), a replaced one keeps the old file's
+            tmp = dir.resolve("." + name + "." + UUID.randomUUID() + ".tmp");
+            try (FileChannel ch = FileChannel.open(tmp, StandardOpenOption.WRITE, StandardOpenOption.CREATE_NEW)) {
                 ByteBuffer buf = ByteBuffer.wrap(bytes);
                 while (buf.hasRemaining()) {
                     ch.write(buf);
@@ -238,6 +250,7 @@ public final class PlanFiles {
             if (Files.exists(target)) {
                 Files.copy(target, dir.resolve(name + ".bak"), StandardCopyOption.REPLACE_EXISTING,
                         StandardCopyOption.COPY_ATTRIBUTES);
+                keepPermissions(target, tmp);
             }
             try {
                 Files.move(tmp, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);

@@ -6,12 +6,17 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.junit.jupiter.api.Assumptions.assumeTrue;
 
 import dev.proofrun.text.UserException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.nio.file.attribute.PosixFileAttributeView;
+import java.nio.file.attribute.PosixFilePermission;
+import java.nio.file.attribute.PosixFilePermissions;
 import java.util.Arrays;
+import java.util.Set;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -127,6 +132,19 @@ class PlanFilesTest {
         try (var files = Files.list(dir)) {
             assertEquals(2, files.count(), "plan.json and plan.json.bak only");
         }
+    }
+
+    @Test
+    void aNewPlanGetsOrdinaryPermissionsAndAReplacedOneKeepsItsOwn() throws Exception {
+        assumeTrue(Files.getFileAttributeView(dir, PosixFileAttributeView.class) != null, "POSIX file system");
+        Path plain = Files.createFile(dir.resolve("plain.txt"));
+        Path p = saved(DemoPlan.draft());
+        assertEquals(Files.getPosixFilePermissions(plain), Files.getPosixFilePermissions(p),
+                "a new plan is shared like any new file (umask), not private to its owner");
+        Set<PosixFilePermission> groupRead = PosixFilePermissions.fromString("rw-r-----");
+        Files.setPosixFilePermissions(p, groupRead);
+        PlanFiles.issue(p);
+        assertEquals(groupRead, Files.getPosixFilePermissions(p), "replacing keeps the file's permissions");
     }
 
     @Test
