@@ -22,6 +22,8 @@ final class FxProbe implements AutoCloseable {
     private final AtomicBoolean waiting = new AtomicBoolean(false);
     private final AtomicLong worstNanos = new AtomicLong(0);
     private final AtomicLong probes = new AtomicLong(0);
+    private volatile String phase = "start";
+    private final java.util.Map<String, Double> worstByPhase = new java.util.LinkedHashMap<>();
 
     FxProbe() {
         timer.scheduleAtFixedRate(this::probe, 0, 5, TimeUnit.MILLISECONDS);
@@ -42,8 +44,8 @@ final class FxProbe implements AutoCloseable {
                 Thread.getAllStackTraces().forEach((t, st) -> {
                     if (t.getName().contains("JavaFX Application")) {
                         synchronized (blocks) {
-                            blocks.append(String.format(java.util.Locale.ROOT, "FX thread busy %.0f ms, %.1f s after start, at:%n",
-                                    late / 1e6, (System.nanoTime() - born) / 1e9));
+                            blocks.append(String.format(java.util.Locale.ROOT, "FX thread busy %.0f ms, %.1f s after start (%s), at:%n",
+                                    late / 1e6, (System.nanoTime() - born) / 1e9, phase));
                             for (int i = 0; i < Math.min(Integer.getInteger("probe.depth", 12), st.length); i++) {
                                 blocks.append("    ").append(st[i]).append('\n');
                             }
@@ -60,6 +62,9 @@ final class FxProbe implements AutoCloseable {
         Platform.runLater(() -> {
             long gap = System.nanoTime() - posted;
             worstNanos.accumulateAndGet(gap, Math::max);
+            synchronized (worstByPhase) {
+                worstByPhase.merge(phase, gap / 1e6, Math::max);
+            }
             probes.incrementAndGet();
             waiting.set(false);
         });
@@ -69,6 +74,21 @@ final class FxProbe implements AutoCloseable {
     String blocks() {
         synchronized (blocks) {
             return blocks.toString();
+        }
+    }
+
+    /** Names what the robot does from now on; latencies are also kept per phase. */
+    void phase(String name) {
+        phase = name;
+    }
+
+    /** The worst latency of each phase, in the order the phases began: "open 812 ms, goal 95 ms, …". */
+    String worstByPhase() {
+        synchronized (worstByPhase) {
+            StringBuilder b = new StringBuilder();
+            worstByPhase.forEach((k, v) -> b.append(b.length() == 0 ? "" : ", ")
+                    .append(String.format(java.util.Locale.ROOT, "%s %.0f ms", k, v)));
+            return b.toString();
         }
     }
 

@@ -3,7 +3,6 @@ package dev.proofrun.app.handout;
 import dev.proofrun.app.shell.StepView;
 import dev.proofrun.sheet.layout.Paper;
 import java.io.File;
-import java.nio.file.Path;
 import javafx.beans.binding.Bindings;
 import javafx.collections.FXCollections;
 import javafx.collections.ListChangeListener;
@@ -27,6 +26,7 @@ public final class HandoutView implements StepView {
 
     private final VBox root = new VBox(12);
     private final Button issue = new Button("_Issue the plan");
+    private final Button export = new Button("_Export PDF, CSV and XLSX");
 
     public HandoutView(HandoutViewModel vm) {
         Label state = new Label();
@@ -66,10 +66,10 @@ public final class HandoutView implements StepView {
                 folder.setText(f.toString());
             }
         });
-        Button export = new Button("_Export PDF, CSV and XLSX");
         export.setId("export");
-        export.disableProperty().bind(Bindings.createBooleanBinding(() -> vm.issuedBinding().get().isEmpty(), vm.issuedBinding()));
-        export.setOnAction(e -> vm.export(Path.of(folder.getText().trim())));
+        export.disableProperty().bind(Bindings.createBooleanBinding(() -> vm.issuedBinding().get().isEmpty()
+                || vm.exportingProperty().get(), vm.issuedBinding(), vm.exportingProperty()));
+        export.setOnAction(e -> vm.exportTo(folder.getText()));
         Button open = new Button("_Open the PDF");
         open.setId("open-pdf");
         open.disableProperty().bind(vm.exportedProperty().isNull());
@@ -118,6 +118,6 @@ public final class HandoutView implements StepView {
 
     @Override
     public Node firstFocus() {
-        return issue;
+        return issue.isDisabled() ? export : issue;
     }
 }

@@ -40,6 +40,9 @@ public final class PartView implements StepView {
         TextField by = new TextField();
         by.setId("prepared-by");
         by.textProperty().bindBidirectional(vm.preparedBy());
+        for (TextField f : new TextField[] {planId, number, name, by}) {
+            f.setPrefColumnCount(22);
+        }
         form.addRow(0, label("Plan id", planId), planId, label("Part number", number), number);
         form.addRow(1, label("Part name", name), name, label("Prepared by", by), by);
 
@@ -51,6 +54,9 @@ public final class PartView implements StepView {
         for (CharacteristicField f : CharacteristicField.values()) {
             TableColumn<CharacteristicDraft, String> c = new TableColumn<>(PartViewModel.label(f));
             c.setId("col-" + f.header());
+            // a width of its own: the default width makes the skin measure every cell on the first showing
+            // (hundreds of ms on a loaded machine); the constrained policy spreads the columns anyway
+            c.setPrefWidth(7 * javafx.scene.text.Font.getDefault().getSize());
             c.setCellValueFactory(cd -> cd.getValue().cell(f));
             c.setCellFactory(col -> new CheckedCell(vm, f));
             c.setOnEditCommit(e -> e.getRowValue().cell(f).set(e.getNewValue()));

@@ -35,6 +35,8 @@ public final class SizingView implements StepView {
             Charts.probability("oc-chart", "Chance to demonstrate against the true index", "true index", "probability");
 
     public SizingView(SizingViewModel vm) {
+        powerChart.getStyleClass().add("pr-design-chart");
+        ocChart.getStyleClass().add("pr-design-chart");
         TextField power = new TextField();
         power.setId("power");
         power.setPrefColumnCount(6);
@@ -173,6 +175,9 @@ public final class SizingView implements StepView {
         header.setWrapText(true);
         c.setGraphic(header);
         c.setSortable(false);
+        // a width of its own: the default width makes the skin measure every cell on the first showing
+        // (hundreds of ms on a loaded machine); the constrained policy spreads the columns anyway
+        c.setPrefWidth(7 * javafx.scene.text.Font.getDefault().getSize());
         c.setCellValueFactory(cd -> new ReadOnlyStringWrapper(text.apply(cd.getValue())));
         return c;
     }
