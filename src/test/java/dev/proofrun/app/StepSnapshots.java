@@ -63,12 +63,15 @@ public final class StepSnapshots {
             File f = out.resolve(String.format("step-%d.png", index + 1)).toFile();
             ImageIO.write(SwingFXUtils.fromFXImage(img, null), "png", f);
             System.out.println("wrote " + f);
-            if (index == steps - 1) {
-                onFx(() -> {
-                    javafx.scene.Node page = app.wizard().view().root().lookup("#page-" + index);
-                    ((javafx.scene.control.ScrollPane) page.getParent().getParent().getParent()).setVvalue(1.0);
-                    return null;
-                });
+            // a step taller than the window: also the bottom of it
+            boolean scrolls = onFx(() -> {
+                javafx.scene.Node page = app.wizard().view().root().lookup("#page-" + index);
+                javafx.scene.control.ScrollPane sp = (javafx.scene.control.ScrollPane) page.getParent().getParent().getParent();
+                boolean taller = page.getBoundsInLocal().getHeight() > sp.getViewportBounds().getHeight() + 1;
+                sp.setVvalue(1.0);
+                return taller;
+            });
+            if (scrolls) {
                 Snapshots.settle(app.wizard(), work);
                 ImageIO.write(SwingFXUtils.fromFXImage(onFx(() -> app.wizard().view().root().getScene().snapshot(null)), null),
                         "png", out.resolve(String.format("step-%d-lower.png", index + 1)).toFile());

@@ -71,7 +71,9 @@ public final class ShellView {
             b.getStyleClass().add("pr-rail-step");
             b.setMaxWidth(Double.MAX_VALUE);
             b.setAlignment(Pos.CENTER_LEFT);
-            b.setTooltip(new Tooltip(s.hint()));
+            b.setTooltip(new Tooltip(s.hint() + "  (Ctrl+" + (i + 1) + ")"));
+            // Tab stays in the step and the footer; the rail is one key away (Ctrl+1 … Ctrl+7)
+            b.setFocusTraversable(false);
             b.setOnAction(e -> vm.goTo(index));
             s.completeBinding().addListener((obs, was, now) -> styleRail());
             railButtons.add(b);
