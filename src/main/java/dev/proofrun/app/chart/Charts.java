@@ -24,8 +24,8 @@ public final class Charts {
         c.setTitle(title);
         c.setAnimated(false);
         c.setCreateSymbols(false);
-        c.setPrefHeight(260);
-        c.setMinHeight(200);
+        c.setPrefHeight(dev.proofrun.app.shell.Em.of(19.5));
+        c.setMinHeight(dev.proofrun.app.shell.Em.of(15));
         c.getStyleClass().add("pr-chart");
         return c;
     }

@@ -67,7 +67,7 @@ public final class GradingView implements StepView {
         grade.setOnAction(e -> vm.grade());
         grade.disableProperty().bind(vm.busyProperty());
         ProgressIndicator spinner = new ProgressIndicator();
-        spinner.setMaxSize(24, 24);
+        spinner.setMaxSize(dev.proofrun.app.shell.Em.of(1.8), dev.proofrun.app.shell.Em.of(1.8));
         spinner.visibleProperty().bind(vm.busyProperty().or(vm.reportingProperty()));
         Label message = new Label();
         message.setId("grading-message");
@@ -112,7 +112,7 @@ public final class GradingView implements StepView {
 
         TableView<CharacteristicGrade> grades = new TableView<>(vm.grades());
         grades.setId("grades");
-        grades.setPrefHeight(130);
+        grades.setPrefHeight(dev.proofrun.app.shell.Em.of(10));
         grades.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY_FLEX_LAST_COLUMN);
         grades.getColumns().add(col("Id", CharacteristicGrade::id));
         grades.getColumns().add(col("Name", CharacteristicGrade::name));
@@ -301,7 +301,7 @@ public final class GradingView implements StepView {
         Label l = new Label(text);
         Tooltip t = new Tooltip(tip);
         t.setWrapText(true);
-        t.setMaxWidth(420);
+        t.setMaxWidth(dev.proofrun.app.shell.Em.of(32));
         l.setTooltip(t);
         return l;
     }
@@ -311,7 +311,7 @@ public final class GradingView implements StepView {
         c.setSortable(false);
         // a width of its own: the default width makes the skin measure every cell on the first showing
         // (hundreds of ms on a loaded machine); the constrained policy spreads the columns anyway
-        c.setPrefWidth(7 * javafx.scene.text.Font.getDefault().getSize());
+        c.setPrefWidth(dev.proofrun.app.shell.Em.of(7));
         c.setCellValueFactory(cd -> new ReadOnlyStringWrapper(text.apply(cd.getValue())));
         c.setCellFactory(tc -> new javafx.scene.control.TableCell<>() {
             @Override

@@ -93,16 +93,16 @@ public final class HandoutView implements StepView {
             for (Image img : vm.pages()) {
                 ImageView v = new ImageView(img);
                 v.setPreserveRatio(true);
-                v.setFitHeight(420);
+                v.setFitHeight(dev.proofrun.app.shell.Em.of(31.5));
                 v.getStyleClass().add("pr-page-image");
                 strip.getChildren().add(v);
             }
         });
         ScrollPane pages = new ScrollPane(strip);
-        pages.setPrefViewportHeight(430);
+        pages.setPrefViewportHeight(dev.proofrun.app.shell.Em.of(32.3));
         pages.setFitToHeight(true);
         ProgressIndicator spinner = new ProgressIndicator();
-        spinner.setMaxSize(24, 24);
+        spinner.setMaxSize(dev.proofrun.app.shell.Em.of(1.8), dev.proofrun.app.shell.Em.of(1.8));
         spinner.visibleProperty().bind(vm.busyProperty());
         Label previewTitle = new Label("Preview of the printed sheet");
         previewTitle.getStyleClass().add("pr-card-title");

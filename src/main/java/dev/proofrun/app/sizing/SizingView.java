@@ -43,7 +43,7 @@ public final class SizingView implements StepView {
         power.textProperty().bindBidirectional(vm.power());
         ProgressIndicator spinner = new ProgressIndicator();
         spinner.setId("design-busy");
-        spinner.setMaxSize(24, 24);
+        spinner.setMaxSize(dev.proofrun.app.shell.Em.of(1.8), dev.proofrun.app.shell.Em.of(1.8));
         spinner.visibleProperty().bind(vm.busyProperty());
         Label refusal = new Label();
         refusal.setId("design-refusal");
@@ -58,7 +58,7 @@ public final class SizingView implements StepView {
 
         table.setId("designs");
         table.setItems(vm.rows());
-        table.setPrefHeight(300);
+        table.setPrefHeight(dev.proofrun.app.shell.Em.of(22.5));
         table.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY_FLEX_LAST_COLUMN);
         table.getColumns().addAll(List.of(
                 column("n", "Subgroup size n: consecutive parts taken at each slot", r -> Integer.toString(r.subgroupSize())),
@@ -177,7 +177,7 @@ public final class SizingView implements StepView {
         c.setSortable(false);
         // a width of its own: the default width makes the skin measure every cell on the first showing
         // (hundreds of ms on a loaded machine); the constrained policy spreads the columns anyway
-        c.setPrefWidth(7 * javafx.scene.text.Font.getDefault().getSize());
+        c.setPrefWidth(dev.proofrun.app.shell.Em.of(7));
         c.setCellValueFactory(cd -> new ReadOnlyStringWrapper(text.apply(cd.getValue())));
         return c;
     }
