@@ -148,7 +148,12 @@ public final class GoalView implements StepView {
         IndexTooltips.follow(pilotShown);
         Label pilotLabel = new Label("Readings file (CSV)");
         pilotLabel.setLabelFor(pilotFile);
-        pilotBox.getChildren().addAll(new HBox(8, pilotLabel, pilotFile, choose, load), pilotShown);
+        for (javafx.scene.layout.Region r : new javafx.scene.layout.Region[] {pilotLabel, choose, load}) {
+            r.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
+        }
+        HBox pilotRow = new HBox(8, pilotLabel, pilotFile, choose, load);
+        pilotRow.setAlignment(javafx.geometry.Pos.CENTER_LEFT);
+        pilotBox.getChildren().addAll(pilotRow, pilotShown);
         pilotBox.visibleProperty().bind(vm.sourceProperty().isEqualTo(ExpectationSource.PILOT));
         pilotBox.managedProperty().bind(pilotBox.visibleProperty());
 

@@ -48,7 +48,7 @@ public final class GradingView implements StepView {
         spread.getStyleClass().add("pr-control-chart");
         readings.getStyleClass().add("pr-limits-chart");
         file.setId("returned-file");
-        file.setPrefColumnCount(40);
+        file.setPrefColumnCount(24);
         file.textProperty().bindBidirectional(vm.returnedFile());
         file.setOnAction(e -> vm.grade());
         HBox.setHgrow(file, Priority.ALWAYS);
@@ -80,7 +80,13 @@ public final class GradingView implements StepView {
         Label fileLabel = new Label("Returned _file");
         fileLabel.setMnemonicParsing(true);
         fileLabel.setLabelFor(file);
-        VBox fileCard = new VBox(new HBox(8, fileLabel, file, browse, grade, spinner, report), message);
+        HBox fileRow = new HBox(8, fileLabel, file, browse, grade, spinner, report);
+        fileRow.setAlignment(javafx.geometry.Pos.CENTER_LEFT);
+        // with a large system font the path field gives way, not the label and buttons
+        for (javafx.scene.layout.Region r : new javafx.scene.layout.Region[] {fileLabel, browse, grade, report}) {
+            r.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
+        }
+        VBox fileCard = new VBox(fileRow, message);
         fileCard.getStyleClass().add("pr-card");
 
         verdict.setId("verdict");
@@ -103,6 +109,8 @@ public final class GradingView implements StepView {
         problems.getColumns().add(col("Kind", p -> p.severity().id()));
         problems.getColumns().add(col("Characteristic", p -> p.characteristic() == null ? "" : p.characteristic()));
         problems.getColumns().add(col("Problem", Problem::message));
+        problems.getColumns().get(0).setPrefWidth(dev.proofrun.app.shell.Em.of(4));
+        problems.getColumns().get(4).setPrefWidth(dev.proofrun.app.shell.Em.of(40));
         Label problemsTitle = new Label("Problems in the file");
         problemsTitle.getStyleClass().add("pr-card-title");
         VBox problemsCard = new VBox(problemsTitle, problems);
@@ -116,6 +124,8 @@ public final class GradingView implements StepView {
         grades.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY_FLEX_LAST_COLUMN);
         grades.getColumns().add(col("Id", CharacteristicGrade::id));
         grades.getColumns().add(col("Name", CharacteristicGrade::name));
+        grades.getColumns().get(0).setPrefWidth(dev.proofrun.app.shell.Em.of(4));
+        grades.getColumns().get(1).setPrefWidth(dev.proofrun.app.shell.Em.of(14));
         grades.getColumns().add(col("Verdict", g -> GradingViewModel.verdictWords(g.verdict())));
         TableColumn<CharacteristicGrade, String> est = col("Estimate", g -> g.judged() == null ? "—"
                 : g.judged().index().symbol() + " " + GradingViewModel.fmt(g.judged().estimate()));

@@ -52,7 +52,7 @@ public final class HandoutView implements StepView {
         paper.valueProperty().addListener((o, a, b) -> vm.refreshPreview());
         TextField folder = new TextField(vm.exportFolder().toString());
         folder.setId("export-folder");
-        folder.setPrefColumnCount(36);
+        folder.setPrefColumnCount(28);
         HBox.setHgrow(folder, Priority.ALWAYS);
         Button choose = new Button("Choose…");
         choose.setOnAction(e -> {
@@ -79,6 +79,9 @@ public final class HandoutView implements StepView {
         Label folderLabel = new Label("Folder");
         folderLabel.setLabelFor(folder);
         form.addRow(0, new Label("Paper"), paper);
+        for (javafx.scene.layout.Region r : new javafx.scene.layout.Region[] {choose, export}) {
+            r.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
+        }
         form.addRow(1, folderLabel, new HBox(8, folder, choose));
         form.addRow(2, new Label(""), new HBox(8, export, open));
         Label filesTitle = new Label("Sheet and fill-in files");

@@ -55,8 +55,12 @@ public final class PartView implements StepView {
             TableColumn<CharacteristicDraft, String> c = new TableColumn<>(PartViewModel.label(f));
             c.setId("col-" + f.header());
             // a width of its own: the default width makes the skin measure every cell on the first showing
-            // (hundreds of ms on a loaded machine); the constrained policy spreads the columns anyway
-            c.setPrefWidth(dev.proofrun.app.shell.Em.of(7));
+            // (hundreds of ms on a loaded machine); the constrained policy spreads the rest
+            c.setPrefWidth(dev.proofrun.app.shell.Em.of(switch (f) {
+                case NAME -> 16;
+                case ID, UNIT -> 5;
+                default -> 7;
+            }));
             c.setCellValueFactory(cd -> cd.getValue().cell(f));
             c.setCellFactory(col -> new CheckedCell(vm, f));
             c.setOnEditCommit(e -> e.getRowValue().cell(f).set(e.getNewValue()));
