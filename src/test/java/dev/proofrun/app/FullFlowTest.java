@@ -61,6 +61,7 @@ class FullFlowTest {
                 java.lang.management.ManagementFactory.getOperatingSystemMXBean().getSystemLoadAverage(),
                 Runtime.getRuntime().availableProcessors());
         System.out.println("  worst per phase: " + probe.worstByPhase());
+        System.out.printf(java.util.Locale.ROOT, "  most FX-thread CPU time within one wait: %.1f ms%n", probe.worstCpuMillis());
         System.out.print(probe.blocks());
     }
 

@@ -180,11 +180,12 @@ public final class GradingView implements StepView {
 
     private void showCharacteristic(CharacteristicGrade g) {
         chain.getChildren().clear();
-        location.getData().clear();
-        spread.getData().clear();
-        readings.getData().clear();
+        List<javafx.scene.chart.XYChart.Series<Number, Number>> lines = new ArrayList<>();
         if (g == null) {
             charVerdict.setText("");
+            Charts.show(location, List.of());
+            Charts.show(spread, List.of());
+            Charts.show(readings, List.of());
             return;
         }
         charVerdict.setText(g.id() + " " + g.name() + ": " + GradingViewModel.verdictWords(g.verdict())
@@ -215,6 +216,9 @@ public final class GradingView implements StepView {
         if (g.stability() != null) {
             chart(location, g.stability().charts().location(), g.unit());
             chart(spread, g.stability().charts().spread(), g.unit());
+        } else {
+            Charts.show(location, List.of());
+            Charts.show(spread, List.of());
         }
         List<double[]> pts = new ArrayList<>();
         int i = 1;
@@ -224,19 +228,20 @@ public final class GradingView implements StepView {
             }
         }
         if (!pts.isEmpty()) {
-            readings.getData().add(Charts.series("readings", pts));
+            lines.add(Charts.series("readings", pts));
             double span = g.limits().upper().orElse(pts.stream().mapToDouble(p -> p[1]).max().orElse(0))
                     - g.limits().lower().orElse(pts.stream().mapToDouble(p -> p[1]).min().orElse(0));
             readings.setTitle("Readings against the limits" + (g.unit().isEmpty() ? "" : " (" + g.unit() + ")"));
             if (g.limits().lower().isPresent()) {
-                readings.getData().add(Charts.horizontal("LSL " + num(g.limits().lower().getAsDouble(), span),
+                lines.add(Charts.horizontal("LSL " + num(g.limits().lower().getAsDouble(), span),
                         g.limits().lower().getAsDouble(), 1, pts.size()));
             }
             if (g.limits().upper().isPresent()) {
-                readings.getData().add(Charts.horizontal("USL " + num(g.limits().upper().getAsDouble(), span),
+                lines.add(Charts.horizontal("USL " + num(g.limits().upper().getAsDouble(), span),
                         g.limits().upper().getAsDouble(), 1, pts.size()));
             }
         }
+        Charts.show(readings, lines);
     }
 
     private static void chart(LineChart<Number, Number> c, ControlChart cc, String unit) {
@@ -246,15 +251,16 @@ public final class GradingView implements StepView {
             pts.add(new double[] {cc.subgroupOf(i) + 1, cc.points()[i]});
         }
         if (pts.isEmpty()) {
+            Charts.show(c, List.of());
             return;
         }
         double x0 = pts.get(0)[0];
         double x1 = pts.get(pts.size() - 1)[0];
-        c.getData().add(Charts.series(cc.statistic().name().toLowerCase(Locale.ROOT), pts));
         double span = cc.ucl() - cc.lcl();
-        c.getData().add(Charts.horizontal("centre " + num(cc.center(), span), cc.center(), x0, x1));
-        c.getData().add(Charts.horizontal("UCL " + num(cc.ucl(), span), cc.ucl(), x0, x1));
-        c.getData().add(Charts.horizontal("LCL " + num(cc.lcl(), span), cc.lcl(), x0, x1));
+        Charts.show(c, List.of(Charts.series(cc.statistic().name().toLowerCase(Locale.ROOT), pts),
+                Charts.horizontal("centre " + num(cc.center(), span), cc.center(), x0, x1),
+                Charts.horizontal("UCL " + num(cc.ucl(), span), cc.ucl(), x0, x1),
+                Charts.horizontal("LCL " + num(cc.lcl(), span), cc.lcl(), x0, x1)));
     }
 
     /** Every index the readings define, with its lower bound where the core gives one. */

@@ -96,6 +96,8 @@ public final class HandoutView implements StepView {
             for (Image img : vm.pages()) {
                 ImageView v = new ImageView(img);
                 v.setPreserveRatio(true);
+                // drawn scaled once into a cached bitmap, not scaled again on every frame
+                v.setCache(true);
                 v.setFitHeight(dev.proofrun.app.shell.Em.of(31.5));
                 v.getStyleClass().add("pr-page-image");
                 strip.getChildren().add(v);
