@@ -55,8 +55,11 @@ public enum AppMessage implements MessageKey {
     GOAL_MEAN_SIGMA_BAD("give the expected mean and a sigma above zero"),
     GOAL_PILOT_MISSING("load the pilot readings"),
     GOAL_PILOT_BAD("the pilot readings could not be used: %s"),
-    SIZING_KEPT("Kept from the plan file: %d subgroups of %d = %d readings, power %s. For this size the table's "
-            + "smallest k is %d (power %s); pick a row to use it."),
+    SIZING_KEPT("Kept from the plan file: %d subgroups of %d = %d readings, %s. The smallest k that reaches the "
+            + "wanted power with this size is %d (power %s); pick a row to use it."),
+    SIZING_POWER_AT("power %s"),
+    SIZING_POWER_BETWEEN("power between %s and %s (read off the power curve)"),
+    SIZING_POWER_UNKNOWN("power not computed for this k"),
     SIZING_GOAL_FIRST("complete the goal first"),
     SIZING_BUSY("the design table is being computed"),
     SIZING_FAILED("the design could not be computed: %s"),
@@ -79,6 +82,10 @@ public enum AppMessage implements MessageKey {
     HANDOUT_ALREADY("This plan is already issued as revision %s."),
     HANDOUT_ISSUED_NOW("Issued as revision %s and saved to %s."),
     HANDOUT_EXPORTED("Written to %s: %s, %s, %s"),
+    HANDOUT_NO_FOLDER("name the folder to write the files into"),
+    HANDOUT_BAD_FOLDER("'%s' is not a folder name this system accepts"),
+    HANDOUT_EXPORTING("Writing the sheet and fill-in files to %s …"),
+    HANDOUT_EXPORT_FAILED("The files could not be written: %s"),
     HANDOUT_PREVIEW_FAILED("The preview could not be drawn: %s"),
     GRADING_ISSUE_FIRST("issue the plan on the Hand-out step first: returned data is graded against an issued plan"),
     GRADING_NO_FILE("name the returned file"),
@@ -86,6 +93,8 @@ public enum AppMessage implements MessageKey {
     GRADING_FAILED("the file could not be graded: %s"),
     GRADING_NOTHING("grade a returned file first"),
     GRADING_REPORT("Report written to %s"),
+    GRADING_REPORTING("Writing the report to %s …"),
+    GRADING_REPORT_FAILED("The report could not be written: %s"),
     GRADING_DONE("%s graded: %s, %d problems listed"),
     GOAL_PILOT_SHOWN("%d pilot readings in %d subgroups: %s estimate %s, lower %d %% bound %s. The design uses the estimate; "
             + "the bound shows how uncertain a pilot is."),

@@ -75,7 +75,7 @@ public final class Wizard {
     /** True while a step computes in the background. */
     public boolean busy() {
         return sizing.busyProperty().get() || timing.busyProperty().get() || handout.busyProperty().get()
-                || grading.busyProperty().get();
+                || handout.exportingProperty().get() || grading.busyProperty().get() || grading.reportingProperty().get();
     }
 
     public Session session() {

@@ -3,8 +3,7 @@ package dev.proofrun.cli;
 import dev.proofrun.grade.GradeMessage;
 import dev.proofrun.grade.GradingPlan;
 import dev.proofrun.grade.PlanAdapter;
-import dev.proofrun.grade.SimulatedReturn;
-import dev.proofrun.grade.SimulatedReturn.Process;
+import dev.proofrun.grade.DemoReturn;
 import dev.proofrun.plan.DemoPlan;
 import dev.proofrun.plan.PlanFiles;
 import dev.proofrun.plan.StudyPlan;
@@ -15,7 +14,6 @@ import java.io.PrintWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
-import java.util.Map;
 import java.util.UUID;
 import java.util.concurrent.Callable;
 import picocli.CommandLine;
@@ -24,9 +22,8 @@ import picocli.CommandLine.Option;
 
 /**
  * {@code proofrun demo --out DIR}: the issued demo plan and a seeded, simulated returned file that grades to
- * a mix of verdicts — the whole loop in two commands. The readings are invented: the bore runs well
- * (demonstrated), the roughness is skewed and close to its requirement (inconclusive), the push-out force
- * drops after a material-lot change (not valid: unstable).
+ * a mix of verdicts — the whole loop in two commands. The readings (invented) come from
+ * {@link DemoReturn}, which the wizard's demo runs use too.
  */
 @Command(name = "demo", mixinStandardHelpOptions = true,
         description = "Write the demo plan (issued) and a simulated returned file to grade.")
@@ -34,21 +31,13 @@ public final class DemoCommand implements Callable<Integer> {
 
     /** The returned file's name. */
     public static final String RETURNED = "demo-valve-body-returned.csv";
-    static final long SEED = 20270334L;
+    static final long SEED = DemoReturn.SEED;
 
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
 
     @Option(names = "--out", required = true, paramLabel = "DIR", description = "Directory to write into (created if missing).")
     Path out;
-
-    /** How the demo's three characteristics behave (invented). */
-    static Map<String, Process> processes() {
-        return Map.of(
-                "D1", Process.stable(22.0012, 0.0021),
-                "R4", Process.stable(0.42, 0.086),
-                "F7", Process.stepping(6.1, 0.22, 0.6, -0.55));
-    }
 
     @Override
     public Integer call() {
@@ -66,7 +55,7 @@ public final class DemoCommand implements Callable<Integer> {
             // not Files.createTempFile: that file would be private to its owner, and the demo is for sharing
             Path tmp = out.resolve(".demo-returned." + UUID.randomUUID() + ".tmp");
             try {
-                SimulatedReturn.writeCsv(gp, processes(), SEED, tmp);
+                DemoReturn.writeCsv(gp, tmp);
                 PlanFiles.write(planFile, plan);
                 Files.move(tmp, dataFile, StandardCopyOption.ATOMIC_MOVE);
             } finally {

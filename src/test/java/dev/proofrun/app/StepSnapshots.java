@@ -50,11 +50,9 @@ public final class StepSnapshots {
             Snapshots.settle(app.wizard(), work);
             if (index == steps - 1) {
                 Path returned = work.resolve("returned.csv");
-                dev.proofrun.grade.SimulatedReturn.writeCsv(dev.proofrun.grade.PlanAdapter.of(
-                        app.wizard().session().base().orElseThrow()), java.util.Map.of(
-                        "D1", dev.proofrun.grade.SimulatedReturn.Process.stable(22.0012, 0.0021),
-                        "R4", dev.proofrun.grade.SimulatedReturn.Process.stable(0.42, 0.086),
-                        "F7", dev.proofrun.grade.SimulatedReturn.Process.stepping(6.1, 0.22, 0.6, -0.55)), 99L, returned);
+                // the same returned file as `proofrun demo` writes (same processes, same seed)
+                dev.proofrun.grade.DemoReturn.writeCsv(dev.proofrun.grade.PlanAdapter.of(
+                        app.wizard().session().base().orElseThrow()), returned);
                 onFx(() -> {
                     app.wizard().grading().returnedFile().set(returned.toString());
                     return app.wizard().grading().grade();
@@ -65,12 +63,15 @@ public final class StepSnapshots {
             File f = out.resolve(String.format("step-%d.png", index + 1)).toFile();
             ImageIO.write(SwingFXUtils.fromFXImage(img, null), "png", f);
             System.out.println("wrote " + f);
-            if (index == steps - 1) {
-                onFx(() -> {
-                    javafx.scene.Node page = app.wizard().view().root().lookup("#page-" + index);
-                    ((javafx.scene.control.ScrollPane) page.getParent().getParent().getParent()).setVvalue(1.0);
-                    return null;
-                });
+            // a step taller than the window: also the bottom of it
+            boolean scrolls = onFx(() -> {
+                javafx.scene.Node page = app.wizard().view().root().lookup("#page-" + index);
+                javafx.scene.control.ScrollPane sp = (javafx.scene.control.ScrollPane) page.getParent().getParent().getParent();
+                boolean taller = page.getBoundsInLocal().getHeight() > sp.getViewportBounds().getHeight() + 1;
+                sp.setVvalue(1.0);
+                return taller;
+            });
+            if (scrolls) {
                 Snapshots.settle(app.wizard(), work);
                 ImageIO.write(SwingFXUtils.fromFXImage(onFx(() -> app.wizard().view().root().getScene().snapshot(null)), null),
                         "png", out.resolve(String.format("step-%d-lower.png", index + 1)).toFile());

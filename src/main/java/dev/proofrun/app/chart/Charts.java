@@ -24,8 +24,8 @@ public final class Charts {
         c.setTitle(title);
         c.setAnimated(false);
         c.setCreateSymbols(false);
-        c.setPrefHeight(260);
-        c.setMinHeight(200);
+        c.setPrefHeight(dev.proofrun.app.shell.Em.of(19.5));
+        c.setMinHeight(dev.proofrun.app.shell.Em.of(15));
         c.getStyleClass().add("pr-chart");
         return c;
     }
@@ -39,6 +39,27 @@ public final class Charts {
         y.setUpperBound(1);
         y.setTickUnit(0.1);
         return c;
+    }
+
+    /**
+     * Shows the given series, reusing the series already in the chart (their paths and legend items) and
+     * only replacing names and points: redrawing after each recomputation then costs the FX thread far
+     * less than clearing and adding.
+     */
+    public static void show(LineChart<Number, Number> chart, List<XYChart.Series<Number, Number>> wanted) {
+        var data = chart.getData();
+        while (data.size() > wanted.size()) {
+            data.remove(data.size() - 1);
+        }
+        for (int i = 0; i < wanted.size(); i++) {
+            XYChart.Series<Number, Number> w = wanted.get(i);
+            if (i < data.size()) {
+                data.get(i).setName(w.getName());
+                data.get(i).getData().setAll(w.getData());
+            } else {
+                data.add(w);
+            }
+        }
     }
 
     public static XYChart.Series<Number, Number> series(String name, List<double[]> points) {

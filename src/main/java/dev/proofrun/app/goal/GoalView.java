@@ -3,7 +3,8 @@ package dev.proofrun.app.goal;
 import dev.proofrun.app.session.CharacteristicDraft;
 import dev.proofrun.app.session.CharacteristicField;
 import dev.proofrun.app.session.ExpectationSource;
-import dev.proofrun.app.shell.IndexTips;
+import dev.proofrun.app.shell.IndexTip;
+import dev.proofrun.app.shell.IndexTooltips;
 import dev.proofrun.app.shell.StepView;
 import dev.proofrun.stats.IndexKind;
 import java.util.Optional;
@@ -52,17 +53,17 @@ public final class GoalView implements StepView {
             protected void updateItem(IndexKind k, boolean empty) {
                 super.updateItem(k, empty);
                 setText(empty || k == null ? null : k.symbol());
-                setTooltip(empty || k == null ? null : new Tooltip(IndexTips.of(k)));
+                setTooltip(empty || k == null ? null : IndexTooltips.tooltip(IndexTip.of(k).english()));
             }
         });
-        index.setTooltip(new Tooltip());
+        index.setTooltip(IndexTooltips.tooltip(""));
         index.getTooltip().textProperty().bind(Bindings.createStringBinding(
-                () -> vm.indexProperty().get() == null ? "" : IndexTips.of(vm.indexProperty().get()), vm.indexProperty()));
+                () -> vm.indexProperty().get() == null ? "" : IndexTip.of(vm.indexProperty().get()).english(), vm.indexProperty()));
         TextField min = field("minimum", vm.minimum());
         TextField conf = field("confidence", vm.confidence());
-        req.addRow(0, new Label("Index the customer asks for"), index);
-        req.addRow(1, new Label("Smallest acceptable value"), min);
-        req.addRow(2, new Label("Confidence (e.g. 0.95)"), conf);
+        req.addRow(0, mnemonic("_Index the customer asks for", index), index);
+        req.addRow(1, mnemonic("Smallest acceptable _value", min), min);
+        req.addRow(2, mnemonic("C_onfidence (e.g. 0.95)", conf), conf);
         Label reqTitle = new Label("What the study must show");
         reqTitle.getStyleClass().add("pr-card-title");
         VBox reqCard = new VBox(reqTitle, req);
@@ -104,14 +105,24 @@ public final class GoalView implements StepView {
         });
         GridPane valueForm = new GridPane();
         valueForm.getStyleClass().add("pr-form");
-        valueForm.addRow(0, new Label("Expected index"), expected);
+        Label expectedLabel = IndexTooltips.follow(mnemonic("_Expected index", expected));
+        expectedLabel.textProperty().bind(Bindings.createStringBinding(() -> "_Expected "
+                + (vm.indexProperty().get() == null ? "index" : vm.indexProperty().get().symbol()), vm.indexProperty()));
+        valueForm.addRow(0, expectedLabel, expected);
         valueForm.visibleProperty().bind(vm.sourceProperty().isEqualTo(ExpectationSource.VALUE));
         valueForm.managedProperty().bind(valueForm.visibleProperty());
 
         GridPane meanForm = new GridPane();
         meanForm.getStyleClass().add("pr-form");
-        meanForm.addRow(0, new Label("Expected mean"), field("expected-mean", vm.expectedMean()));
-        meanForm.addRow(1, new Label("Expected sigma"), field("expected-sigma", vm.expectedSigma()));
+        TextField mean = field("expected-mean", vm.expectedMean());
+        TextField sigma = field("expected-sigma", vm.expectedSigma());
+        Label meanLabel = mnemonic("Expected _mean", mean);
+        Label sigmaLabel = mnemonic("Expected _sigma", sigma);
+        javafx.beans.binding.StringBinding unit = vm.unitBinding();
+        meanLabel.textProperty().bind(Bindings.concat("Expected _mean", unit));
+        sigmaLabel.textProperty().bind(Bindings.concat("Expected _sigma", unit));
+        meanForm.addRow(0, meanLabel, mean);
+        meanForm.addRow(1, sigmaLabel, sigma);
         meanForm.visibleProperty().bind(vm.sourceProperty().isEqualTo(ExpectationSource.MEAN_SIGMA));
         meanForm.managedProperty().bind(meanForm.visibleProperty());
 
@@ -134,20 +145,19 @@ public final class GoalView implements StepView {
         pilotShown.setId("pilot-estimate");
         pilotShown.setWrapText(true);
         pilotShown.textProperty().bind(vm.pilotMessageProperty());
-        Tooltip pilotTip = new Tooltip();
-        pilotTip.setWrapText(true);
-        pilotTip.setMaxWidth(480);
-        pilotTip.textProperty().bind(Bindings.createStringBinding(() -> vm.indexProperty().get() == null ? ""
-                : IndexTips.of(vm.indexProperty().get()) + "\n\n" + IndexTips.lowerBound(vm.indexProperty().get(), 0.95)
-                        .replace("95 %", "the stated"), vm.indexProperty()));
-        pilotShown.setTooltip(pilotTip);
+        IndexTooltips.follow(pilotShown);
         Label pilotLabel = new Label("Readings file (CSV)");
         pilotLabel.setLabelFor(pilotFile);
-        pilotBox.getChildren().addAll(new HBox(8, pilotLabel, pilotFile, choose, load), pilotShown);
+        for (javafx.scene.layout.Region r : new javafx.scene.layout.Region[] {pilotLabel, choose, load}) {
+            r.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
+        }
+        HBox pilotRow = new HBox(8, pilotLabel, pilotFile, choose, load);
+        pilotRow.setAlignment(javafx.geometry.Pos.CENTER_LEFT);
+        pilotBox.getChildren().addAll(pilotRow, pilotShown);
         pilotBox.visibleProperty().bind(vm.sourceProperty().isEqualTo(ExpectationSource.PILOT));
         pilotBox.managedProperty().bind(pilotBox.visibleProperty());
 
-        Label result = new Label();
+        Label result = IndexTooltips.follow(new Label());
         result.setId("expectation");
         result.getStyleClass().add("pr-fine");
         result.textProperty().bind(Bindings.createStringBinding(() -> vm.expectationBinding().get()
@@ -162,7 +172,7 @@ public final class GoalView implements StepView {
 
         GridPane focusRow = new GridPane();
         focusRow.getStyleClass().add("pr-form");
-        focusRow.addRow(0, new Label("Characteristic"), focus);
+        focusRow.addRow(0, mnemonic("_Characteristic", focus), focus);
         Label expTitle = new Label("What you expect of the process");
         expTitle.getStyleClass().add("pr-card-title");
         VBox expCard = new VBox(expTitle, focusRow, sourceRow, valueForm, meanForm, pilotBox, result, problem);
@@ -203,5 +213,13 @@ public final class GoalView implements StepView {
     @Override
     public Node firstFocus() {
         return index;
+    }
+
+    /** A label whose underlined letter (Alt+letter) moves the focus to the field. */
+    private static Label mnemonic(String text, javafx.scene.Node field) {
+        Label l = new Label(text);
+        l.setMnemonicParsing(true);
+        l.setLabelFor(field);
+        return l;
     }
 }

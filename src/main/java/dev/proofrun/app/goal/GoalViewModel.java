@@ -55,6 +55,8 @@ public final class GoalViewModel extends StepViewModel {
     private final ObjectProperty<CapabilityResult> pilot = new SimpleObjectProperty<>(this, "pilot");
     private final StringProperty pilotMessage = new SimpleStringProperty(this, "pilotMessage", "");
 
+    private javafx.beans.binding.StringBinding unit;
+
     public GoalViewModel(StudyDraft draft, ObservableValue<StudyPlan> base) {
         this.draft = draft;
         this.base = base;
@@ -136,6 +138,16 @@ public final class GoalViewModel extends StepViewModel {
 
     public ObjectBinding<Optional<CharacteristicDraft>> focusBinding() {
         return focus;
+    }
+
+    /** The unit of the characteristic in focus, in brackets with a leading space (" (mm)"), or "". */
+    public javafx.beans.binding.StringBinding unitBinding() {
+        if (unit == null) {
+            unit = Bindings.createStringBinding(() -> focusBinding().get()
+                    .map(c -> c.text(CharacteristicField.UNIT).trim())
+                    .map(u -> u.isEmpty() ? "" : " (" + u + ")").orElse(""), focusBinding(), draft.editsProperty());
+        }
+        return unit;
     }
 
     public ObjectBinding<Optional<Requirement>> requirementBinding() {

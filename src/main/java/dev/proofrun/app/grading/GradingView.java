@@ -1,7 +1,8 @@
 package dev.proofrun.app.grading;
 
 import dev.proofrun.app.chart.Charts;
-import dev.proofrun.app.shell.IndexTips;
+import dev.proofrun.app.shell.IndexTip;
+import dev.proofrun.app.shell.IndexTooltips;
 import dev.proofrun.app.shell.StepView;
 import dev.proofrun.control.ControlChart;
 import dev.proofrun.grade.CharacteristicGrade;
@@ -43,9 +44,13 @@ public final class GradingView implements StepView {
     private final LineChart<Number, Number> readings = Charts.lines("readings-chart", "Readings against the limits", "reading", "");
 
     public GradingView(GradingViewModel vm) {
+        location.getStyleClass().add("pr-control-chart");
+        spread.getStyleClass().add("pr-control-chart");
+        readings.getStyleClass().add("pr-limits-chart");
         file.setId("returned-file");
-        file.setPrefColumnCount(40);
+        file.setPrefColumnCount(24);
         file.textProperty().bindBidirectional(vm.returnedFile());
+        file.setOnAction(e -> vm.grade());
         HBox.setHgrow(file, Priority.ALWAYS);
         Button browse = new Button("Choose…");
         browse.setOnAction(e -> {
@@ -62,19 +67,26 @@ public final class GradingView implements StepView {
         grade.setOnAction(e -> vm.grade());
         grade.disableProperty().bind(vm.busyProperty());
         ProgressIndicator spinner = new ProgressIndicator();
-        spinner.setMaxSize(24, 24);
-        spinner.visibleProperty().bind(vm.busyProperty());
+        spinner.setMaxSize(dev.proofrun.app.shell.Em.of(1.8), dev.proofrun.app.shell.Em.of(1.8));
+        spinner.visibleProperty().bind(vm.busyProperty().or(vm.reportingProperty()));
         Label message = new Label();
         message.setId("grading-message");
         message.setWrapText(true);
         message.textProperty().bind(vm.messageProperty());
         Button report = new Button("Export the _report PDF");
         report.setId("export-report");
-        report.disableProperty().bind(vm.resultProperty().isNull());
+        report.disableProperty().bind(vm.resultProperty().isNull().or(vm.reportingProperty()));
         report.setOnAction(e -> vm.exportReport(vm.defaultReport()));
-        Label fileLabel = new Label("Returned file");
+        Label fileLabel = new Label("Returned _file");
+        fileLabel.setMnemonicParsing(true);
         fileLabel.setLabelFor(file);
-        VBox fileCard = new VBox(new HBox(8, fileLabel, file, browse, grade, spinner, report), message);
+        HBox fileRow = new HBox(8, fileLabel, file, browse, grade, spinner, report);
+        fileRow.setAlignment(javafx.geometry.Pos.CENTER_LEFT);
+        // with a large system font the path field gives way, not the label and buttons
+        for (javafx.scene.layout.Region r : new javafx.scene.layout.Region[] {fileLabel, browse, grade, report}) {
+            r.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
+        }
+        VBox fileCard = new VBox(fileRow, message);
         fileCard.getStyleClass().add("pr-card");
 
         verdict.setId("verdict");
@@ -87,7 +99,9 @@ public final class GradingView implements StepView {
 
         TableView<Problem> problems = new TableView<>(vm.problems());
         problems.setId("problems");
-        problems.setPrefHeight(170);
+        double em = javafx.scene.text.Font.getDefault().getSize();
+        problems.prefHeightProperty().bind(javafx.beans.binding.Bindings.when(javafx.beans.binding.Bindings.isEmpty(vm.problems()))
+                .then(5 * em).otherwise(13 * em));
         problems.setPlaceholder(new Label("No problems in the file."));
         problems.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY_FLEX_LAST_COLUMN);
         problems.getColumns().add(col("Row", p -> p.location().row() > 0 ? Long.toString(p.location().row()) : ""));
@@ -95,6 +109,8 @@ public final class GradingView implements StepView {
         problems.getColumns().add(col("Kind", p -> p.severity().id()));
         problems.getColumns().add(col("Characteristic", p -> p.characteristic() == null ? "" : p.characteristic()));
         problems.getColumns().add(col("Problem", Problem::message));
+        problems.getColumns().get(0).setPrefWidth(dev.proofrun.app.shell.Em.of(4));
+        problems.getColumns().get(4).setPrefWidth(dev.proofrun.app.shell.Em.of(40));
         Label problemsTitle = new Label("Problems in the file");
         problemsTitle.getStyleClass().add("pr-card-title");
         VBox problemsCard = new VBox(problemsTitle, problems);
@@ -104,10 +120,12 @@ public final class GradingView implements StepView {
 
         TableView<CharacteristicGrade> grades = new TableView<>(vm.grades());
         grades.setId("grades");
-        grades.setPrefHeight(130);
+        grades.setPrefHeight(dev.proofrun.app.shell.Em.of(10));
         grades.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY_FLEX_LAST_COLUMN);
         grades.getColumns().add(col("Id", CharacteristicGrade::id));
         grades.getColumns().add(col("Name", CharacteristicGrade::name));
+        grades.getColumns().get(0).setPrefWidth(dev.proofrun.app.shell.Em.of(4));
+        grades.getColumns().get(1).setPrefWidth(dev.proofrun.app.shell.Em.of(14));
         grades.getColumns().add(col("Verdict", g -> GradingViewModel.verdictWords(g.verdict())));
         TableColumn<CharacteristicGrade, String> est = col("Estimate", g -> g.judged() == null ? "—"
                 : g.judged().index().symbol() + " " + GradingViewModel.fmt(g.judged().estimate()));
@@ -162,11 +180,12 @@ public final class GradingView implements StepView {
 
     private void showCharacteristic(CharacteristicGrade g) {
         chain.getChildren().clear();
-        location.getData().clear();
-        spread.getData().clear();
-        readings.getData().clear();
+        List<javafx.scene.chart.XYChart.Series<Number, Number>> lines = new ArrayList<>();
         if (g == null) {
             charVerdict.setText("");
+            Charts.show(location, List.of());
+            Charts.show(spread, List.of());
+            Charts.show(readings, List.of());
             return;
         }
         charVerdict.setText(g.id() + " " + g.name() + ": " + GradingViewModel.verdictWords(g.verdict())
@@ -178,25 +197,28 @@ public final class GradingView implements StepView {
         for (int i = 0; i < steps.length; i++) {
             Label head = new Label(titles[i]);
             head.getStyleClass().add("pr-card-title");
-            Label body = new Label(String.join("\n", GradingViewModel.reasons(g, steps[i])));
+            Label body = IndexTooltips.follow(new Label(String.join("\n", GradingViewModel.reasons(g, steps[i]))));
             body.setWrapText(true);
             body.setId("evidence-" + steps[i].id());
             chain.getChildren().addAll(head, body);
         }
         IndexEvidence e = g.judged();
         if (e != null) {
-            Label idx = new Label(String.format(Locale.ROOT, "%s = %.3f, lower %.0f %% bound %.3f, required %.3f (model: %s)",
-                    e.index().symbol(), e.estimate(), 100 * e.confidence(), e.lower(), e.required(), e.model().id()));
+            Label idx = IndexTooltips.follow(new Label(String.format(Locale.ROOT,
+                    "%s = %.3f, lower %.0f %% bound %.3f, required %.3f (model: %s)",
+                    e.index().symbol(), e.estimate(), 100 * e.confidence(), e.lower(), e.required(), e.model().id())));
             idx.setId("index-evidence");
-            Tooltip t = new Tooltip(IndexTips.of(e.index()) + "\n\n" + IndexTips.lowerBound(e.index(), e.confidence()));
-            t.setWrapText(true);
-            t.setMaxWidth(480);
-            idx.setTooltip(t);
             chain.getChildren().add(idx);
+        }
+        if (g.capability() != null) {
+            chain.getChildren().add(indexGrid(g.capability()));
         }
         if (g.stability() != null) {
             chart(location, g.stability().charts().location(), g.unit());
             chart(spread, g.stability().charts().spread(), g.unit());
+        } else {
+            Charts.show(location, List.of());
+            Charts.show(spread, List.of());
         }
         List<double[]> pts = new ArrayList<>();
         int i = 1;
@@ -206,16 +228,20 @@ public final class GradingView implements StepView {
             }
         }
         if (!pts.isEmpty()) {
-            readings.getData().add(Charts.series("readings", pts));
+            lines.add(Charts.series("readings", pts));
+            double span = g.limits().upper().orElse(pts.stream().mapToDouble(p -> p[1]).max().orElse(0))
+                    - g.limits().lower().orElse(pts.stream().mapToDouble(p -> p[1]).min().orElse(0));
+            readings.setTitle("Readings against the limits" + (g.unit().isEmpty() ? "" : " (" + g.unit() + ")"));
             if (g.limits().lower().isPresent()) {
-                readings.getData().add(Charts.horizontal("LSL " + num(g.limits().lower().getAsDouble()),
+                lines.add(Charts.horizontal("LSL " + num(g.limits().lower().getAsDouble(), span),
                         g.limits().lower().getAsDouble(), 1, pts.size()));
             }
             if (g.limits().upper().isPresent()) {
-                readings.getData().add(Charts.horizontal("USL " + num(g.limits().upper().getAsDouble()),
+                lines.add(Charts.horizontal("USL " + num(g.limits().upper().getAsDouble(), span),
                         g.limits().upper().getAsDouble(), 1, pts.size()));
             }
         }
+        Charts.show(readings, lines);
     }
 
     private static void chart(LineChart<Number, Number> c, ControlChart cc, String unit) {
@@ -225,18 +251,48 @@ public final class GradingView implements StepView {
             pts.add(new double[] {cc.subgroupOf(i) + 1, cc.points()[i]});
         }
         if (pts.isEmpty()) {
+            Charts.show(c, List.of());
             return;
         }
         double x0 = pts.get(0)[0];
         double x1 = pts.get(pts.size() - 1)[0];
-        c.getData().add(Charts.series(cc.statistic().name().toLowerCase(Locale.ROOT), pts));
-        c.getData().add(Charts.horizontal("UCL " + num(cc.ucl()), cc.ucl(), x0, x1));
-        c.getData().add(Charts.horizontal("centre " + num(cc.center()), cc.center(), x0, x1));
-        c.getData().add(Charts.horizontal("LCL " + num(cc.lcl()), cc.lcl(), x0, x1));
+        double span = cc.ucl() - cc.lcl();
+        Charts.show(c, List.of(Charts.series(cc.statistic().name().toLowerCase(Locale.ROOT), pts),
+                Charts.horizontal("centre " + num(cc.center(), span), cc.center(), x0, x1),
+                Charts.horizontal("UCL " + num(cc.ucl(), span), cc.ucl(), x0, x1),
+                Charts.horizontal("LCL " + num(cc.lcl(), span), cc.lcl(), x0, x1)));
     }
 
-    private static String num(double v) {
-        return String.format(Locale.ROOT, "%.6g", v);
+    /** Every index the readings define, with its lower bound where the core gives one. */
+    private static Node indexGrid(dev.proofrun.capability.CapabilityResult c) {
+        javafx.scene.layout.GridPane grid = new javafx.scene.layout.GridPane();
+        grid.setId("index-grid");
+        grid.getStyleClass().addAll("pr-form", "pr-index-grid");
+        Label head = new Label("All indices (normal model)");
+        head.getStyleClass().add("pr-card-title");
+        Label lowerHead = IndexTooltips.follow(new Label(String.format(Locale.ROOT, "lower %.0f %% bound", 100 * c.confidence())));
+        lowerHead.setTooltip(IndexTooltips.tooltip(IndexTip.LOWER_BOUND.english()));
+        grid.addRow(0, head, new Label("estimate"), lowerHead);
+        int row = 1;
+        for (dev.proofrun.stats.IndexKind k : dev.proofrun.stats.IndexKind.values()) {
+            java.util.OptionalDouble v = c.index(k);
+            if (v.isPresent()) {
+                java.util.OptionalDouble lo = c.lowerBound(k);
+                grid.addRow(row++, IndexTooltips.follow(new Label(k.symbol())), new Label(GradingViewModel.fmt(v.getAsDouble())),
+                        new Label(lo.isPresent() ? GradingViewModel.fmt(lo.getAsDouble()) : "—"));
+            }
+        }
+        if (c.indices().cpm().isPresent()) {
+            grid.addRow(row, IndexTooltips.follow(new Label("Cpm")), new Label(GradingViewModel.fmt(c.indices().cpm().getAsDouble())),
+                    new Label("—"));
+        }
+        return grid;
+    }
+
+    /** Limits printed to a precision that fits the chart: two digits below the spread between them. */
+    private static String num(double v, double span) {
+        int decimals = span > 0 ? (int) Math.max(0, Math.min(8, 2 - Math.floor(Math.log10(span)))) : 4;
+        return String.format(Locale.ROOT, "%." + decimals + "f", v);
     }
 
     private static void style(Label l, Verdict v) {
@@ -261,7 +317,7 @@ public final class GradingView implements StepView {
         Label l = new Label(text);
         Tooltip t = new Tooltip(tip);
         t.setWrapText(true);
-        t.setMaxWidth(420);
+        t.setMaxWidth(dev.proofrun.app.shell.Em.of(32));
         l.setTooltip(t);
         return l;
     }
@@ -269,7 +325,18 @@ public final class GradingView implements StepView {
     private static <T> TableColumn<T, String> col(String title, Function<T, String> text) {
         TableColumn<T, String> c = new TableColumn<>(title);
         c.setSortable(false);
+        // a width of its own: the default width makes the skin measure every cell on the first showing
+        // (hundreds of ms on a loaded machine); the constrained policy spreads the columns anyway
+        c.setPrefWidth(dev.proofrun.app.shell.Em.of(7));
         c.setCellValueFactory(cd -> new ReadOnlyStringWrapper(text.apply(cd.getValue())));
+        c.setCellFactory(tc -> new javafx.scene.control.TableCell<>() {
+            @Override
+            protected void updateItem(String item, boolean empty) {
+                super.updateItem(item, empty);
+                setText(empty ? null : item);
+                IndexTooltips.apply(this);
+            }
+        });
         return c;
     }
 

@@ -44,6 +44,7 @@ public final class GradingViewModel extends StepViewModel {
     private final ObservableList<CharacteristicGrade> grades = FXCollections.observableArrayList();
     private final ObjectProperty<CharacteristicGrade> selected = new SimpleObjectProperty<>(this, "selected");
     private final BooleanProperty busy = new SimpleBooleanProperty(this, "busy", false);
+    private final BooleanProperty reporting = new SimpleBooleanProperty(this, "reporting", false);
     private final StringProperty message = new SimpleStringProperty(this, "message", "");
     private final Background background;
     private Background.Job running;
@@ -144,26 +145,39 @@ public final class GradingViewModel extends StepViewModel {
         grades.setAll(r.characteristics());
         selected.set(r.characteristics().isEmpty() ? null : r.characteristics().get(0));
         busy.set(false);
-        message.set(AppMessage.GRADING_DONE.format(r.file(), r.verdict().id(), r.problems().size()));
+        message.set(AppMessage.GRADING_DONE.format(r.file(), verdictWords(r.verdict()).toLowerCase(Locale.ROOT), r.problems().size()));
     }
 
     /**
-     * Writes the grade report PDF (the core's report writer) next to the returned file, or into the given file.
+     * Writes the grade report PDF (the core's report writer) into the given file, in the background;
+     * {@link #reportingProperty()} is true meanwhile and the message says where it went.
      */
-    public Optional<Path> exportReport(Path target) {
+    public boolean exportReport(Path target) {
         GradeResult r = result.get();
-        if (r == null || gradedAgainst == null) {
+        StudyPlan against = gradedAgainst;
+        if (r == null || against == null) {
             message.set(AppMessage.GRADING_NOTHING.format());
-            return Optional.empty();
+            return false;
         }
-        try {
-            GradeReport.write(r, gradedAgainst, Paper.A4, target);
-            message.set(AppMessage.GRADING_REPORT.format(target));
-            return Optional.of(target);
-        } catch (UserException | IllegalArgumentException e) {
-            message.set(e.getMessage());
-            return Optional.empty();
-        }
+        reporting.set(true);
+        message.set(AppMessage.GRADING_REPORTING.format(target));
+        background.submit(() -> {
+            GradeReport.write(r, against, Paper.A4, target);
+            return target;
+        }, written -> {
+            reporting.set(false);
+            message.set(AppMessage.GRADING_REPORT.format(written));
+        }, ex -> {
+            reporting.set(false);
+            message.set(ex instanceof UserException || ex instanceof IllegalArgumentException ? ex.getMessage()
+                    : AppMessage.GRADING_REPORT_FAILED.format(String.valueOf(ex.getMessage())));
+        });
+        return true;
+    }
+
+    /** True while the report PDF is being written. */
+    public BooleanProperty reportingProperty() {
+        return reporting;
     }
 
     /** The report's default file: beside the returned file, "&lt;plan id&gt;-report.pdf". */

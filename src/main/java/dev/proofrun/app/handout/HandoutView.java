@@ -3,7 +3,6 @@ package dev.proofrun.app.handout;
 import dev.proofrun.app.shell.StepView;
 import dev.proofrun.sheet.layout.Paper;
 import java.io.File;
-import java.nio.file.Path;
 import javafx.beans.binding.Bindings;
 import javafx.collections.FXCollections;
 import javafx.collections.ListChangeListener;
@@ -27,6 +26,7 @@ public final class HandoutView implements StepView {
 
     private final VBox root = new VBox(12);
     private final Button issue = new Button("_Issue the plan");
+    private final Button export = new Button("_Export PDF, CSV and XLSX");
 
     public HandoutView(HandoutViewModel vm) {
         Label state = new Label();
@@ -52,7 +52,7 @@ public final class HandoutView implements StepView {
         paper.valueProperty().addListener((o, a, b) -> vm.refreshPreview());
         TextField folder = new TextField(vm.exportFolder().toString());
         folder.setId("export-folder");
-        folder.setPrefColumnCount(36);
+        folder.setPrefColumnCount(28);
         HBox.setHgrow(folder, Priority.ALWAYS);
         Button choose = new Button("Choose…");
         choose.setOnAction(e -> {
@@ -66,10 +66,10 @@ public final class HandoutView implements StepView {
                 folder.setText(f.toString());
             }
         });
-        Button export = new Button("_Export PDF, CSV and XLSX");
         export.setId("export");
-        export.disableProperty().bind(Bindings.createBooleanBinding(() -> vm.issuedBinding().get().isEmpty(), vm.issuedBinding()));
-        export.setOnAction(e -> vm.export(Path.of(folder.getText().trim())));
+        export.disableProperty().bind(Bindings.createBooleanBinding(() -> vm.issuedBinding().get().isEmpty()
+                || vm.exportingProperty().get(), vm.issuedBinding(), vm.exportingProperty()));
+        export.setOnAction(e -> vm.exportTo(folder.getText()));
         Button open = new Button("_Open the PDF");
         open.setId("open-pdf");
         open.disableProperty().bind(vm.exportedProperty().isNull());
@@ -79,6 +79,9 @@ public final class HandoutView implements StepView {
         Label folderLabel = new Label("Folder");
         folderLabel.setLabelFor(folder);
         form.addRow(0, new Label("Paper"), paper);
+        for (javafx.scene.layout.Region r : new javafx.scene.layout.Region[] {choose, export}) {
+            r.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
+        }
         form.addRow(1, folderLabel, new HBox(8, folder, choose));
         form.addRow(2, new Label(""), new HBox(8, export, open));
         Label filesTitle = new Label("Sheet and fill-in files");
@@ -93,16 +96,18 @@ public final class HandoutView implements StepView {
             for (Image img : vm.pages()) {
                 ImageView v = new ImageView(img);
                 v.setPreserveRatio(true);
-                v.setFitHeight(420);
+                // drawn scaled once into a cached bitmap, not scaled again on every frame
+                v.setCache(true);
+                v.setFitHeight(dev.proofrun.app.shell.Em.of(31.5));
                 v.getStyleClass().add("pr-page-image");
                 strip.getChildren().add(v);
             }
         });
         ScrollPane pages = new ScrollPane(strip);
-        pages.setPrefViewportHeight(430);
+        pages.setPrefViewportHeight(dev.proofrun.app.shell.Em.of(32.3));
         pages.setFitToHeight(true);
         ProgressIndicator spinner = new ProgressIndicator();
-        spinner.setMaxSize(24, 24);
+        spinner.setMaxSize(dev.proofrun.app.shell.Em.of(1.8), dev.proofrun.app.shell.Em.of(1.8));
         spinner.visibleProperty().bind(vm.busyProperty());
         Label previewTitle = new Label("Preview of the printed sheet");
         previewTitle.getStyleClass().add("pr-card-title");
@@ -118,6 +123,6 @@ public final class HandoutView implements StepView {
 
     @Override
     public Node firstFocus() {
-        return issue;
+        return issue.isDisabled() ? export : issue;
     }
 }

@@ -57,6 +57,7 @@ public final class HandoutViewModel extends StepViewModel {
     private final ObjectProperty<Paper> paper = new SimpleObjectProperty<>(this, "paper", Paper.A4);
     private final ObservableList<Image> pages = FXCollections.observableArrayList();
     private final BooleanProperty busy = new SimpleBooleanProperty(this, "busy", false);
+    private final BooleanProperty exporting = new SimpleBooleanProperty(this, "exporting", false);
     private final StringProperty message = new SimpleStringProperty(this, "message", "");
     private final ObjectProperty<SheetFiles.Written> exported = new SimpleObjectProperty<>(this, "exported");
     private final StringBinding state;
@@ -249,23 +250,53 @@ public final class HandoutViewModel extends StepViewModel {
         return missingProperty().get();
     }
 
-    /** Writes the sheet PDF and both fill-in files of the issued plan into the folder. */
-    public Optional<SheetFiles.Written> export(Path dir) {
+    /**
+     * Writes the sheet PDF and both fill-in files of the issued plan into the folder, in the background
+     * (the PDF and the workbook take a second or more on a cold start). {@link #exportedProperty()} is set
+     * when they are written; {@link #exportingProperty()} is true meanwhile.
+     */
+    public boolean export(Path dir) {
         Optional<StudyPlan> issued = issuedNow();
         if (issued.isEmpty()) {
             message.set(AppMessage.HANDOUT_ISSUE.format());
-            return Optional.empty();
+            return false;
         }
-        try {
-            SheetFiles.Written w = SheetFiles.write(issued.get(), dir, paper.get(), false);
+        StudyPlan plan = issued.get();
+        Paper size = paper.get();
+        exporting.set(true);
+        exported.set(null);
+        message.set(AppMessage.HANDOUT_EXPORTING.format(dir));
+        background.submit(() -> SheetFiles.write(plan, dir, size, false), w -> {
+            exporting.set(false);
             exported.set(w);
             message.set(AppMessage.HANDOUT_EXPORTED.format(dir, w.pdf().getFileName(), w.csv().getFileName(),
                     w.xlsx().getFileName()));
-            return Optional.of(w);
-        } catch (UserException | IllegalArgumentException e) {
-            message.set(e.getMessage());
-            return Optional.empty();
+        }, ex -> {
+            exporting.set(false);
+            message.set(ex instanceof UserException || ex instanceof IllegalArgumentException ? ex.getMessage()
+                    : AppMessage.HANDOUT_EXPORT_FAILED.format(String.valueOf(ex.getMessage())));
+        });
+        return true;
+    }
+
+    /** {@link #export(Path)} into the folder typed by the user; a name that is no path is said inline. */
+    public boolean exportTo(String folderText) {
+        String text = folderText == null ? "" : folderText.trim();
+        if (text.isEmpty()) {
+            message.set(AppMessage.HANDOUT_NO_FOLDER.format());
+            return false;
         }
+        try {
+            return export(Path.of(text));
+        } catch (java.nio.file.InvalidPathException e) {
+            message.set(AppMessage.HANDOUT_BAD_FOLDER.format(text));
+            return false;
+        }
+    }
+
+    /** True while the three files are being written. */
+    public BooleanProperty exportingProperty() {
+        return exporting;
     }
 
     /** Opens the exported PDF with the system's viewer. */

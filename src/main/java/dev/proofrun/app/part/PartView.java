@@ -40,17 +40,27 @@ public final class PartView implements StepView {
         TextField by = new TextField();
         by.setId("prepared-by");
         by.textProperty().bindBidirectional(vm.preparedBy());
-        form.addRow(0, label("Plan id", planId), planId, label("Part number", number), number);
-        form.addRow(1, label("Part name", name), name, label("Prepared by", by), by);
+        for (TextField f : new TextField[] {planId, number, name, by}) {
+            f.setPrefColumnCount(22);
+        }
+        form.addRow(0, label("_Plan id", planId), planId, label("Part n_umber", number), number);
+        form.addRow(1, label("Part na_me", name), name, label("Prepared b_y", by), by);
 
         TableView<CharacteristicDraft> table = new TableView<>(vm.rows());
         table.setId("characteristics");
         table.setEditable(true);
-        table.setPrefHeight(300);
+        table.setPrefHeight(dev.proofrun.app.shell.Em.of(22.5));
         table.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY_FLEX_LAST_COLUMN);
         for (CharacteristicField f : CharacteristicField.values()) {
             TableColumn<CharacteristicDraft, String> c = new TableColumn<>(PartViewModel.label(f));
             c.setId("col-" + f.header());
+            // a width of its own: the default width makes the skin measure every cell on the first showing
+            // (hundreds of ms on a loaded machine); the constrained policy spreads the rest
+            c.setPrefWidth(dev.proofrun.app.shell.Em.of(switch (f) {
+                case NAME -> 16;
+                case ID, UNIT -> 5;
+                default -> 7;
+            }));
             c.setCellValueFactory(cd -> cd.getValue().cell(f));
             c.setCellFactory(col -> new CheckedCell(vm, f));
             c.setOnEditCommit(e -> e.getRowValue().cell(f).set(e.getNewValue()));
@@ -105,6 +115,7 @@ public final class PartView implements StepView {
 
     private static Label label(String text, Node field) {
         Label l = new Label(text);
+        l.setMnemonicParsing(true);
         l.setLabelFor(field);
         return l;
     }

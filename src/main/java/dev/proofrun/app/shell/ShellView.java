@@ -71,7 +71,9 @@ public final class ShellView {
             b.getStyleClass().add("pr-rail-step");
             b.setMaxWidth(Double.MAX_VALUE);
             b.setAlignment(Pos.CENTER_LEFT);
-            b.setTooltip(new Tooltip(s.hint()));
+            b.setTooltip(new Tooltip(s.hint() + "  (Ctrl+" + (i + 1) + ")"));
+            // Tab stays in the step and the footer; the rail is one key away (Ctrl+1 … Ctrl+7)
+            b.setFocusTraversable(false);
             b.setOnAction(e -> vm.goTo(index));
             s.completeBinding().addListener((obs, was, now) -> styleRail());
             railButtons.add(b);
@@ -146,9 +148,36 @@ public final class ShellView {
         scroll.getStyleClass().add("pr-scroll");
         stage.getChildren().setAll(scroll);
         styleRail();
-        Node focus = v.firstFocus();
-        focus.requestFocus();
-        javafx.application.Platform.runLater(focus::requestFocus);
+        focusFirst(index, v.firstFocus());
+    }
+
+    /**
+     * Puts the focus in the step's first field. The scroll pane adds the page to the scene only when its
+     * skin is made, in the next pulse, and that pulse first hands the focus of the removed page to the
+     * footer; so the focus is asked for again once the field is in the scene, after that pulse.
+     */
+    private void focusFirst(int index, Node focus) {
+        Runnable ask = () -> {
+            if (vm.currentProperty().get() == index && focus.getScene() != null) {
+                focus.requestFocus();
+            }
+        };
+        ask.run();
+        javafx.beans.value.ChangeListener<javafx.scene.Scene> attached = new javafx.beans.value.ChangeListener<>() {
+            @Override
+            public void changed(javafx.beans.value.ObservableValue<? extends javafx.scene.Scene> o,
+                    javafx.scene.Scene was, javafx.scene.Scene now) {
+                if (now != null) {
+                    focus.sceneProperty().removeListener(this);
+                    javafx.application.Platform.runLater(ask);
+                }
+            }
+        };
+        if (focus.getScene() == null) {
+            focus.sceneProperty().addListener(attached);
+        } else {
+            javafx.application.Platform.runLater(ask);
+        }
     }
 
     private void keys() {

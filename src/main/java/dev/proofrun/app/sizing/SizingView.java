@@ -6,12 +6,14 @@ import dev.proofrun.design.DesignRow;
 import dev.proofrun.design.DesignTable;
 import dev.proofrun.design.OcPoint;
 import dev.proofrun.design.PowerPoint;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.function.Function;
 import javafx.beans.binding.Bindings;
 import javafx.beans.property.ReadOnlyStringWrapper;
 import javafx.scene.Node;
 import javafx.scene.chart.LineChart;
+import javafx.scene.chart.XYChart;
 import javafx.scene.control.Label;
 import javafx.scene.control.ProgressIndicator;
 import javafx.scene.control.TableColumn;
@@ -35,13 +37,15 @@ public final class SizingView implements StepView {
             Charts.probability("oc-chart", "Chance to demonstrate against the true index", "true index", "probability");
 
     public SizingView(SizingViewModel vm) {
+        powerChart.getStyleClass().add("pr-design-chart");
+        ocChart.getStyleClass().add("pr-design-chart");
         TextField power = new TextField();
         power.setId("power");
         power.setPrefColumnCount(6);
         power.textProperty().bindBidirectional(vm.power());
         ProgressIndicator spinner = new ProgressIndicator();
         spinner.setId("design-busy");
-        spinner.setMaxSize(24, 24);
+        spinner.setMaxSize(dev.proofrun.app.shell.Em.of(1.8), dev.proofrun.app.shell.Em.of(1.8));
         spinner.visibleProperty().bind(vm.busyProperty());
         Label refusal = new Label();
         refusal.setId("design-refusal");
@@ -56,7 +60,7 @@ public final class SizingView implements StepView {
 
         table.setId("designs");
         table.setItems(vm.rows());
-        table.setPrefHeight(300);
+        table.setPrefHeight(dev.proofrun.app.shell.Em.of(22.5));
         table.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY_FLEX_LAST_COLUMN);
         table.getColumns().addAll(List.of(
                 column("n", "Subgroup size n: consecutive parts taken at each slot", r -> Integer.toString(r.subgroupSize())),
@@ -139,31 +143,32 @@ public final class SizingView implements StepView {
     }
 
     private void drawCurves(SizingViewModel vm, DesignTable t) {
-        powerChart.getData().clear();
-        ocChart.getData().clear();
-        if (t == null) {
-            return;
+        List<XYChart.Series<Number, Number>> power = new ArrayList<>();
+        List<XYChart.Series<Number, Number>> ocLines = new ArrayList<>();
+        if (t != null) {
+            DesignRow c = t.recommended();
+            List<PowerPoint> pc = t.powerCurve();
+            if (!pc.isEmpty()) {
+                power.add(Charts.series("power, n = " + c.subgroupSize(),
+                        pc.stream().map(p -> new double[] {p.subgroups(), p.power()}).toList()));
+                double wanted = vm.request().map(r -> r.power()).orElse(0.9);
+                power.add(Charts.horizontal("wanted " + SizingViewModel.fmt(wanted), wanted,
+                        pc.get(0).subgroups(), pc.get(pc.size() - 1).subgroups()));
+                power.add(Charts.vertical("chosen k = " + c.subgroups(), c.subgroups(), 0, 1));
+            }
+            List<OcPoint> oc = t.operatingCharacteristic();
+            if (!oc.isEmpty()) {
+                ocLines.add(Charts.series(c.subgroups() + " × " + c.subgroupSize(),
+                        oc.stream().map(p -> new double[] {p.trueIndex(), p.probability()}).toList()));
+                vm.request().ifPresent(r -> {
+                    ocLines.add(Charts.vertical("required " + r.requirement().minimum(), r.requirement().minimum(), 0, 1));
+                    ocLines.add(Charts.vertical("expected " + SizingViewModel.fmt(r.expectation().index()),
+                            r.expectation().index(), 0, 1));
+                });
+            }
         }
-        DesignRow c = t.recommended();
-        List<PowerPoint> pc = t.powerCurve();
-        if (!pc.isEmpty()) {
-            powerChart.getData().add(Charts.series("power, n = " + c.subgroupSize(),
-                    pc.stream().map(p -> new double[] {p.subgroups(), p.power()}).toList()));
-            double wanted = vm.request().map(r -> r.power()).orElse(0.9);
-            powerChart.getData().add(Charts.horizontal("wanted " + SizingViewModel.fmt(wanted), wanted,
-                    pc.get(0).subgroups(), pc.get(pc.size() - 1).subgroups()));
-            powerChart.getData().add(Charts.vertical("chosen k = " + c.subgroups(), c.subgroups(), 0, 1));
-        }
-        List<OcPoint> oc = t.operatingCharacteristic();
-        if (!oc.isEmpty()) {
-            ocChart.getData().add(Charts.series(c.subgroups() + " × " + c.subgroupSize(),
-                    oc.stream().map(p -> new double[] {p.trueIndex(), p.probability()}).toList()));
-            vm.request().ifPresent(r -> {
-                ocChart.getData().add(Charts.vertical("required " + r.requirement().minimum(), r.requirement().minimum(), 0, 1));
-                ocChart.getData().add(Charts.vertical("expected " + SizingViewModel.fmt(r.expectation().index()),
-                        r.expectation().index(), 0, 1));
-            });
-        }
+        Charts.show(powerChart, power);
+        Charts.show(ocChart, ocLines);
     }
 
     private static TableColumn<DesignRow, String> column(String title, String tip, Function<DesignRow, String> text) {
@@ -173,6 +178,9 @@ public final class SizingView implements StepView {
         header.setWrapText(true);
         c.setGraphic(header);
         c.setSortable(false);
+        // a width of its own: the default width makes the skin measure every cell on the first showing
+        // (hundreds of ms on a loaded machine); the constrained policy spreads the columns anyway
+        c.setPrefWidth(dev.proofrun.app.shell.Em.of(7));
         c.setCellValueFactory(cd -> new ReadOnlyStringWrapper(text.apply(cd.getValue())));
         return c;
     }

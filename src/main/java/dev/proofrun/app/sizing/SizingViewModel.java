@@ -258,10 +258,8 @@ public final class SizingViewModel extends StepViewModel {
         Optional<Integer> kept = keptSubgroups();
         if (kept.isPresent() && kept.get() != c.subgroups()) {
             DesignTable own = chosenTable.get();
-            OptionalDouble p = own == null ? OptionalDouble.empty() : own.powerCurve().stream()
-                    .filter(pp -> pp.subgroups() == kept.get()).mapToDouble(pp -> pp.power()).findFirst();
             return AppMessage.SIZING_KEPT.format(kept.get(), c.subgroupSize(), kept.get() * c.subgroupSize(),
-                    p.isPresent() ? fmt(p.getAsDouble()) : "not on the power curve", c.subgroups(), fmt(c.power()));
+                    keptPower(own, kept.get()), c.subgroups(), fmt(c.power()));
         }
         if (c.subgroupSize() == r.subgroupSize()) {
             return AppMessage.SIZING_RECOMMENDED_CHOSEN.format(c.subgroups(), c.subgroupSize(), c.readings(), c.power());
@@ -270,6 +268,26 @@ public final class SizingViewModel extends StepViewModel {
         return AppMessage.SIZING_OTHER_CHOSEN.format(c.subgroups(), c.subgroupSize(), c.readings(),
                 extra >= 0 ? "+" + extra : Integer.toString(extra), r.readings(), c.power(), r.power(),
                 fmtOrDash(c.falseAlarm().beyondLimits()), fmtOrDash(r.falseAlarm().beyondLimits()));
+    }
+
+    /**
+     * The power of k subgroups read off the core's power curve: its value when the curve has a point at k,
+     * else the values of the neighbouring points (power grows with k), else "not computed".
+     */
+    static String keptPower(DesignTable own, int k) {
+        if (own == null || own.powerCurve().isEmpty()) {
+            return AppMessage.SIZING_POWER_UNKNOWN.format();
+        }
+        OptionalDouble at = own.powerCurve().stream().filter(p -> p.subgroups() == k).mapToDouble(p -> p.power()).findFirst();
+        if (at.isPresent()) {
+            return AppMessage.SIZING_POWER_AT.format(fmt(at.getAsDouble()));
+        }
+        OptionalDouble below = own.powerCurve().stream().filter(p -> p.subgroups() < k).mapToDouble(p -> p.power()).max();
+        OptionalDouble above = own.powerCurve().stream().filter(p -> p.subgroups() > k).mapToDouble(p -> p.power()).min();
+        if (below.isPresent() && above.isPresent()) {
+            return AppMessage.SIZING_POWER_BETWEEN.format(fmt(below.getAsDouble()), fmt(above.getAsDouble()));
+        }
+        return AppMessage.SIZING_POWER_UNKNOWN.format();
     }
 
     /** "0.903", or "—" when the core has no value (NaN). */

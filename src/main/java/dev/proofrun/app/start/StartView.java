@@ -23,7 +23,7 @@ public final class StartView implements StepView {
         title.getStyleClass().add("pr-card-title");
         recent.setId("recent");
         recent.setItems(vm.recent());
-        recent.setPrefHeight(220);
+        recent.setPrefHeight(dev.proofrun.app.shell.Em.of(16.5));
         recent.setPlaceholder(new Label("No plans opened yet. Plans are kept in " + vm.plansFolder()));
         recent.setCellFactory(l -> new ListCell<>() {
             @Override
@@ -32,7 +32,7 @@ public final class StartView implements StepView {
                 setText(empty || p == null ? null : p.getFileName() + "    " + p.getParent());
             }
         });
-        Button fresh = new Button("Start a _new plan");
+        Button fresh = new Button("_Start a new plan");
         fresh.setId("new-plan");
         fresh.setMnemonicParsing(true);
         fresh.setOnAction(e -> vm.newPlan());

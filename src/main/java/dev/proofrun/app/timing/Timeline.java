@@ -99,11 +99,10 @@ final class Timeline extends Pane {
             g.setTextAlign(TextAlignment.LEFT);
             g.setFill(INK);
             g.fillText(d.format(day), 0.3 * em, y + row / 2);
-            if (!calendar.isWorkingDate(d)) {
+            boolean working = calendar.isWorkingDate(d);
+            if (!working) {
                 g.setFill(Color.web("#eeeeea"));
                 g.fillRect(left, y + 0.2 * em, right - left, row - 0.4 * em);
-                g.setFill(Color.web("#7a8590"));
-                g.fillText("no shifts", left + em, y + row / 2);
             }
             for (int s = 0; s < calendar.shifts().size(); s++) {
                 Shift shift = calendar.shifts().get(s);
@@ -117,7 +116,7 @@ final class Timeline extends Pane {
                 }
             }
             for (BreakWindow b : calendar.breaks()) {
-                if (!b.crossesMidnight()) {
+                if (!b.crossesMidnight() && (working || calendar.isWorkingDate(d.minusDays(1)))) {
                     double x0 = x(b.start(), left, right);
                     double x1 = x(b.end(), left, right);
                     g.setFill(Color.web("#ffffffcc"));
@@ -126,6 +125,12 @@ final class Timeline extends Pane {
             }
         }
         g.setTextAlign(TextAlignment.CENTER);
+        g.setFill(Color.web("#5a6673"));
+        for (int r = 0; r < rows; r++) {
+            if (!calendar.isWorkingDate(first.plusDays(r))) {
+                g.fillText("no shifts on this date", x(LocalTime.NOON, left, right), top + r * row + row / 2);
+            }
+        }
         for (Slot s : slots) {
             LocalDateTime t = local(s);
             int r = (int) java.time.temporal.ChronoUnit.DAYS.between(first, t.toLocalDate());
@@ -140,7 +145,7 @@ final class Timeline extends Pane {
             g.setFill(SLOT);
             g.fillRect(x - 1.5, y + 0.9 * em, 3, row - 1.1 * em);
             g.setFill(INK);
-            g.fillText(s.id(), x, y + 0.5 * em);
+            g.fillText(s.id(), Math.min(Math.max(x, left + em), w - 1.2 * em), y + 0.5 * em);
         }
         if (rows == MAX_ROWS) {
             g.setTextAlign(TextAlignment.LEFT);

@@ -52,7 +52,7 @@ public final class TimingView implements StepView {
                 + "random: one subgroup at a random time inside each interval (avoids lining up with a periodic cause)"));
         TextField seed = text(vm, DraftField.SEED);
         seed.setPrefColumnCount(10);
-        Button another = new Button("Another seed");
+        Button another = new Button("Another s_eed");
         another.setId("next-seed");
         another.setOnAction(e -> vm.nextSeed());
         another.disableProperty().bind(vm.field(DraftField.SPACING).isNotEqualTo("random"));
@@ -113,7 +113,7 @@ public final class TimingView implements StepView {
         Label l = new Label();
         l.getStyleClass().add("pr-problem");
         l.setWrapText(true);
-        l.setMaxWidth(420);
+        l.setMaxWidth(dev.proofrun.app.shell.Em.of(32));
         l.textProperty().bind(vm.problem(f));
         return l;
     }
