@@ -7,6 +7,7 @@ import java.io.InputStreamReader;
 import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.util.Arrays;
+import java.util.concurrent.atomic.AtomicReferenceArray;
 
 /**
  * The simulated first-signal distributions behind {@link RuleRisks}, read once from the generated resource
@@ -36,14 +37,17 @@ final class RuleRiskTable {
     private final int stableDraws;
     private final int shiftedDraws;
     private final int[] stable;
-    private final int[][] shifted; // [j * RUN_IN + (R − 1)]
+    /** The counts of each shifted row, [j·RUN_IN + (R − 1)], parsed from {@code rows} on first use. */
+    private final AtomicReferenceArray<int[]> shifted;
+    private final String[] rows;
 
-    private RuleRiskTable(int[] grid, int stableDraws, int shiftedDraws, int[] stable, int[][] shifted) {
+    private RuleRiskTable(int[] grid, int stableDraws, int shiftedDraws, int[] stable, String[] rows) {
         this.grid = grid;
         this.stableDraws = stableDraws;
         this.shiftedDraws = shiftedDraws;
         this.stable = stable;
-        this.shifted = shifted;
+        this.rows = rows;
+        this.shifted = new AtomicReferenceArray<>(rows.length);
     }
 
     private static final class Holder {
@@ -79,9 +83,19 @@ final class RuleRiskTable {
         double x = Math.min(s, SHIFT_STEPS * SHIFT_STEP) / SHIFT_STEP;
         int j = Math.min((int) Math.floor(x), SHIFT_STEPS - 1);
         double w = x - j;
-        double lo = share(shifted[j * RUN_IN + runIn - 1], shiftedDraws, m);
-        double hi = share(shifted[(j + 1) * RUN_IN + runIn - 1], shiftedDraws, m);
+        double lo = share(shiftedRow(j * RUN_IN + runIn - 1), shiftedDraws, m);
+        double hi = share(shiftedRow((j + 1) * RUN_IN + runIn - 1), shiftedDraws, m);
         return (1 - w) * lo + w * hi;
+    }
+
+    /** Parsing every row costs more than a cold {@code proofrun size} uses, so rows are parsed as needed. */
+    private int[] shiftedRow(int index) {
+        int[] row = shifted.get(index);
+        if (row == null) {
+            row = counts(rows[index]);
+            shifted.compareAndSet(index, null, row);
+        }
+        return row;
     }
 
     private double share(int[] counts, int draws, int m) {
@@ -115,41 +129,67 @@ final class RuleRiskTable {
             int stableDraws = 0;
             int shiftedDraws = 0;
             int[] stable = null;
-            int[][] shifted = new int[(SHIFT_STEPS + 1) * RUN_IN][];
+            String[] rows = new String[(SHIFT_STEPS + 1) * RUN_IN];
             for (String line = r.readLine(); line != null; line = r.readLine()) {
                 if (line.isEmpty() || line.startsWith("#")) {
                     continue;
                 }
-                String[] f = line.split(" ");
-                switch (f[0]) {
-                    case "draws" -> {
-                        stableDraws = Integer.parseInt(f[1]);
-                        shiftedDraws = Integer.parseInt(f[2]);
+                if (line.startsWith("shifted ")) {
+                    int[] key = counts(line.substring(0, nthSpace(line, 3)));
+                    rows[key[0] * RUN_IN + key[1] - 1] = line.substring(nthSpace(line, 3));
+                } else if (line.startsWith("stable ")) {
+                    stable = counts(line);
+                } else if (line.startsWith("draws ")) {
+                    int[] d = counts(line);
+                    stableDraws = d[0];
+                    shiftedDraws = d[1];
+                } else if (line.startsWith("points ")) {
+                    if (!Arrays.equals(counts(line), grid)) {
+                        throw new IllegalStateException(RESOURCE + ": the point grid differs from pointGrid()");
                     }
-                    case "points" -> {
-                        if (!Arrays.equals(ints(f, 1), grid)) {
-                            throw new IllegalStateException(RESOURCE + ": the point grid differs from pointGrid()");
-                        }
-                    }
-                    case "stable" -> stable = ints(f, 1);
-                    case "shifted" -> shifted[Integer.parseInt(f[1]) * RUN_IN + Integer.parseInt(f[2]) - 1] = ints(f, 3);
-                    default -> throw new IllegalStateException(RESOURCE + ": unexpected line " + f[0]);
+                } else {
+                    throw new IllegalStateException(RESOURCE + ": unexpected line " + line);
                 }
             }
-            if (stable == null || Arrays.asList(shifted).contains(null) || stableDraws <= 0 || shiftedDraws <= 0) {
+            if (stable == null || Arrays.asList(rows).contains(null) || stableDraws <= 0 || shiftedDraws <= 0) {
                 throw new IllegalStateException(RESOURCE + ": incomplete");
             }
-            return new RuleRiskTable(grid, stableDraws, shiftedDraws, stable, shifted);
+            return new RuleRiskTable(grid, stableDraws, shiftedDraws, stable, rows);
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }
     }
 
-    private static int[] ints(String[] f, int from) {
-        int[] v = new int[f.length - from];
-        for (int i = 0; i < v.length; i++) {
-            v[i] = Integer.parseInt(f[from + i]);
+    /** The index of the n-th space in the line (n ≥ 1). */
+    private static int nthSpace(String line, int n) {
+        int at = -1;
+        for (int i = 0; i < n; i++) {
+            at = line.indexOf(' ', at + 1);
         }
-        return v;
+        return at;
+    }
+
+    /** The non-negative integers in a line, in order (words without digits, such as the label, are skipped). */
+    static int[] counts(String line) {
+        int[] out = new int[16];
+        int size = 0;
+        int value = -1;
+        for (int i = 0, len = line.length(); i <= len; i++) {
+            char ch = i < len ? line.charAt(i) : ' ';
+            if (ch >= '0' && ch <= '9') {
+                value = (value < 0 ? 0 : value * 10) + (ch - '0');
+            } else if (ch == ' ') {
+                if (value >= 0) {
+                    if (size == out.length) {
+                        out = Arrays.copyOf(out, 2 * size);
+                    }
+                    out[size++] = value;
+                }
+                value = -1;
+            } else if (value >= 0) {
+                throw new IllegalStateException(RESOURCE + ": not a count in " + line);
+            }
+        }
+        return Arrays.copyOf(out, size);
     }
 }
