@@ -20,9 +20,13 @@ import java.util.concurrent.atomic.AtomicReferenceArray;
  *
  * <p>Between grid points m the survival u(m) = 1 − share is interpolated log-linearly (exact for a
  * geometric tail, which the first signal has once the rules' 15-point memory is filled; linearly where a
- * count has reached every draw). Between shifts the share is interpolated linearly; the error bound h²/8·|∂²/∂s²|
- * with h = 0.1 is about 0.001 for the curves in the table (measured in RuleRisksTest at mid-grid shifts).
- * Beyond s = 6 the value at s = 6 is used: a lower bound, short by less than Φ(−3) ≈ 0.0013.
+ * count has reached every draw). Between shifts the share is interpolated by a cubic through the four
+ * nearest columns. Measured on the table itself: predicting every odd column from the even ones (step 0.2)
+ * this way misses by at most 0.009 over all R and m, which is the size of the simulation noise of such a
+ * comparison (the stored shares have standard errors up to 0.0022); straight lines missed by up to 0.017
+ * (G bends most in s for small s and long runs), so at the stored step 0.1 the cubic's own error is well
+ * below the noise. Beyond s = 6 the value at s = 6 is used: a lower bound, short by less than
+ * Φ(−3) ≈ 0.0013.
  */
 final class RuleRiskTable {
 
@@ -78,14 +82,25 @@ final class RuleRiskTable {
         return share(stable, stableDraws, m);
     }
 
-    /** P(first signal within m points shifted by s, after R quiet stable points), 1 ≤ R ≤ 15. */
+    /**
+     * P(first signal within m points shifted by s, after R quiet stable points), 1 ≤ R ≤ 15: cubic
+     * (four-point Lagrange) interpolation between the shift columns, the four nearest (one-sided at the ends).
+     */
     double shiftedShare(double s, int runIn, int m) {
         double x = Math.min(s, SHIFT_STEPS * SHIFT_STEP) / SHIFT_STEP;
-        int j = Math.min((int) Math.floor(x), SHIFT_STEPS - 1);
-        double w = x - j;
-        double lo = share(shiftedRow(j * RUN_IN + runIn - 1), shiftedDraws, m);
-        double hi = share(shiftedRow((j + 1) * RUN_IN + runIn - 1), shiftedDraws, m);
-        return (1 - w) * lo + w * hi;
+        int j0 = Math.max(0, Math.min((int) Math.floor(x) - 1, SHIFT_STEPS - 3));
+        double t = x - j0;
+        double sum = 0;
+        for (int a = 0; a < 4; a++) {
+            double weight = 1;
+            for (int b = 0; b < 4; b++) {
+                if (b != a) {
+                    weight *= (t - b) / (a - b);
+                }
+            }
+            sum += weight * share(shiftedRow((j0 + a) * RUN_IN + runIn - 1), shiftedDraws, m);
+        }
+        return Math.max(0, Math.min(1, sum));
     }
 
     /** Parsing every row costs more than a cold {@code proofrun size} uses, so rows are parsed as needed. */
