@@ -61,6 +61,9 @@ class RuleRisksTest {
      * The decomposition 1 − (1 − F₀(q))(1 − G_{s,R}(m)) against whole studies of k points drawn directly
      * (4,000 each). The model allowance 0.01: conditioning on R ≤ 15 quiet points instead of the whole quiet
      * half leaves out only how the run rules' state before those points shapes the state at the change.
+     * Measured once with 40,000 direct draws per cell (k, s = 25, 1.0 / 25, 0.5 / 10, 1.0 / 40, 0.3 /
+     * 26, 2.0 / 6, 1.5 / 50, 0.5 / 30, 0.2): model − direct between −0.0030 and +0.0055, standard errors
+     * of the direct share 0.0019–0.0025.
      */
     @ParameterizedTest(name = "k = {0}, s = {1}")
     @CsvSource({"25, 1.0", "25, 0.5", "10, 1.0", "40, 0.3", "26, 2.0", "6, 1.5"})
