@@ -118,6 +118,7 @@ final class SharedSize {
                     characteristics.get(d.driver()).id(), d.limitedBy().token(), lowest, d.falseAlarm().beyondLimits(),
                     d.falseAlarm().allRules(), d.detection().beyondLimits(), d.detection().allRules());
         }
+        out.println(SizeMessage.SHARED_CHART_RISKS.format(characteristics.size()));
         out.println();
         out.println("Recommended: " + reason);
         out.println();

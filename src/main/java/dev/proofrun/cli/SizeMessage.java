@@ -11,6 +11,8 @@ public enum SizeMessage implements MessageKey {
     SHARED_HEADING("One design for %d characteristics measured on the same parts (%s):"),
     SHARED_REASON("%d subgroups of %d (%d readings of each characteristic) is the fewest readings that %s of every"
             + " size tried; %s needs the most subgroups."),
+    SHARED_CHART_RISKS("False alarm and detection are for one characteristic's mean chart; with %d charts the chance"
+            + " that at least one signals is higher."),
     SHARED_LEFT_OUT("subgroups of %d cannot give every characteristic a power of %.3f within %d readings; left out"
             + " of the table");
 

@@ -87,6 +87,7 @@ class SizeCharacteristicsCommandTest {
         assertTrue(r.out().contains("One design for 3 characteristics"), r.out());
         assertTrue(r.out().lines().anyMatch(l -> l.contains("seat-h") && l.endsWith("drives k")), r.out());
         assertTrue(r.out().contains("bore-a") && r.out().contains("flow"), r.out());
+        assertTrue(r.out().contains("with 3 charts the chance that at least one signals is higher"), r.out());
         assertTrue(r.out().contains("does not replace the customer's requirements"), r.out());
     }
 
