@@ -66,3 +66,18 @@ if __name__ == "__main__":
         print("Ppu", c0, c1, conf, p, "N =", ppu_size(c0, c1, conf, p))
     for c0, c1, cp1, N in [(1.33, 1.67, 1.67, 100), (1.33, 1.67, 2.0, 100), (1.0, 1.33, 1.33, 60)]:
         print("Ppk power", c0, c1, cp1, N, "%.6f" % ppk_power(c0, c1, cp1, 0.95, N))
+
+# 4. Kane (1986, JQT 18:41-52), the test on Cp: reject Cp <= Cp(low) when Cp^ > C, with
+#    C = Cp(low) * sqrt(nu / chi2.ppf(alpha, nu)), nu = n - 1, and power P(chi2_nu < chi2.ppf(alpha, nu) * r**2)
+#    at Cp(high) = r * Cp(low). Evaluated here from that formula (the same as pp_size); this is NOT his printed
+#    table, which was not available to check against.
+def kane_row(r, alpha, beta):
+    n = pp_size(1.0, r, 1 - alpha, 1 - beta)
+    nu = n - 1
+    return n, np.sqrt(nu / stats.chi2.ppf(alpha, nu))
+
+if __name__ == "__main__":
+    for a in (0.05, 0.10):
+        for r in (1.10, 1.15, 1.20, 1.25, 1.30, 1.35, 1.40, 1.45, 1.50):
+            n, c = kane_row(r, a, a)
+            print("Kane formula alpha = beta = %.2f, ratio %.2f: n = %d, C/Cp(low) = %.6f" % (a, r, n, c))

@@ -17,8 +17,8 @@ import org.openjdk.jmh.annotations.Warmup;
 
 /**
  * A whole design table (n = 1–10, exact bound, default floors, with OC and power curves) as the wizard
- * recomputes it while the user types. Goal: ≤ 20 ms warm. The run-rule simulation is cached per shift
- * (it is computed once per δ), so it is warmed up here like in the wizard.
+ * recomputes it while the user types. Goal: ≤ 20 ms warm. The run-rule risks are read from the stored
+ * table ({@code RuleRiskTable}, loaded once per JVM), so the set-up call loads it as the wizard's first table does.
  * Run: mvn -B -Pbench test-compile exec:exec -Dbench=DesignTable
  */
 @State(Scope.Benchmark)

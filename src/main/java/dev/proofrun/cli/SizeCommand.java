@@ -48,8 +48,8 @@ public final class SizeCommand implements Callable<Integer> {
             description = "The required index (default ${DEFAULT-VALUE}).")
     String index;
 
-    @Option(names = "--target", required = true, paramLabel = "C0", description = "The required minimum c0.")
-    double target;
+    @Option(names = "--target", paramLabel = "C0", description = "The required minimum c0 (one characteristic).")
+    Double target;
 
     @Option(names = "--confidence", defaultValue = "0.95", description = "Confidence of the lower bound (default ${DEFAULT-VALUE}).")
     double confidence;
@@ -110,13 +110,36 @@ public final class SizeCommand implements Callable<Integer> {
             description = "Consecutive readings per subgroup in a one-column pilot file.")
     Integer pilotSubgroupSize;
 
+    @Option(names = "--characteristics", paramLabel = "FILE.csv",
+            description = "Several characteristics measured on the same parts, in the columns 'plan new --characteristics'"
+                    + " reads: one shared design (--index and --confidence are the defaults for empty cells).")
+    java.nio.file.Path characteristics;
+
     @Option(names = "--json", description = "Print one JSON object.")
     boolean json;
 
     @Override
     public Integer call() throws Exception {
-        DesignTable table = StudyDesigner.design(request());
         PrintWriter out = spec.commandLine().getOut();
+        if (characteristics != null) {
+            if (!(confidence > 0.5 && confidence < 0.9999)) {
+                throw new UserException(DesignMessage.CONFIDENCE_OUT_OF_RANGE, confidence);
+            }
+            SharedSize shared = SharedSize.design(characteristics, this::sharedRequest, IndexKind.fromToken(index),
+                    confidence, refusedBesideFile());
+            if (json) {
+                ObjectMapper mapper = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
+                out.println(mapper.writeValueAsString(shared.json()));
+            } else {
+                shared.print(out);
+            }
+            out.flush();
+            return 0;
+        }
+        if (target == null) {
+            throw new UserException(SizeMessage.TARGET_NEEDED);
+        }
+        DesignTable table = StudyDesigner.design(request());
         if (json) {
             ObjectMapper mapper = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
             out.println(mapper.writeValueAsString(SizeJson.of(table)));
@@ -125,6 +148,30 @@ public final class SizeCommand implements Callable<Integer> {
         }
         out.flush();
         return 0;
+    }
+
+    /** The options that describe one characteristic, which --characteristics takes from its file instead. */
+    private List<String> refusedBesideFile() {
+        List<String> given = new ArrayList<>();
+        Object[][] options = {{"--target", target}, {"--expected", expected}, {"--expected-cp", expectedCp},
+            {"--lsl", lsl}, {"--usl", usl}, {"--mean", mean}, {"--sd", sd}, {"--gauge-sd", gaugeSd},
+            {"--resolution", resolution}, {"--pilot", pilot}, {"--spec", sides}};
+        for (Object[] o : options) {
+            if (o[1] != null) {
+                given.add((String) o[0]);
+            }
+        }
+        return given;
+    }
+
+    /** The design options of this command applied to one characteristic from the file. */
+    private DesignRequest sharedRequest(SpecLimits.Sides specSides, Requirement requirement, Expectation expectation) {
+        List<Integer> sizes = subgroupSizes == null || subgroupSizes.isEmpty()
+                ? IntStream.rangeClosed(1, 10).boxed().toList() : subgroupSizes;
+        Floors floors = wrap(() -> new Floors(minSubgroups, minReadings));
+        return new DesignRequest(specSides, requirement, expectation, power, sizes,
+                Optional.ofNullable(sigma).map(SigmaMethod::fromToken), BoundMethod.fromToken(bound), floors, shift,
+                List.of());
     }
 
     DesignRequest request() {

@@ -56,14 +56,14 @@ final class SizeJson {
         return m;
     }
 
-    private static Map<String, Object> risk(ChartRisk risk) {
+    static Map<String, Object> risk(ChartRisk risk) {
         Map<String, Object> m = new LinkedHashMap<>();
         m.put("beyondLimits", round(risk.beyondLimits(), 4));
         m.put("allRules", Double.isNaN(risk.allRules()) ? null : round(risk.allRules(), 3));
         return m;
     }
 
-    private static Double round(double v, int digits) {
+    static Double round(double v, int digits) {
         if (!Double.isFinite(v)) {
             return null;
         }

@@ -5,7 +5,8 @@ package dev.proofrun.design;
  * with the 3σ limits alone and with all eight run rules of {@code control.RunRule}.
  *
  * @param beyondLimits the probability with the rule "a point beyond the 3σ limits" alone (closed form)
- * @param allRules     the probability with all eight run rules (seeded simulation, about ±0.01)
+ * @param allRules     the probability with all eight run rules (a stored seeded simulation, see
+ *                     {@link RuleRisks}; standard error about 0.003 at most)
  */
 public record ChartRisk(double beyondLimits, double allRules) {
 }

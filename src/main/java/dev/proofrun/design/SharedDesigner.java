@@ -60,10 +60,13 @@ public final class SharedDesigner {
             }
             int k = rows.get(driver).subgroups();
             List<Double> powers = new ArrayList<>();
-            for (SizeSearch s : searches) {
-                powers.add(s.power(k));
+            List<Integer> own = new ArrayList<>();
+            for (int i = 0; i < searches.size(); i++) {
+                powers.add(searches.get(i).power(k));
+                own.add(rows.get(i).subgroups());
             }
-            out.add(new SharedDesign(n, k, n * k, powers, driver, rows.get(driver).limitedBy()));
+            DesignRow d = rows.get(driver);
+            out.add(new SharedDesign(n, k, n * k, powers, own, driver, d.limitedBy(), d.falseAlarm(), d.detection()));
         }
         if (out.isEmpty()) {
             throw new UserException(DesignMessage.UNREACHABLE, requests.get(0).power(), StudyDesigner.MAX_READINGS,

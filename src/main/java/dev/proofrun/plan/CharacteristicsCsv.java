@@ -28,7 +28,8 @@ import org.apache.commons.csv.CSVRecord;
  * Many characteristics at once from a CSV file with a header row. Columns (names case-insensitive, any
  * order): {@code id, name, unit, nominal, lsl, usl, target, expected}, and optionally {@code index},
  * {@code confidence}, {@code expected_cp}. Empty cells mean "none" for nominal/lsl/usl/expected_cp and
- * "the command's default" for index and confidence. Numbers use a decimal point.
+ * "the command's default" for index and confidence. Numbers use a decimal point; a row with more cells than
+ * the header (a decimal comma splits a number) is refused.
  */
 public final class CharacteristicsCsv {
 
@@ -59,6 +60,12 @@ public final class CharacteristicsCsv {
             Set<String> ids = new HashSet<>();
             for (CSVRecord r : parser) {
                 long row = r.getRecordNumber() + 1;
+                for (int i = parser.getHeaderNames().size(); i < r.size(); i++) {
+                    if (!r.get(i).isBlank()) {
+                        throw new UserException(Location.cell(name, row, null), PlanMessage.CSV_EXTRA_CELLS, r.size(),
+                                parser.getHeaderNames().size());
+                    }
+                }
                 Cells c = new Cells(name, row, r, header);
                 String id = c.text("id", true);
                 if (!ids.add(id)) {

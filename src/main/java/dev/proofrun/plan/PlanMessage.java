@@ -22,6 +22,7 @@ public enum PlanMessage implements MessageKey {
     NOT_A_PLAN_FILE_TO_REPLACE("%s exists and is not a proofrun plan; it is left untouched"),
     CSV_MISSING_COLUMN("the column '%s' is missing; the header needs %s"),
     CSV_BAD_CELL("%s"),
+    CSV_EXTRA_CELLS("%d cells but the header has %d (a decimal comma? use a decimal point)"),
     CSV_NO_ROWS("no characteristics in the file (only a header?)"),
     NO_COMMON_DESIGN("no subgroup size among %s lets every characteristic reach the wanted power; plan them separately"
             + " or lower the power");

@@ -206,7 +206,7 @@ public final class ChartConstants {
                 double x = lo + PANEL * (NODES[i] + 1) / 2;
                 double q = upperTail(x);
                 double belowAll = -FastMath.expm1(n * FastMath.log1p(-q)); // 1 − Φ(x)ⁿ
-                sum += WEIGHTS[i] * (belowAll - FastMath.pow(q, n));
+                sum += WEIGHTS[i] * (belowAll - Math.pow(q, n));
             }
         }
         return 2 * sum * PANEL / 2;
@@ -237,7 +237,7 @@ public final class ChartConstants {
             for (int i = 0; i < 8; i++) {
                 int it = 8 * j + i;
                 double t = x[it];
-                double maxBelowT = t > 0 ? -FastMath.expm1(n * FastMath.log1p(-q[it])) : 1 - FastMath.pow(p[it], n);
+                double maxBelowT = t > 0 ? -FastMath.expm1(n * FastMath.log1p(-q[it])) : 1 - Math.pow(p[it], n);
                 double inner = 0;
                 for (int is = 0; is < 8 * j; is++) {
                     inner += WEIGHTS[is % 8] * joint(n, x[is], q[is], p[is], t, q[it], p[it], maxBelowT);
@@ -266,7 +266,7 @@ public final class ChartConstants {
         } else {
             between = 1 - qt - ps;
         }
-        return maxBelowT - FastMath.pow(qs, n) + FastMath.pow(Math.max(between, 0), n);
+        return maxBelowT - Math.pow(qs, n) + Math.pow(Math.max(between, 0), n);
     }
 
     /** Q(x) = 1 − Φ(x) = erfc(x/√2)/2. */

@@ -14,9 +14,11 @@ import org.junit.jupiter.params.provider.CsvSource;
  * uses scipy.stats.chi2 / scipy.stats.nct directly and plain adaptive quadrature (scipy.integrate.quad,
  * scipy.optimize.brentq) for the exact two-sided bound, none of proofrun's code.
  *
- * <p>Kane (1986, JQT 18:41–52) tabulates sample sizes for the same chi-square test on Cp; no value of his
- * table is recalled reliably enough to be a check here, so the SciPy computation of the same test stands
- * in for it (the overall index Pp keeps ν = N − 1 exact, as in Kane's test).
+ * <p>Kane (1986, JQT 18:41–52) tabulates sample sizes for the same chi-square test on Cp. His printed
+ * table was not available to check against and no value of it is recalled reliably enough, so
+ * {@link #kaneFormulaGrid} checks his published formula instead, evaluated by SciPy on a grid like his
+ * (α = β, ratios Cp(high)/Cp(low)): the values below are SciPy's, not copied from his table (the overall
+ * index Pp keeps ν = N − 1 exact, as in Kane's test with the sample standard deviation).
  */
 class DesignReferenceTest {
 
@@ -66,5 +68,27 @@ class DesignReferenceTest {
         DesignRequest r = DesignRequest.of(SpecLimits.Sides.TWO_SIDED, Requirement.of(IndexKind.PPK, c0, 0.95),
                 Expectation.offCentre(c1, cp1)).withFloors(Floors.none()).withSubgroupSizes(List.of(1));
         assertEquals(expected, new SizeSearch(r, 1).power(n), POWER_TOLERANCE);
+    }
+
+    /**
+     * Kane's test on Cp (reject Cp ≤ Cp(low) when Ĉp &gt; C, C = Cp(low)·sqrt(ν/χ²_{α,ν}), ν = n − 1; power
+     * χ²-cdf(χ²_{α,ν}·r², ν) at Cp(high) = r·Cp(low)) is the design's Pp test with n = 1 and no floors: the
+     * smallest n with power ≥ 1 − β, and the critical estimate ĉ* = C. Cp(low) = 1.
+     */
+    @ParameterizedTest(name = "alpha = beta = {0}, ratio {1}: n = {2}, C = {3}")
+    @CsvSource({
+        // reference_sizes.py, kane_row(r, alpha, alpha) (SciPy 1.17.1 scipy.stats.chi2.ppf / chi2.cdf)
+        "0.05, 1.10, 598, 1.050169", "0.05, 1.15, 279, 1.075397", "0.05, 1.20, 165, 1.100598",
+        "0.05, 1.25, 111, 1.125790", "0.05, 1.30, 81, 1.150952", "0.05, 1.35, 62, 1.176933",
+        "0.05, 1.40, 50, 1.201722", "0.05, 1.45, 42, 1.224919", "0.05, 1.50, 35, 1.252758",
+        "0.10, 1.10, 364, 1.050520", "0.10, 1.15, 170, 1.076225", "0.10, 1.20, 101, 1.101912",
+        "0.10, 1.25, 68, 1.127981", "0.10, 1.30, 50, 1.153630", "0.10, 1.35, 39, 1.178879",
+        "0.10, 1.40, 31, 1.206799", "0.10, 1.45, 26, 1.231908", "0.10, 1.50, 22, 1.259425"})
+    void kaneFormulaGrid(double alpha, double ratio, int n, double critical) {
+        DesignRow row = StudyDesigner.design(request(SpecLimits.Sides.TWO_SIDED, IndexKind.PP, 1.0, ratio,
+                1 - alpha, 1 - alpha)).rows().get(0);
+        assertEquals(n, row.readings());
+        // the script prints six decimals
+        assertEquals(critical, row.criticalEstimate(), 5e-7);
     }
 }

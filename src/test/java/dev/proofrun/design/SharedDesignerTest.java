@@ -26,6 +26,12 @@ class SharedDesignerTest {
             assertEquals(own, d.subgroups());
             assertTrue(d.powers().get(0) > d.powers().get(1), d.toString());
             assertTrue(d.powers().get(1) >= 0.9, d.toString());
+            int easyAlone = StudyDesigner.design(easy.withSubgroupSizes(List.of(d.subgroupSize()))).rows().get(0)
+                    .subgroups();
+            assertEquals(List.of(easyAlone, own), d.ownSubgroups());
+            DesignRow driverRow = StudyDesigner.design(hard.withSubgroupSizes(List.of(d.subgroupSize()))).rows().get(0);
+            assertEquals(driverRow.falseAlarm(), d.falseAlarm());
+            assertEquals(driverRow.detection(), d.detection());
         }
         assertTrue(designs.get(0).readings() <= designs.get(1).readings());
     }

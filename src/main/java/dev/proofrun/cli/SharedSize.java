@@ -1,0 +1,197 @@
+package dev.proofrun.cli;
+
+import dev.proofrun.design.DesignMessage;
+import dev.proofrun.design.DesignRequest;
+import dev.proofrun.design.Expectation;
+import dev.proofrun.design.Requirement;
+import dev.proofrun.design.SharedDesign;
+import dev.proofrun.design.SharedDesigner;
+import dev.proofrun.design.StudyDesigner;
+import dev.proofrun.plan.Characteristic;
+import dev.proofrun.plan.CharacteristicsCsv;
+import dev.proofrun.stats.IndexKind;
+import dev.proofrun.stats.SpecLimits;
+import dev.proofrun.text.Location;
+import dev.proofrun.text.UserException;
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Set;
+
+/**
+ * {@code proofrun size --characteristics FILE.csv}: several characteristics measured on the same parts get
+ * one design from {@link SharedDesigner} — one n, k the largest any of them needs, the power of each at that
+ * design, and the one that drives k named. The file is read by {@link CharacteristicsCsv}, as
+ * {@code plan new --characteristics} reads it.
+ */
+final class SharedSize {
+
+    /** The command's design options (power, sizes, estimator, bound, floors, shift) applied to one characteristic. */
+    interface RequestFactory {
+        DesignRequest make(SpecLimits.Sides sides, Requirement requirement, Expectation expectation);
+    }
+
+    private static final Set<DesignMessage> ABOUT_THE_CHARACTERISTIC = Set.of(DesignMessage.NOT_BETTER_THAN_REQUIRED,
+            DesignMessage.INDEX_NEEDS_BOTH_LIMITS, DesignMessage.INDEX_NEEDS_LIMIT);
+
+    private final String file;
+    private final List<Characteristic> characteristics;
+    private final List<SharedDesign> designs;
+    private final String reason;
+    private final List<String> warnings;
+
+    private SharedSize(String file, List<Characteristic> characteristics, List<SharedDesign> designs, String reason,
+            List<String> warnings) {
+        this.file = file;
+        this.characteristics = characteristics;
+        this.designs = designs;
+        this.reason = reason;
+        this.warnings = warnings;
+    }
+
+    /**
+     * @param refusedOptions single-characteristic options given beside the file (refused when any)
+     * @throws UserException for a refused option, a bad file (file, row, column), a characteristic that
+     *                       cannot be planned (file and id), or no subgroup size that suits them all
+     */
+    static SharedSize design(Path path, RequestFactory factory, IndexKind defaultIndex, double defaultConfidence,
+            List<String> refusedOptions) {
+        if (!refusedOptions.isEmpty()) {
+            throw new UserException(SizeMessage.FILE_REPLACES_OPTIONS, String.join(", ", refusedOptions));
+        }
+        String file = path.toString();
+        List<Characteristic> chars = CharacteristicsCsv.read(path, defaultIndex, defaultConfidence);
+        List<DesignRequest> requests = new ArrayList<>();
+        for (Characteristic c : chars) {
+            requests.add(request(file, c, factory));
+        }
+        List<SharedDesign> designs = SharedDesigner.design(requests);
+        DesignRequest first = requests.get(0);
+        List<String> warnings = new ArrayList<>();
+        for (int n : first.subgroupSizes()) {
+            if (designs.stream().noneMatch(d -> d.subgroupSize() == n)) {
+                warnings.add(SizeMessage.SHARED_LEFT_OUT.format(n, first.power(), StudyDesigner.MAX_READINGS));
+            }
+        }
+        SharedDesign best = designs.get(0);
+        String why = switch (best.limitedBy()) {
+            case POWER -> String.format(Locale.ROOT, "give every characteristic %.0f %% power", 100 * first.power());
+            case MIN_SUBGROUPS -> String.format(Locale.ROOT, "meet the floor of %d subgroups",
+                    first.floors().minSubgroups());
+            case MIN_READINGS -> String.format(Locale.ROOT, "meet the floor of %d readings", first.floors().minReadings());
+        };
+        String reason = SizeMessage.SHARED_REASON.format(best.subgroups(), best.subgroupSize(), best.readings(), why,
+                chars.get(best.driver()).id());
+        return new SharedSize(file, chars, designs, reason, warnings);
+    }
+
+    private static DesignRequest request(String file, Characteristic c, RequestFactory factory) {
+        try {
+            DesignRequest r = factory.make(c.limits().sides(), c.requirement(), c.expectation());
+            if (!(c.expectation().index() > c.requirement().minimum())) {
+                throw new UserException(DesignMessage.NOT_BETTER_THAN_REQUIRED, c.requirement().index().symbol(),
+                        c.expectation().index(), c.requirement().minimum());
+            }
+            return r;
+        } catch (UserException e) {
+            if (e.key() instanceof DesignMessage m && ABOUT_THE_CHARACTERISTIC.contains(m)) {
+                throw new UserException(Location.file(file), SizeMessage.CHARACTERISTIC_REFUSED, c.id(), e.getMessage());
+            }
+            throw e;
+        }
+    }
+
+    void print(PrintWriter out) {
+        int w = Math.max(6, characteristics.stream().mapToInt(c -> c.id().length()).max().orElse(0));
+        out.println(SizeMessage.SHARED_HEADING.format(characteristics.size(), file));
+        out.printf(Locale.ROOT, "   n     k      N  %-" + w + "s  %-13s lowest    false alarm       detection%n",
+                "driver", "limited by");
+        out.printf(Locale.ROOT, "                   %" + w + "s  %13s  power     3σ   all rules    3σ   all rules%n", "", "");
+        for (SharedDesign d : bySize()) {
+            double lowest = d.powers().stream().mapToDouble(Double::doubleValue).min().orElseThrow();
+            out.printf(Locale.ROOT, "%s%3d %5d %6d  %-" + w + "s  %-13s %6.3f  %6.3f  %6.3f  %6.3f  %6.3f%n",
+                    d == designs.get(0) ? "*" : " ", d.subgroupSize(), d.subgroups(), d.readings(),
+                    characteristics.get(d.driver()).id(), d.limitedBy().token(), lowest, d.falseAlarm().beyondLimits(),
+                    d.falseAlarm().allRules(), d.detection().beyondLimits(), d.detection().allRules());
+        }
+        out.println(SizeMessage.SHARED_CHART_RISKS.format(characteristics.size()));
+        out.println();
+        out.println("Recommended: " + reason);
+        out.println();
+        SharedDesign best = designs.get(0);
+        out.printf(Locale.ROOT, "Each characteristic at %d subgroups of %d:%n", best.subgroups(), best.subgroupSize());
+        out.printf(Locale.ROOT, "  %-" + w + "s  index  target  confidence  expected  alone k   power%n", "id");
+        for (int i = 0; i < characteristics.size(); i++) {
+            Characteristic c = characteristics.get(i);
+            out.printf(Locale.ROOT, "  %-" + w + "s  %-5s  %6.3f  %10.3f  %8.3f  %7d  %6.3f%s%n", c.id(),
+                    c.requirement().index().symbol(), c.requirement().minimum(), c.requirement().confidence(),
+                    c.expectation().index(), best.ownSubgroups().get(i), best.powers().get(i),
+                    i == best.driver() ? "  drives k" : "");
+        }
+        for (String warning : warnings) {
+            out.println("warning: " + warning);
+        }
+        out.println();
+        out.println(DesignMessage.CAUTION.english());
+    }
+
+    /**
+     * {@code characteristics} ({@code id, index, target, confidence, expected}), {@code designs} (one per
+     * subgroup size every characteristic can use, by size: {@code subgroupSize, subgroups, readings,
+     * driver, limitedBy, characteristics: [{id, power, subgroupsAlone}], falseAlarm, detection}),
+     * {@code recommended} (the first design plus {@code reason}) and {@code warnings}.
+     */
+    Map<String, Object> json() {
+        Map<String, Object> root = new LinkedHashMap<>();
+        List<Object> chars = new ArrayList<>();
+        for (Characteristic c : characteristics) {
+            Map<String, Object> m = new LinkedHashMap<>();
+            m.put("id", c.id());
+            m.put("index", c.requirement().index().token());
+            m.put("target", c.requirement().minimum());
+            m.put("confidence", c.requirement().confidence());
+            m.put("expected", c.expectation().index());
+            chars.add(m);
+        }
+        root.put("characteristics", chars);
+        List<Object> rows = new ArrayList<>();
+        for (SharedDesign d : bySize()) {
+            rows.add(design(d));
+        }
+        root.put("designs", rows);
+        Map<String, Object> recommended = design(designs.get(0));
+        recommended.put("reason", reason);
+        root.put("recommended", recommended);
+        root.put("warnings", warnings);
+        return root;
+    }
+
+    private List<SharedDesign> bySize() {
+        return designs.stream().sorted(java.util.Comparator.comparingInt(SharedDesign::subgroupSize)).toList();
+    }
+
+    private Map<String, Object> design(SharedDesign d) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("subgroupSize", d.subgroupSize());
+        m.put("subgroups", d.subgroups());
+        m.put("readings", d.readings());
+        m.put("driver", characteristics.get(d.driver()).id());
+        m.put("limitedBy", d.limitedBy().token());
+        List<Object> each = new ArrayList<>();
+        for (int i = 0; i < characteristics.size(); i++) {
+            Map<String, Object> c = new LinkedHashMap<>();
+            c.put("id", characteristics.get(i).id());
+            c.put("power", SizeJson.round(d.powers().get(i), 4));
+            c.put("subgroupsAlone", d.ownSubgroups().get(i));
+            each.add(c);
+        }
+        m.put("characteristics", each);
+        m.put("falseAlarm", SizeJson.risk(d.falseAlarm()));
+        m.put("detection", SizeJson.risk(d.detection()));
+        return m;
+    }
+}

@@ -1,0 +1,29 @@
+package dev.proofrun.cli;
+
+import dev.proofrun.text.MessageKey;
+
+/** Messages of {@code proofrun size} that belong to the command line (the designer's own are DesignMessage). */
+public enum SizeMessage implements MessageKey {
+    TARGET_NEEDED("give --target (the required minimum), or --characteristics FILE.csv for several characteristics"),
+    FILE_REPLACES_OPTIONS("--characteristics takes each characteristic's target, limits and expectation from the file;"
+            + " leave out %s"),
+    CHARACTERISTIC_REFUSED("characteristic %s: %s"),
+    SHARED_HEADING("One design for %d characteristics measured on the same parts (%s):"),
+    SHARED_REASON("%d subgroups of %d (%d readings of each characteristic) is the fewest readings that %s of every"
+            + " size tried; %s needs the most subgroups."),
+    SHARED_CHART_RISKS("False alarm and detection are for one characteristic's mean chart; with %d charts the chance"
+            + " that at least one signals is higher."),
+    SHARED_LEFT_OUT("subgroups of %d cannot give every characteristic a power of %.3f within %d readings; left out"
+            + " of the table");
+
+    private final String english;
+
+    SizeMessage(String english) {
+        this.english = english;
+    }
+
+    @Override
+    public String english() {
+        return english;
+    }
+}
