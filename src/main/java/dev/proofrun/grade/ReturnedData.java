@@ -2,7 +2,6 @@ package dev.proofrun.grade;
 
 import dev.proofrun.text.Location;
 import dev.proofrun.text.UserException;
-import java.time.ZonedDateTime;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
@@ -169,12 +168,11 @@ final class ReturnedData implements RowHandler {
         if (text.isEmpty()) {
             return;
         }
-        ZonedDateTime t = Cells.taken(text, plan.zone(), plannedDay[si]);
-        if (t == null) {
+        long epoch = Cells.takenEpochSecond(text, plan.zone(), plannedDay[si]);
+        if (epoch == Cells.NOT_A_TIME) {
             log.add(Location.cell(display, row, name(takenCol)), Severity.WARNING, id, GradeMessage.TAKEN_UNREADABLE, text);
             return;
         }
-        long epoch = t.toEpochSecond();
         col.taken[si] = epoch;
         if (epoch < windowBegin[si] || epoch > windowEnd[si]) {
             PlannedSlot slot = plan.slots().get(si);
