@@ -1,5 +1,6 @@
 package dev.proofrun.grade;
 
+import dev.proofrun.text.FormulaGuard;
 import dev.proofrun.text.Location;
 import dev.proofrun.text.UserException;
 import java.util.ArrayList;
@@ -18,6 +19,8 @@ import java.util.TreeMap;
  * readings in {@code x1..xn}) and the long form automatic gauges write (one reading per row in
  * {@code value}). Columns are found by header name, in any order and any letter case. Rules:
  * <ul>
+ * <li>The prefilled cells ({@code plan}, {@code slot}, {@code characteristic}) lose the leading quote the
+ *     sheet puts before text a spreadsheet would evaluate ({@link FormulaGuard#restore}).</li>
  * <li>A {@code plan} cell other than the plan's "id@revision" refuses the whole file (the plan wins);
  *     a blank plan cell is accepted.</li>
  * <li>Unknown slot or characteristic: the row is not used (error). In the fill-in form a second row for
@@ -114,6 +117,14 @@ final class ReturnedData implements RowHandler {
         return col >= 0 && col < count ? cells[col] : "";
     }
 
+    /**
+     * A cell the fill-in file prefilled from the plan (plan, slot, characteristic): the sheet wrote risky text
+     * with a leading quote, and a spreadsheet may have kept it, so {@link FormulaGuard#restore} undoes it.
+     */
+    private String prefilled(String[] cells, int count, int col) {
+        return FormulaGuard.restore(cell(cells, count, col));
+    }
+
     private String name(int col) {
         return header[col];
     }
@@ -121,18 +132,18 @@ final class ReturnedData implements RowHandler {
     @Override
     public void row(long row, String[] cells, int count) {
         rows++;
-        String planCell = cell(cells, count, planCol);
+        String planCell = prefilled(cells, count, planCol);
         if (!planCell.isEmpty() && !planCell.equals(plan.reference())) {
             throw new UserException(Location.cell(display, row, name(planCol)), GradeMessage.PLAN_MISMATCH, planCell, plan.reference());
         }
-        String charCell = cell(cells, count, characteristicCol);
+        String charCell = prefilled(cells, count, characteristicCol);
         Integer ci = characteristicIndex.get(charCell);
         if (ci == null) {
             log.add(Location.cell(display, row, name(characteristicCol)), Severity.ERROR, null, GradeMessage.UNKNOWN_CHARACTERISTIC, charCell);
             return;
         }
         String id = plan.characteristics().get(ci).id();
-        String slotCell = cell(cells, count, slotCol);
+        String slotCell = prefilled(cells, count, slotCol);
         Integer si = slotIndex.get(slotCell);
         if (si == null) {
             log.add(Location.cell(display, row, name(slotCol)), Severity.ERROR, id, GradeMessage.UNKNOWN_SLOT, slotCell);
