@@ -95,6 +95,25 @@ final class ChanceSignals {
         return mean(spread) * scale;
     }
 
+    /**
+     * The smallest tail probability the simulation can give: 1/(S + 1) for S simulated studies when the tail is
+     * their empirical share, (a + 1)/(S + 1) with a = 0 — no simulated stable study reached the count, so the
+     * chance is below this (not equal to it). 0 when the tail comes from the normal approximation, which has no
+     * such floor.
+     */
+    double floor() {
+        return empirical(location) ? 1.0 / (location.length + 1.0) : 0.0;
+    }
+
+    /** Number of simulated studies (or blocks). */
+    int studies() {
+        return location.length;
+    }
+
+    private boolean empirical(double[] counts) {
+        return scale == 1 && counts.length >= EMPIRICAL_STUDIES;
+    }
+
     /** P(a stable study signals at ≥ observed points of the location chart). */
     double locationTail(int observed) {
         return tail(location, observed);
@@ -117,7 +136,7 @@ final class ChanceSignals {
         if (observed <= 0) {
             return 1.0;
         }
-        if (scale == 1 && counts.length >= EMPIRICAL_STUDIES) {
+        if (empirical(counts)) {
             int at = 0;
             for (double c : counts) {
                 if (c >= observed) {

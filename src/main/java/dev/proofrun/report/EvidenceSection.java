@@ -69,9 +69,9 @@ final class EvidenceSection {
             s.add(Block.space(4));
             s.add(t.header());
             s.add(t.row("location points signalling", st.locationSignalPoints() + " (by chance " + Fmt.fixed(st.expectedLocationByChance(), 1) + ")",
-                    "chance of as many", Fmt.p(st.locationChance())));
+                    "chance of as many", st.locationAtFloor() ? Stability.below(st.locationChance()) : Fmt.p(st.locationChance())));
             s.add(t.row("spread points beyond limits", st.spreadSignalPoints() + " (by chance " + Fmt.fixed(st.expectedSpreadByChance(), 1) + ")",
-                    "chance of as many", Fmt.p(st.spreadChance())));
+                    "chance of as many", st.spreadAtFloor() ? Stability.below(st.spreadChance()) : Fmt.p(st.spreadChance())));
             s.add(t.row("\u03c3 overall / \u03c3 within", Fmt.fixed(st.stabilityRatio(), 3), "ANOVA F (p)",
                     st.anovaF().isPresent() ? Fmt.fixed(st.anovaF().getAsDouble(), 2) + " (" + Fmt.p(st.anovaP().orElse(Double.NaN)) + ")" : Fmt.NONE));
             if (!st.signals().isEmpty()) {
