@@ -41,7 +41,8 @@ final class EvidenceSection {
         flow.newPage();
         String unit = g.unit() == null || g.unit().isEmpty() ? "" : " (" + g.unit() + ")";
         flow.place(Paragraph.of(g.id() + "  " + g.name() + unit + ": " + g.verdict().id(), bold, 14));
-        flow.place(Paragraph.of(VerdictSection.gloss(g.verdict()) + ".", regular, 9));
+        String gloss = VerdictSection.gloss(g.verdict());
+        flow.place(Paragraph.of(Character.toUpperCase(gloss.charAt(0)) + gloss.substring(1) + ".", regular, 9));
         g.additionalSubgroups().ifPresent(k -> flow.place(Paragraph.of(String.format(Locale.ROOT,
                 "About %d more subgroups at the plan's frequency would likely settle it.", k), regular, 9)));
 
@@ -107,7 +108,7 @@ final class EvidenceSection {
 
         List<Block> k = new ArrayList<>();
         if (g.judged() != null) {
-            k.add(new BoundBlock(g.judged(), regular, bold));
+            k.add(new BoundBlock(g.judged(), g.verdict() == dev.proofrun.grade.Verdict.NOT_VALID, regular, bold));
         }
         CapabilityResult f = g.capability();
         if (f != null) {

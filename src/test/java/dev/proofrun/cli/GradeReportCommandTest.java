@@ -40,6 +40,16 @@ class GradeReportCommandTest {
         try (PDDocument doc = Loader.loadPDF(Files.readAllBytes(pdf))) {
             String text = new PDFTextStripper().getText(doc);
             assertTrue(text.contains("Verdict for the part:"), text);
+            PDFTextStripper firstPage = new PDFTextStripper();
+            firstPage.setStartPage(1);
+            firstPage.setEndPage(1);
+            String first = firstPage.getText(doc).replaceAll("\\s+", " ");
+            // the demo: R4 inconclusive says in the verdict box how many more subgroups would settle it; F7 is
+            // not valid and shows no estimate beside its verdict; every page's foot names the part's verdict
+            assertTrue(first.contains("more subgroups"), first);
+            assertTrue(first.contains("F7 seat push-out force: not-valid (Cpk required 1.33; no capability statement)"), first);
+            assertTrue(text.contains("Not valid: these figures describe the study's past, not the process."), text);
+            assertTrue(text.contains("Part verdict: not-valid. A statistical statement under assumptions"), text);
             assertTrue(doc.getNumberOfPages() >= 1 + DemoPlan.create().characteristics().size());
         }
     }
