@@ -107,4 +107,15 @@ class GradeCommandTest {
         assertEquals(2, missing.code());
         assertEquals(2, run("demo", "--out", dir.toString()).code());
     }
+
+    @Test
+    void aDraftPlanIsRefusedWithOneLineAndNothingPrinted() throws Exception {
+        Path draft = dir.resolve("draft-plan.json");
+        dev.proofrun.plan.PlanFiles.write(draft, dev.proofrun.plan.DemoPlan.draft());
+        Run r = run("grade", draft.toString(), data.toString());
+        assertEquals(2, r.code());
+        assertEquals("", r.out());
+        assertEquals(1, r.err().strip().lines().count(), r.err());
+        assertTrue(r.err().contains("the plan is a draft; grade against the issued plan"), r.err());
+    }
 }
