@@ -121,6 +121,19 @@ final class Cells {
      * @return epoch seconds, or {@link #NOT_A_TIME}
      */
     static long takenEpochSecond(String text, ZoneId zone, LocalDate plannedDay) {
+        long fast = offsetTimeEpochSecond(text);
+        if (fast != NOT_A_TIME) {
+            return fast;
+        }
+        ZonedDateTime t = taken(text, zone, plannedDay);
+        return t == null ? NOT_A_TIME : t.toEpochSecond();
+    }
+
+    /**
+     * The fast path of {@link #takenEpochSecond} alone: epoch seconds of {@code yyyy-MM-ddTHH:mm[:ss]±hh:mm}, or
+     * {@link #NOT_A_TIME} for any other text (which may still be a time the general path reads).
+     */
+    static long offsetTimeEpochSecond(String text) {
         int len = text.length();
         if ((len == 22 || len == 25) && text.charAt(4) == '-' && text.charAt(7) == '-' && text.charAt(10) == 'T'
                 && text.charAt(13) == ':' && (len == 22 || text.charAt(16) == ':')) {
@@ -142,8 +155,7 @@ final class Cells {
                 return LocalDate.of(year, month, day).toEpochDay() * 86_400L + hour * 3600L + minute * 60L + second - offset;
             }
         }
-        ZonedDateTime t = taken(text, zone, plannedDay);
-        return t == null ? NOT_A_TIME : t.toEpochSecond();
+        return NOT_A_TIME;
     }
 
     /** The non-negative integer in {@code count} ASCII digits at {@code from}, or −1. */

@@ -68,10 +68,11 @@ final class ReturnedData implements RowHandler {
         this.windowBegin = new long[k];
         this.windowEnd = new long[k];
         for (int s = 0; s < k; s++) {
+            // minutes are added on the instant time-line (as PlannedSlot.begin/end do), so plain seconds suffice
             PlannedSlot slot = plan.slots().get(s);
-            plannedDay[s] = slot.start().withZoneSameInstant(plan.zone()).toLocalDate();
-            windowBegin[s] = slot.begin().toEpochSecond();
-            windowEnd[s] = slot.end().toEpochSecond();
+            long start = slot.start().toEpochSecond();
+            windowBegin[s] = start - 60L * slot.windowMinutes();
+            windowEnd[s] = start + 60L * slot.windowMinutes();
         }
         this.collected = new Collected[plan.characteristics().size()];
         for (int c = 0; c < collected.length; c++) {
@@ -179,7 +180,10 @@ final class ReturnedData implements RowHandler {
         if (text.isEmpty()) {
             return;
         }
-        long epoch = Cells.takenEpochSecond(text, plan.zone(), plannedDay[si]);
+        long epoch = Cells.offsetTimeEpochSecond(text);
+        if (epoch == Cells.NOT_A_TIME) {
+            epoch = Cells.takenEpochSecond(text, plan.zone(), plannedDay(si));
+        }
         if (epoch == Cells.NOT_A_TIME) {
             log.add(Location.cell(display, row, name(takenCol)), Severity.WARNING, id, GradeMessage.TAKEN_UNREADABLE, text);
             return;
@@ -191,6 +195,14 @@ final class ReturnedData implements RowHandler {
             log.add(Location.cell(display, row, name(takenCol)), Severity.WARNING, id, GradeMessage.TAKEN_OUTSIDE_WINDOW,
                     text, slot.begin().toOffsetDateTime(), slot.end().toOffsetDateTime());
         }
+    }
+
+    /** The slot's planned day in the plan's zone (for a taken time of day), computed when first needed. */
+    private java.time.LocalDate plannedDay(int si) {
+        if (plannedDay[si] == null) {
+            plannedDay[si] = plan.slots().get(si).start().withZoneSameInstant(plan.zone()).toLocalDate();
+        }
+        return plannedDay[si];
     }
 
     private void reading(Collected col, int ci, int si, long row, String text, int column, String id) {
