@@ -22,6 +22,8 @@ import java.util.Map;
  * </pre>
  * One characteristic, 200,000 slots of 5 readings (1,000,000 readings), in the fill-in CSV form. The plan is
  * built in code (the same one for writing and grading); the grade phase prints the time of each step.
+ * {@code write-for PLAN.json OUT.csv} writes a stable return for a real plan file instead, to time the
+ * command itself: {@code java -Xmx512m -jar target/proofrun.jar grade PLAN.json OUT.csv}.
  */
 public final class GradeHarness {
 
@@ -77,12 +79,25 @@ public final class GradeHarness {
         GradingPlan plan = plan();
         Path file = Path.of(args[1]);
         if (args[0].equals("write-for")) {
-            // write-for PLAN.json OUT.csv: a stable return for a real plan file (first characteristic's limits)
+            // write-for PLAN.json OUT.csv: a stable return for a real plan file, every characteristic centred
+            // with sigma = tolerance width / 12 (Cp = 2; invented)
             GradingPlan real = PlanAdapter.of(dev.proofrun.plan.PlanFiles.read(file));
-            GradedCharacteristic c = real.characteristics().get(0);
-            double mid = c.nominal() != null ? c.nominal() : 0.5 * (c.limits().lower().getAsDouble() + c.limits().upper().getAsDouble());
-            double sd = c.limits().width().getAsDouble() / 12;
-            SimulatedReturn.writeCsv(real, Map.of(c.id(), SimulatedReturn.Process.stable(mid, sd)), 1L, Path.of(args[2]));
+            Map<String, SimulatedReturn.Process> processes = new java.util.HashMap<>();
+            for (GradedCharacteristic c : real.characteristics()) {
+                double mid = c.nominal() != null ? c.nominal()
+                        : 0.5 * (c.limits().lower().getAsDouble() + c.limits().upper().getAsDouble());
+                processes.put(c.id(), SimulatedReturn.Process.stable(mid, c.limits().width().getAsDouble() / 12));
+            }
+            // characteristics without a gauge resolution are written to 4 decimals, as a gauge prints them
+            // (full 17-digit doubles would measure Double.parseDouble's slow path, not a returned file)
+            List<GradedCharacteristic> rounded = new ArrayList<>();
+            for (GradedCharacteristic c : real.characteristics()) {
+                rounded.add(c.resolution() > 0 ? c : new GradedCharacteristic(c.id(), c.name(), c.unit(), c.limits(),
+                        c.nominal(), 0.0001, c.requirement()));
+            }
+            GradingPlan written = new GradingPlan(real.id(), real.revision(), real.zone(), rounded, real.design(),
+                    real.slots(), real.allowedShortfall(), real.interval());
+            SimulatedReturn.writeCsv(written, processes, 1L, Path.of(args[2]));
             return;
         }
         if (args[0].equals("write")) {

@@ -7,7 +7,9 @@ import dev.proofrun.control.RunRule;
 import dev.proofrun.control.RunRules;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Map;
 import java.util.Set;
+import java.util.concurrent.ConcurrentHashMap;
 import org.apache.commons.rng.UniformRandomProvider;
 import org.apache.commons.rng.sampling.distribution.ZigguratSampler;
 import org.apache.commons.rng.simple.RandomSource;
@@ -58,6 +60,31 @@ final class ChanceSignals {
      * @param rules the rules on the location chart
      */
     static ChanceSignals simulate(ChartKind kind, int n, int k, Set<RunRule> rules) {
+        Key key = new Key(kind, n, k, Set.copyOf(rules));
+        ChanceSignals known = CACHE.get(key);
+        if (known != null) {
+            return known;
+        }
+        ChanceSignals fresh = run(kind, n, k, rules);
+        if (CACHE.size() >= CACHE_SIZE) {
+            CACHE.clear();
+        }
+        CACHE.putIfAbsent(key, fresh);
+        return fresh;
+    }
+
+    /** What a simulation depends on; the seed follows from n and k, so equal keys give equal figures. */
+    private record Key(ChartKind kind, int n, int k, Set<RunRule> rules) {
+    }
+
+    /**
+     * Simulations already run in this JVM. A plan's characteristics share n and k, so a part with ten
+     * characteristics runs one simulation, not ten; the figures are the same as a fresh run's (seeded).
+     */
+    private static final Map<Key, ChanceSignals> CACHE = new ConcurrentHashMap<>();
+    static final int CACHE_SIZE = 32;
+
+    static ChanceSignals run(ChartKind kind, int n, int k, Set<RunRule> rules) {
         long perStudy = (long) n * k;
         int studies = (int) Math.min(MAX_STUDIES, READINGS_BUDGET / Math.max(1, perStudy));
         int length = k;

@@ -57,4 +57,20 @@ class ChanceFloorTest {
         ChanceSignals small = ChanceSignals.simulate(dev.proofrun.control.ChartKind.XBAR_R, 5, 25, StabilityJudge.rules());
         assertEquals(1.0 / 2001, small.floor(), 0.0);
     }
+
+    @Test
+    void aRepeatedSimulationGivesTheSameFigures() {
+        // characteristics of one plan share n and k: the second call is answered from the cache and must equal
+        // what the first computed (the simulation is seeded by n and k)
+        ChanceSignals a = ChanceSignals.simulate(dev.proofrun.control.ChartKind.XBAR_R, 4, 30, StabilityJudge.rules());
+        ChanceSignals b = ChanceSignals.simulate(dev.proofrun.control.ChartKind.XBAR_R, 4, 30, StabilityJudge.rules());
+        ChanceSignals fresh = ChanceSignals.run(dev.proofrun.control.ChartKind.XBAR_R, 4, 30, StabilityJudge.rules());
+        assertTrue(a == b, "answered from the cache");
+        assertEquals(fresh.expectedLocation(), b.expectedLocation(), 0.0);
+        assertEquals(fresh.expectedSpread(), b.expectedSpread(), 0.0);
+        assertEquals(fresh.locationTail(3), b.locationTail(3), 0.0);
+        assertEquals(fresh.spreadTail(1), b.spreadTail(1), 0.0);
+        ChanceSignals s = ChanceSignals.simulate(dev.proofrun.control.ChartKind.XBAR_S, 4, 30, StabilityJudge.rules());
+        assertTrue(s != a, "another chart kind is another simulation");
+    }
 }
