@@ -132,11 +132,6 @@ final class ChanceSignals {
         return empirical(location) ? 1.0 / (location.length + 1.0) : 0.0;
     }
 
-    /** Number of simulated studies (or blocks). */
-    int studies() {
-        return location.length;
-    }
-
     private boolean empirical(double[] counts) {
         return scale == 1 && counts.length >= EMPIRICAL_STUDIES;
     }

@@ -1,7 +1,11 @@
 package dev.proofrun.grade;
 
 import dev.proofrun.control.ChartPair;
+import java.math.BigDecimal;
+import java.math.MathContext;
+import java.math.RoundingMode;
 import java.util.List;
+import java.util.Locale;
 import java.util.OptionalDouble;
 
 /**
@@ -53,7 +57,7 @@ public record Stability(ChartPair charts, List<ChartSignal> signals, int locatio
      * @param digits  the format of an ordinary value, e.g. "%.3f"
      */
     public static String chanceText(double p, boolean atFloor, String digits) {
-        return atFloor ? "P " + below(p) : "P = " + String.format(java.util.Locale.ROOT, digits, p);
+        return atFloor ? "P " + below(p) : "P = " + String.format(Locale.ROOT, digits, p);
     }
 
     /** "&lt; 0.00050" for a floor of 1/2001: the floor rounded up to two significant digits. */
@@ -63,7 +67,6 @@ public record Stability(ChartPair charts, List<ChartSignal> signals, int locatio
 
     /** v rounded up to two significant digits, in plain notation: 1/2001 → "0.00050", 1/401 → "0.0025". */
     static String upTwoDigits(double v) {
-        java.math.BigDecimal b = java.math.BigDecimal.valueOf(v).round(new java.math.MathContext(2, java.math.RoundingMode.CEILING));
-        return b.toPlainString();
+        return BigDecimal.valueOf(v).round(new MathContext(2, RoundingMode.CEILING)).toPlainString();
     }
 }
