@@ -53,6 +53,9 @@ public final class GradeHarness {
 
     static void phases(GradingPlan plan, Path file) {
         long a = cpu();
+        // as Grader.grade does for a large study: chance simulated on a background thread while reading
+        ChanceSignals.prepare(dev.proofrun.control.ChartKind.forMethod(plan.design().sigmaMethod()),
+                plan.design().subgroupSize(), plan.slots().size(), StabilityJudge.rules());
         ReturnedData data = new ReturnedData(plan, file.toString());
         CsvTable.read(file, file.toString(), data);
         long b = cpu();

@@ -9,6 +9,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
+import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.ConcurrentHashMap;
 import org.apache.commons.rng.UniformRandomProvider;
 import org.apache.commons.rng.sampling.distribution.ZigguratSampler;
@@ -60,17 +61,58 @@ final class ChanceSignals {
      * @param rules the rules on the location chart
      */
     static ChanceSignals simulate(ChartKind kind, int n, int k, Set<RunRule> rules) {
+        try {
+            return future(kind, n, k, rules, false).join();
+        } catch (java.util.concurrent.CompletionException e) {
+            if (e.getCause() instanceof RuntimeException) {
+                throw (RuntimeException) e.getCause();
+            }
+            throw e;
+        }
+    }
+
+    /**
+     * Starts the simulation for a study of this size on a background thread and returns at once, so that it
+     * runs while the returned file is still being read (grading a large study); {@link #simulate} with the
+     * same arguments then waits for it instead of starting again. Used only when the file is expected to
+     * come back complete (k = the planned subgroups): if fewer usable subgroups come back, the work is spent
+     * for nothing and the real k is simulated as usual — the figures never depend on the guess.
+     */
+    static void prepare(ChartKind kind, int n, int k, Set<RunRule> rules) {
+        future(kind, n, k, rules, true);
+    }
+
+    private static CompletableFuture<ChanceSignals> future(ChartKind kind, int n, int k, Set<RunRule> rules,
+            boolean background) {
         Key key = new Key(kind, n, k, Set.copyOf(rules));
-        ChanceSignals known = CACHE.get(key);
+        CompletableFuture<ChanceSignals> known = CACHE.get(key);
         if (known != null) {
             return known;
         }
-        ChanceSignals fresh = run(kind, n, k, rules);
         if (CACHE.size() >= CACHE_SIZE) {
             CACHE.clear();
         }
-        CACHE.putIfAbsent(key, fresh);
-        return fresh;
+        CompletableFuture<ChanceSignals> mine = new CompletableFuture<>();
+        CompletableFuture<ChanceSignals> raced = CACHE.putIfAbsent(key, mine);
+        if (raced != null) {
+            return raced;
+        }
+        Runnable work = () -> {
+            try {
+                mine.complete(run(kind, n, k, rules));
+            } catch (RuntimeException | Error e) {
+                CACHE.remove(key, mine);
+                mine.completeExceptionally(e);
+            }
+        };
+        if (background) {
+            Thread t = new Thread(work, "proofrun-chance-" + n + "x" + k);
+            t.setDaemon(true);
+            t.start();
+        } else {
+            work.run();
+        }
+        return mine;
     }
 
     /** What a simulation depends on; the seed follows from n and k, so equal keys give equal figures. */
@@ -81,7 +123,7 @@ final class ChanceSignals {
      * Simulations already run in this JVM. A plan's characteristics share n and k, so a part with ten
      * characteristics runs one simulation, not ten; the figures are the same as a fresh run's (seeded).
      */
-    private static final Map<Key, ChanceSignals> CACHE = new ConcurrentHashMap<>();
+    private static final Map<Key, CompletableFuture<ChanceSignals>> CACHE = new ConcurrentHashMap<>();
     static final int CACHE_SIZE = 32;
 
     static ChanceSignals run(ChartKind kind, int n, int k, Set<RunRule> rules) {

@@ -73,4 +73,16 @@ class ChanceFloorTest {
         ChanceSignals s = ChanceSignals.simulate(dev.proofrun.control.ChartKind.XBAR_S, 4, 30, StabilityJudge.rules());
         assertTrue(s != a, "another chart kind is another simulation");
     }
+
+    @Test
+    void aSimulationPreparedInTheBackgroundIsTheOneUsed() {
+        // prepared while a file would be read; the later call waits for it and gets the same figures as a run
+        // on the calling thread
+        ChanceSignals.prepare(dev.proofrun.control.ChartKind.XBAR_R, 3, 40, StabilityJudge.rules());
+        ChanceSignals waited = ChanceSignals.simulate(dev.proofrun.control.ChartKind.XBAR_R, 3, 40, StabilityJudge.rules());
+        ChanceSignals fresh = ChanceSignals.run(dev.proofrun.control.ChartKind.XBAR_R, 3, 40, StabilityJudge.rules());
+        assertEquals(fresh.expectedLocation(), waited.expectedLocation(), 0.0);
+        assertEquals(fresh.locationTail(2), waited.locationTail(2), 0.0);
+        assertEquals(fresh.floor(), waited.floor(), 0.0);
+    }
 }
