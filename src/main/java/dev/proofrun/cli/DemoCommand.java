@@ -24,7 +24,7 @@ import picocli.CommandLine.Option;
 /**
  * {@code proofrun demo --out DIR}: the issued demo plan and a seeded, simulated returned file that grades to
  * a mix of verdicts — the whole loop in two commands. The readings are invented: the bore runs well
- * (demonstrated), the roughness is skewed and close to its requirement (inconclusive), the push-out force
+ * (demonstrated), the roughness runs close to its requirement (inconclusive), the push-out force
  * drops after a material-lot change (not valid: unstable).
  */
 @Command(name = "demo", mixinStandardHelpOptions = true,
