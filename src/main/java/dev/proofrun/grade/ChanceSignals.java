@@ -30,6 +30,10 @@ import org.hipparchus.distribution.continuous.NormalDistribution;
  * With fewer than {@value #EMPIRICAL_STUDIES} simulated studies the tail probability comes from a normal
  * approximation with the simulated (scaled) mean and variance; otherwise it is the empirical share of
  * simulated studies with at least the observed count. Seeded: the same study gives the same figures.
+ *
+ * <p>Each simulation is kept for the life of the JVM by (chart, n, k, rules) ({@value #CACHE_SIZE} at most),
+ * and {@link #prepare} can start one on a background thread before it is asked for; both only move work,
+ * the figures are those of a fresh run.
  */
 final class ChanceSignals {
 
