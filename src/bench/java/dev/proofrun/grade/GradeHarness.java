@@ -22,6 +22,8 @@ import java.util.Map;
  * </pre>
  * One characteristic, 200,000 slots of 5 readings (1,000,000 readings), in the fill-in CSV form. The plan is
  * built in code (the same one for writing and grading); the grade phase prints the time of each step.
+ * {@code write-for PLAN.json OUT.csv} writes a stable return for a real plan file instead, to time the
+ * command itself: {@code java -Xmx512m -jar target/proofrun.jar grade PLAN.json OUT.csv}.
  */
 public final class GradeHarness {
 
@@ -34,7 +36,9 @@ public final class GradeHarness {
         List<PlannedSlot> slots = new ArrayList<>(SLOTS);
         ZonedDateTime t = ZonedDateTime.of(2027, 1, 4, 6, 0, 0, 0, ZoneId.of("Europe/Berlin"));
         for (int i = 0; i < SLOTS; i++) {
-            slots.add(new PlannedSlot(String.format("S%06d", i + 1), t.plusMinutes(2L * i), 1));
+            // no String.format here: on a cold JVM 200,000 calls of it cost seconds, which is not grading
+            String digits = Integer.toString(i + 1);
+            slots.add(new PlannedSlot("S" + "000000".substring(digits.length()) + digits, t.plusMinutes(2L * i), 1));
         }
         GradedCharacteristic c = new GradedCharacteristic("D1", "bore diameter", "mm", SpecLimits.twoSided(9.9, 10.1), 10.0,
                 0.0001, Requirement.of(IndexKind.CPK, 1.33, 0.95));
@@ -49,6 +53,9 @@ public final class GradeHarness {
 
     static void phases(GradingPlan plan, Path file) {
         long a = cpu();
+        // as Grader.grade does for a large study: chance simulated on a background thread while reading
+        ChanceSignals.prepare(dev.proofrun.control.ChartKind.forMethod(plan.design().sigmaMethod()),
+                plan.design().subgroupSize(), plan.slots().size(), StabilityJudge.rules());
         ReturnedData data = new ReturnedData(plan, file.toString());
         CsvTable.read(file, file.toString(), data);
         long b = cpu();
@@ -59,7 +66,7 @@ public final class GradeHarness {
         long d = cpu();
         Shape sh = ShapeJudge.judge(c.subgroups(), plan.characteristics().get(0).resolution(), reasons);
         long e = cpu();
-        dev.proofrun.capability.CapabilityAnalysis.of(c.subgroups(), plan.characteristics().get(0).limits(), 10.0,
+        dev.proofrun.capability.CapabilityAnalysis.withoutNormality(c.subgroups(), plan.characteristics().get(0).limits(), 10.0,
                 plan.design().sigmaMethod(), 0.95, plan.design().boundMethod());
         long f = cpu();
         JudgedIndex j = CapabilityJudge.judge(plan.characteristics().get(0), plan.design(), c.subgroups(), sh);
@@ -74,6 +81,28 @@ public final class GradeHarness {
         long t0 = System.nanoTime();
         GradingPlan plan = plan();
         Path file = Path.of(args[1]);
+        if (args[0].equals("write-for")) {
+            // write-for PLAN.json OUT.csv: a stable return for a real plan file, every characteristic centred
+            // with sigma = tolerance width / 12 (Cp = 2; invented)
+            GradingPlan real = PlanAdapter.of(dev.proofrun.plan.PlanFiles.read(file));
+            Map<String, SimulatedReturn.Process> processes = new java.util.HashMap<>();
+            for (GradedCharacteristic c : real.characteristics()) {
+                double mid = c.nominal() != null ? c.nominal()
+                        : 0.5 * (c.limits().lower().getAsDouble() + c.limits().upper().getAsDouble());
+                processes.put(c.id(), SimulatedReturn.Process.stable(mid, c.limits().width().getAsDouble() / 12));
+            }
+            // characteristics without a gauge resolution are written to 4 decimals, as a gauge prints them
+            // (full 17-digit doubles would measure Double.parseDouble's slow path, not a returned file)
+            List<GradedCharacteristic> rounded = new ArrayList<>();
+            for (GradedCharacteristic c : real.characteristics()) {
+                rounded.add(c.resolution() > 0 ? c : new GradedCharacteristic(c.id(), c.name(), c.unit(), c.limits(),
+                        c.nominal(), 0.0001, c.requirement()));
+            }
+            GradingPlan written = new GradingPlan(real.id(), real.revision(), real.zone(), rounded, real.design(),
+                    real.slots(), real.allowedShortfall(), real.interval());
+            SimulatedReturn.writeCsv(written, processes, 1L, Path.of(args[2]));
+            return;
+        }
         if (args[0].equals("write")) {
             SimulatedReturn.writeCsv(plan, Map.of("D1", SimulatedReturn.Process.stable(10.0, 0.015)), 1L, file);
             return;

@@ -56,6 +56,24 @@ public final class CapabilityAnalysis {
      */
     public static CapabilityResult of(List<double[]> subgroups, SpecLimits limits, Double nominal, SigmaMethod method,
             double confidence, BoundMethod bound) {
+        return of(subgroups, limits, nominal, method, confidence, bound, true);
+    }
+
+    /**
+     * The same figures as {@link #of} without the normality test ({@link CapabilityResult#normality()} is
+     * empty): for a caller that judges the shape itself and would discard the test — grading does, on the
+     * readings spread over the gauge's resolution. Saves a sort of all readings.
+     *
+     * @throws UserException as {@link #of}
+     * @throws IllegalArgumentException as {@link #of}
+     */
+    public static CapabilityResult withoutNormality(List<double[]> subgroups, SpecLimits limits, Double nominal,
+            SigmaMethod method, double confidence, BoundMethod bound) {
+        return of(subgroups, limits, nominal, method, confidence, bound, false);
+    }
+
+    private static CapabilityResult of(List<double[]> subgroups, SpecLimits limits, Double nominal, SigmaMethod method,
+            double confidence, BoundMethod bound, boolean testNormality) {
         Objects.requireNonNull(subgroups, "subgroups");
         Objects.requireNonNull(limits, "limits");
         Objects.requireNonNull(bound, "bound");
@@ -96,7 +114,7 @@ public final class CapabilityAnalysis {
                 Nonconforming.expectedPpm(limits, mean, within.value()),
                 Nonconforming.expectedPpm(limits, mean, s),
                 Nonconforming.observedOutside(limits, subgroups), total);
-        Optional<AndersonDarling.Result> normality = total >= AndersonDarling.MIN_READINGS
+        Optional<AndersonDarling.Result> normality = testNormality && total >= AndersonDarling.MIN_READINGS
                 ? Optional.of(AndersonDarling.test(flatten(subgroups, n))) : Optional.empty();
         return new CapabilityResult(total, subgroups.size(), size, mean, within, s, limits, target, idx, lower,
                 confidence, bound, ppm, normality);

@@ -22,8 +22,10 @@ import picocli.CommandLine.Option;
 
 /**
  * {@code proofrun demo --out DIR}: the issued demo plan and a seeded, simulated returned file that grades to
- * a mix of verdicts — the whole loop in two commands. The readings (invented) come from
- * {@link DemoReturn}, which the wizard's demo runs use too.
+ * a mix of verdicts — the whole loop in two commands. The readings are invented and come from
+ * {@link DemoReturn}, which the wizard's demo runs use too: the bore runs well (demonstrated), the roughness
+ * runs close to its requirement (inconclusive), the push-out force drops after a material-lot change (not
+ * valid: unstable).
  */
 @Command(name = "demo", mixinStandardHelpOptions = true,
         description = "Write the demo plan (issued) and a simulated returned file to grade.")

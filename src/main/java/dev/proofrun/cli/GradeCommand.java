@@ -14,6 +14,7 @@ import dev.proofrun.grade.Problem;
 import dev.proofrun.grade.Reason;
 import dev.proofrun.plan.PlanFiles;
 import dev.proofrun.plan.StudyPlan;
+import dev.proofrun.sheet.layout.Paper;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.io.UncheckedIOException;
@@ -26,7 +27,7 @@ import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 
 /**
- * {@code proofrun grade PLAN.json DATA.(csv|xlsx) [--json] [--report FILE.pdf] [--require-demonstrated]}.
+ * {@code proofrun grade PLAN.json DATA.(csv|xlsx) [--json] [--report FILE.pdf [--paper a4|letter]] [--require-demonstrated]}.
  * Exit 0 when graded (whatever the verdict), 1 with {@code --require-demonstrated} when a characteristic is
  * not demonstrated, 2 for unusable input.
  */
@@ -53,11 +54,16 @@ public final class GradeCommand implements Callable<Integer> {
     @Option(names = "--report", paramLabel = "FILE.pdf", description = "Also write the grade report as PDF.")
     Path report;
 
+    @Option(names = "--paper", paramLabel = "a4|letter", defaultValue = "a4",
+            description = "Paper size of the --report PDF (default: ${DEFAULT-VALUE}).")
+    String paper;
+
     @Option(names = "--require-demonstrated", description = "Exit 1 unless every characteristic is demonstrated.")
     boolean requireDemonstrated;
 
     @Override
     public Integer call() {
+        Paper size = Paper.of(paper); // refused before anything is read or written
         StudyPlan plan = PlanFiles.read(planFile);
         if (!plan.isIssued()) {
             throw new UserException(Location.file(planFile.toString()), GradeMessage.PLAN_NOT_ISSUED);
@@ -66,7 +72,7 @@ public final class GradeCommand implements Callable<Integer> {
         GradeResult result = Grader.grade(gp, dataFile, dataFile.toString());
         PrintWriter out = spec.commandLine().getOut();
         if (report != null) {
-            GradeReports.write(result, plan, report, spec.commandLine().getErr());
+            GradeReports.write(result, plan, report, size);
         }
         if (json) {
             try {

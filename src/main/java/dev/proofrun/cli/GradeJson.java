@@ -70,6 +70,7 @@ final class GradeJson {
                 signals.add(sm);
             }
             control.put("signals", signals);
+            control.put("chance", chance(g.stability()));
             ratio = finite(g.stability().stabilityRatio());
         }
         m.put("control", control);
@@ -89,6 +90,27 @@ final class GradeJson {
         }
         m.put("reasons", reasons);
         m.put("additionalSubgroups", g.additionalSubgroups().isPresent() ? g.additionalSubgroups().getAsInt() : null);
+        return m;
+    }
+
+    /**
+     * What chance explains, numeric: points signalling, expected by chance, and P (the chance of as many on a
+     * stable process). {@code floor} is the smallest P the simulation gives (1/(S + 1) for S simulated stable
+     * studies; null when P comes from a normal approximation): a P equal to it means "below floor".
+     */
+    private static Map<String, Object> chance(dev.proofrun.grade.Stability st) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        Map<String, Object> loc = new LinkedHashMap<>();
+        loc.put("points", st.locationSignalPoints());
+        loc.put("expected", finite(st.expectedLocationByChance()));
+        loc.put("p", finite(st.locationChance()));
+        m.put("location", loc);
+        Map<String, Object> spr = new LinkedHashMap<>();
+        spr.put("points", st.spreadSignalPoints());
+        spr.put("expected", finite(st.expectedSpreadByChance()));
+        spr.put("p", finite(st.spreadChance()));
+        m.put("spread", spr);
+        m.put("floor", st.chanceFloor() > 0 ? st.chanceFloor() : null);
         return m;
     }
 

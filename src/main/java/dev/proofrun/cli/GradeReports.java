@@ -4,7 +4,6 @@ import dev.proofrun.grade.GradeResult;
 import dev.proofrun.plan.StudyPlan;
 import dev.proofrun.report.GradeReport;
 import dev.proofrun.sheet.layout.Paper;
-import java.io.PrintWriter;
 import java.nio.file.Path;
 
 /** Writes the grade report PDF for {@code grade --report}. */
@@ -14,12 +13,12 @@ final class GradeReports {
     }
 
     /**
-     * Writes the report (A4) through {@link GradeReport}: to a temporary file beside {@code file}, moved into
-     * place when complete. A failure to write is a {@link dev.proofrun.text.UserException} (exit 2).
+     * Writes the report through {@link GradeReport}: to a temporary file beside {@code file}, moved into place
+     * when complete. A failure to write is a {@link dev.proofrun.text.UserException} (exit 2).
      *
-     * @param err unused; kept for the caller's signature
+     * @param paper A4 or Letter ({@code --paper})
      */
-    static void write(GradeResult result, StudyPlan plan, Path file, PrintWriter err) {
-        GradeReport.write(result, plan, Paper.A4, file);
+    static void write(GradeResult result, StudyPlan plan, Path file, Paper paper) {
+        GradeReport.write(result, plan, paper, file);
     }
 }

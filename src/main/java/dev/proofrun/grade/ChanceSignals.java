@@ -7,7 +7,10 @@ import dev.proofrun.control.RunRule;
 import dev.proofrun.control.RunRules;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Map;
 import java.util.Set;
+import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.ConcurrentHashMap;
 import org.apache.commons.rng.UniformRandomProvider;
 import org.apache.commons.rng.sampling.distribution.ZigguratSampler;
 import org.apache.commons.rng.simple.RandomSource;
@@ -27,6 +30,10 @@ import org.hipparchus.distribution.continuous.NormalDistribution;
  * With fewer than {@value #EMPIRICAL_STUDIES} simulated studies the tail probability comes from a normal
  * approximation with the simulated (scaled) mean and variance; otherwise it is the empirical share of
  * simulated studies with at least the observed count. Seeded: the same study gives the same figures.
+ *
+ * <p>Each simulation is kept for the life of the JVM by (chart, n, k, rules) ({@value #CACHE_SIZE} at most),
+ * and {@link #prepare} can start one on a background thread before it is asked for; both only move work,
+ * the figures are those of a fresh run.
  */
 final class ChanceSignals {
 
@@ -58,6 +65,72 @@ final class ChanceSignals {
      * @param rules the rules on the location chart
      */
     static ChanceSignals simulate(ChartKind kind, int n, int k, Set<RunRule> rules) {
+        try {
+            return future(kind, n, k, rules, false).join();
+        } catch (java.util.concurrent.CompletionException e) {
+            if (e.getCause() instanceof RuntimeException) {
+                throw (RuntimeException) e.getCause();
+            }
+            throw e;
+        }
+    }
+
+    /**
+     * Starts the simulation for a study of this size on a background thread and returns at once, so that it
+     * runs while the returned file is still being read (grading a large study); {@link #simulate} with the
+     * same arguments then waits for it instead of starting again. Used only when the file is expected to
+     * come back complete (k = the planned subgroups): if fewer usable subgroups come back, the work is spent
+     * for nothing and the real k is simulated as usual — the figures never depend on the guess.
+     */
+    static void prepare(ChartKind kind, int n, int k, Set<RunRule> rules) {
+        future(kind, n, k, rules, true);
+    }
+
+    private static CompletableFuture<ChanceSignals> future(ChartKind kind, int n, int k, Set<RunRule> rules,
+            boolean background) {
+        Key key = new Key(kind, n, k, Set.copyOf(rules));
+        CompletableFuture<ChanceSignals> known = CACHE.get(key);
+        if (known != null) {
+            return known;
+        }
+        if (CACHE.size() >= CACHE_SIZE) {
+            CACHE.clear();
+        }
+        CompletableFuture<ChanceSignals> mine = new CompletableFuture<>();
+        CompletableFuture<ChanceSignals> raced = CACHE.putIfAbsent(key, mine);
+        if (raced != null) {
+            return raced;
+        }
+        Runnable work = () -> {
+            try {
+                mine.complete(run(kind, n, k, rules));
+            } catch (RuntimeException | Error e) {
+                CACHE.remove(key, mine);
+                mine.completeExceptionally(e);
+            }
+        };
+        if (background) {
+            Thread t = new Thread(work, "proofrun-chance-" + n + "x" + k);
+            t.setDaemon(true);
+            t.start();
+        } else {
+            work.run();
+        }
+        return mine;
+    }
+
+    /** What a simulation depends on; the seed follows from n and k, so equal keys give equal figures. */
+    private record Key(ChartKind kind, int n, int k, Set<RunRule> rules) {
+    }
+
+    /**
+     * Simulations already run in this JVM. A plan's characteristics share n and k, so a part with ten
+     * characteristics runs one simulation, not ten; the figures are the same as a fresh run's (seeded).
+     */
+    private static final Map<Key, CompletableFuture<ChanceSignals>> CACHE = new ConcurrentHashMap<>();
+    static final int CACHE_SIZE = 32;
+
+    static ChanceSignals run(ChartKind kind, int n, int k, Set<RunRule> rules) {
         long perStudy = (long) n * k;
         int studies = (int) Math.min(MAX_STUDIES, READINGS_BUDGET / Math.max(1, perStudy));
         int length = k;
@@ -95,6 +168,20 @@ final class ChanceSignals {
         return mean(spread) * scale;
     }
 
+    /**
+     * The smallest tail probability the simulation can give: 1/(S + 1) for S simulated studies when the tail is
+     * their empirical share, (a + 1)/(S + 1) with a = 0 — no simulated stable study reached the count, so the
+     * chance is below this (not equal to it). 0 when the tail comes from the normal approximation, which has no
+     * such floor.
+     */
+    double floor() {
+        return empirical(location) ? 1.0 / (location.length + 1.0) : 0.0;
+    }
+
+    private boolean empirical(double[] counts) {
+        return scale == 1 && counts.length >= EMPIRICAL_STUDIES;
+    }
+
     /** P(a stable study signals at ≥ observed points of the location chart). */
     double locationTail(int observed) {
         return tail(location, observed);
@@ -117,7 +204,7 @@ final class ChanceSignals {
         if (observed <= 0) {
             return 1.0;
         }
-        if (scale == 1 && counts.length >= EMPIRICAL_STUDIES) {
+        if (empirical(counts)) {
             int at = 0;
             for (double c : counts) {
                 if (c >= observed) {

@@ -11,6 +11,8 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.OptionalInt;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.FutureTask;
 
 /**
  * Grades one characteristic from its usable subgroups: completeness, stability, shape, capability, then the
@@ -58,10 +60,22 @@ final class CharacteristicGrader {
                     null, null, null, null, Verdict.NOT_VALID, reasons, OptionalInt.empty());
         }
 
+        // the shape step (a sort of all readings) runs beside the stability step; each is seeded on its own,
+        // so the result does not depend on the order, and the reasons keep the order of the steps
+        List<Reason> shapeReasons = new ArrayList<>();
+        FutureTask<Shape> shapeTask = new FutureTask<>(() -> ShapeJudge.judge(subgroups, gc.resolution(), shapeReasons));
+        if ((long) subgroups.size() * subgroups.get(0).length >= PARALLEL_READINGS) {
+            Thread worker = new Thread(shapeTask, "proofrun-shape-" + gc.id());
+            worker.setDaemon(true);
+            worker.start();
+        } else {
+            shapeTask.run();
+        }
         Stability stability = StabilityJudge.judge(ChartKind.forMethod(design.sigmaMethod()), subgroups, data.slots(), reasons);
         valid &= stability.stable();
-        Shape shape = ShapeJudge.judge(subgroups, gc.resolution(), reasons);
         CapabilityResult figures = figures(gc, design, subgroups);
+        Shape shape = join(shapeTask);
+        reasons.addAll(shapeReasons);
         valid &= shape.modelFits();
 
         JudgedIndex judged = shape.modelFits() || shape.normal() ? CapabilityJudge.judge(gc, design, subgroups, shape) : null;
@@ -109,10 +123,34 @@ final class CharacteristicGrader {
                 stability, shape, ev, figures, verdict, reasons, more);
     }
 
-    /** The shared capability figures (as {@code estimate} computes them), or null when they cannot be computed. */
+    /** Below this many readings the shape step runs on the calling thread (a thread costs more than it saves). */
+    static final long PARALLEL_READINGS = 50_000;
+
+    private static <T> T join(FutureTask<T> task) {
+        try {
+            return task.get();
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new IllegalStateException("interrupted while grading", e);
+        } catch (ExecutionException e) {
+            Throwable cause = e.getCause();
+            if (cause instanceof RuntimeException) {
+                throw (RuntimeException) cause;
+            }
+            if (cause instanceof Error) {
+                throw (Error) cause;
+            }
+            throw new IllegalStateException(cause);
+        }
+    }
+
+    /**
+     * The shared capability figures (as {@code estimate} computes them, less the normality test, which the shape
+     * step makes on the readings spread over the gauge's resolution), or null when they cannot be computed.
+     */
     private static CapabilityResult figures(GradedCharacteristic gc, Design design, List<double[]> subgroups) {
         try {
-            return CapabilityAnalysis.of(subgroups, gc.limits(), gc.nominal(), design.sigmaMethod(),
+            return CapabilityAnalysis.withoutNormality(subgroups, gc.limits(), gc.nominal(), design.sigmaMethod(),
                     gc.requirement().confidence(), design.boundMethod());
         } catch (UserException e) {
             return null;

@@ -1,5 +1,6 @@
 package dev.proofrun.grade;
 
+import dev.proofrun.control.ChartKind;
 import dev.proofrun.text.Location;
 import dev.proofrun.text.UserException;
 import java.nio.file.Files;
@@ -28,6 +29,12 @@ public final class Grader {
     public static GradeResult grade(GradingPlan plan, Path file, String display) {
         if (!Files.isRegularFile(file)) {
             throw new UserException(Location.file(display), GradeMessage.FILE_UNREADABLE, "no such file");
+        }
+        int n = plan.design().subgroupSize();
+        int k = plan.slots().size();
+        if ((long) n * k >= CharacteristicGrader.PARALLEL_READINGS && k >= 2) {
+            // a large study: simulate what chance gives a complete return while the file is read
+            ChanceSignals.prepare(ChartKind.forMethod(plan.design().sigmaMethod()), n, k, StabilityJudge.rules());
         }
         ReturnedData data = new ReturnedData(plan, display);
         String name = file.getFileName().toString().toLowerCase(Locale.ROOT);

@@ -1,8 +1,8 @@
 package dev.proofrun.grade;
 
+import dev.proofrun.text.FormulaGuard;
 import dev.proofrun.text.Location;
 import dev.proofrun.text.UserException;
-import java.time.ZonedDateTime;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
@@ -19,6 +19,8 @@ import java.util.TreeMap;
  * readings in {@code x1..xn}) and the long form automatic gauges write (one reading per row in
  * {@code value}). Columns are found by header name, in any order and any letter case. Rules:
  * <ul>
+ * <li>The prefilled cells ({@code plan}, {@code slot}, {@code characteristic}) lose the leading quote the
+ *     sheet puts before text a spreadsheet would evaluate ({@link FormulaGuard#restore}).</li>
  * <li>A {@code plan} cell other than the plan's "id@revision" refuses the whole file (the plan wins);
  *     a blank plan cell is accepted.</li>
  * <li>Unknown slot or characteristic: the row is not used (error). In the fill-in form a second row for
@@ -66,10 +68,11 @@ final class ReturnedData implements RowHandler {
         this.windowBegin = new long[k];
         this.windowEnd = new long[k];
         for (int s = 0; s < k; s++) {
+            // minutes are added on the instant time-line (as PlannedSlot.begin/end do), so plain seconds suffice
             PlannedSlot slot = plan.slots().get(s);
-            plannedDay[s] = slot.start().withZoneSameInstant(plan.zone()).toLocalDate();
-            windowBegin[s] = slot.begin().toEpochSecond();
-            windowEnd[s] = slot.end().toEpochSecond();
+            long start = slot.start().toEpochSecond();
+            windowBegin[s] = start - 60L * slot.windowMinutes();
+            windowEnd[s] = start + 60L * slot.windowMinutes();
         }
         this.collected = new Collected[plan.characteristics().size()];
         for (int c = 0; c < collected.length; c++) {
@@ -115,6 +118,14 @@ final class ReturnedData implements RowHandler {
         return col >= 0 && col < count ? cells[col] : "";
     }
 
+    /**
+     * A cell the fill-in file prefilled from the plan (plan, slot, characteristic): the sheet wrote risky text
+     * with a leading quote, and a spreadsheet may have kept it, so {@link FormulaGuard#restore} undoes it.
+     */
+    private String prefilled(String[] cells, int count, int col) {
+        return FormulaGuard.restore(cell(cells, count, col));
+    }
+
     private String name(int col) {
         return header[col];
     }
@@ -122,18 +133,18 @@ final class ReturnedData implements RowHandler {
     @Override
     public void row(long row, String[] cells, int count) {
         rows++;
-        String planCell = cell(cells, count, planCol);
+        String planCell = prefilled(cells, count, planCol);
         if (!planCell.isEmpty() && !planCell.equals(plan.reference())) {
             throw new UserException(Location.cell(display, row, name(planCol)), GradeMessage.PLAN_MISMATCH, planCell, plan.reference());
         }
-        String charCell = cell(cells, count, characteristicCol);
+        String charCell = prefilled(cells, count, characteristicCol);
         Integer ci = characteristicIndex.get(charCell);
         if (ci == null) {
             log.add(Location.cell(display, row, name(characteristicCol)), Severity.ERROR, null, GradeMessage.UNKNOWN_CHARACTERISTIC, charCell);
             return;
         }
         String id = plan.characteristics().get(ci).id();
-        String slotCell = cell(cells, count, slotCol);
+        String slotCell = prefilled(cells, count, slotCol);
         Integer si = slotIndex.get(slotCell);
         if (si == null) {
             log.add(Location.cell(display, row, name(slotCol)), Severity.ERROR, id, GradeMessage.UNKNOWN_SLOT, slotCell);
@@ -169,12 +180,14 @@ final class ReturnedData implements RowHandler {
         if (text.isEmpty()) {
             return;
         }
-        ZonedDateTime t = Cells.taken(text, plan.zone(), plannedDay[si]);
-        if (t == null) {
+        long epoch = Cells.offsetTimeEpochSecond(text);
+        if (epoch == Cells.NOT_A_TIME) {
+            epoch = Cells.takenEpochSecond(text, plan.zone(), plannedDay(si));
+        }
+        if (epoch == Cells.NOT_A_TIME) {
             log.add(Location.cell(display, row, name(takenCol)), Severity.WARNING, id, GradeMessage.TAKEN_UNREADABLE, text);
             return;
         }
-        long epoch = t.toEpochSecond();
         col.taken[si] = epoch;
         if (epoch < windowBegin[si] || epoch > windowEnd[si]) {
             PlannedSlot slot = plan.slots().get(si);
@@ -182,6 +195,14 @@ final class ReturnedData implements RowHandler {
             log.add(Location.cell(display, row, name(takenCol)), Severity.WARNING, id, GradeMessage.TAKEN_OUTSIDE_WINDOW,
                     text, slot.begin().toOffsetDateTime(), slot.end().toOffsetDateTime());
         }
+    }
+
+    /** The slot's planned day in the plan's zone (for a taken time of day), computed when first needed. */
+    private java.time.LocalDate plannedDay(int si) {
+        if (plannedDay[si] == null) {
+            plannedDay[si] = plan.slots().get(si).start().withZoneSameInstant(plan.zone()).toLocalDate();
+        }
+        return plannedDay[si];
     }
 
     private void reading(Collected col, int ci, int si, long row, String text, int column, String id) {

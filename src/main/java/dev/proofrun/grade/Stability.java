@@ -1,7 +1,11 @@
 package dev.proofrun.grade;
 
 import dev.proofrun.control.ChartPair;
+import java.math.BigDecimal;
+import java.math.MathContext;
+import java.math.RoundingMode;
 import java.util.List;
+import java.util.Locale;
 import java.util.OptionalDouble;
 
 /**
@@ -21,12 +25,48 @@ import java.util.OptionalDouble;
  * @param anovaF                 one-way ANOVA F between subgroups (empty for n = 1)
  * @param anovaP                 its p-value (empty for n = 1)
  * @param stable                 the finding
+ * @param chanceFloor            the smallest chance the simulation can give, 1/(S + 1) for S simulated stable
+ *                               studies; a chance equal to it means none of them reached the count, so the true
+ *                               chance is below it. 0 when the chance comes from a normal approximation
  */
 public record Stability(ChartPair charts, List<ChartSignal> signals, int locationSignalPoints,
         double expectedLocationByChance, double locationChance, int spreadSignalPoints, double expectedSpreadByChance,
-        double spreadChance, double stabilityRatio, OptionalDouble anovaF, OptionalDouble anovaP, boolean stable) {
+        double spreadChance, double stabilityRatio, OptionalDouble anovaF, OptionalDouble anovaP, boolean stable,
+        double chanceFloor) {
 
     public Stability {
         signals = List.copyOf(signals);
+    }
+
+    /** Whether {@link #locationChance} is the simulation's floor (the true chance is below it). */
+    public boolean locationAtFloor() {
+        return chanceFloor > 0 && locationChance <= chanceFloor;
+    }
+
+    /** Whether {@link #spreadChance} is the simulation's floor (the true chance is below it). */
+    public boolean spreadAtFloor() {
+        return chanceFloor > 0 && spreadChance <= chanceFloor;
+    }
+
+    /**
+     * The chance as people read it: "P = 0.708", or at the floor "P < 0.00050" (the floor to two significant
+     * digits, rounded up so the statement stays true).
+     *
+     * @param p       the chance
+     * @param atFloor whether it is the simulation's floor
+     * @param digits  the format of an ordinary value, e.g. "%.3f"
+     */
+    public static String chanceText(double p, boolean atFloor, String digits) {
+        return atFloor ? "P " + below(p) : "P = " + String.format(Locale.ROOT, digits, p);
+    }
+
+    /** "&lt; 0.00050" for a floor of 1/2001: the floor rounded up to two significant digits. */
+    public static String below(double floor) {
+        return "< " + upTwoDigits(floor);
+    }
+
+    /** v rounded up to two significant digits, in plain notation: 1/2001 → "0.00050", 1/401 → "0.0025". */
+    static String upTwoDigits(double v) {
+        return BigDecimal.valueOf(v).round(new MathContext(2, RoundingMode.CEILING)).toPlainString();
     }
 }

@@ -61,6 +61,7 @@ final class StabilityJudge {
         ChanceSignals chance = ChanceSignals.simulate(kind, n, k, rules);
         double pLocation = chance.locationTail(locationPoints);
         double pSpread = chance.spreadTail(spreadPoints);
+        double floor = chance.floor();
 
         double overall = overallSd(subgroups);
         double ratio = charts.sigmaWithin() > 0 ? overall / charts.sigmaWithin() : Double.POSITIVE_INFINITY;
@@ -77,13 +78,18 @@ final class StabilityJudge {
         String spr = kind.spread().id();
         if (signalled) {
             reasons.add(new Reason(Step.STABILITY, true, GradeMessage.REASON_UNSTABLE_SIGNALS.format(locationPoints, loc,
-                    spreadPoints, spr, k, chance.expectedLocation(), chance.expectedSpread(), pLocation, pSpread, describe(signals))));
+                    spreadPoints, spr, k, chance.expectedLocation(), chance.expectedSpread(),
+                    Stability.chanceText(pLocation, pLocation <= floor && floor > 0, "%.2g"),
+                    Stability.chanceText(pSpread, pSpread <= floor && floor > 0, "%.2g"), describe(signals))));
         } else if (signals.isEmpty()) {
             reasons.add(new Reason(Step.STABILITY, false, GradeMessage.REASON_STABLE_QUIET.format(loc, spr, k,
                     chance.expectedLocation() + chance.expectedSpread())));
         } else {
             reasons.add(new Reason(Step.STABILITY, false, GradeMessage.REASON_STABLE_CHANCE.format(locationPoints, loc,
-                    spreadPoints, spr, k, chance.expectedLocation(), chance.expectedSpread(), pLocation, pSpread, describe(signals))));
+                    spreadPoints, spr, k, chance.expectedLocation(), chance.expectedSpread(),
+                    Stability.chanceText(pLocation, pLocation <= floor && floor > 0, "%.3f"),
+                    Stability.chanceText(pSpread, pSpread <= floor && floor > 0, "%.3f"),
+                    describe(signals))));
         }
         if (between) {
             reasons.add(new Reason(Step.STABILITY, true,
@@ -94,7 +100,7 @@ final class StabilityJudge {
             reasons.add(new Reason(Step.STABILITY, false, GradeMessage.REASON_RATIO_INDIVIDUALS.format(ratio)));
         }
         return new Stability(charts, signals, locationPoints, chance.expectedLocation(), pLocation, spreadPoints,
-                chance.expectedSpread(), pSpread, ratio, f, p, !(signalled || between));
+                chance.expectedSpread(), pSpread, ratio, f, p, !(signalled || between), floor);
     }
 
     private static void place(ControlChart chart, List<String> slots, List<ChartSignal> out) {

@@ -9,30 +9,42 @@ import dev.proofrun.sheet.layout.Typeface;
 
 /**
  * The capability argument in one picture: a scale of the index, the requirement c₀ as a heavy vertical line,
- * the estimate as a filled square and the confidence interval from the lower to the upper bound as a bar.
- * Demonstrated means the whole bar's left end is at or right of the line.
+ * the estimate as a filled square, and a bar from the one-sided lower confidence bound to the estimate (to the
+ * upper bound when the grade computed it, i.e. for an estimate below c₀). Demonstrated means the bar's left
+ * end is at or right of the line.
  */
 final class BoundBlock implements Block {
 
     private static final float HEIGHT = 70f;
+    private static final float NOTE = 12f;
 
     private final IndexEvidence e;
+    private final boolean notValid;
     private final Typeface regular;
     private final Typeface bold;
 
-    BoundBlock(IndexEvidence e, Typeface regular, Typeface bold) {
+    /**
+     * @param notValid the verdict is not-valid: the picture then says in its caption that the figures describe
+     *                 the study's past, not the process, so the bar is not read as a capability statement
+     */
+    BoundBlock(IndexEvidence e, boolean notValid, Typeface regular, Typeface bold) {
         this.e = e;
+        this.notValid = notValid;
         this.regular = regular;
         this.bold = bold;
     }
 
     @Override
     public float height(float width) {
-        return HEIGHT;
+        return HEIGHT + (notValid ? NOTE : 0);
     }
 
     @Override
     public void draw(Canvas c, float left, float top, float width) {
+        if (notValid) {
+            c.text(bold, 7.5f, left + 46, top - 8, "Not valid: these figures describe the study's past, not the process.");
+            top -= NOTE;
+        }
         String sym = e.index().symbol();
         double lo = min(e.lower(), e.required(), e.estimate());
         double hi = max(e.upper(), e.required(), e.estimate());
@@ -46,23 +58,34 @@ final class BoundBlock implements Block {
             c.textCentred(regular, 7.5f, x, area.bottom() - 11, Fmt.index(t));
         }
         float mid = area.y(0.5);
-        if (Double.isFinite(e.lower()) && Double.isFinite(e.upper())) {
+        // the bar runs from the lower bound (what the verdict compares with c0) to the upper bound when it was
+        // computed (not-demonstrated), else to the estimate; each bound is one-sided at the stated confidence
+        boolean hasUpper = Double.isFinite(e.upper());
+        if (Double.isFinite(e.lower())) {
+            double end = hasUpper ? e.upper() : e.estimate();
             c.pen(Pen.solid(2.2f));
-            c.line(area.x(e.lower()), mid, area.x(e.upper()), mid);
+            c.line(area.x(e.lower()), mid, area.x(end), mid);
             c.pen(Pen.solid(0.9f));
             c.line(area.x(e.lower()), mid - 5, area.x(e.lower()), mid + 5);
-            c.line(area.x(e.upper()), mid - 5, area.x(e.upper()), mid + 5);
             c.textCentred(regular, 7.5f, area.x(e.lower()), mid + 8, "lower " + Fmt.index(e.lower()));
-            c.textCentred(regular, 7.5f, area.x(e.upper()), mid + 8, "upper " + Fmt.index(e.upper()));
+            if (hasUpper) {
+                c.line(area.x(e.upper()), mid - 5, area.x(e.upper()), mid + 5);
+                c.textCentred(regular, 7.5f, area.x(e.upper()), mid + 8, "upper " + Fmt.index(e.upper()));
+            }
         }
         c.marker(Canvas.Marker.SQUARE, area.x(e.estimate()), mid, 5f);
         c.pen(Pen.dashed(1.4f, 3, 1.5f));
         float rx = area.x(e.required());
-        c.line(rx, area.bottom(), rx, area.top() + 4);
-        c.text(bold, 7.5f, rx + 3, area.top() + 1, "required " + Fmt.index(e.required()));
+        // the requirement's label sits above the bounds' labels, so the two never overlap
+        c.line(rx, area.bottom(), rx, area.top() + 13);
+        c.text(bold, 7.5f, rx + 3, area.top() + 10, "required " + Fmt.index(e.required()));
         c.text(regular, 7.5f, left, mid - 2.6f, sym);
+        String conf = Fmt.fixed(e.confidence() * 100, 0) + " %";
+        String bar = hasUpper ? "bar: lower to upper " + conf + " bound (each one-sided)"
+                : "bar: lower " + conf + " bound (one-sided) to the estimate";
         c.text(regular, 7.5f, area.left(), top - HEIGHT + 1, "square: estimate " + Fmt.index(e.estimate())
-                + "; bar: " + Fmt.fixed(e.confidence() * 100, 0) + " % confidence bounds; dashed: the requirement");
+                + "; " + bar + "; dashed: the requirement");
+
     }
 
     private static double min(double... v) {

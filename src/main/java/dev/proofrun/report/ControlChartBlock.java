@@ -65,10 +65,12 @@ final class ControlChartBlock implements Block {
             steps(c, area, chart.pointLcl(), first, limit);
             c.text(regular, 7.5f, area.right() + 3, area.y(chart.ucl()) - 2.6f, "UCL varies");
         } else {
-            area.hline(c, limit, chart.ucl(), regular, "UCL " + Fmt.value(chart.ucl()));
-            area.hline(c, limit, chart.lcl(), regular, "LCL " + Fmt.value(chart.lcl()));
+            int d = Fmt.decimalsForSpan(chart.ucl() - chart.lcl());
+            area.hline(c, limit, chart.ucl(), regular, "UCL " + Fmt.value(chart.ucl(), d));
+            area.hline(c, limit, chart.lcl(), regular, "LCL " + Fmt.value(chart.lcl(), d));
         }
-        area.hline(c, Pen.solid(0.6f), chart.center(), regular, "CL " + Fmt.value(chart.center()));
+        int dc = varying ? -1 : Fmt.decimalsForSpan(chart.ucl() - chart.lcl());
+        area.hline(c, Pen.solid(0.6f), chart.center(), regular, "CL " + Fmt.value(chart.center(), dc));
 
         c.pen(Pen.solid(0.5f));
         if (count <= DETAIL) {

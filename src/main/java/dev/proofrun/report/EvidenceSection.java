@@ -41,7 +41,8 @@ final class EvidenceSection {
         flow.newPage();
         String unit = g.unit() == null || g.unit().isEmpty() ? "" : " (" + g.unit() + ")";
         flow.place(Paragraph.of(g.id() + "  " + g.name() + unit + ": " + g.verdict().id(), bold, 14));
-        flow.place(Paragraph.of(VerdictSection.gloss(g.verdict()) + ".", regular, 9));
+        String gloss = VerdictSection.gloss(g.verdict());
+        flow.place(Paragraph.of(Character.toUpperCase(gloss.charAt(0)) + gloss.substring(1) + ".", regular, 9));
         g.additionalSubgroups().ifPresent(k -> flow.place(Paragraph.of(String.format(Locale.ROOT,
                 "About %d more subgroups at the plan's frequency would likely settle it.", k), regular, 9)));
 
@@ -69,9 +70,9 @@ final class EvidenceSection {
             s.add(Block.space(4));
             s.add(t.header());
             s.add(t.row("location points signalling", st.locationSignalPoints() + " (by chance " + Fmt.fixed(st.expectedLocationByChance(), 1) + ")",
-                    "chance of as many", Fmt.p(st.locationChance())));
+                    "chance of as many", st.locationAtFloor() ? Stability.below(st.locationChance()) : Fmt.p(st.locationChance())));
             s.add(t.row("spread points beyond limits", st.spreadSignalPoints() + " (by chance " + Fmt.fixed(st.expectedSpreadByChance(), 1) + ")",
-                    "chance of as many", Fmt.p(st.spreadChance())));
+                    "chance of as many", st.spreadAtFloor() ? Stability.below(st.spreadChance()) : Fmt.p(st.spreadChance())));
             s.add(t.row("\u03c3 overall / \u03c3 within", Fmt.fixed(st.stabilityRatio(), 3), "ANOVA F (p)",
                     st.anovaF().isPresent() ? Fmt.fixed(st.anovaF().getAsDouble(), 2) + " (" + Fmt.p(st.anovaP().orElse(Double.NaN)) + ")" : Fmt.NONE));
             if (!st.signals().isEmpty()) {
@@ -107,7 +108,7 @@ final class EvidenceSection {
 
         List<Block> k = new ArrayList<>();
         if (g.judged() != null) {
-            k.add(new BoundBlock(g.judged(), regular, bold));
+            k.add(new BoundBlock(g.judged(), g.verdict() == dev.proofrun.grade.Verdict.NOT_VALID, regular, bold));
         }
         CapabilityResult f = g.capability();
         if (f != null) {

@@ -25,6 +25,25 @@ final class Fmt {
         return String.format(Locale.ROOT, "%." + decimals + "f", v);
     }
 
+    /**
+     * Decimals that show a span (e.g. UCL − LCL) to three significant digits, so that the limits and centre of
+     * one chart are printed alike: 2 − ⌊log10 span⌋, within 0–8; −1 when the span is not a positive number.
+     */
+    static int decimalsForSpan(double span) {
+        if (!(span > 0) || !Double.isFinite(span)) {
+            return -1;
+        }
+        return Math.max(0, Math.min(8, 2 - (int) Math.floor(Math.log10(span))));
+    }
+
+    /** A value with the given decimals, or as {@link #value(double)} when decimals is negative. */
+    static String value(double v, int decimals) {
+        if (decimals < 0 || !Double.isFinite(v)) {
+            return value(v);
+        }
+        return String.format(Locale.ROOT, "%." + decimals + "f", v);
+    }
+
     /** Parts per million: no decimals above 10, one below. */
     static String ppm(double v) {
         if (!Double.isFinite(v)) {

@@ -41,7 +41,7 @@ public final class GradeReport {
     public static void write(GradeResult result, StudyPlan plan, Paper paper, OutputStream out) {
         PageHeading heading = new PageHeading(plan.part().name(), "Grade report: returned file " + result.file(),
                 "Plan " + result.planId() + " @ " + result.revision(),
-                "Verdict " + result.verdict().id() + ". A statistical statement under assumptions; see page 1.",
+                "Part verdict: " + result.verdict().id() + ". A statistical statement under assumptions; see page 1.",
                 false);
         try (Pages pages = Pages.open(paper, heading)) {
             Flow flow = new Flow(pages);

@@ -4,6 +4,7 @@ import dev.proofrun.grade.CharacteristicGrade;
 import dev.proofrun.grade.GradeResult;
 import dev.proofrun.grade.Problem;
 import dev.proofrun.grade.Reason;
+import dev.proofrun.grade.Step;
 import dev.proofrun.grade.Verdict;
 import dev.proofrun.plan.StudyPlan;
 import dev.proofrun.sheet.layout.Block;
@@ -103,15 +104,23 @@ final class VerdictSection {
             return "";
         }
         var e = g.judged();
+        if (g.verdict() == Verdict.NOT_VALID) {
+            // an estimate beside "not-valid" would be read as a capability statement; the reasons say why not
+            return String.format(Locale.ROOT, " (%s required %s; no capability statement)", e.index().symbol(),
+                    Fmt.index(e.required()));
+        }
         return String.format(Locale.ROOT, " (%s estimate %s, lower bound %s, required %s)", e.index().symbol(),
                 Fmt.index(e.estimate()), Fmt.index(e.lower()), Fmt.index(e.required()));
     }
 
-    /** The reasons that decided the verdict; all of them when none is marked decisive. */
+    /**
+     * The reasons that decided the verdict, and for an inconclusive one the capability step's follow-up (how
+     * many more subgroups would settle it); the last reason when none is marked decisive.
+     */
     static List<Reason> decisive(CharacteristicGrade g) {
         List<Reason> out = new ArrayList<>();
         for (Reason r : g.reasons()) {
-            if (r.decisive()) {
+            if (r.decisive() || (g.verdict() == Verdict.INCONCLUSIVE && r.step() == Step.CAPABILITY)) {
                 out.add(r);
             }
         }

@@ -1,5 +1,7 @@
 package dev.proofrun.sheet;
 
+import dev.proofrun.text.FormulaGuard;
+
 /**
  * Keeps text in the fill-in files inert when a spreadsheet opens them.
  *
@@ -15,6 +17,9 @@ package dev.proofrun.sheet;
  *
  * <p>In the XLSX file the same cells are string cells with the "quote prefix" style instead: the value is
  * kept exactly, and the spreadsheet program keeps it as text even when the cell is edited.
+ *
+ * <p>The rule itself lives in {@link FormulaGuard} (package {@code text}), so that the grade reader, which may
+ * not use this package, applies the same one.
  */
 public final class CellText {
 
@@ -23,20 +28,16 @@ public final class CellText {
 
     /** Whether a spreadsheet could evaluate the text: it starts with = + - @, a tab or a carriage return. */
     public static boolean risky(String text) {
-        if (text.isEmpty()) {
-            return false;
-        }
-        char c = text.charAt(0);
-        return c == '=' || c == '+' || c == '-' || c == '@' || c == '\t' || c == '\r';
+        return FormulaGuard.risky(text);
     }
 
     /** The text, with a single quote in front when it is {@link #risky}. */
     public static String inert(String text) {
-        return risky(text) ? "'" + text : text;
+        return FormulaGuard.inert(text);
     }
 
     /** Undoes {@link #inert}: a leading quote before a risky character is removed. */
     public static String restore(String cell) {
-        return cell.length() > 1 && cell.charAt(0) == '\'' && risky(cell.substring(1)) ? cell.substring(1) : cell;
+        return FormulaGuard.restore(cell);
     }
 }

@@ -140,4 +140,18 @@ public class CapabilityAnalysisTest {
         assertEquals("rbar", m.get("sigmaMethod"));
         assertEquals(m.get("cpl"), m.get("cpk"));
     }
+
+    @Test
+    void withoutNormalityGivesTheSameFiguresAndNoTest() {
+        SpecLimits limits = SpecLimits.twoSided(11.97, 12.03);
+        CapabilityResult full = CapabilityAnalysis.of(shaft(), limits, 12.0, null, 0.95, BoundMethod.EXACT);
+        CapabilityResult lean = CapabilityAnalysis.withoutNormality(shaft(), limits, 12.0, null, 0.95, BoundMethod.EXACT);
+        assertTrue(full.normality().isPresent());
+        assertFalse(lean.normality().isPresent());
+        assertEquals(full.indices(), lean.indices());
+        assertEquals(full.lower(), lean.lower());
+        assertEquals(full.ppm(), lean.ppm());
+        assertEquals(full.within(), lean.within());
+        assertEquals(full.sigmaOverall(), lean.sigmaOverall(), 0.0);
+    }
 }

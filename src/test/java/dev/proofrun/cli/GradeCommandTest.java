@@ -85,6 +85,13 @@ class GradeCommandTest {
         JsonNode f7 = root.get("characteristics").get(2);
         assertTrue(f7.at("/control/signals").size() > 0);
         assertTrue(f7.at("/control/signals/0/rule").asText().matches("[a-z-]+"));
+        // the chance stays numeric; the demo's step goes beyond every simulated stable study, so its P is the floor
+        // 1/(S + 1) (S = 2000 simulated studies of 25 subgroups of 5) and the text says "P < 0.00050"
+        assertEquals(1.0 / 2001, f7.at("/control/chance/floor").asDouble(), 1e-15);
+        assertEquals(1.0 / 2001, f7.at("/control/chance/location/p").asDouble(), 1e-15);
+        assertTrue(f7.at("/control/chance/location/points").asInt() > 0);
+        assertTrue(f7.at("/reasons/1").asText().contains("P < 0.00050"), f7.at("/reasons/1").asText());
+        assertEquals(1.0, c.at("/control/chance/location/p").asDouble(), 0.0); // D1 is quiet
     }
 
     @Test
@@ -99,5 +106,16 @@ class GradeCommandTest {
         Run missing = run("grade", plan.toString(), dir.resolve("nope.csv").toString());
         assertEquals(2, missing.code());
         assertEquals(2, run("demo", "--out", dir.toString()).code());
+    }
+
+    @Test
+    void aDraftPlanIsRefusedWithOneLineAndNothingPrinted() throws Exception {
+        Path draft = dir.resolve("draft-plan.json");
+        dev.proofrun.plan.PlanFiles.write(draft, dev.proofrun.plan.DemoPlan.draft());
+        Run r = run("grade", draft.toString(), data.toString());
+        assertEquals(2, r.code());
+        assertEquals("", r.out());
+        assertEquals(1, r.err().strip().lines().count(), r.err());
+        assertTrue(r.err().contains("the plan is a draft; grade against the issued plan"), r.err());
     }
 }

@@ -40,6 +40,16 @@ class GradeReportCommandTest {
         try (PDDocument doc = Loader.loadPDF(Files.readAllBytes(pdf))) {
             String text = new PDFTextStripper().getText(doc);
             assertTrue(text.contains("Verdict for the part:"), text);
+            PDFTextStripper firstPage = new PDFTextStripper();
+            firstPage.setStartPage(1);
+            firstPage.setEndPage(1);
+            String first = firstPage.getText(doc).replaceAll("\\s+", " ");
+            // the demo: R4 inconclusive says in the verdict box how many more subgroups would settle it; F7 is
+            // not valid and shows no estimate beside its verdict; every page's foot names the part's verdict
+            assertTrue(first.contains("more subgroups"), first);
+            assertTrue(first.contains("F7 seat push-out force: not-valid (Cpk required 1.33; no capability statement)"), first);
+            assertTrue(text.contains("Not valid: these figures describe the study's past, not the process."), text);
+            assertTrue(text.contains("Part verdict: not-valid. A statistical statement under assumptions"), text);
             assertTrue(doc.getNumberOfPages() >= 1 + DemoPlan.create().characteristics().size());
         }
     }
@@ -53,5 +63,37 @@ class GradeReportCommandTest {
         assertEquals(2, run("grade", plan.toString(), data.toString(), "--report", pdf.toString()));
         assertTrue(err.toString().contains("could not write the grade report"), err.toString());
         assertFalse(err.toString().contains("Exception"), err.toString());
+    }
+
+    @Test
+    void paperLetterGivesLetterPagesAndAnUnknownPaperWritesNothing() throws IOException {
+        assertEquals(0, run("demo", "--out", tmp.toString()), err.toString());
+        Path plan = tmp.resolve(DemoPlan.FILE_NAME);
+        Path data = tmp.resolve(DemoCommand.RETURNED);
+        Path letter = tmp.resolve("letter.pdf");
+        Path a4 = tmp.resolve("a4.pdf");
+        assertEquals(0, run("grade", plan.toString(), data.toString(), "--report", letter.toString(), "--paper", "letter"),
+                err.toString());
+        assertEquals(0, run("grade", plan.toString(), data.toString(), "--report", a4.toString()), err.toString());
+        try (PDDocument doc = Loader.loadPDF(Files.readAllBytes(letter))) {
+            for (var page : doc.getPages()) {
+                // US Letter 8.5 in x 11 in = 612 pt x 792 pt
+                assertEquals(612f, page.getMediaBox().getWidth(), 0.01f);
+                assertEquals(792f, page.getMediaBox().getHeight(), 0.01f);
+            }
+        }
+        try (PDDocument doc = Loader.loadPDF(Files.readAllBytes(a4))) {
+            // ISO 216 A4 210 mm x 297 mm = 595.28 pt x 841.89 pt (the default)
+            assertEquals(595.28f, doc.getPage(0).getMediaBox().getWidth(), 0.01f);
+            assertEquals(841.89f, doc.getPage(0).getMediaBox().getHeight(), 0.01f);
+        }
+        Path a3 = tmp.resolve("a3.pdf");
+        out.getBuffer().setLength(0);
+        err.getBuffer().setLength(0);
+        assertEquals(2, run("grade", plan.toString(), data.toString(), "--report", a3.toString(), "--paper", "a3"));
+        assertEquals(1, err.toString().strip().lines().count(), err.toString());
+        assertTrue(err.toString().contains("a3"), err.toString());
+        assertEquals("", out.toString(), "no partial output");
+        assertFalse(Files.exists(a3));
     }
 }

@@ -146,4 +146,49 @@ class ReturnedFileTest {
         assertTrue(Double.isNaN(Cells.number("ca. 10")));
         assertTrue(Double.isNaN(Cells.number("1e")));
     }
+
+    @Test
+    void extraReadingAndUnreadableTimeInTheFillInForm() throws IOException {
+        // a third reading column although the plan's n is 2, and a taken time nobody can read
+        String csv = "plan,slot,characteristic,planned,taken,lot,operator,x1,x2,x3,remark\n"
+                + REF + ",S01,D1,,06:05,,,10.001,10.002,10.003,\n"   // row 2: three readings
+                + REF + ",S02,D1,,half past six,,,10.001,10.002,,\n" // row 3: taken unreadable
+                + REF + ",S03,D1,,07:00,,,10.001,10.002,,\n";
+        List<String> p = problems(grade("extra.csv", csv));
+        String[] expected = {
+            "extra.csv, row 3, column taken: warning: 'half past six' is not a time (ISO-8601, yyyy-MM-dd HH:mm, or HH:mm on the planned day)",
+            "extra.csv, row 2: error: slot S01 of D1 has 3 readings, the plan asks for 2; the subgroup is not graded",
+        };
+        for (String e : expected) {
+            assertTrue(p.contains(e), () -> "missing: " + e + "\nin " + p);
+        }
+        assertEquals(expected.length, p.size(), p.toString());
+    }
+
+    @Test
+    void unusableHeadersAndAnUnclosedQuoteAreOneLineErrors() {
+        UserException noCharacteristic = assertThrows(UserException.class, () -> grade("cols.csv",
+                "plan,slot,taken,x1,x2\n" + REF + ",S01,06:00,10.0,10.0\n"));
+        assertEquals("cols.csv, row 1: the header has no column 'characteristic'", noCharacteristic.getMessage());
+        UserException noReadings = assertThrows(UserException.class, () -> grade("noread.csv",
+                "plan,slot,characteristic,taken\n" + REF + ",S01,D1,06:00\n"));
+        assertEquals("noread.csv, row 1: the header has neither a 'value' column nor reading columns x1, x2, ...",
+                noReadings.getMessage());
+        UserException quote = assertThrows(UserException.class, () -> grade("quote.csv",
+                HEADER + REF + ",S01,D1,,06:05,,,10.001,10.002,\n" + REF + ",S02,D1,,06:30,,,\"10.001,10.002,\n"));
+        assertEquals("quote.csv, row 3: cannot read the file: a quoted field is not closed on its line", quote.getMessage());
+    }
+
+    @Test
+    void longFormNonNumericValueIsNamedAndItsSubgroupNotGraded() throws IOException {
+        String csv = "plan,slot,characteristic,taken,value\n"
+                + REF + ",S01,D1,06:01,10.001\n" + REF + ",S01,D1,06:01,n/a\n"
+                + REF + ",S02,D1,06:30,10.001\n" + REF + ",S02,D1,06:30,10.002\n"
+                + REF + ",S03,D1,07:00,10.001\n" + REF + ",S03,D1,07:00,10.002\n";
+        GradeResult r = grade("gauge.csv", csv);
+        List<String> p = problems(r);
+        assertTrue(p.contains("gauge.csv, row 3, column value: error: 'n/a' is not a number; the reading is missing"), p.toString());
+        assertTrue(p.contains("gauge.csv, row 2: error: slot S01 of D1 has 1 of 2 readings; the subgroup is not graded"), p.toString());
+        assertEquals(2, r.characteristics().get(0).completeness().completeSubgroups());
+    }
 }

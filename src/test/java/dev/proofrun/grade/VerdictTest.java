@@ -64,4 +64,26 @@ class VerdictTest {
         assertTrue(g.stability().locationSignalPoints() > g.stability().expectedLocationByChance());
         assertEquals(Step.STABILITY, g.reasons().stream().filter(Reason::decisive).findFirst().get().step());
     }
+
+    @Test
+    void largeStudyGradesTheShapeBesideTheChartsWithTheReasonsInOrder() {
+        // 12,000 subgroups of 5 = 60,000 readings: above CharacteristicGrader.PARALLEL_READINGS, so the shape step
+        // runs on its own thread; the reasons must still come in the order of the steps, each step present
+        int k = 12_000;
+        assertTrue(5L * k >= CharacteristicGrader.PARALLEL_READINGS);
+        GradingPlan plan = TestPlans.plan(5, k, TestPlans.bore());
+        Path f = dir.resolve("large.csv");
+        SimulatedReturn.writeCsv(plan, Map.of("D1", SimulatedReturn.Process.stable(10.0, 0.015)), 5L, f);
+        CharacteristicGrade g = Grader.grade(plan, f, "large.csv").characteristics().get(0);
+        assertEquals(Verdict.DEMONSTRATED, g.verdict(), g.reasons().toString());
+        for (int i = 1; i < g.reasons().size(); i++) {
+            assertTrue(g.reasons().get(i - 1).step().compareTo(g.reasons().get(i).step()) <= 0, g.reasons().toString());
+        }
+        for (Step step : Step.values()) {
+            assertTrue(g.reasons().stream().anyMatch(r -> r.step() == step), step + " missing: " + g.reasons());
+        }
+        // the same file graded again gives the same sentences (each step seeded on its own)
+        CharacteristicGrade again = Grader.grade(plan, f, "large.csv").characteristics().get(0);
+        assertEquals(g.reasons(), again.reasons());
+    }
 }
