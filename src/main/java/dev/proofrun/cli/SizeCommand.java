@@ -139,12 +139,13 @@ public final class SizeCommand implements Callable<Integer> {
         if (target == null) {
             throw new UserException(SizeMessage.TARGET_NEEDED);
         }
-        DesignTable table = StudyDesigner.design(request());
+        DesignRequest request = request();
+        DesignTable table = StudyDesigner.design(request);
         if (json) {
             ObjectMapper mapper = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
             out.println(mapper.writeValueAsString(SizeJson.of(table)));
         } else {
-            print(out, table);
+            print(out, table, request);
         }
         out.flush();
         return 0;
@@ -269,7 +270,7 @@ public final class SizeCommand implements Callable<Integer> {
         }
     }
 
-    private void print(PrintWriter out, DesignTable t) {
+    private void print(PrintWriter out, DesignTable t, DesignRequest request) {
         out.println("   n     k      N   power    c*      df  limited by      false alarm       detection");
         out.println("                                                          3σ   all rules    3σ   all rules");
         for (DesignRow r : t.rows()) {
@@ -281,10 +282,19 @@ public final class SizeCommand implements Callable<Integer> {
         out.println();
         out.println("Recommended: " + t.reason());
         out.println();
+        String symbol = request.requirement().index().symbol();
+        double c0 = request.requirement().minimum();
+        double c1 = request.expectation().index();
         out.println("Probability of demonstrating against the true index (recommended design):");
+        out.printf(Locale.ROOT, "  %6s  %11s%n", "true " + symbol, "probability");
         List<OcPoint> oc = t.operatingCharacteristic();
-        for (int i = 0; i < oc.size(); i += 4) {
-            out.printf(Locale.ROOT, "  %6.3f  %6.3f%n", oc.get(i).trueIndex(), oc.get(i).probability());
+        int grid = 0;
+        for (OcPoint p : oc) {
+            String note = p.trueIndex() == c0 ? "  the requirement: the customer's risk"
+                    : p.trueIndex() == c1 ? "  the expected process: the power" : "";
+            if (!note.isEmpty() || grid++ % 4 == 0) {
+                out.printf(Locale.ROOT, "  %8.3f  %11.3f%s%n", p.trueIndex(), p.probability(), note);
+            }
         }
         out.println();
         out.printf(Locale.ROOT, "Power against the number of subgroups (n = %d):%n", t.recommended().subgroupSize());

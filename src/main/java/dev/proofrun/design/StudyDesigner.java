@@ -8,6 +8,7 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
+import java.util.TreeSet;
 
 /**
  * Plans a capability study: for each candidate subgroup size n, the smallest number of subgroups k whose
@@ -111,9 +112,17 @@ public final class StudyDesigner {
         double hi = c1 + (c1 - c0);
         double keep = c1 / request.expectation().potentialOrIndex();
         StudyPower power = search.model(k);
-        List<OcPoint> points = new ArrayList<>(OC_POINTS);
+        // an even grid, plus c0 and c1 themselves: the curve's two readings that matter (the customer's
+        // risk at the requirement, the power at the expectation) are computed, not interpolated
+        TreeSet<Double> at = new TreeSet<>(List.of(c0, c1));
         for (int i = 0; i < OC_POINTS; i++) {
             double c = lo + (hi - lo) * i / (OC_POINTS - 1);
+            if (Math.abs(c - c0) > 1e-9 * c0 && Math.abs(c - c1) > 1e-9 * c1) {
+                at.add(c);
+            }
+        }
+        List<OcPoint> points = new ArrayList<>(at.size());
+        for (double c : at) {
             points.add(new OcPoint(c, power.power(c, c / keep)));
         }
         return points;

@@ -40,6 +40,17 @@ class SizeCommandTest {
     }
 
     @Test
+    void theTextNamesTheRisksAtTheRequirementAndTheExpectation() {
+        Run r = run("size", "--target", "1.33", "--expected", "1.67", "--expected-cp", "2.0", "--subgroup-size", "5");
+        assertEquals(0, r.code(), r.err());
+        assertTrue(r.out().contains("true Cpk  probability"), r.out());
+        // the probability printed at the expectation is the recommended row's power (captured as group 1)
+        assertTrue(r.out().matches("(?s).*\\n\\s+1\\.330\\s+0\\.0\\d\\d  the requirement: the customer's risk\\n.*"), r.out());
+        assertTrue(r.out().matches("(?s).*\\n\\*\\s+5\\s+\\d+\\s+\\d+\\s+(0\\.\\d{3}) .*\\n\\s+1\\.670\\s+\\1  the expected process: "
+                + "the power\\n.*"), r.out());
+    }
+
+    @Test
     void limitsMeanAndSdWork() {
         Run r = run("size", "--target", "1.33", "--lsl", "9.90", "--usl", "10.10", "--mean", "10.01", "--sd", "0.018",
                 "--subgroup-size", "5");
