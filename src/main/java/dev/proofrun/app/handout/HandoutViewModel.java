@@ -96,7 +96,9 @@ public final class HandoutViewModel extends StepViewModel {
             }
             return issued.get().isPresent() ? "" : AppMessage.HANDOUT_ISSUE.format();
         }, composed, issued, session.baseProperty()));
-        composed.addListener((o, a, b) -> exported.set(null));
+        // a new base (another plan, or a new revision) makes the exported files someone else's; no listener
+        // on the composed plan itself, which would compose and fingerprint it on every edit of any step
+        session.baseProperty().addListener((o, a, b) -> exported.set(null));
     }
 
     @Override
@@ -158,6 +160,12 @@ public final class HandoutViewModel extends StepViewModel {
         return issued;
     }
 
+    /**
+     * The base, when it is issued and the steps describe exactly it. Equal plans have equal fingerprints, so
+     * a plan equal to the base (apart from state and revision) needs no fingerprint; otherwise the
+     * fingerprint is taken once per distinct plan (the rail asks on every edit of any step, and most edits
+     * leave the plan as it was or return to it).
+     */
     private Optional<StudyPlan> computeIssued() {
         StudyPlan base = session.baseProperty().get();
         Optional<StudyPlan> now = composed.get().plan();
@@ -165,7 +173,21 @@ public final class HandoutViewModel extends StepViewModel {
             return Optional.empty();
         }
         StudyPlan same = withSupersedes(now.get(), base.supersedes());
-        return PlanFiles.fingerprint(same).equals(base.revision().orElse("")) ? Optional.of(base) : Optional.empty();
+        if (same.equals(withSupersedes(base, base.supersedes()))) {
+            return Optional.of(base);
+        }
+        return fingerprintOf(same).equals(base.revision().orElse("")) ? Optional.of(base) : Optional.empty();
+    }
+
+    private StudyPlan fingerprinted;
+    private String fingerprint;
+
+    private String fingerprintOf(StudyPlan plan) {
+        if (!plan.equals(fingerprinted)) {
+            fingerprint = PlanFiles.fingerprint(plan);
+            fingerprinted = plan;
+        }
+        return fingerprint;
     }
 
     private static StudyPlan withSupersedes(StudyPlan p, Optional<String> supersedes) {
