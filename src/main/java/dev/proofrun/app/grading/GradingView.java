@@ -207,7 +207,6 @@ public final class GradingView implements StepView {
             // the sentence under "4 Capable?" already gives the index, its bound and the requirement; this
             // line adds only what it leaves out: the model the bound was taken under
             Label idx = new Label("Bound taken under the " + e.model().id() + " model");
-            idx.getStyleClass().add("pr-fine");
             idx.setId("index-evidence");
             chain.getChildren().add(idx);
         }

@@ -21,8 +21,16 @@ public final class Tables {
      * @param headerEm the height of the column headers, in em
      */
     public static void fitToRows(TableView<?> table, double headerEm, int minRows, int maxRows) {
+        table.setFixedCellSize(Em.of(ROW_EM));
+        fitHeight(table, headerEm, minRows, maxRows);
+    }
+
+    /**
+     * {@link #fitToRows} without fixing the row height, for tables edited in place (the editing field
+     * keeps its own height): only the height follows the rows.
+     */
+    public static void fitHeight(TableView<?> table, double headerEm, int minRows, int maxRows) {
         double row = Em.of(ROW_EM);
-        table.setFixedCellSize(row);
         table.prefHeightProperty().bind(Bindings.createDoubleBinding(
                 () -> Em.of(headerEm) + row * Math.max(minRows, Math.min(maxRows, table.getItems().size())) + 2,
                 Bindings.size(table.getItems())));
