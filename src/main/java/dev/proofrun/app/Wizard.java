@@ -48,7 +48,8 @@ public final class Wizard {
         goal = new GoalViewModel(session.draft(), session.baseProperty());
         sizing = new SizingViewModel(session.draft(), goal, Background.fx("proofrun-design"));
         timing = new TimingViewModel(session.draft(), sizing.designBinding(), Background.fx("proofrun-schedule"));
-        handout = new HandoutViewModel(session, goal, sizing, timing, Background.fx("proofrun-preview"));
+        handout = new HandoutViewModel(session, goal, sizing, timing, Background.fx("proofrun-preview"),
+                Background.fx("proofrun-plan-file"));
         if (host != null) {
             handout.setOpener(host::showDocument);
         }
@@ -75,7 +76,8 @@ public final class Wizard {
     /** True while a step computes in the background. */
     public boolean busy() {
         return sizing.busyProperty().get() || timing.busyProperty().get() || handout.busyProperty().get()
-                || handout.exportingProperty().get() || grading.busyProperty().get() || grading.reportingProperty().get();
+                || handout.exportingProperty().get()
+                || handout.issuingProperty().get() || grading.busyProperty().get() || grading.reportingProperty().get();
     }
 
     public Session session() {

@@ -53,7 +53,14 @@ public final class GoalView implements StepView {
             protected void updateItem(IndexKind k, boolean empty) {
                 super.updateItem(k, empty);
                 setText(empty || k == null ? null : k.symbol());
-                setTooltip(empty || k == null ? null : IndexTooltips.tooltip(IndexTip.of(k).english()));
+                if (empty || k == null) {
+                    setTooltip(null);
+                } else if (getTooltip() == null) {
+                    setTooltip(IndexTooltips.tooltip(IndexTip.of(k).english()));
+                } else {
+                    // the cell's own tooltip, not a new one on every update
+                    getTooltip().setText(IndexTip.of(k).english());
+                }
             }
         });
         index.setTooltip(IndexTooltips.tooltip(""));

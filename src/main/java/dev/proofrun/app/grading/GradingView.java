@@ -204,9 +204,9 @@ public final class GradingView implements StepView {
         }
         IndexEvidence e = g.judged();
         if (e != null) {
-            Label idx = IndexTooltips.follow(new Label(String.format(Locale.ROOT,
-                    "%s = %.3f, lower %.0f %% bound %.3f, required %.3f (model: %s)",
-                    e.index().symbol(), e.estimate(), 100 * e.confidence(), e.lower(), e.required(), e.model().id())));
+            // the sentence under "4 Capable?" already gives the index, its bound and the requirement; this
+            // line adds only what it leaves out: the model the bound was taken under
+            Label idx = new Label("Bound taken under the " + e.model().id() + " model");
             idx.setId("index-evidence");
             chain.getChildren().add(idx);
         }

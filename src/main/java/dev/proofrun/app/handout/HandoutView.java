@@ -38,7 +38,8 @@ public final class HandoutView implements StepView {
         issue.getStyleClass().add("pr-primary");
         issue.setOnAction(e -> vm.issue());
         issue.disableProperty().bind(Bindings.createBooleanBinding(() -> vm.composedBinding().get().plan().isEmpty()
-                || vm.issuedBinding().get().isPresent(), vm.composedBinding(), vm.issuedBinding()));
+                || vm.issuedBinding().get().isPresent() || vm.issuingProperty().get(), vm.composedBinding(),
+                vm.issuedBinding(), vm.issuingProperty()));
         Label message = new Label();
         message.setId("handout-message");
         message.setWrapText(true);

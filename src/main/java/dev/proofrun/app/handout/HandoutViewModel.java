@@ -58,12 +58,14 @@ public final class HandoutViewModel extends StepViewModel {
     private final ObservableList<Image> pages = FXCollections.observableArrayList();
     private final BooleanProperty busy = new SimpleBooleanProperty(this, "busy", false);
     private final BooleanProperty exporting = new SimpleBooleanProperty(this, "exporting", false);
+    private final BooleanProperty issuing = new SimpleBooleanProperty(this, "issuing", false);
     private final StringProperty message = new SimpleStringProperty(this, "message", "");
     private final ObjectProperty<SheetFiles.Written> exported = new SimpleObjectProperty<>(this, "exported");
     private final StringBinding state;
     private final ObjectBinding<Optional<StudyPlan>> issued;
     private Consumer<String> opener = uri -> { };
     private final Background background;
+    private final Background files;
     private Background.Job preview;
     private long generation;
 
@@ -71,10 +73,15 @@ public final class HandoutViewModel extends StepViewModel {
     public record Composed(Optional<StudyPlan> plan, String problem) {
     }
 
+    /**
+     * @param background renders the sheet preview and writes the exported files
+     * @param files      issues and writes the plan file (apart, so an issue does not wait for a preview)
+     */
     public HandoutViewModel(Session session, GoalViewModel goal, SizingViewModel sizing, TimingViewModel timing,
-            Background background) {
+            Background background, Background files) {
         this.session = session;
         this.background = background;
+        this.files = files;
         this.goal = goal;
         this.sizing = sizing;
         this.timing = timing;
@@ -89,7 +96,9 @@ public final class HandoutViewModel extends StepViewModel {
             }
             return issued.get().isPresent() ? "" : AppMessage.HANDOUT_ISSUE.format();
         }, composed, issued, session.baseProperty()));
-        composed.addListener((o, a, b) -> exported.set(null));
+        // a new base (another plan, or a new revision) makes the exported files someone else's; no listener
+        // on the composed plan itself, which would compose and fingerprint it on every edit of any step
+        session.baseProperty().addListener((o, a, b) -> exported.set(null));
     }
 
     @Override
@@ -151,6 +160,12 @@ public final class HandoutViewModel extends StepViewModel {
         return issued;
     }
 
+    /**
+     * The base, when it is issued and the steps describe exactly it. Equal plans have equal fingerprints, so
+     * a plan equal to the base (apart from state and revision) needs no fingerprint; otherwise the
+     * fingerprint is taken once per distinct plan (the rail asks on every edit of any step, and most edits
+     * leave the plan as it was or return to it).
+     */
     private Optional<StudyPlan> computeIssued() {
         StudyPlan base = session.baseProperty().get();
         Optional<StudyPlan> now = composed.get().plan();
@@ -158,7 +173,21 @@ public final class HandoutViewModel extends StepViewModel {
             return Optional.empty();
         }
         StudyPlan same = withSupersedes(now.get(), base.supersedes());
-        return PlanFiles.fingerprint(same).equals(base.revision().orElse("")) ? Optional.of(base) : Optional.empty();
+        if (same.equals(withSupersedes(base, base.supersedes()))) {
+            return Optional.of(base);
+        }
+        return fingerprintOf(same).equals(base.revision().orElse("")) ? Optional.of(base) : Optional.empty();
+    }
+
+    private StudyPlan fingerprinted;
+    private String fingerprint;
+
+    private String fingerprintOf(StudyPlan plan) {
+        if (!plan.equals(fingerprinted)) {
+            fingerprint = PlanFiles.fingerprint(plan);
+            fingerprinted = plan;
+        }
+        return fingerprint;
     }
 
     private static StudyPlan withSupersedes(StudyPlan p, Optional<String> supersedes) {
@@ -214,8 +243,18 @@ public final class HandoutViewModel extends StepViewModel {
     /**
      * Issues what the steps describe and writes it to the plan file (a new plan goes to the plans folder as
      * {@code <id>.json}). A changed issued plan becomes a new revision that supersedes the old one.
+     *
+     * <p>The fingerprint and the synced write run in the background ({@link #issuingProperty()} is true
+     * meanwhile); the revision appears when the file is written, and a failure is said in
+     * {@link #messageProperty()}. Edits made meanwhile are kept as unsaved (see {@link Session#adopt}); if
+     * another plan was opened meanwhile, only the message tells where the issued plan went.
+     *
+     * @return true when the issue was started (or the plan is already issued as it stands)
      */
     public boolean issue() {
+        if (issuing.get()) {
+            return false;
+        }
         Optional<StudyPlan> now = composed.get().plan();
         if (now.isEmpty()) {
             message.set(getMissing());
@@ -225,25 +264,41 @@ public final class HandoutViewModel extends StepViewModel {
             message.set(AppMessage.HANDOUT_ALREADY.format(issuedNow().get().revision().orElse("")));
             return true;
         }
-        StudyPlan draft = now.get();
         StudyPlan base = session.baseProperty().get();
-        if (base != null && base.isIssued()) {
-            draft = withSupersedes(draft, base.revision());
-        }
-        try {
+        StudyPlan draft = base != null && base.isIssued() ? withSupersedes(now.get(), base.revision()) : now.get();
+        Path planFile = session.draft().planFileProperty().get();
+        Path file = planFile != null ? planFile : session.home().plansFolder().resolve(draft.id() + ".json");
+        int editsAtStart = session.draft().editsProperty().get();
+        int openedAtStart = session.openedCount();
+        issuing.set(true);
+        message.set(AppMessage.HANDOUT_ISSUING.format(file.getFileName()));
+        files.submit(() -> {
             StudyPlan issued = PlanFiles.issue(draft);
-            Path file = session.draft().planFileProperty().get();
-            if (file == null) {
-                file = session.home().plansFolder().resolve(issued.id() + ".json");
+            return new Written(session.write(file, issued), issued);
+        }, w -> {
+            issuing.set(false);
+            String revision = w.plan().revision().orElse("");
+            if (session.openedCount() != openedAtStart) {
+                message.set(AppMessage.HANDOUT_ISSUED_ELSEWHERE.format(revision, w.file()));
+                return;
             }
-            session.saved(file, issued);
-            message.set(AppMessage.HANDOUT_ISSUED_NOW.format(issued.revision().orElse(""), file.getFileName()));
+            session.adopt(w.file(), w.plan(), session.draft().editsProperty().get() != editsAtStart);
+            message.set(AppMessage.HANDOUT_ISSUED_NOW.format(revision, w.file().getFileName()));
             refreshPreview();
-            return true;
-        } catch (UserException | IllegalArgumentException e) {
-            message.set(e.getMessage());
-            return false;
-        }
+        }, ex -> {
+            issuing.set(false);
+            message.set(ex instanceof UserException || ex instanceof IllegalArgumentException ? ex.getMessage()
+                    : AppMessage.HANDOUT_ISSUE_FAILED.format(String.valueOf(ex.getMessage())));
+        });
+        return true;
+    }
+
+    private record Written(Path file, StudyPlan plan) {
+    }
+
+    /** True while the plan is being issued and written. */
+    public BooleanProperty issuingProperty() {
+        return issuing;
     }
 
     private String getMissing() {

@@ -49,7 +49,8 @@ public final class PartView implements StepView {
         TableView<CharacteristicDraft> table = new TableView<>(vm.rows());
         table.setId("characteristics");
         table.setEditable(true);
-        table.setPrefHeight(dev.proofrun.app.shell.Em.of(22.5));
+        // as tall as its rows: at least 6, at most 12 (then it scrolls); fewer blank rows to make and style
+        dev.proofrun.app.shell.Tables.fitHeight(table, 2.2, 6, 12);
         table.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY_FLEX_LAST_COLUMN);
         for (CharacteristicField f : CharacteristicField.values()) {
             TableColumn<CharacteristicDraft, String> c = new TableColumn<>(PartViewModel.label(f));

@@ -21,6 +21,7 @@ public final class Session {
     private final RecentPlans recent;
     private final DraftStore drafts;
     private final ObjectProperty<StudyPlan> base = new SimpleObjectProperty<>(this, "base");
+    private int opened;
 
     public Session(AppHome home) {
         this.home = Objects.requireNonNull(home, "home");
@@ -67,6 +68,7 @@ public final class Session {
     public boolean open(Path file) {
         Path p = file.toAbsolutePath().normalize();
         StudyPlan plan = PlanFiles.read(p);
+        opened++;
         base.set(plan);
         Optional<DraftSnapshot> newer = drafts.newerDraft(p);
         if (newer.isPresent()) {
@@ -90,6 +92,7 @@ public final class Session {
 
     /** Starts a new plan (a fresh draft, or the draft of a new plan left unsaved last time). */
     public boolean startNew() {
+        opened++;
         base.set(null);
         Optional<DraftSnapshot> left = drafts.newerDraft(null);
         if (left.isPresent()) {
@@ -102,19 +105,59 @@ public final class Session {
     }
 
     /**
+     * Counts the plans opened or started in this session: a job that began under one count and ends
+     * under another belongs to a draft that is no longer on screen.
+     */
+    public int openedCount() {
+        return opened;
+    }
+
+    /**
      * Writes a plan to its file, remembers it and drops the autosaved draft.
      *
      * @throws dev.proofrun.text.UserException when the file is protected (an issued plan) or cannot be written
      */
     public void saved(Path file, StudyPlan plan) {
+        Path p = write(file, plan);
+        adopt(p, plan, false);
+    }
+
+    /**
+     * The file work of saving, safe off the FX thread: writes the plan file (synced to disk) and puts it
+     * on top of the recent plans. The draft and the base are not touched; {@link #adopt} does that after.
+     *
+     * @return the file written, absolute and normalised
+     * @throws dev.proofrun.text.UserException when the file is protected (an issued plan) or cannot be written
+     */
+    public Path write(Path file, StudyPlan plan) {
         Path p = file.toAbsolutePath().normalize();
-        Path oldDraft = draft.planFileProperty().get();
         PlanFiles.write(p, plan);
-        drafts.discard(oldDraft);
-        drafts.discard(p);
-        base.set(plan);
-        draft.planFileProperty().set(p);
-        draft.markSaved();
         recent.remember(p);
+        return p;
+    }
+
+    /**
+     * On the FX thread, once {@link #write} has put the plan in its file: the plan becomes the base and
+     * the draft belongs to that file. When the user edited the draft while the file was written, those
+     * edits are not in the file: the draft stays unsaved and is written at once as the file's side file
+     * (so it is restored on opening); otherwise the autosaved drafts are dropped.
+     *
+     * @param file             the file as returned by {@link #write}
+     * @param editedMeanwhile  whether the draft changed after the plan was taken from it
+     */
+    public void adopt(Path file, StudyPlan plan, boolean editedMeanwhile) {
+        Path oldDraft = draft.planFileProperty().get();
+        base.set(plan);
+        draft.planFileProperty().set(file);
+        if (editedMeanwhile) {
+            autosave();
+            if (!file.equals(oldDraft)) {
+                drafts.discard(oldDraft);
+            }
+            return;
+        }
+        drafts.discard(oldDraft);
+        drafts.discard(file);
+        draft.markSaved();
     }
 }

@@ -35,6 +35,8 @@ public final class ShellView {
     private final BorderPane root = new BorderPane();
     private final StackPane stage = new StackPane();
     private final List<Button> railButtons = new ArrayList<>();
+    private boolean railPending;
+    private final java.util.Map<Integer, ScrollPane> pages = new java.util.HashMap<>();
 
     public ShellView(ShellViewModel vm, List<StepView> views) {
         if (views.size() != vm.steps().size()) {
@@ -75,7 +77,7 @@ public final class ShellView {
             // Tab stays in the step and the footer; the rail is one key away (Ctrl+1 … Ctrl+7)
             b.setFocusTraversable(false);
             b.setOnAction(e -> vm.goTo(index));
-            s.completeBinding().addListener((obs, was, now) -> styleRail());
+            s.completeBinding().addListener(obs -> restyleRail());
             railButtons.add(b);
             rail.getChildren().add(b);
         }
@@ -88,6 +90,20 @@ public final class ShellView {
         rail.getChildren().addAll(fill, dirty);
         styleRail();
         return rail;
+    }
+
+    /**
+     * Restyles the rail once, after the event that changed a step's completeness: one background answer or
+     * one edit can change several inputs of a step in a row, and each would make the step check itself.
+     */
+    private void restyleRail() {
+        if (!railPending) {
+            railPending = true;
+            javafx.application.Platform.runLater(() -> {
+                railPending = false;
+                styleRail();
+            });
+        }
     }
 
     private void styleRail() {
@@ -132,8 +148,29 @@ public final class ShellView {
         return bar;
     }
 
+    /**
+     * Shows the step's page. A page is built and put in the scene on its first showing and then stays
+     * there, hidden while another step is shown: showing it again does not make its skins or apply the
+     * style sheet to it again (a page taken out of the scene and put back gets all its CSS again).
+     */
     private void show(int index) {
         StepView v = views.get(index);
+        ScrollPane shown = pages.get(index);
+        if (shown == null) {
+            shown = page(index, v);
+            pages.put(index, shown);
+            stage.getChildren().add(shown);
+        }
+        for (Node p : stage.getChildren()) {
+            boolean current = p == shown;
+            p.setVisible(current);
+            p.setManaged(current);
+        }
+        styleRail();
+        focusFirst(index, v.firstFocus());
+    }
+
+    private ScrollPane page(int index, StepView v) {
         StepViewModel s = vm.steps().get(index);
         Label title = new Label((index + 1) + " · " + s.title());
         title.getStyleClass().add("pr-step-title");
@@ -146,9 +183,7 @@ public final class ShellView {
         ScrollPane scroll = new ScrollPane(page);
         scroll.setFitToWidth(true);
         scroll.getStyleClass().add("pr-scroll");
-        stage.getChildren().setAll(scroll);
-        styleRail();
-        focusFirst(index, v.firstFocus());
+        return scroll;
     }
 
     /**

@@ -60,7 +60,8 @@ public final class SizingView implements StepView {
 
         table.setId("designs");
         table.setItems(vm.rows());
-        table.setPrefHeight(dev.proofrun.app.shell.Em.of(22.5));
+        // two-line column headers; as tall as the candidate designs, no empty rows to make and style
+        dev.proofrun.app.shell.Tables.fitToRows(table, 3.6, 3, 10);
         table.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY_FLEX_LAST_COLUMN);
         table.getColumns().addAll(List.of(
                 column("n", "Subgroup size n: consecutive parts taken at each slot", r -> Integer.toString(r.subgroupSize())),

@@ -1,0 +1,131 @@
+package dev.proofrun.app.handout;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertNotEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import dev.proofrun.app.goal.GoalViewModel;
+import dev.proofrun.app.session.AppHome;
+import dev.proofrun.app.session.Background;
+import dev.proofrun.app.session.DraftField;
+import dev.proofrun.app.session.DraftSnapshot;
+import dev.proofrun.app.session.Session;
+import dev.proofrun.app.sizing.SizingViewModel;
+import dev.proofrun.app.timing.TimingViewModel;
+import dev.proofrun.plan.PlanFiles;
+import dev.proofrun.plan.StudyPlan;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.concurrent.Callable;
+import java.util.function.Consumer;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * Issuing writes the plan file in the background: the revision appears when the file is written, edits
+ * made meanwhile stay unsaved and autosaved, and a failed write is said inline.
+ */
+class HandoutViewModelTest {
+
+    /** Holds the submitted jobs until {@link #runAll()}: "the file is being written" for as long as we like. */
+    private static final class Held implements Background {
+        private final List<Runnable> jobs = new ArrayList<>();
+
+        @Override
+        public <T> Job submit(Callable<T> work, Consumer<T> done, Consumer<Throwable> failed) {
+            jobs.add(() -> Background.inline().submit(work, done, failed));
+            return () -> { };
+        }
+
+        void runAll() {
+            List<Runnable> now = new ArrayList<>(jobs);
+            jobs.clear();
+            now.forEach(Runnable::run);
+        }
+
+        int waiting() {
+            return jobs.size();
+        }
+    }
+
+    @TempDir
+    Path home;
+
+    private final Held files = new Held();
+    private Session session;
+    private HandoutViewModel vm;
+    private Path planFile;
+
+    private void openDemo() {
+        session = new Session(new AppHome(home, home.resolve("plans")));
+        // built before the plan is opened, as the wizard does
+        GoalViewModel goal = new GoalViewModel(session.draft(), session.baseProperty());
+        SizingViewModel sizing = new SizingViewModel(session.draft(), goal, Background.inline());
+        TimingViewModel timing = new TimingViewModel(session.draft(), sizing.designBinding(), Background.inline());
+        // previews are not drawn here (they need the toolkit): their jobs are held and never run
+        vm = new HandoutViewModel(session, goal, sizing, timing, new Held(), files);
+        planFile = session.demoFile();
+        session.open(planFile);
+        // a change to the issued demo plan, so that issuing makes a new revision
+        session.draft().field(DraftField.SEED).set("20270405");
+        assertTrue(vm.composedBinding().get().plan().isPresent(), vm.missingProperty().get());
+        assertTrue(vm.issuedNow().isEmpty());
+    }
+
+    @Test
+    void theRevisionAppearsWhenTheFileIsWritten() {
+        openDemo();
+        String before = session.base().orElseThrow().revision().orElseThrow();
+        assertTrue(vm.issue());
+        assertTrue(vm.issuingProperty().get());
+        assertEquals(1, files.waiting());
+        assertTrue(vm.messageProperty().get().startsWith("Issuing the plan"), vm.messageProperty().get());
+        assertEquals(before, session.base().orElseThrow().revision().orElseThrow(), "nothing issued yet");
+        assertFalse(vm.issue(), "a second issue is refused while the first is written");
+
+        files.runAll();
+        assertFalse(vm.issuingProperty().get());
+        StudyPlan issued = session.base().orElseThrow();
+        assertNotEquals(before, issued.revision().orElseThrow());
+        assertEquals(before, issued.supersedes().orElseThrow());
+        assertEquals(issued.revision(), PlanFiles.read(planFile).revision(), "the file holds the new revision");
+        assertFalse(session.draft().dirtyProperty().get());
+        assertTrue(vm.issuedNow().isPresent());
+        assertEquals("Issued as revision " + issued.revision().orElseThrow(), vm.stateBinding().get());
+        assertTrue(vm.completeBinding().get());
+    }
+
+    @Test
+    void anEditMadeWhileTheFileIsWrittenIsKept() {
+        openDemo();
+        assertTrue(vm.issue());
+        session.draft().field(DraftField.COLLECTOR).set("Night shift lead");
+        files.runAll();
+        StudyPlan issued = session.base().orElseThrow();
+        assertTrue(issued.isIssued());
+        assertTrue(session.draft().dirtyProperty().get(), "the edit is not in the file, so the draft is unsaved");
+        DraftSnapshot kept = session.drafts().newerDraft(planFile).orElseThrow();
+        assertEquals("Night shift lead", kept.fields().get(DraftField.COLLECTOR.name()), "and it is autosaved");
+        assertTrue(vm.issuedNow().isEmpty());
+        assertTrue(vm.stateBinding().get().startsWith("Changed since revision " + issued.revision().orElseThrow()),
+                vm.stateBinding().get());
+    }
+
+    @Test
+    void aFailedWriteIsSaidInlineAndChangesNothing() throws Exception {
+        openDemo();
+        Path notAFolder = Files.writeString(home.resolve("blocker"), "a file, not a folder");
+        session.draft().planFileProperty().set(notAFolder.resolve("plan.json"));
+        String before = session.base().orElseThrow().revision().orElseThrow();
+        assertTrue(vm.issue());
+        files.runAll();
+        assertFalse(vm.issuingProperty().get());
+        assertFalse(vm.messageProperty().get().startsWith("Issued"), vm.messageProperty().get());
+        assertFalse(vm.messageProperty().get().isBlank());
+        assertEquals(before, session.base().orElseThrow().revision().orElseThrow());
+        assertTrue(session.draft().dirtyProperty().get());
+    }
+}
