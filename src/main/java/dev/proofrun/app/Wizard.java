@@ -49,7 +49,7 @@ public final class Wizard {
         sizing = new SizingViewModel(session.draft(), goal, Background.fx("proofrun-design"));
         timing = new TimingViewModel(session.draft(), sizing.designBinding(), Background.fx("proofrun-schedule"));
         handout = new HandoutViewModel(session, goal, sizing, timing, Background.fx("proofrun-preview"),
-                Background.fx("proofrun-plan-file"));
+                Background.fxFinishing("proofrun-plan-file"));
         if (host != null) {
             handout.setOpener(host::showDocument);
         }

@@ -3,6 +3,9 @@ package dev.proofrun.app.session;
 import java.util.concurrent.Callable;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
+import java.util.concurrent.LinkedBlockingQueue;
+import java.util.concurrent.ThreadPoolExecutor;
+import java.util.concurrent.TimeUnit;
 import java.util.function.Consumer;
 import javafx.concurrent.Task;
 
@@ -23,11 +26,32 @@ public interface Background {
 
     /** One daemon worker thread with the given name, answers on the FX thread. */
     static Background fx(String threadName) {
-        ExecutorService worker = Executors.newSingleThreadExecutor(r -> {
+        return on(Executors.newSingleThreadExecutor(r -> {
             Thread t = new Thread(r, threadName);
             t.setDaemon(true);
             return t;
-        });
+        }));
+    }
+
+    /**
+     * Like {@link #fx}, for work that must not be cut off when the window closes (writing a plan file): the
+     * worker is not a daemon, so the JVM finishes a started write before it exits, and it ends itself
+     * {@value #IDLE_SECONDS} s after its last job, so an idle worker never holds the JVM open.
+     */
+    static Background fxFinishing(String threadName) {
+        ThreadPoolExecutor worker = new ThreadPoolExecutor(0, 1, IDLE_SECONDS, TimeUnit.SECONDS,
+                new LinkedBlockingQueue<>(), r -> {
+                    Thread t = new Thread(r, threadName);
+                    t.setDaemon(false);
+                    return t;
+                });
+        return on(worker);
+    }
+
+    /** Seconds an idle {@link #fxFinishing} worker waits for another job before it ends. */
+    int IDLE_SECONDS = 2;
+
+    private static Background on(ExecutorService worker) {
         return new Background() {
             @Override
             public <T> Job submit(Callable<T> work, Consumer<T> done, Consumer<Throwable> failed) {
