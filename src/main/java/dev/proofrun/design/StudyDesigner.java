@@ -105,6 +105,27 @@ public final class StudyDesigner {
                 best.subgroups(), best.subgroupSize(), best.readings(), why, tie);
     }
 
+    /**
+     * The power of one given design — k subgroups of n — for the request: the chance that its lower bound
+     * reaches c0 when the process is as expected, computed as the table's rows are (a plan that keeps its
+     * own k needs its power, not a value read between points of the power curve).
+     *
+     * @throws IllegalArgumentException if n &lt; 1, if k is too small for the estimator to have 2 degrees of
+     *         freedom, if n·k exceeds {@value #MAX_READINGS}
+     */
+    public static double power(DesignRequest request, int n, int k) {
+        if (n < 1) {
+            throw new IllegalArgumentException(String.format(Locale.ROOT, "subgroup size %d is below 1", n));
+        }
+        SizeSearch search = new SizeSearch(request, n);
+        if (k < search.smallestK() || k > search.largestK()) {
+            throw new IllegalArgumentException(String.format(Locale.ROOT,
+                    "%d subgroups of %d is outside %d..%d, the studies the designer can evaluate", k, n,
+                    search.smallestK(), search.largestK()));
+        }
+        return search.power(k);
+    }
+
     private static List<OcPoint> operatingCharacteristic(DesignRequest request, SizeSearch search, int k) {
         double c0 = request.requirement().minimum();
         double c1 = request.expectation().index();

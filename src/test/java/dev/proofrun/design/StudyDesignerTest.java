@@ -115,4 +115,19 @@ class StudyDesignerTest {
         assertTrue(risk > 0.04 && risk <= 0.055, "off centre " + risk);
         assertEquals(off.recommended().power(), ocAt(off, 1.67), 1e-9);
     }
+
+    @Test
+    void thePowerOfAGivenDesignIsTheSearchsPower() {
+        DesignRequest r = cpk(1.33, 1.67);
+        DesignTable t = StudyDesigner.design(r);
+        DesignRow best = t.recommended();
+        assertEquals(best.power(), StudyDesigner.power(r, best.subgroupSize(), best.subgroups()), 1e-12);
+        double fewer = StudyDesigner.power(r, best.subgroupSize(), best.subgroups() - 1);
+        assertTrue(fewer < r.power() && fewer < best.power(), "one subgroup fewer falls short: " + fewer);
+        t.powerCurve().forEach(p -> assertEquals(p.power(),
+                StudyDesigner.power(r, best.subgroupSize(), p.subgroups()), 1e-12, "k = " + p.subgroups()));
+        assertThrows(IllegalArgumentException.class, () -> StudyDesigner.power(r, 0, 30));
+        assertThrows(IllegalArgumentException.class, () -> StudyDesigner.power(r, 5, 1));
+        assertThrows(IllegalArgumentException.class, () -> StudyDesigner.power(r, 5, 2001));
+    }
 }

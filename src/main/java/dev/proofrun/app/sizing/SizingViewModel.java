@@ -53,6 +53,7 @@ public final class SizingViewModel extends StepViewModel {
     private final Background background;
     private Background.Job running;
     private long generation;
+    private KeptPower keptPower;
 
     public SizingViewModel(StudyDraft draft, GoalViewModel goal, Background background) {
         this.draft = draft;
@@ -207,6 +208,7 @@ public final class SizingViewModel extends StepViewModel {
         DesignRequest req = q.get();
         int wanted = Numbers.parse(draft.text(DraftField.CHOSEN_SUBGROUP_SIZE)).isPresent()
                 ? (int) Numbers.parse(draft.text(DraftField.CHOSEN_SUBGROUP_SIZE)).getAsDouble() : 0;
+        Optional<Integer> kept = keptSubgroups();
         long mine = ++generation;
         busy.set(true);
         running = background.submit(() -> {
@@ -216,7 +218,16 @@ public final class SizingViewModel extends StepViewModel {
                     && all.rows().stream().anyMatch(r -> r.subgroupSize() == wanted)) {
                 own = StudyDesigner.design(req.withSubgroupSizes(List.of(wanted)));
             }
-            return new DesignTable[] {all, own};
+            int n = (own != null ? own : all).recommended().subgroupSize();
+            KeptPower keptPower = null;
+            if (kept.isPresent()) {
+                try {
+                    keptPower = new KeptPower(n, kept.get(), StudyDesigner.power(req, n, kept.get()));
+                } catch (IllegalArgumentException outsideTheDesignersRange) {
+                    keptPower = null; // said as "power not computed for this k"
+                }
+            }
+            return new Answer(all, own, keptPower);
         }, answer -> {
             if (mine == generation) {
                 apply(answer);
@@ -233,16 +244,25 @@ public final class SizingViewModel extends StepViewModel {
         });
     }
 
-    private void apply(DesignTable[] answer) {
-        DesignTable all = answer[0];
+    /** The power of the k kept from the plan file, at subgroup size n, as the core computes it. */
+    private record KeptPower(int n, int k, double power) {
+    }
+
+    /** What one background computation answers. */
+    private record Answer(DesignTable all, DesignTable own, KeptPower kept) {
+    }
+
+    private void apply(Answer answer) {
+        DesignTable all = answer.all();
         table.set(all);
         rows.setAll(all.rows());
         DesignRow pick = all.recommended();
         DesignTable own = all;
-        if (answer[1] != null) {
-            pick = answer[1].recommended();
-            own = answer[1];
+        if (answer.own() != null) {
+            pick = answer.own().recommended();
+            own = answer.own();
         }
+        keptPower = answer.kept();
         chosenTable.set(own);
         chosen.set(pick);
         busy.set(false);
@@ -258,8 +278,11 @@ public final class SizingViewModel extends StepViewModel {
         Optional<Integer> kept = keptSubgroups();
         if (kept.isPresent() && kept.get() != c.subgroups()) {
             DesignTable own = chosenTable.get();
+            KeptPower computed = keptPower;
+            String power = computed != null && computed.n() == c.subgroupSize() && computed.k() == kept.get()
+                    ? AppMessage.SIZING_POWER_AT.format(fmt(computed.power())) : keptPower(own, kept.get());
             return AppMessage.SIZING_KEPT.format(kept.get(), c.subgroupSize(), kept.get() * c.subgroupSize(),
-                    keptPower(own, kept.get()), c.subgroups(), fmt(c.power()));
+                    power, c.subgroups(), fmt(c.power()));
         }
         if (c.subgroupSize() == r.subgroupSize()) {
             return AppMessage.SIZING_RECOMMENDED_CHOSEN.format(c.subgroups(), c.subgroupSize(), c.readings(), c.power());

@@ -64,4 +64,18 @@ class SizingViewModelTest {
         assertFalse(vm.completeBinding().get());
         assertFalse(vm.refusalProperty().get().isEmpty());
     }
+
+    @Test
+    void aPlansOwnKKeepsItsPowerAsTheCoreComputesIt() {
+        draft.field(DraftField.CHOSEN_SUBGROUPS).set("40"); // as opening a plan file with k = 40 does
+        draft.characteristics().add(row);
+        int n = vm.chosenProperty().get().subgroupSize();
+        assertEquals(40, vm.design().orElseThrow().subgroups());
+        double power = StudyDesigner.power(DesignRequest.of(SpecLimits.Sides.TWO_SIDED,
+                Requirement.of(IndexKind.CPK, 1.33, 0.95), Expectation.centred(1.8)), n, 40);
+        String cost = vm.costBinding().get();
+        assertTrue(cost.contains("Kept from the plan file: 40 subgroups of " + n), cost);
+        assertTrue(cost.contains("power " + SizingViewModel.fmt(power) + "."), cost);
+        assertFalse(cost.contains("between"), "computed, not read between points of the curve: " + cost);
+    }
 }
