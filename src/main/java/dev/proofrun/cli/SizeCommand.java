@@ -14,6 +14,7 @@ import dev.proofrun.design.PowerPoint;
 import dev.proofrun.design.ProcessFacts;
 import dev.proofrun.design.Requirement;
 import dev.proofrun.design.StudyDesigner;
+import dev.proofrun.plan.Characteristic;
 import dev.proofrun.stats.BoundMethod;
 import dev.proofrun.stats.IndexKind;
 import dev.proofrun.stats.SigmaMethod;
@@ -165,11 +166,11 @@ public final class SizeCommand implements Callable<Integer> {
     }
 
     /** The design options of this command applied to one characteristic from the file. */
-    private DesignRequest sharedRequest(SpecLimits.Sides specSides, Requirement requirement, Expectation expectation) {
+    private DesignRequest sharedRequest(Characteristic c) {
         List<Integer> sizes = subgroupSizes == null || subgroupSizes.isEmpty()
                 ? IntStream.rangeClosed(1, 10).boxed().toList() : subgroupSizes;
         Floors floors = wrap(() -> new Floors(minSubgroups, minReadings));
-        return new DesignRequest(specSides, requirement, expectation, power, sizes,
+        return new DesignRequest(c.limits().sides(), c.requirement(), c.expectation(), power, sizes,
                 Optional.ofNullable(sigma).map(SigmaMethod::fromToken), BoundMethod.fromToken(bound), floors, shift,
                 List.of());
     }
