@@ -8,6 +8,7 @@ import dev.proofrun.plan.CommonDesign;
 import dev.proofrun.plan.Gauge;
 import dev.proofrun.plan.Part;
 import dev.proofrun.plan.People;
+import dev.proofrun.plan.PlanMessage;
 import dev.proofrun.plan.PlanFiles;
 import dev.proofrun.plan.StudyPlan;
 import dev.proofrun.schedule.ProductionCalendar;
@@ -16,6 +17,7 @@ import dev.proofrun.schedule.Spacing;
 import dev.proofrun.schedule.StudySpan;
 import dev.proofrun.stats.IndexKind;
 import dev.proofrun.stats.SpecLimits;
+import dev.proofrun.text.Location;
 import dev.proofrun.text.UserException;
 import java.io.PrintWriter;
 import java.nio.file.Files;
@@ -160,9 +162,7 @@ public final class PlanNewCommand implements Callable<Integer> {
         List<Characteristic> chars = characteristics();
         ProductionCalendar calendar = calendar();
         StudySpan studySpan = studySpan();
-        CommonDesign design = CommonDesign.choose(chars, power,
-                subgroupSize == null ? OptionalInt.empty() : OptionalInt.of(subgroupSize),
-                subgroups == null ? OptionalInt.empty() : OptionalInt.of(subgroups));
+        CommonDesign design = design(chars);
         Spacing sp = option("--spacing", () -> Spacing.fromToken(spacing));
         long s = seed != null ? seed : sp == Spacing.RANDOM ? new SecureRandom().nextInt(1_000_000_000) : 0L;
         String planId = id != null ? id : String.format(Locale.ROOT, "PR-%d-%04d", studySpan.start().getYear(),
@@ -179,6 +179,18 @@ public final class PlanNewCommand implements Callable<Integer> {
         w.println(PlanOptionMessage.WROTE.format(out, plan.summary()));
         w.flush();
         return 0;
+    }
+
+    /** The plan's design; a characteristic refused from --characteristics is named with its file. */
+    private CommonDesign design(List<Characteristic> chars) {
+        try {
+            return CommonDesign.choose(chars, power,
+                    subgroupSize == null ? OptionalInt.empty() : OptionalInt.of(subgroupSize),
+                    subgroups == null ? OptionalInt.empty() : OptionalInt.of(subgroups));
+        } catch (UserException e) {
+            throw characteristicsCsv != null && e.key() == PlanMessage.CHARACTERISTIC_REFUSED && e.location().isEmpty()
+                    ? new UserException(Location.file(characteristicsCsv.toString()), e.key(), e.args()) : e;
+        }
     }
 
     private List<Characteristic> characteristics() {
