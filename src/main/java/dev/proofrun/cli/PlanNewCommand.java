@@ -37,6 +37,7 @@ import java.util.function.Supplier;
 import picocli.CommandLine;
 import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 
 /** {@code proofrun plan new}: a draft plan from the command line, scheduled on the given calendar. */
@@ -77,10 +78,8 @@ public final class PlanNewCommand implements Callable<Integer> {
     String characteristicId;
     @Option(names = "--unit", paramLabel = "U", description = "Unit of the readings.")
     String unit;
-    @Option(names = "--lsl", paramLabel = "X", description = "Lower specification limit.")
-    Double lsl;
-    @Option(names = "--usl", paramLabel = "X", description = "Upper specification limit.")
-    Double usl;
+    @Mixin
+    SpecLimitOptions limits;
     @Option(names = "--nominal", paramLabel = "X", description = "Nominal value.")
     Double nominal;
     @Option(names = "--gauge", paramLabel = "NAME", description = "Gauge name (with --resolution).")
@@ -163,7 +162,7 @@ public final class PlanNewCommand implements Callable<Integer> {
         ProductionCalendar calendar = calendar();
         StudySpan studySpan = studySpan();
         CommonDesign design = design(chars);
-        Spacing sp = option("--spacing", () -> Spacing.fromToken(spacing));
+        Spacing sp = Conventions.spacing(spacing);
         long s = seed != null ? seed : sp == Spacing.RANDOM ? new SecureRandom().nextInt(1_000_000_000) : 0L;
         String planId = id != null ? id : String.format(Locale.ROOT, "PR-%d-%04d", studySpan.start().getYear(),
                 new SecureRandom().nextInt(10_000));
@@ -194,9 +193,9 @@ public final class PlanNewCommand implements Callable<Integer> {
     }
 
     private List<Characteristic> characteristics() {
-        IndexKind kind = option("--index", () -> IndexKind.fromToken(index));
+        IndexKind kind = Conventions.index(index);
         if (characteristicsCsv != null) {
-            if (characteristic != null || target != null || expected != null || lsl != null || usl != null) {
+            if (characteristic != null || target != null || expected != null || limits.given()) {
                 throw new UserException(PlanOptionMessage.BOTH_CHARACTERISTIC_FORMS);
             }
             return CharacteristicsCsv.read(characteristicsCsv, kind, confidence);
@@ -204,14 +203,14 @@ public final class PlanNewCommand implements Callable<Integer> {
         if (characteristic == null || unit == null || target == null || expected == null) {
             throw new UserException(PlanOptionMessage.NEED_CHARACTERISTIC);
         }
-        SpecLimits limits = option("--lsl/--usl", () -> SpecLimits.of(lsl, usl));
+        SpecLimits specLimits = limits.limits();
         Requirement req = option("--target", () -> Requirement.of(kind, target, confidence));
         Expectation exp = option("--expected", () -> expectedCp == null ? Expectation.centred(expected)
                 : Expectation.offCentre(expected, expectedCp));
         Optional<Gauge> g = gauge == null ? Optional.empty() : Optional.of(option("--gauge", () -> new Gauge(gauge,
                 resolution == null ? Double.NaN : resolution, gaugeSd == null ? OptionalDouble.empty() : OptionalDouble.of(gaugeSd))));
         return List.of(option("--characteristic", () -> new Characteristic(characteristicId == null ? "C1" : characteristicId,
-                characteristic, unit, nominal == null ? OptionalDouble.empty() : OptionalDouble.of(nominal), limits, g, req, exp)));
+                characteristic, unit, nominal == null ? OptionalDouble.empty() : OptionalDouble.of(nominal), specLimits, g, req, exp)));
     }
 
     private ProductionCalendar calendar() {
