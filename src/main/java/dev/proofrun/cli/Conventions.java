@@ -2,6 +2,7 @@ package dev.proofrun.cli;
 
 import dev.proofrun.schedule.Spacing;
 import dev.proofrun.stats.BoundMethod;
+import dev.proofrun.stats.CapabilityBounds;
 import dev.proofrun.stats.IndexKind;
 import dev.proofrun.stats.SigmaMethod;
 import dev.proofrun.stats.SpecLimits;
@@ -13,7 +14,8 @@ import java.util.function.Function;
 /**
  * The command line's one reader of each convention: the required index ({@code --index}), the within-sigma
  * estimator ({@code --sigma}), the bound method ({@code --bound}), the slot spacing ({@code --spacing}), the
- * specification sides ({@code --spec}) and the limits ({@code --lsl}, {@code --usl}). Every command reads
+ * specification sides ({@code --spec}), the limits ({@code --lsl}, {@code --usl}) and the confidence of the
+ * lower bounds ({@code --confidence}). Every command reads
  * them here, so a bad value gets the same one line from each: the option, then what is wrong with the value
  * ({@link OptionMessage#BAD_VALUE}, e.g. {@code --sigma: unknown sigma method 'rbr' (rbar, sbar, pooled or mr)}).
  */
@@ -89,6 +91,20 @@ final class Conventions {
             throw new UserException(OptionMessage.LIMITS_REVERSED, lsl, usl);
         }
         return SpecLimits.of(lsl, usl);
+    }
+
+    /**
+     * @param confidence {@code --confidence}, 1 − α
+     * @return it, when strictly between {@link CapabilityBounds#MIN_CONFIDENCE} and
+     *         {@link CapabilityBounds#MAX_CONFIDENCE} (the range the bounds are computed for)
+     * @throws UserException otherwise
+     */
+    static double confidence(double confidence) {
+        if (!(confidence > CapabilityBounds.MIN_CONFIDENCE && confidence < CapabilityBounds.MAX_CONFIDENCE)) {
+            throw new UserException(OptionMessage.CONFIDENCE_OUT_OF_RANGE, CapabilityBounds.MIN_CONFIDENCE,
+                    CapabilityBounds.MAX_CONFIDENCE, confidence);
+        }
+        return confidence;
     }
 
     private static <T> T parse(String option, String token, Function<String, T> fromToken) {

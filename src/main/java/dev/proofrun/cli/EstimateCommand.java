@@ -5,12 +5,10 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 import dev.proofrun.capability.CapabilityAnalysis;
 import dev.proofrun.capability.CapabilityJson;
-import dev.proofrun.capability.CapabilityMessage;
 import dev.proofrun.capability.CapabilityResult;
 import dev.proofrun.readings.Readings;
 import dev.proofrun.readings.ReadingsCsv;
 import dev.proofrun.stats.BoundMethod;
-import dev.proofrun.stats.CapabilityBounds;
 import dev.proofrun.stats.SigmaMethod;
 import dev.proofrun.stats.SpecLimits;
 import dev.proofrun.text.Location;
@@ -70,9 +68,7 @@ public final class EstimateCommand implements Callable<Integer> {
         SpecLimits specLimits = limits.limits();
         SigmaMethod method = Conventions.sigma(sigma).orElse(null);
         BoundMethod boundMethod = Conventions.bound(bound);
-        if (!(confidence > CapabilityBounds.MIN_CONFIDENCE && confidence < CapabilityBounds.MAX_CONFIDENCE)) {
-            throw new UserException(CapabilityMessage.CONFIDENCE_OUT_OF_RANGE, confidence);
-        }
+        Conventions.confidence(confidence);
         Readings readings = ReadingsCsv.read(file,
                 subgroupSize == null ? OptionalInt.empty() : OptionalInt.of(subgroupSize));
         CapabilityResult result;

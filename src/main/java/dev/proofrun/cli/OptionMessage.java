@@ -9,7 +9,8 @@ public enum OptionMessage implements MessageKey {
     SIDES_DO_NOT_MATCH("--spec does not match the limits given"),
     NO_LIMIT("give at least one specification limit: --lsl, --usl or both"),
     LIMITS_REVERSED("--lsl %s must be below --usl %s"),
-    LIMIT_NOT_FINITE("%s must be a finite number: %s");
+    LIMIT_NOT_FINITE("%s must be a finite number: %s"),
+    CONFIDENCE_OUT_OF_RANGE("--confidence must lie between %s and %s, got %s");
 
     private final String english;
 

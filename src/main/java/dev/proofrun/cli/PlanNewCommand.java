@@ -194,6 +194,7 @@ public final class PlanNewCommand implements Callable<Integer> {
 
     private List<Characteristic> characteristics() {
         IndexKind kind = Conventions.index(index);
+        Conventions.confidence(confidence);
         if (characteristicsCsv != null) {
             if (characteristic != null || target != null || expected != null || limits.given()) {
                 throw new UserException(PlanOptionMessage.BOTH_CHARACTERISTIC_FORMS);

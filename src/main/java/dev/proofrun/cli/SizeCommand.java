@@ -121,10 +121,8 @@ public final class SizeCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         PrintWriter out = spec.commandLine().getOut();
+        Conventions.confidence(confidence);
         if (characteristics != null) {
-            if (!(confidence > 0.5 && confidence < 0.9999)) {
-                throw new UserException(DesignMessage.CONFIDENCE_OUT_OF_RANGE, confidence);
-            }
             SharedSize shared = SharedSize.design(characteristics, this::sharedRequest, Conventions.index(index),
                     confidence, refusedBesideFile());
             if (json) {
@@ -181,9 +179,6 @@ public final class SizeCommand implements Callable<Integer> {
 
     DesignRequest request() {
         IndexKind kind = Conventions.index(index);
-        if (!(confidence > 0.5 && confidence < 0.9999)) {
-            throw new UserException(DesignMessage.CONFIDENCE_OUT_OF_RANGE, confidence);
-        }
         SpecLimits.Sides specSides = Conventions.sides(sides, lsl, usl);
         List<String> notes = new ArrayList<>();
         Expectation expectation;

@@ -96,6 +96,15 @@ class ConventionsCommandTest {
     }
 
     @Test
+    void aConfidenceOutsideTheBoundsRangeIsRefusedAlikeByEveryCommand() throws Exception {
+        // the range is CapabilityBounds.MIN_CONFIDENCE..MAX_CONFIDENCE, both ends excluded
+        refusedAlike("--confidence must lie between 0.5 and 0.9999, got 0.5",
+                everyCommand("--usl", "2", "--confidence", "0.5").toArray(String[][]::new));
+        refusedAlike("--confidence must lie between 0.5 and 0.9999, got 0.9999",
+                everyCommand("--usl", "2", "--confidence", "0.9999").toArray(String[][]::new));
+    }
+
+    @Test
     void specSidesAreReadOnce() throws Exception {
         String[] size = {"size", "--target", "1.33", "--expected", "1.8", "--spec"};
         refusedAlike("--spec: unknown specification sides 'both' (two-sided, upper or lower)", join(List.of(size), "both"));
