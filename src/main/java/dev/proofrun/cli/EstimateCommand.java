@@ -75,7 +75,7 @@ public final class EstimateCommand implements Callable<Integer> {
         try {
             result = CapabilityAnalysis.of(readings.subgroups(), specLimits, nominal, method, confidence, boundMethod);
         } catch (UserException e) {
-            throw e.location().isPresent() ? e : new UserException(Location.file(file.toString()), e.key(), e.args());
+            throw e.placedIn(Location.file(file.toString()));
         }
         String text = json
                 ? new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT).writeValueAsString(CapabilityJson.of(result))

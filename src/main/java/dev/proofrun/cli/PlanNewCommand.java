@@ -187,8 +187,8 @@ public final class PlanNewCommand implements Callable<Integer> {
                     subgroupSize == null ? OptionalInt.empty() : OptionalInt.of(subgroupSize),
                     subgroups == null ? OptionalInt.empty() : OptionalInt.of(subgroups));
         } catch (UserException e) {
-            throw characteristicsCsv != null && e.key() == PlanMessage.CHARACTERISTIC_REFUSED && e.location().isEmpty()
-                    ? new UserException(Location.file(characteristicsCsv.toString()), e.key(), e.args()) : e;
+            throw characteristicsCsv != null && e.key() == PlanMessage.CHARACTERISTIC_REFUSED
+                    ? e.placedIn(Location.file(characteristicsCsv.toString())) : e;
         }
     }
 

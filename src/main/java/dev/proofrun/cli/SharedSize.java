@@ -62,8 +62,7 @@ final class SharedSize {
         try {
             designs = CommonDesign.solve(chars, request);
         } catch (UserException e) {
-            throw e.key() == PlanMessage.CHARACTERISTIC_REFUSED && e.location().isEmpty()
-                    ? new UserException(Location.file(file), e.key(), e.args()) : e;
+            throw e.key() == PlanMessage.CHARACTERISTIC_REFUSED ? e.placedIn(Location.file(file)) : e;
         }
         DesignRequest first = request.apply(chars.get(0));
         List<String> warnings = new ArrayList<>();

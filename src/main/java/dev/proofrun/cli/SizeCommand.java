@@ -219,8 +219,7 @@ public final class SizeCommand implements Callable<Integer> {
             result = dev.proofrun.capability.CapabilityAnalysis.of(readings.subgroups(), limits, null, method,
                     confidence, boundMethod);
         } catch (UserException e) {
-            throw e.location().isPresent() ? e
-                    : new UserException(dev.proofrun.text.Location.file(pilot.toString()), e.key(), e.args());
+            throw e.placedIn(dev.proofrun.text.Location.file(pilot.toString()));
         }
         return dev.proofrun.design.PilotExpectation.from(result, kind, notes);
     }
