@@ -7,9 +7,11 @@ import dev.proofrun.stats.IndexKind;
 import dev.proofrun.stats.SigmaMethod;
 import dev.proofrun.stats.SpecLimits;
 import dev.proofrun.text.UserException;
+import java.time.DateTimeException;
 import java.util.Locale;
 import java.util.Optional;
 import java.util.function.Function;
+import java.util.function.Supplier;
 
 /**
  * The command line's one reader of each convention: the required index ({@code --index}), the within-sigma
@@ -107,11 +109,19 @@ final class Conventions {
         return confidence;
     }
 
-    private static <T> T parse(String option, String token, Function<String, T> fromToken) {
+    /**
+     * Runs a parse or a model constructor for an option; its refusal ({@link IllegalArgumentException},
+     * {@link DateTimeException}) becomes the one line {@code OPTION: what is wrong}.
+     */
+    static <T> T option(String name, Supplier<T> make) {
         try {
-            return fromToken.apply(token);
-        } catch (IllegalArgumentException e) {
-            throw new UserException(OptionMessage.BAD_VALUE, option, e.getMessage());
+            return make.get();
+        } catch (IllegalArgumentException | DateTimeException e) {
+            throw new UserException(OptionMessage.BAD_VALUE, name, e.getMessage());
         }
+    }
+
+    private static <T> T parse(String option, String token, Function<String, T> fromToken) {
+        return option(option, () -> fromToken.apply(token));
     }
 }

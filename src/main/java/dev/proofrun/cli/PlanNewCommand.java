@@ -1,5 +1,7 @@
 package dev.proofrun.cli;
 
+import static dev.proofrun.cli.Conventions.option;
+
 import dev.proofrun.design.Expectation;
 import dev.proofrun.design.Requirement;
 import dev.proofrun.plan.Characteristic;
@@ -26,14 +28,12 @@ import java.security.SecureRandom;
 import java.time.LocalDate;
 import java.time.LocalDateTime;
 import java.time.ZoneId;
-import java.time.format.DateTimeParseException;
 import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.OptionalInt;
 import java.util.concurrent.Callable;
-import java.util.function.Supplier;
 import picocli.CommandLine;
 import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.Command;
@@ -217,7 +217,7 @@ public final class PlanNewCommand implements Callable<Integer> {
     private ProductionCalendar calendar() {
         ZoneId z = zone == null ? ZoneId.systemDefault() : option("--zone", () -> ZoneId.of(zone));
         if (rate != null && cycleSeconds != null) {
-            throw new UserException(PlanOptionMessage.BAD_OPTION, "--rate/--cycle-seconds", "give one of them, not both");
+            throw new UserException(OptionMessage.BAD_VALUE, "--rate/--cycle-seconds", "give one of them, not both");
         }
         ProductionRate r = option(rate != null ? "--rate" : "--cycle-seconds", () -> cycleSeconds != null
                 ? ProductionRate.cycleSeconds(cycleSeconds) : ProductionRate.perHour(rate != null ? rate : DEFAULT_RATE));
@@ -242,16 +242,5 @@ public final class PlanNewCommand implements Callable<Integer> {
             return option("--span-lots", () -> StudySpan.lots(t, span.lots.lots, span.lots.lotParts));
         }
         return option("--until", () -> StudySpan.until(t, LocalDate.parse(span.until)));
-    }
-
-    /** Runs a parse or a model constructor; its refusal becomes a message naming the option. */
-    static <T> T option(String name, Supplier<T> make) {
-        try {
-            return make.get();
-        } catch (IllegalArgumentException | DateTimeParseException e) {
-            throw new UserException(PlanOptionMessage.BAD_OPTION, name, e.getMessage());
-        } catch (java.time.DateTimeException e) {
-            throw new UserException(PlanOptionMessage.BAD_OPTION, name, e.getMessage());
-        }
     }
 }
