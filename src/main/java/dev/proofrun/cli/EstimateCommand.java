@@ -5,12 +5,10 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 import dev.proofrun.capability.CapabilityAnalysis;
 import dev.proofrun.capability.CapabilityJson;
-import dev.proofrun.capability.CapabilityMessage;
 import dev.proofrun.capability.CapabilityResult;
 import dev.proofrun.readings.Readings;
 import dev.proofrun.readings.ReadingsCsv;
 import dev.proofrun.stats.BoundMethod;
-import dev.proofrun.stats.CapabilityBounds;
 import dev.proofrun.stats.SigmaMethod;
 import dev.proofrun.stats.SpecLimits;
 import dev.proofrun.text.Location;
@@ -21,6 +19,7 @@ import java.util.OptionalInt;
 import java.util.concurrent.Callable;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 
@@ -39,11 +38,8 @@ public final class EstimateCommand implements Callable<Integer> {
     @Parameters(index = "0", paramLabel = "FILE.csv", description = "The readings.")
     Path file;
 
-    @Option(names = "--lsl", paramLabel = "X", description = "Lower specification limit.")
-    Double lsl;
-
-    @Option(names = "--usl", paramLabel = "X", description = "Upper specification limit.")
-    Double usl;
+    @Mixin
+    SpecLimitOptions limits;
 
     @Option(names = "--nominal", paramLabel = "T",
             description = "Target for Cpm (default: the midpoint of two-sided limits; none for one-sided).")
@@ -69,19 +65,17 @@ public final class EstimateCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws JsonProcessingException {
-        SpecLimits limits = limits();
-        SigmaMethod method = sigma == null ? null : option(() -> SigmaMethod.fromToken(sigma));
-        BoundMethod boundMethod = option(() -> BoundMethod.fromToken(bound));
-        if (!(confidence > CapabilityBounds.MIN_CONFIDENCE && confidence < CapabilityBounds.MAX_CONFIDENCE)) {
-            throw new UserException(CapabilityMessage.CONFIDENCE_OUT_OF_RANGE, confidence);
-        }
+        SpecLimits specLimits = limits.limits();
+        SigmaMethod method = Conventions.sigma(sigma).orElse(null);
+        BoundMethod boundMethod = Conventions.bound(bound);
+        Conventions.confidence(confidence);
         Readings readings = ReadingsCsv.read(file,
                 subgroupSize == null ? OptionalInt.empty() : OptionalInt.of(subgroupSize));
         CapabilityResult result;
         try {
-            result = CapabilityAnalysis.of(readings.subgroups(), limits, nominal, method, confidence, boundMethod);
+            result = CapabilityAnalysis.of(readings.subgroups(), specLimits, nominal, method, confidence, boundMethod);
         } catch (UserException e) {
-            throw e.location().isPresent() ? e : new UserException(Location.file(file.toString()), e.key(), e.args());
+            throw e.placedIn(Location.file(file.toString()));
         }
         String text = json
                 ? new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT).writeValueAsString(CapabilityJson.of(result))
@@ -90,29 +84,5 @@ public final class EstimateCommand implements Callable<Integer> {
         out.println(text);
         out.flush();
         return 0;
-    }
-
-    private SpecLimits limits() {
-        if (lsl == null && usl == null) {
-            throw new UserException(EstimateMessage.NO_LIMIT);
-        }
-        if (lsl != null && !Double.isFinite(lsl)) {
-            throw new UserException(EstimateMessage.LIMIT_NOT_FINITE, "--lsl", lsl);
-        }
-        if (usl != null && !Double.isFinite(usl)) {
-            throw new UserException(EstimateMessage.LIMIT_NOT_FINITE, "--usl", usl);
-        }
-        if (lsl != null && usl != null && lsl >= usl) {
-            throw new UserException(EstimateMessage.LIMITS_REVERSED, lsl, usl);
-        }
-        return SpecLimits.of(lsl, usl);
-    }
-
-    private static <T> T option(java.util.function.Supplier<T> parse) {
-        try {
-            return parse.get();
-        } catch (IllegalArgumentException e) {
-            throw new UserException(EstimateMessage.BAD_OPTION, e.getMessage());
-        }
     }
 }

@@ -4,10 +4,6 @@ import dev.proofrun.text.MessageKey;
 
 /** Messages of {@code proofrun estimate} that people read. */
 public enum EstimateMessage implements MessageKey {
-    NO_LIMIT("give at least one specification limit: --lsl, --usl or both"),
-    LIMITS_REVERSED("--lsl %s must be below --usl %s"),
-    LIMIT_NOT_FINITE("%s must be a finite number: %s"),
-    BAD_OPTION("%s"),
     CAUTION("Caution: these figures are statistical statements under assumptions (a stable process, independent "
             + "readings, a normal distribution, a capable gauge). They do not replace the customer's requirements, "
             + "applicable standards or local codes, licensed practice, or the extra controls that safety-critical "

@@ -1,5 +1,7 @@
 package dev.proofrun.cli;
 
+import static dev.proofrun.cli.Conventions.option;
+
 import dev.proofrun.design.Expectation;
 import dev.proofrun.design.Requirement;
 import dev.proofrun.plan.Characteristic;
@@ -9,6 +11,7 @@ import dev.proofrun.plan.Gauge;
 import dev.proofrun.plan.Part;
 import dev.proofrun.plan.People;
 import dev.proofrun.plan.PlanFiles;
+import dev.proofrun.plan.PlanMessage;
 import dev.proofrun.plan.StudyPlan;
 import dev.proofrun.schedule.ProductionCalendar;
 import dev.proofrun.schedule.ProductionRate;
@@ -16,6 +19,7 @@ import dev.proofrun.schedule.Spacing;
 import dev.proofrun.schedule.StudySpan;
 import dev.proofrun.stats.IndexKind;
 import dev.proofrun.stats.SpecLimits;
+import dev.proofrun.text.Location;
 import dev.proofrun.text.UserException;
 import java.io.PrintWriter;
 import java.nio.file.Files;
@@ -24,17 +28,16 @@ import java.security.SecureRandom;
 import java.time.LocalDate;
 import java.time.LocalDateTime;
 import java.time.ZoneId;
-import java.time.format.DateTimeParseException;
 import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.OptionalInt;
 import java.util.concurrent.Callable;
-import java.util.function.Supplier;
 import picocli.CommandLine;
 import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 
 /** {@code proofrun plan new}: a draft plan from the command line, scheduled on the given calendar. */
@@ -75,10 +78,8 @@ public final class PlanNewCommand implements Callable<Integer> {
     String characteristicId;
     @Option(names = "--unit", paramLabel = "U", description = "Unit of the readings.")
     String unit;
-    @Option(names = "--lsl", paramLabel = "X", description = "Lower specification limit.")
-    Double lsl;
-    @Option(names = "--usl", paramLabel = "X", description = "Upper specification limit.")
-    Double usl;
+    @Mixin
+    SpecLimitOptions limits;
     @Option(names = "--nominal", paramLabel = "X", description = "Nominal value.")
     Double nominal;
     @Option(names = "--gauge", paramLabel = "NAME", description = "Gauge name (with --resolution).")
@@ -160,10 +161,8 @@ public final class PlanNewCommand implements Callable<Integer> {
         List<Characteristic> chars = characteristics();
         ProductionCalendar calendar = calendar();
         StudySpan studySpan = studySpan();
-        CommonDesign design = CommonDesign.choose(chars, power,
-                subgroupSize == null ? OptionalInt.empty() : OptionalInt.of(subgroupSize),
-                subgroups == null ? OptionalInt.empty() : OptionalInt.of(subgroups));
-        Spacing sp = option("--spacing", () -> Spacing.fromToken(spacing));
+        CommonDesign design = design(chars);
+        Spacing sp = Conventions.spacing(spacing);
         long s = seed != null ? seed : sp == Spacing.RANDOM ? new SecureRandom().nextInt(1_000_000_000) : 0L;
         String planId = id != null ? id : String.format(Locale.ROOT, "PR-%d-%04d", studySpan.start().getYear(),
                 new SecureRandom().nextInt(10_000));
@@ -181,10 +180,23 @@ public final class PlanNewCommand implements Callable<Integer> {
         return 0;
     }
 
+    /** The plan's design; a characteristic refused from --characteristics is named with its file. */
+    private CommonDesign design(List<Characteristic> chars) {
+        try {
+            return CommonDesign.choose(chars, power,
+                    subgroupSize == null ? OptionalInt.empty() : OptionalInt.of(subgroupSize),
+                    subgroups == null ? OptionalInt.empty() : OptionalInt.of(subgroups));
+        } catch (UserException e) {
+            throw characteristicsCsv != null && e.key() == PlanMessage.CHARACTERISTIC_REFUSED
+                    ? e.placedIn(Location.file(characteristicsCsv.toString())) : e;
+        }
+    }
+
     private List<Characteristic> characteristics() {
-        IndexKind kind = option("--index", () -> IndexKind.fromToken(index));
+        IndexKind kind = Conventions.index(index);
+        Conventions.confidence(confidence);
         if (characteristicsCsv != null) {
-            if (characteristic != null || target != null || expected != null || lsl != null || usl != null) {
+            if (characteristic != null || target != null || expected != null || limits.given()) {
                 throw new UserException(PlanOptionMessage.BOTH_CHARACTERISTIC_FORMS);
             }
             return CharacteristicsCsv.read(characteristicsCsv, kind, confidence);
@@ -192,20 +204,20 @@ public final class PlanNewCommand implements Callable<Integer> {
         if (characteristic == null || unit == null || target == null || expected == null) {
             throw new UserException(PlanOptionMessage.NEED_CHARACTERISTIC);
         }
-        SpecLimits limits = option("--lsl/--usl", () -> SpecLimits.of(lsl, usl));
+        SpecLimits specLimits = limits.limits();
         Requirement req = option("--target", () -> Requirement.of(kind, target, confidence));
         Expectation exp = option("--expected", () -> expectedCp == null ? Expectation.centred(expected)
                 : Expectation.offCentre(expected, expectedCp));
         Optional<Gauge> g = gauge == null ? Optional.empty() : Optional.of(option("--gauge", () -> new Gauge(gauge,
                 resolution == null ? Double.NaN : resolution, gaugeSd == null ? OptionalDouble.empty() : OptionalDouble.of(gaugeSd))));
         return List.of(option("--characteristic", () -> new Characteristic(characteristicId == null ? "C1" : characteristicId,
-                characteristic, unit, nominal == null ? OptionalDouble.empty() : OptionalDouble.of(nominal), limits, g, req, exp)));
+                characteristic, unit, nominal == null ? OptionalDouble.empty() : OptionalDouble.of(nominal), specLimits, g, req, exp)));
     }
 
     private ProductionCalendar calendar() {
         ZoneId z = zone == null ? ZoneId.systemDefault() : option("--zone", () -> ZoneId.of(zone));
         if (rate != null && cycleSeconds != null) {
-            throw new UserException(PlanOptionMessage.BAD_OPTION, "--rate/--cycle-seconds", "give one of them, not both");
+            throw new UserException(OptionMessage.BAD_VALUE, "--rate/--cycle-seconds", "give one of them, not both");
         }
         ProductionRate r = option(rate != null ? "--rate" : "--cycle-seconds", () -> cycleSeconds != null
                 ? ProductionRate.cycleSeconds(cycleSeconds) : ProductionRate.perHour(rate != null ? rate : DEFAULT_RATE));
@@ -230,16 +242,5 @@ public final class PlanNewCommand implements Callable<Integer> {
             return option("--span-lots", () -> StudySpan.lots(t, span.lots.lots, span.lots.lotParts));
         }
         return option("--until", () -> StudySpan.until(t, LocalDate.parse(span.until)));
-    }
-
-    /** Runs a parse or a model constructor; its refusal becomes a message naming the option. */
-    static <T> T option(String name, Supplier<T> make) {
-        try {
-            return make.get();
-        } catch (IllegalArgumentException | DateTimeParseException e) {
-            throw new UserException(PlanOptionMessage.BAD_OPTION, name, e.getMessage());
-        } catch (java.time.DateTimeException e) {
-            throw new UserException(PlanOptionMessage.BAD_OPTION, name, e.getMessage());
-        }
     }
 }

@@ -4,7 +4,6 @@ import dev.proofrun.text.MessageKey;
 
 /** Messages of {@code proofrun plan}: option values that cannot be used, and what the command did. */
 public enum PlanOptionMessage implements MessageKey {
-    BAD_OPTION("%s: %s"),
     NEED_CHARACTERISTIC("give either --characteristics FILE.csv or --characteristic with --unit, --target and --expected"),
     BOTH_CHARACTERISTIC_FORMS("give either --characteristics FILE.csv or a single --characteristic, not both"),
     OUT_EXISTS("%s exists; add --force to replace it (the old file is kept as .bak)"),

@@ -2,15 +2,14 @@ package dev.proofrun.cli;
 
 import dev.proofrun.design.DesignMessage;
 import dev.proofrun.design.DesignRequest;
-import dev.proofrun.design.Expectation;
-import dev.proofrun.design.Requirement;
 import dev.proofrun.design.SharedDesign;
 import dev.proofrun.design.SharedDesigner;
 import dev.proofrun.design.StudyDesigner;
 import dev.proofrun.plan.Characteristic;
 import dev.proofrun.plan.CharacteristicsCsv;
+import dev.proofrun.plan.CommonDesign;
+import dev.proofrun.plan.PlanMessage;
 import dev.proofrun.stats.IndexKind;
-import dev.proofrun.stats.SpecLimits;
 import dev.proofrun.text.Location;
 import dev.proofrun.text.UserException;
 import java.io.PrintWriter;
@@ -20,7 +19,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
-import java.util.Set;
+import java.util.function.Function;
 
 /**
  * {@code proofrun size --characteristics FILE.csv}: several characteristics measured on the same parts get
@@ -29,14 +28,6 @@ import java.util.Set;
  * {@code plan new --characteristics} reads it.
  */
 final class SharedSize {
-
-    /** The command's design options (power, sizes, estimator, bound, floors, shift) applied to one characteristic. */
-    interface RequestFactory {
-        DesignRequest make(SpecLimits.Sides sides, Requirement requirement, Expectation expectation);
-    }
-
-    private static final Set<DesignMessage> ABOUT_THE_CHARACTERISTIC = Set.of(DesignMessage.NOT_BETTER_THAN_REQUIRED,
-            DesignMessage.INDEX_NEEDS_BOTH_LIMITS, DesignMessage.INDEX_NEEDS_LIMIT);
 
     private final String file;
     private final List<Characteristic> characteristics;
@@ -54,23 +45,26 @@ final class SharedSize {
     }
 
     /**
+     * @param request        the command's design options (power, sizes, estimator, bound, floors, shift) applied
+     *                       to one characteristic
      * @param refusedOptions single-characteristic options given beside the file (refused when any)
      * @throws UserException for a refused option, a bad file (file, row, column), a characteristic that
      *                       cannot be planned (file and id), or no subgroup size that suits them all
      */
-    static SharedSize design(Path path, RequestFactory factory, IndexKind defaultIndex, double defaultConfidence,
+    static SharedSize design(Path path, Function<Characteristic, DesignRequest> request, IndexKind defaultIndex, double defaultConfidence,
             List<String> refusedOptions) {
         if (!refusedOptions.isEmpty()) {
             throw new UserException(SizeMessage.FILE_REPLACES_OPTIONS, String.join(", ", refusedOptions));
         }
         String file = path.toString();
         List<Characteristic> chars = CharacteristicsCsv.read(path, defaultIndex, defaultConfidence);
-        List<DesignRequest> requests = new ArrayList<>();
-        for (Characteristic c : chars) {
-            requests.add(request(file, c, factory));
+        List<SharedDesign> designs;
+        try {
+            designs = CommonDesign.solve(chars, request);
+        } catch (UserException e) {
+            throw e.key() == PlanMessage.CHARACTERISTIC_REFUSED ? e.placedIn(Location.file(file)) : e;
         }
-        List<SharedDesign> designs = SharedDesigner.design(requests);
-        DesignRequest first = requests.get(0);
+        DesignRequest first = request.apply(chars.get(0));
         List<String> warnings = new ArrayList<>();
         for (int n : first.subgroupSizes()) {
             if (designs.stream().noneMatch(d -> d.subgroupSize() == n)) {
@@ -87,22 +81,6 @@ final class SharedSize {
         String reason = SizeMessage.SHARED_REASON.format(best.subgroups(), best.subgroupSize(), best.readings(), why,
                 chars.get(best.driver()).id());
         return new SharedSize(file, chars, designs, reason, warnings);
-    }
-
-    private static DesignRequest request(String file, Characteristic c, RequestFactory factory) {
-        try {
-            DesignRequest r = factory.make(c.limits().sides(), c.requirement(), c.expectation());
-            if (!(c.expectation().index() > c.requirement().minimum())) {
-                throw new UserException(DesignMessage.NOT_BETTER_THAN_REQUIRED, c.requirement().index().symbol(),
-                        c.expectation().index(), c.requirement().minimum());
-            }
-            return r;
-        } catch (UserException e) {
-            if (e.key() instanceof DesignMessage m && ABOUT_THE_CHARACTERISTIC.contains(m)) {
-                throw new UserException(Location.file(file), SizeMessage.CHARACTERISTIC_REFUSED, c.id(), e.getMessage());
-            }
-            throw e;
-        }
     }
 
     void print(PrintWriter out) {

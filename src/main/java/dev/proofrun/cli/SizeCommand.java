@@ -14,6 +14,7 @@ import dev.proofrun.design.PowerPoint;
 import dev.proofrun.design.ProcessFacts;
 import dev.proofrun.design.Requirement;
 import dev.proofrun.design.StudyDesigner;
+import dev.proofrun.plan.Characteristic;
 import dev.proofrun.stats.BoundMethod;
 import dev.proofrun.stats.IndexKind;
 import dev.proofrun.stats.SigmaMethod;
@@ -23,7 +24,6 @@ import java.io.PrintWriter;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
-import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.OptionalInt;
 import java.util.concurrent.Callable;
@@ -121,11 +121,9 @@ public final class SizeCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         PrintWriter out = spec.commandLine().getOut();
+        Conventions.confidence(confidence);
         if (characteristics != null) {
-            if (!(confidence > 0.5 && confidence < 0.9999)) {
-                throw new UserException(DesignMessage.CONFIDENCE_OUT_OF_RANGE, confidence);
-            }
-            SharedSize shared = SharedSize.design(characteristics, this::sharedRequest, IndexKind.fromToken(index),
+            SharedSize shared = SharedSize.design(characteristics, this::sharedRequest, Conventions.index(index),
                     confidence, refusedBesideFile());
             if (json) {
                 ObjectMapper mapper = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
@@ -166,21 +164,23 @@ public final class SizeCommand implements Callable<Integer> {
     }
 
     /** The design options of this command applied to one characteristic from the file. */
-    private DesignRequest sharedRequest(SpecLimits.Sides specSides, Requirement requirement, Expectation expectation) {
+    private DesignRequest sharedRequest(Characteristic c) {
+        return designOptions(c.limits().sides(), c.requirement(), c.expectation(), List.of());
+    }
+
+    /** The design options of this command (power, sizes, estimator, bound, floors, shift) around one characteristic. */
+    private DesignRequest designOptions(SpecLimits.Sides specSides, Requirement requirement, Expectation expectation,
+            List<String> notes) {
         List<Integer> sizes = subgroupSizes == null || subgroupSizes.isEmpty()
                 ? IntStream.rangeClosed(1, 10).boxed().toList() : subgroupSizes;
         Floors floors = wrap(() -> new Floors(minSubgroups, minReadings));
-        return new DesignRequest(specSides, requirement, expectation, power, sizes,
-                Optional.ofNullable(sigma).map(SigmaMethod::fromToken), BoundMethod.fromToken(bound), floors, shift,
-                List.of());
+        return new DesignRequest(specSides, requirement, expectation, power, sizes, Conventions.sigma(sigma),
+                Conventions.bound(bound), floors, shift, notes);
     }
 
     DesignRequest request() {
-        IndexKind kind = IndexKind.fromToken(index);
-        if (!(confidence > 0.5 && confidence < 0.9999)) {
-            throw new UserException(DesignMessage.CONFIDENCE_OUT_OF_RANGE, confidence);
-        }
-        SpecLimits.Sides specSides = sides();
+        IndexKind kind = Conventions.index(index);
+        SpecLimits.Sides specSides = Conventions.sides(sides, lsl, usl);
         List<String> notes = new ArrayList<>();
         Expectation expectation;
         if (pilot != null) {
@@ -196,66 +196,33 @@ public final class SizeCommand implements Callable<Integer> {
                 throw new UserException(DesignMessage.BAD_EXPECTATION,
                         "give --expected (with --expected-cp if off centre), or --mean and --sd with --lsl/--usl");
             }
-            ProcessFacts facts = ProcessFacts.of(SpecLimits.of(lsl, usl), mean, sd)
+            ProcessFacts facts = ProcessFacts.of(Conventions.limits(lsl, usl), mean, sd)
                     .withGauge(optional(gaugeSd), optional(resolution));
             expectation = facts.expectationFor(kind, notes);
         }
         if (expected != null && (gaugeSd != null || resolution != null)) {
             throw new UserException(DesignMessage.BAD_EXPECTATION, "--gauge-sd and --resolution need --mean, --sd and the limits");
         }
-        Requirement requirement = Requirement.of(kind, target, confidence);
-        List<Integer> sizes = subgroupSizes == null || subgroupSizes.isEmpty()
-                ? IntStream.rangeClosed(1, 10).boxed().toList() : subgroupSizes;
-        Floors floors = wrap(() -> new Floors(minSubgroups, minReadings));
-        return new DesignRequest(specSides, requirement, expectation, power, sizes,
-                Optional.ofNullable(sigma).map(SigmaMethod::fromToken), BoundMethod.fromToken(bound), floors, shift,
-                notes);
+        return designOptions(specSides, Requirement.of(kind, target, confidence), expectation, notes);
     }
 
     private Expectation fromPilot(IndexKind kind, List<String> notes) {
         if (lsl == null && usl == null) {
             throw new UserException(DesignMessage.BAD_EXPECTATION, "--pilot needs the specification limits --lsl/--usl");
         }
+        SpecLimits limits = Conventions.limits(lsl, usl);
+        SigmaMethod method = Conventions.sigma(sigma).orElse(null);
+        BoundMethod boundMethod = Conventions.bound(bound);
         dev.proofrun.readings.Readings readings = dev.proofrun.readings.ReadingsCsv.read(pilot,
                 pilotSubgroupSize == null ? OptionalInt.empty() : OptionalInt.of(pilotSubgroupSize));
         dev.proofrun.capability.CapabilityResult result;
         try {
-            result = dev.proofrun.capability.CapabilityAnalysis.of(readings.subgroups(), SpecLimits.of(lsl, usl), null,
-                    sigma == null ? null : SigmaMethod.fromToken(sigma), confidence, BoundMethod.fromToken(bound));
+            result = dev.proofrun.capability.CapabilityAnalysis.of(readings.subgroups(), limits, null, method,
+                    confidence, boundMethod);
         } catch (UserException e) {
-            throw e.location().isPresent() ? e
-                    : new UserException(dev.proofrun.text.Location.file(pilot.toString()), e.key(), e.args());
+            throw e.placedIn(dev.proofrun.text.Location.file(pilot.toString()));
         }
         return dev.proofrun.design.PilotExpectation.from(result, kind, notes);
-    }
-
-    private SpecLimits.Sides sides() {
-        SpecLimits.Sides fromLimits = null;
-        if (lsl != null || usl != null) {
-            fromLimits = SpecLimits.of(lsl, usl).sides();
-        }
-        if (sides == null) {
-            return fromLimits == null ? SpecLimits.Sides.TWO_SIDED : fromLimits;
-        }
-        SpecLimits.Sides given;
-        switch (sides.trim().toLowerCase(Locale.ROOT)) {
-            case "two-sided":
-                given = SpecLimits.Sides.TWO_SIDED;
-                break;
-            case "upper":
-                given = SpecLimits.Sides.UPPER_ONLY;
-                break;
-            case "lower":
-                given = SpecLimits.Sides.LOWER_ONLY;
-                break;
-            default:
-                throw new UserException(DesignMessage.BAD_EXPECTATION,
-                        String.format(Locale.ROOT, "unknown --spec '%s' (two-sided, upper or lower)", sides));
-        }
-        if (fromLimits != null && fromLimits != given) {
-            throw new UserException(DesignMessage.BAD_EXPECTATION, "--spec does not match the limits given");
-        }
-        return given;
     }
 
     private static OptionalDouble optional(Double v) {

@@ -7,7 +7,6 @@ public enum SizeMessage implements MessageKey {
     TARGET_NEEDED("give --target (the required minimum), or --characteristics FILE.csv for several characteristics"),
     FILE_REPLACES_OPTIONS("--characteristics takes each characteristic's target, limits and expectation from the file;"
             + " leave out %s"),
-    CHARACTERISTIC_REFUSED("characteristic %s: %s"),
     SHARED_HEADING("One design for %d characteristics measured on the same parts (%s):"),
     SHARED_REASON("%d subgroups of %d (%d readings of each characteristic) is the fewest readings that %s of every"
             + " size tried; %s needs the most subgroups."),

@@ -9,7 +9,6 @@ public enum DesignMessage implements MessageKey {
     UNREACHABLE("a power of %.3f is out of reach within %d readings for every subgroup size tried "
             + "(best: %.3f with n = %d); raise the expected index or lower the power"),
     UNREACHABLE_FOR_SIZE("subgroups of %d cannot reach a power of %.3f within %d readings; left out of the table"),
-    CONFIDENCE_OUT_OF_RANGE("confidence must be above 0.5 and below 0.9999: %s"),
     POWER_OUT_OF_RANGE("power must be above 0.05 and below 0.9999: %s"),
     INDEX_NEEDS_BOTH_LIMITS("%s needs both specification limits; use %s for a one-sided specification"),
     INDEX_NEEDS_LIMIT("%s needs the %s specification limit"),

@@ -114,6 +114,19 @@ public record DesignRequest(SpecLimits.Sides sides, Requirement requirement, Exp
                 floors, shift, more);
     }
 
+    /**
+     * Checks that some study can show the requirement at all: the expected index must lie above the
+     * required one (at c₁ ≤ c₀ the power cannot exceed 1 − confidence, whatever the size).
+     *
+     * @throws UserException if c₁ ≤ c₀
+     */
+    public void requireAttainable() {
+        if (!(expectation.index() > requirement.minimum())) {
+            throw new UserException(DesignMessage.NOT_BETTER_THAN_REQUIRED, requirement.index().symbol(),
+                    expectation.index(), requirement.minimum());
+        }
+    }
+
     /** The within estimator for subgroups of size n: moving range for n = 1, else the chosen or default one. */
     public SigmaMethod sigmaFor(int n) {
         if (n == 1) {

@@ -11,6 +11,10 @@ import java.util.List;
  * shared k is the largest of them, the power of every characteristic is evaluated at that (n, k), and the
  * one that needs the largest k is named as the driver. The recommended design has the fewest readings
  * (on a tie, the most subgroups). The candidate sizes are those of the first request.
+ *
+ * <p>{@code size --characteristics} shows its table; {@code plan new} takes its first design through
+ * {@code plan.CommonDesign}, which adds only what a plan needs (a fixed n and k, a given k, refusals that
+ * name the characteristic).
  */
 public final class SharedDesigner {
 
@@ -28,10 +32,7 @@ public final class SharedDesigner {
             throw new IllegalArgumentException("at least one characteristic is needed");
         }
         for (DesignRequest r : requests) {
-            if (!(r.expectation().index() > r.requirement().minimum())) {
-                throw new UserException(DesignMessage.NOT_BETTER_THAN_REQUIRED, r.requirement().index().symbol(),
-                        r.expectation().index(), r.requirement().minimum());
-            }
+            r.requireAttainable();
         }
         List<SharedDesign> out = new ArrayList<>();
         double best = 0;

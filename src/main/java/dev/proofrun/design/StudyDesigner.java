@@ -45,10 +45,7 @@ public final class StudyDesigner {
     public static DesignTable design(DesignRequest request) {
         Requirement req = request.requirement();
         Expectation exp = request.expectation();
-        if (!(exp.index() > req.minimum())) {
-            throw new UserException(DesignMessage.NOT_BETTER_THAN_REQUIRED, req.index().symbol(), exp.index(),
-                    req.minimum());
-        }
+        request.requireAttainable();
         List<String> warnings = new ArrayList<>(request.notes());
         if (exp.potential().isPresent() && request.shape() != IndexShape.TWO_SIDED_MIN) {
             warnings.add(DesignMessage.POTENTIAL_IGNORED.format(req.index().symbol()));

@@ -1,18 +1,18 @@
 package dev.proofrun.plan;
 
 import dev.proofrun.design.Design;
+import dev.proofrun.design.DesignMessage;
 import dev.proofrun.design.DesignRequest;
-import dev.proofrun.design.DesignRow;
-import dev.proofrun.design.DesignTable;
-import dev.proofrun.design.StudyDesigner;
+import dev.proofrun.design.SharedDesign;
+import dev.proofrun.design.SharedDesigner;
+import dev.proofrun.text.UserException;
 import java.util.ArrayList;
-import java.util.Comparator;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
-import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalInt;
+import java.util.Set;
+import java.util.function.Function;
 import java.util.stream.IntStream;
 
 /**
@@ -21,85 +21,90 @@ import java.util.stream.IntStream;
  *
  * <ul>
  * <li>n and k both given: taken as they are, nothing is solved.</li>
- * <li>Otherwise each characteristic is sized by {@link StudyDesigner} for the candidate n (the given n, or
- * 1–10); for each n that every characteristic can reach, k(n) is the largest k any characteristic needs;
- * the design with the fewest readings n·k(n) is chosen (on a tie, more subgroups — the designer's own rule).
+ * <li>Otherwise {@link SharedDesigner} solves it, as {@code size --characteristics} shows it: for each
+ * candidate n (the given n, or 1–10) that every characteristic can reach, k(n) is the largest k any
+ * characteristic needs; the design with the fewest readings n·k(n) is chosen (on a tie, more subgroups).
  * A given k replaces k(n) (the engineer's choice; the power then is what that k gives).</li>
  * </ul>
  *
- * @param design   the chosen design
- * @param reason   one sentence saying how it was chosen
- * @param perCharacteristic the designer's row for the chosen n, by characteristic id (empty when nothing was solved)
+ * What this class adds to the designer is what a plan needs: the fixed design, the given k, a refusal about
+ * one characteristic that names it ({@link PlanMessage#CHARACTERISTIC_REFUSED}), and the sentence that says
+ * how the design was chosen.
+ *
+ * @param design the chosen design
+ * @param reason one sentence saying how it was chosen
+ * @param solved the designer's shared design for the chosen n (empty when n and k were both given)
  */
-public record CommonDesign(Design design, String reason, Map<String, DesignRow> perCharacteristic) {
+public record CommonDesign(Design design, String reason, Optional<SharedDesign> solved) {
 
-    public CommonDesign {
-        perCharacteristic = java.util.Collections.unmodifiableMap(new LinkedHashMap<>(perCharacteristic));
-    }
+    /** Refusals of the designer that are about one characteristic, so they are reported with its id. */
+    private static final Set<DesignMessage> ABOUT_THE_CHARACTERISTIC = Set.of(DesignMessage.NOT_BETTER_THAN_REQUIRED,
+            DesignMessage.INDEX_NEEDS_BOTH_LIMITS, DesignMessage.INDEX_NEEDS_LIMIT);
 
     /**
      * @param characteristics the plan's characteristics
      * @param power           wanted power for the designer
      * @param subgroupSize    n, if fixed
      * @param subgroups       k, if fixed
-     * @throws dev.proofrun.text.UserException when a characteristic cannot be sized, or no n suits all
+     * @throws UserException when a characteristic cannot be sized (naming it), or no n suits all
      */
     public static CommonDesign choose(List<Characteristic> characteristics, double power, OptionalInt subgroupSize,
             OptionalInt subgroups) {
         if (subgroupSize.isPresent() && subgroups.isPresent()) {
             Design d = Design.of(subgroupSize.getAsInt(), subgroups.getAsInt());
             return new CommonDesign(d, String.format(Locale.ROOT, "%d subgroups of %d as given; not solved.",
-                    d.subgroups(), d.subgroupSize()), Map.of());
+                    d.subgroups(), d.subgroupSize()), Optional.empty());
         }
         List<Integer> sizes = subgroupSize.isPresent() ? List.of(subgroupSize.getAsInt())
                 : IntStream.rangeClosed(1, 10).boxed().toList();
-        Map<String, DesignTable> tables = new LinkedHashMap<>();
-        for (Characteristic c : characteristics) {
-            DesignRequest req = DesignRequest.of(c.limits().sides(), c.requirement(), c.expectation())
-                    .withPower(power).withSubgroupSizes(sizes);
-            tables.put(c.id(), StudyDesigner.design(req));
-        }
-        List<int[]> candidates = new ArrayList<>();
-        for (int n : sizes) {
-            int k = 0;
-            boolean all = true;
-            for (DesignTable t : tables.values()) {
-                Optional<DesignRow> row = rowFor(t, n);
-                if (row.isEmpty()) {
-                    all = false;
-                    break;
-                }
-                k = Math.max(k, row.get().subgroups());
+        List<SharedDesign> designs;
+        try {
+            designs = solve(characteristics, c -> DesignRequest.of(c.limits().sides(), c.requirement(), c.expectation())
+                    .withPower(power).withSubgroupSizes(sizes));
+        } catch (UserException e) {
+            if (characteristics.size() > 1 && e.key() == DesignMessage.UNREACHABLE) {
+                throw new UserException(PlanMessage.NO_COMMON_DESIGN, sizes.toString());
             }
-            if (all) {
-                candidates.add(new int[] {n, k});
-            }
+            throw e;
         }
-        if (candidates.isEmpty()) {
-            throw new dev.proofrun.text.UserException(PlanMessage.NO_COMMON_DESIGN, sizes.toString());
-        }
-        int[] best = candidates.stream().min(Comparator.<int[]>comparingInt(c -> c[0] * c[1])
-                .thenComparing(c -> -c[1])).orElseThrow();
-        int n = best[0];
-        int k = subgroups.orElse(best[1]);
-        Map<String, DesignRow> rows = new LinkedHashMap<>();
-        String hardest = null;
-        for (Map.Entry<String, DesignTable> e : tables.entrySet()) {
-            DesignRow r = rowFor(e.getValue(), n).orElseThrow();
-            rows.put(e.getKey(), r);
-            if (r.subgroups() == best[1] && hardest == null) {
-                hardest = e.getKey();
-            }
-        }
+        SharedDesign best = designs.get(0);
+        int n = best.subgroupSize();
+        int k = subgroups.orElse(best.subgroups());
         String reason = subgroups.isPresent()
                 ? String.format(Locale.ROOT, "subgroups of %d as sized by the designer; %d subgroups as given (the designer asked for %d).",
-                        n, k, best[1])
+                        n, k, best.subgroups())
                 : String.format(Locale.ROOT, "%d subgroups of %d (%d readings): the fewest readings that give every characteristic"
-                        + " the wanted power of %.2f; %s needs the most subgroups.", k, n, n * k, power, hardest);
-        return new CommonDesign(Design.of(n, k), reason, rows);
+                        + " the wanted power of %.2f; %s needs the most subgroups.", k, n, n * k, power,
+                        characteristics.get(best.driver()).id());
+        return new CommonDesign(Design.of(n, k), reason, Optional.of(best));
     }
 
-    private static Optional<DesignRow> rowFor(DesignTable t, int n) {
-        return t.rows().stream().filter(r -> r.subgroupSize() == n).findFirst();
+    /**
+     * The shared designs of {@link SharedDesigner} for these characteristics, each asked with the request the
+     * caller makes for it; a refusal about one characteristic (c₁ ≤ c₀, an index its limits cannot give)
+     * names it.
+     *
+     * @param characteristics the characteristics measured on the same parts (at least one)
+     * @param request         the caller's design options applied to one characteristic
+     * @return as {@link SharedDesigner#design}: one per subgroup size every characteristic can reach, best first
+     * @throws UserException {@link PlanMessage#CHARACTERISTIC_REFUSED} with the id and the designer's words, or as
+     *                       {@link SharedDesigner#design}
+     */
+    public static List<SharedDesign> solve(List<Characteristic> characteristics,
+            Function<Characteristic, DesignRequest> request) {
+        List<DesignRequest> requests = new ArrayList<>();
+        for (Characteristic c : characteristics) {
+            try {
+                DesignRequest r = request.apply(c);
+                r.requireAttainable();
+                requests.add(r);
+            } catch (UserException e) {
+                if (e.key() instanceof DesignMessage m && ABOUT_THE_CHARACTERISTIC.contains(m)) {
+                    throw new UserException(PlanMessage.CHARACTERISTIC_REFUSED, c.id(), e.getMessage());
+                }
+                throw e;
+            }
+        }
+        return SharedDesigner.design(requests);
     }
 }

@@ -2,7 +2,7 @@ package dev.proofrun.plan;
 
 import dev.proofrun.text.MessageKey;
 
-/** Messages of the plan package: reading, writing and issuing plan files. */
+/** Messages of the plan package: reading, writing and issuing plan files; designing a plan's characteristics. */
 public enum PlanMessage implements MessageKey {
     CANNOT_READ("cannot read the plan file: %s"),
     CANNOT_WRITE("cannot write the plan file: %s"),
@@ -25,7 +25,8 @@ public enum PlanMessage implements MessageKey {
     CSV_EXTRA_CELLS("%d cells but the header has %d (a decimal comma? use a decimal point)"),
     CSV_NO_ROWS("no characteristics in the file (only a header?)"),
     NO_COMMON_DESIGN("no subgroup size among %s lets every characteristic reach the wanted power; plan them separately"
-            + " or lower the power");
+            + " or lower the power"),
+    CHARACTERISTIC_REFUSED("characteristic %s: %s");
 
     private final String english;
 

@@ -42,4 +42,12 @@ public class UserException extends RuntimeException {
     public Optional<Location> location() {
         return Optional.ofNullable(location);
     }
+
+    /**
+     * The same refusal placed in a file or cell: itself when it already has a place (a cell is more precise
+     * than its file), else the same key and arguments at {@code where}.
+     */
+    public UserException placedIn(Location where) {
+        return location != null ? this : new UserException(where, key, args);
+    }
 }

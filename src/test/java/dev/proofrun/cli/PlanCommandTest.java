@@ -127,6 +127,32 @@ class PlanCommandTest {
     }
 
     @Test
+    void aCharacteristicExpectedNoBetterThanRequiredIsNamed() throws Exception {
+        // R2 is expected at Cpk 1.2 against a required 1.33 (c1 <= c0): no study size can show it
+        Path csv = dir.resolve("weak.csv");
+        Files.writeString(csv, "id,name,unit,nominal,lsl,usl,target,expected\n"
+                + "D1,bore,mm,12.0,11.98,12.02,1.33,1.8\nR2,runout,mm,,,0.05,1.33,1.2\n");
+        String before = Files.readString(csv);
+        Path file = dir.resolve("weak.json");
+        assertEquals(2, run("plan", "new", "--out", file.toString(), "--part", "hub", "--characteristics", csv.toString(),
+                "--subgroup-size", "5", "--zone", "UTC", "--start", "2027-03-01T06:00"));
+        assertEquals("proofrun: " + csv + ": characteristic R2: expected Cpk 1.200 is not above the required 1.330:"
+                + " no study size can show this; the process must improve first", err.toString().strip());
+        assertEquals("", out.toString());
+        assertFalse(Files.exists(file));
+        assertEquals(before, Files.readString(csv), "the user's file is untouched");
+
+        // one characteristic from the options: its id, no file
+        assertEquals(2, run("plan", "new", "--out", file.toString(), "--part", "gear shaft", "--characteristic",
+                "journal diameter", "--characteristic-id", "J1", "--unit", "mm", "--lsl", "24.98", "--usl", "25.02",
+                "--target", "1.33", "--expected", "1.33", "--subgroup-size", "5", "--zone", "UTC",
+                "--start", "2027-03-01T06:00"));
+        assertTrue(err.toString().strip().startsWith("proofrun: characteristic J1: expected Cpk 1.330 is not above"),
+                err.toString());
+        assertFalse(Files.exists(file));
+    }
+
+    @Test
     void anExistingFileIsNotReplacedWithoutForce() throws Exception {
         Path file = dir.resolve("p.json");
         assertEquals(0, run(newPlan(file)));

@@ -1,17 +1,24 @@
 package dev.proofrun.plan;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.proofrun.design.DesignRequest;
 import dev.proofrun.design.DesignRow;
 import dev.proofrun.design.DesignTable;
+import dev.proofrun.design.Expectation;
+import dev.proofrun.design.SharedDesign;
 import dev.proofrun.design.StudyDesigner;
+import dev.proofrun.text.UserException;
 import java.util.List;
 import java.util.OptionalInt;
 import org.junit.jupiter.api.Test;
 
-/** The common design is the designer's answer combined by the documented rule (checked against the designer itself). */
+/**
+ * The common design is the shared designer's answer; checked here against the single-characteristic
+ * designer ({@link StudyDesigner}, a separate path through the same search) combined by the documented rule.
+ */
 class CommonDesignTest {
 
     private final List<Characteristic> chars = DemoPlan.draft().characteristics();
@@ -27,7 +34,7 @@ class CommonDesignTest {
         CommonDesign d = CommonDesign.choose(chars, 0.9, OptionalInt.of(4), OptionalInt.of(30));
         assertEquals(4, d.design().subgroupSize());
         assertEquals(30, d.design().subgroups());
-        assertTrue(d.perCharacteristic().isEmpty());
+        assertTrue(d.solved().isEmpty());
     }
 
     @Test
@@ -36,9 +43,23 @@ class CommonDesignTest {
         int k = chars.stream().mapToInt(c -> designerK(c, 5)).max().orElseThrow();
         assertEquals(5, d.design().subgroupSize());
         assertEquals(k, d.design().subgroups());
-        for (DesignRow r : d.perCharacteristic().values()) {
-            assertTrue(r.subgroups() <= d.design().subgroups());
+        SharedDesign shared = d.solved().orElseThrow();
+        for (int i = 0; i < chars.size(); i++) {
+            assertEquals(designerK(chars.get(i), 5), shared.ownSubgroups().get(i), chars.get(i).id());
         }
+        String driver = chars.get(shared.driver()).id();
+        assertTrue(d.reason().endsWith(driver + " needs the most subgroups."), d.reason());
+    }
+
+    @Test
+    void aGivenKReplacesTheSolvedOne() {
+        CommonDesign solved = CommonDesign.choose(chars, 0.9, OptionalInt.empty(), OptionalInt.empty());
+        CommonDesign d = CommonDesign.choose(chars, 0.9, OptionalInt.empty(), OptionalInt.of(40));
+        int k = solved.design().subgroups();
+        assertEquals(solved.design().subgroupSize(), d.design().subgroupSize());
+        assertEquals(40, d.design().subgroups());
+        assertEquals(k, d.solved().orElseThrow().subgroups());
+        assertTrue(d.reason().contains("40 subgroups as given (the designer asked for " + k + ")"), d.reason());
     }
 
     @Test
@@ -49,5 +70,18 @@ class CommonDesignTest {
         CommonDesign d = CommonDesign.choose(List.of(c), 0.9, OptionalInt.empty(), OptionalInt.empty());
         assertEquals(rec.subgroupSize(), d.design().subgroupSize());
         assertEquals(rec.subgroups(), d.design().subgroups());
+    }
+
+    @Test
+    void aCharacteristicExpectedNoBetterThanRequiredIsNamed() {
+        // R4 expected exactly at its requirement (c1 = c0 = 1.33): no study size can show it
+        Characteristic r4 = chars.get(1);
+        Characteristic atMinimum = new Characteristic(r4.id(), r4.name(), r4.unit(), r4.nominal(), r4.limits(),
+                r4.gauge(), r4.requirement(), Expectation.centred(r4.requirement().minimum()));
+        UserException e = assertThrows(UserException.class, () -> CommonDesign.choose(
+                List.of(chars.get(0), atMinimum, chars.get(2)), 0.9, OptionalInt.empty(), OptionalInt.empty()));
+        assertEquals(PlanMessage.CHARACTERISTIC_REFUSED, e.key());
+        assertEquals("characteristic R4: expected Cpk 1.330 is not above the required 1.330: no study size can show"
+                + " this; the process must improve first", e.getMessage());
     }
 }

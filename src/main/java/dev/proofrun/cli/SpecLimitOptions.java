@@ -1,0 +1,27 @@
+package dev.proofrun.cli;
+
+import dev.proofrun.stats.SpecLimits;
+import picocli.CommandLine.Option;
+
+/**
+ * {@code --lsl} and {@code --usl} as {@code estimate} and {@code plan new} declare them (a picocli mixin);
+ * {@code size} words them for its own use and reads them with the same {@link Conventions#limits}.
+ */
+final class SpecLimitOptions {
+
+    @Option(names = "--lsl", paramLabel = "X", description = "Lower specification limit.")
+    Double lsl;
+
+    @Option(names = "--usl", paramLabel = "X", description = "Upper specification limit.")
+    Double usl;
+
+    /** Whether either limit was given. */
+    boolean given() {
+        return lsl != null || usl != null;
+    }
+
+    /** @throws dev.proofrun.text.UserException as {@link Conventions#limits} */
+    SpecLimits limits() {
+        return Conventions.limits(lsl, usl);
+    }
+}
