@@ -272,6 +272,22 @@ public final class PlanFiles {
     }
 
     private static PlanJson.File parse(byte[] bytes, Location where) {
+        // A well-formed plan is read once, straight into the records. Anything else (or a header that is not
+        // this format and version) is read again below as a tree first, so every refusal is the one it was
+        // when every file was read twice; PlanFilesTest covers both ways.
+        try {
+            PlanJson.File f = MAPPER.readValue(bytes, PlanJson.File.class);
+            if (f != null && PlanJson.FORMAT.equals(f.format()) && f.formatVersion() != null
+                    && f.formatVersion() == PlanJson.VERSION) {
+                return f;
+            }
+        } catch (IOException e) {
+            // refused below with the message of the checked reading
+        }
+        return parseChecked(bytes, where);
+    }
+
+    private static PlanJson.File parseChecked(byte[] bytes, Location where) {
         JsonNode tree;
         try {
             tree = MAPPER.readTree(bytes);
