@@ -64,12 +64,21 @@ public final class GradeCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         Paper size = Paper.of(paper); // refused before anything is read or written
-        StudyPlan plan = PlanFiles.read(planFile);
-        if (!plan.isIssued()) {
+        // the plan's revision is checked while the returned file is read; the check speaks first, as before
+        PlanFiles.Pending pending = PlanFiles.readPending(planFile);
+        StudyPlan plan = pending.plan();
+        if (!plan.isIssued()) { // a draft has no revision to check: nothing was pending
             throw new UserException(Location.file(planFile.toString()), GradeMessage.PLAN_NOT_ISSUED);
         }
-        GradingPlan gp = PlanAdapter.of(plan);
-        GradeResult result = Grader.grade(gp, dataFile, dataFile.toString());
+        GradeResult result;
+        try {
+            GradingPlan gp = PlanAdapter.of(plan);
+            result = Grader.grade(gp, dataFile, dataFile.toString());
+        } catch (RuntimeException e) {
+            pending.confirm();
+            throw e;
+        }
+        pending.confirm();
         PrintWriter out = spec.commandLine().getOut();
         if (report != null) {
             GradeReports.write(result, plan, report, size);

@@ -2,11 +2,8 @@ package dev.proofrun.grade;
 
 import dev.proofrun.text.Location;
 import dev.proofrun.text.UserException;
-import java.io.BufferedReader;
 import java.io.IOException;
 import java.io.InputStream;
-import java.io.InputStreamReader;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 
@@ -23,8 +20,8 @@ final class CsvTable {
     }
 
     static void read(Path path, String display, RowHandler handler) {
-        try (InputStream in = Files.newInputStream(path);
-                BufferedReader reader = new BufferedReader(new InputStreamReader(in, StandardCharsets.UTF_8), 1 << 16)) {
+        try (InputStream in = Files.newInputStream(path)) {
+            CsvLines reader = new CsvLines(in, 1 << 16);
             String line;
             long row = 0;
             char separator = 0;

@@ -38,6 +38,8 @@ final class ReturnedData implements RowHandler {
     private static final double RESOLUTION_SLACK = 1e-6;
 
     private final GradingPlan plan;
+    /** {@link GradingPlan#reference()}, built once: every row is compared with it. */
+    private final String reference;
     private final String display;
     private final Map<String, Integer> slotIndex;
     private final Map<String, Integer> characteristicIndex = new HashMap<>();
@@ -60,6 +62,7 @@ final class ReturnedData implements RowHandler {
 
     ReturnedData(GradingPlan plan, String display) {
         this.plan = plan;
+        this.reference = plan.reference();
         this.display = display;
         this.slotIndex = plan.slotIndex();
         this.n = plan.design().subgroupSize();
@@ -134,8 +137,8 @@ final class ReturnedData implements RowHandler {
     public void row(long row, String[] cells, int count) {
         rows++;
         String planCell = prefilled(cells, count, planCol);
-        if (!planCell.isEmpty() && !planCell.equals(plan.reference())) {
-            throw new UserException(Location.cell(display, row, name(planCol)), GradeMessage.PLAN_MISMATCH, planCell, plan.reference());
+        if (!planCell.isEmpty() && !planCell.equals(reference)) {
+            throw new UserException(Location.cell(display, row, name(planCol)), GradeMessage.PLAN_MISMATCH, planCell, reference);
         }
         String charCell = prefilled(cells, count, characteristicCol);
         Integer ci = characteristicIndex.get(charCell);

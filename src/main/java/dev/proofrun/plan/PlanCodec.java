@@ -204,19 +204,43 @@ final class PlanCodec {
         List<PlanJson.SlotJ> sj = req(s.slots(), "$.schedule.slots");
         List<Slot> slots = new ArrayList<>();
         for (int i = 0; i < sj.size(); i++) {
-            String p = at("$.schedule.slots", i);
-            PlanJson.SlotJ x = req(sj.get(i), p);
-            OffsetDateTime start = value(p + ".start", () -> OffsetDateTime.parse(req(x.start(), p + ".start")));
-            slots.add(value(p, () -> new Slot(req(x.id(), p + ".id"), start, req(x.windowMinutes(), p + ".windowMinutes"),
-                    req(x.shift(), p + ".shift"), req(x.partsSinceStart(), p + ".partsSinceStart"))));
-            if (i > 0 && !start.toInstant().isAfter(slots.get(i - 1).start().toInstant())) {
-                throw new UserException(file, PlanMessage.BAD_VALUE, p + ".start", "slots must be in time order");
+            Slot slot = quickSlot(sj.get(i));
+            if (slot == null) {
+                slot = checkedSlot(sj.get(i), at("$.schedule.slots", i));
             }
+            if (i > 0 && !slot.start().toInstant().isAfter(slots.get(i - 1).start().toInstant())) {
+                throw new UserException(file, PlanMessage.BAD_VALUE, at("$.schedule.slots", i) + ".start",
+                        "slots must be in time order");
+            }
+            slots.add(slot);
         }
         OffsetDateTime end = value("$.schedule.end", () -> OffsetDateTime.parse(req(s.end(), "$.schedule.end")));
         return value("$.schedule", () -> new Schedule(slots, subgroupSize, req(s.workingMinutes(), "$.schedule.workingMinutes"),
                 req(s.spacingMinutes(), "$.schedule.spacingMinutes"), end, req(s.shifts(), "$.schedule.shifts"),
                 req(s.days(), "$.schedule.days")));
+    }
+
+    /**
+     * A complete, valid slot read without building its JSON paths (a plan can have 200,000 slots); null when
+     * anything is missing or refused, and {@link #checkedSlot} then finds the same slot or the message.
+     */
+    private static Slot quickSlot(PlanJson.SlotJ x) {
+        if (x == null || x.id() == null || x.start() == null || x.windowMinutes() == null || x.shift() == null
+                || x.partsSinceStart() == null) {
+            return null;
+        }
+        try {
+            return new Slot(x.id(), OffsetTimes.parse(x.start()), x.windowMinutes(), x.shift(), x.partsSinceStart());
+        } catch (IllegalArgumentException | DateTimeException e) {
+            return null;
+        }
+    }
+
+    private Slot checkedSlot(PlanJson.SlotJ y, String p) {
+        PlanJson.SlotJ x = req(y, p);
+        OffsetDateTime start = value(p + ".start", () -> OffsetDateTime.parse(req(x.start(), p + ".start")));
+        return value(p, () -> new Slot(req(x.id(), p + ".id"), start, req(x.windowMinutes(), p + ".windowMinutes"),
+                req(x.shift(), p + ".shift"), req(x.partsSinceStart(), p + ".partsSinceStart")));
     }
 
     private static DayOfWeek dayOfWeek(String token) {

@@ -118,4 +118,25 @@ class GradeCommandTest {
         assertEquals(1, r.err().strip().lines().count(), r.err());
         assertTrue(r.err().contains("the plan is a draft; grade against the issued plan"), r.err());
     }
+
+    /**
+     * The revision of the plan is checked while the returned file is read; a plan changed after issue is still
+     * refused with that one line, before any refusal of the returned file and before anything is printed.
+     */
+    @Test
+    void aPlanChangedAfterIssueIsRefusedBeforeTheReturnedFile() throws Exception {
+        Path edited = dir.resolve("edited-plan.json");
+        String text = Files.readString(plan, StandardCharsets.UTF_8);
+        String changed = text.replaceFirst("\"name\": \"[^\"]*\"", "\"name\": \"another part name\"");
+        assertTrue(!changed.equals(text));
+        Files.writeString(edited, changed, StandardCharsets.UTF_8);
+        for (Path returned : new Path[] {data, dir.resolve("nope.csv"), dir.resolve("wrong.ods")}) {
+            Run r = run("grade", edited.toString(), returned.toString());
+            assertEquals(2, r.code(), r.err());
+            assertEquals("", r.out());
+            assertEquals(1, r.err().strip().lines().count(), r.err());
+            assertTrue(r.err().contains("the plan was changed after it was issued as revision"), r.err());
+            assertTrue(r.err().contains(edited.toString()), r.err());
+        }
+    }
 }

@@ -202,6 +202,37 @@ class PlanFilesTest {
         assertEquals(PlanMessage.WRONG_TYPE, refused("[1, 2, 3]").key());
     }
 
+    /**
+     * A plan is read once, straight into the records, and only a file refused that way is read again as a tree
+     * for its message. These are the cases where the two ways could part: the header is checked as the tree
+     * sees it (the last of repeated keys), and header refusals come before any refusal of the body.
+     */
+    @Test
+    void theHeaderIsCheckedAsTheTreeSeesIt() throws Exception {
+        String text = demoText();
+        String lastFormatOther = text.replaceFirst("\\{", "{\"format\": \"proofrun-plan\", \"formatVersion\": 1,")
+                .replace("\"format\": \"proofrun-plan\",\n", "\"format\": \"shopping-list\",\n");
+        assertEquals(PlanMessage.NOT_A_PLAN, refused(lastFormatOther).key(), lastFormatOther.substring(0, 120));
+        String lastVersionOther = text.replaceFirst("\\{", "{\"formatVersion\": 1,")
+                .replace("\"formatVersion\": 1,\n", "\"formatVersion\": 3,\n");
+        assertEquals(PlanMessage.UNKNOWN_VERSION, refused(lastVersionOther).key());
+        // an unknown field and another format: the format is what is wrong
+        assertEquals(PlanMessage.NOT_A_PLAN, refused(text.replace("proofrun-plan", "shopping-list")
+                .replace("\"part\": {", "\"part\": {\"colour\": \"red\",")).key());
+        // the version given as text is another version, not a type error of the body
+        assertEquals(PlanMessage.UNKNOWN_VERSION, refused(text.replace("\"formatVersion\": 1", "\"formatVersion\": \"1\"")).key());
+        assertEquals(PlanMessage.UNKNOWN_VERSION, refused(text.replace("\"formatVersion\": 1", "\"formatVersion\": 1.0")).key());
+        // repeated keys that agree with the file are read as before
+        String repeated = text.replaceFirst("\\{", "{\"format\": \"shopping-list\", \"formatVersion\": 9,");
+        assertEquals(PlanFiles.inspect(saved(DemoPlan.create())).plan(), readText(repeated));
+    }
+
+    private StudyPlan readText(String text) throws Exception {
+        Path p = dir.resolve("text.json");
+        Files.writeString(p, text);
+        return PlanFiles.read(p);
+    }
+
     @Test
     void slotCountMustMatchTheDesign() throws Exception {
         String text = demoText();
