@@ -95,6 +95,14 @@ public final class SizingView implements StepView {
             }
         });
         vm.chosenProperty().addListener((obs, was, now) -> selectChosen(vm));
+        // the recommended row's colour: restyle the rows only when the recommendation moves to another size
+        // (picking a row changes only the selection, which the table styles itself; a refresh would remake
+        // every row and cell)
+        vm.tableProperty().addListener((obs, was, now) -> {
+            if (was != null && now != null && was.recommended().subgroupSize() != now.recommended().subgroupSize()) {
+                table.refresh();
+            }
+        });
 
         Label reason = new Label();
         reason.setId("design-reason");
@@ -135,7 +143,6 @@ public final class SizingView implements StepView {
                 if (table.getSelectionModel().getSelectedIndex() != i) {
                     table.getSelectionModel().select(i);
                 }
-                table.refresh();
                 return;
             }
         }
