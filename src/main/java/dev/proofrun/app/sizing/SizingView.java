@@ -11,6 +11,8 @@ import dev.proofrun.design.PowerPoint;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.function.Function;
+import javafx.beans.InvalidationListener;
+import javafx.beans.WeakInvalidationListener;
 import javafx.beans.binding.Bindings;
 import javafx.beans.property.ReadOnlyStringWrapper;
 import javafx.scene.Node;
@@ -78,14 +80,32 @@ public final class SizingView implements StepView {
                 column("Detection\n3σ / all rules", "Chance that the chart signals at least once when the mean moves by "
                         + "δ·σ_w for the second half of the study; per subgroup Φ(−3+δ√n) + Φ(−3−δ√n)",
                         r -> SizingViewModel.fmt(r.detection().beyondLimits()) + " / " + SizingViewModel.fmtOrDash(r.detection().allRules()))));
+        // each row marks itself when it shows the recommended design, and again when the recommendation
+        // changes (a table refresh would remake every row and cell)
         table.setRowFactory(t -> new TableRow<>() {
+            private final InvalidationListener restyle = o -> mark();
+
+            {
+                vm.tableProperty().addListener(new WeakInvalidationListener(restyle));
+            }
+
             @Override
             protected void updateItem(DesignRow r, boolean empty) {
                 super.updateItem(r, empty);
-                getStyleClass().remove("pr-recommended");
+                mark();
+            }
+
+            private void mark() {
+                DesignRow r = getItem();
                 DesignTable dt = vm.tableProperty().get();
-                if (!empty && r != null && dt != null && dt.recommended().subgroupSize() == r.subgroupSize()) {
-                    getStyleClass().add("pr-recommended");
+                boolean recommended = !isEmpty() && r != null && dt != null
+                        && dt.recommended().subgroupSize() == r.subgroupSize();
+                if (recommended != getStyleClass().contains("pr-recommended")) {
+                    if (recommended) {
+                        getStyleClass().add("pr-recommended");
+                    } else {
+                        getStyleClass().remove("pr-recommended");
+                    }
                 }
             }
         });
@@ -95,14 +115,6 @@ public final class SizingView implements StepView {
             }
         });
         vm.chosenProperty().addListener((obs, was, now) -> selectChosen(vm));
-        // the recommended row's colour: restyle the rows only when the recommendation moves to another size
-        // (picking a row changes only the selection, which the table styles itself; a refresh would remake
-        // every row and cell)
-        vm.tableProperty().addListener((obs, was, now) -> {
-            if (was != null && now != null && was.recommended().subgroupSize() != now.recommended().subgroupSize()) {
-                table.refresh();
-            }
-        });
 
         Label reason = new Label();
         reason.setId("design-reason");
