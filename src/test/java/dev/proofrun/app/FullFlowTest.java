@@ -132,6 +132,14 @@ class FullFlowTest {
         List<Integer> after = subgroupsByRow();
         assertNotEquals(before, after);
         assertTrue(after.get(0) < before.get(0), "fewer subgroups of 1 for a better process: " + before + " → " + after);
+        // the recommendation moved: exactly the row of the new recommended size is marked
+        await("only the recommended row marked", () -> {
+            int n = app.wizard().sizing().tableProperty().get().recommended().subgroupSize();
+            List<Integer> marked = robot.lookup("#designs .table-row-cell").match((TableRow<DesignRow> r) ->
+                    r.getStyleClass().contains("pr-recommended")).<TableRow<DesignRow>>queryAll().stream()
+                    .map(r -> r.getItem() == null ? -1 : r.getItem().subgroupSize()).toList();
+            return marked.equals(List.of(n));
+        });
 
         probe.phase("pick a design");
         // pick another design (subgroups of 3) and read what it costs

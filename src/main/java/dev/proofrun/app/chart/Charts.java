@@ -30,17 +30,6 @@ public final class Charts {
         return c;
     }
 
-    /** A chart whose y axis is a probability, fixed to [0, 1]. */
-    public static LineChart<Number, Number> probability(String id, String title, String xLabel, String yLabel) {
-        LineChart<Number, Number> c = lines(id, title, xLabel, yLabel);
-        NumberAxis y = (NumberAxis) c.getYAxis();
-        y.setAutoRanging(false);
-        y.setLowerBound(0);
-        y.setUpperBound(1);
-        y.setTickUnit(0.1);
-        return c;
-    }
-
     /**
      * Shows the given series, reusing the series already in the chart (their paths and legend items) and
      * only replacing names and points: redrawing after each recomputation then costs the FX thread far

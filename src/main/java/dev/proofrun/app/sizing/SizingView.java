@@ -1,6 +1,8 @@
 package dev.proofrun.app.sizing;
 
-import dev.proofrun.app.chart.Charts;
+import dev.proofrun.app.chart.CurvePlot;
+import dev.proofrun.app.chart.CurvePlot.Line;
+import dev.proofrun.app.chart.CurvePlot.Pen;
 import dev.proofrun.app.shell.StepView;
 import dev.proofrun.design.DesignRow;
 import dev.proofrun.design.DesignTable;
@@ -9,11 +11,11 @@ import dev.proofrun.design.PowerPoint;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.function.Function;
+import javafx.beans.InvalidationListener;
+import javafx.beans.WeakInvalidationListener;
 import javafx.beans.binding.Bindings;
 import javafx.beans.property.ReadOnlyStringWrapper;
 import javafx.scene.Node;
-import javafx.scene.chart.LineChart;
-import javafx.scene.chart.XYChart;
 import javafx.scene.control.Label;
 import javafx.scene.control.ProgressIndicator;
 import javafx.scene.control.TableColumn;
@@ -31,14 +33,12 @@ public final class SizingView implements StepView {
 
     private final VBox root = new VBox(12);
     private final TableView<DesignRow> table = new TableView<>();
-    private final LineChart<Number, Number> powerChart =
-            Charts.probability("power-chart", "Power against the number of subgroups", "subgroups k", "power");
-    private final LineChart<Number, Number> ocChart =
-            Charts.probability("oc-chart", "Chance to demonstrate against the true index", "true index", "probability");
+    private final CurvePlot powerChart =
+            new CurvePlot("power-chart", "Power against the number of subgroups", "subgroups k", "power");
+    private final CurvePlot ocChart =
+            new CurvePlot("oc-chart", "Chance to demonstrate against the true index", "true index", "probability");
 
     public SizingView(SizingViewModel vm) {
-        powerChart.getStyleClass().add("pr-design-chart");
-        ocChart.getStyleClass().add("pr-design-chart");
         TextField power = new TextField();
         power.setId("power");
         power.setPrefColumnCount(6);
@@ -80,14 +80,32 @@ public final class SizingView implements StepView {
                 column("Detection\n3σ / all rules", "Chance that the chart signals at least once when the mean moves by "
                         + "δ·σ_w for the second half of the study; per subgroup Φ(−3+δ√n) + Φ(−3−δ√n)",
                         r -> SizingViewModel.fmt(r.detection().beyondLimits()) + " / " + SizingViewModel.fmtOrDash(r.detection().allRules()))));
+        // each row marks itself when it shows the recommended design, and again when the recommendation
+        // changes (a table refresh would remake every row and cell)
         table.setRowFactory(t -> new TableRow<>() {
+            private final InvalidationListener restyle = o -> mark();
+
+            {
+                vm.tableProperty().addListener(new WeakInvalidationListener(restyle));
+            }
+
             @Override
             protected void updateItem(DesignRow r, boolean empty) {
                 super.updateItem(r, empty);
-                getStyleClass().remove("pr-recommended");
+                mark();
+            }
+
+            private void mark() {
+                DesignRow r = getItem();
                 DesignTable dt = vm.tableProperty().get();
-                if (!empty && r != null && dt != null && dt.recommended().subgroupSize() == r.subgroupSize()) {
-                    getStyleClass().add("pr-recommended");
+                boolean recommended = !isEmpty() && r != null && dt != null
+                        && dt.recommended().subgroupSize() == r.subgroupSize();
+                if (recommended != getStyleClass().contains("pr-recommended")) {
+                    if (recommended) {
+                        getStyleClass().add("pr-recommended");
+                    } else {
+                        getStyleClass().remove("pr-recommended");
+                    }
                 }
             }
         });
@@ -137,39 +155,40 @@ public final class SizingView implements StepView {
                 if (table.getSelectionModel().getSelectedIndex() != i) {
                     table.getSelectionModel().select(i);
                 }
-                table.refresh();
                 return;
             }
         }
     }
 
     private void drawCurves(SizingViewModel vm, DesignTable t) {
-        List<XYChart.Series<Number, Number>> power = new ArrayList<>();
-        List<XYChart.Series<Number, Number>> ocLines = new ArrayList<>();
+        List<Line> power = new ArrayList<>();
+        List<Line> ocLines = new ArrayList<>();
         if (t != null) {
             DesignRow c = t.recommended();
             List<PowerPoint> pc = t.powerCurve();
             if (!pc.isEmpty()) {
-                power.add(Charts.series("power, n = " + c.subgroupSize(),
-                        pc.stream().map(p -> new double[] {p.subgroups(), p.power()}).toList()));
+                power.add(new Line("power, n = " + c.subgroupSize(), Pen.CURVE,
+                        pc.stream().mapToDouble(PowerPoint::subgroups).toArray(),
+                        pc.stream().mapToDouble(PowerPoint::power).toArray()));
                 double wanted = vm.request().map(r -> r.power()).orElse(0.9);
-                power.add(Charts.horizontal("wanted " + SizingViewModel.fmt(wanted), wanted,
+                power.add(Line.horizontal("wanted " + SizingViewModel.fmt(wanted), Pen.WANTED, wanted,
                         pc.get(0).subgroups(), pc.get(pc.size() - 1).subgroups()));
-                power.add(Charts.vertical("chosen k = " + c.subgroups(), c.subgroups(), 0, 1));
+                power.add(Line.vertical("chosen k = " + c.subgroups(), Pen.CHOSEN, c.subgroups()));
             }
             List<OcPoint> oc = t.operatingCharacteristic();
             if (!oc.isEmpty()) {
-                ocLines.add(Charts.series(c.subgroups() + " × " + c.subgroupSize(),
-                        oc.stream().map(p -> new double[] {p.trueIndex(), p.probability()}).toList()));
+                ocLines.add(new Line(c.subgroups() + " × " + c.subgroupSize(), Pen.CURVE,
+                        oc.stream().mapToDouble(OcPoint::trueIndex).toArray(),
+                        oc.stream().mapToDouble(OcPoint::probability).toArray()));
                 vm.request().ifPresent(r -> {
-                    ocLines.add(Charts.vertical("required " + r.requirement().minimum(), r.requirement().minimum(), 0, 1));
-                    ocLines.add(Charts.vertical("expected " + SizingViewModel.fmt(r.expectation().index()),
-                            r.expectation().index(), 0, 1));
+                    ocLines.add(Line.vertical("required " + r.requirement().minimum(), Pen.WANTED, r.requirement().minimum()));
+                    ocLines.add(Line.vertical("expected " + SizingViewModel.fmt(r.expectation().index()), Pen.CHOSEN,
+                            r.expectation().index()));
                 });
             }
         }
-        Charts.show(powerChart, power);
-        Charts.show(ocChart, ocLines);
+        powerChart.show(power);
+        ocChart.show(ocLines);
     }
 
     private static TableColumn<DesignRow, String> column(String title, String tip, Function<DesignRow, String> text) {
