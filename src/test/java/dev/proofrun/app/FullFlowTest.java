@@ -7,6 +7,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import dev.proofrun.app.grading.GradingViewModel;
 import dev.proofrun.app.session.AppHome;
 import dev.proofrun.design.DesignRow;
+import dev.proofrun.app.chart.CurvePlot;
 import dev.proofrun.grade.DemoReturn;
 import dev.proofrun.grade.PlanAdapter;
 import dev.proofrun.grade.Verdict;
@@ -212,6 +213,15 @@ class FullFlowTest {
         String caution = text(robot, "#caution");
         assertTrue(caution.startsWith("Caution: a statistical statement under assumptions"), caution);
         assertTrue(robot.lookup("#char-caution").queryAs(Label.class).isVisible());
+        // the charts name every line with its value: centre and both control limits, both specification limits
+        for (String chart : List.of("#location-chart", "#spread-chart")) {
+            List<String> legend = fx(() -> robot.lookup(chart).queryAs(CurvePlot.class).legend());
+            assertTrue(legend.size() >= 4 && legend.get(1).startsWith("centre ") && legend.get(2).startsWith("UCL ")
+                    && legend.get(3).startsWith("LCL "), chart + " " + legend);
+        }
+        List<String> limits = fx(() -> robot.lookup("#readings-chart").queryAs(CurvePlot.class).legend());
+        assertTrue(limits.stream().anyMatch(n -> n.startsWith("LSL ")) && limits.stream().anyMatch(n -> n.startsWith("USL ")),
+                limits.toString());
         assertEquals(6, step());
         probe.phase("report");
         robot.clickOn("#export-report");

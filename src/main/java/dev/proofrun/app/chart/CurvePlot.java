@@ -25,23 +25,31 @@ import javafx.scene.text.TextAlignment;
  */
 public final class CurvePlot extends Region {
 
-    /** How a line is drawn. Colours are the theme's (proofrun.css): copper, amber, moss. */
+    /** How a line is drawn. Colours are the theme's (proofrun.css): copper, amber, moss, slate, brick. */
     public enum Pen {
-        /** The curve itself: copper, solid. */
-        CURVE(Color.web("#a8552b"), false, 0.14),
+        /** The curve itself (or the readings): copper, solid. */
+        CURVE(Color.web("#a8552b"), false, 0.14, false),
         /** A wanted or required value: amber, dashed. */
-        WANTED(Color.web("#946300"), true, 0.12),
+        WANTED(Color.web("#946300"), true, 0.12, false),
         /** A chosen or expected value: moss, solid. */
-        CHOSEN(Color.web("#3f7a52"), false, 0.12);
+        CHOSEN(Color.web("#3f7a52"), false, 0.12, false),
+        /** A control chart's centre line: slate, solid. */
+        CENTRE(Color.web("#3b4a5a"), false, 0.1, false),
+        /** A control limit or a specification limit: brick, dashed. */
+        LIMIT(Color.web("#a23b36"), true, 0.12, false),
+        /** Flagged points (signals): brick rings at the points, no line between them. */
+        FLAGGED(Color.web("#a23b36"), false, 0.14, true);
 
         final Color colour;
         final boolean dashed;
         final double widthEm;
+        final boolean marks;
 
-        Pen(Color colour, boolean dashed, double widthEm) {
+        Pen(Color colour, boolean dashed, double widthEm, boolean marks) {
             this.colour = colour;
             this.dashed = dashed;
             this.widthEm = widthEm;
+            this.marks = marks;
         }
     }
 
@@ -61,21 +69,35 @@ public final class CurvePlot extends Region {
     private static final Color CARD = Color.web("#fffdf9");
 
     private final Canvas canvas = new Canvas();
-    private final String title;
+    private String title;
+    private final boolean unitY;
     private final String xLabel;
     private final String yLabel;
     private final Tooltip tip = new Tooltip();
     private List<Line> lines = List.of();
     private double x0 = 0;
     private double x1 = 1;
+    private double y0 = 0;
+    private double y1 = 1;
     // plot area in pixels, set by draw()
     private double left;
     private double right;
     private double top;
     private double bottom;
 
+    /** A probability curve: the y axis is fixed to [0, 1]. */
     public CurvePlot(String id, String title, String xLabel, String yLabel) {
+        this(id, title, xLabel, yLabel, true);
+    }
+
+    /** A plot whose y axis spans the lines shown (a control chart, readings against their limits). */
+    public static CurvePlot spanning(String id, String title, String xLabel, String yLabel) {
+        return new CurvePlot(id, title, xLabel, yLabel, false);
+    }
+
+    private CurvePlot(String id, String title, String xLabel, String yLabel, boolean unitY) {
         this.title = title;
+        this.unitY = unitY;
         this.xLabel = xLabel;
         this.yLabel = yLabel;
         setId(id);
@@ -109,6 +131,25 @@ public final class CurvePlot extends Region {
         }
         x0 = lo;
         x1 = hi;
+        if (!unitY) {
+            double ylo = Double.POSITIVE_INFINITY;
+            double yhi = Double.NEGATIVE_INFINITY;
+            for (Line l : lines) {
+                for (double y : l.ys()) {
+                    if (Double.isFinite(y)) {
+                        ylo = Math.min(ylo, y);
+                        yhi = Math.max(yhi, y);
+                    }
+                }
+            }
+            if (!(ylo < yhi)) {
+                ylo = Double.isFinite(ylo) ? ylo - 0.5 : 0;
+                yhi = Double.isFinite(yhi) ? yhi + 0.5 : 1;
+            }
+            double pad = (yhi - ylo) * 0.05;
+            y0 = ylo - pad;
+            y1 = yhi + pad;
+        }
         List<String> names = new ArrayList<>();
         for (Line l : lines) {
             names.add(l.name());
@@ -116,6 +157,15 @@ public final class CurvePlot extends Region {
         setAccessibleText(title + (names.isEmpty() ? "" : ": " + String.join("; ", names)));
         tip.setText(title);
         draw();
+    }
+
+    /** The title (with the unit, if any); {@link #show} draws it. */
+    public void setTitle(String t) {
+        title = t;
+    }
+
+    public String title() {
+        return title;
     }
 
     /** The names in the legend, in order (for tests and the accessible text). */
@@ -139,7 +189,7 @@ public final class CurvePlot extends Region {
     }
 
     private double py(double y) {
-        return bottom - y * (bottom - top);
+        return bottom - (y - y0) / (y1 - y0) * (bottom - top);
     }
 
     private void draw() {
@@ -181,7 +231,7 @@ public final class CurvePlot extends Region {
         }
         double legendTop = h - rows * 1.3 * em - 0.3 * em;
 
-        left = 3.6 * em;
+        left = (unitY ? 3.6 : 5.0) * em;
         right = w - 1.0 * em;
         top = 2.0 * em;
         bottom = legendTop - 2.6 * em;
@@ -189,20 +239,36 @@ public final class CurvePlot extends Region {
             return;
         }
 
-        // y grid, ticks and numbers (0 to 1 by 0.1, numbers every 0.2)
+        // y grid, ticks and numbers (probabilities: 0 to 1 by 0.1, numbers every 0.2; otherwise a 1-2-5
+        // step giving about one number per 2.5 em)
         g.setLineDashes();
         g.setTextAlign(TextAlignment.RIGHT);
         g.setTextBaseline(VPos.CENTER);
-        for (int i = 0; i <= 10; i++) {
-            double y = py(i / 10.0);
-            g.setStroke(GRID);
-            g.setLineWidth(1);
-            g.strokeLine(left, y, right, y);
-            g.setStroke(INK);
-            g.strokeLine(left - 0.3 * em, y, left, y);
-            if (i % 2 == 0) {
-                g.setFill(INK);
-                g.fillText(String.format(Locale.ROOT, "%.1f", i / 10.0), left - 0.4 * em, y);
+        g.setFill(INK);
+        if (unitY) {
+            for (int i = 0; i <= 10; i++) {
+                double y = py(i / 10.0);
+                g.setStroke(GRID);
+                g.setLineWidth(1);
+                g.strokeLine(left, y, right, y);
+                g.setStroke(INK);
+                g.strokeLine(left - 0.3 * em, y, left, y);
+                if (i % 2 == 0) {
+                    g.fillText(String.format(Locale.ROOT, "%.1f", i / 10.0), left - 0.4 * em, y);
+                }
+            }
+        } else {
+            double ystep = niceStep((y1 - y0) / Math.max(2, Math.floor((bottom - top) / (2.5 * em))));
+            int yd = Math.max(0, (int) Math.ceil(-Math.log10(ystep) - 1e-9));
+            for (double t = Math.ceil(y0 / ystep - 1e-9) * ystep; t <= y1 + ystep * 1e-9; t += ystep) {
+                double y = py(t);
+                g.setStroke(GRID);
+                g.setLineWidth(1);
+                g.strokeLine(left, y, right, y);
+                g.setStroke(INK);
+                g.strokeLine(left - 0.3 * em, y, left, y);
+                double shown = Math.abs(t) < ystep * 1e-6 ? 0 : t; // no "-0.000"
+                g.fillText(String.format(Locale.ROOT, "%." + yd + "f", shown), left - 0.4 * em, y);
             }
         }
         // x ticks and numbers on a 1-2-5 step giving about one number per 5 em
@@ -239,6 +305,13 @@ public final class CurvePlot extends Region {
             pen(g, l.pen(), em);
             double[] xs = l.xs();
             double[] ys = l.ys();
+            if (l.pen().marks) {
+                double r = 0.35 * em;
+                for (int i = 0; i < xs.length; i++) {
+                    g.strokeOval(px(xs[i]) - r, py(ys[i]) - r, 2 * r, 2 * r);
+                }
+                continue;
+            }
             g.beginPath();
             for (int i = 0; i < xs.length; i++) {
                 if (i == 0) {
@@ -260,7 +333,11 @@ public final class CurvePlot extends Region {
             double x = at.get(i)[0];
             double y = legendTop + (at.get(i)[1] - 0.5) * 1.3 * em;
             pen(g, l.pen(), em);
-            g.strokeLine(x, y, x + sample, y);
+            if (l.pen().marks) {
+                g.strokeOval(x + sample / 2 - 0.35 * em, y - 0.35 * em, 0.7 * em, 0.7 * em);
+            } else {
+                g.strokeLine(x, y, x + sample, y);
+            }
             g.setLineDashes();
             g.setFill(INK);
             g.fillText(l.name(), x + sample + 0.4 * em, y);

@@ -1,6 +1,8 @@
 package dev.proofrun.app.grading;
 
-import dev.proofrun.app.chart.Charts;
+import dev.proofrun.app.chart.CurvePlot;
+import dev.proofrun.app.chart.CurvePlot.Line;
+import dev.proofrun.app.chart.CurvePlot.Pen;
 import dev.proofrun.app.shell.IndexTip;
 import dev.proofrun.app.shell.IndexTooltips;
 import dev.proofrun.app.shell.StepView;
@@ -18,7 +20,6 @@ import java.util.Locale;
 import java.util.function.Function;
 import javafx.beans.property.ReadOnlyStringWrapper;
 import javafx.scene.Node;
-import javafx.scene.chart.LineChart;
 import javafx.scene.control.Button;
 import javafx.scene.control.Label;
 import javafx.scene.control.ProgressIndicator;
@@ -39,14 +40,11 @@ public final class GradingView implements StepView {
     private final Label verdict = new Label();
     private final Label charVerdict = new Label();
     private final VBox chain = new VBox(6);
-    private final LineChart<Number, Number> location = Charts.lines("location-chart", "Location chart", "subgroup", "");
-    private final LineChart<Number, Number> spread = Charts.lines("spread-chart", "Spread chart", "subgroup", "");
-    private final LineChart<Number, Number> readings = Charts.lines("readings-chart", "Readings against the limits", "reading", "");
+    private final CurvePlot location = CurvePlot.spanning("location-chart", "Location chart", "subgroup", "value");
+    private final CurvePlot spread = CurvePlot.spanning("spread-chart", "Spread chart", "subgroup", "value");
+    private final CurvePlot readings = CurvePlot.spanning("readings-chart", "Readings against the limits", "reading", "value");
 
     public GradingView(GradingViewModel vm) {
-        location.getStyleClass().add("pr-control-chart");
-        spread.getStyleClass().add("pr-control-chart");
-        readings.getStyleClass().add("pr-limits-chart");
         file.setId("returned-file");
         file.setPrefColumnCount(24);
         file.textProperty().bindBidirectional(vm.returnedFile());
@@ -180,12 +178,12 @@ public final class GradingView implements StepView {
 
     private void showCharacteristic(CharacteristicGrade g) {
         chain.getChildren().clear();
-        List<javafx.scene.chart.XYChart.Series<Number, Number>> lines = new ArrayList<>();
+        List<CurvePlot.Line> lines = new ArrayList<>();
         if (g == null) {
             charVerdict.setText("");
-            Charts.show(location, List.of());
-            Charts.show(spread, List.of());
-            Charts.show(readings, List.of());
+            location.show(List.of());
+            spread.show(List.of());
+            readings.show(List.of());
             return;
         }
         charVerdict.setText(g.id() + " " + g.name() + ": " + GradingViewModel.verdictWords(g.verdict())
@@ -217,8 +215,8 @@ public final class GradingView implements StepView {
             chart(location, g.stability().charts().location(), g.unit());
             chart(spread, g.stability().charts().spread(), g.unit());
         } else {
-            Charts.show(location, List.of());
-            Charts.show(spread, List.of());
+            location.show(List.of());
+            spread.show(List.of());
         }
         List<double[]> pts = new ArrayList<>();
         int i = 1;
@@ -228,39 +226,59 @@ public final class GradingView implements StepView {
             }
         }
         if (!pts.isEmpty()) {
-            lines.add(Charts.series("readings", pts));
+            lines.add(line("readings", Pen.CURVE, pts));
             double span = g.limits().upper().orElse(pts.stream().mapToDouble(p -> p[1]).max().orElse(0))
                     - g.limits().lower().orElse(pts.stream().mapToDouble(p -> p[1]).min().orElse(0));
             readings.setTitle("Readings against the limits" + (g.unit().isEmpty() ? "" : " (" + g.unit() + ")"));
             if (g.limits().lower().isPresent()) {
-                lines.add(Charts.horizontal("LSL " + num(g.limits().lower().getAsDouble(), span),
+                lines.add(Line.horizontal("LSL " + num(g.limits().lower().getAsDouble(), span), Pen.LIMIT,
                         g.limits().lower().getAsDouble(), 1, pts.size()));
             }
             if (g.limits().upper().isPresent()) {
-                lines.add(Charts.horizontal("USL " + num(g.limits().upper().getAsDouble(), span),
+                lines.add(Line.horizontal("USL " + num(g.limits().upper().getAsDouble(), span), Pen.LIMIT,
                         g.limits().upper().getAsDouble(), 1, pts.size()));
             }
         }
-        Charts.show(readings, lines);
+        readings.show(lines);
     }
 
-    private static void chart(LineChart<Number, Number> c, ControlChart cc, String unit) {
+    private static Line line(String name, Pen pen, List<double[]> pts) {
+        double[] xs = new double[pts.size()];
+        double[] ys = new double[pts.size()];
+        for (int i = 0; i < xs.length; i++) {
+            xs[i] = pts.get(i)[0];
+            ys[i] = pts.get(i)[1];
+        }
+        return new Line(name, pen, xs, ys);
+    }
+
+    private static void chart(CurvePlot c, ControlChart cc, String unit) {
         c.setTitle(cc.statistic().name().toLowerCase(Locale.ROOT).replace('_', ' ') + " chart" + (unit.isEmpty() ? "" : " (" + unit + ")"));
         List<double[]> pts = new ArrayList<>();
         for (int i = 0; i < cc.points().length; i++) {
             pts.add(new double[] {cc.subgroupOf(i) + 1, cc.points()[i]});
         }
         if (pts.isEmpty()) {
-            Charts.show(c, List.of());
+            c.show(List.of());
             return;
         }
         double x0 = pts.get(0)[0];
         double x1 = pts.get(pts.size() - 1)[0];
         double span = cc.ucl() - cc.lcl();
-        Charts.show(c, List.of(Charts.series(cc.statistic().name().toLowerCase(Locale.ROOT), pts),
-                Charts.horizontal("centre " + num(cc.center(), span), cc.center(), x0, x1),
-                Charts.horizontal("UCL " + num(cc.ucl(), span), cc.ucl(), x0, x1),
-                Charts.horizontal("LCL " + num(cc.lcl(), span), cc.lcl(), x0, x1)));
+        List<Line> shown = new ArrayList<>(List.of(line(cc.statistic().name().toLowerCase(Locale.ROOT), Pen.CURVE, pts),
+                Line.horizontal("centre " + num(cc.center(), span), Pen.CENTRE, cc.center(), x0, x1),
+                Line.horizontal("UCL " + num(cc.ucl(), span), Pen.LIMIT, cc.ucl(), x0, x1),
+                Line.horizontal("LCL " + num(cc.lcl(), span), Pen.LIMIT, cc.lcl(), x0, x1)));
+        List<double[]> flagged = new ArrayList<>();
+        for (dev.proofrun.control.Signal sig : cc.signals()) {
+            if (sig.index() < pts.size() && flagged.stream().noneMatch(p -> p == pts.get(sig.index()))) {
+                flagged.add(pts.get(sig.index()));
+            }
+        }
+        if (!flagged.isEmpty()) {
+            shown.add(line("signal (" + flagged.size() + ")", Pen.FLAGGED, flagged));
+        }
+        c.show(shown);
     }
 
     /** Every index the readings define, with its lower bound where the core gives one. */
