@@ -134,6 +134,7 @@ public final class SizingView implements StepView {
                 : String.join("\n", vm.tableProperty().get().warnings()), vm.tableProperty()));
 
         vm.chosenTableProperty().addListener((obs, was, now) -> drawCurves(vm, now));
+        vm.designBinding().addListener((obs, was, now) -> drawCurves(vm, vm.chosenTableProperty().get()));
         HBox charts = new HBox(12, powerChart, ocChart);
         HBox.setHgrow(powerChart, Priority.ALWAYS);
         HBox.setHgrow(ocChart, Priority.ALWAYS);
@@ -173,7 +174,9 @@ public final class SizingView implements StepView {
                 double wanted = vm.request().map(r -> r.power()).orElse(0.9);
                 power.add(Line.horizontal("wanted " + SizingViewModel.fmt(wanted), Pen.WANTED, wanted,
                         pc.get(0).subgroups(), pc.get(pc.size() - 1).subgroups()));
-                power.add(Line.vertical("chosen k = " + c.subgroups(), Pen.CHOSEN, c.subgroups()));
+                // the k the plan will use: the plan file's own k until a row is picked, else the row's
+                int k = vm.design().map(d -> d.subgroups()).orElse(c.subgroups());
+                power.add(Line.vertical((k == c.subgroups() ? "chosen k = " : "plan's k = ") + k, Pen.CHOSEN, k));
             }
             List<OcPoint> oc = t.operatingCharacteristic();
             if (!oc.isEmpty()) {
