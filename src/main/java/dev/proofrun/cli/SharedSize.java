@@ -110,6 +110,10 @@ final class SharedSize {
                     c.expectation().index(), best.ownSubgroups().get(i), best.powers().get(i),
                     i == best.driver() ? "  drives k" : "");
         }
+        if (characteristics.size() > 1) {
+            out.println(SizeMessage.SHARED_ALL_TOGETHER.format(characteristics.size(),
+                    best.allDemonstratedIfIndependent()));
+        }
         for (String warning : warnings) {
             out.println("warning: " + warning);
         }
@@ -120,7 +124,8 @@ final class SharedSize {
     /**
      * {@code characteristics} ({@code id, index, target, confidence, expected}), {@code designs} (one per
      * subgroup size every characteristic can use, by size: {@code subgroupSize, subgroups, readings,
-     * driver, limitedBy, characteristics: [{id, power, subgroupsAlone}], falseAlarm, detection}),
+     * driver, limitedBy, characteristics: [{id, power, subgroupsAlone}], allDemonstratedIfIndependent,
+     * falseAlarm, detection}),
      * {@code recommended} (the first design plus {@code reason}) and {@code warnings}.
      */
     Map<String, Object> json() {
@@ -168,6 +173,7 @@ final class SharedSize {
             each.add(c);
         }
         m.put("characteristics", each);
+        m.put("allDemonstratedIfIndependent", SizeJson.round(d.allDemonstratedIfIndependent(), 4));
         m.put("falseAlarm", SizeJson.risk(d.falseAlarm()));
         m.put("detection", SizeJson.risk(d.detection()));
         return m;

@@ -12,6 +12,9 @@ public enum SizeMessage implements MessageKey {
             + " size tried; %s needs the most subgroups."),
     SHARED_CHART_RISKS("False alarm and detection are for one characteristic's mean chart; with %d charts the chance"
             + " that at least one signals is higher."),
+    SHARED_ALL_TOGETHER("The part needs all %d demonstrated in this one study: if their readings are independent,"
+            + " the chance of that is about %.3f (the product of their powers); correlated characteristics move it."
+            + " To raise it, ask each characteristic for more power."),
     SHARED_LEFT_OUT("subgroups of %d cannot give every characteristic a power of %.3f within %d readings; left out"
             + " of the table");
 

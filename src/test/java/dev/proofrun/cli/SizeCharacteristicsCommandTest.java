@@ -55,13 +55,21 @@ class SizeCharacteristicsCommandTest {
         assertEquals(2, root.get("designs").size());
         for (JsonNode d : root.get("designs")) {
             assertEquals(List.of("subgroupSize", "subgroups", "readings", "driver", "limitedBy", "characteristics",
-                    "falseAlarm", "detection"), names(d));
+                    "allDemonstratedIfIndependent", "falseAlarm", "detection"), names(d));
             int k = d.get("subgroups").asInt();
             int largest = 0;
+            double product = 1;
+            double lowest = 1;
             for (JsonNode c : d.get("characteristics")) {
                 largest = Math.max(largest, c.get("subgroupsAlone").asInt());
                 assertTrue(c.get("power").asDouble() >= 0.9, c.toString());
+                product *= c.get("power").asDouble();
+                lowest = Math.min(lowest, c.get("power").asDouble());
             }
+            // P(all pass) for independent events is the product (each power printed to 4 decimals, hence 1e-3)
+            double all = d.get("allDemonstratedIfIndependent").asDouble();
+            assertEquals(product, all, 1e-3);
+            assertTrue(all <= lowest + 1e-4, "all together pass no more often than the weakest alone: " + all);
             assertEquals(largest, k, "k is the largest any characteristic needs");
             assertEquals("seat-h", d.get("driver").asText());
             // the driver's k is what `size` gives for it alone at this n
@@ -88,6 +96,7 @@ class SizeCharacteristicsCommandTest {
         assertTrue(r.out().lines().anyMatch(l -> l.contains("seat-h") && l.endsWith("drives k")), r.out());
         assertTrue(r.out().contains("bore-a") && r.out().contains("flow"), r.out());
         assertTrue(r.out().contains("with 3 charts the chance that at least one signals is higher"), r.out());
+        assertTrue(r.out().contains("The part needs all 3 demonstrated in this one study"), r.out());
         assertTrue(r.out().contains("does not replace the customer's requirements"), r.out());
     }
 
