@@ -118,12 +118,7 @@ public final class PlanFiles {
      */
     public static Pending readPending(Path path) {
         Location where = Location.file(path.toString());
-        byte[] bytes;
-        try {
-            bytes = Files.readAllBytes(path);
-        } catch (IOException e) {
-            throw new UserException(where, PlanMessage.CANNOT_READ, describe(e));
-        }
+        byte[] bytes = bytesOf(path, where);
         StudyPlan plan = PlanCodec.fromJson(parse(bytes, where), where);
         FutureTask<String> computed = null;
         if (plan.isIssued()) { // a draft has no revision to check
@@ -186,13 +181,15 @@ public final class PlanFiles {
     /** Reads a plan and says whether an issued one still matches its revision. */
     public static Inspection inspect(Path path) {
         Location where = Location.file(path.toString());
-        byte[] bytes;
+        return inspect(bytesOf(path, where), where);
+    }
+
+    private static byte[] bytesOf(Path path, Location where) {
         try {
-            bytes = Files.readAllBytes(path);
+            return Files.readAllBytes(path);
         } catch (IOException e) {
             throw new UserException(where, PlanMessage.CANNOT_READ, describe(e));
         }
-        return inspect(bytes, where);
     }
 
     /** Reads plan bytes (from a file named by {@code where}). */
