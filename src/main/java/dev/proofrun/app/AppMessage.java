@@ -24,6 +24,8 @@ public enum AppMessage implements MessageKey {
     NO_PLAN("open or start a plan"),
     DRAFT_SAVED("Draft kept in %s"),
     OPENED("Opened %s."),
+    OPENING("Reading the plan file…"),
+    OPEN_FAILED("The plan could not be opened: %s"),
     DRAFT_RESTORED("Unsaved changes from %s were restored."),
     DRAFT_FAILED("The draft could not be written: %s"),
     CLOSE_TITLE("Unsaved changes"),

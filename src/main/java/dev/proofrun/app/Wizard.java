@@ -43,7 +43,7 @@ public final class Wizard {
 
     private Wizard(AppHome home, HostServices host) {
         session = new Session(home);
-        start = new StartViewModel(session);
+        start = new StartViewModel(session, Background.fx("proofrun-open"));
         part = new PartViewModel(session.draft());
         goal = new GoalViewModel(session.draft(), session.baseProperty());
         sizing = new SizingViewModel(session.draft(), goal, Background.fx("proofrun-design"));
@@ -66,16 +66,23 @@ public final class Wizard {
         return new Wizard(home, host);
     }
 
-    /** After the window shows: the first start opens a plan at once, later starts show the recent plans. */
+    /**
+     * After the window shows: the first start opens the demo plan (read off the FX thread) and goes to its
+     * first step, unless the user has moved on meanwhile; later starts show the recent plans.
+     */
     public void opened() {
-        if (session.recent().isFirstStart() && start.openDemo()) {
-            shell.goTo(1);
+        if (session.recent().isFirstStart()) {
+            start.openDemo(() -> {
+                if (shell.currentProperty().get() == 0) {
+                    shell.goTo(1);
+                }
+            });
         }
     }
 
-    /** True while a step computes in the background. */
+    /** True while a step computes in the background, a plan file is read or a page is still unfolding. */
     public boolean busy() {
-        return sizing.busyProperty().get() || timing.busyProperty().get() || handout.busyProperty().get()
+        return start.openingProperty().get() || view.unfoldingProperty().get() || sizing.busyProperty().get() || timing.busyProperty().get() || handout.busyProperty().get()
                 || handout.exportingProperty().get()
                 || handout.issuingProperty().get() || grading.busyProperty().get() || grading.reportingProperty().get();
     }

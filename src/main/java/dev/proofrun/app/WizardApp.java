@@ -16,6 +16,16 @@ public final class WizardApp extends Application {
 
     private Wizard wizard;
 
+    /** On the launcher thread, once the toolkit runs: the pages' classes are loaded while the window is built. */
+    @Override
+    public void init() {
+        dev.proofrun.app.shell.Primer.begin();
+    }
+
+    private static String theme() {
+        return WizardApp.class.getResource(THEME).toExternalForm();
+    }
+
     @Override
     public void start(Stage stage) {
         start(stage, AppHome.standard());
@@ -23,9 +33,10 @@ public final class WizardApp extends Application {
 
     /** Opens the wizard with its files under the given home (tests pass a temporary one). */
     public void start(Stage stage, AppHome home) {
+        dev.proofrun.app.shell.Primer.begin();
         wizard = Wizard.create(home, getHostServices());
         Scene scene = new Scene(wizard.view().root(), 1280, 800);
-        scene.getStylesheets().add(WizardApp.class.getResource(THEME).toExternalForm());
+        scene.getStylesheets().add(theme());
         stage.setScene(scene);
         stage.setTitle("proofrun");
         stage.setMinWidth(960);

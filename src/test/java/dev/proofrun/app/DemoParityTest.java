@@ -43,7 +43,9 @@ class DemoParityTest {
 
         Path home = tmp.resolve("home");
         Session session = new Session(new AppHome(home, home.resolve("plans")));
-        assertTrue(new StartViewModel(session).openDemo());
+        StartViewModel start = new StartViewModel(session);
+        start.openDemo();
+        assertTrue(start.loadedProperty().get(), start.messageProperty().get());
         StudyPlan opened = session.base().orElseThrow();
         Path mine = tmp.resolve("wizard-returned.csv");
         DemoReturn.writeCsv(PlanAdapter.of(opened), mine);

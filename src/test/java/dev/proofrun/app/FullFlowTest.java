@@ -49,8 +49,8 @@ class FullFlowTest {
     void start(Stage stage) throws Exception {
         home = Files.createTempDirectory("proofrun-flow");
         app = new WizardApp();
+        probe = FxProbe.fromShowing(stage);
         app.start(stage, new AppHome(home, home.resolve("plans")));
-        probe = new FxProbe();
     }
 
     @AfterEach
@@ -112,10 +112,10 @@ class FullFlowTest {
     void planIssueExportAndGradeTheDemo(FxRobot robot) throws Exception {
         probe.phase("open");
         // open: the first start lands on the Part step of the demo plan
-        await("the demo plan on the Part step", () -> app.wizard().shell().currentProperty().get() == 1);
+        Settle.onStep(app, 1); // the demo plan on the Part step
         assertEquals("PR-2027-0311", robot.lookup("#plan-id").queryAs(TextField.class).getText());
         robot.clickOn("#next");
-        await("the Goal step", () -> app.wizard().shell().currentProperty().get() == 2);
+        Settle.onStep(app, 2); // the Goal step
         robot.clickOn("#next");
         await("the Sample size step with its design table", () -> app.wizard().shell().currentProperty().get() == 3
                 && !app.wizard().sizing().busyProperty().get() && !app.wizard().sizing().rows().isEmpty());
@@ -124,7 +124,7 @@ class FullFlowTest {
         probe.phase("goal→design table");
         // change the expected index on the Goal step: the design table is recomputed
         robot.clickOn("#back");
-        await("the Goal step", () -> app.wizard().shell().currentProperty().get() == 2);
+        Settle.onStep(app, 2); // the Goal step
         replaceText(robot, "#expected", "2.0");
         robot.clickOn("#next");
         await("a recomputed design table (a better process needs fewer subgroups)", () ->
@@ -160,7 +160,7 @@ class FullFlowTest {
         probe.phase("calendar");
         // set the calendar: start on another Monday; the frequency sentence comes from the schedule
         robot.clickOn("#next");
-        await("the Timing step", () -> app.wizard().shell().currentProperty().get() == 4);
+        Settle.onStep(app, 4); // the Timing step
         replaceText(robot, "#timing-start", "2027-04-05 06:00");
         robot.type(KeyCode.TAB);
         await("a schedule starting on 2027-04-05", () -> !app.wizard().timing().busyProperty().get()
@@ -173,7 +173,7 @@ class FullFlowTest {
         // issue: the revision appears; export the three files into a temporary folder
         idle();
         robot.clickOn("#next");
-        await("the Hand-out step", () -> app.wizard().shell().currentProperty().get() == 5);
+        Settle.onStep(app, 5); // the Hand-out step
         idle();
         String was = text(robot, "#plan-state");
         assertTrue(was.startsWith("Changed since revision"), was);
@@ -201,7 +201,7 @@ class FullFlowTest {
         StudyPlan issued = fx(() -> app.wizard().session().base().orElseThrow());
         DemoReturn.writeCsv(PlanAdapter.of(issued), returned);
         robot.clickOn("#next");
-        await("the Grading step", () -> app.wizard().shell().currentProperty().get() == 6);
+        Settle.onStep(app, 6); // the Grading step
         replaceText(robot, "#returned-file", returned.toString());
         robot.clickOn("#grade");
         await("a verdict", () -> app.wizard().grading().resultProperty().get() != null

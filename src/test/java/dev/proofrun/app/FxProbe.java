@@ -30,9 +30,25 @@ final class FxProbe implements AutoCloseable {
     private volatile long fxThreadId = -1;
     private final AtomicLong worstCpuNanos = new AtomicLong(0);
 
-    FxProbe() {
-        Platform.runLater(() -> fxThreadId = Thread.currentThread().getId());
-        timer.scheduleAtFixedRate(this::probe, 0, 5, TimeUnit.MILLISECONDS);
+    private FxProbe() {
+    }
+
+    /**
+     * A probe that starts measuring when the window first shows (the window's first frame and whatever
+     * the application does on the FX thread after {@code show()} count; building the window before it
+     * shows does not, as nobody sees a frozen window then). Call on the FX thread before the window shows.
+     */
+    static FxProbe fromShowing(javafx.stage.Stage stage) {
+        FxProbe p = new FxProbe();
+        stage.addEventHandler(javafx.stage.WindowEvent.WINDOW_SHOWN, new javafx.event.EventHandler<>() {
+            @Override
+            public void handle(javafx.stage.WindowEvent e) {
+                stage.removeEventHandler(javafx.stage.WindowEvent.WINDOW_SHOWN, this);
+                p.fxThreadId = Thread.currentThread().getId();
+                p.timer.scheduleAtFixedRate(p::probe, 0, 5, TimeUnit.MILLISECONDS);
+            }
+        });
+        return p;
     }
 
     /** CPU time the FX thread has used so far, or -1 if unknown. */
@@ -58,7 +74,7 @@ final class FxProbe implements AutoCloseable {
                         synchronized (blocks) {
                             blocks.append(String.format(java.util.Locale.ROOT, "FX thread busy %.0f ms, %.1f s after start (%s), at:%n",
                                     late / 1e6, (System.nanoTime() - born) / 1e9, phase));
-                            for (int i = 0; i < Math.min(Integer.getInteger("probe.depth", 12), st.length); i++) {
+                            for (int i = 0; i < Math.min(Integer.getInteger("probe.depth", 24), st.length); i++) {
                                 blocks.append("    ").append(st[i]).append('\n');
                             }
                         }

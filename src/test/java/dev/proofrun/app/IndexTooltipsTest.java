@@ -63,6 +63,7 @@ class IndexTooltipsTest {
         Set<IndexTip> seen = EnumSet.noneOf(IndexTip.class);
         List<String> bare = new ArrayList<>();
         int steps = WaitForAsyncUtils.asyncFx(() -> app.wizard().shell().steps().size()).get();
+        Settle.onStep(app, 1); // the demo plan read and its first step shown
         for (int i = 0; i < steps; i++) {
             int index = i;
             WaitForAsyncUtils.asyncFx(() -> app.wizard().shell().currentProperty().set(index)).get();

@@ -67,30 +67,29 @@ class KeyboardTest {
 
     @Test
     void everyStepIsReachedAndWorkedFromTheKeyboard(FxRobot robot) throws Exception {
-        await(() -> app.wizard().shell().currentProperty().get() == 1);
+        Settle.onStep(app, 1);
         assertEquals("plan-id", focused().getId(), "the Part step starts in its first field");
         robot.type(KeyCode.TAB);
         assertTrue(inPage(focused()), "Tab moves within the step, not into the rail: " + focused());
 
         robot.press(KeyCode.ALT).type(KeyCode.RIGHT).release(KeyCode.ALT);
-        await(() -> app.wizard().shell().currentProperty().get() == 2);
+        Settle.onStep(app, 2);
         assertTrue(inPage(focused()), "the Goal step has the focus: " + focused());
         robot.press(KeyCode.ALT).type(KeyCode.E).release(KeyCode.ALT);
         WaitForAsyncUtils.waitForFxEvents();
         assertEquals("expected", focused().getId(), "Alt+E focuses the expected index");
 
         robot.press(KeyCode.CONTROL).type(KeyCode.PAGE_DOWN).release(KeyCode.CONTROL);
-        await(() -> app.wizard().shell().currentProperty().get() == 3);
+        Settle.onStep(app, 3);
         robot.press(KeyCode.ALT).type(KeyCode.LEFT).release(KeyCode.ALT);
-        await(() -> app.wizard().shell().currentProperty().get() == 2);
+        Settle.onStep(app, 2);
         robot.press(KeyCode.CONTROL).type(KeyCode.PAGE_UP).release(KeyCode.CONTROL);
-        await(() -> app.wizard().shell().currentProperty().get() == 1);
+        Settle.onStep(app, 1);
 
         for (int i = 1; i <= 7; i++) {
             int want = i - 1;
             robot.press(KeyCode.CONTROL).type(KeyCode.getKeyCode(Integer.toString(i))).release(KeyCode.CONTROL);
-            await(() -> app.wizard().shell().currentProperty().get() == want);
-            await(() -> !app.wizard().busy());
+            Settle.onStep(app, want);
             Node f = focused();
             assertNotNull(f, "step " + i + " has a focus owner");
             assertTrue(inPage(f), "Ctrl+" + i + " puts the focus in the step, not on " + f);

@@ -40,6 +40,7 @@ public final class StepSnapshots {
             started.complete(app);
         });
         WizardApp app = started.get(30, TimeUnit.SECONDS);
+        Snapshots.settle(app.wizard(), work); // the demo plan read and its first step shown
         int steps = onFx(() -> app.wizard().shell().steps().size());
         for (int i = 0; i < steps; i++) {
             int index = i;

@@ -39,6 +39,7 @@ class UnsavedChangesTest {
 
     @Test
     void aBadLimitIsMarkedInlineAndClosingAsksThenKeepsTheDraft(FxRobot robot) throws Exception {
+        Settle.onStep(app, 1);
         // edit the USL of D1 in the table: the problem shows under the table while typing, no dialog
         @SuppressWarnings("unchecked")
         TableView<dev.proofrun.app.session.CharacteristicDraft> table =

@@ -32,7 +32,8 @@ class WizardSmokeTest {
     }
 
     @Test
-    void theFirstStartOpensTheDemoPlanAndTypingIsCheckedInline(FxRobot robot) {
+    void theFirstStartOpensTheDemoPlanAndTypingIsCheckedInline(FxRobot robot) throws Exception {
+        Settle.onStep(app, 1);
         assertEquals(1, app.wizard().shell().currentProperty().get(), "the first start opens the demo plan");
         assertEquals("PR-2027-0311", robot.lookup("#plan-id").queryAs(TextField.class).getText());
         Button next = robot.lookup("#next").queryAs(Button.class);

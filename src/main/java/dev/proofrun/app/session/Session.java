@@ -5,6 +5,7 @@ import dev.proofrun.plan.PlanFiles;
 import dev.proofrun.plan.StudyPlan;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.Objects;
 import java.util.Optional;
 import javafx.beans.property.ObjectProperty;
@@ -60,25 +61,53 @@ public final class Session {
     }
 
     /**
-     * Opens a plan file into the draft.
+     * What opening a plan file found: read by {@link #load} (any thread), put on the desk by {@link #apply}
+     * (the FX thread).
+     *
+     * @param file     the plan file, absolute and normalised
+     * @param plan     the plan as read from the file
+     * @param snapshot what goes into the draft: the file's content, or a newer autosaved draft of it
+     * @param restored whether the snapshot is that newer draft
+     * @param recent   the recent plans after this one was put on top
+     */
+    public record Opening(Path file, StudyPlan plan, DraftSnapshot snapshot, boolean restored, List<Path> recent) {
+    }
+
+    /**
+     * Opens a plan file into the draft at once ({@link #load} then {@link #apply} on the caller's thread).
      *
      * @return true when a newer autosaved draft of it was restored over the file's content
      * @throws dev.proofrun.text.UserException when the file is not a readable plan
      */
     public boolean open(Path file) {
+        Opening o = load(file);
+        apply(o);
+        return o.restored();
+    }
+
+    /**
+     * The file work of opening, safe off the FX thread: reads the plan, looks for a newer autosaved draft
+     * of it and puts the file on top of the recent plans. The draft is not touched.
+     *
+     * @throws dev.proofrun.text.UserException when the file is not a readable plan
+     */
+    public Opening load(Path file) {
         Path p = file.toAbsolutePath().normalize();
         StudyPlan plan = PlanFiles.read(p);
-        opened++;
-        base.set(plan);
         Optional<DraftSnapshot> newer = drafts.newerDraft(p);
-        if (newer.isPresent()) {
-            draft.restore(newer.get(), true);
-            draft.planFileProperty().set(p);
-        } else {
-            draft.restore(PlanBridge.snapshotOf(plan, p), false);
+        DraftSnapshot snapshot = newer.orElseGet(() -> PlanBridge.snapshotOf(plan, p));
+        List<Path> now = recent.remember(p);
+        return new Opening(p, plan, snapshot, newer.isPresent(), now);
+    }
+
+    /** On the FX thread: the plan that {@link #load} read becomes the base and its content the draft. */
+    public void apply(Opening o) {
+        opened++;
+        base.set(o.plan());
+        draft.restore(o.snapshot(), o.restored());
+        if (o.restored()) {
+            draft.planFileProperty().set(o.file());
         }
-        recent.remember(p);
-        return newer.isPresent();
     }
 
     /** The bundled demo plan in the plans folder, written there first if it is not there yet. */

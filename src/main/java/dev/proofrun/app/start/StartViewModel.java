@@ -2,6 +2,7 @@ package dev.proofrun.app.start;
 
 import dev.proofrun.app.AppMessage;
 import dev.proofrun.text.UserException;
+import dev.proofrun.app.session.Background;
 import dev.proofrun.app.session.Session;
 import dev.proofrun.app.shell.StepViewModel;
 import java.nio.file.Path;
@@ -17,12 +18,22 @@ import javafx.collections.ObservableList;
 public final class StartViewModel extends StepViewModel {
 
     private final Session session;
+    private final Background files;
+    private Background.Job reading;
+    private final BooleanProperty opening = new SimpleBooleanProperty(this, "opening", false);
     private final ObservableList<Path> recent = FXCollections.observableArrayList();
     private final BooleanProperty loaded = new SimpleBooleanProperty(this, "loaded", false);
     private final StringProperty message = new SimpleStringProperty(this, "message", "");
 
+    /** A view-model that reads plan files on the caller's thread (plain tests). */
     public StartViewModel(Session session) {
+        this(session, Background.inline());
+    }
+
+    /** Plan files are read by {@code files}; the draft changes on the FX thread when the reading is done. */
+    public StartViewModel(Session session, Background files) {
         this.session = session;
+        this.files = files;
         bindMissing(Bindings.when(loaded).then("").otherwise(AppMessage.NO_PLAN.english()));
         refresh();
     }
@@ -67,28 +78,61 @@ public final class StartViewModel extends StepViewModel {
         loaded.set(true);
     }
 
+    /** True while a plan file is being read. */
+    public BooleanProperty openingProperty() {
+        return opening;
+    }
+
     /** Opens a plan file; a problem with the file is shown as one line and nothing changes. */
-    public boolean open(Path file) {
-        try {
-            boolean restored = session.open(file);
-            message.set(restored ? AppMessage.DRAFT_RESTORED.format(session.drafts().sideFile(file).getFileName())
-                    : AppMessage.OPENED.format(file.getFileName()));
-            loaded.set(true);
-            refresh();
-            return true;
-        } catch (UserException | java.io.UncheckedIOException e) {
-            message.set(e.getMessage());
-            return false;
-        }
+    public void open(Path file) {
+        open(() -> session.load(file), () -> { });
     }
 
     /** Opens the bundled demo plan (written to the plans folder the first time). */
-    public boolean openDemo() {
-        try {
-            return open(session.demoFile());
-        } catch (UserException e) {
-            message.set(e.getMessage());
-            return false;
+    public void openDemo() {
+        openDemo(() -> { });
+    }
+
+    /** Opens the bundled demo plan, then runs {@code then} on the FX thread if it opened. */
+    public void openDemo(Runnable then) {
+        open(() -> session.load(session.demoFile()), then);
+    }
+
+    /**
+     * Reads the plan file off the FX thread and puts it on the desk when read; the latest request wins
+     * (an earlier one still reading is cancelled and its answer dropped).
+     */
+    private void open(java.util.concurrent.Callable<Session.Opening> read, Runnable then) {
+        if (reading != null) {
+            reading.cancel();
+        }
+        opening.set(true);
+        message.set(AppMessage.OPENING.english());
+        Background.Job[] mine = new Background.Job[1];
+        mine[0] = files.submit(read, o -> {
+            if (reading != mine[0] && mine[0] != null) {
+                return;
+            }
+            reading = null;
+            opening.set(false);
+            session.apply(o);
+            message.set(o.restored() ? AppMessage.DRAFT_RESTORED.format(session.drafts().sideFile(o.file()).getFileName())
+                    : AppMessage.OPENED.format(o.file().getFileName()));
+            loaded.set(true);
+            recent.setAll(o.recent());
+            then.run();
+        }, failure -> {
+            if (reading != mine[0] && mine[0] != null) {
+                return;
+            }
+            reading = null;
+            opening.set(false);
+            message.set(failure instanceof UserException || failure instanceof java.io.UncheckedIOException
+                    ? failure.getMessage()
+                    : AppMessage.OPEN_FAILED.format(String.valueOf(failure)));
+        });
+        if (opening.get()) {
+            reading = mine[0];
         }
     }
 }

@@ -39,8 +39,16 @@ final class Timeline extends Pane {
         setId("timeline");
         getChildren().add(canvas);
         widthProperty().addListener((o, a, b) -> draw());
+        sceneProperty().addListener((o, a, b) -> {
+            if (b != null && pending) {
+                draw();
+            }
+        });
         getStyleClass().add("pr-timeline");
     }
+
+    /** True when a schedule came while the timeline was out of the window: it is drawn on arriving there. */
+    private boolean pending;
 
     void show(ProductionCalendar c, Schedule s) {
         this.calendar = c;
@@ -54,6 +62,11 @@ final class Timeline extends Pane {
     }
 
     private void draw() {
+        if (getScene() == null) {
+            pending = true;
+            return;
+        }
+        pending = false;
         double em = Font.getDefault().getSize();
         double w = Math.max(getWidth(), 40 * em);
         if (calendar == null || schedule == null) {

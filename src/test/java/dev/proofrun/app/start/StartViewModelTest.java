@@ -1,0 +1,96 @@
+package dev.proofrun.app.start;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import dev.proofrun.app.session.AppHome;
+import dev.proofrun.app.session.Background;
+import dev.proofrun.app.session.Session;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.concurrent.Callable;
+import java.util.function.Consumer;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** Opening plan files off the FX thread: the draft changes only when the reading is done, the latest wins. */
+class StartViewModelTest {
+
+    @TempDir
+    Path tmp;
+
+    /** Holds the submitted jobs; the test runs them and delivers their answers in the order it likes. */
+    private static final class HeldJobs implements Background {
+        record Held(Callable<Object> work, Consumer<Object> done, Consumer<Throwable> failed) {
+            void finish() {
+                Object v;
+                try {
+                    v = work.call();
+                } catch (Exception e) {
+                    failed.accept(e);
+                    return;
+                }
+                done.accept(v);
+            }
+        }
+
+        final List<Held> jobs = new ArrayList<>();
+
+        @Override
+        @SuppressWarnings("unchecked")
+        public <T> Job submit(Callable<T> work, Consumer<T> done, Consumer<Throwable> failed) {
+            jobs.add(new Held((Callable<Object>) work, (Consumer<Object>) done, failed));
+            return () -> { };
+        }
+    }
+
+    @Test
+    void theDraftChangesOnlyWhenTheFileIsRead() {
+        Session session = new Session(new AppHome(tmp, tmp.resolve("plans")));
+        HeldJobs held = new HeldJobs();
+        StartViewModel vm = new StartViewModel(session, held);
+        vm.openDemo();
+        assertTrue(vm.openingProperty().get());
+        assertFalse(vm.loadedProperty().get());
+        assertTrue(session.base().isEmpty(), "nothing is on the desk while the file is read");
+        held.jobs.get(0).finish();
+        assertFalse(vm.openingProperty().get());
+        assertTrue(vm.loadedProperty().get());
+        assertEquals("PR-2027-0311", session.base().orElseThrow().id());
+        assertEquals(List.of(session.demoFile().toAbsolutePath().normalize()), vm.recent());
+        assertTrue(vm.messageProperty().get().startsWith("Opened "), vm.messageProperty().get());
+    }
+
+    @Test
+    void anEarlierRequestAnsweringLateIsDropped() throws Exception {
+        Session session = new Session(new AppHome(tmp, tmp.resolve("plans")));
+        Path demo = session.demoFile();
+        Path other = tmp.resolve("plans").resolve("other.json");
+        Files.copy(demo, other);
+        HeldJobs held = new HeldJobs();
+        StartViewModel vm = new StartViewModel(session, held);
+        vm.open(demo);
+        vm.open(other);
+        held.jobs.get(1).finish();
+        held.jobs.get(0).finish();
+        assertEquals(other.toAbsolutePath().normalize(), session.draft().planFileProperty().get(),
+                "the plan asked for last is on the desk");
+        assertFalse(vm.openingProperty().get());
+    }
+
+    @Test
+    void aFileThatIsNotAPlanIsOneLineAndNothingChanges() throws Exception {
+        Session session = new Session(new AppHome(tmp, tmp.resolve("plans")));
+        Path bad = Files.writeString(tmp.resolve("notes.json"), "{\"not\": \"a plan\"}");
+        StartViewModel vm = new StartViewModel(session, Background.inline());
+        vm.open(bad);
+        assertFalse(vm.openingProperty().get());
+        assertFalse(vm.loadedProperty().get());
+        assertTrue(session.base().isEmpty());
+        String m = vm.messageProperty().get();
+        assertTrue(m.contains("notes.json") && !m.contains("\n") && !m.contains("Exception"), m);
+    }
+}
