@@ -1,5 +1,6 @@
 package dev.proofrun.grade;
 
+import dev.proofrun.plan.OffsetTimes;
 import java.time.LocalDate;
 import java.time.LocalDateTime;
 import java.time.LocalTime;
@@ -114,61 +115,19 @@ final class Cells {
 
     /**
      * {@link #taken} as epoch seconds, with a fast path for the form proofrun's files and most gauges write,
-     * {@code yyyy-MM-ddTHH:mm[:ss]±hh:mm} (fixed positions, fields range-checked, the date through
-     * {@link LocalDate#of}); every other form, and any text the fast path does not accept, goes through
-     * {@link #taken}. Both give the same instant (tested).
+     * {@code yyyy-MM-ddTHH:mm[:ss]±hh:mm} ({@link OffsetTimes#epochSecond}: fixed positions, fields
+     * range-checked, no time objects); every other form, and any text the fast path does not accept, goes
+     * through {@link #taken}. Both give the same instant (tested).
      *
      * @return epoch seconds, or {@link #NOT_A_TIME}
      */
     static long takenEpochSecond(String text, ZoneId zone, LocalDate plannedDay) {
-        long fast = offsetTimeEpochSecond(text);
-        if (fast != NOT_A_TIME) {
+        long fast = OffsetTimes.epochSecond(text);
+        if (fast != OffsetTimes.NOT_FIXED) {
             return fast;
         }
         ZonedDateTime t = taken(text, zone, plannedDay);
         return t == null ? NOT_A_TIME : t.toEpochSecond();
-    }
-
-    /**
-     * The fast path of {@link #takenEpochSecond} alone: epoch seconds of {@code yyyy-MM-ddTHH:mm[:ss]±hh:mm}, or
-     * {@link #NOT_A_TIME} for any other text (which may still be a time the general path reads).
-     */
-    static long offsetTimeEpochSecond(String text) {
-        int len = text.length();
-        if ((len == 22 || len == 25) && text.charAt(4) == '-' && text.charAt(7) == '-' && text.charAt(10) == 'T'
-                && text.charAt(13) == ':' && (len == 22 || text.charAt(16) == ':')) {
-            int o = len - 6;
-            char sign = text.charAt(o);
-            int year = digits(text, 0, 4);
-            int month = digits(text, 5, 2);
-            int day = digits(text, 8, 2);
-            int hour = digits(text, 11, 2);
-            int minute = digits(text, 14, 2);
-            int second = len == 25 ? digits(text, 17, 2) : 0;
-            int offH = digits(text, o + 1, 2);
-            int offM = digits(text, o + 4, 2);
-            if ((sign == '+' || sign == '-') && text.charAt(o + 3) == ':' && year >= 0 && month >= 1 && month <= 12
-                    && day >= 1 && day <= 31 && hour >= 0 && hour < 24 && minute >= 0 && minute < 60 && second >= 0
-                    && second < 60 && offH >= 0 && offH <= 18 && offM >= 0 && offM < 60 && (offH < 18 || offM == 0)
-                    && day <= LocalDate.of(year, month, 1).lengthOfMonth()) {
-                long offset = (offH * 3600L + offM * 60L) * (sign == '-' ? -1 : 1);
-                return LocalDate.of(year, month, day).toEpochDay() * 86_400L + hour * 3600L + minute * 60L + second - offset;
-            }
-        }
-        return NOT_A_TIME;
-    }
-
-    /** The non-negative integer in {@code count} ASCII digits at {@code from}, or −1. */
-    private static int digits(String text, int from, int count) {
-        int v = 0;
-        for (int i = from; i < from + count; i++) {
-            char c = text.charAt(i);
-            if (c < '0' || c > '9') {
-                return -1;
-            }
-            v = v * 10 + (c - '0');
-        }
-        return v;
     }
 
     /** Formats a value for messages without trailing noise (shortest round-trip form). */

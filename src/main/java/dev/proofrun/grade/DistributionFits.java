@@ -106,16 +106,9 @@ final class DistributionFits {
         require(x);
         double[] logs = logs(x);
         int n = x.length;
-        double sum = 0;
-        for (double v : logs) {
-            sum += v;
-        }
+        double sum = sum(logs);
         double mu = sum / n;
-        double ss = 0;
-        for (double v : logs) {
-            ss += (v - mu) * (v - mu);
-        }
-        double var = ss / n;
+        double var = squaredDeviations(logs, mu) / n;
         double logL = -0.5 * n * (LN_2PI + Math.log(var) + 1) - sum;
         return new double[] {mu, Math.sqrt(var), logL};
     }
@@ -169,16 +162,8 @@ final class DistributionFits {
     /** {mean, s (MLE divisor N), logL} of the normal MLE. */
     static double[] normal(double[] x) {
         int n = x.length;
-        double sum = 0;
-        for (double v : x) {
-            sum += v;
-        }
-        double mean = sum / n;
-        double ss = 0;
-        for (double v : x) {
-            ss += (v - mean) * (v - mean);
-        }
-        double var = ss / n;
+        double mean = sum(x) / n;
+        double var = squaredDeviations(x, mean) / n;
         return new double[] {mean, Math.sqrt(var), -0.5 * n * (LN_2PI + Math.log(var) + 1)};
     }
 
@@ -192,7 +177,26 @@ final class DistributionFits {
         return Math.exp(mu + sigma * new NormalDistribution(0, 1).inverseCumulativeProbability(p));
     }
 
-    private static double[] logs(double[] x) {
+    /** Σ vᵢ, added in index order (the fits and the shape step's normality test add alike). */
+    static double sum(double[] v) {
+        double sum = 0;
+        for (double d : v) {
+            sum += d;
+        }
+        return sum;
+    }
+
+    /** Σ (vᵢ − mean)², added in index order: the second pass of a two-pass variance. */
+    static double squaredDeviations(double[] v, double mean) {
+        double ss = 0;
+        for (double d : v) {
+            ss += (d - mean) * (d - mean);
+        }
+        return ss;
+    }
+
+    /** ln xᵢ of every reading (a new array). */
+    static double[] logs(double[] x) {
         double[] l = new double[x.length];
         for (int i = 0; i < x.length; i++) {
             l[i] = Math.log(x[i]);

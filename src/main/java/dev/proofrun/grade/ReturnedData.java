@@ -1,5 +1,6 @@
 package dev.proofrun.grade;
 
+import dev.proofrun.plan.OffsetTimes;
 import dev.proofrun.text.FormulaGuard;
 import dev.proofrun.text.Location;
 import dev.proofrun.text.UserException;
@@ -183,8 +184,8 @@ final class ReturnedData implements RowHandler {
         if (text.isEmpty()) {
             return;
         }
-        long epoch = Cells.offsetTimeEpochSecond(text);
-        if (epoch == Cells.NOT_A_TIME) {
+        long epoch = OffsetTimes.epochSecond(text); // the fast path alone first: no planned day to look up
+        if (epoch == OffsetTimes.NOT_FIXED) {
             epoch = Cells.takenEpochSecond(text, plan.zone(), plannedDay(si));
         }
         if (epoch == Cells.NOT_A_TIME) {

@@ -65,16 +65,8 @@ final class ShapeJudge {
     /** A² and p of the normal model with mean and s (divisor N − 1) from the readings. */
     static double[] normality(double[] x) {
         int n = x.length;
-        double sum = 0;
-        for (double v : x) {
-            sum += v;
-        }
-        double mean = sum / n;
-        double ss = 0;
-        for (double v : x) {
-            ss += (v - mean) * (v - mean);
-        }
-        double s = Math.sqrt(ss / (n - 1));
+        double mean = DistributionFits.sum(x) / n;
+        double s = Math.sqrt(DistributionFits.squaredDeviations(x, mean) / (n - 1));
         if (!(s > 0)) {
             return new double[] {Double.POSITIVE_INFINITY, 0};
         }
@@ -123,11 +115,7 @@ final class ShapeJudge {
         fits.add(new ModelFit(ShapeModel.BOX_COX, lambda, ny[1], llBc, 6 - 2 * llBc, ty[0], ty[1] >= LEVEL));
 
         double[] ln = DistributionFits.lognormal(x);
-        double[] logs = new double[n];
-        for (int i = 0; i < n; i++) {
-            logs[i] = Math.log(x[i]);
-        }
-        double[] tl = normality(logs);
+        double[] tl = normality(DistributionFits.logs(x));
         fits.add(new ModelFit(ShapeModel.LOGNORMAL, ln[0], ln[1], ln[2], 4 - 2 * ln[2], tl[0], tl[1] >= LEVEL));
 
         double[] wb = DistributionFits.weibull(x);

@@ -1,7 +1,6 @@
 package dev.proofrun.report;
 
 import dev.proofrun.grade.IndexEvidence;
-import dev.proofrun.sheet.layout.Block;
 import dev.proofrun.sheet.layout.Canvas;
 import dev.proofrun.sheet.layout.Pen;
 import dev.proofrun.sheet.layout.PlotArea;
@@ -13,43 +12,44 @@ import dev.proofrun.sheet.layout.Typeface;
  * upper bound when the grade computed it, i.e. for an estimate below c₀). Demonstrated means the bar's left
  * end is at or right of the line.
  */
-final class BoundBlock implements Block {
+final class BoundBlock extends PlotBlock {
 
     private static final float HEIGHT = 70f;
     private static final float NOTE = 12f;
+    /** The scale's strip in the frame: its axis this far above the frame's bottom edge, and its height. */
+    private static final float SCALE_FOOT = 26f;
+    private static final float SCALE_HEIGHT = 22f;
 
     private final IndexEvidence e;
     private final boolean notValid;
-    private final Typeface regular;
-    private final Typeface bold;
 
     /**
      * @param notValid the verdict is not-valid: the picture then says in its caption that the figures describe
      *                 the study's past, not the process, so the bar is not read as a capability statement
      */
     BoundBlock(IndexEvidence e, boolean notValid, Typeface regular, Typeface bold) {
+        super(HEIGHT, null, regular, bold);
         this.e = e;
         this.notValid = notValid;
-        this.regular = regular;
-        this.bold = bold;
     }
 
     @Override
     public float height(float width) {
-        return HEIGHT + (notValid ? NOTE : 0);
+        return super.height(width) + (notValid ? NOTE : 0);
     }
 
     @Override
-    public void draw(Canvas c, float left, float top, float width) {
+    void drawPlot(Canvas c, float left, float top, float width) {
         if (notValid) {
-            c.text(bold, 7.5f, left + 46, top - 8, "Not valid: these figures describe the study's past, not the process.");
-            top -= NOTE;
+            c.text(bold, 7.5f, left + AXIS_LABELS, top - 8,
+                    "Not valid: these figures describe the study's past, not the process.");
+            top -= NOTE; // the frame starts under the note
         }
         String sym = e.index().symbol();
         double lo = min(e.lower(), e.required(), e.estimate());
         double hi = max(e.upper(), e.required(), e.estimate());
         double pad = (hi - lo) * 0.12 + 0.05;
-        PlotArea area = PlotArea.of(left + 46, top - HEIGHT + 26, width - 46 - 20, 22, lo - pad, hi + pad, 0, 1);
+        PlotArea area = plotArea(left, top, width, MARGIN, SCALE_FOOT, SCALE_HEIGHT, lo - pad, hi + pad, 0, 1);
         c.pen(Pen.HAIR);
         c.line(area.left(), area.bottom(), area.right(), area.bottom());
         for (double t : PlotArea.ticks(lo - pad, hi + pad, 8)) {
@@ -83,9 +83,7 @@ final class BoundBlock implements Block {
         String conf = Fmt.fixed(e.confidence() * 100, 0) + " %";
         String bar = hasUpper ? "bar: lower to upper " + conf + " bound (each one-sided)"
                 : "bar: lower " + conf + " bound (one-sided) to the estimate";
-        c.text(regular, 7.5f, area.left(), top - HEIGHT + 1, "square: estimate " + Fmt.index(e.estimate())
-                + "; " + bar + "; dashed: the requirement");
-
+        caption(c, area, top, "square: estimate " + Fmt.index(e.estimate()) + "; " + bar + "; dashed: the requirement");
     }
 
     private static double min(double... v) {

@@ -2,7 +2,6 @@ package dev.proofrun.report;
 
 import dev.proofrun.control.ControlChart;
 import dev.proofrun.control.Signal;
-import dev.proofrun.sheet.layout.Block;
 import dev.proofrun.sheet.layout.Canvas;
 import dev.proofrun.sheet.layout.Pen;
 import dev.proofrun.sheet.layout.PlotArea;
@@ -15,33 +14,24 @@ import java.util.BitSet;
  * open ring (so flagged points stand out without colour). The horizontal axis is the subgroup number.
  * With more than {@value #DETAIL} points the line is drawn as the range of each of {@value #DETAIL} buckets.
  */
-final class ControlChartBlock implements Block {
+final class ControlChartBlock extends PlotBlock {
 
     private static final int DETAIL = 1500;
     private static final float HEIGHT = 132f;
+    /** Room right of the plot area for the limits' labels. */
+    private static final float LIMIT_LABELS = 74f;
 
     private final ControlChart chart;
-    private final String title;
-    private final Typeface regular;
-    private final Typeface bold;
 
     ControlChartBlock(ControlChart chart, String title, Typeface regular, Typeface bold) {
+        super(HEIGHT, title, regular, bold);
         this.chart = chart;
-        this.title = title;
-        this.regular = regular;
-        this.bold = bold;
     }
 
     @Override
-    public float height(float width) {
-        return HEIGHT;
-    }
-
-    @Override
-    public void draw(Canvas c, float left, float top, float width) {
+    void drawPlot(Canvas c, float left, float top, float width) {
         double[] pts = chart.points();
         int count = pts.length;
-        c.text(bold, 8.5f, left, top - 9, title);
         double lo = Math.min(chart.lcl(), chart.center());
         double hi = Math.max(chart.ucl(), chart.center());
         for (int i = 0; i < count; i++) {
@@ -55,8 +45,8 @@ final class ControlChartBlock implements Block {
         }
         double pad = (hi - lo) * 0.08;
         int first = chart.firstSubgroup() + 1;
-        PlotArea area = PlotArea.of(left + 46, top - HEIGHT + 24, width - 46 - 74, HEIGHT - 38,
-                first - 0.5, first + count - 0.5, lo - pad, hi + pad);
+        PlotArea area = plotArea(left, top, width, LIMIT_LABELS, FOOT, HEIGHT - 38, first - 0.5, first + count - 0.5,
+                lo - pad, hi + pad);
         area.axes(c, regular, true);
         boolean varying = varies(chart.pointUcl()) || varies(chart.pointLcl());
         Pen limit = Pen.dashed(0.8f, 4, 2);
@@ -107,8 +97,8 @@ final class ControlChartBlock implements Block {
         for (int i = flagged.nextSetBit(0); i >= 0; i = flagged.nextSetBit(i + 1)) {
             c.marker(Canvas.Marker.RING, area.x(first + i), area.y(pts[i]), 6.5f);
         }
-        c.text(regular, 7.5f, area.left(), top - HEIGHT + 1, "subgroup; ring: a run rule fired at this point ("
-                + flagged.cardinality() + " of " + count + ")");
+        caption(c, area, top, "subgroup; ring: a run rule fired at this point (" + flagged.cardinality() + " of "
+                + count + ")");
     }
 
     private static boolean varies(double[] v) {

@@ -1,6 +1,5 @@
 package dev.proofrun.report;
 
-import dev.proofrun.sheet.layout.Block;
 import dev.proofrun.sheet.layout.Canvas;
 import dev.proofrun.sheet.layout.Pen;
 import dev.proofrun.sheet.layout.PlotArea;
@@ -12,7 +11,7 @@ import dev.proofrun.stats.SpecLimits;
  * nominal dotted, and the fitted model's density scaled to counts (N × bin width × f(x)) as a solid curve.
  * Bins: ⌈√N⌉ between 8 and 40, equal width over the readings' range.
  */
-final class HistogramBlock implements Block {
+final class HistogramBlock extends PlotBlock {
 
     private static final float HEIGHT = 150f;
 
@@ -20,29 +19,18 @@ final class HistogramBlock implements Block {
     private final SpecLimits limits;
     private final double nominal;
     private final ModelCurve curve;
-    private final String title;
-    private final Typeface regular;
-    private final Typeface bold;
 
     HistogramBlock(double[] readings, SpecLimits limits, double nominal, ModelCurve curve, String title,
             Typeface regular, Typeface bold) {
+        super(HEIGHT, title, regular, bold);
         this.readings = readings;
         this.limits = limits;
         this.nominal = nominal;
         this.curve = curve;
-        this.title = title;
-        this.regular = regular;
-        this.bold = bold;
     }
 
     @Override
-    public float height(float width) {
-        return HEIGHT;
-    }
-
-    @Override
-    public void draw(Canvas c, float left, float top, float width) {
-        c.text(bold, 8.5f, left, top - 9, title);
+    void drawPlot(Canvas c, float left, float top, float width) {
         double min = Double.POSITIVE_INFINITY;
         double max = Double.NEGATIVE_INFINITY;
         for (double x : readings) {
@@ -85,7 +73,7 @@ final class HistogramBlock implements Block {
             }
         }
         double yMax = Math.max(most, Math.min(peak, most * 3.0)) * 1.12;
-        PlotArea area = PlotArea.of(left + 46, top - HEIGHT + 24, width - 46 - 20, HEIGHT - 48, lo, hi, 0, yMax);
+        PlotArea area = plotArea(left, top, width, MARGIN, FOOT, HEIGHT - 48, lo, hi, 0, yMax);
         for (int b = 0; b < bins; b++) {
             if (counts[b] == 0) {
                 continue;
@@ -112,7 +100,6 @@ final class HistogramBlock implements Block {
         if (Double.isFinite(nominal)) {
             area.vline(c, Pen.dashed(0.6f, 1, 2), nominal, regular, null);
         }
-        c.text(regular, 7.5f, area.left(), top - HEIGHT + 1, "reading; bars: counts in " + bins
-                + " bins; curve: fitted " + curve.model().id() + " model" + (Double.isFinite(nominal) ? "; dotted: nominal" : ""));
+        caption(c, area, top, "reading; bars: counts in " + bins + " bins; curve: fitted " + curve.model().id() + " model" + (Double.isFinite(nominal) ? "; dotted: nominal" : ""));
     }
 }

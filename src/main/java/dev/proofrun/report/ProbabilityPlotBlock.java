@@ -1,6 +1,5 @@
 package dev.proofrun.report;
 
-import dev.proofrun.sheet.layout.Block;
 import dev.proofrun.sheet.layout.Canvas;
 import dev.proofrun.sheet.layout.Pen;
 import dev.proofrun.sheet.layout.PlotArea;
@@ -13,33 +12,22 @@ import java.util.Arrays;
  * line are where the model does not describe the data. At most {@value #MOST} points are drawn (evenly
  * spaced in rank, the extremes always).
  */
-final class ProbabilityPlotBlock implements Block {
+final class ProbabilityPlotBlock extends PlotBlock {
 
     private static final int MOST = 1500;
     private static final float HEIGHT = 150f;
 
     private final double[] readings;
     private final ModelCurve curve;
-    private final String title;
-    private final Typeface regular;
-    private final Typeface bold;
 
     ProbabilityPlotBlock(double[] readings, ModelCurve curve, String title, Typeface regular, Typeface bold) {
+        super(HEIGHT, title, regular, bold);
         this.readings = readings;
         this.curve = curve;
-        this.title = title;
-        this.regular = regular;
-        this.bold = bold;
     }
 
     @Override
-    public float height(float width) {
-        return HEIGHT;
-    }
-
-    @Override
-    public void draw(Canvas c, float left, float top, float width) {
-        c.text(bold, 8.5f, left, top - 9, title);
+    void drawPlot(Canvas c, float left, float top, float width) {
         double[] sorted = readings.clone();
         Arrays.sort(sorted);
         int n = sorted.length;
@@ -64,8 +52,8 @@ final class ProbabilityPlotBlock implements Block {
         yHi = Math.max(yHi, curve.line(qHi));
         double pad = (yHi - yLo) * 0.06;
         double qPad = (qHi - qLo) * 0.04;
-        PlotArea area = PlotArea.of(left + 46, top - HEIGHT + 24, width - 46 - 20, HEIGHT - 38, qLo - qPad,
-                qHi + qPad, yLo - pad, yHi + pad);
+        PlotArea area = plotArea(left, top, width, MARGIN, FOOT, HEIGHT - 38, qLo - qPad, qHi + qPad, yLo - pad,
+                yHi + pad);
         area.axes(c, regular, true);
         c.pen(Pen.solid(1f));
         c.line(area.x(qLo - qPad), area.y(curve.line(qLo - qPad)), area.x(qHi + qPad), area.y(curve.line(qHi + qPad)));
@@ -76,7 +64,7 @@ final class ProbabilityPlotBlock implements Block {
             }
         }
         String[] names = curve.axisNames();
-        c.text(regular, 7.5f, area.left(), top - HEIGHT + 1, names[0] + " (plotting position (i \u2212 3/8)/(N + 1/4)) "
+        caption(c, area, top, names[0] + " (plotting position (i \u2212 3/8)/(N + 1/4)) "
                 + "against " + names[1] + (n > shown ? "; " + shown + " of " + n + " readings shown" : ""));
     }
 }

@@ -1,6 +1,7 @@
 package dev.proofrun.plan;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertNotEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 
 import java.time.DateTimeException;
@@ -11,14 +12,19 @@ import java.util.List;
 import java.util.Random;
 import org.junit.jupiter.api.Test;
 
-/** The fixed-position reader gives what {@link OffsetDateTime#parse(CharSequence)} gives, value and refusal. */
+/**
+ * The fixed-position reader gives what {@link OffsetDateTime#parse(CharSequence)} gives, value and refusal;
+ * its epoch seconds are the parsed instant's, or {@link OffsetTimes#NOT_FIXED} for text it leaves to others.
+ */
 class OffsetTimesTest {
 
     private static void same(String text) {
         OffsetDateTime expected;
+        long epoch = OffsetTimes.epochSecond(text);
         try {
             expected = OffsetDateTime.parse(text);
         } catch (DateTimeException e) {
+            assertEquals(OffsetTimes.NOT_FIXED, epoch, text);
             DateTimeException got = assertThrows(DateTimeException.class, () -> OffsetTimes.parse(text), text);
             assertEquals(e.getClass(), got.getClass(), text);
             assertEquals(e.getMessage(), got.getMessage(), text);
@@ -27,6 +33,9 @@ class OffsetTimesTest {
         OffsetDateTime got = OffsetTimes.parse(text);
         assertEquals(expected, got, text); // same local date-time and same offset
         assertEquals(expected.toString(), got.toString(), text);
+        if (epoch != OffsetTimes.NOT_FIXED) {
+            assertEquals(expected.toEpochSecond(), epoch, text);
+        }
     }
 
     @Test
@@ -41,6 +50,13 @@ class OffsetTimesTest {
                 "0000-01-01T00:00+00:00", "9999-12-31T23:59+01:00", "2027-03-01T06:04:07.5+01:00", "", "2027-03-01",
                 "2027-03-01T06:04+01:00[Europe/Berlin]", "２０２７-03-01T06:04+01:00");
         cases.forEach(OffsetTimesTest::same);
+        // what the fixed form leaves to the formatter: another shape, a day the month lacks, an offset past 18:00
+        for (String other : List.of("2027-03-01T06:04Z", "2027-02-30T06:04+01:00", "2027-03-01T06:04+18:01",
+                "2027-03-01T06:04:07.5+01:00")) {
+            assertEquals(OffsetTimes.NOT_FIXED, OffsetTimes.epochSecond(other), other);
+        }
+        assertEquals(OffsetDateTime.parse("2027-03-01T06:04+18:00").toEpochSecond(),
+                OffsetTimes.epochSecond("2027-03-01T06:04+18:00"));
     }
 
     /** 20,000 random instants written the way plan files write them (fixed seed; a mismatch shows the text). */
@@ -56,5 +72,8 @@ class OffsetTimesTest {
             texts.add(t.toString());
         }
         texts.forEach(OffsetTimesTest::same);
+        // every one with an offset (toString writes a zero offset as Z) is read by the fixed positions
+        texts.stream().filter(t -> !t.endsWith("Z"))
+                .forEach(t -> assertNotEquals(OffsetTimes.NOT_FIXED, OffsetTimes.epochSecond(t), t));
     }
 }
