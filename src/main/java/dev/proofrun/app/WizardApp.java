@@ -16,6 +16,9 @@ public final class WizardApp extends Application {
 
     private Wizard wizard;
 
+    /** The longest the window waits for the classes to be loaded ahead before it shows anyway. */
+    private static final long PRIMING_WAIT_MS = 1500;
+
     /** On the launcher thread, once the toolkit runs: the pages' classes are loaded while the window is built. */
     @Override
     public void init() {
@@ -35,6 +38,8 @@ public final class WizardApp extends Application {
     public void start(Stage stage, AppHome home) {
         dev.proofrun.app.shell.Primer.begin();
         wizard = Wizard.create(home, getHostServices());
+        // the demo plan of a first start is read on a worker while the window is built; it lands after
+        wizard.opened();
         Scene scene = new Scene(wizard.view().root(), 1280, 800);
         scene.getStylesheets().add(theme());
         stage.setScene(scene);
@@ -49,8 +54,15 @@ public final class WizardApp extends Application {
                 e.consume();
             }
         });
+        // before the window shows: the classes loaded ahead (that work then no longer competes with the shown
+        // window for the processor), the controls' code run once (WarmUp), and the first frame drawn once:
+        // on a cold start the renderer's first frame (its code and every glyph met for the first time) and
+        // the first table or text field of a page kept the shown window from answering
+        dev.proofrun.app.shell.Primer.awaitDone(PRIMING_WAIT_MS);
+        dev.proofrun.app.shell.WarmUp.run(theme());
+        wizard.view().unfoldNow();
+        scene.snapshot(null);
         stage.show();
-        wizard.opened();
     }
 
     public Wizard wizard() {

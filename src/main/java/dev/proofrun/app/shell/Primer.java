@@ -26,6 +26,7 @@ public final class Primer {
     static final String LIST = "primer-classes.txt";
 
     private static final AtomicBoolean STARTED = new AtomicBoolean();
+    private static final java.util.concurrent.CountDownLatch DONE = new java.util.concurrent.CountDownLatch(1);
 
     private Primer() {
     }
@@ -35,9 +36,34 @@ public final class Primer {
         if (!STARTED.compareAndSet(false, true)) {
             return;
         }
-        Thread t = new Thread(Primer::prime, "proofrun-primer");
+        Thread t = new Thread(() -> {
+            try {
+                prime();
+            } finally {
+                DONE.countDown();
+            }
+        }, "proofrun-primer");
         t.setDaemon(true);
         t.start();
+    }
+
+    /**
+     * Waits until the priming is done, at most the given time; returns at once if it never began. The
+     * window waits for it before it shows: primed while the window is built (on another core), it no
+     * longer competes with the shown window's first frames for the processor.
+     *
+     * @return true when the priming is done
+     */
+    public static boolean awaitDone(long millis) {
+        if (!STARTED.get()) {
+            return true;
+        }
+        try {
+            return DONE.await(millis, java.util.concurrent.TimeUnit.MILLISECONDS);
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            return false;
+        }
     }
 
     /**
@@ -47,18 +73,56 @@ public final class Primer {
      */
     static int prime() {
         ClassLoader loader = Primer.class.getClassLoader();
+        Object unsafe = unsafe();
         int done = 0;
         for (String name : names()) {
             try {
                 Class<?> c = Class.forName(name, false, loader);
                 // reflection links (verifies) the class without running its static initialiser
                 c.getDeclaredConstructors();
+                if (unsafe != null && c.isRecord() && name.startsWith(OWN)) {
+                    linkRecordMethods(unsafe, c);
+                }
                 done++;
             } catch (ClassNotFoundException | LinkageError | SecurityException e) {
                 // not in this JavaFX version, or not to be touched: the FX thread loads it when needed
             }
         }
         return done;
+    }
+
+    /** Our own classes: only their records get their methods linked. */
+    private static final String OWN = "dev.proofrun.";
+
+    /**
+     * A record's equals and hashCode are linked by the JVM the first time each runs (an invokedynamic call
+     * site that builds method handles); on the FX thread that was 5 to 20 ms per record on a cold start,
+     * and the wizard compares records to skip work it has done. Here each runs once on two blank
+     * instances (made without a constructor, never shared; their components are null or zero, which the
+     * generated methods accept). A record whose own methods do not accept that is left to the FX thread.
+     */
+    private static void linkRecordMethods(Object unsafe, Class<?> record) {
+        try {
+            java.lang.reflect.Method allocate = unsafe.getClass().getMethod("allocateInstance", Class.class);
+            Object a = allocate.invoke(unsafe, record);
+            Object b = allocate.invoke(unsafe, record);
+            a.equals(b);
+            a.hashCode();
+        } catch (ReflectiveOperationException | RuntimeException e) {
+            // left to the FX thread
+        }
+    }
+
+    /** The JDK's sun.misc.Unsafe (module jdk.unsupported), or null where it cannot be had. */
+    private static Object unsafe() {
+        try {
+            Class<?> type = Class.forName("sun.misc.Unsafe");
+            java.lang.reflect.Field f = type.getDeclaredField("theUnsafe");
+            f.setAccessible(true);
+            return f.get(null);
+        } catch (ReflectiveOperationException | RuntimeException e) {
+            return null;
+        }
     }
 
     /** The class names of the list, comments and blank lines left out; empty if the list is missing. */

@@ -60,6 +60,11 @@ public final class ShellView {
         return root;
     }
 
+    /** Puts the page on screen together at once; for the window's first page, before the window shows. */
+    public void unfoldNow() {
+        unfolding.finish();
+    }
+
     /** True while a page shown for the first time is still being put together (a few frames). */
     public javafx.beans.value.ObservableBooleanValue unfoldingProperty() {
         return unfolding.runningProperty();
@@ -116,9 +121,13 @@ public final class ShellView {
         int cur = vm.currentProperty().get();
         for (int i = 0; i < railButtons.size(); i++) {
             Button b = railButtons.get(i);
+            String state = i == cur ? "pr-rail-current"
+                    : vm.steps().get(i).completeBinding().get() ? "pr-rail-done" : "pr-rail-open";
+            if (b.getStyleClass().contains(state)) {
+                continue; // a changed style class makes the button's style be worked out again
+            }
             b.getStyleClass().removeAll("pr-rail-current", "pr-rail-done", "pr-rail-open");
-            b.getStyleClass().add(i == cur ? "pr-rail-current"
-                    : vm.steps().get(i).completeBinding().get() ? "pr-rail-done" : "pr-rail-open");
+            b.getStyleClass().add(state);
         }
     }
 

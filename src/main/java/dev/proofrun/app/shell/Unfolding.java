@@ -13,21 +13,26 @@ import javafx.scene.layout.Pane;
  * Puts a page into the window a piece at a time, one piece per pulse, so that no single pulse has to make
  * the skins, apply the style sheet and lay out a whole page. The pieces are the page's parts (the cards a
  * step view stacks) and, inside a part that is a pane, that part's own children; each goes back to the
- * place it had, in order. The first pulse shows the page's frame, the rest follow within a few frames.
+ * place it had, in order (a table or list a few rows at a time, see {@link #put}). The first pulse shows
+ * the page's frame, the rest follow within a few frames.
  *
  * <p>Only the two outer levels are taken apart: the step views do not change those lists after they are
  * built (what they fill in later lies deeper), so nothing here races with a view.
  */
 final class Unfolding {
 
-    private final Deque<Runnable> pieces = new ArrayDeque<>();
+    /** Rows a table or list grows by in one pulse on its first showing. */
+    static final int ROWS_PER_PULSE = 1;
+
+    /** A piece of work for one pulse; true when it is done, false to be run again in the next pulse. */
+    private final Deque<java.util.function.BooleanSupplier> pieces = new ArrayDeque<>();
     private final ReadOnlyBooleanWrapper running = new ReadOnlyBooleanWrapper(this, "running", false);
     private final AnimationTimer timer = new AnimationTimer() {
         @Override
         public void handle(long now) {
-            Runnable next = pieces.poll();
-            if (next != null) {
-                next.run();
+            java.util.function.BooleanSupplier next = pieces.peek();
+            if (next != null && next.getAsBoolean()) {
+                pieces.poll();
             }
             if (pieces.isEmpty()) {
                 stop();
@@ -56,19 +61,71 @@ final class Unfolding {
             if (!inner.isEmpty()) {
                 ((Pane) part).getChildren().clear();
             }
-            pieces.add(() -> page.getChildren().add(part));
+            put(page, part);
             for (Node child : inner) {
-                pieces.add(() -> ((Pane) part).getChildren().add(child));
+                put((Pane) part, child);
             }
         }
         running.set(true);
         timer.start();
     }
 
-    /** Puts back at once whatever is still waiting (used when the window must be complete now). */
+    /**
+     * Queues putting the node back into its pane. A table or list comes in unmanaged first (nothing gives it
+     * a size: its skin and style are made, no cells), then it is managed again at the height of a few
+     * rows and grows by {@value #ROWS_PER_PULSE} row a pulse to the height it wants: its cells are made a
+     * row at a time. Made in one pulse, the cells of one table held the FX thread as long as the rest
+     * of a page.
+     */
+    private void put(Pane parent, Node n) {
+        if (!(n instanceof javafx.scene.control.TableView<?> || n instanceof javafx.scene.control.ListView<?>)
+                || !n.isManaged() || n.managedProperty().isBound()) {
+            pieces.add(() -> {
+                parent.getChildren().add(n);
+                return true;
+            });
+            return;
+        }
+        javafx.scene.control.Control list = (javafx.scene.control.Control) n;
+        pieces.add(() -> {
+            list.setManaged(false);
+            parent.getChildren().add(list);
+            return true;
+        });
+        if (list.minHeightProperty().isBound() || list.maxHeightProperty().isBound()) {
+            pieces.add(() -> {
+                list.setManaged(true);
+                return true;
+            });
+            return;
+        }
+        double min = list.getMinHeight();
+        double max = list.getMaxHeight();
+        double step = Em.of(Tables.ROW_EM * ROWS_PER_PULSE);
+        double[] height = {0};
+        pieces.add(() -> {
+            height[0] += step;
+            list.setManaged(true);
+            if (height[0] >= list.prefHeight(-1)) {
+                list.setMinHeight(min);
+                list.setMaxHeight(max);
+                return true;
+            }
+            list.setMinHeight(height[0]);
+            list.setMaxHeight(height[0]);
+            return false;
+        });
+    }
+
+    /**
+     * Puts back at once whatever is still waiting: for the page a window shows first, before the window
+     * shows (nobody waits on a window not yet shown, and its first frame is then drawn complete).
+     */
     void finish() {
         while (!pieces.isEmpty()) {
-            pieces.poll().run();
+            if (pieces.peek().getAsBoolean()) {
+                pieces.poll();
+            }
         }
         timer.stop();
         running.set(false);

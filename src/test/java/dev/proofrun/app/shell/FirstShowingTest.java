@@ -24,11 +24,12 @@ import org.testfx.framework.junit5.Start;
 import org.testfx.util.WaitForAsyncUtils;
 
 /**
- * A page shown for the first time unfolds a piece per pulse and ends exactly as it was built; the primer
- * finds and loads every class of its list.
+ * What makes a page's first showing light: it unfolds a piece per pulse and ends exactly as it was built
+ * (or at once, before the window shows); the primer finds and loads every class of its list; the warm-up
+ * styles and lays out its throwaway scene.
  */
 @ExtendWith(ApplicationExtension.class)
-class UnfoldingTest {
+class FirstShowingTest {
 
     private StackPane host;
 
@@ -73,9 +74,13 @@ class UnfoldingTest {
         assertEquals(parts, WaitForAsyncUtils.asyncFx(() -> List.copyOf(page.getChildren())).get());
         assertEquals(formKids, WaitForAsyncUtils.asyncFx(() -> List.copyOf(form.getChildren())).get());
         assertEquals(cardKids, WaitForAsyncUtils.asyncFx(() -> List.copyOf(card.getChildren())).get());
+        TableView<?> table = (TableView<?>) cardKids.get(2);
+        assertTrue(table.isManaged(), "the table, put in unmanaged first, is managed again");
+        assertEquals(javafx.scene.layout.Region.USE_COMPUTED_SIZE, table.getMinHeight(), "its own minimum height back");
+        assertEquals(javafx.scene.layout.Region.USE_COMPUTED_SIZE, table.getMaxHeight(), "its own maximum height back");
         assertEquals(0, GridPane.getColumnIndex(formKids.get(0)));
         assertEquals(1, GridPane.getColumnIndex(formKids.get(1)));
-        // 3 parts + 2 + 3 children = 8 pieces, one per pulse: never two at once
+        // 3 parts + 2 + 3 children = 8 nodes put back (the table then grows over a few pulses): never two at once
         for (int i = 1; i < seen.size(); i++) {
             assertTrue(seen.get(i) - seen.get(i - 1) <= 1, "one piece per pulse: " + seen);
         }
@@ -83,8 +88,9 @@ class UnfoldingTest {
     }
 
     @Test
-    void finishPutsBackWhatIsLeftAtOnce() throws Exception {
-        VBox card = new VBox(new Label("a"), new Label("b"));
+    void unfoldNowPutsEverythingBackAtOnce() throws Exception {
+        TableView<String> table = new TableView<>(javafx.collections.FXCollections.observableArrayList("a", "b"));
+        VBox card = new VBox(new Label("a"), table);
         VBox page = new VBox(new Label("t"), card);
         Unfolding u = new Unfolding();
         WaitForAsyncUtils.asyncFx(() -> {
@@ -93,7 +99,16 @@ class UnfoldingTest {
         }).get();
         assertFalse(u.runningProperty().get());
         assertEquals(2, page.getChildren().size());
-        assertEquals(2, card.getChildren().size());
+        assertEquals(List.of(card.getChildren().get(0), table), card.getChildren());
+        assertTrue(table.isManaged());
+        assertEquals(javafx.scene.layout.Region.USE_COMPUTED_SIZE, table.getMaxHeight());
+    }
+
+    @Test
+    void theWarmUpStylesAndLaysOutItsScene() throws Exception {
+        double height = WaitForAsyncUtils.asyncFx(() ->
+                WarmUp.run(dev.proofrun.app.WizardApp.class.getResource(dev.proofrun.app.WizardApp.THEME).toExternalForm())).get();
+        assertTrue(height > 0, "laid out: " + height);
     }
 
     @Test
