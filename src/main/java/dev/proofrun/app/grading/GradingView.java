@@ -137,6 +137,10 @@ public final class GradingView implements StepView {
                 + "demonstrated when it reaches the required minimum."));
         low.setText(null);
         grades.getColumns().add(low);
+        // widths of their own, so the last title is not cut short (the policy spreads what is left)
+        grades.getColumns().get(2).setPrefWidth(dev.proofrun.app.shell.Em.of(9));
+        est.setPrefWidth(dev.proofrun.app.shell.Em.of(9));
+        low.setPrefWidth(dev.proofrun.app.shell.Em.of(15));
         grades.getSelectionModel().selectedItemProperty().addListener((o, a, b) -> {
             if (b != null) {
                 vm.selectedProperty().set(b);

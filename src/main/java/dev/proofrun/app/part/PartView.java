@@ -53,7 +53,14 @@ public final class PartView implements StepView {
         dev.proofrun.app.shell.Tables.fitHeight(table, 2.2, 6, 12);
         table.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY_FLEX_LAST_COLUMN);
         for (CharacteristicField f : CharacteristicField.values()) {
-            TableColumn<CharacteristicDraft, String> c = new TableColumn<>(PartViewModel.label(f));
+            TableColumn<CharacteristicDraft, String> c = new TableColumn<>();
+            String title = PartViewModel.label(f);
+            if (dev.proofrun.app.shell.IndexTooltips.tipsFor(title).isEmpty()) {
+                c.setText(title);
+            } else {
+                // a title naming an index carries its tooltip, as every label naming one does
+                c.setGraphic(dev.proofrun.app.shell.IndexTooltips.follow(new Label(title)));
+            }
             c.setId("col-" + f.header());
             // a width of its own: the default width makes the skin measure every cell on the first showing
             // (hundreds of ms on a loaded machine); the constrained policy spreads the rest

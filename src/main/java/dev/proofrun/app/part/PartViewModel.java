@@ -269,7 +269,7 @@ public final class PartViewModel extends StepViewModel {
             case NOMINAL -> "Nominal";
             case LSL -> "LSL";
             case USL -> "USL";
-            case TARGET -> "Target";
+            case TARGET -> "Cpm target";
             case EXPECTED -> "Expected index";
         };
     }
