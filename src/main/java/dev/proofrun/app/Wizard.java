@@ -67,8 +67,9 @@ public final class Wizard {
     }
 
     /**
-     * After the window shows: the first start opens the demo plan (read off the FX thread) and goes to its
-     * first step, unless the user has moved on meanwhile; later starts show the recent plans.
+     * Once the wizard is built: the first start opens the demo plan (read off the FX thread; it lands on the
+     * FX thread once that is free) and goes to its first step, unless the user has moved on meanwhile;
+     * later starts show the recent plans.
      */
     public void opened() {
         if (session.recent().isFirstStart()) {
@@ -82,7 +83,8 @@ public final class Wizard {
 
     /** True while a step computes in the background, a plan file is read or a page is still unfolding. */
     public boolean busy() {
-        return start.openingProperty().get() || view.unfoldingProperty().get() || sizing.busyProperty().get() || timing.busyProperty().get() || handout.busyProperty().get()
+        return start.openingProperty().get() || view.unfoldingProperty().get()
+                || sizing.busyProperty().get() || timing.busyProperty().get() || handout.busyProperty().get()
                 || handout.exportingProperty().get()
                 || handout.issuingProperty().get() || grading.busyProperty().get() || grading.reportingProperty().get();
     }

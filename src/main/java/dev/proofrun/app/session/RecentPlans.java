@@ -38,8 +38,11 @@ public final class RecentPlans {
         }
     }
 
-    /** Puts the plan at the top of the list and writes the list. */
-    public List<Path> remember(Path plan) {
+    /**
+     * Puts the plan at the top of the list and writes the list. Synchronised: plans are opened and written
+     * on different workers, and two read-change-write turns at once would lose one of them.
+     */
+    public synchronized List<Path> remember(Path plan) {
         Path p = plan.toAbsolutePath().normalize();
         List<Path> now = new ArrayList<>(list());
         now.remove(p);

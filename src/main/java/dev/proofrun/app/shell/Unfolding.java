@@ -3,17 +3,21 @@ package dev.proofrun.app.shell;
 import java.util.ArrayDeque;
 import java.util.Deque;
 import java.util.List;
+import java.util.function.BooleanSupplier;
 import javafx.animation.AnimationTimer;
 import javafx.beans.property.ReadOnlyBooleanProperty;
 import javafx.beans.property.ReadOnlyBooleanWrapper;
 import javafx.scene.Node;
+import javafx.scene.control.Control;
+import javafx.scene.control.ListView;
+import javafx.scene.control.TableView;
 import javafx.scene.layout.Pane;
 
 /**
  * Puts a page into the window a piece at a time, one piece per pulse, so that no single pulse has to make
  * the skins, apply the style sheet and lay out a whole page. The pieces are the page's parts (the cards a
  * step view stacks) and, inside a part that is a pane, that part's own children; each goes back to the
- * place it had, in order (a table or list a few rows at a time, see {@link #put}). The first pulse shows
+ * place it had, in order (a table or list a row at a time, see {@link #put}). The first pulse shows
  * the page's frame, the rest follow within a few frames.
  *
  * <p>Only the two outer levels are taken apart: the step views do not change those lists after they are
@@ -25,12 +29,12 @@ final class Unfolding {
     static final int ROWS_PER_PULSE = 1;
 
     /** A piece of work for one pulse; true when it is done, false to be run again in the next pulse. */
-    private final Deque<java.util.function.BooleanSupplier> pieces = new ArrayDeque<>();
+    private final Deque<BooleanSupplier> pieces = new ArrayDeque<>();
     private final ReadOnlyBooleanWrapper running = new ReadOnlyBooleanWrapper(this, "running", false);
     private final AnimationTimer timer = new AnimationTimer() {
         @Override
         public void handle(long now) {
-            java.util.function.BooleanSupplier next = pieces.peek();
+            BooleanSupplier next = pieces.peek();
             if (next != null && next.getAsBoolean()) {
                 pieces.poll();
             }
@@ -78,7 +82,7 @@ final class Unfolding {
      * of a page.
      */
     private void put(Pane parent, Node n) {
-        if (!(n instanceof javafx.scene.control.TableView<?> || n instanceof javafx.scene.control.ListView<?>)
+        if (!(n instanceof TableView<?> || n instanceof ListView<?>)
                 || !n.isManaged() || n.managedProperty().isBound()) {
             pieces.add(() -> {
                 parent.getChildren().add(n);
@@ -86,7 +90,7 @@ final class Unfolding {
             });
             return;
         }
-        javafx.scene.control.Control list = (javafx.scene.control.Control) n;
+        Control list = (Control) n;
         pieces.add(() -> {
             list.setManaged(false);
             parent.getChildren().add(list);

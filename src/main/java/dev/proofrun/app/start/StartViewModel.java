@@ -70,9 +70,15 @@ public final class StartViewModel extends StepViewModel {
     }
 
     /**
-     * Begins a new plan. If a draft of an unsaved plan was left behind, it is restored instead of lost.
+     * Begins a new plan. If a draft of an unsaved plan was left behind, it is restored instead of lost. A
+     * plan file still being read is dropped: the latest request wins.
      */
     public void newPlan() {
+        if (reading != null) {
+            reading.cancel();
+            reading = null;
+            opening.set(false);
+        }
         boolean restored = session.startNew();
         message.set(restored ? AppMessage.DRAFT_RESTORED.format(session.drafts().sideFile(null).getFileName()) : "");
         loaded.set(true);

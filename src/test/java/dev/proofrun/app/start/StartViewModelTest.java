@@ -82,6 +82,19 @@ class StartViewModelTest {
     }
 
     @Test
+    void aNewPlanStartedWhileAFileIsReadWins() {
+        Session session = new Session(new AppHome(tmp, tmp.resolve("plans")));
+        HeldJobs held = new HeldJobs();
+        StartViewModel vm = new StartViewModel(session, held);
+        vm.openDemo();
+        vm.newPlan();
+        assertFalse(vm.openingProperty().get());
+        held.jobs.get(0).finish();
+        assertTrue(session.base().isEmpty(), "the demo read late does not replace the new plan");
+        assertTrue(vm.loadedProperty().get());
+    }
+
+    @Test
     void aFileThatIsNotAPlanIsOneLineAndNothingChanges() throws Exception {
         Session session = new Session(new AppHome(tmp, tmp.resolve("plans")));
         Path bad = Files.writeString(tmp.resolve("notes.json"), "{\"not\": \"a plan\"}");
