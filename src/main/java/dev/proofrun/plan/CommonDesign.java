@@ -57,16 +57,8 @@ public record CommonDesign(Design design, String reason, Optional<SharedDesign> 
         }
         List<Integer> sizes = subgroupSize.isPresent() ? List.of(subgroupSize.getAsInt())
                 : IntStream.rangeClosed(1, 10).boxed().toList();
-        List<SharedDesign> designs;
-        try {
-            designs = solve(characteristics, c -> DesignRequest.of(c.limits().sides(), c.requirement(), c.expectation())
-                    .withPower(power).withSubgroupSizes(sizes));
-        } catch (UserException e) {
-            if (characteristics.size() > 1 && e.key() == DesignMessage.UNREACHABLE) {
-                throw new UserException(PlanMessage.NO_COMMON_DESIGN, sizes.toString());
-            }
-            throw e;
-        }
+        List<SharedDesign> designs = solve(characteristics, c -> DesignRequest.of(c.limits().sides(), c.requirement(),
+                c.expectation()).withPower(power).withSubgroupSizes(sizes));
         SharedDesign best = designs.get(0);
         int n = best.subgroupSize();
         int k = subgroups.orElse(best.subgroups());
@@ -81,14 +73,16 @@ public record CommonDesign(Design design, String reason, Optional<SharedDesign> 
 
     /**
      * The shared designs of {@link SharedDesigner} for these characteristics, each asked with the request the
-     * caller makes for it; a refusal about one characteristic (c₁ ≤ c₀, an index its limits cannot give)
-     * names it.
+     * caller makes for it; a refusal about one characteristic (c₁ ≤ c₀, an index its limits cannot give, a
+     * power out of reach for it even alone) names it.
      *
      * @param characteristics the characteristics measured on the same parts (at least one)
      * @param request         the caller's design options applied to one characteristic
      * @return as {@link SharedDesigner#design}: one per subgroup size every characteristic can reach, best first
-     * @throws UserException {@link PlanMessage#CHARACTERISTIC_REFUSED} with the id and the designer's words, or as
-     *                       {@link SharedDesigner#design}
+     * @throws UserException {@link PlanMessage#CHARACTERISTIC_REFUSED} with the id and the designer's words (also
+     *                       for a characteristic whose wanted power is out of reach even alone),
+     *                       {@link PlanMessage#NO_COMMON_DESIGN} when each can be sized alone but no subgroup size
+     *                       suits them all, or as {@link SharedDesigner#design}
      */
     public static List<SharedDesign> solve(List<Characteristic> characteristics,
             Function<Characteristic, DesignRequest> request) {
@@ -105,6 +99,26 @@ public record CommonDesign(Design design, String reason, Optional<SharedDesign> 
                 throw e;
             }
         }
-        return SharedDesigner.design(requests);
+        try {
+            return SharedDesigner.design(requests);
+        } catch (UserException e) {
+            if (requests.size() < 2 || e.key() != DesignMessage.UNREACHABLE) {
+                throw e;
+            }
+            // which one stands in the way: a characteristic that cannot reach the power even alone is named
+            // with the designer's words for it; if each can alone, no one subgroup size suits them all
+            for (int i = 0; i < requests.size(); i++) {
+                try {
+                    SharedDesigner.design(List.of(requests.get(i)));
+                } catch (UserException alone) {
+                    if (alone.key() == DesignMessage.UNREACHABLE) {
+                        throw new UserException(PlanMessage.CHARACTERISTIC_REFUSED, characteristics.get(i).id(),
+                                alone.getMessage());
+                    }
+                    throw alone;
+                }
+            }
+            throw new UserException(PlanMessage.NO_COMMON_DESIGN, requests.get(0).subgroupSizes().toString());
+        }
     }
 }

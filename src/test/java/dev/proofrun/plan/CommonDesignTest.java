@@ -84,4 +84,17 @@ class CommonDesignTest {
         assertEquals("characteristic R4: expected Cpk 1.330 is not above the required 1.330: no study size can show"
                 + " this; the process must improve first", e.getMessage());
     }
+
+    @Test
+    void aCharacteristicOutOfReachEvenAloneIsNamed() {
+        // F7 expected barely above its requirement (1.34 against 1.33): 90 % power would need more readings
+        // than the designer allows for any subgroup size, whatever the others need
+        Characteristic f7 = chars.get(2);
+        Characteristic barely = new Characteristic(f7.id(), f7.name(), f7.unit(), f7.nominal(), f7.limits(),
+                f7.gauge(), f7.requirement(), Expectation.centred(1.34));
+        UserException e = assertThrows(UserException.class, () -> CommonDesign.choose(
+                List.of(chars.get(0), chars.get(1), barely), 0.9, OptionalInt.empty(), OptionalInt.empty()));
+        assertEquals(PlanMessage.CHARACTERISTIC_REFUSED, e.key());
+        assertTrue(e.getMessage().startsWith("characteristic F7: a power of 0.900 is out of reach"), e.getMessage());
+    }
 }
