@@ -60,6 +60,11 @@ public enum AppMessage implements MessageKey {
     SIZING_KEPT("Kept from the plan file: %d subgroups of %d = %d readings, %s. The smallest k that reaches the "
             + "wanted power with this size is %d (power %s); pick a row to use it."),
     SIZING_POWER_AT("power %s"),
+    SIZING_TOGETHER("All %d characteristics are measured on the same parts. At %d subgroups of %d, the chance that "
+            + "each is demonstrated: %s; that all are, in the one study (taken as independent): %s."),
+    SIZING_TOGETHER_SHORT(" Below the wanted power of %s: %s. The part's verdict needs every one: more subgroups, "
+            + "or a study of their own."),
+    SIZING_TOGETHER_LEFT_OUT(" Not counted (no expected index or no limits yet): %s."),
     SIZING_POWER_BETWEEN("power between %s and %s (read off the power curve)"),
     SIZING_POWER_UNKNOWN("power not computed for this k"),
     SIZING_GOAL_FIRST("complete the goal first"),

@@ -126,6 +126,12 @@ public final class SizingView implements StepView {
         cost.setId("design-cost");
         cost.setWrapText(true);
         cost.textProperty().bind(vm.costBinding());
+        Label together = new Label();
+        together.setId("design-together");
+        together.setWrapText(true);
+        together.textProperty().bind(vm.togetherProperty());
+        together.visibleProperty().bind(vm.togetherProperty().isNotEmpty());
+        together.managedProperty().bind(together.visibleProperty());
         Label warnings = new Label();
         warnings.setId("design-warnings");
         warnings.setWrapText(true);
@@ -141,7 +147,7 @@ public final class SizingView implements StepView {
 
         Label hint = new Label("Pick a row to use another subgroup size; the line below says what it costs.");
         hint.getStyleClass().add("pr-note");
-        VBox card = new VBox(form, refusal, table, hint, reason, cost, warnings);
+        VBox card = new VBox(form, refusal, table, hint, reason, cost, together, warnings);
         card.getStyleClass().add("pr-card");
         root.getChildren().addAll(card, charts);
     }

@@ -48,6 +48,10 @@ public final class SizingViewModel extends StepViewModel {
     private final ObjectProperty<DesignRow> chosen = new SimpleObjectProperty<>(this, "chosen");
     private final BooleanProperty busy = new SimpleBooleanProperty(this, "busy", false);
     private final StringProperty refusal = new SimpleStringProperty(this, "refusal", "");
+    private final StringProperty together = new SimpleStringProperty(this, "together", "");
+    private Background.Job togetherJob;
+    private long togetherGeneration;
+    private Together togetherAsked;
     private final StringBinding cost;
     private final ObjectBinding<Optional<Design>> designBinding;
     private final Background background;
@@ -65,6 +69,8 @@ public final class SizingViewModel extends StepViewModel {
         draft.field(DraftField.CHOSEN_SUBGROUP_SIZE).addListener((obs, was, now) -> recompute());
         cost = Bindings.createStringBinding(this::describeCost, chosen, table, chosenTable, draft.field(DraftField.CHOSEN_SUBGROUPS));
         designBinding = Bindings.createObjectBinding(this::design, chosen, draft.field(DraftField.CHOSEN_SUBGROUPS));
+        designBinding.addListener((obs, was, now) -> recomputeTogether());
+        draft.editsProperty().addListener((obs, was, now) -> recomputeTogether());
         bindMissing(Bindings.createStringBinding(() -> {
             if (goal.requirementBinding().get().isEmpty() || goal.expectationBinding().get().isEmpty()) {
                 return AppMessage.SIZING_GOAL_FIRST.format();
@@ -128,6 +134,14 @@ public final class SizingViewModel extends StepViewModel {
 
     public StringBinding costBinding() {
         return cost;
+    }
+
+    /**
+     * With several characteristics: the chance that each is demonstrated at the chosen design and that all
+     * are (the product, taken as independent), as the core computes each power; empty with one.
+     */
+    public StringProperty togetherProperty() {
+        return together;
     }
 
     public Optional<DesignRequest> request() {
@@ -242,6 +256,97 @@ public final class SizingViewModel extends StepViewModel {
                 chosen.set(null);
             }
         });
+    }
+
+    /** What the "all characteristics" line is computed from: the design and one request per characteristic. */
+    private record Together(int n, int k, double power, List<String> ids, List<DesignRequest> requests,
+            List<String> leftOut) {
+    }
+
+    /**
+     * Starts the powers of all characteristics at the chosen design (on the worker, after any design table
+     * asked for before); the latest inputs win. Nothing is computed again for the same inputs.
+     */
+    private void recomputeTogether() {
+        Optional<Design> d = designBinding.get();
+        Optional<dev.proofrun.design.Requirement> req = goal.requirementBinding().get();
+        if (d.isEmpty() || req.isEmpty() || draft.characteristics().size() < 2) {
+            togetherAsked = null;
+            together.set("");
+            return;
+        }
+        OptionalDouble p = Numbers.parse(draft.text(DraftField.POWER));
+        double power = p.isPresent() ? p.getAsDouble() : DesignRequest.DEFAULT_POWER;
+        List<String> ids = new java.util.ArrayList<>();
+        List<DesignRequest> requests = new java.util.ArrayList<>();
+        List<String> leftOut = new java.util.ArrayList<>();
+        for (dev.proofrun.app.session.CharacteristicDraft row : draft.characteristics()) {
+            Optional<dev.proofrun.design.Expectation> e = goal.expectationFor(row);
+            if (e.isEmpty() || row.limits().isEmpty()) {
+                leftOut.add(row.id());
+                continue;
+            }
+            try {
+                requests.add(DesignRequest.of(row.limits().get().sides(), req.get(), e.get()).withPower(power));
+                ids.add(row.id());
+            } catch (UserException | IllegalArgumentException refused) {
+                leftOut.add(row.id());
+            }
+        }
+        Together asked = new Together(d.get().subgroupSize(), d.get().subgroups(), power, List.copyOf(ids),
+                List.copyOf(requests), List.copyOf(leftOut));
+        if (asked.equals(togetherAsked)) {
+            return;
+        }
+        togetherAsked = asked;
+        if (togetherJob != null) {
+            togetherJob.cancel();
+        }
+        long mine = ++togetherGeneration;
+        togetherJob = background.submit(() -> {
+            double[] powers = new double[asked.requests().size()];
+            for (int i = 0; i < powers.length; i++) {
+                try {
+                    powers[i] = StudyDesigner.power(asked.requests().get(i), asked.n(), asked.k());
+                } catch (IllegalArgumentException | UserException outsideTheDesignersRange) {
+                    powers[i] = Double.NaN;
+                }
+            }
+            return powers;
+        }, powers -> {
+            if (mine == togetherGeneration) {
+                together.set(togetherText(asked, powers));
+            }
+        }, ex -> {
+            if (mine == togetherGeneration) {
+                together.set("");
+            }
+        });
+    }
+
+    /** The line for these powers: each characteristic's, their product, and who falls short of the wanted power. */
+    private static String togetherText(Together t, double[] powers) {
+        if (powers.length == 0) {
+            return "";
+        }
+        StringBuilder each = new StringBuilder();
+        StringBuilder shortOf = new StringBuilder();
+        double all = 1;
+        for (int i = 0; i < powers.length; i++) {
+            each.append(i == 0 ? "" : ", ").append(t.ids().get(i)).append(' ').append(fmtOrDash(powers[i]));
+            all *= powers[i];
+            if (!(powers[i] >= t.power())) {
+                shortOf.append(shortOf.length() == 0 ? "" : ", ").append(t.ids().get(i));
+            }
+        }
+        String line = AppMessage.SIZING_TOGETHER.format(powers.length + t.leftOut().size(), t.k(), t.n(), each, fmtOrDash(all));
+        if (shortOf.length() > 0) {
+            line += AppMessage.SIZING_TOGETHER_SHORT.format(fmt(t.power()), shortOf);
+        }
+        if (!t.leftOut().isEmpty()) {
+            line += AppMessage.SIZING_TOGETHER_LEFT_OUT.format(String.join(", ", t.leftOut()));
+        }
+        return line;
     }
 
     /** The power of the k kept from the plan file, at subgroup size n, as the core computes it. */

@@ -78,4 +78,33 @@ class SizingViewModelTest {
         assertTrue(cost.contains("power " + SizingViewModel.fmt(power) + "."), cost);
         assertFalse(cost.contains("between"), "computed, not read between points of the curve: " + cost);
     }
+
+    @Test
+    void withSeveralCharacteristicsEachPowerAndTheirProductAreShown() {
+        // D1 as above; F7 one-sided, expected barely above the requirement: far below the wanted power
+        CharacteristicDraft f7 = CharacteristicDraft.of(Map.of("id", "F7", "unit", "kN", "lsl", "4.5", "expected", "1.45"));
+        draft.characteristics().add(row);
+        draft.characteristics().add(f7);
+        assertTrue(vm.completeBinding().get(), vm.missingProperty().get());
+        dev.proofrun.design.Design d = vm.design().orElseThrow();
+        Requirement req = Requirement.of(IndexKind.CPK, 1.33, 0.95);
+        // the same powers as the core gives for each characteristic at this design
+        double d1 = StudyDesigner.power(DesignRequest.of(SpecLimits.Sides.TWO_SIDED, req, Expectation.centred(1.8)),
+                d.subgroupSize(), d.subgroups());
+        double p7 = StudyDesigner.power(DesignRequest.of(SpecLimits.Sides.LOWER_ONLY, req, Expectation.centred(1.45)),
+                d.subgroupSize(), d.subgroups());
+        String line = vm.togetherProperty().get();
+        assertTrue(line.contains("D1 " + SizingViewModel.fmt(d1) + ", F7 " + SizingViewModel.fmt(p7)), line);
+        assertTrue(line.contains("(taken as independent): " + SizingViewModel.fmt(d1 * p7) + "."), line);
+        assertTrue(p7 < 0.9 && line.contains("Below the wanted power of 0.900: F7."), line);
+
+        // one characteristic without an expected index is said, not counted
+        f7.cell(CharacteristicField.EXPECTED).set("");
+        String without = vm.togetherProperty().get();
+        assertTrue(without.contains("Not counted (no expected index or no limits yet): F7."), without);
+
+        // a single characteristic needs no such line
+        draft.characteristics().remove(f7);
+        assertEquals("", vm.togetherProperty().get());
+    }
 }
