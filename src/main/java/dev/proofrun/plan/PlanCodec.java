@@ -24,6 +24,7 @@ import java.time.LocalDateTime;
 import java.time.LocalTime;
 import java.time.OffsetDateTime;
 import java.time.ZoneId;
+import java.util.AbstractList;
 import java.util.ArrayList;
 import java.util.EnumSet;
 import java.util.List;
@@ -76,8 +77,21 @@ final class PlanCodec {
                 sp.kind() == StudySpan.Kind.LOTS ? sp.lotParts() : null,
                 sp.kind() == StudySpan.Kind.UNTIL ? sp.until().toString() : null);
         Schedule s = p.schedule();
-        List<PlanJson.SlotJ> slots = s.slots().stream().map(x -> new PlanJson.SlotJ(x.id(), x.start().toString(),
-                x.windowMinutes(), x.shift(), x.partsSinceStart())).toList();
+        List<Slot> model = s.slots();
+        // a view, not a copy: each slot's record is made as the writer reaches it and dropped after (a plan can
+        // have 200,000 slots, and the fingerprint writes them all once more)
+        List<PlanJson.SlotJ> slots = new AbstractList<>() {
+            @Override
+            public PlanJson.SlotJ get(int i) {
+                Slot x = model.get(i);
+                return new PlanJson.SlotJ(x.id(), x.start().toString(), x.windowMinutes(), x.shift(), x.partsSinceStart());
+            }
+
+            @Override
+            public int size() {
+                return model.size();
+            }
+        };
         Design d = p.design();
         return new PlanJson.File(PlanJson.FORMAT, PlanJson.VERSION, p.id(), p.state().token(),
                 p.revision().orElse(null), p.supersedes().orElse(null),

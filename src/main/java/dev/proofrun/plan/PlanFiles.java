@@ -17,7 +17,9 @@ import com.fasterxml.jackson.databind.exc.UnrecognizedPropertyException;
 import com.fasterxml.jackson.databind.json.JsonMapper;
 import dev.proofrun.text.Location;
 import dev.proofrun.text.UserException;
+import java.io.ByteArrayOutputStream;
 import java.io.IOException;
+import java.io.OutputStream;
 import java.nio.ByteBuffer;
 import java.nio.channels.FileChannel;
 import java.nio.charset.StandardCharsets;
@@ -215,24 +217,44 @@ public final class PlanFiles {
 
     /** The canonical form the fingerprint is taken over: compact JSON without state and revision. */
     public static byte[] canonical(StudyPlan plan) {
+        ByteArrayOutputStream out = new ByteArrayOutputStream();
+        writeCanonical(plan, out);
+        return out.toByteArray();
+    }
+
+    /** First {@value #FINGERPRINT_LENGTH} hex digits of SHA-256 over {@link #canonical}. */
+    public static String fingerprint(StudyPlan plan) {
+        MessageDigest sha;
+        try {
+            sha = MessageDigest.getInstance("SHA-256");
+        } catch (NoSuchAlgorithmException e) {
+            throw new IllegalStateException("SHA-256 is missing from this Java", e);
+        }
+        // the canonical bytes go straight into the digest as the generator flushes them (a plan of 200,000
+        // slots is about 20 MB of them, never held whole); the same writer as canonical, so the same bytes
+        writeCanonical(plan, new OutputStream() {
+            @Override
+            public void write(int b) {
+                sha.update((byte) b);
+            }
+
+            @Override
+            public void write(byte[] b, int off, int len) {
+                sha.update(b, off, len);
+            }
+        });
+        return HexFormat.of().formatHex(sha.digest()).substring(0, FINGERPRINT_LENGTH);
+    }
+
+    private static void writeCanonical(StudyPlan plan, OutputStream out) {
         PlanJson.File f = PlanCodec.toJson(plan);
         PlanJson.File content = new PlanJson.File(f.format(), f.formatVersion(), f.id(), null, null, f.supersedes(),
                 f.part(), f.people(), f.design(), f.characteristics(), f.calendar(), f.span(), f.spacing(), f.seed(),
                 f.schedule());
         try {
-            return MAPPER.writeValueAsBytes(content);
-        } catch (JsonProcessingException e) {
+            MAPPER.writeValue(out, content);
+        } catch (IOException e) {
             throw new IllegalStateException("plan could not be written as JSON", e);
-        }
-    }
-
-    /** First {@value #FINGERPRINT_LENGTH} hex digits of SHA-256 over {@link #canonical}. */
-    public static String fingerprint(StudyPlan plan) {
-        try {
-            byte[] hash = MessageDigest.getInstance("SHA-256").digest(canonical(plan));
-            return HexFormat.of().formatHex(hash).substring(0, FINGERPRINT_LENGTH);
-        } catch (NoSuchAlgorithmException e) {
-            throw new IllegalStateException("SHA-256 is missing from this Java", e);
         }
     }
 
