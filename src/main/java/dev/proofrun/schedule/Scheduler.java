@@ -23,7 +23,8 @@ import java.util.stream.Collectors;
  * Δ &lt; max(d, 1 minute): slots would be closer than n parts apart.</li>
  * <li>Slot i is placed at running minute t_i by the {@link Spacing}, mapped back to an instant through the
  * pieces (so it can never fall in a break, between shifts or on a non-working date) and rounded down to the
- * minute. Parts since start ≈ t_i·rate/60.</li>
+ * minute. Neighbours are at least max(d, 1 minute) apart in running time, so their minutes differ and the
+ * slots are in strict time order. Parts since start ≈ t_i·rate/60.</li>
  * <li>The window is ± min(⌊Δ/2⌋, {@value #WINDOW_CAP_MINUTES}) minutes, at least 1: half the spacing, capped
  * at half an hour so that a subgroup stays tied to the part of the shift it is meant to represent (our
  * choice; common practice asks only that a subgroup be taken close to its planned time).</li>
@@ -78,7 +79,10 @@ public final class Scheduler {
         List<Slot> slots = new ArrayList<>(subgroups);
         for (int i = 0; i < subgroups; i++) {
             double slack = spacingMinutes - partMinutes;
-            double offset = spacing == Spacing.EVEN ? slack / 2 : random.nextDouble() * Math.max(0, slack);
+            // random: the subgroup ends inside its interval and starts at least a minute after the one before,
+            // so no two slots share a minute once rounded down (a subgroup of fast parts takes seconds)
+            double offset = spacing == Spacing.EVEN ? slack / 2
+                    : random.nextDouble() * Math.max(0, spacingMinutes - needed);
             double t = i * spacingMinutes + offset;
             WorkingTime.Piece piece = pieceAt(pieces, t);
             double into = t - before(pieces, piece);

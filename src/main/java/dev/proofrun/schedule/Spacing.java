@@ -9,11 +9,13 @@ import java.util.Locale;
  * <ul>
  * <li>{@link #EVEN}: t_i = i·Δ + (Δ − d)/2, the subgroup centred in its interval; neighbours are exactly Δ
  * apart in working time.</li>
- * <li>{@link #RANDOM}: t_i = i·Δ + u_i·(Δ − d), u_i uniform on [0, 1) from {@code java.util.Random} seeded
- * with the plan's seed (that generator's algorithm is fixed by its specification, so the same seed gives
- * the same schedule on every Java). Stratified: one random time inside each interval, and the subgroup
- * still ends inside it, so neighbours are at least d apart. Random times avoid aliasing with a periodic
- * cause such as a tool-wear cycle or the break pattern (common practice).</li>
+ * <li>{@link #RANDOM}: t_i = i·Δ + u_i·(Δ − max(d, 1 min)), u_i uniform on [0, 1) from
+ * {@code java.util.Random} seeded with the plan's seed (that generator's algorithm is fixed by its
+ * specification, so the same seed gives the same schedule on every Java). Stratified: one random time
+ * inside each interval, and the subgroup still ends inside it, so neighbours are at least d apart — and at
+ * least a minute, so that slots rounded down to the minute never share one (subgroups of fast parts take
+ * seconds). Random times avoid aliasing with a periodic cause such as a tool-wear cycle or the break
+ * pattern (common practice).</li>
  * </ul>
  * Working time skips breaks, non-working days and time between shifts; see {@link Scheduler}.
  */

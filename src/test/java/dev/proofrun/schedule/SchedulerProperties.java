@@ -73,6 +73,7 @@ class SchedulerProperties {
             assertNotNull(clock.shiftAt(slot.start()), slot::toString);
             assertEquals(Slot.idFor(i + 1, k), slot.id());
             if (i > 0) {
+                assertTrue(slot.start().isAfter(s.slots().get(i - 1).start()), "strict time order: " + slot);
                 long gap = clock.runningMinutes(s.slots().get(i - 1).start().toInstant(), slot.start().toInstant());
                 if (spacing == Spacing.EVEN) {
                     assertEquals(s.spacingMinutes(), gap, 1.0, slot::toString);

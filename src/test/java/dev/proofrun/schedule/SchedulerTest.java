@@ -63,6 +63,24 @@ class SchedulerTest {
     }
 
     @Test
+    void randomSlotsOfFastPartsNeverShareAMinute() {
+        // 3,600 parts an hour: a subgroup of 5 takes 5 s, so with slots about a minute apart two random
+        // neighbours could fall into the same minute once rounded down, and the plan file would then refuse
+        // its own schedule ("slots must be in time order"). 7 h 30 min of running time, 400 subgroups.
+        ProductionCalendar cal = new ProductionCalendar(ZoneId.of("Europe/Berlin"), EnumSet.allOf(DayOfWeek.class),
+                List.of(Shift.of("day", "06:00", "14:00")), List.of(BreakWindow.of("10:00", "10:30")), new TreeSet<>(),
+                ProductionRate.perHour(3600));
+        StudySpan span = StudySpan.shifts(LocalDateTime.of(2027, 3, 1, 6, 0), 1);
+        for (long seed = 0; seed < 20; seed++) {
+            Schedule s = Scheduler.schedule(cal, span, 400, 5, Spacing.RANDOM, seed);
+            for (int i = 1; i < s.slots().size(); i++) {
+                assertTrue(s.slots().get(i).start().isAfter(s.slots().get(i - 1).start()),
+                        "seed " + seed + ": " + s.slots().get(i - 1) + " then " + s.slots().get(i));
+            }
+        }
+    }
+
+    @Test
     void randomSpacingIsReproducibleFromTheSeedAndStratified() {
         ProductionCalendar cal = threeShifts("America/Chicago");
         StudySpan span = StudySpan.shifts(LocalDateTime.of(2027, 3, 1, 6, 0), 6);
