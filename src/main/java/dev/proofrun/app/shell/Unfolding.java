@@ -16,8 +16,8 @@ import javafx.scene.layout.Pane;
 /**
  * Puts a page into the window a piece at a time, one piece per pulse, so that no single pulse has to make
  * the skins, apply the style sheet and lay out a whole page. The pieces are the page's parts (the cards a
- * step view stacks) and, inside a part that is a pane, that part's own children; each goes back to the
- * place it had, in order (a table or list a row at a time, see {@link #put}). The first pulse shows
+ * step view stacks) and, inside a part that is a pane, that part's own children (a grid's a row at a
+ * time); each goes back to the place it had, in order (a table or list a row at a time, see {@link #put}). The first pulse shows
  * the page's frame, the rest follow within a few frames.
  *
  * <p>Only the two outer levels are taken apart: the step views do not change those lists after they are
@@ -66,12 +66,36 @@ final class Unfolding {
                 ((Pane) part).getChildren().clear();
             }
             put(page, part);
+            if (part instanceof javafx.scene.layout.GridPane grid) {
+                putByRows(grid, inner);
+                continue;
+            }
             for (Node child : inner) {
                 put((Pane) part, child);
             }
         }
         running.set(true);
         timer.start();
+    }
+
+    /**
+     * A form's children go back a row per pulse: each child added to a grid makes it measure all its
+     * children again, so one per pulse made a long form cost more in all than the form at once.
+     */
+    private void putByRows(javafx.scene.layout.GridPane grid, List<Node> children) {
+        int i = 0;
+        while (i < children.size()) {
+            Integer row = javafx.scene.layout.GridPane.getRowIndex(children.get(i));
+            List<Node> same = new java.util.ArrayList<>();
+            while (i < children.size() && java.util.Objects.equals(
+                    javafx.scene.layout.GridPane.getRowIndex(children.get(i)), row)) {
+                same.add(children.get(i++));
+            }
+            pieces.add(() -> {
+                grid.getChildren().addAll(same);
+                return true;
+            });
+        }
     }
 
     /**
