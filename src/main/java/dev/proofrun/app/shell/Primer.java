@@ -7,18 +7,22 @@ import java.io.InputStreamReader;
 import java.nio.charset.StandardCharsets;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.concurrent.CountDownLatch;
+import java.util.concurrent.TimeUnit;
 import java.util.concurrent.atomic.AtomicBoolean;
 
 /**
- * Loads and links, on a background thread, the classes the FX thread will need for the wizard's pages. The
+ * Loads and links, on a background thread, the classes the wizard will need for its pages and jobs. The
  * first time a JavaFX application shows a table, a text field or a chart, its FX thread reads, defines and
  * verifies hundreds of classes; on a cold start that was a large part of the first showing of a page. The
  * names come from {@value #LIST}, made from a class-load log of the full robot flow.
  *
- * <p>Only loading and linking happen here, never a class's static initialiser and never a node: the JVM
- * makes class loading safe from any thread, while JavaFX's own off-thread building is not (measuring text
- * on two threads at once broke a label's layout when this class used to build a throwaway scene). If any
- * of it fails, it is skipped: the wizard works the same, only slower to show its first pages.
+ * <p>Only loading and linking happen here, never a JavaFX class's static initialiser and never a node: the
+ * JVM makes class loading safe from any thread, while JavaFX's own off-thread building is not (measuring
+ * text on two threads at once broke a label's layout when this class used to build a throwaway scene; see
+ * {@link WarmUp} for what runs on the FX thread instead). Our own records are the exception: their equals
+ * and hashCode are run once (which initialises them). If any of it fails, it is skipped: the wizard works
+ * the same, only slower to show its first pages.
  */
 public final class Primer {
 
@@ -26,7 +30,7 @@ public final class Primer {
     static final String LIST = "primer-classes.txt";
 
     private static final AtomicBoolean STARTED = new AtomicBoolean();
-    private static final java.util.concurrent.CountDownLatch DONE = new java.util.concurrent.CountDownLatch(1);
+    private static final CountDownLatch DONE = new CountDownLatch(1);
 
     private Primer() {
     }
@@ -59,7 +63,7 @@ public final class Primer {
             return true;
         }
         try {
-            return DONE.await(millis, java.util.concurrent.TimeUnit.MILLISECONDS);
+            return DONE.await(millis, TimeUnit.MILLISECONDS);
         } catch (InterruptedException e) {
             Thread.currentThread().interrupt();
             return false;
