@@ -120,4 +120,17 @@ public enum AppMessage implements MessageKey {
     public String english() {
         return english;
     }
+
+    /**
+     * The line for a background job that failed: the core's own words when it refused the job (a
+     * {@link dev.proofrun.text.UserException}, a value turned down with an {@link IllegalArgumentException},
+     * a file that could not be read or written), else this message with what went wrong.
+     */
+    public String failure(Throwable ex) {
+        if (ex instanceof dev.proofrun.text.UserException || ex instanceof IllegalArgumentException
+                || ex instanceof java.io.UncheckedIOException) {
+            return ex.getMessage();
+        }
+        return format(String.valueOf(ex));
+    }
 }

@@ -66,8 +66,7 @@ class FullFlowTest {
         System.out.print(probe.blocks());
     }
 
-    /** Generous: CI machines have 2 cores and other builds run beside this one. */
-    private static final long TIMEOUT_S = 90;
+    private static final long TIMEOUT_S = Settle.TIMEOUT_S;
 
     /** Waits until the condition, evaluated on the FX thread, holds (polled, no fixed sleeps). */
     private static void await(String what, Callable<Boolean> condition) throws TimeoutException {

@@ -41,7 +41,7 @@ class KeyboardTest {
     }
 
     private static void await(Callable<Boolean> condition) throws Exception {
-        WaitForAsyncUtils.waitFor(90, TimeUnit.SECONDS, () -> WaitForAsyncUtils.asyncFx(condition).get());
+        WaitForAsyncUtils.waitFor(Settle.TIMEOUT_S, TimeUnit.SECONDS, () -> WaitForAsyncUtils.asyncFx(condition).get());
         WaitForAsyncUtils.waitForFxEvents();
     }
 

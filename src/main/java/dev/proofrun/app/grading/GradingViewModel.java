@@ -15,7 +15,6 @@ import dev.proofrun.grade.Step;
 import dev.proofrun.plan.StudyPlan;
 import dev.proofrun.report.GradeReport;
 import dev.proofrun.sheet.layout.Paper;
-import dev.proofrun.text.UserException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
@@ -133,7 +132,7 @@ public final class GradingViewModel extends StepViewModel {
         }, ex -> {
             if (mine == generation) {
                 busy.set(false);
-                message.set(ex instanceof UserException ? ex.getMessage() : AppMessage.GRADING_FAILED.format(String.valueOf(ex)));
+                message.set(AppMessage.GRADING_FAILED.failure(ex));
             }
         });
         return true;
@@ -169,8 +168,7 @@ public final class GradingViewModel extends StepViewModel {
             message.set(AppMessage.GRADING_REPORT.format(written));
         }, ex -> {
             reporting.set(false);
-            message.set(ex instanceof UserException || ex instanceof IllegalArgumentException ? ex.getMessage()
-                    : AppMessage.GRADING_REPORT_FAILED.format(String.valueOf(ex.getMessage())));
+            message.set(AppMessage.GRADING_REPORT_FAILED.failure(ex));
         });
         return true;
     }

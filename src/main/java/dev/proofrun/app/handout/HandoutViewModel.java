@@ -287,8 +287,7 @@ public final class HandoutViewModel extends StepViewModel {
             refreshPreview();
         }, ex -> {
             issuing.set(false);
-            message.set(ex instanceof UserException || ex instanceof IllegalArgumentException ? ex.getMessage()
-                    : AppMessage.HANDOUT_ISSUE_FAILED.format(String.valueOf(ex.getMessage())));
+            message.set(AppMessage.HANDOUT_ISSUE_FAILED.failure(ex));
         });
         return true;
     }
@@ -328,8 +327,7 @@ public final class HandoutViewModel extends StepViewModel {
                     w.xlsx().getFileName()));
         }, ex -> {
             exporting.set(false);
-            message.set(ex instanceof UserException || ex instanceof IllegalArgumentException ? ex.getMessage()
-                    : AppMessage.HANDOUT_EXPORT_FAILED.format(String.valueOf(ex.getMessage())));
+            message.set(AppMessage.HANDOUT_EXPORT_FAILED.failure(ex));
         });
         return true;
     }

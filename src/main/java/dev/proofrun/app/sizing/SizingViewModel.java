@@ -249,8 +249,7 @@ public final class SizingViewModel extends StepViewModel {
         }, ex -> {
             if (mine == generation) {
                 busy.set(false);
-                refusal.set(ex instanceof UserException || ex instanceof IllegalArgumentException
-                        ? ex.getMessage() : AppMessage.SIZING_FAILED.format(String.valueOf(ex)));
+                refusal.set(AppMessage.SIZING_FAILED.failure(ex));
                 table.set(null);
                 rows.clear();
                 chosen.set(null);

@@ -1,7 +1,6 @@
 package dev.proofrun.app.start;
 
 import dev.proofrun.app.AppMessage;
-import dev.proofrun.text.UserException;
 import dev.proofrun.app.session.Background;
 import dev.proofrun.app.session.Session;
 import dev.proofrun.app.shell.StepViewModel;
@@ -20,6 +19,7 @@ public final class StartViewModel extends StepViewModel {
     private final Session session;
     private final Background files;
     private Background.Job reading;
+    private long generation;
     private final BooleanProperty opening = new SimpleBooleanProperty(this, "opening", false);
     private final ObservableList<Path> recent = FXCollections.observableArrayList();
     private final BooleanProperty loaded = new SimpleBooleanProperty(this, "loaded", false);
@@ -77,6 +77,7 @@ public final class StartViewModel extends StepViewModel {
         if (reading != null) {
             reading.cancel();
             reading = null;
+            generation++;
             opening.set(false);
         }
         boolean restored = session.startNew();
@@ -112,11 +113,11 @@ public final class StartViewModel extends StepViewModel {
         if (reading != null) {
             reading.cancel();
         }
+        long mine = ++generation;
         opening.set(true);
         message.set(AppMessage.OPENING.english());
-        Background.Job[] mine = new Background.Job[1];
-        mine[0] = files.submit(read, o -> {
-            if (reading != mine[0] && mine[0] != null) {
+        reading = files.submit(read, o -> {
+            if (mine != generation) {
                 return;
             }
             reading = null;
@@ -128,17 +129,15 @@ public final class StartViewModel extends StepViewModel {
             recent.setAll(o.recent());
             then.run();
         }, failure -> {
-            if (reading != mine[0] && mine[0] != null) {
+            if (mine != generation) {
                 return;
             }
             reading = null;
             opening.set(false);
-            message.set(failure instanceof UserException || failure instanceof java.io.UncheckedIOException
-                    ? failure.getMessage()
-                    : AppMessage.OPEN_FAILED.format(String.valueOf(failure)));
+            message.set(AppMessage.OPEN_FAILED.failure(failure));
         });
-        if (opening.get()) {
-            reading = mine[0];
+        if (!opening.get()) {
+            reading = null; // answered at once (a worker that runs jobs on the caller's thread)
         }
     }
 }
