@@ -437,7 +437,15 @@ public final class PlanFiles {
         return new UserException(where, PlanMessage.NOT_JSON, path, line, column, e.getOriginalMessage().replace('\n', ' '));
     }
 
+    /** What went wrong with the file, in words (the file's name is already in front of the message). */
     private static String describe(IOException e) {
-        return e.getClass().getSimpleName().replace("Exception", "") + (e.getMessage() == null ? "" : " " + e.getMessage());
+        if (e instanceof java.nio.file.NoSuchFileException) {
+            return "no such file";
+        }
+        if (e instanceof java.nio.file.AccessDeniedException) {
+            return "permission denied";
+        }
+        String m = e.getMessage() == null ? e.getClass().getSimpleName() : e.getMessage();
+        return m.equalsIgnoreCase("Is a directory") ? "it is a folder, not a file" : m;
     }
 }
