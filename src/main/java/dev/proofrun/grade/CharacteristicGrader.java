@@ -66,14 +66,18 @@ final class CharacteristicGrader {
         List<Reason> shapeReasons = new ArrayList<>();
         FutureTask<Shape> shapeTask = new FutureTask<>(() -> ShapeJudge.judge(subgroups, data.slots(), gc.resolution(), gc.shape(),
                 gc.limits(), shapeReasons));
-        if ((long) subgroups.size() * subgroups.get(0).length >= PARALLEL_READINGS) {
+        boolean declaredSkew = !gc.shape().isNormal();
+        if (!declaredSkew && (long) subgroups.size() * subgroups.get(0).length >= PARALLEL_READINGS) {
             Thread worker = new Thread(shapeTask, "proofrun-shape-" + gc.id());
             worker.setDaemon(true);
             worker.start();
         } else {
             shapeTask.run();
         }
-        Stability stability = StabilityJudge.judge(ChartKind.forMethod(design.sigmaMethod()), subgroups, data.slots(), reasons);
+        // under a declared skewed shape the charts look at the readings on the normal scale of the fitted model,
+        // so that the chance rate of the run rules is the one they were built for (NormalScores)
+        List<double[]> charted = declaredSkew ? NormalScores.of(join(shapeTask), subgroups, reasons) : subgroups;
+        Stability stability = StabilityJudge.judge(ChartKind.forMethod(design.sigmaMethod()), charted, data.slots(), reasons);
         valid &= stability.stable();
         CapabilityResult figures = figures(gc, design, subgroups);
         Shape shape = join(shapeTask);

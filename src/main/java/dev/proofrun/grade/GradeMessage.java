@@ -40,6 +40,7 @@ public enum GradeMessage implements MessageKey {
     REASON_UNSTABLE_BETWEEN("Unstable: the subgroup means vary more than the variation within explains: sigma overall/within = %.2f, ANOVA F = %.2f, p = %.2g; Cpk then overstates what the process delivers."),
     REASON_RATIO("Sigma overall/within = %.2f (ANOVA F = %.2f, p = %.2g)."),
     REASON_RATIO_INDIVIDUALS("Sigma overall/within = %.2f (individuals: no ANOVA)."),
+    REASON_CHARTS_ON_NORMAL_SCALE("The charts look at the readings on the normal scale of the planned %s model fitted to them (z = inverse normal of the model's F(x)), so that the run rules keep the chance rate they were built for; the chart limits are in that scale."),
     REASON_TOO_FEW_FOR_CHARTS("Fewer than 2 usable subgroups: no control chart, no capability."),
     REASON_SHAPE_FITS("Shape: the planned %s model fits (%s; Anderson-Darling A2 = %.3f, %s)."),
     REASON_SHAPE_REJECTED("Shape: the planned shape does not fit these readings: the %s model (%s) is rejected at 1 %% (Anderson-Darling A2 = %.3f, %s). Re-plan the characteristic with the shape it really has (plan new --shape) and grade again; no other model is tried here."),

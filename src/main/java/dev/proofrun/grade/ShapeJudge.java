@@ -47,7 +47,7 @@ final class ShapeJudge {
     static final double WEIBULL_CRITICAL_1 = 1.038;
     static final int MIN_READINGS = 8;
     static final int TAIL_RULE_READINGS = 2000;
-    static final double TAIL_TOLERANCE = 0.10;
+    static final double TAIL_TOLERANCE = 0.15;
     private static final long SPREAD_SEED = 0x5ba9eL;
 
     private ShapeJudge() {

@@ -16,6 +16,7 @@ import org.apache.commons.statistics.distribution.NormalDistribution;
 public record ShapeFit(ShapeFamily family, double location, double scale) {
 
     private static final NormalDistribution STANDARD = NormalDistribution.of(0, 1);
+    private static final double MAX_SCORE = 40;
 
     /** @throws IllegalArgumentException if the location is not finite or the scale not positive and finite */
     public ShapeFit {
@@ -91,10 +92,10 @@ public record ShapeFit(ShapeFamily family, double location, double scale) {
         double z = (toScale(family, x) - location) / scale;
         // Φ⁻¹ of a lower tail that may underflow: use the upper tail where it is the smaller one
         double lowerTail = -Math.expm1(-Math.exp(z));
-        if (lowerTail < 0.5) {
-            return STANDARD.inverseCumulativeProbability(lowerTail);
-        }
-        return -STANDARD.inverseCumulativeProbability(Math.exp(-Math.exp(z)));
+        double score = lowerTail < 0.5 ? STANDARD.inverseCumulativeProbability(lowerTail)
+                : -STANDARD.inverseCumulativeProbability(Math.exp(-Math.exp(z)));
+        // a tail probability that underflows gives ±∞: keep the score finite and in order (|z| ≤ 40)
+        return Math.max(-MAX_SCORE, Math.min(MAX_SCORE, score));
     }
 
     /** The first parameter as usually quoted: μ (normal, lognormal) or the Weibull shape k = 1/b. */
