@@ -100,6 +100,19 @@ final class ShapeStudies {
         return counts;
     }
 
+    /** How many of {@code studies} studies the stability step calls unstable. */
+    static int unstable(Case c, double c0, int studies, long seed, Path dir) {
+        GradingPlan plan = c.plan(c0);
+        Path f = dir.resolve("study.csv");
+        int unstable = 0;
+        for (int s = 0; s < studies; s++) {
+            write(plan, c, seed + s, f);
+            CharacteristicGrade g = Grader.grade(plan, f, "study.csv").characteristics().get(0);
+            unstable += g.stability() != null && !g.stability().stable() ? 1 : 0;
+        }
+        return unstable;
+    }
+
     /** The returned file of one study (the fill-in layout; readings written in full precision). */
     static void write(GradingPlan plan, Case c, long seed, Path out) {
         UniformRandomProvider rng = RandomSource.XO_RO_SHI_RO_128_PP.create(seed);
