@@ -214,7 +214,7 @@ public final class PlanNewCommand implements Callable<Integer> {
                 : Expectation.offCentre(expected, expectedCp));
         Optional<Gauge> g = gauge == null ? Optional.empty() : Optional.of(option("--gauge", () -> new Gauge(gauge,
                 resolution == null ? Double.NaN : resolution, gaugeSd == null ? OptionalDouble.empty() : OptionalDouble.of(gaugeSd))));
-        ShapeFamily family = shape == null ? ShapeFamily.NORMAL : option("--shape", () -> ShapeFamily.fromToken(shape));
+        ShapeFamily family = shape == null ? ShapeFamily.NORMAL : Conventions.shape(shape);
         return List.of(option("--characteristic", () -> new Characteristic(characteristicId == null ? "C1" : characteristicId,
                 characteristic, unit, nominal == null ? OptionalDouble.empty() : OptionalDouble.of(nominal), specLimits, g, req, exp,
                 family)));

@@ -88,13 +88,18 @@ public final class PivotalBound {
         return sorted[i] + (h - i) * (sorted[i + 1] - sorted[i]);
     }
 
-    /** {Û₀[], B̂₀[]}: the pivot draws for (family, N, seed). */
+    /** {Û₀[], B̂₀[]}: the {@value #DRAWS} pivot draws for (family, N, seed). */
     static double[][] pivots(ShapeFamily family, int readings, long seed) {
+        return pivots(family, readings, seed, DRAWS);
+    }
+
+    /** {Û₀[], B̂₀[]}: {@code count} draws of the standard estimates for (family, N, seed), kept in a small cache. */
+    static double[][] pivots(ShapeFamily family, int readings, long seed, int count) {
         ShapeFamily key = family == ShapeFamily.WEIBULL ? family : ShapeFamily.NORMAL; // normal and lognormal share
-        String id = key + "/" + readings + "/" + seed;
+        String id = key + "/" + readings + "/" + seed + "/" + count;
         double[][] p = CACHE.get(id);
         if (p == null) {
-            p = key == ShapeFamily.WEIBULL ? extremeValuePivots(readings, seed) : normalPivots(readings, seed);
+            p = key == ShapeFamily.WEIBULL ? extremeValuePivots(readings, seed, count) : normalPivots(readings, seed, count);
             if (CACHE.size() >= CACHE_LIMIT) {
                 CACHE.clear();
             }
@@ -103,28 +108,28 @@ public final class PivotalBound {
         return p;
     }
 
-    private static double[][] normalPivots(int n, long seed) {
+    private static double[][] normalPivots(int n, long seed, int draws) {
         UniformRandomProvider rng = RandomSource.XO_RO_SHI_RO_128_PP.create(seed);
         ZigguratSampler.NormalizedGaussian z = ZigguratSampler.NormalizedGaussian.of(rng);
         // chi-square with N − 1 df = gamma(shape (N − 1)/2, scale 2)
         var chi2 = AhrensDieterMarsagliaTsangGammaSampler.of(rng, (n - 1) / 2.0, 2.0);
-        double[] u0 = new double[DRAWS];
-        double[] b0 = new double[DRAWS];
-        for (int j = 0; j < DRAWS; j++) {
+        double[] u0 = new double[draws];
+        double[] b0 = new double[draws];
+        for (int j = 0; j < draws; j++) {
             u0[j] = z.sample() / Math.sqrt(n);
             b0[j] = Math.sqrt(chi2.sample() / n);
         }
         return new double[][] {u0, b0};
     }
 
-    private static double[][] extremeValuePivots(int n, long seed) {
+    private static double[][] extremeValuePivots(int n, long seed, int draws) {
         UniformRandomProvider rng = RandomSource.XO_RO_SHI_RO_128_PP.create(seed);
         ZigguratSampler.Exponential e = ZigguratSampler.Exponential.of(rng);
-        double[] u0 = new double[DRAWS];
-        double[] b0 = new double[DRAWS];
+        double[] u0 = new double[draws];
+        double[] b0 = new double[draws];
         double[] x = new double[n];
         int j = 0;
-        while (j < DRAWS) {
+        while (j < draws) {
             for (int i = 0; i < n; i++) {
                 x[i] = e.sample();
             }
