@@ -8,7 +8,6 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.OptionalInt;
-import java.util.TreeMap;
 
 /**
  * Study sizes for a one-sided characteristic planned with a lognormal or Weibull shape: for each subgroup size
@@ -52,7 +51,7 @@ public final class ShapeSizing {
             throw new IllegalArgumentException(String.format(Locale.ROOT,
                     "the expected index %.3f is not above the required %.3f: no study size can show it", c1, c0));
         }
-        Map<Integer, Double> cache = new TreeMap<>();
+        Map<Integer, Double> cache = new java.util.concurrent.ConcurrentHashMap<>();
         java.util.function.IntToDoubleFunction power = n -> cache.computeIfAbsent(n,
                 x -> PercentilePower.power(family, parameter, side, c0, c1, confidence, x));
         OptionalInt needed = smallestReadings(power, wanted, Math.max(3, floors.minReadings()));
@@ -60,8 +59,10 @@ public final class ShapeSizing {
         if (needed.isEmpty()) {
             return rows;
         }
+        // the rows' own study sizes, on both cores (each is one simulation; the loop below then mostly reads them)
+        sizes.parallelStream().forEach(n -> power.applyAsDouble(n * firstK(n, needed.getAsInt(), floors)));
         for (int n : sizes) {
-            int k = Math.max(floors.minSubgroups(), Math.max((needed.getAsInt() + n - 1) / n, (floors.minReadings() + n - 1) / n));
+            int k = firstK(n, needed.getAsInt(), floors);
             // the simulated power wobbles by its Monte-Carlo error from one N to the next: step k up until this
             // row's own power reaches the wanted one
             for (int step = 0; step < MAX_STEPS && power.applyAsDouble(n * k) < wanted && n * (k + 1) <= MAX_READINGS; step++) {
@@ -70,6 +71,10 @@ public final class ShapeSizing {
             rows.add(new Row(n, k, n * k, power.applyAsDouble(n * k)));
         }
         return rows;
+    }
+
+    private static int firstK(int n, int readings, Floors floors) {
+        return Math.max(floors.minSubgroups(), Math.max((readings + n - 1) / n, (floors.minReadings() + n - 1) / n));
     }
 
     private static OptionalInt smallestReadings(java.util.function.IntToDoubleFunction power, double wanted, int start) {

@@ -21,7 +21,7 @@ import java.util.Locale;
  */
 public final class PercentilePower {
 
-    static final int GRID = 96;
+    static final int GRID = 48;
     /** The seed of the simulated studies (the grader's pivots keep {@link PivotalBound#DEFAULT_SEED}). */
     public static final long STUDY_SEED = 0x57d1e5L;
 

