@@ -179,6 +179,11 @@ public final class PlanNewCommand implements Callable<Integer> {
             w.println(PlanOptionMessage.RATE_ASSUMED.format(PlanSyntax.number(DEFAULT_RATE)));
         }
         w.println(design.reason());
+        for (Characteristic c : chars) {
+            if (!c.shape().isNormal()) {
+                w.println("warning: " + SizeMessage.SHAPE_SIZED_AS_NORMAL.format(c.id(), c.shape().token(), c.shape().token()));
+            }
+        }
         w.println(PlanOptionMessage.WROTE.format(out, plan.summary()));
         w.flush();
         return 0;

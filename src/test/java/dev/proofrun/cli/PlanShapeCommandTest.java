@@ -45,6 +45,8 @@ class PlanShapeCommandTest {
     void aDeclaredShapeIsWrittenShownAndRead() throws Exception {
         Path file = dir.resolve("p.json");
         assertEquals(0, run(single(file, "--shape", "lognormal")), err.toString());
+        // plan new sizes with the normal model; it says so for a skewed shape
+        assertTrue(out.toString().contains("C1 is planned lognormal, but its power here is the normal model's"), out.toString());
         assertTrue(Files.readString(file).contains("\"shape\": \"lognormal\""), Files.readString(file));
         assertEquals(ShapeFamily.LOGNORMAL, PlanFiles.read(file).characteristics().get(0).shape());
         assertEquals(0, run("plan", "show", file.toString()));
@@ -82,6 +84,9 @@ class PlanShapeCommandTest {
                 err.toString());
         assertEquals(List.of(ShapeFamily.NORMAL, ShapeFamily.WEIBULL),
                 PlanFiles.read(file).characteristics().stream().map(c -> c.shape()).toList());
+        assertEquals(0, run("size", "--characteristics", csv.toString()), err.toString());
+        assertTrue(out.toString().contains("warning: R4 is planned weibull, but its power here is the normal model's"),
+                out.toString());
 
         Files.writeString(csv, "id,name,unit,nominal,lsl,usl,target,expected,shape\n"
                 + "R4,roughness,um,,,0.8,1.33,1.8,skewed\n", StandardCharsets.UTF_8);
