@@ -4,7 +4,10 @@ import dev.proofrun.design.DesignMessage;
 import dev.proofrun.design.Floors;
 import dev.proofrun.design.ShapeSizing;
 import dev.proofrun.stats.IndexKind;
+import dev.proofrun.stats.PercentileIndex;
 import dev.proofrun.stats.PercentilePower;
+import dev.proofrun.stats.ShapeFit;
+import dev.proofrun.stats.ShapeFitter;
 import dev.proofrun.stats.PivotalBound;
 import dev.proofrun.stats.ShapeFamily;
 import dev.proofrun.stats.ShapeSkewness;
@@ -45,12 +48,41 @@ final class ShapeSize {
         this.rows = rows;
     }
 
+    /**
+     * From pilot readings: the declared shape fitted to them gives the shape parameter (hence the skewness) and,
+     * unless {@code c1} is given, the expected index (the pilot's estimate; its own uncertainty is not in the
+     * power, and a note gives its pivotal lower bound).
+     *
+     * @throws UserException naming the pilot file when the shape cannot be fitted to its readings
+     */
+    static ShapeSize fromPilot(ShapeFamily family, dev.proofrun.readings.Readings pilot, SpecLimits limits, IndexKind kind,
+            double c0, Double c1, double confidence, double power, List<Integer> sizes, Floors floors) {
+        double[] x = pilot.subgroups().stream().flatMapToDouble(java.util.Arrays::stream).toArray();
+        ShapeFitter.Outcome o = ShapeFitter.fit(family, x);
+        if (!o.fitted()) {
+            throw new UserException(dev.proofrun.text.Location.file(pilot.file()), OptionMessage.BAD_VALUE, "--pilot",
+                    "the " + family.token() + " shape cannot be fitted to these readings ("
+                    + o.failure().name().toLowerCase(Locale.ROOT).replace('_', ' ') + ")");
+        }
+        ShapeFit fit = o.fit();
+        double parameter = family == ShapeFamily.WEIBULL ? fit.first() : fit.scale();
+        double expected = c1 != null ? c1 : PercentileIndex.of(kind, limits, fit);
+        ShapeSize s = design(family, ShapeSkewness.of(family, parameter), limits.sides(), c0, expected, confidence, power,
+                sizes, floors);
+        double[] b = PivotalBound.bounds(fit, kind, limits, x.length, confidence, PivotalBound.DEFAULT_SEED);
+        s.pilotNote = DesignMessage.PILOT_UNCERTAINTY.format(x.length, kind.symbol(), PercentileIndex.of(kind, limits, fit),
+                100 * confidence, b[0]) + "; the pilot's fit to the " + family.token() + " shape is not checked here";
+        return s;
+    }
+
+    private String pilotNote;
+
     /** @throws UserException for a skewness the shape cannot have, two-sided limits, or c₁ ≤ c₀ */
     static ShapeSize design(ShapeFamily family, Double skewness, SpecLimits.Sides sides, double c0, Double c1,
             double confidence, double power, List<Integer> sizes, Floors floors) {
         if (skewness == null) {
             throw new UserException(OptionMessage.BAD_VALUE, "--shape", "a " + family.token()
-                    + " shape needs --skewness G, the expected skewness of the readings");
+                    + " shape needs --skewness G, the expected skewness of the readings, or --pilot FILE with --lsl/--usl");
         }
         if (c1 == null) {
             throw new UserException(DesignMessage.BAD_EXPECTATION, "--shape needs --expected C1, the expected percentile index");
@@ -94,6 +126,9 @@ final class ShapeSize {
                         r.readings(), r.power());
             }
         }
+        if (pilotNote != null) {
+            out.println("note: " + pilotNote);
+        }
         out.println();
         out.printf(Locale.ROOT, "Power: the chance that the grader's lower bound (generalized pivotal, seed %d) reaches the"
                 + " requirement, simulated with seed %d (%d studies, standard error at most %.3f). It does not count the"
@@ -126,6 +161,7 @@ final class ShapeSize {
         m.put("confidence", confidence);
         m.put("expected", c1);
         m.put("wantedPower", power);
+        m.put("pilot", pilotNote);
         m.put("boundSeed", PivotalBound.DEFAULT_SEED);
         m.put("studySeed", PercentilePower.STUDY_SEED);
         m.put("rows", rows.stream().map(r -> {

@@ -147,10 +147,21 @@ public final class SizeCommand implements Callable<Integer> {
         }
         ShapeFamily family = shape == null ? ShapeFamily.NORMAL : Conventions.shape(shape);
         if (!family.isNormal()) {
-            ShapeSize sized = ShapeSize.design(family, skewness, Conventions.sides(sides, lsl, usl), target, expected,
-                    confidence, power, subgroupSizes == null || subgroupSizes.isEmpty()
-                            ? IntStream.rangeClosed(1, 10).boxed().toList() : subgroupSizes,
-                    wrap(() -> new Floors(minSubgroups, minReadings)));
+            List<Integer> sizes = subgroupSizes == null || subgroupSizes.isEmpty()
+                    ? IntStream.rangeClosed(1, 10).boxed().toList() : subgroupSizes;
+            Floors floors = wrap(() -> new Floors(minSubgroups, minReadings));
+            ShapeSize sized;
+            if (pilot != null && skewness == null) {
+                if (lsl == null && usl == null) {
+                    throw new UserException(DesignMessage.BAD_EXPECTATION, "--pilot needs the specification limits --lsl/--usl");
+                }
+                sized = ShapeSize.fromPilot(family, dev.proofrun.readings.ReadingsCsv.read(pilot, pilotSubgroupSize == null
+                        ? OptionalInt.empty() : OptionalInt.of(pilotSubgroupSize)), Conventions.limits(lsl, usl),
+                        Conventions.index(index), target, expected, confidence, power, sizes, floors);
+            } else {
+                sized = ShapeSize.design(family, skewness, Conventions.sides(sides, lsl, usl), target, expected,
+                        confidence, power, sizes, floors);
+            }
             if (json) {
                 out.println(new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT).writeValueAsString(sized.json()));
             } else {
