@@ -64,12 +64,13 @@ public final class GradeHarness {
         List<Reason> reasons = new ArrayList<>();
         Stability st = StabilityJudge.judge(dev.proofrun.control.ChartKind.XBAR_R, c.subgroups(), c.slots(), reasons);
         long d = cpu();
-        Shape sh = ShapeJudge.judge(c.subgroups(), plan.characteristics().get(0).resolution(), reasons);
+        GradedCharacteristic gc0 = plan.characteristics().get(0);
+        Shape sh = ShapeJudge.judge(c.subgroups(), c.slots(), gc0.resolution(), gc0.shape(), gc0.limits(), reasons);
         long e = cpu();
         dev.proofrun.capability.CapabilityAnalysis.withoutNormality(c.subgroups(), plan.characteristics().get(0).limits(), 10.0,
                 plan.design().sigmaMethod(), 0.95, plan.design().boundMethod());
         long f = cpu();
-        JudgedIndex j = CapabilityJudge.judge(plan.characteristics().get(0), plan.design(), c.subgroups(), sh);
+        JudgedIndex j = CapabilityJudge.judge(gc0, plan.design(), c.subgroups());
         j.lower(0.95);
         long g = cpu();
         System.out.printf("main-thread CPU: read %.0f, finish %.0f, stability %.0f, shape %.0f, capability figures %.0f, judged %.0f ms%n",

@@ -41,6 +41,11 @@ final class Conventions {
         return parse("--bound", token, BoundMethod::fromToken);
     }
 
+    /** @throws UserException naming {@code --shape} for an unknown shape, with the names */
+    static dev.proofrun.stats.ShapeFamily shape(String token) {
+        return parse("--shape", token, dev.proofrun.stats.ShapeFamily::fromToken);
+    }
+
     /** @throws UserException naming {@code --spacing} for an unknown spacing */
     static Spacing spacing(String token) {
         return parse("--spacing", token, Spacing::fromToken);

@@ -81,8 +81,10 @@ final class GradeJson {
             normality.put("andersonDarling", finite(g.shape().andersonDarling()));
             normality.put("pValue", finite(g.shape().pValue()));
             normality.put("model", g.shape().model().id());
+            normality.put("fits", g.shape().modelFits());
         }
         m.put("normality", normality);
+        m.put("judged", judged(g.judged()));
         m.put("verdict", g.verdict().id());
         List<String> reasons = new ArrayList<>();
         for (Reason reason : g.reasons()) {
@@ -90,6 +92,25 @@ final class GradeJson {
         }
         m.put("reasons", reasons);
         m.put("additionalSubgroups", g.additionalSubgroups().isPresent() ? g.additionalSubgroups().getAsInt() : null);
+        return m;
+    }
+
+    /** The required index as the verdict judged it: the model and method named, the seed of pivotal bounds. */
+    private static Map<String, Object> judged(dev.proofrun.grade.IndexEvidence e) {
+        if (e == null) {
+            return null;
+        }
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("index", e.index().token());
+        m.put("model", e.model().id());
+        m.put("method", e.method().id());
+        m.put("estimate", finite(e.estimate()));
+        m.put("lower", finite(e.lower()));
+        m.put("upper", finite(e.upper()));
+        m.put("required", e.required());
+        m.put("confidence", e.confidence());
+        m.put("expectedPpm", finite(e.expectedPpm()));
+        m.put("seed", e.seed());
         return m;
     }
 

@@ -18,6 +18,7 @@ import dev.proofrun.schedule.ProductionRate;
 import dev.proofrun.schedule.Spacing;
 import dev.proofrun.schedule.StudySpan;
 import dev.proofrun.stats.IndexKind;
+import dev.proofrun.stats.ShapeFamily;
 import dev.proofrun.stats.SpecLimits;
 import dev.proofrun.text.Location;
 import dev.proofrun.text.UserException;
@@ -82,6 +83,9 @@ public final class PlanNewCommand implements Callable<Integer> {
     SpecLimitOptions limits;
     @Option(names = "--nominal", paramLabel = "X", description = "Nominal value.")
     Double nominal;
+    @Option(names = "--shape", paramLabel = "NAME",
+            description = "The distribution the readings are planned to follow: normal (default), lognormal or weibull.")
+    String shape;
     @Option(names = "--gauge", paramLabel = "NAME", description = "Gauge name (with --resolution).")
     String gauge;
     @Option(names = "--resolution", paramLabel = "R", description = "Gauge resolution.")
@@ -175,6 +179,11 @@ public final class PlanNewCommand implements Callable<Integer> {
             w.println(PlanOptionMessage.RATE_ASSUMED.format(PlanSyntax.number(DEFAULT_RATE)));
         }
         w.println(design.reason());
+        for (Characteristic c : chars) {
+            if (!c.shape().isNormal()) {
+                w.println("warning: " + SizeMessage.SHAPE_SIZED_AS_NORMAL.format(c.id(), c.shape().token(), c.shape().token()));
+            }
+        }
         w.println(PlanOptionMessage.WROTE.format(out, plan.summary()));
         w.flush();
         return 0;
@@ -196,7 +205,7 @@ public final class PlanNewCommand implements Callable<Integer> {
         IndexKind kind = Conventions.index(index);
         Conventions.confidence(confidence);
         if (characteristicsCsv != null) {
-            if (characteristic != null || target != null || expected != null || limits.given()) {
+            if (characteristic != null || target != null || expected != null || shape != null || limits.given()) {
                 throw new UserException(PlanOptionMessage.BOTH_CHARACTERISTIC_FORMS);
             }
             return CharacteristicsCsv.read(characteristicsCsv, kind, confidence);
@@ -210,8 +219,10 @@ public final class PlanNewCommand implements Callable<Integer> {
                 : Expectation.offCentre(expected, expectedCp));
         Optional<Gauge> g = gauge == null ? Optional.empty() : Optional.of(option("--gauge", () -> new Gauge(gauge,
                 resolution == null ? Double.NaN : resolution, gaugeSd == null ? OptionalDouble.empty() : OptionalDouble.of(gaugeSd))));
+        ShapeFamily family = shape == null ? ShapeFamily.NORMAL : Conventions.shape(shape);
         return List.of(option("--characteristic", () -> new Characteristic(characteristicId == null ? "C1" : characteristicId,
-                characteristic, unit, nominal == null ? OptionalDouble.empty() : OptionalDouble.of(nominal), specLimits, g, req, exp)));
+                characteristic, unit, nominal == null ? OptionalDouble.empty() : OptionalDouble.of(nominal), specLimits, g, req, exp,
+                family)));
     }
 
     private ProductionCalendar calendar() {

@@ -66,6 +66,11 @@ final class SharedSize {
         }
         DesignRequest first = request.apply(chars.get(0));
         List<String> warnings = new ArrayList<>();
+        for (Characteristic c : chars) {
+            if (!c.shape().isNormal()) {
+                warnings.add(SizeMessage.SHAPE_SIZED_AS_NORMAL.format(c.id(), c.shape().token(), c.shape().token()));
+            }
+        }
         for (int n : first.subgroupSizes()) {
             if (designs.stream().noneMatch(d -> d.subgroupSize() == n)) {
                 warnings.add(SizeMessage.SHARED_LEFT_OUT.format(n, first.power(), StudyDesigner.MAX_READINGS));

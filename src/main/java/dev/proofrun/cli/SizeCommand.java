@@ -17,6 +17,7 @@ import dev.proofrun.design.StudyDesigner;
 import dev.proofrun.plan.Characteristic;
 import dev.proofrun.stats.BoundMethod;
 import dev.proofrun.stats.IndexKind;
+import dev.proofrun.stats.ShapeFamily;
 import dev.proofrun.stats.SigmaMethod;
 import dev.proofrun.stats.SpecLimits;
 import dev.proofrun.text.UserException;
@@ -115,6 +116,13 @@ public final class SizeCommand implements Callable<Integer> {
                     + " reads: one shared design (--index and --confidence are the defaults for empty cells).")
     java.nio.file.Path characteristics;
 
+    @Option(names = "--shape", paramLabel = "normal|lognormal|weibull",
+            description = "The shape the readings are planned to follow (default normal); lognormal and weibull need --skewness.")
+    String shape;
+
+    @Option(names = "--skewness", paramLabel = "G", description = "The expected skewness of the readings (with --shape).")
+    Double skewness;
+
     @Option(names = "--json", description = "Print one JSON object.")
     boolean json;
 
@@ -136,6 +144,34 @@ public final class SizeCommand implements Callable<Integer> {
         }
         if (target == null) {
             throw new UserException(SizeMessage.TARGET_NEEDED);
+        }
+        ShapeFamily family = shape == null ? ShapeFamily.NORMAL : Conventions.shape(shape);
+        if (!family.isNormal()) {
+            List<Integer> sizes = subgroupSizes == null || subgroupSizes.isEmpty()
+                    ? IntStream.rangeClosed(1, 10).boxed().toList() : subgroupSizes;
+            Floors floors = wrap(() -> new Floors(minSubgroups, minReadings));
+            ShapeSize sized;
+            if (pilot != null && skewness == null) {
+                if (lsl == null && usl == null) {
+                    throw new UserException(DesignMessage.BAD_EXPECTATION, "--pilot needs the specification limits --lsl/--usl");
+                }
+                sized = ShapeSize.fromPilot(family, dev.proofrun.readings.ReadingsCsv.read(pilot, pilotSubgroupSize == null
+                        ? OptionalInt.empty() : OptionalInt.of(pilotSubgroupSize)), Conventions.limits(lsl, usl),
+                        Conventions.index(index), target, expected, confidence, power, sizes, floors);
+            } else {
+                sized = ShapeSize.design(family, skewness, Conventions.sides(sides, lsl, usl), target, expected,
+                        confidence, power, sizes, floors);
+            }
+            if (json) {
+                out.println(new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT).writeValueAsString(sized.json()));
+            } else {
+                sized.print(out);
+            }
+            out.flush();
+            return 0;
+        }
+        if (skewness != null) {
+            throw new UserException(OptionMessage.BAD_VALUE, "--skewness", "only with --shape lognormal or weibull");
         }
         DesignRequest request = request();
         DesignTable table = StudyDesigner.design(request);

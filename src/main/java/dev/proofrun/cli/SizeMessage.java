@@ -15,6 +15,11 @@ public enum SizeMessage implements MessageKey {
     SHARED_ALL_TOGETHER("The part needs all %d demonstrated in this one study: if their readings are independent,"
             + " the chance of that is about %.3f (the product of their powers); correlated characteristics move it."
             + " To raise it, ask each characteristic for more power."),
+    SHAPE_SIZED_AS_NORMAL("%s is planned %s, but its power here is the normal model's; size it alone with"
+            + " 'size --shape %s --skewness G --spec upper|lower' and use the larger study"),
+    SHAPE_CAUTION("A demonstrated index is a statistical statement under assumptions (stability, independence, readings"
+            + " of the planned shape, a capable gauge). It does not replace the customer's requirements, applicable"
+            + " standards or local codes, licensed practice, or the extra controls that safety-critical characteristics need."),
     SHARED_LEFT_OUT("subgroups of %d cannot give every characteristic a power of %.3f within %d readings; left out"
             + " of the table");
 

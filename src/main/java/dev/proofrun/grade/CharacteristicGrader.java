@@ -6,6 +6,7 @@ import dev.proofrun.control.ChartKind;
 import dev.proofrun.text.UserException;
 import dev.proofrun.design.Design;
 import dev.proofrun.design.Requirement;
+import dev.proofrun.stats.PercentileIndex;
 import java.time.Duration;
 import java.util.ArrayList;
 import java.util.List;
@@ -19,9 +20,9 @@ import java.util.concurrent.FutureTask;
  * verdict with its reasons in that order.
  *
  * <p>Verdict rules (first that applies): not valid when the shortfall exceeds the plan's allowance, when
- * fewer than 2 subgroups are usable, when the process is unstable ({@link StabilityJudge}), when no
- * distribution model fits ({@link ShapeJudge}) or when the required index does not exist for the
- * (transformed) limits; not demonstrated when the estimate is below c₀; demonstrated when the lower bound is
+ * fewer than 2 subgroups are usable, when the process is unstable ({@link StabilityJudge}), when the shape the
+ * plan declared does not fit ({@link ShapeJudge}) or when the required index does not exist for the limits
+ * (normal model: {@link CapabilityJudge}; lognormal and Weibull: the percentile index, {@link PercentileJudge}); not demonstrated when the estimate is below c₀; demonstrated when the lower bound is
  * at or above c₀; otherwise inconclusive, with about how many more subgroups would settle it. When the
  * process is unstable the capability is still computed and shown, labelled as describing the past.
  */
@@ -63,24 +64,38 @@ final class CharacteristicGrader {
         // the shape step (a sort of all readings) runs beside the stability step; each is seeded on its own,
         // so the result does not depend on the order, and the reasons keep the order of the steps
         List<Reason> shapeReasons = new ArrayList<>();
-        FutureTask<Shape> shapeTask = new FutureTask<>(() -> ShapeJudge.judge(subgroups, gc.resolution(), shapeReasons));
-        if ((long) subgroups.size() * subgroups.get(0).length >= PARALLEL_READINGS) {
+        FutureTask<Shape> shapeTask = new FutureTask<>(() -> ShapeJudge.judge(subgroups, data.slots(), gc.resolution(), gc.shape(),
+                gc.limits(), shapeReasons));
+        boolean declaredSkew = !gc.shape().isNormal();
+        if (!declaredSkew && (long) subgroups.size() * subgroups.get(0).length >= PARALLEL_READINGS) {
             Thread worker = new Thread(shapeTask, "proofrun-shape-" + gc.id());
             worker.setDaemon(true);
             worker.start();
         } else {
             shapeTask.run();
         }
-        Stability stability = StabilityJudge.judge(ChartKind.forMethod(design.sigmaMethod()), subgroups, data.slots(), reasons);
+        // under a declared skewed shape the charts look at the readings on the normal scale of the fitted model,
+        // so that the chance rate of the run rules is the one they were built for (NormalScores)
+        List<double[]> charted = declaredSkew ? NormalScores.of(join(shapeTask), subgroups, reasons) : subgroups;
+        Stability stability = StabilityJudge.judge(ChartKind.forMethod(design.sigmaMethod()), charted, data.slots(), reasons);
         valid &= stability.stable();
         CapabilityResult figures = figures(gc, design, subgroups);
         Shape shape = join(shapeTask);
         reasons.addAll(shapeReasons);
         valid &= shape.modelFits();
 
-        JudgedIndex judged = shape.modelFits() || shape.normal() ? CapabilityJudge.judge(gc, design, subgroups, shape) : null;
+        JudgedIndex judged = null;
+        IndexEvidence ev = null;
+        int readings = subgroups.size() * subgroups.get(0).length;
+        if (shape.modelFits() && shape.family().isNormal()) {
+            judged = CapabilityJudge.judge(gc, design, subgroups);
+            ev = judged == null ? null : judged.evidence(req, shape.model()).scaled(shape.tailFactor(),
+                    PercentileIndex.expectedPpm(gc.limits(), shape.fit()));
+        } else if (shape.modelFits()) {
+            ev = PercentileJudge.judge(gc, shape, readings, reasons);
+        }
         String symbol = req.index().symbol();
-        if (judged == null) {
+        if (ev == null) {
             if (shape.modelFits()) {
                 reasons.add(new Reason(Step.CAPABILITY, true, GradeMessage.REASON_INDEX_UNDEFINED.format(symbol)));
             }
@@ -89,7 +104,6 @@ final class CharacteristicGrader {
         }
         double conf = req.confidence();
         double c0 = req.minimum();
-        IndexEvidence ev = judged.evidence(req, shape.model());
         double percent = 100 * conf;
         Verdict verdict;
         OptionalInt more = OptionalInt.empty();
@@ -111,7 +125,9 @@ final class CharacteristicGrader {
             verdict = Verdict.INCONCLUSIVE;
             reasons.add(new Reason(Step.CAPABILITY, true,
                     GradeMessage.REASON_INCONCLUSIVE.format(symbol, ev.estimate(), c0, percent, ev.lower())));
-            more = CapabilityJudge.additionalSubgroups(judged, design, subgroups.size(), c0, conf);
+            more = judged != null && shape.tailFactor() == 1
+                    ? CapabilityJudge.additionalSubgroups(judged, design, subgroups.size(), c0, conf)
+                    : PercentileJudge.additionalSubgroups(ev, design.subgroupSize(), subgroups.size());
             if (more.isPresent()) {
                 reasons.add(new Reason(Step.CAPABILITY, false,
                         GradeMessage.REASON_MORE_SUBGROUPS.format(more.getAsInt(), span(interval.multipliedBy(more.getAsInt())))));

@@ -1,6 +1,7 @@
 package dev.proofrun.grade;
 
 import dev.proofrun.design.Requirement;
+import dev.proofrun.stats.ShapeFamily;
 import dev.proofrun.stats.SpecLimits;
 import java.util.Locale;
 import java.util.Objects;
@@ -15,15 +16,23 @@ import java.util.Objects;
  * @param nominal     the target for Cpm, or {@code null} (then the midpoint of two-sided limits)
  * @param resolution  the gauge's resolution (smallest step it shows), or 0 when not stated
  * @param requirement what must be shown
+ * @param shape       the distribution model the plan declares for the readings
  */
 public record GradedCharacteristic(String id, String name, String unit, SpecLimits limits, Double nominal,
-        double resolution, Requirement requirement) {
+        double resolution, Requirement requirement, ShapeFamily shape) {
+
+    /** A characteristic planned with the normal model. */
+    public GradedCharacteristic(String id, String name, String unit, SpecLimits limits, Double nominal,
+            double resolution, Requirement requirement) {
+        this(id, name, unit, limits, nominal, resolution, requirement, ShapeFamily.NORMAL);
+    }
 
     /** @throws IllegalArgumentException if the resolution is negative or not finite */
     public GradedCharacteristic {
         Objects.requireNonNull(id, "id");
         Objects.requireNonNull(limits, "limits");
         Objects.requireNonNull(requirement, "requirement");
+        shape = shape == null ? ShapeFamily.NORMAL : shape;
         if (!(resolution >= 0) || !Double.isFinite(resolution)) {
             throw new IllegalArgumentException(String.format(Locale.ROOT, "resolution must be zero or positive: %s", resolution));
         }

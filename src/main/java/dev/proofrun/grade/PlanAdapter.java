@@ -23,7 +23,7 @@ public final class PlanAdapter {
         for (Characteristic c : plan.characteristics()) {
             double resolution = c.gauge().map(Gauge::resolution).orElse(0.0);
             cs.add(new GradedCharacteristic(c.id(), c.name(), c.unit(), c.limits(),
-                    c.nominal().isPresent() ? c.nominal().getAsDouble() : null, resolution, c.requirement()));
+                    c.nominal().isPresent() ? c.nominal().getAsDouble() : null, resolution, c.requirement(), c.shape()));
         }
         List<PlannedSlot> slots = new ArrayList<>();
         for (Slot s : plan.schedule().slots()) {

@@ -1,22 +1,20 @@
 package dev.proofrun.grade;
 
 /**
- * The distribution model under which the capability is computed.
+ * The distribution model under which the capability is computed: the plan's declared
+ * {@link dev.proofrun.stats.ShapeFamily}, as the result and the report name it.
  *
  * <ul>
- * <li>{@link #NORMAL}: the readings as they are.</li>
- * <li>{@link #BOX_COX}: y = (x^λ − 1)/λ (λ ≠ 0), λ by maximum likelihood (Box &amp; Cox 1964, JRSS B
- *     26:211–252); limits transformed the same way, indices and bounds computed on the normal scale.</li>
- * <li>{@link #LOGNORMAL}: log x normal, fitted by maximum likelihood; indices by the percentile method
- *     (ISO 22514-2; Clements 1989, Quality Progress 22(9):95–100), which for the lognormal equal the normal
- *     indices of log x with log-limits in the Pp family's sense.</li>
- * <li>{@link #WEIBULL}: two-parameter Weibull fitted by maximum likelihood; indices by the percentile method:
- *     Ppu = (USL − X₅₀)/(X₉₉.₈₆₅ − X₅₀), Ppl = (X₅₀ − LSL)/(X₅₀ − X₀.₁₃₅), Pp = (USL − LSL)/(X₉₉.₈₆₅ − X₀.₁₃₅).</li>
+ * <li>{@link #NORMAL}: the readings as they are; normal-theory indices and exact bounds.</li>
+ * <li>{@link #LOGNORMAL}: ln x normal, fitted by maximum likelihood.</li>
+ * <li>{@link #WEIBULL}: two-parameter Weibull fitted by maximum likelihood.</li>
  * </ul>
+ * Under the lognormal and Weibull models the index is the percentile index of ISO 22514-2 (Clements 1989,
+ * Quality Progress 22(9):95–100): Ppu = (USL − X₅₀)/(X₉₉.₈₆₅ − X₅₀), Ppl = (X₅₀ − LSL)/(X₅₀ − X₀.₁₃₅),
+ * Pp = (USL − LSL)/(X₉₉.₈₆₅ − X₀.₁₃₅).
  */
 public enum ShapeModel {
     NORMAL("normal"),
-    BOX_COX("box-cox"),
     LOGNORMAL("lognormal"),
     WEIBULL("weibull");
 
@@ -28,5 +26,17 @@ public enum ShapeModel {
 
     public String id() {
         return id;
+    }
+
+    /** The model of a declared shape. */
+    public static ShapeModel of(dev.proofrun.stats.ShapeFamily family) {
+        switch (family) {
+            case LOGNORMAL:
+                return LOGNORMAL;
+            case WEIBULL:
+                return WEIBULL;
+            default:
+                return NORMAL;
+        }
     }
 }

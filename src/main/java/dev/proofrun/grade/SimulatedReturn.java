@@ -35,7 +35,7 @@ public final class SimulatedReturn {
      * @param sd        the within-subgroup standard deviation
      * @param stepAt    fraction of the subgroups after which the mean steps (1 = never)
      * @param step      the size of the step
-     * @param lognormal draw exp(N(ln mean, sd/mean)) instead of N(mean, sd) — a skewed characteristic
+     * @param lognormal draw exp(N(ln mean, sd)) — sd then the σ of ln x — instead of N(mean, sd): a skewed characteristic
      */
     public record Process(double mean, double sd, double stepAt, double step, boolean lognormal) {
 

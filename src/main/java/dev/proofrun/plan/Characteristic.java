@@ -3,6 +3,7 @@ package dev.proofrun.plan;
 import dev.proofrun.design.Expectation;
 import dev.proofrun.design.Requirement;
 import dev.proofrun.stats.IndexKind;
+import dev.proofrun.stats.ShapeFamily;
 import dev.proofrun.stats.SpecLimits;
 import java.util.Locale;
 import java.util.Optional;
@@ -19,9 +20,22 @@ import java.util.OptionalDouble;
  * @param gauge       the measuring instrument, if named
  * @param requirement what the study must show for it
  * @param expectation what the engineer believes of the process
+ * @param shape       the distribution model the readings are planned to follow ({@link ShapeFamily#NORMAL}
+ *                    unless declared); the grader fits only this model
  */
 public record Characteristic(String id, String name, String unit, OptionalDouble nominal, SpecLimits limits,
-        Optional<Gauge> gauge, Requirement requirement, Expectation expectation) {
+        Optional<Gauge> gauge, Requirement requirement, Expectation expectation, ShapeFamily shape) {
+
+    /** A characteristic planned with the normal model. */
+    public Characteristic(String id, String name, String unit, OptionalDouble nominal, SpecLimits limits,
+            Optional<Gauge> gauge, Requirement requirement, Expectation expectation) {
+        this(id, name, unit, nominal, limits, gauge, requirement, expectation, ShapeFamily.NORMAL);
+    }
+
+    /** The same characteristic planned with another shape. */
+    public Characteristic withShape(ShapeFamily newShape) {
+        return new Characteristic(id, name, unit, nominal, limits, gauge, requirement, expectation, newShape);
+    }
 
     /**
      * @throws IllegalArgumentException if id or name are missing or the id has other characters
@@ -41,6 +55,7 @@ public record Characteristic(String id, String name, String unit, OptionalDouble
         unit = unit == null ? "" : unit;
         nominal = nominal == null ? OptionalDouble.empty() : nominal;
         gauge = gauge == null ? Optional.empty() : gauge;
+        shape = shape == null ? ShapeFamily.NORMAL : shape;
         requireLimitsFor(requirement.index(), limits);
     }
 

@@ -3,6 +3,7 @@ package dev.proofrun.plan;
 import dev.proofrun.design.Expectation;
 import dev.proofrun.design.Requirement;
 import dev.proofrun.stats.IndexKind;
+import dev.proofrun.stats.ShapeFamily;
 import dev.proofrun.stats.SpecLimits;
 import dev.proofrun.text.Location;
 import dev.proofrun.text.UserException;
@@ -27,8 +28,9 @@ import org.apache.commons.csv.CSVRecord;
 /**
  * Many characteristics at once from a CSV file with a header row. Columns (names case-insensitive, any
  * order): {@code id, name, unit, nominal, lsl, usl, target, expected}, and optionally {@code index},
- * {@code confidence}, {@code expected_cp}. Empty cells mean "none" for nominal/lsl/usl/expected_cp and
- * "the command's default" for index and confidence. Numbers use a decimal point; a row with more cells than
+ * {@code confidence}, {@code expected_cp}, {@code shape}. Empty cells mean "none" for nominal/lsl/usl/expected_cp,
+ * "the command's default" for index and confidence, and "normal" for shape (the names are those of
+ * {@link ShapeFamily}; an unknown name is refused with the list). Numbers use a decimal point; a row with more cells than
  * the header (a decimal comma splits a number) is refused.
  */
 public final class CharacteristicsCsv {
@@ -74,11 +76,12 @@ public final class CharacteristicsCsv {
                 IndexKind index = c.has("index") ? c.parse("index", IndexKind::fromToken) : defaultIndex;
                 double confidence = c.has("confidence") ? c.number("confidence").getAsDouble() : defaultConfidence;
                 OptionalDouble expectedCp = c.number("expected_cp");
+                ShapeFamily shape = c.has("shape") ? c.parse("shape", ShapeFamily::fromToken) : ShapeFamily.NORMAL;
                 SpecLimits limits = c.build("lsl", () -> SpecLimits.of(boxed(c.number("lsl")), boxed(c.number("usl"))));
                 Requirement req = c.build("target", () -> Requirement.of(index, c.required("target"), confidence));
                 Expectation exp = c.build("expected", () -> new Expectation(c.required("expected"), expectedCp));
                 out.add(c.build("id", () -> new Characteristic(id, c.text("name", true), c.text("unit", false),
-                        c.number("nominal"), limits, Optional.empty(), req, exp)));
+                        c.number("nominal"), limits, Optional.empty(), req, exp, shape)));
             }
             if (out.isEmpty()) {
                 throw new UserException(Location.file(name), PlanMessage.CSV_NO_ROWS);

@@ -10,6 +10,7 @@ import dev.proofrun.schedule.Shift;
 import dev.proofrun.schedule.Spacing;
 import dev.proofrun.schedule.StudySpan;
 import dev.proofrun.stats.IndexKind;
+import dev.proofrun.stats.ShapeFamily;
 import dev.proofrun.stats.SpecLimits;
 import java.time.DayOfWeek;
 import java.time.LocalDate;
@@ -24,7 +25,8 @@ import java.util.TreeSet;
 /**
  * The invented demo study saved as {@code plans/demo-valve-body.json}: a valve body machined at an
  * invented plant (Kesselried works of an invented pump maker) on three shifts, with three characteristics —
- * a two-sided bore diameter, an upper-only surface roughness and a lower-only push-out force. The span
+ * a two-sided bore diameter, an upper-only surface roughness (planned lognormal: bounded at zero and skewed)
+ * and a lower-only push-out force. The span
  * crosses the Easter holidays and the spring daylight-saving change of 2027 in Europe/Berlin. All numbers
  * are made up for the demo; none comes from a real part.
  */
@@ -46,7 +48,7 @@ public final class DemoPlan {
                 new Characteristic("R4", "surface roughness Ra", "µm", OptionalDouble.empty(),
                         SpecLimits.upperOnly(0.8),
                         Optional.of(Gauge.of("stylus profilometer", 0.01)),
-                        Requirement.of(IndexKind.CPK, 1.33, 0.95), Expectation.centred(1.8)),
+                        Requirement.of(IndexKind.CPK, 1.33, 0.95), Expectation.centred(1.8), ShapeFamily.LOGNORMAL),
                 new Characteristic("F7", "seat push-out force", "kN", OptionalDouble.empty(),
                         SpecLimits.lowerOnly(4.5),
                         Optional.of(Gauge.of("press force monitor", 0.01)),

@@ -13,6 +13,7 @@ import dev.proofrun.schedule.Spacing;
 import dev.proofrun.schedule.StudySpan;
 import dev.proofrun.stats.BoundMethod;
 import dev.proofrun.stats.IndexKind;
+import dev.proofrun.stats.ShapeFamily;
 import dev.proofrun.stats.SigmaMethod;
 import dev.proofrun.stats.SpecLimits;
 import dev.proofrun.text.Location;
@@ -55,7 +56,8 @@ final class PlanCodec {
             PlanJson.GaugeJ gauge = c.gauge().map(g -> new PlanJson.GaugeJ(g.name(), g.resolution(), boxed(g.sd())))
                     .orElse(null);
             chars.add(new PlanJson.CharacteristicJ(c.id(), c.name(), c.unit(), boxed(c.nominal()),
-                    boxed(c.limits().lower()), boxed(c.limits().upper()), gauge,
+                    boxed(c.limits().lower()), boxed(c.limits().upper()),
+                    c.shape().isNormal() ? null : c.shape().token(), gauge,
                     new PlanJson.RequirementJ(c.requirement().index().token(), c.requirement().minimum(),
                             c.requirement().confidence()),
                     new PlanJson.ExpectationJ(c.expectation().index(), boxed(c.expectation().potential()))));
@@ -152,9 +154,12 @@ final class PlanCodec {
         PlanJson.ExpectationJ e = req(c.expectation(), path + ".expectation");
         Expectation expectation = value(path + ".expectation", () -> new Expectation(req(e.index(), path + ".expectation.index"),
                 e.potential() == null ? OptionalDouble.empty() : OptionalDouble.of(e.potential())));
+        // the shape is left out of the file when normal, so plans written before it existed keep their revision
+        ShapeFamily shape = c.shape() == null ? ShapeFamily.NORMAL
+                : value(path + ".shape", () -> ShapeFamily.fromToken(c.shape()));
         return value(path, () -> new Characteristic(req(c.id(), path + ".id"), req(c.name(), path + ".name"), c.unit(),
                 c.nominal() == null ? OptionalDouble.empty() : OptionalDouble.of(c.nominal()), limits, gauge,
-                requirement, expectation));
+                requirement, expectation, shape));
     }
 
     private ProductionCalendar calendar(PlanJson.CalendarJ c) {

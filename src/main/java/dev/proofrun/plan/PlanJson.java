@@ -42,9 +42,9 @@ final class PlanJson {
     }
 
     @JsonInclude(JsonInclude.Include.NON_NULL)
-    @JsonPropertyOrder({"id", "name", "unit", "nominal", "lsl", "usl", "gauge", "requirement", "expectation"})
-    record CharacteristicJ(String id, String name, String unit, Double nominal, Double lsl, Double usl, GaugeJ gauge,
-            RequirementJ requirement, ExpectationJ expectation) {
+    @JsonPropertyOrder({"id", "name", "unit", "nominal", "lsl", "usl", "shape", "gauge", "requirement", "expectation"})
+    record CharacteristicJ(String id, String name, String unit, Double nominal, Double lsl, Double usl, String shape,
+            GaugeJ gauge, RequirementJ requirement, ExpectationJ expectation) {
     }
 
     @JsonInclude(JsonInclude.Include.NON_NULL)

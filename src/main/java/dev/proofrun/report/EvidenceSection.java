@@ -91,18 +91,17 @@ final class EvidenceSection {
             h.add(Block.space(4));
             h.add(new ProbabilityPlotBlock(x, curve, "Probability plot under the " + curve.model().id() + " model", regular, bold));
             h.add(Block.space(4));
-            TextTable t = TextTable.of(List.of(Column.left("Model", 2), Column.right("parameter 1", 2),
-                    Column.right("parameter 2", 2), Column.right("AIC", 2), Column.right("A\u00b2", 1.5f),
-                    Column.left("fits at 5 %", 1.5f)), regular, bold, 8);
+            TextTable t = TextTable.of(List.of(Column.left("Planned model", 2), Column.right("parameter 1", 2),
+                    Column.right("parameter 2", 2), Column.right("A\u00b2", 1.5f), Column.left("fits at 1 %", 2)),
+                    regular, bold, 8);
             h.add(t.header());
-            h.add(t.row("normal (A\u00b2 test)", Fmt.value(mean(x)), Fmt.value(sd(x)), Fmt.NONE,
-                    Fmt.fixed(sh.andersonDarling(), 3), (sh.normal() ? "yes" : "no") + ", p " + Fmt.p(sh.pValue())));
             for (ModelFit f : sh.fits()) {
-                h.add(t.row(f.model().id(), Fmt.value(f.first()), Fmt.value(f.second()), Fmt.fixed(f.aic(), 1),
-                        Fmt.fixed(f.andersonDarling(), 3), f.fits() ? "yes" : "no"));
+                h.add(t.row(f.model().id(), Fmt.value(f.first()), Fmt.value(f.second()),
+                        Fmt.fixed(sh.andersonDarling(), 3), (f.fits() ? "yes" : "no")
+                                + (Double.isNaN(sh.pValue()) ? "" : ", p " + Fmt.p(sh.pValue()))));
             }
-            h.add(Paragraph.of("Capability is computed under the " + sh.model().id() + " model"
-                    + (sh.modelFits() ? "." : ", which does not fit well either."), regular, 8.5f));
+            h.add(Paragraph.of("The plan declares the " + sh.family().token() + " shape; only that model is fitted"
+                    + (sh.modelFits() ? "." : ", and it does not fit these readings."), regular, 8.5f));
         }
         step(flow, "3  Shape: is the distribution model fair?", g, Step.SHAPE, h);
 
@@ -208,7 +207,7 @@ final class EvidenceSection {
     private static ModelCurve curve(Shape sh, double[] x) {
         for (ModelFit f : sh.fits()) {
             if (f.model() == sh.model()) {
-                return ModelCurve.of(f, x);
+                return ModelCurve.of(f);
             }
         }
         return ModelCurve.normal(mean(x), sd(x));

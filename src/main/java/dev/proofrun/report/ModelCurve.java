@@ -10,8 +10,6 @@ import org.apache.commons.statistics.distribution.NormalDistribution;
  *
  * <ul>
  * <li>normal: f(x) = φ((x−μ)/σ)/σ; plot x against Φ⁻¹(p).</li>
- * <li>Box–Cox: y = (x^λ − 1)/λ (ln x at λ = 0) is normal(μ, σ); f(x) = φ((y−μ)/σ)/σ · x^(λ−1); plot y
- *     against Φ⁻¹(p).</li>
  * <li>lognormal: ln x normal(μ, σ); f(x) = φ((ln x − μ)/σ)/(σx); plot ln x against Φ⁻¹(p).</li>
  * <li>Weibull (shape k, scale η): f(x) = (k/η)(x/η)^(k−1)·exp(−(x/η)^k); plot ln x against ln(−ln(1−p)),
  *     on which the model is the line ln η + q/k.</li>
@@ -20,33 +18,21 @@ import org.apache.commons.statistics.distribution.NormalDistribution;
  * Beta-Variables</i>).
  *
  * @param model  which model
- * @param first  μ (normal, lognormal), λ (Box–Cox), k (Weibull)
- * @param second σ (normal, lognormal, Box–Cox on the transformed scale), η (Weibull)
- * @param centre μ of the transformed readings for Box–Cox (unused otherwise)
+ * @param first  μ (normal, lognormal), k (Weibull)
+ * @param second σ (normal, lognormal), η (Weibull)
  */
-record ModelCurve(ShapeModel model, double first, double second, double centre) {
+record ModelCurve(ShapeModel model, double first, double second) {
 
     private static final NormalDistribution STANDARD = NormalDistribution.of(0, 1);
 
-    /** The curve for a model fit; {@code readings} supply μ for Box–Cox (the fit record carries λ and σ). */
-    static ModelCurve of(ModelFit fit, double[] readings) {
-        if (fit.model() == ShapeModel.BOX_COX) {
-            double sum = 0;
-            for (double x : readings) {
-                sum += boxCox(x, fit.first());
-            }
-            return new ModelCurve(fit.model(), fit.first(), fit.second(), sum / readings.length);
-        }
-        return new ModelCurve(fit.model(), fit.first(), fit.second(), Double.NaN);
+    /** The curve for a model fit. */
+    static ModelCurve of(ModelFit fit) {
+        return new ModelCurve(fit.model(), fit.first(), fit.second());
     }
 
     /** The normal model with the readings' mean and standard deviation. */
     static ModelCurve normal(double mean, double sd) {
-        return new ModelCurve(ShapeModel.NORMAL, mean, sd, Double.NaN);
-    }
-
-    static double boxCox(double x, double lambda) {
-        return Math.abs(lambda) < 1e-9 ? Math.log(x) : (Math.pow(x, lambda) - 1) / lambda;
+        return new ModelCurve(ShapeModel.NORMAL, mean, sd);
     }
 
     /** Density at x on the readings' scale (0 outside the support). */
@@ -54,8 +40,6 @@ record ModelCurve(ShapeModel model, double first, double second, double centre) 
         switch (model) {
             case NORMAL:
                 return phi((x - first) / second) / second;
-            case BOX_COX:
-                return x <= 0 ? 0 : phi((boxCox(x, first) - centre) / second) / second * Math.pow(x, first - 1);
             case LOGNORMAL:
                 return x <= 0 ? 0 : phi((Math.log(x) - first) / second) / (second * x);
             case WEIBULL:
@@ -74,8 +58,6 @@ record ModelCurve(ShapeModel model, double first, double second, double centre) 
         switch (model) {
             case NORMAL:
                 return x;
-            case BOX_COX:
-                return x > 0 ? boxCox(x, first) : Double.NaN;
             default:
                 return x > 0 ? Math.log(x) : Double.NaN;
         }
@@ -92,8 +74,6 @@ record ModelCurve(ShapeModel model, double first, double second, double centre) 
             case NORMAL:
             case LOGNORMAL:
                 return first + second * q;
-            case BOX_COX:
-                return centre + second * q;
             case WEIBULL:
                 return Math.log(second) + q / first;
             default:
@@ -106,8 +86,6 @@ record ModelCurve(ShapeModel model, double first, double second, double centre) 
         switch (model) {
             case NORMAL:
                 return new String[] {"normal quantile", "reading"};
-            case BOX_COX:
-                return new String[] {"normal quantile", "Box\u2013Cox transformed reading"};
             case LOGNORMAL:
                 return new String[] {"normal quantile", "ln(reading)"};
             default:

@@ -33,19 +33,19 @@ final class PlanSummarySheet {
         w.row(null, "Last slot", slots.get(slots.size() - 1).id() + " " + Values.planned(slots.get(slots.size() - 1).start()));
         w.row(null, "Time zone", plan.calendar().zone().getId());
         w.skip();
-        w.row(header, "Id", "Characteristic", "Unit", "Nominal", "LSL", "USL", "Gauge", "Resolution", "Requirement");
+        w.row(header, "Id", "Characteristic", "Unit", "Nominal", "LSL", "USL", "Gauge", "Resolution", "Requirement", "Shape");
         for (Characteristic c : plan.characteristics()) {
             int d = Values.decimals(c);
             w.row(null, c.id(), c.name(), c.unit(), Values.number(c.nominal(), d), Values.number(c.limits().lower(), d),
                     Values.number(c.limits().upper(), d), c.gauge().map(g -> g.name()).orElse("\u2014"),
-                    Values.resolution(c), Values.requirement(c));
+                    Values.resolution(c), Values.requirement(c), c.shape().token());
         }
         w.skip();
         w.row(header, "Caution");
         for (String line : SheetWording.CAUTION) {
             w.row(null, line);
         }
-        int[] widths = {28, 40, 8, 10, 10, 10, 24, 11, 30};
+        int[] widths = {28, 40, 8, 10, 10, 10, 24, 11, 30, 11};
         for (int i = 0; i < widths.length; i++) {
             sheet.setColumnWidth(i, widths[i] * 256);
         }

@@ -97,7 +97,9 @@ public final class PlanBridge {
             Expectation e = expectation.apply(row);
             OptionalDouble nominal = row.number(CharacteristicField.NOMINAL);
             chars.add(new Characteristic(row.id(), row.text(CharacteristicField.NAME).trim(),
-                    row.text(CharacteristicField.UNIT).trim(), nominal, row.limits().orElseThrow(), gauge, requirement, e));
+                    row.text(CharacteristicField.UNIT).trim(), nominal, row.limits().orElseThrow(), gauge, requirement, e,
+                    // the wizard does not edit the planned shape yet: keep the one the plan was opened with
+                    was.map(Characteristic::shape).orElse(dev.proofrun.stats.ShapeFamily.NORMAL)));
         }
         Part part = new Part(d.text(DraftField.PART_NAME), d.text(DraftField.PART_NUMBER), d.text(DraftField.PART_REVISION));
         People people = new People(d.text(DraftField.PREPARED_BY), d.text(DraftField.COLLECTOR));

@@ -1,0 +1,36 @@
+package dev.proofrun.grade;
+
+/**
+ * How the required index and its bounds were computed; named in every output ({@code method} in the JSON).
+ */
+public enum IndexMethod {
+    /**
+     * Normal model: (limit − x̄)/(3σ̂) with the plan's σ estimator; exact bounds ({@code stats.CapabilityBounds}:
+     * chi-square, noncentral t, or the plan's two-sided Cpk method). Equals the ISO 22514-2 percentile index
+     * for the normal model.
+     */
+    NORMAL_THEORY("normal-theory", "normal theory, exact bounds"),
+    /**
+     * Lognormal or Weibull model: the percentile index of ISO 22514-2 (Clements 1989) from the fitted model's
+     * quantiles, on the overall spread; bounds by generalized pivotal quantities ({@code stats.PivotalBound}).
+     */
+    PERCENTILE("iso-22514-2-percentile", "ISO 22514-2 percentile method, generalized pivotal bounds");
+
+    private final String id;
+    private final String words;
+
+    IndexMethod(String id, String words) {
+        this.id = id;
+        this.words = words;
+    }
+
+    /** The token in the JSON. */
+    public String id() {
+        return id;
+    }
+
+    /** The words in text, report and screen. */
+    public String words() {
+        return words;
+    }
+}

@@ -1,0 +1,96 @@
+package dev.proofrun.grade;
+
+import dev.proofrun.design.Requirement;
+import dev.proofrun.stats.IndexKind;
+import dev.proofrun.stats.PercentileIndex;
+import dev.proofrun.stats.PivotalBound;
+import dev.proofrun.stats.ShapeFamily;
+import dev.proofrun.stats.ShapeFit;
+import dev.proofrun.stats.SpecLimits;
+import java.util.List;
+import java.util.OptionalDouble;
+import java.util.OptionalInt;
+
+/**
+ * The capability step under a declared lognormal or Weibull shape: the percentile index of ISO 22514-2
+ * ({@link PercentileIndex}) from the fitted model, its bounds by generalized pivotal quantities
+ * ({@link PivotalBound}, seeded, the seed in the result), and the expected ppm under the model.
+ *
+ * <p><b>Within versus overall.</b> The fit uses all readings, so the index is an overall (Pp-family) index.
+ * A Cp-family requirement (Cpk, Cpu, …) under such a shape is judged on this overall index and the result says
+ * so: once the stability step has found the process stable, within and overall spread estimate the same
+ * quantity; the bound then accounts for the overall fit's estimation error only, which is what the coverage
+ * figures of docs/decisions/declared-shape-grading.md measure.
+ *
+ * <p><b>Limits.</b> A lower limit at or below the model's lower bound (zero) cannot be missed by the model's
+ * readings and is dropped with a note; when no limit is left the index does not exist.
+ */
+final class PercentileJudge {
+
+    private PercentileJudge() {
+    }
+
+    /**
+     * The required index with its bounds, or null when the index does not exist for the limits left.
+     *
+     * @param readings N, the number of readings the fit came from
+     */
+    static IndexEvidence judge(GradedCharacteristic gc, Shape shape, int readings, List<Reason> reasons) {
+        ShapeFit fit = shape.fit();
+        ShapeFamily family = fit.family();
+        Requirement req = gc.requirement();
+        IndexKind kind = req.index();
+        SpecLimits limits = gc.limits();
+        if (limits.lower().isPresent() && limits.lower().getAsDouble() <= family.lowerBound()) {
+            reasons.add(new Reason(Step.SHAPE, false, GradeMessage.REASON_LOWER_LIMIT_DROPPED.format(
+                    String.format(java.util.Locale.ROOT, "%s", limits.lower().getAsDouble()), family.token())));
+            if (limits.upper().isEmpty()) {
+                return null;
+            }
+            limits = new SpecLimits(OptionalDouble.empty(), limits.upper());
+        }
+        double estimate = PercentileIndex.of(kind, limits, fit);
+        if (Double.isNaN(estimate)) {
+            return null;
+        }
+        long seed = PivotalBound.DEFAULT_SEED;
+        double[] b = PivotalBound.bounds(fit, kind, limits, readings, req.confidence(), seed);
+        double f = shape.tailFactor();
+        double ppm = PercentileIndex.expectedPpm(limits, fit);
+        if (kind.usesWithinSigma()) {
+            reasons.add(new Reason(Step.CAPABILITY, false, GradeMessage.REASON_OVERALL_ONLY.format(family.token(),
+                    kind.symbol(), overall(kind).symbol())));
+        }
+        reasons.add(new Reason(Step.CAPABILITY, false, GradeMessage.REASON_PERCENTILE_METHOD.format(kind.symbol(),
+                family.token(), fit.quantile(PercentileIndex.LOW), fit.quantile(0.5), fit.quantile(PercentileIndex.HIGH),
+                ppm, PivotalBound.DRAWS, seed)));
+        double upper = estimate < req.minimum() ? b[1] * f : Double.NaN;
+        return new IndexEvidence(kind, req.minimum(), req.confidence(), estimate * f, b[0] * f, upper,
+                ShapeModel.of(family), IndexMethod.PERCENTILE, ppm, seed);
+    }
+
+    /** The overall-family index with the same side: Cpk → Ppk. */
+    static IndexKind overall(IndexKind kind) {
+        return IndexKind.fromToken("p" + kind.token().substring(1));
+    }
+
+    /**
+     * About how many more subgroups would bring the lower bound to c₀ if the estimate held: the distance from
+     * the estimate to the bound shrinks as 1/√N (a planning figure, not a promise); empty when none up to
+     * {@link CapabilityJudge#MAX_SUBGROUPS}.
+     */
+    static OptionalInt additionalSubgroups(IndexEvidence ev, int subgroupSize, int subgroupsNow) {
+        double gap = ev.estimate() - ev.lower();
+        double needed = ev.estimate() - ev.required();
+        if (!(needed > 0) || !(gap > 0)) {
+            return OptionalInt.empty();
+        }
+        double readingsNow = (double) subgroupSize * subgroupsNow;
+        double readings = readingsNow * (gap / needed) * (gap / needed);
+        long k = (long) Math.ceil(readings / subgroupSize);
+        if (k > CapabilityJudge.MAX_SUBGROUPS) {
+            return OptionalInt.empty();
+        }
+        return OptionalInt.of((int) Math.max(1, k - subgroupsNow));
+    }
+}

@@ -1,0 +1,73 @@
+package dev.proofrun.stats;
+
+import java.util.Arrays;
+import java.util.Locale;
+import java.util.stream.Collectors;
+
+/**
+ * The distribution model a characteristic's readings are planned to follow. The shape belongs to the plan:
+ * it is declared before the data exists and the grader fits only that model (it never hunts among models).
+ *
+ * <p>Each family is a location–scale family on some scale y = g(x):
+ * <ul>
+ * <li>{@link #NORMAL}: y = x, normal(μ, σ). The default.</li>
+ * <li>{@link #LOGNORMAL}: y = ln x, normal(μ, σ) — for characteristics bounded at zero and skewed to the right
+ *     (roughness, flatness, leak rate; common practice).</li>
+ * <li>{@link #WEIBULL}: two-parameter Weibull(k, c) with F(x) = 1 − exp(−(x/c)^k); y = ln x follows the
+ *     smallest-extreme-value distribution with location ln c and scale 1/k (Lawless 2003, <em>Statistical
+ *     Models and Methods for Lifetime Data</em>, 2nd ed., §4.1) — for zero-bounded characteristics whose skew
+ *     changes with the shape k (runout, burr height, loosening torque; common practice).</li>
+ * </ul>
+ * The location–scale form is what makes the lower bound of a percentile index a pivotal computation
+ * ({@code grade.PercentileBound}). Tokens are the words in plan files, the characteristics CSV and
+ * {@code --shape}.
+ */
+public enum ShapeFamily {
+    /** Normal: the readings as they are. */
+    NORMAL("normal", Double.NEGATIVE_INFINITY),
+    /** Lognormal: ln x is normal; readings must be positive. */
+    LOGNORMAL("lognormal", 0),
+    /** Two-parameter Weibull: ln x is smallest-extreme-value; readings must be positive. */
+    WEIBULL("weibull", 0);
+
+    private final String token;
+    private final double lowerBound;
+
+    ShapeFamily(String token, double lowerBound) {
+        this.token = token;
+        this.lowerBound = lowerBound;
+    }
+
+    /** The word in files and options: "normal", "lognormal", "weibull". */
+    public String token() {
+        return token;
+    }
+
+    /** The smallest value the model allows (readings must lie above it): −∞ for the normal, 0 otherwise. */
+    public double lowerBound() {
+        return lowerBound;
+    }
+
+    /** True when the model is the normal one (today's exact normal-theory bounds apply). */
+    public boolean isNormal() {
+        return this == NORMAL;
+    }
+
+    /** The tokens, comma separated, for messages: "normal, lognormal, weibull". */
+    public static String names() {
+        return Arrays.stream(values()).map(ShapeFamily::token).collect(Collectors.joining(", "));
+    }
+
+    /**
+     * @throws IllegalArgumentException for an unknown name, listing the known ones
+     */
+    public static ShapeFamily fromToken(String token) {
+        String t = token == null ? "" : token.trim();
+        for (ShapeFamily f : values()) {
+            if (f.token.equalsIgnoreCase(t)) {
+                return f;
+            }
+        }
+        throw new IllegalArgumentException(String.format(Locale.ROOT, "unknown shape '%s'; the shapes are %s", t, names()));
+    }
+}

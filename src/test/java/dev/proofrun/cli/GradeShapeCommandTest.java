@@ -1,0 +1,88 @@
+package dev.proofrun.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import dev.proofrun.grade.PlanAdapter;
+import dev.proofrun.grade.SimulatedReturn;
+import dev.proofrun.plan.PlanFiles;
+import dev.proofrun.stats.PivotalBound;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Map;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** {@code grade} of a characteristic planned lognormal: the method named in text and JSON, a reading at zero. */
+class GradeShapeCommandTest {
+
+    @TempDir
+    Path dir;
+
+    private String out;
+    private String err;
+
+    private int run(String... args) {
+        StringWriter o = new StringWriter();
+        StringWriter e = new StringWriter();
+        int code = ProofrunCommand.run(new PrintWriter(o, true), new PrintWriter(e, true), args);
+        out = o.toString();
+        err = e.toString();
+        return code;
+    }
+
+    private Path issuedPlan() {
+        Path plan = dir.resolve("plan.json");
+        assertEquals(0, run("plan", "new", "--out", plan.toString(), "--id", "PR-2027-0078", "--part", "pump lid",
+                "--characteristic", "face flatness", "--unit", "mm", "--usl", "0.08", "--target", "1.33", "--expected", "1.8",
+                "--shape", "lognormal", "--subgroup-size", "5", "--subgroups", "25", "--zone", "Europe/Berlin",
+                "--start", "2027-03-01T06:00"), err);
+        assertEquals(0, run("plan", "issue", plan.toString()), err);
+        return plan;
+    }
+
+    @Test
+    void aLognormalCharacteristicIsGradedByThePercentileMethod() throws Exception {
+        Path plan = issuedPlan();
+        Path data = dir.resolve("returned.csv");
+        // invented: median 0.02 mm, sigma of ln x 0.2 -> Ppu = (0.08 - 0.02)/(0.02 e^0.6 - 0.02) = 3.7
+        SimulatedReturn.writeCsv(PlanAdapter.of(PlanFiles.read(plan)), Map.of("C1", SimulatedReturn.Process.skewed(0.02, 0.2)),
+                11L, data);
+        assertEquals(0, run("grade", plan.toString(), data.toString()), err);
+        assertTrue(out.contains("C1 face flatness: demonstrated"), out);
+        assertTrue(out.contains("Cpk under the lognormal model, ISO 22514-2 percentile method, generalized pivotal bounds"), out);
+        assertTrue(out.contains("seed " + PivotalBound.DEFAULT_SEED), out);
+
+        assertEquals(0, run("grade", plan.toString(), data.toString(), "--json"), err);
+        JsonNode j = new ObjectMapper().readTree(out).get("characteristics").get(0).get("judged");
+        assertEquals("iso-22514-2-percentile", j.get("method").asText());
+        assertEquals("lognormal", j.get("model").asText());
+        assertEquals(PivotalBound.DEFAULT_SEED, j.get("seed").asLong());
+        assertTrue(j.get("lower").asDouble() < j.get("estimate").asDouble());
+        assertTrue(j.get("expectedPpm").asDouble() >= 0);
+    }
+
+    @Test
+    void aReadingAtZeroIsAFindingNotACrash() throws Exception {
+        Path plan = issuedPlan();
+        Path data = dir.resolve("returned.csv");
+        SimulatedReturn.writeCsv(PlanAdapter.of(PlanFiles.read(plan)), Map.of("C1", SimulatedReturn.Process.skewed(0.02, 0.2)),
+                12L, data);
+        List<String> lines = Files.readAllLines(data);
+        String[] cells = lines.get(3).split(",", -1);
+        cells[8] = "0";
+        lines.set(3, String.join(",", cells));
+        Files.write(data, lines);
+        byte[] before = Files.readAllBytes(data);
+        assertEquals(0, run("grade", plan.toString(), data.toString()), err);
+        assertTrue(out.contains("C1 face flatness: not-valid"), out);
+        assertTrue(out.contains("a reading at or below zero cannot come from the planned shape (lognormal): 0.0 in subgroup "
+                + cells[1] + ", reading 2"), out);
+        assertTrue(java.util.Arrays.equals(before, Files.readAllBytes(data)));
+    }
+}

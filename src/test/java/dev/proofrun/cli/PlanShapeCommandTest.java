@@ -1,0 +1,98 @@
+package dev.proofrun.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import dev.proofrun.plan.PlanFiles;
+import dev.proofrun.stats.ShapeFamily;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** The shape a characteristic is planned with: {@code plan new --shape}, the CSV column, the plan file, {@code plan show}. */
+class PlanShapeCommandTest {
+
+    @TempDir
+    Path dir;
+
+    private StringWriter out;
+    private StringWriter err;
+
+    private int run(String... args) {
+        out = new StringWriter();
+        err = new StringWriter();
+        return ProofrunCommand.run(new PrintWriter(out, true), new PrintWriter(err, true), args);
+    }
+
+    private String[] single(Path file, String... extra) {
+        List<String> a = new ArrayList<>(List.of("plan", "new", "--out", file.toString(), "--id", "PR-2027-0077",
+                "--part", "pump lid", "--characteristic", "face flatness", "--unit", "mm",
+                "--usl", "0.05", "--target", "1.33", "--expected", "1.8",
+                "--subgroup-size", "5", "--subgroups", "25", "--zone", "Europe/Berlin",
+                "--start", "2027-03-01T06:00"));
+        a.addAll(List.of(extra));
+        return a.toArray(new String[0]);
+    }
+
+    @Test
+    void aDeclaredShapeIsWrittenShownAndRead() throws Exception {
+        Path file = dir.resolve("p.json");
+        assertEquals(0, run(single(file, "--shape", "lognormal")), err.toString());
+        // plan new sizes with the normal model; it says so for a skewed shape
+        assertTrue(out.toString().contains("C1 is planned lognormal, but its power here is the normal model's"), out.toString());
+        assertTrue(Files.readString(file).contains("\"shape\": \"lognormal\""), Files.readString(file));
+        assertEquals(ShapeFamily.LOGNORMAL, PlanFiles.read(file).characteristics().get(0).shape());
+        assertEquals(0, run("plan", "show", file.toString()));
+        assertTrue(out.toString().contains("lognormal"), out.toString());
+    }
+
+    @Test
+    void theNormalShapeIsLeftOutOfTheFile() throws Exception {
+        // plans written before shapes existed must keep their bytes and revision
+        Path file = dir.resolve("p.json");
+        assertEquals(0, run(single(file)), err.toString());
+        assertFalse(Files.readString(file).contains("\"shape\""));
+        assertEquals(ShapeFamily.NORMAL, PlanFiles.read(file).characteristics().get(0).shape());
+    }
+
+    @Test
+    void anUnknownShapeIsRefusedWithTheNames() {
+        Path file = dir.resolve("p.json");
+        assertEquals(2, run(single(file, "--shape", "gamma")));
+        String e = err.toString().trim();
+        assertTrue(e.contains("--shape") && e.contains("normal, lognormal, weibull"), e);
+        assertEquals(1, e.lines().count(), e);
+        assertFalse(Files.exists(file));
+    }
+
+    @Test
+    void theCharacteristicsCsvHasAShapeColumn() throws Exception {
+        Path csv = dir.resolve("chars.csv");
+        Files.writeString(csv, "id,name,unit,nominal,lsl,usl,target,expected,shape\n"
+                + "D1,bore,mm,10,9.98,10.02,1.33,1.8,\n"
+                + "R4,roughness,um,,,0.8,1.33,1.8,weibull\n", StandardCharsets.UTF_8);
+        Path file = dir.resolve("p.json");
+        assertEquals(0, run("plan", "new", "--out", file.toString(), "--part", "lid", "--characteristics", csv.toString(),
+                "--subgroup-size", "5", "--subgroups", "25", "--zone", "Europe/Berlin", "--start", "2027-03-01T06:00"),
+                err.toString());
+        assertEquals(List.of(ShapeFamily.NORMAL, ShapeFamily.WEIBULL),
+                PlanFiles.read(file).characteristics().stream().map(c -> c.shape()).toList());
+        assertEquals(0, run("size", "--characteristics", csv.toString()), err.toString());
+        assertTrue(out.toString().contains("warning: R4 is planned weibull, but its power here is the normal model's"),
+                out.toString());
+
+        Files.writeString(csv, "id,name,unit,nominal,lsl,usl,target,expected,shape\n"
+                + "R4,roughness,um,,,0.8,1.33,1.8,skewed\n", StandardCharsets.UTF_8);
+        assertEquals(2, run("size", "--characteristics", csv.toString()));
+        String e = err.toString().trim();
+        assertTrue(e.contains("chars.csv") && e.contains("row 2") && e.contains("shape")
+                && e.contains("normal, lognormal, weibull"), e);
+    }
+}
