@@ -10,7 +10,7 @@ import dev.proofrun.stats.AndersonDarling;
  * The shape step: is the normal model fair, and if not, which alternative is.
  *
  * <p>Normality: Anderson–Darling A² against the normal with the readings' mean and s, p-value with
- * Stephens' adjustment ({@link AndersonDarling}, shared with {@code estimate}); not rejected when p ≥ {@value #LEVEL}. When rejected and
+ * Stephens' adjustment ({@link AndersonDarling}, shared with {@code estimate}); not rejected when p ≥ {@value #NORMALITY_LEVEL}. When rejected and
  * every reading is positive, the Box–Cox, lognormal and Weibull models are fitted by maximum likelihood
  * ({@link DistributionFits}); a model "fits" when its own A² test does not reject it at 5 % (for Box–Cox and
  * lognormal: normality of the transformed readings — somewhat lenient for Box–Cox since λ is estimated).
@@ -27,6 +27,11 @@ import dev.proofrun.stats.AndersonDarling;
 final class ShapeJudge {
 
     static final double LEVEL = 0.05;
+    /**
+     * The level of the normality check: a normal process is rejected this often by chance, and the design's power
+     * counts it ({@code design.ProcedurePower.NORMAL_SHAPE_REJECTION} must equal it).
+     */
+    static final double NORMALITY_LEVEL = 0.01;
     static final int MIN_READINGS = 8;
 
     private ShapeJudge() {
@@ -81,7 +86,7 @@ final class ShapeJudge {
             return new Shape(Double.NaN, Double.NaN, true, ShapeModel.NORMAL, List.of(), true);
         }
         double[] ad = normality(x);
-        if (ad[1] >= LEVEL) {
+        if (ad[1] >= NORMALITY_LEVEL) {
             reasons.add(new Reason(Step.SHAPE, false, GradeMessage.REASON_NORMAL.format(ad[0], ad[1])));
             return new Shape(ad[0], ad[1], true, ShapeModel.NORMAL, List.of(), true);
         }
