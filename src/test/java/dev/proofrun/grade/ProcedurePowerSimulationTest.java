@@ -53,6 +53,17 @@ class ProcedurePowerSimulationTest {
 
     @Test
     @Tag("long")
+    void withLostSubgroupsThePromiseCountsTheAllowance() {
+        DesignRequest r = request(Expectation.centred(1.67), 5).withLossRate(0.05);
+        DesignRow row = StudyDesigner.design(r).recommended();
+        double realised = demonstrated(row, 1.67, 1.67, 1000, 24L, 0.05);
+        System.out.printf(Locale.ROOT, "procedure-power %dx%d loss rate 0.05: promised %.4f realised %.4f%n",
+                row.subgroups(), row.subgroupSize(), row.power(), realised);
+        assertEquals(row.power(), realised, 0.03, row.toString());
+    }
+
+    @Test
+    @Tag("long")
     void atTheRequirementTheGraderPassesAtMostTheCustomersRisk() {
         DesignRequest r = request(Expectation.centred(1.67), 5);
         DesignRow row = StudyDesigner.design(r).recommended();
@@ -84,6 +95,11 @@ class ProcedurePowerSimulationTest {
 
     /** The share of simulated studies the grader calls demonstrated; truth Cpk and Cp, mean above the midpoint. */
     static double demonstrated(DesignRow row, double cpk, double cp, int studies, long seed) {
+        return demonstrated(row, cpk, cp, studies, seed, 0);
+    }
+
+    /** As above, each planned subgroup lost with probability lossRate (missing from the returned data). */
+    static double demonstrated(DesignRow row, double cpk, double cp, int studies, long seed, double lossRate) {
         int n = row.subgroupSize();
         int k = row.subgroups();
         double sd = (USL - LSL) / (6 * cp);
@@ -91,20 +107,26 @@ class ProcedurePowerSimulationTest {
         GradingPlan plan = TestPlans.plan(n, k, new GradedCharacteristic("D1", "bore diameter", "mm",
                 SpecLimits.twoSided(LSL, USL), null, 0, Requirement.of(IndexKind.CPK, 1.33, 0.95)));
         GradedCharacteristic gc = plan.characteristics().get(0);
-        List<String> slots = plan.slots().stream().map(PlannedSlot::id).toList();
+        List<String> planned = plan.slots().stream().map(PlannedSlot::id).toList();
         UniformRandomProvider rng = RandomSource.XO_RO_SHI_RO_128_PP.create(seed);
         ZigguratSampler.NormalizedGaussian g = ZigguratSampler.NormalizedGaussian.of(rng);
         int passed = 0;
         for (int s = 0; s < studies; s++) {
             List<double[]> subgroups = new ArrayList<>(k);
+            List<String> slots = new ArrayList<>(k);
             for (int i = 0; i < k; i++) {
+                if (lossRate > 0 && rng.nextDouble() < lossRate) {
+                    continue;
+                }
+                slots.add(planned.get(i));
                 double[] x = new double[n];
                 for (int j = 0; j < n; j++) {
                     x[j] = mean + sd * g.sample();
                 }
                 subgroups.add(x);
             }
-            Completeness c = new Completeness(k, n, k, 0, 0, (long) n * k, 0, 0, plan.allowedShortfall());
+            int kept = subgroups.size();
+            Completeness c = new Completeness(k, n, kept, 0, k - kept, (long) n * kept, 0, 0, plan.allowedShortfall());
             CharacteristicGrade grade = CharacteristicGrader.grade(gc, plan.design(), plan.interval(),
                     new ReturnedData.Collection(c, subgroups, slots));
             if (grade.verdict() == Verdict.DEMONSTRATED) {
