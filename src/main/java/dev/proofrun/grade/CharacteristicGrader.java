@@ -60,6 +60,13 @@ final class CharacteristicGrader {
                     null, null, null, null, Verdict.NOT_VALID, reasons, OptionalInt.empty());
         }
 
+        java.util.Optional<Reason> noSpread = NoSpread.check(subgroups);
+        if (noSpread.isPresent()) {
+            reasons.add(noSpread.get());
+            return new CharacteristicGrade(gc.id(), gc.name(), gc.unit(), gc.limits(), req, c, subgroups, data.slots(),
+                    null, null, null, null, Verdict.NOT_VALID, reasons, OptionalInt.empty());
+        }
+
         // the shape step (a sort of all readings) runs beside the stability step; each is seeded on its own,
         // so the result does not depend on the order, and the reasons keep the order of the steps
         List<Reason> shapeReasons = new ArrayList<>();

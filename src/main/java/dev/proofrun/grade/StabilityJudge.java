@@ -9,9 +9,7 @@ import dev.proofrun.control.Signal;
 import dev.proofrun.control.StabilityRule;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import java.util.Set;
-import java.util.TreeMap;
 
 /**
  * Turns the charts into the stability finding, in words. The decision itself is {@link StabilityRule}'s (in
@@ -24,7 +22,6 @@ final class StabilityJudge {
     static final double CHANCE_LEVEL = StabilityRule.CHANCE_LEVEL;
     static final double ANOVA_LEVEL = StabilityRule.ANOVA_LEVEL;
     static final double RATIO_LIMIT = StabilityRule.RATIO_LIMIT;
-    private static final int LISTED_SIGNALS = 8;
 
     private StabilityJudge() {
     }
@@ -54,7 +51,7 @@ final class StabilityJudge {
         String loc = kind.location().id();
         String spr = kind.spread().id();
         if (signalled) {
-            reasons.add(new Reason(Step.STABILITY, true, GradeMessage.REASON_UNSTABLE_SIGNALS.format(locationPoints, loc,
+            reasons.add(new Reason(Step.STABILITY, true, GradeMessage.REASON_UNSTABLE_SIGNALS.format(SignalPatterns.points(locationPoints), loc,
                     spreadPoints, spr, k, chance.expectedLocation(), chance.expectedSpread(),
                     Stability.chanceText(pLocation, pLocation <= floor && floor > 0, "%.2g"),
                     Stability.chanceText(pSpread, pSpread <= floor && floor > 0, "%.2g"), describe(signals))));
@@ -62,7 +59,7 @@ final class StabilityJudge {
             reasons.add(new Reason(Step.STABILITY, false, GradeMessage.REASON_STABLE_QUIET.format(loc, spr, k,
                     chance.expectedLocation() + chance.expectedSpread())));
         } else {
-            reasons.add(new Reason(Step.STABILITY, false, GradeMessage.REASON_STABLE_CHANCE.format(locationPoints, loc,
+            reasons.add(new Reason(Step.STABILITY, false, GradeMessage.REASON_STABLE_CHANCE.format(SignalPatterns.points(locationPoints), loc,
                     spreadPoints, spr, k, chance.expectedLocation(), chance.expectedSpread(),
                     Stability.chanceText(pLocation, pLocation <= floor && floor > 0, "%.3f"),
                     Stability.chanceText(pSpread, pSpread <= floor && floor > 0, "%.3f"),
@@ -88,25 +85,9 @@ final class StabilityJudge {
         }
     }
 
-    /** "trend at S07, S08; beyond-limits at S12 (range)", at most a few subgroups per rule. */
+    /** The signals as patterns, see {@link SignalPatterns#describe}. */
     static String describe(List<ChartSignal> signals) {
-        TreeMap<String, List<String>> byRule = new TreeMap<>();
-        for (ChartSignal s : signals) {
-            String key = s.rule().id() + (s.chart().id().equals("mean") || s.chart().id().equals("individual") ? "" : " (" + s.chart().id() + ")");
-            byRule.computeIfAbsent(key, x -> new ArrayList<>()).add(s.slot());
-        }
-        StringBuilder sb = new StringBuilder();
-        byRule.forEach((rule, at) -> {
-            if (sb.length() > 0) {
-                sb.append("; ");
-            }
-            sb.append(rule).append(" at ");
-            sb.append(String.join(", ", at.subList(0, Math.min(LISTED_SIGNALS, at.size()))));
-            if (at.size() > LISTED_SIGNALS) {
-                sb.append(String.format(Locale.ROOT, " and %d more", at.size() - LISTED_SIGNALS));
-            }
-        });
-        return sb.length() == 0 ? "none" : sb.toString();
+        return SignalPatterns.describe(signals);
     }
 
     /** The sample standard deviation of all readings (divisor N − 1), see {@link StabilityRule#overallSd}. */

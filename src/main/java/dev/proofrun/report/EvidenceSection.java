@@ -17,10 +17,8 @@ import dev.proofrun.sheet.layout.TextTable;
 import dev.proofrun.sheet.layout.TextTable.Column;
 import dev.proofrun.sheet.layout.Typeface;
 import java.util.ArrayList;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
-import java.util.Map;
 
 /**
  * The evidence for one characteristic, in the order of the argument: 1 completeness, 2 stability (control
@@ -186,23 +184,9 @@ final class EvidenceSection {
         }
     }
 
+    /** One entry per pattern (a run of one rule over consecutive subgroups), as the reasons say it. */
     private static String signals(List<ChartSignal> signals) {
-        Map<String, List<String>> byRule = new LinkedHashMap<>();
-        for (ChartSignal s : signals) {
-            byRule.computeIfAbsent(s.chart().id() + " " + s.rule().id(), r -> new ArrayList<>()).add(s.slot());
-        }
-        StringBuilder sb = new StringBuilder();
-        for (var e : byRule.entrySet()) {
-            if (sb.length() > 0) {
-                sb.append("; ");
-            }
-            List<String> slots = e.getValue();
-            sb.append(e.getKey()).append(" at ").append(String.join(", ", slots.subList(0, Math.min(12, slots.size()))));
-            if (slots.size() > 12) {
-                sb.append(" and ").append(slots.size() - 12).append(" more");
-            }
-        }
-        return sb.toString();
+        return dev.proofrun.grade.SignalPatterns.describe(signals);
     }
 
     private static ModelCurve curve(Shape sh, double[] x) {
