@@ -102,6 +102,9 @@ public final class GradeCommand implements Callable<Integer> {
         for (CharacteristicGrade g : r.characteristics()) {
             out.println();
             out.printf(Locale.ROOT, "%s %s: %s%n", g.id(), g.name(), g.verdict().id());
+            if (g.judged() != null && g.verdict() != dev.proofrun.grade.Verdict.NOT_VALID) {
+                out.println("  " + g.judged().summary() + ".");
+            }
             for (Reason reason : g.reasons()) {
                 out.println("  - " + reason.text());
             }

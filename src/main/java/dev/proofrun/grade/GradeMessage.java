@@ -56,6 +56,7 @@ public enum GradeMessage implements MessageKey {
     REASON_UPPER_ABOVE("The upper bound is above the requirement: the process might reach it, this study does not show it."),
     REASON_INDEX_UNDEFINED("Capability: %s is not defined for this specification."),
     REASON_CAPABILITY_NOT_VALID("Capability: %s = %.3f (lower bound %.3f) describes the study's past, not the process."),
+    JUDGED("%s by %s under the %s model: estimate %.3f, lower %.0f%% bound %.3f, required %.2f"),
     CAUTION("Caution: a statistical statement under assumptions (stability, independence, the fitted distribution, a capable gauge). It does not replace the customer's requirements, applicable standards or local codes, licensed practice, or the extra controls that safety-critical characteristics need.");
 
     private final String english;

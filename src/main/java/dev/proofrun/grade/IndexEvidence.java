@@ -13,7 +13,19 @@ import dev.proofrun.stats.IndexKind;
  * @param upper      the upper confidence bound at 1 − α; computed only when the estimate is below c₀
  *                   (for the not-demonstrated reason), NaN otherwise
  * @param model      the distribution model it was computed under
+ * @param method     how the index and its bounds were computed under that model
  */
 public record IndexEvidence(IndexKind index, double required, double confidence, double estimate, double lower,
-        double upper, ShapeModel model) {
+        double upper, ShapeModel model, IndexMethod method) {
+
+    /** "Cpk by normal theory under the normal model: estimate 1.473, lower 95 % bound 1.285, required 1.33". */
+    public String summary() {
+        return GradeMessage.JUDGED.format(index.symbol(), method.words(), model.id(), estimate, 100 * confidence,
+                lower, required);
+    }
+
+    /** Whether the verdict rests on figures other than the normal-theory ones of the raw readings. */
+    public boolean otherThanNormalTheory() {
+        return method != IndexMethod.NORMAL_THEORY || model != ShapeModel.NORMAL;
+    }
 }

@@ -95,6 +95,7 @@ record JudgedIndex(IndexKind kind, double estimate, double cp, int readings, dou
         // the upper bound only matters (and is only shown) when the estimate is below c0; the exact two-sided
         // bound costs about a second at a million readings, so it is not computed otherwise
         double up = estimate < r.minimum() ? upper(r.confidence()) : Double.NaN;
-        return new IndexEvidence(kind, r.minimum(), r.confidence(), estimate, lower(r.confidence()), up, model);
+        return new IndexEvidence(kind, r.minimum(), r.confidence(), estimate, lower(r.confidence()), up, model,
+                IndexMethod.forModel(model));
     }
 }

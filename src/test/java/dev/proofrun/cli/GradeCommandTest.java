@@ -68,12 +68,30 @@ class GradeCommandTest {
         assertTrue(root.get("problems").isArray());
         assertEquals("not-valid", root.get("verdict").asText());
         JsonNode c = root.get("characteristics").get(0);
-        for (String key : List.of("id", "name", "readings", "subgroups", "subgroupSize", "mean", "sigmaWithin", "sigmaOverall",
-                "cp", "cpu", "cpl", "cpk", "pp", "ppu", "ppl", "ppk", "cpm", "lower", "ppm", "control", "stabilityRatio",
-                "normality", "verdict", "reasons", "additionalSubgroups")) {
+        // what the verdict rests on leads, in this order
+        assertEquals(List.of("id", "name", "index", "method", "model", "estimate", "lower", "upper", "required",
+                "confidence", "verdict"), iterate(c.fieldNames()).subList(0, 11));
+        for (String key : List.of("readings", "subgroups", "subgroupSize", "normalTheory", "control", "stabilityRatio",
+                "normality", "reasons", "additionalSubgroups")) {
             assertTrue(c.has(key), "missing key " + key);
         }
-        for (String key : List.of("/lower/cp", "/lower/cpk", "/lower/pp", "/lower/ppk", "/control/location/center",
+        // the normal-theory figures keep estimate's keys and meanings, under their own name
+        for (String key : List.of("mean", "sigmaWithin", "sigmaOverall", "cp", "cpu", "cpl", "cpk", "pp", "ppu", "ppl",
+                "ppk", "cpm", "lower", "ppm")) {
+            assertTrue(c.get("normalTheory").has(key), "missing normalTheory." + key);
+            if (!key.equals("lower")) {
+                assertFalse(c.has(key), "normal-theory key at the top level: " + key);
+            }
+        }
+        assertFalse(c.get("lower").isObject(), "the top-level lower is the verdict's bound, a number");
+        JsonNode r4json = root.get("characteristics").get(1);
+        assertEquals("Cpk", r4json.get("index").asText());
+        assertEquals("normal-theory", r4json.get("method").asText());
+        assertEquals("normal", r4json.get("model").asText());
+        assertEquals(r4json.at("/normalTheory/cpk").asDouble(), r4json.get("estimate").asDouble(), 1e-12);
+        assertTrue(r4json.at("/normalTheory/carriesVerdict").asBoolean());
+        for (String key : List.of("/normalTheory/lower/cp", "/normalTheory/lower/cpk", "/normalTheory/lower/pp",
+                "/normalTheory/lower/ppk", "/control/location/center",
                 "/control/location/ucl", "/control/location/lcl", "/control/spread/ucl", "/control/signals",
                 "/normality/andersonDarling", "/normality/pValue", "/normality/model")) {
             assertFalse(c.at(key).isMissingNode(), "missing " + key);
@@ -81,7 +99,7 @@ class GradeCommandTest {
         JsonNode r4 = root.get("characteristics").get(1);
         assertEquals("inconclusive", r4.get("verdict").asText());
         assertTrue(r4.get("additionalSubgroups").asInt() > 0);
-        assertTrue(r4.get("cp").isNull(), "one-sided: no Cp");
+        assertTrue(r4.at("/normalTheory/cp").isNull(), "one-sided: no Cp");
         JsonNode f7 = root.get("characteristics").get(2);
         assertTrue(f7.at("/control/signals").size() > 0);
         assertTrue(f7.at("/control/signals/0/rule").asText().matches("[a-z-]+"));
@@ -138,5 +156,11 @@ class GradeCommandTest {
             assertTrue(r.err().contains("the plan was changed after it was issued as revision"), r.err());
             assertTrue(r.err().contains(edited.toString()), r.err());
         }
+    }
+
+    private static List<String> iterate(java.util.Iterator<String> it) {
+        List<String> out = new java.util.ArrayList<>();
+        it.forEachRemaining(out::add);
+        return out;
     }
 }
