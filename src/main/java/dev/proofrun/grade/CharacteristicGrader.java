@@ -70,7 +70,12 @@ final class CharacteristicGrader {
         // the shape step (a sort of all readings) runs beside the stability step; each is seeded on its own,
         // so the result does not depend on the order, and the reasons keep the order of the steps
         List<Reason> shapeReasons = new ArrayList<>();
-        FutureTask<Shape> shapeTask = new FutureTask<>(() -> ShapeJudge.judge(subgroups, gc.resolution(), shapeReasons));
+        GaugeStep step = GaugeStep.of(subgroups, gc.resolution());
+        if (step.known()) {
+            shapeReasons.add(step.reason());
+        }
+        FutureTask<Shape> shapeTask = new FutureTask<>(() -> step.tooCoarse() ? GaugeStep.unjudged()
+                : ShapeJudge.judge(subgroups, step.step(), shapeReasons));
         if ((long) subgroups.size() * subgroups.get(0).length >= PARALLEL_READINGS) {
             Thread worker = new Thread(shapeTask, "proofrun-shape-" + gc.id());
             worker.setDaemon(true);

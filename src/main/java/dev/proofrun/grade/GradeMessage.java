@@ -42,6 +42,8 @@ public enum GradeMessage implements MessageKey {
     REASON_RATIO_INDIVIDUALS("Sigma overall/within = %.2f (individuals: no ANOVA)."),
     REASON_NO_SPREAD("No spread in the readings: all %d readings are %s. The gauge shows none of the process's variation, so its spread, stability and capability cannot be estimated; measure with a gauge whose step is small against the variation (common practice: at most a tenth of the tolerance)."),
     REASON_NO_SPREAD_WITHIN("No spread within the subgroups: the %d readings of each subgroup are equal, while the subgroup means differ (%s to %s). The gauge's step is too coarse for the variation between consecutive parts, so the within-subgroup sigma and the capability cannot be estimated; measure with a finer gauge."),
+    REASON_GAUGE_STEP("Gauge: step %s, %s; %.1f steps per standard deviation of the readings (s = %s), about %.0f distinct values across the process spread 6s. The shape test spreads each reading over its step."),
+    REASON_GAUGE_TOO_COARSE("Gauge: the step is too coarse for this spread: step %s, %s, against a standard deviation of the readings of s = %s, about %.0f distinct values across the process spread 6s (proofrun asks for at least 6: a step no larger than s). Rounding shapes these readings more than the process does, so neither their shape nor their capability can be judged; measure with a finer gauge."),
     REASON_TOO_FEW_FOR_CHARTS("Fewer than 2 usable subgroups: no control chart, no capability."),
     REASON_NORMAL("Shape: normal model fair (Anderson-Darling A2 = %.3f, p = %.3f)."),
     REASON_NOT_NORMAL_MODEL("Shape: normality rejected (A2 = %.3f, p = %.2g); the %s model fits best (%s) and the capability is computed under it."),
