@@ -24,7 +24,8 @@ import org.apache.commons.rng.simple.RandomSource;
  * judged against the others ({@link ChanceSignals#falseUnstableShare}: up to 2,000 studies, standard error ≤
  * 0.0023 near 1 %); where that reference holds blocks instead of whole studies, {@value #STABLE_STUDIES} stable
  * studies are simulated. Detection: {@value #SHIFTED_STUDIES} shifted studies (standard error ≤ 0.023). The errors
- * are returned beside the figures.
+ * are returned beside the figures. For an overall requirement with n ≥ 2 (the means on their own chart, two chance
+ * references) the stable studies are simulated too.
  */
 public final class StabilityRisk {
 
@@ -43,7 +44,7 @@ public final class StabilityRisk {
             double shift) {
     }
 
-    private record Key(ChartKind kind, int n, int k, double shift) {
+    private record Key(ChartKind kind, int n, int k, double shift, boolean overallIndex) {
     }
 
     private static final Map<Key, double[]> FALSE_UNSTABLE = new ConcurrentHashMap<>();
@@ -63,8 +64,16 @@ public final class StabilityRisk {
      * @throws IllegalArgumentException if k &lt; 2 or the chart does not suit n (as {@link ControlCharts#of})
      */
     public static Figures of(ChartKind kind, int n, int k, double shift) {
-        double[] fu = falseUnstableWithError(kind, n, k);
-        Key key = new Key(kind, n, k, shift);
+        return of(kind, n, k, shift, false);
+    }
+
+    /**
+     * As {@link #of(ChartKind, int, int, double)}, for a requirement on an overall index when {@code overallIndex}
+     * (the means judged on their own chart, see {@link StabilityRule}).
+     */
+    public static Figures of(ChartKind kind, int n, int k, double shift, boolean overallIndex) {
+        double[] fu = falseUnstableWithError(kind, n, k, overallIndex);
+        Key key = new Key(kind, n, k, shift, overallIndex);
         Double known = DETECTION.get(key);
         double detection;
         if (known != null) {
@@ -72,7 +81,8 @@ public final class StabilityRisk {
         } else {
             UniformRandomProvider rng = RandomSource.XO_RO_SHI_RO_128_PP.create(SEED ^ ((long) n << 40)
                     ^ ((long) k << 8) ^ Double.doubleToLongBits(shift));
-            detection = share(kind, n, k, shift, SHIFTED_STUDIES, ZigguratSampler.NormalizedGaussian.of(rng));
+            detection = share(kind, n, k, shift, SHIFTED_STUDIES, ZigguratSampler.NormalizedGaussian.of(rng),
+                    overallIndex);
             if (DETECTION.size() >= CACHE_SIZE) {
                 DETECTION.clear();
             }
@@ -88,24 +98,35 @@ public final class StabilityRisk {
      * @throws IllegalArgumentException as {@link #of}
      */
     public static double falseUnstable(ChartKind kind, int n, int k) {
-        return falseUnstableWithError(kind, n, k)[0];
+        return falseUnstable(kind, n, k, false);
     }
 
-    private static double[] falseUnstableWithError(ChartKind kind, int n, int k) {
+    /** As {@link #falseUnstable(ChartKind, int, int)}, for an overall requirement when {@code overallIndex}. */
+    public static double falseUnstable(ChartKind kind, int n, int k, boolean overallIndex) {
+        return falseUnstableWithError(kind, n, k, overallIndex)[0];
+    }
+
+    private static double[] falseUnstableWithError(ChartKind kind, int n, int k, boolean overallIndex) {
         if (k < 2) {
             throw new IllegalArgumentException("at least two subgroups: " + k);
         }
-        Key key = new Key(kind, n, k, 0);
+        // for individuals the overall rule is the within rule (the means are the readings)
+        boolean own = overallIndex && n > 1;
+        Key key = new Key(kind, n, k, 0, own);
         double[] known = FALSE_UNSTABLE.get(key);
         if (known != null) {
             return known;
         }
-        ChanceSignals chance = ChanceSignals.simulate(kind, n, k, StabilityRule.rules());
-        double p = chance.falseUnstableShare();
-        int studies = chance.studies();
+        double p = Double.NaN;
+        int studies = 0;
+        if (!own) {
+            ChanceSignals chance = ChanceSignals.simulate(kind, n, k, StabilityRule.rules());
+            p = chance.falseUnstableShare();
+            studies = chance.studies();
+        }
         if (Double.isNaN(p)) {
             UniformRandomProvider rng = RandomSource.XO_RO_SHI_RO_128_PP.create(SEED ^ ((long) n << 40) ^ ((long) k << 8));
-            p = share(kind, n, k, 0, STABLE_STUDIES, ZigguratSampler.NormalizedGaussian.of(rng));
+            p = share(kind, n, k, 0, STABLE_STUDIES, ZigguratSampler.NormalizedGaussian.of(rng), own);
             studies = STABLE_STUDIES;
         }
         double[] figures = {p, error(p, studies)};
@@ -118,7 +139,7 @@ public final class StabilityRisk {
 
     /** The share of simulated studies the rule calls unstable; the last k − ⌊k/2⌋ subgroups moved by shift. */
     private static double share(ChartKind kind, int n, int k, double shift, int studies,
-            ZigguratSampler.NormalizedGaussian g) {
+            ZigguratSampler.NormalizedGaussian g, boolean overallIndex) {
         int quiet = k / 2;
         int unstable = 0;
         for (int s = 0; s < studies; s++) {
@@ -131,7 +152,7 @@ public final class StabilityRisk {
                 }
                 groups.add(x);
             }
-            if (!StabilityRule.decide(kind, groups).stable()) {
+            if (!StabilityRule.decide(kind, groups, overallIndex).stable()) {
                 unstable++;
             }
         }

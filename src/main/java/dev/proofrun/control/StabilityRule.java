@@ -21,6 +21,14 @@ import org.hipparchus.special.Beta;
  * variation explains: the one-way ANOVA F test of the subgroups is significant at {@value #ANOVA_LEVEL}
  * <em>and</em> σ_overall/σ_within ≥ {@value #RATIO_LIMIT} (then Cpk overstates Ppk by a fifth or more).
  *
+ * <p><b>Overall requirements</b> (Pp, Ppk, Ppu, Ppl) with subgroups of two or more: the overall index already
+ * counts the variation between subgroups, so a process whose subgroup means vary at random but predictably is not
+ * unstable for that purpose (ISO 22514-2 describes such time models: a location that varies at random). For them
+ * the means are judged on their own chart — an individuals chart of the subgroup means, limits from the means'
+ * moving ranges, all eight rules, its count compared with chance for k such points — together with the spread
+ * chart as above; the ANOVA criterion does not apply (it is shown, not used). Within requirements (Cp, Cpk, …)
+ * keep the rule above: variation between subgroups makes Cpk overstate what the process delivers.
+ *
  * <p>ANOVA: F = [Σ nᵢ(x̄ᵢ − x̿)²/(k−1)] / [ΣΣ(x − x̄ᵢ)²/(N−k)] with F(k−1, N−k) (Fisher; e.g. Montgomery,
  * <em>Design and Analysis of Experiments</em>, ch. 3); not defined for individuals (n = 1).
  */
@@ -54,11 +62,24 @@ public final class StabilityRule {
      * @param anovaF         the ANOVA F (empty for n = 1)
      * @param anovaP         its p-value (empty for n = 1)
      * @param signalled      a chart's count is beyond chance
-     * @param between        the means vary clearly more than the within variation explains
+     * @param between        the means vary clearly more than the within variation explains (never for an
+     *                       overall requirement, see the class comment)
+     * @param meansChance    the chance reference of the means' own chart (overall requirements with n ≥ 2), or null
+     *                       when the location chart is the usual one and {@code chance} serves both charts
      */
     public record Decision(ChartPair charts, int locationPoints, int spreadPoints, ChanceSignals chance,
             double locationChance, double spreadChance, double ratio, OptionalDouble anovaF, OptionalDouble anovaP,
-            boolean signalled, boolean between) {
+            boolean signalled, boolean between, ChanceSignals meansChance) {
+
+        /** Whether the means were judged on their own chart (an overall requirement with n ≥ 2). */
+        public boolean meansOnOwnChart() {
+            return meansChance != null;
+        }
+
+        /** The chance reference of the location chart. */
+        public ChanceSignals locationReference() {
+            return meansChance != null ? meansChance : chance;
+        }
 
         /** The finding: neither a chart's count beyond chance nor a clear between-subgroup variation. */
         public boolean stable() {
@@ -74,14 +95,30 @@ public final class StabilityRule {
      * @throws IllegalArgumentException as {@link ControlCharts#of} does
      */
     public static Decision decide(ChartKind kind, List<double[]> subgroups) {
+        return decide(kind, subgroups, false);
+    }
+
+    /**
+     * Decides one study for a requirement on a within index ({@code overallIndex} false) or an overall one (true).
+     *
+     * @throws IllegalArgumentException as {@link ControlCharts#of} does
+     */
+    public static Decision decide(ChartKind kind, List<double[]> subgroups, boolean overallIndex) {
         int k = subgroups.size();
         int n = subgroups.get(0).length;
         Set<RunRule> rules = rules();
         ChartPair charts = ControlCharts.of(kind, subgroups, rules);
+        ChanceSignals chance = ChanceSignals.simulate(kind, n, k, rules);
+        ChanceSignals meansChance = null;
+        if (overallIndex && n > 1) {
+            List<double[]> means = subgroups.stream().map(g -> new double[] {mean(g)}).toList();
+            ChartPair ofMeans = ControlCharts.of(ChartKind.INDIVIDUALS, means, rules);
+            charts = new ChartPair(kind, ofMeans.location(), charts.spread(), charts.sigmaWithin());
+            meansChance = ChanceSignals.simulate(ChartKind.INDIVIDUALS, 1, k, rules);
+        }
         int locationPoints = distinctPoints(charts.location());
         int spreadPoints = distinctPoints(charts.spread());
-        ChanceSignals chance = ChanceSignals.simulate(kind, n, k, rules);
-        double pLocation = chance.locationTail(locationPoints);
+        double pLocation = (meansChance != null ? meansChance : chance).locationTail(locationPoints);
         double pSpread = chance.spreadTail(spreadPoints);
         double overall = overallSd(subgroups);
         double ratio = charts.sigmaWithin() > 0 ? overall / charts.sigmaWithin() : Double.POSITIVE_INFINITY;
@@ -93,9 +130,18 @@ public final class StabilityRule {
             p = OptionalDouble.of(fp[1]);
         }
         boolean signalled = pLocation < CHANCE_LEVEL || pSpread < CHANCE_LEVEL;
-        boolean between = p.isPresent() && p.getAsDouble() < ANOVA_LEVEL && ratio >= RATIO_LIMIT;
+        boolean between = meansChance == null && p.isPresent() && p.getAsDouble() < ANOVA_LEVEL
+                && ratio >= RATIO_LIMIT;
         return new Decision(charts, locationPoints, spreadPoints, chance, pLocation, pSpread, ratio, f, p,
-                signalled, between);
+                signalled, between, meansChance);
+    }
+
+    private static double mean(double[] g) {
+        double s = 0;
+        for (double v : g) {
+            s += v;
+        }
+        return s / g.length;
     }
 
     /** The number of distinct points of a chart at which some rule fired. */

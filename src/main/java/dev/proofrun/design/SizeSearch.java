@@ -75,7 +75,12 @@ final class SizeSearch {
 
     /** u(n, k): the chance that the grader calls a stable process unstable. */
     double falseUnstable(int k) {
-        return StabilityRisk.falseUnstable(chart, n, k);
+        return StabilityRisk.falseUnstable(chart, n, k, overallIndex());
+    }
+
+    /** Whether the requirement is on an overall index (the grader then judges the means on their own chart). */
+    private boolean overallIndex() {
+        return !request.requirement().index().usesWithinSigma();
     }
 
     /** The chart pair the grader draws for this n. */
@@ -202,7 +207,7 @@ final class SizeSearch {
         Expectation e = request.expectation();
         double offset = 1 - e.index() / e.potentialOrIndex();
         double shift = request.shift();
-        StabilityRisk.Figures grader = StabilityRisk.of(chart, n, k, shift);
+        StabilityRisk.Figures grader = StabilityRisk.of(chart, n, k, shift, overallIndex());
         ChartRisk anyFalseAlarm = new ChartRisk(ChartRisks.falseAlarm(k), RuleRisks.falseAlarm(k));
         ChartRisk anyDetection = new ChartRisk(ChartRisks.detection(k, n, shift), RuleRisks.detection(k, n, shift));
         return new DesignRow(n, k, n * k, power(k), boundPower(k), model(k).criticalEstimate(offset), nu(k), limitedBy,

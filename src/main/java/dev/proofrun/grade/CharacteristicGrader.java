@@ -83,7 +83,8 @@ final class CharacteristicGrader {
         } else {
             shapeTask.run();
         }
-        Stability stability = StabilityJudge.judge(ChartKind.forMethod(design.sigmaMethod()), subgroups, data.slots(), reasons);
+        Stability stability = StabilityJudge.judge(ChartKind.forMethod(design.sigmaMethod()), subgroups, data.slots(), reasons,
+                !req.index().usesWithinSigma());
         valid &= stability.stable();
         CapabilityResult figures = figures(gc, design, subgroups);
         Shape shape = join(shapeTask);

@@ -38,6 +38,7 @@ public enum GradeMessage implements MessageKey {
     REASON_STABLE_CHANCE("Stable: %s on the %s chart and %d on the %s chart, within what chance explains for %d subgroups and these rules (about %.2f and %.2f expected; %s and %s). Signals: %s."),
     REASON_UNSTABLE_SIGNALS("Unstable: %s on the %s chart and %d on the %s chart, more than chance explains for %d subgroups (about %.2f and %.2f expected; %s and %s). Signals: %s."),
     REASON_UNSTABLE_BETWEEN("Unstable: the subgroup means vary more than the variation within explains: sigma overall/within = %.2f, ANOVA F = %.2f, p = %.2g; Cpk then overstates what the process delivers."),
+    REASON_MEANS_OWN_CHART("For an overall index the subgroup means are judged on their own chart (limits from their moving ranges), so means that vary at random but predictably do not make the process unstable (ISO 22514-2 describes such processes); sigma overall/within = %.2f (ANOVA F = %.2f, p = %.2g) is shown, not used."),
     REASON_RATIO("Sigma overall/within = %.2f (ANOVA F = %.2f, p = %.2g)."),
     REASON_RATIO_INDIVIDUALS("Sigma overall/within = %.2f (individuals: no ANOVA)."),
     REASON_NO_SPREAD("No spread in the readings: all %d readings are %s. The gauge shows none of the process's variation, so its spread, stability and capability cannot be estimated; measure with a gauge whose step is small against the variation (common practice: at most a tenth of the tolerance)."),

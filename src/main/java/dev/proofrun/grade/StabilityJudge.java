@@ -31,10 +31,21 @@ final class StabilityJudge {
         return StabilityRule.rules();
     }
 
-    /** Judges stability; {@code reasons} receives the stability sentences. */
+    /** Judges stability for a within requirement; {@code reasons} receives the stability sentences. */
     static Stability judge(ChartKind kind, List<double[]> subgroups, List<String> slots, List<Reason> reasons) {
+        return judge(kind, subgroups, slots, reasons, false);
+    }
+
+    /**
+     * Judges stability; {@code reasons} receives the stability sentences.
+     *
+     * @param overall whether the requirement is on an overall index (Pp, Ppk, …): then the subgroup means are judged
+     *                on their own chart ({@link StabilityRule})
+     */
+    static Stability judge(ChartKind kind, List<double[]> subgroups, List<String> slots, List<Reason> reasons,
+            boolean overall) {
         int k = subgroups.size();
-        StabilityRule.Decision d = StabilityRule.decide(kind, subgroups);
+        StabilityRule.Decision d = StabilityRule.decide(kind, subgroups, overall);
         ChartPair charts = d.charts();
         List<ChartSignal> signals = new ArrayList<>();
         place(charts.location(), slots, signals);
@@ -42,30 +53,34 @@ final class StabilityJudge {
         int locationPoints = d.locationPoints();
         int spreadPoints = d.spreadPoints();
         ChanceSignals chance = d.chance();
+        ChanceSignals locationChance = d.locationReference();
         double pLocation = d.locationChance();
         double pSpread = d.spreadChance();
         double floor = chance.floor();
         double ratio = d.ratio();
         boolean signalled = d.signalled();
         boolean between = d.between();
-        String loc = kind.location().id();
+        String loc = d.meansOnOwnChart() ? "subgroup means' own" : kind.location().id();
         String spr = kind.spread().id();
         if (signalled) {
             reasons.add(new Reason(Step.STABILITY, true, GradeMessage.REASON_UNSTABLE_SIGNALS.format(SignalPatterns.points(locationPoints), loc,
-                    spreadPoints, spr, k, chance.expectedLocation(), chance.expectedSpread(),
+                    spreadPoints, spr, k, locationChance.expectedLocation(), chance.expectedSpread(),
                     Stability.chanceText(pLocation, pLocation <= floor && floor > 0, "%.2g"),
                     Stability.chanceText(pSpread, pSpread <= floor && floor > 0, "%.2g"), describe(signals))));
         } else if (signals.isEmpty()) {
             reasons.add(new Reason(Step.STABILITY, false, GradeMessage.REASON_STABLE_QUIET.format(loc, spr, k,
-                    chance.expectedLocation() + chance.expectedSpread())));
+                    locationChance.expectedLocation() + chance.expectedSpread())));
         } else {
             reasons.add(new Reason(Step.STABILITY, false, GradeMessage.REASON_STABLE_CHANCE.format(SignalPatterns.points(locationPoints), loc,
-                    spreadPoints, spr, k, chance.expectedLocation(), chance.expectedSpread(),
+                    spreadPoints, spr, k, locationChance.expectedLocation(), chance.expectedSpread(),
                     Stability.chanceText(pLocation, pLocation <= floor && floor > 0, "%.3f"),
                     Stability.chanceText(pSpread, pSpread <= floor && floor > 0, "%.3f"),
                     describe(signals))));
         }
-        if (between) {
+        if (d.meansOnOwnChart()) {
+            reasons.add(new Reason(Step.STABILITY, false, GradeMessage.REASON_MEANS_OWN_CHART.format(ratio,
+                    d.anovaF().getAsDouble(), d.anovaP().getAsDouble())));
+        } else if (between) {
             reasons.add(new Reason(Step.STABILITY, true,
                     GradeMessage.REASON_UNSTABLE_BETWEEN.format(ratio, d.anovaF().getAsDouble(), d.anovaP().getAsDouble())));
         } else if (d.anovaF().isPresent()) {
@@ -74,7 +89,7 @@ final class StabilityJudge {
         } else {
             reasons.add(new Reason(Step.STABILITY, false, GradeMessage.REASON_RATIO_INDIVIDUALS.format(ratio)));
         }
-        return new Stability(charts, signals, locationPoints, chance.expectedLocation(), pLocation, spreadPoints,
+        return new Stability(charts, signals, locationPoints, locationChance.expectedLocation(), pLocation, spreadPoints,
                 chance.expectedSpread(), pSpread, ratio, d.anovaF(), d.anovaP(), d.stable(), floor);
     }
 
