@@ -254,7 +254,7 @@ public final class SizeCommand implements Callable<Integer> {
                     r.detection(), rules(r.anySignalFalseAlarm()), rules(r.anySignalDetection()));
         }
         out.println(SizeMessage.POWER_EXPLAINED.format(100 * ProcedurePower.NORMAL_SHAPE_REJECTION,
-                t.recommended().shift(), request.lossRate()));
+                t.recommended().shift(), PlanSyntax.number(request.lossRate())));
         out.println();
         out.println("Recommended: " + t.reason());
         out.println();
