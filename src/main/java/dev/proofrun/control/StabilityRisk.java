@@ -24,7 +24,15 @@ import org.apache.commons.rng.simple.RandomSource;
  * judged against the others ({@link ChanceSignals#falseUnstableShare}: up to 2,000 studies, standard error ≤
  * 0.0023 near 1 %); where that reference holds blocks instead of whole studies, {@value #STABLE_STUDIES} stable
  * studies are simulated. Detection: {@value #SHIFTED_STUDIES} shifted studies (standard error ≤ 0.023). The errors
- * are returned beside the figures. For an overall requirement with n ≥ 2 (the means on their own chart, two chance
+ * are returned beside the figures.
+ *
+ * <p>For the default charts (individuals for n = 1, X̄–R for n = 2…10) and within requirements, the false-unstable
+ * rate comes from a stored table of these very simulations on a grid of k ({@link StabilityRiskTable}), linearly
+ * interpolated between its points (it is small and moves by its own simulation error between neighbours), so that
+ * the search for k does not simulate; elsewhere it is simulated when asked. Detection is always simulated at the
+ * row's own k: the decision's count thresholds step with k, and detection jumps by up to 0.05 between neighbouring
+ * k (0.89 at 164 individuals, 0.84 at 165), which no interpolation follows.
+ * For an overall requirement with n ≥ 2 (the means on their own chart, two chance
  * references) the stable studies are simulated too.
  */
 public final class StabilityRisk {
@@ -44,7 +52,7 @@ public final class StabilityRisk {
             double shift) {
     }
 
-    private record Key(ChartKind kind, int n, int k, double shift, boolean overallIndex) {
+    record Key(ChartKind kind, int n, int k, double shift, boolean overallIndex) {
     }
 
     private static final Map<Key, double[]> FALSE_UNSTABLE = new ConcurrentHashMap<>();
@@ -117,6 +125,17 @@ public final class StabilityRisk {
         if (known != null) {
             return known;
         }
+        if (!own) {
+            java.util.OptionalDouble stored = StabilityRiskTable.get().falseUnstable(kind, n, k);
+            if (stored.isPresent()) {
+                return new double[] {stored.getAsDouble(), error(stored.getAsDouble(), ChanceSignals.MAX_STUDIES)};
+            }
+        }
+        return simulatedFalseUnstable(kind, n, k, own, key);
+    }
+
+    /** u(n, k) simulated (the grader's reference, leave one out), not read from the stored table; kept under key. */
+    static double[] simulatedFalseUnstable(ChartKind kind, int n, int k, boolean own, Key key) {
         double p = Double.NaN;
         int studies = 0;
         if (!own) {
@@ -130,11 +149,25 @@ public final class StabilityRisk {
             studies = STABLE_STUDIES;
         }
         double[] figures = {p, error(p, studies)};
-        if (FALSE_UNSTABLE.size() >= CACHE_SIZE) {
-            FALSE_UNSTABLE.clear();
+        if (key != null) {
+            if (FALSE_UNSTABLE.size() >= CACHE_SIZE) {
+                FALSE_UNSTABLE.clear();
+            }
+            FALSE_UNSTABLE.putIfAbsent(key, figures);
         }
-        FALSE_UNSTABLE.putIfAbsent(key, figures);
         return figures;
+    }
+
+    /**
+     * The figures simulated now, never from the stored table: what {@link StabilityRiskTable} stores (its writer
+     * calls this) and what the table's check compares with.
+     */
+    static Figures simulated(ChartKind kind, int n, int k, double shift) {
+        double[] fu = simulatedFalseUnstable(kind, n, k, false, null);
+        UniformRandomProvider rng = RandomSource.XO_RO_SHI_RO_128_PP.create(SEED ^ ((long) n << 40)
+                ^ ((long) k << 8) ^ Double.doubleToLongBits(shift));
+        double detection = share(kind, n, k, shift, SHIFTED_STUDIES, ZigguratSampler.NormalizedGaussian.of(rng), false);
+        return new Figures(fu[0], fu[1], detection, error(detection, SHIFTED_STUDIES), shift);
     }
 
     /** The share of simulated studies the rule calls unstable; the last k − ⌊k/2⌋ subgroups moved by shift. */

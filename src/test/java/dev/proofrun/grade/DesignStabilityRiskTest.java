@@ -25,7 +25,7 @@ import org.junit.jupiter.api.Test;
  * are simulated: SE = sqrt(SE_design² + SE_measured²), each at the design's figure). A longer run of the same
  * check (8,000 fresh studies, seed 7): 165 × 1 design 0.0050, grader 0.0036; 28 × 5 design 0.0080, grader 0.0074.
  *
- * <p>Draws: 1,500 stable studies (SE about 0.002 near 0.6 %) and 400 with the mean moved by 1.5 σ_within for the
+ * <p>Draws: 1,500 stable studies (SE about 0.002 near 0.6 %) and 1,500 with the mean moved by 1.5 σ_within for the
  * second half; at least 27 × 5 and 157 × 1, the designs of the issue (more where the power needs more; a few
  * seconds).
  */
@@ -49,7 +49,7 @@ class DesignStabilityRiskTest {
         ChartKind kind = n == 1 ? ChartKind.INDIVIDUALS : ChartKind.XBAR_R;
         int k0 = row.subgroups();
         int stable = 1500;
-        int shifted = 400;
+        int shifted = 1500;
         double measuredFalse = unstableShare(kind, n, k0, 0, stable, seed);
         double measuredDetect = unstableShare(kind, n, k0, row.shift(), shifted, seed + 1000);
         // the error of each share at the design's figure (the hypothesis under test is that they are equal)
