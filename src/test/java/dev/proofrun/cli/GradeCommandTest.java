@@ -158,6 +158,34 @@ class GradeCommandTest {
         }
     }
 
+    @Test
+    void constantReadingsAreGradedInWordsWithExitZero() throws Exception {
+        // the demo's return with every D1 reading set to 22.001: no spread at all
+        StringBuilder sb = new StringBuilder();
+        for (String line : Files.readAllLines(data, StandardCharsets.UTF_8)) {
+            String[] f = line.split(",", -1);
+            if (f.length > 11 && f[2].equals("D1")) {
+                for (int c = 7; c <= 11; c++) {
+                    f[c] = "22.001";
+                }
+                line = String.join(",", f);
+            }
+            sb.append(line).append('\n');
+        }
+        Path constant = dir.resolve("constant.csv");
+        Files.writeString(constant, sb.toString(), StandardCharsets.UTF_8);
+        Run text = run("grade", plan.toString(), constant.toString());
+        assertEquals(0, text.code(), text.err());
+        assertTrue(text.out().contains("No spread in the readings: all 125 readings are 22.001."), text.out());
+        assertFalse(text.out().contains("Infinity") || text.err().contains("Exception"), text.out() + text.err());
+        Run json = run("grade", plan.toString(), constant.toString(), "--json", "--report",
+                dir.resolve("constant.pdf").toString());
+        assertEquals(0, json.code(), json.err());
+        JsonNode d1 = new ObjectMapper().readTree(json.out()).get("characteristics").get(0);
+        assertEquals("not-valid", d1.get("verdict").asText());
+        assertTrue(d1.get("estimate").isNull(), d1.toString());
+    }
+
     private static List<String> iterate(java.util.Iterator<String> it) {
         List<String> out = new java.util.ArrayList<>();
         it.forEachRemaining(out::add);
