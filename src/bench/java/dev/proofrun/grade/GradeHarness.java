@@ -1,5 +1,6 @@
 package dev.proofrun.grade;
 
+import dev.proofrun.control.ChanceSignals;
 import dev.proofrun.design.Design;
 import dev.proofrun.design.Requirement;
 import dev.proofrun.stats.IndexKind;

@@ -79,7 +79,9 @@ public final class EstimateCommand implements Callable<Integer> {
         }
         String text = json
                 ? new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT).writeValueAsString(CapabilityJson.of(result))
-                : EstimateText.of(file.toString(), result);
+                : EstimateText.of(file.toString(), result, result.normality().isPresent()
+                        && result.normality().get().pValue() < 0.05 ? RoundingCheck.explain(readings.subgroups())
+                        : java.util.Optional.empty());
         PrintWriter out = spec.commandLine().getOut();
         out.println(text);
         out.flush();

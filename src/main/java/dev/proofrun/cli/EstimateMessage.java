@@ -8,6 +8,9 @@ public enum EstimateMessage implements MessageKey {
             + "readings, a normal distribution, a capable gauge). They do not replace the customer's requirements, "
             + "applicable standards or local codes, licensed practice, or the extra controls that safety-critical "
             + "characteristics need."),
+    ROUNDING_LIKELY("The readings lie on a grid of %s (%d distinct values); spread evenly over that step they look normal"
+            + " (Anderson-Darling p = %.3f): rounding by the gauge is the likely cause of the rejected normality test,"
+            + " not the process's shape."),
     NOT_NORMAL("The readings do not look normal (Anderson-Darling p = %.3f): the normal-model indices, bounds and "
             + "ppm may mislead; consider a transformation or a fitted distribution."),
     NORMALITY_NOT_TESTED("Normality not tested: fewer than 8 readings."),

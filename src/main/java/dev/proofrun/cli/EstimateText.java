@@ -19,6 +19,11 @@ final class EstimateText {
     }
 
     static String of(String file, CapabilityResult r) {
+        return of(file, r, java.util.Optional.empty());
+    }
+
+    /** @param rounding the sentence saying rounding likely made the normality test reject, when it did */
+    static String of(String file, CapabilityResult r, java.util.Optional<String> rounding) {
         StringBuilder sb = new StringBuilder();
         line(sb, "Capability estimate for %s", file);
         String shape;
@@ -59,6 +64,7 @@ final class EstimateText {
             line(sb, "%s", EstimateMessage.NORMALITY_NOT_TESTED.format());
         } else if (r.normality().get().pValue() < 0.05) {
             line(sb, "%s", EstimateMessage.NOT_NORMAL.format(r.normality().get().pValue()));
+            rounding.ifPresent(t -> line(sb, "%s", t));
         }
         OptionalDouble cpk = r.indices().cpk();
         OptionalDouble ppk = r.indices().ppk();

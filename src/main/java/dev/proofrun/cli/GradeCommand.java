@@ -102,9 +102,8 @@ public final class GradeCommand implements Callable<Integer> {
         for (CharacteristicGrade g : r.characteristics()) {
             out.println();
             out.printf(Locale.ROOT, "%s %s: %s%n", g.id(), g.name(), g.verdict().id());
-            if (g.judged() != null) {
-                out.printf(Locale.ROOT, "  %s under the %s model, %s%n", g.judged().index().symbol(),
-                        g.judged().model().id(), g.judged().method().words());
+            if (g.judged() != null && g.verdict() != dev.proofrun.grade.Verdict.NOT_VALID) {
+                out.println("  " + g.judged().summary() + ".");
             }
             for (Reason reason : g.reasons()) {
                 out.println("  - " + reason.text());

@@ -5,6 +5,7 @@ import dev.proofrun.control.ControlChart;
 import dev.proofrun.grade.CharacteristicGrade;
 import dev.proofrun.grade.ChartSignal;
 import dev.proofrun.grade.GradeResult;
+import dev.proofrun.grade.IndexEvidence;
 import dev.proofrun.grade.Problem;
 import dev.proofrun.grade.Reason;
 import java.util.ArrayList;
@@ -14,8 +15,16 @@ import java.util.Map;
 
 /**
  * The {@code proofrun grade --json} object: plan {id, revision}, problems, characteristics, verdict.
- * Undefined values are {@code null}. The capability keys shared with {@code proofrun estimate} come from
- * {@link CapabilityKeys}.
+ * Undefined values are {@code null}.
+ *
+ * <p>Each characteristic leads with what its verdict rests on: {@code index} (the required index), {@code method}
+ * ({@link dev.proofrun.grade.IndexMethod}), {@code model} (the distribution model), {@code estimate},
+ * {@code lower} and {@code upper} (its confidence bounds, numbers; {@code upper} only when the estimate is below
+ * the requirement), {@code required}, {@code confidence}, then {@code verdict}. The normal-theory capability
+ * figures of the raw readings — the keys and meanings of {@code proofrun estimate --json}, from
+ * {@link CapabilityKeys} — sit under {@code normalTheory}, never at the top level, so that a figure another model
+ * contradicts cannot be read beside the verdict as if it carried it ({@code normalTheory.carriesVerdict} says
+ * whether it did).
  */
 final class GradeJson {
 
@@ -53,7 +62,25 @@ final class GradeJson {
         Map<String, Object> m = new LinkedHashMap<>();
         m.put("id", g.id());
         m.put("name", g.name());
-        m.putAll(CapabilityKeys.of(g));
+        IndexEvidence e = g.judged();
+        m.put("index", g.requirement().index().symbol());
+        m.put("method", e == null ? null : e.method().id());
+        m.put("model", e == null ? null : e.model().id());
+        m.put("estimate", e == null ? null : finite(e.estimate()));
+        m.put("lower", e == null ? null : finite(e.lower()));
+        m.put("upper", e == null ? null : finite(e.upper()));
+        m.put("required", g.requirement().minimum());
+        m.put("confidence", g.requirement().confidence());
+        m.put("verdict", g.verdict().id());
+        m.put("expectedPpm", e == null ? null : finite(e.expectedPpm()));
+        m.put("seed", e == null ? null : e.seed());
+        m.put("readings", g.completeness().readings());
+        m.put("subgroups", g.completeness().completeSubgroups());
+        m.put("subgroupSize", g.completeness().subgroupSize());
+        Map<String, Object> normalTheory = new LinkedHashMap<>();
+        normalTheory.put("carriesVerdict", e != null && !e.otherThanNormalTheory());
+        normalTheory.putAll(CapabilityKeys.of(g));
+        m.put("normalTheory", normalTheory);
         Map<String, Object> control = null;
         Double ratio = null;
         if (g.stability() != null) {
@@ -84,33 +111,12 @@ final class GradeJson {
             normality.put("fits", g.shape().modelFits());
         }
         m.put("normality", normality);
-        m.put("judged", judged(g.judged()));
-        m.put("verdict", g.verdict().id());
         List<String> reasons = new ArrayList<>();
         for (Reason reason : g.reasons()) {
             reasons.add(reason.text());
         }
         m.put("reasons", reasons);
         m.put("additionalSubgroups", g.additionalSubgroups().isPresent() ? g.additionalSubgroups().getAsInt() : null);
-        return m;
-    }
-
-    /** The required index as the verdict judged it: the model and method named, the seed of pivotal bounds. */
-    private static Map<String, Object> judged(dev.proofrun.grade.IndexEvidence e) {
-        if (e == null) {
-            return null;
-        }
-        Map<String, Object> m = new LinkedHashMap<>();
-        m.put("index", e.index().token());
-        m.put("model", e.model().id());
-        m.put("method", e.method().id());
-        m.put("estimate", finite(e.estimate()));
-        m.put("lower", finite(e.lower()));
-        m.put("upper", finite(e.upper()));
-        m.put("required", e.required());
-        m.put("confidence", e.confidence());
-        m.put("expectedPpm", finite(e.expectedPpm()));
-        m.put("seed", e.seed());
         return m;
     }
 

@@ -86,7 +86,8 @@ public final class PlanNewCommand implements Callable<Integer> {
     @Option(names = "--shape", paramLabel = "NAME",
             description = "The distribution the readings are planned to follow: normal (default), lognormal or weibull.")
     String shape;
-    @Option(names = "--gauge", paramLabel = "NAME", description = "Gauge name (with --resolution).")
+    @Option(names = "--gauge", paramLabel = "NAME", description = "Gauge name (with --resolution; a resolution alone"
+            + " is kept for an unnamed gauge).")
     String gauge;
     @Option(names = "--resolution", paramLabel = "R", description = "Gauge resolution.")
     Double resolution;
@@ -157,6 +158,9 @@ public final class PlanNewCommand implements Callable<Integer> {
     @Option(names = "--seed", paramLabel = "N", description = "Seed of the random spacing (default: a new one, stored in the plan).")
     Long seed;
 
+    /** The name a gauge gets when only its resolution is given. */
+    static final String UNNAMED_GAUGE = "gauge (not named)";
+
     @Override
     public Integer call() {
         if (Files.exists(out) && !force) {
@@ -177,6 +181,9 @@ public final class PlanNewCommand implements Callable<Integer> {
         PrintWriter w = spec.commandLine().getOut();
         if (rate == null && cycleSeconds == null) {
             w.println(PlanOptionMessage.RATE_ASSUMED.format(PlanSyntax.number(DEFAULT_RATE)));
+        }
+        for (Characteristic c : chars) {
+            GaugeCheck.ruleOfTen(c).ifPresent(w::println);
         }
         w.println(design.reason());
         for (Characteristic c : chars) {
@@ -217,8 +224,11 @@ public final class PlanNewCommand implements Callable<Integer> {
         Requirement req = option("--target", () -> Requirement.of(kind, target, confidence));
         Expectation exp = option("--expected", () -> expectedCp == null ? Expectation.centred(expected)
                 : Expectation.offCentre(expected, expectedCp));
-        Optional<Gauge> g = gauge == null ? Optional.empty() : Optional.of(option("--gauge", () -> new Gauge(gauge,
-                resolution == null ? Double.NaN : resolution, gaugeSd == null ? OptionalDouble.empty() : OptionalDouble.of(gaugeSd))));
+        // a resolution without a gauge name is kept (for an unnamed gauge): grading needs the step either way
+        Optional<Gauge> g = gauge == null && resolution == null ? Optional.empty()
+                : Optional.of(option(gauge != null ? "--gauge" : "--resolution", () -> new Gauge(
+                        gauge != null ? gauge : UNNAMED_GAUGE, resolution == null ? Double.NaN : resolution,
+                        gaugeSd == null ? OptionalDouble.empty() : OptionalDouble.of(gaugeSd))));
         ShapeFamily family = shape == null ? ShapeFamily.NORMAL : Conventions.shape(shape);
         return List.of(option("--characteristic", () -> new Characteristic(characteristicId == null ? "C1" : characteristicId,
                 characteristic, unit, nominal == null ? OptionalDouble.empty() : OptionalDouble.of(nominal), specLimits, g, req, exp,

@@ -91,15 +91,15 @@ final class SharedSize {
     void print(PrintWriter out) {
         int w = Math.max(6, characteristics.stream().mapToInt(c -> c.id().length()).max().orElse(0));
         out.println(SizeMessage.SHARED_HEADING.format(characteristics.size(), file));
-        out.printf(Locale.ROOT, "   n     k      N  %-" + w + "s  %-13s lowest    false alarm       detection%n",
+        out.printf(Locale.ROOT, "   n     k      N  %-" + w + "s  %-13s lowest   called unstable    some rule fires%n",
                 "driver", "limited by");
-        out.printf(Locale.ROOT, "                   %" + w + "s  %13s  power     3σ   all rules    3σ   all rules%n", "", "");
+        out.printf(Locale.ROOT, "                   %" + w + "s  %13s  power   stable   shift    stable   shift%n", "", "");
         for (SharedDesign d : bySize()) {
             double lowest = d.powers().stream().mapToDouble(Double::doubleValue).min().orElseThrow();
             out.printf(Locale.ROOT, "%s%3d %5d %6d  %-" + w + "s  %-13s %6.3f  %6.3f  %6.3f  %6.3f  %6.3f%n",
                     d == designs.get(0) ? "*" : " ", d.subgroupSize(), d.subgroups(), d.readings(),
-                    characteristics.get(d.driver()).id(), d.limitedBy().token(), lowest, d.falseAlarm().beyondLimits(),
-                    d.falseAlarm().allRules(), d.detection().beyondLimits(), d.detection().allRules());
+                    characteristics.get(d.driver()).id(), d.limitedBy().token(), lowest, d.falseAlarm(),
+                    d.detection(), d.anySignalFalseAlarm().allRules(), d.anySignalDetection().allRules());
         }
         out.println(SizeMessage.SHARED_CHART_RISKS.format(characteristics.size()));
         out.println();
@@ -130,7 +130,7 @@ final class SharedSize {
      * {@code characteristics} ({@code id, index, target, confidence, expected}), {@code designs} (one per
      * subgroup size every characteristic can use, by size: {@code subgroupSize, subgroups, readings,
      * driver, limitedBy, characteristics: [{id, power, subgroupsAlone}], allDemonstratedIfIndependent,
-     * falseAlarm, detection}),
+     * falseAlarm, detection (the grader's: numbers), anySignalFalseAlarm, anySignalDetection}),
      * {@code recommended} (the first design plus {@code reason}) and {@code warnings}.
      */
     Map<String, Object> json() {
@@ -179,8 +179,10 @@ final class SharedSize {
         }
         m.put("characteristics", each);
         m.put("allDemonstratedIfIndependent", SizeJson.round(d.allDemonstratedIfIndependent(), 4));
-        m.put("falseAlarm", SizeJson.risk(d.falseAlarm()));
-        m.put("detection", SizeJson.risk(d.detection()));
+        m.put("falseAlarm", SizeJson.round(d.falseAlarm(), 4));
+        m.put("detection", SizeJson.round(d.detection(), 4));
+        m.put("anySignalFalseAlarm", SizeJson.risk(d.anySignalFalseAlarm()));
+        m.put("anySignalDetection", SizeJson.risk(d.anySignalDetection()));
         return m;
     }
 }

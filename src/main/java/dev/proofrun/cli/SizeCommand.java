@@ -11,6 +11,7 @@ import dev.proofrun.design.Expectation;
 import dev.proofrun.design.Floors;
 import dev.proofrun.design.OcPoint;
 import dev.proofrun.design.PowerPoint;
+import dev.proofrun.design.ProcedurePower;
 import dev.proofrun.design.ProcessFacts;
 import dev.proofrun.design.Requirement;
 import dev.proofrun.design.StudyDesigner;
@@ -99,9 +100,15 @@ public final class SizeCommand implements Callable<Integer> {
     @Option(names = "--min-readings", defaultValue = "100", description = "Floor on readings (default ${DEFAULT-VALUE}).")
     int minReadings;
 
-    @Option(names = "--shift", defaultValue = "1.0", paramLabel = "DELTA",
-            description = "Mean shift, in within standard deviations, the chart should catch (default ${DEFAULT-VALUE}).")
+    @Option(names = "--shift", defaultValue = "1.5", paramLabel = "DELTA",
+            description = "Mean shift for the second half of the study, in within standard deviations, whose detection"
+                    + " is shown (default ${DEFAULT-VALUE}).")
     double shift;
+
+    @Option(names = "--loss-rate", defaultValue = "0", paramLabel = "P",
+            description = "Chance that one planned subgroup is lost; the power counts the losses the plan allows"
+                    + " (a tenth of the subgroups) and the smaller study they leave (default ${DEFAULT-VALUE}).")
+    double lossRate;
 
     @Option(names = "--pilot", paramLabel = "FILE.csv",
             description = "Pilot readings (read as 'estimate' reads them, needs --lsl/--usl): the expected index.")
@@ -211,7 +218,7 @@ public final class SizeCommand implements Callable<Integer> {
                 ? IntStream.rangeClosed(1, 10).boxed().toList() : subgroupSizes;
         Floors floors = wrap(() -> new Floors(minSubgroups, minReadings));
         return new DesignRequest(specSides, requirement, expectation, power, sizes, Conventions.sigma(sigma),
-                Conventions.bound(bound), floors, shift, notes);
+                Conventions.bound(bound), floors, shift, lossRate, notes);
     }
 
     DesignRequest request() {
@@ -274,14 +281,16 @@ public final class SizeCommand implements Callable<Integer> {
     }
 
     private void print(PrintWriter out, DesignTable t, DesignRequest request) {
-        out.println("   n     k      N   power    c*      df  limited by      false alarm       detection");
-        out.println("                                                          3σ   all rules    3σ   all rules");
+        out.println("   n     k      N   power   bound    c*      df  limited by     called unstable   some rule fires");
+        out.println("                          alone                                  stable   shift    stable   shift");
         for (DesignRow r : t.rows()) {
-            out.printf(Locale.ROOT, "%s%3d %5d %6d  %6.3f  %6.3f  %6.1f  %-13s %6.3f  %6s  %6.3f  %6s%n",
+            out.printf(Locale.ROOT, "%s%3d %5d %6d  %6.3f  %6.3f  %6.3f  %6.1f  %-13s %6.3f  %6.3f    %6s  %6s%n",
                     r == t.recommended() ? "*" : " ", r.subgroupSize(), r.subgroups(), r.readings(), r.power(),
-                    r.criticalEstimate(), r.degreesOfFreedom(), r.limitedBy().token(), r.falseAlarm().beyondLimits(),
-                    rules(r.falseAlarm()), r.detection().beyondLimits(), rules(r.detection()));
+                    r.boundPower(), r.criticalEstimate(), r.degreesOfFreedom(), r.limitedBy().token(), r.falseAlarm(),
+                    r.detection(), rules(r.anySignalFalseAlarm()), rules(r.anySignalDetection()));
         }
+        out.println(SizeMessage.POWER_EXPLAINED.format(100 * ProcedurePower.NORMAL_SHAPE_REJECTION,
+                t.recommended().shift(), PlanSyntax.number(request.lossRate())));
         out.println();
         out.println("Recommended: " + t.reason());
         out.println();

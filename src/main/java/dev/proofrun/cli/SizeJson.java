@@ -11,9 +11,12 @@ import java.util.Map;
 /**
  * The JSON shape of {@code proofrun size --json}: {@code designs} (one object per subgroup size),
  * {@code recommended} (one of them plus {@code reason}), {@code operatingCharacteristic}
- * ({@code trueIndex}, {@code probability}) and {@code warnings}. {@code falseAlarm} and {@code detection}
- * are objects with {@code beyondLimits} (3σ rule alone) and {@code allRules} (all eight run rules; null
- * when not computed).
+ * ({@code trueIndex}, {@code probability}: the whole procedure's) and {@code warnings}. {@code power} is the
+ * chance that the grader returns demonstrated (every gate counted), {@code boundPower} the lower bound's alone.
+ * {@code falseAlarm} and {@code detection} are the grader's chances of calling the process unstable (stable;
+ * mean moved by {@code shift}·σ_w for the second half). {@code anySignalFalseAlarm} and
+ * {@code anySignalDetection} are objects with {@code beyondLimits} (3σ rule alone) and {@code allRules} (all
+ * eight run rules; null when not computed): the chance that some rule fires, not the grader's decision.
  */
 final class SizeJson {
 
@@ -48,11 +51,15 @@ final class SizeJson {
         m.put("subgroups", r.subgroups());
         m.put("readings", r.readings());
         m.put("power", round(r.power(), 4));
+        m.put("boundPower", round(r.boundPower(), 4));
         m.put("criticalEstimate", round(r.criticalEstimate(), 4));
         m.put("degreesOfFreedom", round(r.degreesOfFreedom(), 2));
         m.put("limitedBy", r.limitedBy().token());
-        m.put("falseAlarm", risk(r.falseAlarm()));
-        m.put("detection", risk(r.detection()));
+        m.put("falseAlarm", round(r.falseAlarm(), 4));
+        m.put("detection", round(r.detection(), 4));
+        m.put("shift", r.shift());
+        m.put("anySignalFalseAlarm", risk(r.anySignalFalseAlarm()));
+        m.put("anySignalDetection", risk(r.anySignalDetection()));
         return m;
     }
 

@@ -10,8 +10,13 @@ public enum SizeMessage implements MessageKey {
     SHARED_HEADING("One design for %d characteristics measured on the same parts (%s):"),
     SHARED_REASON("%d subgroups of %d (%d readings of each characteristic) is the fewest readings that %s of every"
             + " size tried; %s needs the most subgroups."),
-    SHARED_CHART_RISKS("False alarm and detection are for one characteristic's mean chart; with %d charts the chance"
-            + " that at least one signals is higher."),
+    SHARED_CHART_RISKS("'Called unstable' is the chance that grading calls one characteristic unstable (stable, and"
+            + " after a mean shift for the second half); 'some rule fires' is one characteristic's mean chart. With %d"
+            + " characteristics the chance that at least one is called unstable is higher."),
+    POWER_EXPLAINED("power: the chance that grading returns 'demonstrated' when the process is as expected, every"
+            + " check counted: the lower bound ('bound alone'), the shape check (%.0f %% of normal readings rejected),"
+            + " grading's stability rule ('called unstable': stable; after a %.1f sigma mean shift for the second"
+            + " half), subgroups lost at rate %s within the plan's allowance."),
     SHARED_ALL_TOGETHER("The part needs all %d demonstrated in this one study: if their readings are independent,"
             + " the chance of that is about %.3f (the product of their powers); correlated characteristics move it."
             + " To raise it, ask each characteristic for more power."),

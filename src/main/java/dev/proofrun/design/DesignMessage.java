@@ -16,6 +16,7 @@ public enum DesignMessage implements MessageKey {
     BAD_SUBGROUP_SIZE("subgroup size must be between 1 and %d: %d"),
     SIGMA_DOES_NOT_SUIT("sigma method %s does not suit subgroups of %d"),
     BAD_SHIFT("shift to detect must be positive (in within standard deviations): %s"),
+    BAD_LOSS_RATE("the chance of losing a subgroup must be at least 0 and below 1: %s"),
     BAD_EXPECTATION("%s"),
     BAD_FLOOR("%s"),
     POTENTIAL_IGNORED("the expected Cp is used only for two-sided Cpk/Ppk requirements; ignored for %s"),

@@ -20,19 +20,23 @@ import java.util.stream.IntStream;
  *                      n = 1 always uses the moving range.
  * @param boundMethod   how the grade will compute the bound
  * @param floors        practice floors
- * @param shift         δ, the mean shift in within standard deviations the chart should catch (default 1)
+ * @param shift         δ, the mean shift in within standard deviations for the second half of the study whose
+ *                      detection the design reports (default {@value #DEFAULT_SHIFT})
+ * @param lossRate      the chance that one planned subgroup is lost (binomial, independent; default 0): the power
+ *                      counts the studies that lose at most the plan's allowance ({@link LossAllowance}) and
+ *                      the smaller study they leave
  * @param notes         warnings already known about the expectation (pilot, gauge), shown with the table
  */
 public record DesignRequest(SpecLimits.Sides sides, Requirement requirement, Expectation expectation, double power,
         List<Integer> subgroupSizes, Optional<SigmaMethod> sigmaMethod, BoundMethod boundMethod, Floors floors,
-        double shift, List<String> notes) {
+        double shift, double lossRate, List<String> notes) {
 
     /** Largest subgroup size the designer plans for. */
     public static final int MAX_SUBGROUP_SIZE = 25;
     /** Default wanted power. */
     public static final double DEFAULT_POWER = 0.90;
     /** Default shift to detect, in within standard deviations. */
-    public static final double DEFAULT_SHIFT = 1.0;
+    public static final double DEFAULT_SHIFT = 1.5;
 
     /**
      * @throws UserException if the power, a subgroup size, the shift or the sigma method is unusable, or the
@@ -58,60 +62,68 @@ public record DesignRequest(SpecLimits.Sides sides, Requirement requirement, Exp
         if (!(shift > 0) || !Double.isFinite(shift)) {
             throw new UserException(DesignMessage.BAD_SHIFT, shift);
         }
+        if (!(lossRate >= 0 && lossRate < 1)) {
+            throw new UserException(DesignMessage.BAD_LOSS_RATE, lossRate);
+        }
         notes = List.copyOf(notes);
         IndexShape.of(requirement.index(), sides);
     }
 
-    /** Defaults: power 0.90, n = 1–10, default estimators, exact bound, floors 25/100, δ = 1. */
+    /** Defaults: power 0.90, n = 1–10, default estimators, exact bound, floors 25/100, δ = 1.5, no losses. */
     public static DesignRequest of(SpecLimits.Sides sides, Requirement requirement, Expectation expectation) {
         return new DesignRequest(sides, requirement, expectation, DEFAULT_POWER,
                 IntStream.rangeClosed(1, 10).boxed().toList(), Optional.empty(), BoundMethod.EXACT,
-                Floors.defaults(), DEFAULT_SHIFT, List.of());
+                Floors.defaults(), DEFAULT_SHIFT, 0, List.of());
     }
 
     public DesignRequest withPower(double p) {
         return new DesignRequest(sides, requirement, expectation, p, subgroupSizes, sigmaMethod, boundMethod, floors,
-                shift, notes);
+                shift, lossRate, notes);
     }
 
     public DesignRequest withSubgroupSizes(List<Integer> sizes) {
         return new DesignRequest(sides, requirement, expectation, power, sizes, sigmaMethod, boundMethod, floors,
-                shift, notes);
+                shift, lossRate, notes);
     }
 
     public DesignRequest withSigmaMethod(SigmaMethod m) {
         return new DesignRequest(sides, requirement, expectation, power, subgroupSizes, Optional.ofNullable(m),
-                boundMethod, floors, shift, notes);
+                boundMethod, floors, shift, lossRate, notes);
     }
 
     public DesignRequest withBoundMethod(BoundMethod m) {
         return new DesignRequest(sides, requirement, expectation, power, subgroupSizes, sigmaMethod, m, floors,
-                shift, notes);
+                shift, lossRate, notes);
     }
 
     public DesignRequest withFloors(Floors f) {
         return new DesignRequest(sides, requirement, expectation, power, subgroupSizes, sigmaMethod, boundMethod, f,
-                shift, notes);
+                shift, lossRate, notes);
     }
 
     public DesignRequest withShift(double delta) {
         return new DesignRequest(sides, requirement, expectation, power, subgroupSizes, sigmaMethod, boundMethod,
-                floors, delta, notes);
+                floors, delta, lossRate, notes);
+    }
+
+    public DesignRequest withLossRate(double p) {
+        return new DesignRequest(sides, requirement, expectation, power, subgroupSizes, sigmaMethod, boundMethod,
+                floors, shift, p, notes);
     }
 
     public DesignRequest withExpectation(Expectation e) {
         return new DesignRequest(sides, requirement, e, power, subgroupSizes, sigmaMethod, boundMethod, floors, shift,
-                notes);
+                lossRate, notes);
     }
 
     public DesignRequest withRequirement(Requirement r) {
         return new DesignRequest(sides, r, expectation, power, subgroupSizes, sigmaMethod, boundMethod, floors, shift,
-                notes);
+                lossRate, notes);
     }
 
     public DesignRequest withNotes(List<String> more) {
         return new DesignRequest(sides, requirement, expectation, power, subgroupSizes, sigmaMethod, boundMethod,
-                floors, shift, more);
+                floors, shift, lossRate, more);
     }
 
     /**

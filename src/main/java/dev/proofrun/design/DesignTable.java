@@ -9,7 +9,8 @@ import java.util.List;
  * @param recommended             the design with the fewest readings (on a tie, the most subgroups)
  * @param reason                  one sentence saying why it is recommended
  * @param operatingCharacteristic probability of demonstrating against the true index, recommended design
- * @param powerCurve              power against k for the recommended subgroup size
+ * @param powerCurve              the whole procedure's power against k for the recommended subgroup size, the
+ *                                stability gate's rate taken at the recommended k
  * @param warnings                things the engineer must know (pilot uncertainty, gauge, unreachable sizes)
  */
 public record DesignTable(List<DesignRow> rows, DesignRow recommended, String reason,

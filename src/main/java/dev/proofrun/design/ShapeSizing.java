@@ -1,8 +1,11 @@
 package dev.proofrun.design;
 
+import dev.proofrun.control.ChartKind;
+import dev.proofrun.control.StabilityRisk;
 import dev.proofrun.stats.IndexKind;
 import dev.proofrun.stats.PercentilePower;
 import dev.proofrun.stats.ShapeFamily;
+import dev.proofrun.stats.SigmaMethod;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -16,13 +19,22 @@ import java.util.OptionalInt;
  * an overall one, so the power depends on N = n·k only: the smallest N is found once (doubling, then bisection
  * on N up to {@value #MAX_READINGS}), then each n gets k = ⌈N/n⌉ raised to the floors (and stepped up while the
  * simulated power at its own N, which wobbles by its Monte-Carlo error, is below the wanted one), and its power
- * is computed at its own N. The shape check and the stability step are not counted.
+ * is computed at its own N.
+ *
+ * <p>The row's power is the whole procedure's, as for the normal model ({@link ProcedurePower}): the bound's power
+ * times the chance that the shape check lets a process of the planned shape through (its level,
+ * {@link ProcedurePower#NORMAL_SHAPE_REJECTION}: the lognormal check is the normal one on ln x, the Weibull check
+ * is held to the same level) and the chance that the stability step, which charts the readings' normal scores under
+ * the fitted model, does not call the stable process unstable — the grader's own rule at (n, k) for an overall
+ * index ({@code control.StabilityRisk}). The bound's own power stays beside it ({@link Row#boundPower()}).
  */
 public final class ShapeSizing {
 
     /** The largest study searched. */
     public static final int MAX_READINGS = 5000;
     private static final int MAX_STEPS = 25;
+    /** A typical false-unstable rate of the grader's stability step, where the search for N starts (about 0.6-1 %). */
+    private static final double TYPICAL_UNSTABLE = 0.008;
 
     private ShapeSizing() {
     }
@@ -33,9 +45,17 @@ public final class ShapeSizing {
      * @param subgroupSize n
      * @param subgroups    k
      * @param readings     N
-     * @param power        the power at N (Monte-Carlo standard error at most 0.004 lognormal, 0.008 Weibull)
+     * @param power        the whole procedure's power at (n, k): the bound's, the shape check and the stability step
+     * @param boundPower     the bound's power at N alone (Monte-Carlo standard error at most 0.004 lognormal, 0.008
+     *                       Weibull)
      */
-    public record Row(int subgroupSize, int subgroups, int readings, double power) {
+    public record Row(int subgroupSize, int subgroups, int readings, double power, double boundPower) {
+    }
+
+    /** (1 − shape rejection)·(1 − false unstable at (n, k)): the chance that both gates let a good study through. */
+    public static double gates(int n, int k) {
+        ChartKind chart = ChartKind.forMethod(SigmaMethod.defaultFor(n));
+        return (1 - ProcedurePower.NORMAL_SHAPE_REJECTION) * (1 - StabilityRisk.falseUnstable(chart, n, k, true));
     }
 
     /**
@@ -54,7 +74,9 @@ public final class ShapeSizing {
         Map<Integer, Double> cache = new java.util.concurrent.ConcurrentHashMap<>();
         java.util.function.IntToDoubleFunction power = n -> cache.computeIfAbsent(n,
                 x -> PercentilePower.power(family, parameter, side, c0, c1, confidence, x));
-        OptionalInt needed = smallestReadings(power, wanted, Math.max(3, floors.minReadings()));
+        // the gates take about 1-2 % off the bound's power: start each row where the bound alone reaches that much more
+        double start = Math.min(wanted / (1 - ProcedurePower.NORMAL_SHAPE_REJECTION) / (1 - TYPICAL_UNSTABLE), 0.999);
+        OptionalInt needed = smallestReadings(power, start, Math.max(3, floors.minReadings()));
         List<Row> rows = new ArrayList<>();
         if (needed.isEmpty()) {
             return rows;
@@ -65,10 +87,12 @@ public final class ShapeSizing {
             int k = firstK(n, needed.getAsInt(), floors);
             // the simulated power wobbles by its Monte-Carlo error from one N to the next: step k up until this
             // row's own power reaches the wanted one
-            for (int step = 0; step < MAX_STEPS && power.applyAsDouble(n * k) < wanted && n * (k + 1) <= MAX_READINGS; step++) {
+            for (int step = 0; step < MAX_STEPS && power.applyAsDouble(n * k) * gates(n, k) < wanted
+                    && n * (k + 1) <= MAX_READINGS; step++) {
                 k++;
             }
-            rows.add(new Row(n, k, n * k, power.applyAsDouble(n * k)));
+            double bound = power.applyAsDouble(n * k);
+            rows.add(new Row(n, k, n * k, bound * gates(n, k), bound));
         }
         return rows;
     }

@@ -13,13 +13,16 @@ import java.util.List;
  * @param ownSubgroups the k each characteristic would need on its own at this n, in request order
  * @param driver       the index (in request order) of the characteristic that drives k (the first of equals)
  * @param limitedBy    what limited the driver's k
- * @param falseAlarm   the chance that one characteristic's mean chart signals on a stable process during the
- *                     study (the same for every characteristic: it depends on n and k only)
- * @param detection    the chance that one characteristic's mean chart signals when its mean sits δ·σ_w off
- *                     centre for the second half of the study
+ * @param falseAlarm   the chance that the grader calls one characteristic's stable process unstable (the same for
+ *                     every characteristic: it depends on n and k only)
+ * @param detection    the chance that the grader calls it unstable when its mean moves by δ·σ_w for the second
+ *                     half of the study
+ * @param anySignalFalseAlarm the chance that some rule fires at least once on one characteristic's stable chart
+ * @param anySignalDetection  the chance that some rule fires at least once when the mean moves as above
  */
 public record SharedDesign(int subgroupSize, int subgroups, int readings, List<Double> powers,
-        List<Integer> ownSubgroups, int driver, LimitedBy limitedBy, ChartRisk falseAlarm, ChartRisk detection) {
+        List<Integer> ownSubgroups, int driver, LimitedBy limitedBy, double falseAlarm, double detection,
+        ChartRisk anySignalFalseAlarm, ChartRisk anySignalDetection) {
 
     public SharedDesign {
         powers = List.copyOf(powers);

@@ -66,8 +66,9 @@ public final class SharedDesigner {
                 powers.add(searches.get(i).power(k));
                 own.add(rows.get(i).subgroups());
             }
-            DesignRow d = rows.get(driver);
-            out.add(new SharedDesign(n, k, n * k, powers, own, driver, d.limitedBy(), d.falseAlarm(), d.detection()));
+            DesignRow d = searches.get(driver).rowAt(k, rows.get(driver).limitedBy());
+            out.add(new SharedDesign(n, k, n * k, powers, own, driver, d.limitedBy(), d.falseAlarm(), d.detection(),
+                    d.anySignalFalseAlarm(), d.anySignalDetection()));
         }
         if (out.isEmpty()) {
             throw new UserException(DesignMessage.UNREACHABLE, requests.get(0).power(), StudyDesigner.MAX_READINGS,

@@ -8,12 +8,14 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
 import java.util.TreeSet;
 
 /**
  * Plans a capability study: for each candidate subgroup size n, the smallest number of subgroups k whose
- * power (the chance that the lower confidence bound of the estimated index reaches c₀ when the process is
- * as expected, see {@link StudyPower}) reaches the wanted power, raised to the practice {@link Floors};
+ * power (the chance that the grader returns demonstrated when the process is as expected — the exact power of
+ * the lower bound, see {@link StudyPower}, with every gate of the grader counted, see {@link ProcedurePower})
+ * reaches the wanted power, raised to the practice {@link Floors};
  * the stability side of each design ({@link ChartRisks}, {@link RuleRisks}); a recommended design; the
  * operating-characteristic curve and the power curve.
  *
@@ -53,9 +55,13 @@ public final class StudyDesigner {
         List<DesignRow> rows = new ArrayList<>();
         double bestPower = 0;
         int bestN = request.subgroupSizes().get(0);
-        for (int n : request.subgroupSizes()) {
-            SizeSearch search = new SizeSearch(request, n);
-            DesignRow row = search.row();
+        // the sizes are independent searches (each may simulate the grader's stability decision): both cores
+        List<SizeSearch> searches = request.subgroupSizes().stream().map(n -> new SizeSearch(request, n)).toList();
+        List<Optional<DesignRow>> found = searches.parallelStream().map(s -> Optional.ofNullable(s.row())).toList();
+        for (int i = 0; i < searches.size(); i++) {
+            SizeSearch search = searches.get(i);
+            int n = search.subgroupSize();
+            DesignRow row = found.get(i).orElse(null);
             if (row == null) {
                 warnings.add(DesignMessage.UNREACHABLE_FOR_SIZE.format(n, request.power(), MAX_READINGS));
                 if (search.bestPower() > bestPower) {
@@ -71,7 +77,7 @@ public final class StudyDesigner {
         }
         DesignRow best = recommend(rows);
         String reason = reason(request, best, rows);
-        SizeSearch chosen = new SizeSearch(request, best.subgroupSize());
+        SizeSearch chosen = searches.get(request.subgroupSizes().indexOf(best.subgroupSize()));
         return new DesignTable(rows, best, reason, operatingCharacteristic(request, chosen, best.subgroups()),
                 powerCurve(chosen, best.subgroups()), warnings);
     }
@@ -103,8 +109,8 @@ public final class StudyDesigner {
     }
 
     /**
-     * The power of one given design — k subgroups of n — for the request: the chance that its lower bound
-     * reaches c0 when the process is as expected, computed as the table's rows are (a plan that keeps its
+     * The power of one given design — k subgroups of n — for the request: the chance that the grader returns
+     * demonstrated when the process is as expected, every gate counted ({@link ProcedurePower}), computed as the table's rows are (a plan that keeps its
      * own k needs its power, not a value read between points of the power curve).
      *
      * @throws IllegalArgumentException if n &lt; 1, if k is too small for the estimator to have 2 degrees of
@@ -129,7 +135,6 @@ public final class StudyDesigner {
         double lo = Math.max(0.05 * c0, c0 - (c1 - c0));
         double hi = c1 + (c1 - c0);
         double keep = c1 / request.expectation().potentialOrIndex();
-        StudyPower power = search.model(k);
         // an even grid, plus c0 and c1 themselves: the curve's two readings that matter (the customer's
         // risk at the requirement, the power at the expectation) are computed, not interpolated
         TreeSet<Double> at = new TreeSet<>(List.of(c0, c1));
@@ -141,7 +146,7 @@ public final class StudyDesigner {
         }
         List<OcPoint> points = new ArrayList<>(at.size());
         for (double c : at) {
-            points.add(new OcPoint(c, power.power(c, c / keep)));
+            points.add(new OcPoint(c, search.powerAt(k, c, c / keep)));
         }
         return points;
     }
@@ -151,8 +156,11 @@ public final class StudyDesigner {
         int last = Math.min(search.largestK(), Math.max(2 * chosenK, chosenK + 10));
         int step = Math.max(1, (last - first) / CURVE_POINTS);
         List<PowerPoint> points = new ArrayList<>();
+        // the stability gate's rate costs a simulation per k; over the curve it changes by tenths of a percent,
+        // so the curve takes it at the chosen k (the rows and power(request, n, k) take it at their own k)
+        double unstable = search.falseUnstable(chosenK);
         for (int k = first; k <= last; k += step) {
-            points.add(new PowerPoint(k, k * search.subgroupSize(), search.power(k)));
+            points.add(new PowerPoint(k, k * search.subgroupSize(), search.powerWithUnstable(k, unstable)));
         }
         return points;
     }

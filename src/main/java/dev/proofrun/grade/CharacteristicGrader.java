@@ -61,11 +61,22 @@ final class CharacteristicGrader {
                     null, null, null, null, Verdict.NOT_VALID, reasons, OptionalInt.empty());
         }
 
+        java.util.Optional<Reason> noSpread = NoSpread.check(subgroups);
+        if (noSpread.isPresent()) {
+            reasons.add(noSpread.get());
+            return new CharacteristicGrade(gc.id(), gc.name(), gc.unit(), gc.limits(), req, c, subgroups, data.slots(),
+                    null, null, null, null, Verdict.NOT_VALID, reasons, OptionalInt.empty());
+        }
+
         // the shape step (a sort of all readings) runs beside the stability step; each is seeded on its own,
         // so the result does not depend on the order, and the reasons keep the order of the steps
         List<Reason> shapeReasons = new ArrayList<>();
-        FutureTask<Shape> shapeTask = new FutureTask<>(() -> ShapeJudge.judge(subgroups, data.slots(), gc.resolution(), gc.shape(),
-                gc.limits(), shapeReasons));
+        GaugeStep step = GaugeStep.of(subgroups, gc.resolution());
+        if (step.known()) {
+            shapeReasons.add(step.reason());
+        }
+        FutureTask<Shape> shapeTask = new FutureTask<>(() -> step.tooCoarse() ? GaugeStep.unjudged(gc.shape())
+                : ShapeJudge.judge(subgroups, data.slots(), step.step(), gc.shape(), gc.limits(), shapeReasons));
         boolean declaredSkew = !gc.shape().isNormal();
         if (!declaredSkew && (long) subgroups.size() * subgroups.get(0).length >= PARALLEL_READINGS) {
             Thread worker = new Thread(shapeTask, "proofrun-shape-" + gc.id());
@@ -77,7 +88,8 @@ final class CharacteristicGrader {
         // under a declared skewed shape the charts look at the readings on the normal scale of the fitted model,
         // so that the chance rate of the run rules is the one they were built for (NormalScores)
         List<double[]> charted = declaredSkew ? NormalScores.of(join(shapeTask), subgroups, reasons) : subgroups;
-        Stability stability = StabilityJudge.judge(ChartKind.forMethod(design.sigmaMethod()), charted, data.slots(), reasons);
+        Stability stability = StabilityJudge.judge(ChartKind.forMethod(design.sigmaMethod()), charted, data.slots(), reasons,
+                !req.index().usesWithinSigma());
         valid &= stability.stable();
         CapabilityResult figures = figures(gc, design, subgroups);
         Shape shape = join(shapeTask);

@@ -35,12 +35,17 @@ public enum GradeMessage implements MessageKey {
     REASON_LATE("%d subgroups were taken outside their slot's window or out of order; they are graded, but the spread over time may differ from the plan."),
     REASON_FLAGGED("%d readings are flagged (off the gauge's resolution or probably mistyped) and were kept."),
     REASON_STABLE_QUIET("Stable: no run rule fired on the %s chart or the %s chart (%d subgroups; about %.2f chance signals expected from a stable process)."),
-    REASON_STABLE_CHANCE("Stable: %d signalled points on the %s chart and %d on the %s chart, within what chance explains for %d subgroups and these rules (about %.2f and %.2f expected; %s and %s). Signals: %s."),
-    REASON_UNSTABLE_SIGNALS("Unstable: %d signalled points on the %s chart and %d on the %s chart, more than chance explains for %d subgroups (about %.2f and %.2f expected; %s and %s). Signals: %s."),
+    REASON_STABLE_CHANCE("Stable: %s on the %s chart and %d on the %s chart, within what chance explains for %d subgroups and these rules (about %.2f and %.2f expected; %s and %s). Signals: %s."),
+    REASON_UNSTABLE_SIGNALS("Unstable: %s on the %s chart and %d on the %s chart, more than chance explains for %d subgroups (about %.2f and %.2f expected; %s and %s). Signals: %s."),
     REASON_UNSTABLE_BETWEEN("Unstable: the subgroup means vary more than the variation within explains: sigma overall/within = %.2f, ANOVA F = %.2f, p = %.2g; Cpk then overstates what the process delivers."),
+    REASON_MEANS_OWN_CHART("For an overall index the subgroup means are judged on their own chart (limits from their moving ranges), so means that vary at random but predictably do not make the process unstable (ISO 22514-2 describes such processes); sigma overall/within = %.2f (ANOVA F = %.2f, p = %.2g) is shown, not used."),
     REASON_RATIO("Sigma overall/within = %.2f (ANOVA F = %.2f, p = %.2g)."),
     REASON_RATIO_INDIVIDUALS("Sigma overall/within = %.2f (individuals: no ANOVA)."),
     REASON_CHARTS_ON_NORMAL_SCALE("The charts look at the readings on the normal scale of the planned %s model fitted to them (z = inverse normal of the model's F(x)), so that the run rules keep the chance rate they were built for; the chart limits are in that scale."),
+    REASON_NO_SPREAD("No spread in the readings: all %d readings are %s. The gauge shows none of the process's variation, so its spread, stability and capability cannot be estimated; measure with a gauge whose step is small against the variation (common practice: at most a tenth of the tolerance)."),
+    REASON_NO_SPREAD_WITHIN("No spread within the subgroups: the %d readings of each subgroup are equal, while the subgroup means differ (%s to %s). The gauge's step is too coarse for the variation between consecutive parts, so the within-subgroup sigma and the capability cannot be estimated; measure with a finer gauge."),
+    REASON_GAUGE_STEP("Gauge: step %s, %s; %.1f steps per standard deviation of the readings (s = %s), about %.0f distinct values across the process spread 6s. The shape test spreads each reading over its step."),
+    REASON_GAUGE_TOO_COARSE("Gauge: the step is too coarse for this spread: step %s, %s, against a standard deviation of the readings of s = %s, about %.0f distinct values across the process spread 6s (proofrun asks for at least 6: a step no larger than s). Rounding shapes these readings more than the process does, so neither their shape nor their capability can be judged; measure with a finer gauge."),
     REASON_TOO_FEW_FOR_CHARTS("Fewer than 2 usable subgroups: no control chart, no capability."),
     REASON_SHAPE_FITS("Shape: the planned %s model fits (%s; Anderson-Darling A2 = %.3f, %s)."),
     REASON_SHAPE_REJECTED("Shape: the planned shape does not fit these readings: the %s model (%s) is rejected at 1 %% (Anderson-Darling A2 = %.3f, %s). Re-plan the characteristic with the shape it really has (plan new --shape) and grade again; no other model is tried here."),
@@ -61,6 +66,7 @@ public enum GradeMessage implements MessageKey {
     REASON_UPPER_ABOVE("The upper bound is above the requirement: the process might reach it, this study does not show it."),
     REASON_INDEX_UNDEFINED("Capability: %s is not defined for this specification."),
     REASON_CAPABILITY_NOT_VALID("Capability: %s = %.3f (lower bound %.3f) describes the study's past, not the process."),
+    JUDGED("%s under the %s model by %s: estimate %.3f, lower %.0f%% bound %.3f, required %.2f"),
     CAUTION("Caution: a statistical statement under assumptions (stability, independence, the fitted distribution, a capable gauge). It does not replace the customer's requirements, applicable standards or local codes, licensed practice, or the extra controls that safety-critical characteristics need.");
 
     private final String english;

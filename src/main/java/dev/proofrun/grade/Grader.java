@@ -1,5 +1,6 @@
 package dev.proofrun.grade;
 
+import dev.proofrun.control.ChanceSignals;
 import dev.proofrun.control.ChartKind;
 import dev.proofrun.text.Location;
 import dev.proofrun.text.UserException;

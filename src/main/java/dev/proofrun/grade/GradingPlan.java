@@ -56,7 +56,7 @@ public record GradingPlan(String id, String revision, ZoneId zone, List<GradedCh
      * spread over time).
      */
     public static int defaultAllowedShortfall(int subgroups) {
-        return subgroups / 10;
+        return dev.proofrun.design.LossAllowance.of(subgroups);
     }
 
     /** "PR-2027-0042@1a2b3c4d5e6f", as in the fill-in file's plan cell. */

@@ -31,4 +31,15 @@ public record IndexEvidence(IndexKind index, double required, double confidence,
         return new IndexEvidence(index, required, confidence, estimate * factor, lower * factor, upper * factor, model,
                 method, ppm, seed);
     }
+
+    /** "Cpk under the normal model by normal theory, exact bounds: estimate 1.473, lower 95 % bound 1.285, required 1.33". */
+    public String summary() {
+        return GradeMessage.JUDGED.format(index.symbol(), model.id(), method.words(), estimate, 100 * confidence,
+                lower, required);
+    }
+
+    /** Whether the verdict rests on figures other than the normal-theory ones of the raw readings. */
+    public boolean otherThanNormalTheory() {
+        return method != IndexMethod.NORMAL_THEORY || model != ShapeModel.NORMAL;
+    }
 }

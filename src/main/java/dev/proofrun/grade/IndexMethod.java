@@ -14,7 +14,7 @@ public enum IndexMethod {
      * Lognormal or Weibull model: the percentile index of ISO 22514-2 (Clements 1989) from the fitted model's
      * quantiles, on the overall spread; bounds by generalized pivotal quantities ({@code stats.PivotalBound}).
      */
-    PERCENTILE("iso-22514-2-percentile", "ISO 22514-2 percentile method, generalized pivotal bounds");
+    PERCENTILE("iso-22514-2-percentile", "the ISO 22514-2 percentile method, generalized pivotal bounds");
 
     private final String id;
     private final String words;

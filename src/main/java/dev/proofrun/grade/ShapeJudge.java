@@ -43,6 +43,10 @@ import org.apache.commons.rng.simple.RandomSource;
  */
 final class ShapeJudge {
 
+    /**
+     * The level of the fit check: a process of the declared shape is voided this often by chance, and the design's
+     * power counts it ({@code design.ProcedurePower.NORMAL_SHAPE_REJECTION} must equal it; {@code ShapeLevelTest}).
+     */
     static final double LEVEL = 0.01;
     static final double WEIBULL_CRITICAL_1 = 1.038;
     static final int MIN_READINGS = 8;

@@ -17,10 +17,8 @@ import dev.proofrun.sheet.layout.TextTable;
 import dev.proofrun.sheet.layout.TextTable.Column;
 import dev.proofrun.sheet.layout.Typeface;
 import java.util.ArrayList;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
-import java.util.Map;
 
 /**
  * The evidence for one characteristic, in the order of the argument: 1 completeness, 2 stability (control
@@ -116,16 +114,23 @@ final class EvidenceSection {
             TextTable t = TextTable.of(List.of(Column.left("Index", 1.3f), Column.right("estimate", 1.3f),
                     Column.right("lower bound", 1.3f), Column.left("", 0.4f), Column.left("Index", 1.3f),
                     Column.right("estimate", 1.3f), Column.right("lower bound", 1.3f)), regular, bold, 8);
-            k.add(Block.space(4));
-            k.add(t.header());
-            k.add(t.row("Cp", ix(i.cp()), ix(lb.cp()), "", "Pp", ix(i.pp()), ix(lb.pp())));
-            k.add(t.row("Cpk", ix(i.cpk()), ix(lb.cpk()), "", "Ppk", ix(i.ppk()), ix(lb.ppk())));
-            k.add(t.row("Cpu", ix(i.cpu()), "", "", "Ppu", ix(i.ppu()), ""));
-            k.add(t.row("Cpl", ix(i.cpl()), "", "", "Ppl", ix(i.ppl()), ""));
-            k.add(t.row("Cpm", ix(i.cpm()), "", "", "", "", ""));
-            k.add(Block.space(4));
+            List<Block> figures = new ArrayList<>();
+            figures.add(Block.space(4));
+            if (g.judged() != null && g.judged().otherThanNormalTheory()) {
+                figures.add(Paragraph.of("Normal-theory figures of the readings as they are, for comparison; the verdict"
+                        + " rests on the " + g.judged().index().symbol() + " above, under the " + g.judged().model().id()
+                        + " model.", regular, 8.5f));
+                figures.add(Block.space(3));
+            }
+            figures.add(t.header());
+            figures.add(t.row("Cp", ix(i.cp()), ix(lb.cp()), "", "Pp", ix(i.pp()), ix(lb.pp())));
+            figures.add(t.row("Cpk", ix(i.cpk()), ix(lb.cpk()), "", "Ppk", ix(i.ppk()), ix(lb.ppk())));
+            figures.add(t.row("Cpu", ix(i.cpu()), "", "", "Ppu", ix(i.ppu()), ""));
+            figures.add(t.row("Cpl", ix(i.cpl()), "", "", "Ppl", ix(i.ppl()), ""));
+            figures.add(t.row("Cpm", ix(i.cpm()), "", "", "", "", ""));
+            figures.add(Block.space(4));
             String size = f.subgroupSize().isPresent() ? " of " + f.subgroupSize().getAsInt() : "";
-            k.add(Paragraph.of(String.format(Locale.ROOT,
+            figures.add(Paragraph.of(String.format(Locale.ROOT,
                     "Mean %s, \u03c3 within %s (%s), \u03c3 overall %s from %d readings in %d subgroups%s. Parts per "
                             + "million outside the tolerance: expected %s (within), %s (overall); observed %s. Lower "
                             + "bounds at %s %% confidence. These figures assume the normal model on the readings' own scale.",
@@ -133,6 +138,7 @@ final class EvidenceSection {
                     Fmt.value(f.sigmaOverall()), f.readings(), f.subgroups(), size, Fmt.ppm(f.ppm().within()),
                     Fmt.ppm(f.ppm().overall()), Fmt.ppm(f.ppm().observed()), Fmt.fixed(f.confidence() * 100, 0)),
                     regular, 8.5f));
+            k.add(Block.stack(figures));
         }
         step(flow, "4  Capability: does the bound reach the requirement?", g, Step.CAPABILITY, k);
     }
@@ -185,23 +191,9 @@ final class EvidenceSection {
         }
     }
 
+    /** One entry per pattern (a run of one rule over consecutive subgroups), as the reasons say it. */
     private static String signals(List<ChartSignal> signals) {
-        Map<String, List<String>> byRule = new LinkedHashMap<>();
-        for (ChartSignal s : signals) {
-            byRule.computeIfAbsent(s.chart().id() + " " + s.rule().id(), r -> new ArrayList<>()).add(s.slot());
-        }
-        StringBuilder sb = new StringBuilder();
-        for (var e : byRule.entrySet()) {
-            if (sb.length() > 0) {
-                sb.append("; ");
-            }
-            List<String> slots = e.getValue();
-            sb.append(e.getKey()).append(" at ").append(String.join(", ", slots.subList(0, Math.min(12, slots.size()))));
-            if (slots.size() > 12) {
-                sb.append(" and ").append(slots.size() - 12).append(" more");
-            }
-        }
-        return sb.toString();
+        return dev.proofrun.grade.SignalPatterns.describe(signals);
     }
 
     private static ModelCurve curve(Shape sh, double[] x) {

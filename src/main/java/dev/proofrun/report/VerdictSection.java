@@ -109,8 +109,10 @@ final class VerdictSection {
             return String.format(Locale.ROOT, " (%s required %s; no capability statement)", e.index().symbol(),
                     Fmt.index(e.required()));
         }
-        return String.format(Locale.ROOT, " (%s estimate %s, lower bound %s, required %s; %s model, %s)", e.index().symbol(),
-                Fmt.index(e.estimate()), Fmt.index(e.lower()), Fmt.index(e.required()), e.model().id(), e.method().words());
+        // what the verdict rests on: the index, how it was computed and under which model
+        return String.format(Locale.ROOT, " (%s under the %s model by %s: estimate %s, lower bound %s, required %s)",
+                e.index().symbol(), e.model().id(), e.method().words(), Fmt.index(e.estimate()), Fmt.index(e.lower()),
+                Fmt.index(e.required()));
     }
 
     /**

@@ -151,4 +151,30 @@ class EstimateCommandTest {
         refused("confidence must lie between 0.5 and 0.9999", "estimate", shaft().toString(), "--usl", "12.03",
                 "--confidence", "1.5");
     }
+
+    @Test
+    void roundingIsNamedAsTheLikelyCauseOfARejectedNormalityTest() throws IOException {
+        // invented hardness readings: 500 normal readings (mean 61, sd 0.3 HRC, seeded) read to 0.1 HRC, so they
+        // take about 17 values and the ties make Anderson-Darling reject; spread over the step they do not
+        org.apache.commons.rng.UniformRandomProvider rng =
+                org.apache.commons.rng.simple.RandomSource.XO_RO_SHI_RO_128_PP.create(5L);
+        org.apache.commons.rng.sampling.distribution.ZigguratSampler.NormalizedGaussian g =
+                org.apache.commons.rng.sampling.distribution.ZigguratSampler.NormalizedGaussian.of(rng);
+        StringBuilder rounded = new StringBuilder("value\n");
+        StringBuilder raw = new StringBuilder("value\n");
+        for (int i = 0; i < 500; i++) {
+            double x = 61 + 0.3 * g.sample();
+            rounded.append(java.math.BigDecimal.valueOf(Math.round(x * 10) / 10.0).toPlainString()).append('\n');
+            raw.append(x).append('\n');
+        }
+        Path p = Files.writeString(dir.resolve("hrc.csv"), rounded);
+        assertEquals(0, run("estimate", p.toString(), "--lsl", "58", "--usl", "64"), err.toString());
+        assertTrue(out.toString().contains("The readings do not look normal"), out.toString());
+        assertTrue(out.toString().contains("The readings lie on a grid of 0.1"), out.toString());
+        assertTrue(out.toString().contains("rounding by the gauge is the likely cause"), out.toString());
+        out.getBuffer().setLength(0);
+        Path q = Files.writeString(dir.resolve("raw.csv"), raw);
+        assertEquals(0, run("estimate", q.toString(), "--lsl", "58", "--usl", "64"), err.toString());
+        assertTrue(!out.toString().contains("rounding by the gauge"), out.toString());
+    }
 }

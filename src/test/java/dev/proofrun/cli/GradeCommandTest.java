@@ -2,6 +2,7 @@ package dev.proofrun.cli;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertNotEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
@@ -68,12 +69,32 @@ class GradeCommandTest {
         assertTrue(root.get("problems").isArray());
         assertEquals("not-valid", root.get("verdict").asText());
         JsonNode c = root.get("characteristics").get(0);
-        for (String key : List.of("id", "name", "readings", "subgroups", "subgroupSize", "mean", "sigmaWithin", "sigmaOverall",
-                "cp", "cpu", "cpl", "cpk", "pp", "ppu", "ppl", "ppk", "cpm", "lower", "ppm", "control", "stabilityRatio",
-                "normality", "verdict", "reasons", "additionalSubgroups")) {
+        // what the verdict rests on leads, in this order
+        assertEquals(List.of("id", "name", "index", "method", "model", "estimate", "lower", "upper", "required",
+                "confidence", "verdict"), iterate(c.fieldNames()).subList(0, 11));
+        for (String key : List.of("readings", "subgroups", "subgroupSize", "normalTheory", "control", "stabilityRatio",
+                "normality", "reasons", "additionalSubgroups")) {
             assertTrue(c.has(key), "missing key " + key);
         }
-        for (String key : List.of("/lower/cp", "/lower/cpk", "/lower/pp", "/lower/ppk", "/control/location/center",
+        // the normal-theory figures keep estimate's keys and meanings, under their own name
+        for (String key : List.of("mean", "sigmaWithin", "sigmaOverall", "cp", "cpu", "cpl", "cpk", "pp", "ppu", "ppl",
+                "ppk", "cpm", "lower", "ppm")) {
+            assertTrue(c.get("normalTheory").has(key), "missing normalTheory." + key);
+            if (!key.equals("lower")) {
+                assertFalse(c.has(key), "normal-theory key at the top level: " + key);
+            }
+        }
+        assertFalse(c.get("lower").isObject(), "the top-level lower is the verdict's bound, a number");
+        JsonNode r4json = root.get("characteristics").get(1);
+        assertEquals("Cpk", r4json.get("index").asText());
+        // the demo plans R4 (roughness) lognormal: the percentile index carries its verdict, normal theory does not
+        assertEquals("iso-22514-2-percentile", r4json.get("method").asText());
+        assertEquals("lognormal", r4json.get("model").asText());
+        assertNotEquals(r4json.at("/normalTheory/cpk").asDouble(), r4json.get("estimate").asDouble(), 1e-6);
+        assertFalse(r4json.at("/normalTheory/carriesVerdict").asBoolean());
+        assertTrue(c.at("/normalTheory/carriesVerdict").asBoolean(), "D1 is planned normal");
+        for (String key : List.of("/normalTheory/lower/cp", "/normalTheory/lower/cpk", "/normalTheory/lower/pp",
+                "/normalTheory/lower/ppk", "/control/location/center",
                 "/control/location/ucl", "/control/location/lcl", "/control/spread/ucl", "/control/signals",
                 "/normality/andersonDarling", "/normality/pValue", "/normality/model")) {
             assertFalse(c.at(key).isMissingNode(), "missing " + key);
@@ -81,7 +102,7 @@ class GradeCommandTest {
         JsonNode r4 = root.get("characteristics").get(1);
         assertEquals("inconclusive", r4.get("verdict").asText());
         assertTrue(r4.get("additionalSubgroups").asInt() > 0);
-        assertTrue(r4.get("cp").isNull(), "one-sided: no Cp");
+        assertTrue(r4.at("/normalTheory/cp").isNull(), "one-sided: no Cp");
         JsonNode f7 = root.get("characteristics").get(2);
         assertTrue(f7.at("/control/signals").size() > 0);
         assertTrue(f7.at("/control/signals/0/rule").asText().matches("[a-z-]+"));
@@ -138,5 +159,39 @@ class GradeCommandTest {
             assertTrue(r.err().contains("the plan was changed after it was issued as revision"), r.err());
             assertTrue(r.err().contains(edited.toString()), r.err());
         }
+    }
+
+    @Test
+    void constantReadingsAreGradedInWordsWithExitZero() throws Exception {
+        // the demo's return with every D1 reading set to 22.001: no spread at all
+        StringBuilder sb = new StringBuilder();
+        for (String line : Files.readAllLines(data, StandardCharsets.UTF_8)) {
+            String[] f = line.split(",", -1);
+            if (f.length > 11 && f[2].equals("D1")) {
+                for (int c = 7; c <= 11; c++) {
+                    f[c] = "22.001";
+                }
+                line = String.join(",", f);
+            }
+            sb.append(line).append('\n');
+        }
+        Path constant = dir.resolve("constant.csv");
+        Files.writeString(constant, sb.toString(), StandardCharsets.UTF_8);
+        Run text = run("grade", plan.toString(), constant.toString());
+        assertEquals(0, text.code(), text.err());
+        assertTrue(text.out().contains("No spread in the readings: all 125 readings are 22.001."), text.out());
+        assertFalse(text.out().contains("Infinity") || text.err().contains("Exception"), text.out() + text.err());
+        Run json = run("grade", plan.toString(), constant.toString(), "--json", "--report",
+                dir.resolve("constant.pdf").toString());
+        assertEquals(0, json.code(), json.err());
+        JsonNode d1 = new ObjectMapper().readTree(json.out()).get("characteristics").get(0);
+        assertEquals("not-valid", d1.get("verdict").asText());
+        assertTrue(d1.get("estimate").isNull(), d1.toString());
+    }
+
+    private static List<String> iterate(java.util.Iterator<String> it) {
+        List<String> out = new java.util.ArrayList<>();
+        it.forEachRemaining(out::add);
+        return out;
     }
 }

@@ -163,4 +163,19 @@ class PlanCommandTest {
         assertEquals(2, run(newPlan(file, "--force")));
         assertTrue(err.toString().contains("issued revision"), err.toString());
     }
+
+    @Test
+    void aResolutionWithoutAGaugeNameIsKeptAndACoarseOneIsWarned() throws Exception {
+        // tolerance 0.04: a step of 0.005 is coarser than a tenth (0.004), the rule of ten (common practice)
+        Path f = dir.resolve("res.json");
+        assertEquals(0, run(newPlan(f, "--resolution", "0.005")), err.toString());
+        assertTrue(out.toString().contains("warning: C1: gauge resolution 0.005 is coarser than a tenth of the tolerance"),
+                out.toString());
+        StudyPlan plan = PlanFiles.read(f);
+        assertEquals(0.005, plan.characteristics().get(0).gauge().orElseThrow().resolution(), 0);
+        Path fine = dir.resolve("fine.json");
+        assertEquals(0, run(newPlan(fine, "--resolution", "0.001")), err.toString());
+        assertFalse(out.toString().contains("warning"), out.toString());
+        assertEquals(0.001, PlanFiles.read(fine).characteristics().get(0).gauge().orElseThrow().resolution(), 0);
+    }
 }

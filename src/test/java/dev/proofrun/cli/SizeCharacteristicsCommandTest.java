@@ -55,7 +55,8 @@ class SizeCharacteristicsCommandTest {
         assertEquals(2, root.get("designs").size());
         for (JsonNode d : root.get("designs")) {
             assertEquals(List.of("subgroupSize", "subgroups", "readings", "driver", "limitedBy", "characteristics",
-                    "allDemonstratedIfIndependent", "falseAlarm", "detection"), names(d));
+                    "allDemonstratedIfIndependent", "falseAlarm", "detection", "anySignalFalseAlarm", "anySignalDetection"),
+                    names(d));
             int k = d.get("subgroups").asInt();
             int largest = 0;
             double product = 1;
@@ -95,7 +96,7 @@ class SizeCharacteristicsCommandTest {
         assertTrue(r.out().contains("One design for 3 characteristics"), r.out());
         assertTrue(r.out().lines().anyMatch(l -> l.contains("seat-h") && l.endsWith("drives k")), r.out());
         assertTrue(r.out().contains("bore-a") && r.out().contains("flow"), r.out());
-        assertTrue(r.out().contains("with 3 charts the chance that at least one signals is higher"), r.out());
+        assertTrue(r.out().contains("With 3 characteristics the chance that at least one is called unstable is higher"), r.out());
         assertTrue(r.out().contains("The part needs all 3 demonstrated in this one study"), r.out());
         assertTrue(r.out().contains("does not replace the customer's requirements"), r.out());
     }

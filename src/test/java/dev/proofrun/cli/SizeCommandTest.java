@@ -31,8 +31,14 @@ class SizeCommandTest {
         assertEquals(List.of("designs", "recommended", "operatingCharacteristic", "warnings"),
                 iterate(root.fieldNames()));
         JsonNode d = root.get("designs").get(0);
-        assertEquals(List.of("subgroupSize", "subgroups", "readings", "power", "criticalEstimate", "degreesOfFreedom",
-                "limitedBy", "falseAlarm", "detection"), iterate(d.fieldNames()));
+        assertEquals(List.of("subgroupSize", "subgroups", "readings", "power", "boundPower", "criticalEstimate",
+                "degreesOfFreedom",
+                "limitedBy", "falseAlarm", "detection", "shift", "anySignalFalseAlarm", "anySignalDetection"),
+                iterate(d.fieldNames()));
+        // the grader's stability chances are numbers, not objects; the power is the whole procedure's, so it
+        // lies below the bound's alone (the gates cost something)
+        assertTrue(d.get("falseAlarm").isNumber() && d.get("detection").isNumber(), d.toString());
+        assertTrue(d.get("power").asDouble() < d.get("boundPower").asDouble(), d.toString());
         assertEquals(4, d.get("subgroupSize").asInt());
         assertTrue(root.get("recommended").has("reason"));
         JsonNode oc = root.get("operatingCharacteristic").get(0);

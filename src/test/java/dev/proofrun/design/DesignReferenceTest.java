@@ -19,6 +19,10 @@ import org.junit.jupiter.params.provider.CsvSource;
  * {@link #kaneFormulaGrid} checks his published formula instead, evaluated by SciPy on a grid like his
  * (α = β, ratios Cp(high)/Cp(low)): the values below are SciPy's, not copied from his table (the overall
  * index Pp keeps ν = N − 1 exact, as in Kane's test with the sample standard deviation).
+ *
+ * <p>These references count the bound alone (no gates): the sizes are {@link SizeSearch#boundOnlySubgroups} and
+ * the powers {@link SizeSearch#boundPower}; the design's own power adds the grader's gates on top
+ * ({@link ProcedurePower}, checked against the grader in {@code ProcedurePowerSimulationTest}).
  */
 class DesignReferenceTest {
 
@@ -40,10 +44,8 @@ class DesignReferenceTest {
         "1.33, 2.0, 0.99, 0.90, 45",
         "1.67, 2.0, 0.95, 0.80, 101"})
     void ppSampleSizeMatchesTheChiSquareTest(double c0, double c1, double conf, double power, int n) {
-        DesignRow row = StudyDesigner.design(request(SpecLimits.Sides.TWO_SIDED, IndexKind.PP, c0, c1, conf, power))
-                .rows().get(0);
-        assertEquals(n, row.readings());
-        assertEquals(LimitedBy.POWER, row.limitedBy());
+        SizeSearch search = new SizeSearch(request(SpecLimits.Sides.TWO_SIDED, IndexKind.PP, c0, c1, conf, power), 1);
+        assertEquals(n, search.boundOnlySubgroups());
     }
 
     @ParameterizedTest(name = "Ppu {0} -> {1}, conf {2}, power {3}: N = {4}")
@@ -53,9 +55,8 @@ class DesignReferenceTest {
         "1.33, 1.67, 0.95, 0.90, 95",
         "1.33, 1.67, 0.99, 0.90, 146"})
     void oneSidedSampleSizeMatchesTheNoncentralT(double c0, double c1, double conf, double power, int n) {
-        DesignRow row = StudyDesigner.design(request(SpecLimits.Sides.UPPER_ONLY, IndexKind.PPK, c0, c1, conf, power))
-                .rows().get(0);
-        assertEquals(n, row.readings());
+        SizeSearch search = new SizeSearch(request(SpecLimits.Sides.UPPER_ONLY, IndexKind.PPK, c0, c1, conf, power), 1);
+        assertEquals(n, search.boundOnlySubgroups());
     }
 
     @ParameterizedTest(name = "Ppk {0} -> {1} (Cp {2}), N = {3}: power {4}")
@@ -67,7 +68,7 @@ class DesignReferenceTest {
     void exactTwoSidedPowerMatchesPlainQuadrature(double c0, double c1, double cp1, int n, double expected) {
         DesignRequest r = DesignRequest.of(SpecLimits.Sides.TWO_SIDED, Requirement.of(IndexKind.PPK, c0, 0.95),
                 Expectation.offCentre(c1, cp1)).withFloors(Floors.none()).withSubgroupSizes(List.of(1));
-        assertEquals(expected, new SizeSearch(r, 1).power(n), POWER_TOLERANCE);
+        assertEquals(expected, new SizeSearch(r, 1).boundPower(n), POWER_TOLERANCE);
     }
 
     /**
@@ -85,10 +86,11 @@ class DesignReferenceTest {
         "0.10, 1.25, 68, 1.127981", "0.10, 1.30, 50, 1.153630", "0.10, 1.35, 39, 1.178879",
         "0.10, 1.40, 31, 1.206799", "0.10, 1.45, 26, 1.231908", "0.10, 1.50, 22, 1.259425"})
     void kaneFormulaGrid(double alpha, double ratio, int n, double critical) {
-        DesignRow row = StudyDesigner.design(request(SpecLimits.Sides.TWO_SIDED, IndexKind.PP, 1.0, ratio,
-                1 - alpha, 1 - alpha)).rows().get(0);
-        assertEquals(n, row.readings());
+        SizeSearch search = new SizeSearch(request(SpecLimits.Sides.TWO_SIDED, IndexKind.PP, 1.0, ratio,
+                1 - alpha, 1 - alpha), 1);
+        int k = search.boundOnlySubgroups();
+        assertEquals(n, k);
         // the script prints six decimals
-        assertEquals(critical, row.criticalEstimate(), 5e-7);
+        assertEquals(critical, search.model(k).criticalEstimate(0), 5e-7);
     }
 }

@@ -89,7 +89,10 @@ class StudyDesignerTest {
         DesignRequest r = DesignRequest.of(SpecLimits.Sides.TWO_SIDED, Requirement.of(IndexKind.PP, 1.33, 0.95),
                 Expectation.centred(1.67));
         DesignTable t = StudyDesigner.design(r);
-        assertEquals(0.05, ocAt(t, 1.33), 1e-6);
+        // the curve is the whole procedure's: the bound's chance times the gates' (the same at every true index)
+        double gates = t.recommended().power() / t.recommended().boundPower();
+        assertTrue(gates < 1 && gates > 0.97, "gates " + gates);
+        assertEquals(0.05 * gates, ocAt(t, 1.33), 1e-6);
         assertEquals(t.recommended().power(), ocAt(t, 1.67), 1e-9);
         List<OcPoint> oc = t.operatingCharacteristic();
         for (int i = 1; i < oc.size(); i++) {
@@ -124,8 +127,10 @@ class StudyDesignerTest {
         assertEquals(best.power(), StudyDesigner.power(r, best.subgroupSize(), best.subgroups()), 1e-12);
         double fewer = StudyDesigner.power(r, best.subgroupSize(), best.subgroups() - 1);
         assertTrue(fewer < r.power() && fewer < best.power(), "one subgroup fewer falls short: " + fewer);
-        t.powerCurve().forEach(p -> assertEquals(p.power(),
-                StudyDesigner.power(r, best.subgroupSize(), p.subgroups()), 1e-12, "k = " + p.subgroups()));
+        // the curve takes the stability gate's rate at the chosen k; at other k it differs by the change of that
+        // rate with k (tenths of a percent, simulated with standard error about 0.002)
+        t.powerCurve().forEach(p -> assertEquals(StudyDesigner.power(r, best.subgroupSize(), p.subgroups()),
+                p.power(), p.subgroups() == best.subgroups() ? 1e-12 : 0.01, "k = " + p.subgroups()));
         assertThrows(IllegalArgumentException.class, () -> StudyDesigner.power(r, 0, 30));
         assertThrows(IllegalArgumentException.class, () -> StudyDesigner.power(r, 5, 1));
         assertThrows(IllegalArgumentException.class, () -> StudyDesigner.power(r, 5, 2001));

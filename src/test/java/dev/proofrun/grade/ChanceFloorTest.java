@@ -1,5 +1,7 @@
 package dev.proofrun.grade;
 
+import dev.proofrun.control.ChanceSignals;
+
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;

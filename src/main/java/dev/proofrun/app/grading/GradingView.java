@@ -206,9 +206,9 @@ public final class GradingView implements StepView {
         }
         IndexEvidence e = g.judged();
         if (e != null) {
-            // the sentence under "4 Capable?" already gives the index, its bound and the requirement; this
-            // line adds only what it leaves out: the model and method the bound was taken under
-            Label idx = new Label("Bound taken under the " + e.model().id() + " model: " + e.method().words());
+            // what the verdict rests on, in the words the command line and the report use
+            Label idx = IndexTooltips.follow(new Label(e.summary()));
+            idx.setWrapText(true);
             idx.setId("index-evidence");
             chain.getChildren().add(idx);
         }

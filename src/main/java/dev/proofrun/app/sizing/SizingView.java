@@ -67,19 +67,28 @@ public final class SizingView implements StepView {
                 column("n", "Subgroup size n: consecutive parts taken at each slot", r -> Integer.toString(r.subgroupSize())),
                 column("k", "Number of subgroups k", r -> Integer.toString(r.subgroups())),
                 column("N", "Readings N = n·k", r -> Integer.toString(r.readings())),
-                column("Power", "P(lower bound ≥ required minimum | the process is as expected)", r -> SizingViewModel.fmt(r.power())),
+                column("Power", "Chance that grading returns 'demonstrated' when the process is as expected: the lower "
+                        + "bound reaches the required minimum and no check (shape, stability, lost subgroups) voids "
+                        + "the study", r -> SizingViewModel.fmt(r.power())),
+                column("Bound alone", "Chance that the lower bound alone reaches the required minimum (no checks "
+                        + "counted)", r -> SizingViewModel.fmt(r.boundPower())),
                 column("ĉ* to pass", "ĉ*: the smallest estimated index whose lower bound reaches the "
                         + "required minimum, at the expected centring", r -> SizingViewModel.fmt(r.criticalEstimate())),
                 column("ν", "Degrees of freedom of the within-sigma estimate (effective, after Patnaik 1950, for "
                         + "R̄/d2, S̄/c4 and moving range)", r -> String.format(java.util.Locale.ROOT, "%.1f", r.degreesOfFreedom())),
                 column("Set by", "What fixed k: the wanted power, or a practice floor (25 subgroups, 100 readings)",
                         r -> r.limitedBy().token()),
-                column("False alarm\n3σ / all rules", "Chance that the mean chart of a stable process signals at least "
-                        + "once in the study: 1 − (1 − 0.0027)^k with the 3σ rule alone; simulated with all eight run rules",
-                        r -> SizingViewModel.fmt(r.falseAlarm().beyondLimits()) + " / " + SizingViewModel.fmtOrDash(r.falseAlarm().allRules())),
-                column("Detection\n3σ / all rules", "Chance that the chart signals at least once when the mean moves by "
-                        + "δ·σ_w for the second half of the study; per subgroup Φ(−3+δ√n) + Φ(−3−δ√n)",
-                        r -> SizingViewModel.fmt(r.detection().beyondLimits()) + " / " + SizingViewModel.fmtOrDash(r.detection().allRules()))));
+                column("Called unstable\nwhen stable", "Chance that grading calls a stable process unstable (and the "
+                        + "study not valid), with grading's own stability rule at this number of subgroups",
+                        r -> SizingViewModel.fmt(r.falseAlarm())),
+                column("Called unstable\nafter a shift", "Chance that grading calls the process unstable when its mean "
+                        + "moves by δ·σ_w for the second half of the study (grading's own rule)",
+                        r -> SizingViewModel.fmt(r.detection())),
+                column("Some rule fires\nstable / shift", "Chance that some chart rule fires at least once in the "
+                        + "study (all eight run rules), on a stable process / after the shift: what a chart shows, "
+                        + "not what grading decides",
+                        r -> SizingViewModel.fmtOrDash(r.anySignalFalseAlarm().allRules()) + " / "
+                                + SizingViewModel.fmtOrDash(r.anySignalDetection().allRules()))));
         // each row marks itself when it shows the recommended design, and again when the recommendation
         // changes (a table refresh would remake every row and cell)
         table.setRowFactory(t -> new TableRow<>() {

@@ -394,7 +394,7 @@ public final class SizingViewModel extends StepViewModel {
         int extra = c.readings() - r.readings();
         return AppMessage.SIZING_OTHER_CHOSEN.format(c.subgroups(), c.subgroupSize(), c.readings(),
                 extra >= 0 ? "+" + extra : Integer.toString(extra), r.readings(), c.power(), r.power(),
-                fmtOrDash(c.falseAlarm().beyondLimits()), fmtOrDash(r.falseAlarm().beyondLimits()));
+                fmtOrDash(c.falseAlarm()), fmtOrDash(r.falseAlarm()));
     }
 
     /**

@@ -33,4 +33,28 @@ public interface Block {
             }
         };
     }
+
+    /** Several blocks stacked as one, so that a page break never falls between them (a short table with its note). */
+    static Block stack(java.util.List<? extends Block> blocks) {
+        java.util.List<Block> parts = java.util.List.copyOf(blocks);
+        return new Block() {
+            @Override
+            public float height(float width) {
+                float h = 0;
+                for (Block b : parts) {
+                    h += b.height(width);
+                }
+                return h;
+            }
+
+            @Override
+            public void draw(Canvas canvas, float left, float top, float width) {
+                float y = top;
+                for (Block b : parts) {
+                    b.draw(canvas, left, y, width);
+                    y -= b.height(width);
+                }
+            }
+        };
+    }
 }

@@ -1,10 +1,5 @@
-package dev.proofrun.grade;
+package dev.proofrun.control;
 
-import dev.proofrun.control.ChartKind;
-import dev.proofrun.control.ChartPair;
-import dev.proofrun.control.ControlCharts;
-import dev.proofrun.control.RunRule;
-import dev.proofrun.control.RunRules;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
@@ -35,11 +30,11 @@ import org.hipparchus.distribution.continuous.NormalDistribution;
  * and {@link #prepare} can start one on a background thread before it is asked for; both only move work,
  * the figures are those of a fresh run.
  */
-final class ChanceSignals {
+public final class ChanceSignals {
 
-    static final long READINGS_BUDGET = 1_000_000L;
+    public static final long READINGS_BUDGET = 1_000_000L;
     static final int BLOCKS = 64;
-    static final int MAX_STUDIES = 2000;
+    public static final int MAX_STUDIES = 2000;
     static final int EMPIRICAL_STUDIES = 400;
     private static final long SEED = 0x5eed_6a1eL;
 
@@ -47,12 +42,16 @@ final class ChanceSignals {
     private final double[] location;
     private final double[] spread;
 
+    /** Per simulated study: the ANOVA part of {@link StabilityRule} calls it unstable (whole studies, n ≥ 2). */
+    private final boolean[] between;
+
     /** k/kb when blocks were simulated, 1 otherwise. */
     private final double scale;
 
-    private ChanceSignals(double[] location, double[] spread, double scale) {
+    private ChanceSignals(double[] location, double[] spread, boolean[] between, double scale) {
         this.location = location;
         this.spread = spread;
+        this.between = between;
         this.scale = scale;
     }
 
@@ -64,7 +63,7 @@ final class ChanceSignals {
      * @param k     number of subgroups
      * @param rules the rules on the location chart
      */
-    static ChanceSignals simulate(ChartKind kind, int n, int k, Set<RunRule> rules) {
+    public static ChanceSignals simulate(ChartKind kind, int n, int k, Set<RunRule> rules) {
         try {
             return future(kind, n, k, rules, false).join();
         } catch (java.util.concurrent.CompletionException e) {
@@ -82,7 +81,7 @@ final class ChanceSignals {
      * come back complete (k = the planned subgroups): if fewer usable subgroups come back, the work is spent
      * for nothing and the real k is simulated as usual — the figures never depend on the guess.
      */
-    static void prepare(ChartKind kind, int n, int k, Set<RunRule> rules) {
+    public static void prepare(ChartKind kind, int n, int k, Set<RunRule> rules) {
         future(kind, n, k, rules, true);
     }
 
@@ -130,7 +129,7 @@ final class ChanceSignals {
     private static final Map<Key, CompletableFuture<ChanceSignals>> CACHE = new ConcurrentHashMap<>();
     static final int CACHE_SIZE = 32;
 
-    static ChanceSignals run(ChartKind kind, int n, int k, Set<RunRule> rules) {
+    public static ChanceSignals run(ChartKind kind, int n, int k, Set<RunRule> rules) {
         long perStudy = (long) n * k;
         int studies = (int) Math.min(MAX_STUDIES, READINGS_BUDGET / Math.max(1, perStudy));
         int length = k;
@@ -144,6 +143,7 @@ final class ChanceSignals {
         ZigguratSampler.NormalizedGaussian g = ZigguratSampler.NormalizedGaussian.of(rng);
         double[] loc = new double[studies];
         double[] spr = new double[studies];
+        boolean[] between = new boolean[studies];
         for (int s = 0; s < studies; s++) {
             List<double[]> groups = new ArrayList<>(length);
             for (int i = 0; i < length; i++) {
@@ -156,15 +156,26 @@ final class ChanceSignals {
             ChartPair p = ControlCharts.of(kind, groups, rules);
             loc[s] = RunRules.signalledPoints(p.location().z(), rules);
             spr[s] = p.spread().signals().size();
+            if (n > 1 && scale == 1) {
+                double ratio = p.sigmaWithin() > 0 ? StabilityRule.overallSd(groups) / p.sigmaWithin()
+                        : Double.POSITIVE_INFINITY;
+                between[s] = StabilityRule.anova(groups)[1] < StabilityRule.ANOVA_LEVEL
+                        && ratio >= StabilityRule.RATIO_LIMIT;
+            }
         }
-        return new ChanceSignals(loc, spr, scale);
+        return new ChanceSignals(loc, spr, between, scale);
     }
 
-    double expectedLocation() {
+    /** The number of simulated studies (or blocks). */
+    public int studies() {
+        return location.length;
+    }
+
+    public double expectedLocation() {
         return mean(location) * scale;
     }
 
-    double expectedSpread() {
+    public double expectedSpread() {
         return mean(spread) * scale;
     }
 
@@ -174,7 +185,7 @@ final class ChanceSignals {
      * chance is below this (not equal to it). 0 when the tail comes from the normal approximation, which has no
      * such floor.
      */
-    double floor() {
+    public double floor() {
         return empirical(location) ? 1.0 / (location.length + 1.0) : 0.0;
     }
 
@@ -183,13 +194,55 @@ final class ChanceSignals {
     }
 
     /** P(a stable study signals at ≥ observed points of the location chart). */
-    double locationTail(int observed) {
+    public double locationTail(int observed) {
         return tail(location, observed);
     }
 
     /** P(a stable study has ≥ observed points beyond the spread chart's limits). */
-    double spreadTail(int observed) {
+    public double spreadTail(int observed) {
         return tail(spread, observed);
+    }
+
+    /**
+     * The share of the simulated stable studies that {@link StabilityRule} would call unstable, each judged
+     * against the others (leave one out: a new stable study meets a reference of the other studies, so its own
+     * count must not count for it). This is the grader's false-unstable rate at this (n, k), read from the same
+     * simulation the grader uses, at no extra cost. NaN when blocks were simulated instead of whole studies (the
+     * blocks are not studies the rule could judge).
+     */
+    public double falseUnstableShare() {
+        if (scale != 1) {
+            return Double.NaN;
+        }
+        double[] locSorted = location.clone();
+        double[] sprSorted = spread.clone();
+        java.util.Arrays.sort(locSorted);
+        java.util.Arrays.sort(sprSorted);
+        int unstable = 0;
+        for (int s = 0; s < location.length; s++) {
+            boolean signalled = tailOfOthers(location, locSorted, location[s]) < StabilityRule.CHANCE_LEVEL
+                    || tailOfOthers(spread, sprSorted, spread[s]) < StabilityRule.CHANCE_LEVEL;
+            if (signalled || between[s]) {
+                unstable++;
+            }
+        }
+        return unstable / (double) location.length;
+    }
+
+    /** The tail at one study's own count, that study left out of the empirical share. */
+    private double tailOfOthers(double[] counts, double[] sorted, double own) {
+        if (own <= 0) {
+            return 1.0;
+        }
+        if (!empirical(counts)) {
+            return tail(counts, (int) own);
+        }
+        int first = java.util.Arrays.binarySearch(sorted, own);
+        while (first > 0 && sorted[first - 1] == own) {
+            first--;
+        }
+        int atOthers = sorted.length - first - 1;
+        return (atOthers + 1.0) / sorted.length;
     }
 
     private static double mean(double[] a) {
