@@ -88,6 +88,16 @@ final class Cells {
     }
 
     /**
+     * Whether the text names a value that is not finite ({@code NaN}, {@code Infinity}, {@code inf}, {@code ∞},
+     * any letter case, with or without a sign): {@link #number} takes none of them, and the reader says
+     * "not a finite number" for them as for a number that overflows ({@code 1e309}): one rule for all.
+     */
+    static boolean namesNonFinite(String text) {
+        String t = text.startsWith("+") || text.startsWith("-") ? text.substring(1) : text;
+        return t.equalsIgnoreCase("nan") || t.equalsIgnoreCase("inf") || t.equalsIgnoreCase("infinity") || t.equals("\u221E");
+    }
+
+    /**
      * A taken time: ISO-8601 with offset ("2027-03-01T06:40+01:00"), a local date-time in the plan's zone
      * ("2027-03-01T06:40", "2027-03-01 06:40", with or without seconds), or a time of day on the planned day
      * ("06:52").
@@ -128,6 +138,11 @@ final class Cells {
         }
         ZonedDateTime t = taken(text, zone, plannedDay);
         return t == null ? NOT_A_TIME : t.toEpochSecond();
+    }
+
+    /** A value for messages to six significant digits: 48.013, -4.013, 1E+100. */
+    static String brief(double v) {
+        return new java.math.BigDecimal(v).round(new java.math.MathContext(6)).stripTrailingZeros().toString();
     }
 
     /** Formats a value for messages without trailing noise (shortest round-trip form). */

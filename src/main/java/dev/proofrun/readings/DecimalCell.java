@@ -50,6 +50,16 @@ final class DecimalCell {
         return i == n ? Double.parseDouble(text) : Double.NaN;
     }
 
+    /**
+     * Whether the text names a value that is not finite ({@code NaN}, {@code Infinity}, {@code inf},
+     * {@code ∞}, any letter case, with or without a sign): {@link #parse} takes none of them; the reader refuses
+     * them as not finite, as it does a number that overflows ({@code 1e309}).
+     */
+    static boolean namesNonFinite(String text) {
+        String t = text.startsWith("+") || text.startsWith("-") ? text.substring(1) : text;
+        return t.equalsIgnoreCase("nan") || t.equalsIgnoreCase("inf") || t.equalsIgnoreCase("infinity") || t.equals("\u221E");
+    }
+
     private static boolean isDigit(char c) {
         return c >= '0' && c <= '9';
     }

@@ -1,6 +1,7 @@
 package dev.proofrun.readings;
 
 import dev.proofrun.text.Location;
+import dev.proofrun.text.Shown;
 import dev.proofrun.text.UserException;
 import java.io.BufferedReader;
 import java.io.IOException;
@@ -33,10 +34,18 @@ import org.apache.commons.csv.CSVRecord;
  * <li>{@code x1, x2, ..., xn}: one subgroup per row; blank cells are skipped, so a row may hold fewer.</li>
  * </ul>
  * Rows are numbered as a spreadsheet shows them (the header is row 1); blank lines are skipped. Numbers
- * use a decimal point ({@link DecimalCell}). Every problem is a {@link UserException} naming file, row and
+ * use a decimal point ({@link DecimalCell}); {@code NaN}, {@code Infinity} and numbers that overflow ({@code 1e309})
+ * are refused as not finite, and readings beyond ±{@value #MAGNITUDE} as too large to compute with. Every problem is a {@link UserException} naming file, row and
  * column.
  */
 public final class ReadingsCsv {
+
+    /**
+     * No reading beyond ± this is taken: its square (1e200) and any sum of squares a file can hold stay far from
+     * overflow (the largest double is about 1.8e308), so no estimate collapses to 0 or infinity on a typing
+     * error such as 1e300. The grader uses the same bound.
+     */
+    static final double MAGNITUDE = 1e100;
 
     private static final CSVFormat FORMAT = CSVFormat.DEFAULT.builder()
             .setIgnoreEmptyLines(false).setTrim(true).get();
@@ -210,7 +219,7 @@ public final class ReadingsCsv {
             }
             if (columns.put(c, i) != null && (c.equals("value") || c.equals("subgroup") || c.matches("x[0-9]+"))) {
                 throw new UserException(Location.cell(name, header.getRecordNumber(), header.get(i)),
-                        ReadingsMessage.DUPLICATE_COLUMN, header.get(i));
+                        ReadingsMessage.DUPLICATE_COLUMN, Shown.cell(header.get(i)));
             }
         }
         return columns;
@@ -225,11 +234,15 @@ public final class ReadingsCsv {
             return Double.NaN;
         }
         double x = DecimalCell.parse(text);
-        if (Double.isNaN(x)) {
-            throw new UserException(Location.cell(name, r.getRecordNumber(), column), ReadingsMessage.NOT_A_NUMBER, text);
+        Location where = Location.cell(name, r.getRecordNumber(), column);
+        if (Double.isInfinite(x) || DecimalCell.namesNonFinite(text)) {
+            throw new UserException(where, ReadingsMessage.NOT_FINITE, Shown.cell(text));
         }
-        if (!Double.isFinite(x)) {
-            throw new UserException(Location.cell(name, r.getRecordNumber(), column), ReadingsMessage.NOT_FINITE, text);
+        if (Double.isNaN(x)) {
+            throw new UserException(where, ReadingsMessage.NOT_A_NUMBER, Shown.cell(text));
+        }
+        if (Math.abs(x) > MAGNITUDE) {
+            throw new UserException(where, ReadingsMessage.TOO_LARGE, Shown.cell(text), MAGNITUDE);
         }
         return x;
     }

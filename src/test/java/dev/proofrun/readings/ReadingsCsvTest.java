@@ -67,7 +67,7 @@ class ReadingsCsvTest {
         assertEquals(3, comma.location().orElseThrow().row());
         assertEquals("x2", comma.location().orElseThrow().column());
         assertEquals(ReadingsMessage.NOT_A_NUMBER, fails("value\n1\n0x1p3\n", OptionalInt.empty()).key());
-        assertEquals(ReadingsMessage.NOT_A_NUMBER, fails("value\n1\nNaN\n", OptionalInt.empty()).key());
+        assertEquals(ReadingsMessage.NOT_FINITE, fails("value\n1\nNaN\n", OptionalInt.empty()).key());
         assertEquals(ReadingsMessage.NOT_FINITE, fails("value\n1\n1e999\n", OptionalInt.empty()).key());
         assertEquals(ReadingsMessage.EMPTY_FILE, fails("", OptionalInt.empty()).key());
         assertEquals(ReadingsMessage.NO_HEADER, fails("1.0\n2.0\n", OptionalInt.empty()).key());
