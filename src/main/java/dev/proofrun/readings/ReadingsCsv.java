@@ -286,7 +286,12 @@ public final class ReadingsCsv {
         try {
             return records.hasNext() ? records.next() : null;
         } catch (UncheckedIOException | IllegalStateException e) {
-            String why = e.getCause() != null ? e.getCause().getMessage() : e.getMessage();
+            // the CSV library's words stay here: say what is wrong in ours
+            String said = String.valueOf(e.getCause() != null ? e.getCause().getMessage() : e.getMessage()).toLowerCase(Locale.ROOT);
+            String why = said.contains("eof") ? "a quoted value is not closed before the end of the file"
+                    : said.contains("invalid char between encapsulated token and delimiter")
+                            ? "text follows a closing quote before the next comma (a quote inside a value is written twice: \"\")"
+                            : "the quotes do not pair up";
             throw new UserException(Location.cell(name, row, null), ReadingsMessage.BAD_CSV, why);
         }
     }
