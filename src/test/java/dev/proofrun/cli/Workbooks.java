@@ -39,8 +39,9 @@ final class Workbooks {
                     if (cells[c].isEmpty()) {
                         continue;
                     }
-                    if (r > 0 && cells[c].matches("-?[0-9.]+(e-?[0-9]+)?")) {
-                        row.createCell(c).setCellValue(Double.parseDouble(cells[c]));
+                    double number = r > 0 && cells[c].matches("-?[0-9]+(\\.[0-9]+)?([eE]-?[0-9]+)?") ? Double.parseDouble(cells[c]) : Double.NaN;
+                    if (Double.isFinite(number)) {
+                        row.createCell(c).setCellValue(number);
                     } else {
                         row.createCell(c).setCellValue(cells[c]);
                     }
