@@ -26,7 +26,8 @@ final class Workbooks {
      * {@code notesFirst} a sheet "notes" with a line of text comes before it.
      */
     static void fromCsv(Path csv, Path xlsx, boolean notesFirst) throws IOException {
-        List<String> lines = Files.readAllLines(csv, StandardCharsets.UTF_8);
+        // lenient: a spoiled file may hold bytes that are not UTF-8 (a spreadsheet shows them as replacement marks)
+        List<String> lines = List.of(new String(Files.readAllBytes(csv), StandardCharsets.UTF_8).split("\r?\n", -1));
         try (XSSFWorkbook wb = new XSSFWorkbook(); OutputStream out = Files.newOutputStream(xlsx)) {
             if (notesFirst) {
                 wb.createSheet("notes").createRow(0).createCell(0).setCellValue("returned by the night shift");
