@@ -35,7 +35,8 @@ import net.jqwik.api.lifecycle.BeforeContainer;
  * read as readings ({@code estimate}) — with one to three {@link Mutations} (and for a workbook sometimes byte
  * flips or a cut of the zip itself), and checks the promise:
  * <ul>
- * <li>exit 0 with a graded result (or the command's output) and nothing on standard error, or exit 2 with
+ * <li>exit 0 with a graded result (or the command's output) and nothing on standard error ({@code plan show}
+ *     of an issued plan changed afterwards: one warning line saying so), or exit 2 with
  *     exactly one line on standard error that names one of the files involved and nothing on standard output;</li>
  * <li>never exit 1 (no {@code --require-demonstrated} is given), never an exception out of the command line,
  *     never a stack trace or a library's words;</li>
@@ -48,7 +49,7 @@ import net.jqwik.api.lifecycle.BeforeContainer;
  */
 class HostileInputFuzzTest {
 
-    static final int TRIES = 60;
+    static final int TRIES = 40;
     static final int LONG_TRIES = 2000;
 
     private static final java.util.concurrent.atomic.AtomicInteger TRY = new java.util.concurrent.atomic.AtomicInteger();
@@ -219,7 +220,13 @@ class HostileInputFuzzTest {
         assertFalse(r.err.contains("\tat ") || r.err.contains("Exception") || r.err.contains("org.apache")
                 || r.err.contains("com.fasterxml") || r.err.contains("POI") || r.err.contains("Jackson"), what);
         if (r.code == 0) {
-            assertEquals("", r.err, what);
+            if (args[0].equals("plan")) {
+                // showing an issued plan that was changed afterwards is allowed, with one warning line that says so
+                assertTrue(r.err.isEmpty() || (r.err.lines().count() == 1 && r.err.startsWith("warning: this plan was changed after")),
+                        what);
+            } else {
+                assertEquals("", r.err, what);
+            }
             if (args[0].equals("grade") && !List.of(args).contains("--json")) {
                 assertTrue(r.out.contains("Part verdict: "), what);
             }
