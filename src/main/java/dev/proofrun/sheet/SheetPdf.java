@@ -41,9 +41,13 @@ public final class SheetPdf {
                     pages.bold(), flow.width());
             float room = pages.bodyHeight() - table.header().height(flow.width());
             if (table.blockHeight() > room) {
-                throw new UserException(SheetMessage.SLOT_TOO_TALL, plan.characteristics().size(),
-                        plan.design().subgroupSize(), paper.name().toLowerCase(java.util.Locale.ROOT),
-                        table.largestSubgroupSize(room));
+                String sheet = paper.name().toLowerCase(java.util.Locale.ROOT);
+                int largest = table.largestSubgroupSize(room);
+                throw largest > 0
+                        ? new UserException(SheetMessage.SLOT_TOO_TALL, plan.characteristics().size(), plan.design().subgroupSize(),
+                                sheet, largest)
+                        : new UserException(SheetMessage.TOO_MANY_CHARACTERISTICS, plan.characteristics().size(), sheet,
+                                SlotTable.characteristicsPerPage(room));
             }
             flow.newPage();
             flow.startTable(table.header());

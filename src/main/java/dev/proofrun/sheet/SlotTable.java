@@ -91,6 +91,11 @@ final class SlotTable {
         return lines * perLineAtMinimum();
     }
 
+    /** The most characteristics whose slot block, one line of boxes each, fits in {@code room} points. */
+    static int characteristicsPerPage(float room) {
+        return (int) Math.floor(room / LINE);
+    }
+
     private int perLineAtMinimum() {
         return (int) Math.floor((width - (SLOT_W + CHAR_W + TAKEN_W + LOT_W + OPERATOR_W + REMARK_MIN)) / MIN_BOX);
     }

@@ -106,6 +106,25 @@ class HostileInputTest {
     }
 
     @Test
+    void aTenThousandCharacterNameInAnIssuedPlanIsCutInTheReport() throws Exception {
+        Path named = dir.resolve("long-names.json");
+        String text = Files.readString(plan, StandardCharsets.UTF_8).replace("\"state\": \"issued\"", "\"state\": \"draft\"")
+                .replaceFirst(",\\s*\"revision\": \"[0-9a-f]+\"", "")
+                .replace("\"name\": \"bore diameter\"", "\"name\": \"" + "bore ".repeat(2000) + "\"")
+                .replace("\"name\": \"valve body\"", "\"name\": \"" + "valve ".repeat(2000) + "\"");
+        Files.writeString(named, text, StandardCharsets.UTF_8);
+        Run issued = run("plan", "issue", named.toString());
+        assertEquals(0, issued.code(), issued.err());
+        String revision = Files.readString(named, StandardCharsets.UTF_8).replaceFirst("(?s).*\"revision\": \"([0-9a-f]+)\".*", "$1");
+        Path csv = dir.resolve("long-names.csv");
+        Files.writeString(csv, returned.replaceAll("@[0-9a-f]{12}", "@" + revision), StandardCharsets.UTF_8);
+        Path pdf = dir.resolve("long-names.pdf");
+        Run r = run("grade", named.toString(), csv.toString(), "--report", pdf.toString());
+        assertEquals(0, r.code(), r.err());
+        assertTrue(Files.size(pdf) > 0);
+    }
+
+    @Test
     void aLineBreakInsideAValueIsShownEscaped() throws Exception {
         Path csv = dir.resolve("readings.csv");
         Files.writeString(csv, "value\n22.001\n\"22.001\n1\"\n22.002\n", StandardCharsets.UTF_8);
@@ -194,8 +213,24 @@ class HostileInputTest {
         Run r = run("sheet", draft.toString(), "--draft", "--out", out.toString());
         oneLine(r);
         assertEquals("proofrun: " + draft + ": the collection sheet cannot hold a slot of 3 characteristics with 300 readings each on"
-                + " one a4 page: with these characteristics it holds subgroups of 1 to 60 readings (0: plan fewer characteristics together)",
-                r.err().strip());
+                + " one a4 page: with these characteristics it holds subgroups of 1 to 60 readings", r.err().strip());
         assertFalse(Files.exists(out.resolve("PR-2027-0311-fill-in.xlsx")));
+
+        // 37 characteristics of one reading each: one line of 19 pt each is taller than A4's 697 pt under the header
+        var mapper = new com.fasterxml.jackson.databind.ObjectMapper();
+        var tree = (com.fasterxml.jackson.databind.node.ObjectNode) mapper.readTree(text);
+        var list = mapper.createArrayNode();
+        for (int i = 1; i <= 37; i++) {
+            var c = tree.get("characteristics").get(0).deepCopy();
+            ((com.fasterxml.jackson.databind.node.ObjectNode) c).put("id", String.format(java.util.Locale.ROOT, "C%02d", i));
+            list.add(c);
+        }
+        tree.set("characteristics", list);
+        Path many = dir.resolve("many-draft.json");
+        Files.writeString(many, mapper.writeValueAsString(tree), StandardCharsets.UTF_8);
+        Run m = run("sheet", many.toString(), "--draft", "--out", dir.resolve("many-sheet").toString());
+        oneLine(m);
+        assertEquals("proofrun: " + many + ": the collection sheet cannot hold a slot of 37 characteristics on one a4 page, even with"
+                + " one reading each: plan at most 36 characteristics together", m.err().strip());
     }
 }
