@@ -1,6 +1,7 @@
 package dev.proofrun.grade;
 
 import dev.proofrun.plan.OffsetTimes;
+import dev.proofrun.text.Decimals;
 import dev.proofrun.text.FormulaGuard;
 import dev.proofrun.text.Location;
 import dev.proofrun.text.Shown;
@@ -237,7 +238,7 @@ final class ReturnedData implements RowHandler {
 
     private void reading(Collected col, int ci, int si, long row, String text, int column, String id) {
         double v = Cells.number(text);
-        if (Double.isInfinite(v) || Cells.namesNonFinite(text)) { // 1e309 overflows; a gauge may write "Infinity"
+        if (Double.isInfinite(v) || Decimals.namesNonFinite(text)) { // 1e309 overflows; a gauge may write "Infinity"
             col.spoiled[si] = true;
             col.outOfReach++;
             log.add(Location.cell(display, row, name(column)), Severity.ERROR, id, GradeMessage.NOT_FINITE, Shown.cell(text));

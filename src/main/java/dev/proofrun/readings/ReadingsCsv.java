@@ -1,5 +1,6 @@
 package dev.proofrun.readings;
 
+import dev.proofrun.text.Decimals;
 import dev.proofrun.text.Location;
 import dev.proofrun.text.Shown;
 import dev.proofrun.text.UserException;
@@ -235,7 +236,7 @@ public final class ReadingsCsv {
         }
         double x = DecimalCell.parse(text);
         Location where = Location.cell(name, r.getRecordNumber(), column);
-        if (Double.isInfinite(x) || DecimalCell.namesNonFinite(text)) {
+        if (Double.isInfinite(x) || Decimals.namesNonFinite(text)) {
             throw new UserException(where, ReadingsMessage.NOT_FINITE, Shown.cell(text));
         }
         if (Double.isNaN(x)) {
