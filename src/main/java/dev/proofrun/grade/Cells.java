@@ -1,7 +1,7 @@
 package dev.proofrun.grade;
 
 import dev.proofrun.plan.OffsetTimes;
-import dev.proofrun.text.Decimals;
+import dev.proofrun.text.CsvDialect;
 import java.time.LocalDate;
 import java.time.LocalDateTime;
 import java.time.LocalTime;
@@ -17,13 +17,13 @@ final class Cells {
     }
 
     /**
-     * A number in a returned file: {@link Decimals#parse} with the decimal comma allowed (a single comma and no
-     * point), as spreadsheets in decimal-comma locales write it.
+     * A number in a returned file (CSV or XLSX): the dialect's rule ({@link CsvDialect#number}), a point or a
+     * single comma as the decimal mark, as spreadsheets in decimal-comma locales write it.
      *
      * @return the value, or NaN when the text is not a number
      */
     static double number(String text) {
-        return Decimals.parse(text, true);
+        return CsvDialect.number(text);
     }
 
     /**

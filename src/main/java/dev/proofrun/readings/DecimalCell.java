@@ -1,10 +1,10 @@
 package dev.proofrun.readings;
 
-import dev.proofrun.text.Decimals;
+import dev.proofrun.text.CsvDialect;
 
 /**
- * Parses a cell of a readings file by the one number rule ({@link Decimals}) with a decimal point only: a
- * comma separates the file's cells, so a decimal comma there is a mistake the reader names.
+ * Parses a cell of a readings file by the dialect's number rule ({@link CsvDialect#number}), as a returned
+ * file's cell is read: a point or a single comma as the decimal mark.
  */
 final class DecimalCell {
 
@@ -13,7 +13,7 @@ final class DecimalCell {
 
     /** The value, or NaN if the text is not a plain decimal number (the text is already trimmed). */
     static double parse(String text) {
-        return Decimals.parse(text, false);
+        return CsvDialect.number(text);
     }
 
 }

@@ -1,5 +1,6 @@
 package dev.proofrun.readings;
 
+import dev.proofrun.text.CsvDialect;
 import dev.proofrun.text.Decimals;
 import dev.proofrun.text.Location;
 import dev.proofrun.text.Shown;
@@ -34,8 +35,9 @@ import org.apache.commons.csv.CSVRecord;
  *     label first appears;</li>
  * <li>{@code x1, x2, ..., xn}: one subgroup per row; blank cells are skipped, so a row may hold fewer.</li>
  * </ul>
- * Rows are numbered as a spreadsheet shows them (the header is row 1); blank lines are skipped. Numbers
- * use a decimal point ({@link DecimalCell}); {@code NaN}, {@code Infinity} and numbers that overflow ({@code 1e309})
+ * Rows are numbered as a spreadsheet shows them (the header is row 1); blank lines are skipped. The file is in
+ * the one dialect of {@link CsvDialect}: {@code ,} or {@code ;} as the header uses more, a point or a single
+ * comma as the decimal mark ({@link DecimalCell}); {@code NaN}, {@code Infinity} and numbers that overflow ({@code 1e309})
  * are refused as not finite, and readings beyond ±{@value #MAGNITUDE} as too large to compute with. Every problem is a {@link UserException} naming file, row and
  * column.
  */
@@ -68,13 +70,26 @@ public final class ReadingsCsv {
             throw new UserException(Location.file(name), ReadingsMessage.BAD_SUBGROUP_SIZE, subgroupSize.getAsInt());
         }
         try (BufferedReader in = Files.newBufferedReader(file, StandardCharsets.UTF_8);
-                CSVParser parser = CSVParser.builder().setReader(in).setFormat(FORMAT).get()) {
+                CSVParser parser = CSVParser.builder().setReader(in)
+                        .setFormat(FORMAT.builder().setDelimiter(separator(file)).get()).get()) {
             return parse(name, parser.iterator(), subgroupSize);
         } catch (NoSuchFileException e) {
             throw new UserException(Location.file(name), ReadingsMessage.NOT_FOUND);
         } catch (IOException e) {
             throw new UserException(Location.file(name), ReadingsMessage.NOT_READABLE, e.getMessage());
         }
+    }
+
+    /** The dialect's separator, from the file's first non-blank line (read on its own: a header is short). */
+    private static char separator(Path file) throws IOException {
+        try (BufferedReader in = Files.newBufferedReader(file, StandardCharsets.UTF_8)) {
+            for (String line = in.readLine(); line != null; line = in.readLine()) {
+                if (!line.isBlank()) {
+                    return CsvDialect.separator(line);
+                }
+            }
+        }
+        return ',';
     }
 
     private static Readings parse(String name, Iterator<CSVRecord> records, OptionalInt subgroupSize) {
