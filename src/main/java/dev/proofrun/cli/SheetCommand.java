@@ -1,6 +1,8 @@
 package dev.proofrun.cli;
 
 import dev.proofrun.plan.PlanFiles;
+import dev.proofrun.text.Location;
+import dev.proofrun.text.UserException;
 import dev.proofrun.plan.StudyPlan;
 import dev.proofrun.sheet.SheetFiles;
 import dev.proofrun.sheet.layout.Paper;
@@ -40,7 +42,12 @@ public final class SheetCommand implements Callable<Integer> {
     public Integer call() {
         Paper size = Paper.of(paper);
         StudyPlan p = PlanFiles.read(plan);
-        SheetFiles.Written written = SheetFiles.write(p, out, size, draft);
+        SheetFiles.Written written;
+        try {
+            written = SheetFiles.write(p, out, size, draft);
+        } catch (UserException e) {
+            throw e.placedIn(Location.file(plan.toString())); // a refusal of the plan's content names the plan
+        }
         for (Path path : written.all()) {
             spec.commandLine().getOut().println(path);
         }

@@ -49,6 +49,10 @@ final class CharacteristicGrader {
             reasons.add(new Reason(Step.COMPLETENESS, true, GradeMessage.REASON_SHORT.format(c.completeSubgroups(),
                     c.plannedSubgroups(), c.allowedShortfall(), c.incompleteSubgroups(), c.missingSubgroups())));
         }
+        if (data.outOfReach() > 0) {
+            valid = false; // set aside, never passed over: see Reach
+            reasons.add(new Reason(Step.COMPLETENESS, true, GradeMessage.REASON_OUT_OF_REACH.format(data.outOfReach())));
+        }
         if (c.lateSubgroups() > 0) {
             reasons.add(new Reason(Step.COMPLETENESS, false, GradeMessage.REASON_LATE.format(c.lateSubgroups())));
         }

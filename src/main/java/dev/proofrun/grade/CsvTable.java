@@ -1,5 +1,6 @@
 package dev.proofrun.grade;
 
+import dev.proofrun.text.CsvDialect;
 import dev.proofrun.text.Location;
 import dev.proofrun.text.UserException;
 import java.io.IOException;
@@ -8,9 +9,8 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 
 /**
- * Reads a returned CSV file as people leave it after editing: a UTF-8 byte-order mark, blank rows, cells
- * padded with spaces, {@code ,} or {@code ;} as the separator (whichever the header uses more; spreadsheets
- * in decimal-comma locales write {@code ;}), fields in double quotes with {@code ""} for a quote.
+ * Reads a returned CSV file as people leave it after editing, in the one dialect ({@link CsvDialect}): a UTF-8
+ * byte-order mark, blank rows, cells padded with spaces, {@code ,} or {@code ;} as the separator, fields in double quotes with {@code ""} for a quote.
  * Row numbers are the file's line numbers, as a spreadsheet shows them. A quoted field may not span lines
  * (the fill-in files never need that). Streams: one line in memory at a time.
  */
@@ -35,7 +35,7 @@ final class CsvTable {
                     continue;
                 }
                 if (separator == 0) {
-                    separator = count(line, ';') > count(line, ',') ? ';' : ',';
+                    separator = CsvDialect.separator(line);
                     int n = split(line, separator, cells, display, row);
                     if (n > cells.length) {
                         cells = ensure(cells, n);
@@ -119,16 +119,6 @@ final class CsvTable {
             }
             i++; // the separator
         }
-    }
-
-    private static int count(String s, char c) {
-        int n = 0;
-        for (int i = 0; i < s.length(); i++) {
-            if (s.charAt(i) == c) {
-                n++;
-            }
-        }
-        return n;
     }
 
     private static boolean isBlank(String line) {

@@ -1,8 +1,10 @@
 package dev.proofrun.grade;
 
 import dev.proofrun.plan.OffsetTimes;
+import dev.proofrun.text.Decimals;
 import dev.proofrun.text.FormulaGuard;
 import dev.proofrun.text.Location;
+import dev.proofrun.text.Shown;
 import dev.proofrun.text.UserException;
 import java.util.ArrayList;
 import java.util.HashMap;
@@ -26,7 +28,10 @@ import java.util.TreeMap;
  *     a blank plan cell is accepted.</li>
  * <li>Unknown slot or characteristic: the row is not used (error). In the fill-in form a second row for
  *     the same slot and characteristic is not used (error).</li>
- * <li>A non-numeric reading is missing (error); a subgroup with fewer or more readings than the plan's n is
+ * <li>A non-numeric reading is missing (error). One that is not finite ({@code NaN}, {@code Infinity},
+ *     {@code 1e309}, which overflows) or lies beyond the characteristic's {@link Reach} is missing too (error),
+ *     and the characteristic is then not valid: such a value may stand for a real part far outside the
+ *     tolerance (a gauge over its range), so it is never simply passed over; a subgroup with fewer or more readings than the plan's n is
  *     not graded (error) — a reading is never moved between subgroups.</li>
  * <li>Kept but flagged (warning): a reading not on the gauge's resolution; a reading more than one tolerance
  *     width beyond a limit (probable typing error — for a one-sided specification the width is the distance
@@ -45,6 +50,7 @@ final class ReturnedData implements RowHandler {
     private final Map<String, Integer> slotIndex;
     private final Map<String, Integer> characteristicIndex = new HashMap<>();
     private final Collected[] collected;
+    private final Reach[] reach;
     private final ProblemLog log = new ProblemLog();
     private final int n;
     private final java.time.LocalDate[] plannedDay;
@@ -79,10 +85,29 @@ final class ReturnedData implements RowHandler {
             windowEnd[s] = start + 60L * slot.windowMinutes();
         }
         this.collected = new Collected[plan.characteristics().size()];
+        this.reach = new Reach[collected.length];
         for (int c = 0; c < collected.length; c++) {
             characteristicIndex.put(plan.characteristics().get(c).id(), c);
             collected[c] = new Collected(plan.slots().size(), n);
+            reach[c] = Reach.of(plan.characteristics().get(c).limits(), plan.characteristics().get(c).nominal());
         }
+    }
+
+    /** A fill-in or long-form header: it names a slot, characteristic or value column, or reading columns. */
+    @Override
+    public boolean isHeader(String[] cells) {
+        for (String cell : cells) {
+            String h = cell.toLowerCase(Locale.ROOT);
+            if (h.equals("slot") || h.equals("characteristic") || h.equals("value") || readingColumn(h)) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    private static boolean readingColumn(String h) {
+        // x1 .. x9999999: ASCII digits only, few enough that the number fits an int
+        return h.length() > 1 && h.length() <= 8 && h.charAt(0) == 'x' && h.substring(1).chars().allMatch(c -> c >= '0' && c <= '9');
     }
 
     @Override
@@ -98,7 +123,7 @@ final class ReturnedData implements RowHandler {
                 case "taken": takenCol = i; break;
                 case "value": valueCol = i; break;
                 default:
-                    if (h.length() > 1 && h.charAt(0) == 'x' && h.substring(1).chars().allMatch(Character::isDigit)) {
+                    if (readingColumn(h)) {
                         readings.put(Integer.parseInt(h.substring(1)), i);
                     }
             }
@@ -139,19 +164,21 @@ final class ReturnedData implements RowHandler {
         rows++;
         String planCell = prefilled(cells, count, planCol);
         if (!planCell.isEmpty() && !planCell.equals(reference)) {
-            throw new UserException(Location.cell(display, row, name(planCol)), GradeMessage.PLAN_MISMATCH, planCell, reference);
+            throw new UserException(Location.cell(display, row, name(planCol)), GradeMessage.PLAN_MISMATCH, Shown.cell(planCell),
+                    reference);
         }
         String charCell = prefilled(cells, count, characteristicCol);
         Integer ci = characteristicIndex.get(charCell);
         if (ci == null) {
-            log.add(Location.cell(display, row, name(characteristicCol)), Severity.ERROR, null, GradeMessage.UNKNOWN_CHARACTERISTIC, charCell);
+            log.add(Location.cell(display, row, name(characteristicCol)), Severity.ERROR, null, GradeMessage.UNKNOWN_CHARACTERISTIC,
+                    Shown.cell(charCell));
             return;
         }
         String id = plan.characteristics().get(ci).id();
         String slotCell = prefilled(cells, count, slotCol);
         Integer si = slotIndex.get(slotCell);
         if (si == null) {
-            log.add(Location.cell(display, row, name(slotCol)), Severity.ERROR, id, GradeMessage.UNKNOWN_SLOT, slotCell);
+            log.add(Location.cell(display, row, name(slotCol)), Severity.ERROR, id, GradeMessage.UNKNOWN_SLOT, Shown.cell(slotCell));
             return;
         }
         Collected col = collected[ci];
@@ -189,7 +216,7 @@ final class ReturnedData implements RowHandler {
             epoch = Cells.takenEpochSecond(text, plan.zone(), plannedDay(si));
         }
         if (epoch == Cells.NOT_A_TIME) {
-            log.add(Location.cell(display, row, name(takenCol)), Severity.WARNING, id, GradeMessage.TAKEN_UNREADABLE, text);
+            log.add(Location.cell(display, row, name(takenCol)), Severity.WARNING, id, GradeMessage.TAKEN_UNREADABLE, Shown.cell(text));
             return;
         }
         col.taken[si] = epoch;
@@ -197,7 +224,7 @@ final class ReturnedData implements RowHandler {
             PlannedSlot slot = plan.slots().get(si);
             col.late[si] = true;
             log.add(Location.cell(display, row, name(takenCol)), Severity.WARNING, id, GradeMessage.TAKEN_OUTSIDE_WINDOW,
-                    text, slot.begin().toOffsetDateTime(), slot.end().toOffsetDateTime());
+                    Shown.cell(text), slot.begin().toOffsetDateTime(), slot.end().toOffsetDateTime());
         }
     }
 
@@ -211,12 +238,25 @@ final class ReturnedData implements RowHandler {
 
     private void reading(Collected col, int ci, int si, long row, String text, int column, String id) {
         double v = Cells.number(text);
+        if (Double.isInfinite(v) || Decimals.namesNonFinite(text)) { // 1e309 overflows; a gauge may write "Infinity"
+            col.spoiled[si] = true;
+            col.outOfReach++;
+            log.add(Location.cell(display, row, name(column)), Severity.ERROR, id, GradeMessage.NOT_FINITE, Shown.cell(text));
+            return;
+        }
         if (Double.isNaN(v)) {
             col.spoiled[si] = true;
-            log.add(Location.cell(display, row, name(column)), Severity.ERROR, id, GradeMessage.NOT_NUMERIC, text);
+            log.add(Location.cell(display, row, name(column)), Severity.ERROR, id, GradeMessage.NOT_NUMERIC, Shown.cell(text));
             return;
         }
         GradedCharacteristic gc = plan.characteristics().get(ci);
+        if (!reach[ci].contains(v)) {
+            col.spoiled[si] = true;
+            col.outOfReach++;
+            log.add(Location.cell(display, row, name(column)), Severity.ERROR, id, GradeMessage.OUT_OF_REACH, Shown.cell(text),
+                    Cells.brief(reach[ci].low()), Cells.brief(reach[ci].high()));
+            return;
+        }
         boolean flagged = false;
         double res = gc.resolution();
         if (res > 0) {
@@ -224,12 +264,12 @@ final class ReturnedData implements RowHandler {
             if (Math.abs(steps - Math.rint(steps)) > RESOLUTION_SLACK * Math.max(1, Math.abs(steps))) {
                 flagged = true;
                 log.add(Location.cell(display, row, name(column)), Severity.WARNING, id, GradeMessage.OFF_RESOLUTION,
-                        text, Cells.show(res));
+                        Shown.cell(text), Cells.show(res));
             }
         }
         if (implausible(gc, v)) {
             flagged = true;
-            log.add(Location.cell(display, row, name(column)), Severity.WARNING, id, GradeMessage.IMPLAUSIBLE, text,
+            log.add(Location.cell(display, row, name(column)), Severity.WARNING, id, GradeMessage.IMPLAUSIBLE, Shown.cell(text),
                     gc.limits().lower().isPresent() ? Cells.show(gc.limits().lower().getAsDouble()) : "-",
                     gc.limits().upper().isPresent() ? Cells.show(gc.limits().upper().getAsDouble()) : "-");
         }
@@ -314,7 +354,7 @@ final class ReturnedData implements RowHandler {
         }
         Completeness completeness = new Completeness(k, n, subgroups.size(), incomplete, missing,
                 (long) subgroups.size() * n, col.flagged, lateCount, plan.allowedShortfall());
-        return new Collection(completeness, subgroups, slots);
+        return new Collection(completeness, subgroups, slots, col.outOfReach);
     }
 
     /** All problems so far, in the order found, then the counts of those not listed. */
@@ -322,8 +362,12 @@ final class ReturnedData implements RowHandler {
         return log.all(display);
     }
 
-    /** One characteristic's graded subgroups. */
-    record Collection(Completeness completeness, List<double[]> subgroups, List<String> slots) {
+    /**
+     * One characteristic's graded subgroups.
+     *
+     * @param outOfReach readings set aside because they lie beyond the {@link Reach}
+     */
+    record Collection(Completeness completeness, List<double[]> subgroups, List<String> slots, int outOfReach) {
     }
 
     /** Per-slot state of one characteristic, in primitive arrays. */
@@ -335,6 +379,7 @@ final class ReturnedData implements RowHandler {
         final boolean[] spoiled;
         final boolean[] late;
         int flagged;
+        int outOfReach;
 
         Collected(int k, int n) {
             values = new double[k * n];

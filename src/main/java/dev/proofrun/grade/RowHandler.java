@@ -4,6 +4,14 @@ package dev.proofrun.grade;
 interface RowHandler {
 
     /**
+     * Whether these cells, the first non-blank row of a sheet, are a header this handler reads (a workbook's
+     * reader uses it to find the fill-in sheet among others).
+     */
+    default boolean isHeader(String[] cells) {
+        return true;
+    }
+
+    /**
      * The first non-blank row.
      *
      * @param row   its 1-based row number as a spreadsheet shows it

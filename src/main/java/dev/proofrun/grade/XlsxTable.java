@@ -10,8 +10,6 @@ import java.time.format.DateTimeFormatter;
 import java.util.Arrays;
 import java.util.Iterator;
 import java.util.Locale;
-import javax.xml.parsers.ParserConfigurationException;
-import org.apache.poi.openxml4j.exceptions.OpenXML4JException;
 import org.apache.poi.openxml4j.opc.OPCPackage;
 import org.apache.poi.openxml4j.opc.PackageAccess;
 import org.apache.poi.ss.usermodel.DataFormatter;
@@ -23,18 +21,23 @@ import org.apache.poi.xssf.eventusermodel.XSSFSheetXMLHandler;
 import org.apache.poi.xssf.model.StylesTable;
 import org.apache.poi.xssf.usermodel.XSSFComment;
 import org.xml.sax.InputSource;
-import org.xml.sax.SAXException;
 import org.xml.sax.XMLReader;
 
 /**
- * Reads the first sheet of a returned XLSX workbook with POI's streaming (SAX) reader, so large workbooks
- * are not built in memory. Numbers arrive as their stored value (not as the cell format shows them, which
- * may round); date-formatted cells arrive as "yyyy-MM-dd HH:mm:ss" local times; text as typed.
- * Row numbers are the sheet's.
+ * Reads the fill-in sheet of a returned XLSX workbook with POI's streaming (SAX) reader, so large workbooks
+ * are not built in memory. The fill-in sheet is the first sheet whose first non-blank row is a header the
+ * handler knows ({@link RowHandler#isHeader}) — someone may have moved the summary sheet in front — or the
+ * first sheet when none is (its refusal then names what the header lacks). Numbers arrive as their stored
+ * value (not as the cell format shows them, which may round); date-formatted cells arrive as
+ * "yyyy-MM-dd HH:mm:ss" local times; text as typed. Row numbers are the sheet's.
+ *
+ * <p>What POI says about a file it cannot read never reaches the user: {@link XlsxTrouble} says it in our words.
  */
 final class XlsxTable {
 
     private static final DateTimeFormatter LOCAL = DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm:ss", Locale.ROOT);
+    /** Columns a sheet can have (A to XFD); a reference beyond is damage, not data. */
+    static final int MAX_COLUMNS = 16_384;
 
     private XlsxTable() {
     }
@@ -44,25 +47,52 @@ final class XlsxTable {
             XSSFReader reader = new XSSFReader(pkg);
             ReadOnlySharedStringsTable strings = new ReadOnlySharedStringsTable(pkg);
             StylesTable styles = reader.getStylesTable();
+            int chosen = fillInSheet(reader, styles, strings, handler);
             Iterator<InputStream> sheets = reader.getSheetsData();
-            if (!sheets.hasNext()) {
-                throw new UserException(Location.file(display), GradeMessage.NO_ROWS);
+            for (int i = 0; i < chosen; i++) {
+                sheets.next().close();
             }
             try (InputStream sheet = sheets.next()) {
-                XMLReader xml = XMLHelper.newXMLReader();
-                xml.setContentHandler(new XSSFSheetXMLHandler(styles, strings, new Rows(handler), new RawNumbers(), false));
-                xml.parse(new InputSource(sheet));
+                parse(sheet, styles, strings, new Rows(handler));
             }
-        } catch (IOException | OpenXML4JException | SAXException | ParserConfigurationException
-                | org.apache.poi.ooxml.POIXMLException | org.apache.poi.openxml4j.exceptions.InvalidOperationException e) {
-            throw new UserException(Location.file(display), GradeMessage.FILE_UNREADABLE, String.valueOf(e.getMessage()));
         } catch (UserException e) {
             throw e;
-        } catch (RuntimeException e) {
-            // POI signals a file that is not a workbook with unchecked exceptions (NotOfficeXmlFileException, ...)
-            throw new UserException(Location.file(display), GradeMessage.FILE_UNREADABLE,
-                    "not a readable XLSX workbook (" + e.getClass().getSimpleName() + ")");
+        } catch (Exception e) {
+            // POI signals a file that is not a workbook with checked and unchecked exceptions alike
+            throw new UserException(Location.file(display), GradeMessage.FILE_UNREADABLE, XlsxTrouble.of(e).words());
         }
+    }
+
+    /** The index of the fill-in sheet: the first whose header the handler knows, else 0. */
+    private static int fillInSheet(XSSFReader reader, StylesTable styles, ReadOnlySharedStringsTable strings,
+            RowHandler handler) throws Exception {
+        Iterator<InputStream> sheets = reader.getSheetsData();
+        if (!sheets.hasNext()) {
+            throw new XlsxTrouble.NoSheet();
+        }
+        for (int i = 0; sheets.hasNext(); i++) {
+            try (InputStream sheet = sheets.next()) {
+                HeaderProbe probe = new HeaderProbe();
+                try {
+                    parse(sheet, styles, strings, probe);
+                } catch (Exception e) {
+                    if (!HeaderProbe.found(e)) {
+                        throw e;
+                    }
+                    if (handler.isHeader(probe.header)) {
+                        return i;
+                    }
+                }
+            }
+        }
+        return 0;
+    }
+
+    private static void parse(InputStream sheet, StylesTable styles, ReadOnlySharedStringsTable strings,
+            XSSFSheetXMLHandler.SheetContentsHandler rows) throws Exception {
+        XMLReader xml = XMLHelper.newXMLReader();
+        xml.setContentHandler(new XSSFSheetXMLHandler(styles, strings, rows, new RawNumbers(), false));
+        xml.parse(new InputSource(sheet));
     }
 
     /** Numbers as stored, dates as local date-times; never the display rounding of the cell's format. */
@@ -89,16 +119,10 @@ final class XlsxTable {
         }
     }
 
-    /** Collects the cells of a row by column letter and hands the row on. */
-    private static final class Rows implements XSSFSheetXMLHandler.SheetContentsHandler {
-        private final RowHandler handler;
-        private String[] cells = new String[32];
-        private int count;
-        private boolean headerSeen;
-
-        Rows(RowHandler handler) {
-            this.handler = handler;
-        }
+    /** Collects the cells of a row by column letter; shared by the header probe and the reading. */
+    private abstract static class RowCells implements XSSFSheetXMLHandler.SheetContentsHandler {
+        String[] cells = new String[32];
+        int count;
 
         @Override
         public void startRow(int rowNum) {
@@ -106,8 +130,8 @@ final class XlsxTable {
             count = 0;
         }
 
-        @Override
-        public void endRow(int rowNum) {
+        /** Whether the row just ended has no text; fills the gaps with empty cells. */
+        boolean blank() {
             boolean blank = true;
             for (int i = 0; i < count; i++) {
                 if (cells[i] == null) {
@@ -117,20 +141,16 @@ final class XlsxTable {
                     blank = false;
                 }
             }
-            if (blank) {
-                return;
-            }
-            if (!headerSeen) {
-                headerSeen = true;
-                handler.header(rowNum + 1L, Arrays.copyOf(cells, count));
-            } else {
-                handler.row(rowNum + 1L, cells, count);
-            }
+            return blank;
         }
 
         @Override
         public void cell(String reference, String value, XSSFComment comment) {
-            int col = column(reference);
+            // a cell without a reference (r=) follows the one before it, as spreadsheet programs read it
+            int col = reference == null ? count : column(reference);
+            if (col < 0 || col >= MAX_COLUMNS) {
+                throw new XlsxTrouble.BadReference(reference);
+            }
             if (col >= cells.length) {
                 cells = Arrays.copyOf(cells, Math.max(col + 1, cells.length * 2));
             }
@@ -143,7 +163,7 @@ final class XlsxTable {
 
         private static int column(String reference) {
             int col = 0;
-            for (int i = 0; i < reference.length(); i++) {
+            for (int i = 0; i < reference.length() && col <= MAX_COLUMNS; i++) {
                 char c = reference.charAt(i);
                 if (c < 'A' || c > 'Z') {
                     break;
@@ -151,6 +171,61 @@ final class XlsxTable {
                 col = col * 26 + (c - 'A' + 1);
             }
             return col - 1;
+        }
+    }
+
+    /** Reads up to the first non-blank row of a sheet, then stops the parse. */
+    private static final class HeaderProbe extends RowCells {
+        String[] header = new String[0];
+
+        /** Whether the parse ended because the header was found (the SAX parser may have wrapped the signal). */
+        static boolean found(Throwable e) {
+            for (Throwable t = e; t != null; t = t.getCause()) {
+                if (t instanceof Found) {
+                    return true;
+                }
+            }
+            return false;
+        }
+
+        /** Thrown to end the parse once the header is known. */
+        static final class Found extends RuntimeException {
+            private static final long serialVersionUID = 1L;
+
+            Found() {
+                super(null, null, false, false);
+            }
+        }
+
+        @Override
+        public void endRow(int rowNum) {
+            if (!blank()) {
+                header = Arrays.copyOf(cells, count);
+                throw new Found();
+            }
+        }
+    }
+
+    /** Hands the header and each row on. */
+    private static final class Rows extends RowCells {
+        private final RowHandler handler;
+        private boolean headerSeen;
+
+        Rows(RowHandler handler) {
+            this.handler = handler;
+        }
+
+        @Override
+        public void endRow(int rowNum) {
+            if (blank()) {
+                return;
+            }
+            if (!headerSeen) {
+                headerSeen = true;
+                handler.header(rowNum + 1L, Arrays.copyOf(cells, count));
+            } else {
+                handler.row(rowNum + 1L, cells, count);
+            }
         }
     }
 }

@@ -124,6 +124,10 @@ final class PlanCodec {
         Part part = value("$.part", () -> new Part(req(pj.name(), "$.part.name"), pj.number(), pj.revision()));
         People people = f.people() == null ? People.unnamed() : new People(f.people().author(), f.people().collector());
         PlanJson.DesignJ dj = req(f.design(), "$.design");
+        int n = req(dj.subgroupSize(), "$.design.subgroupSize");
+        if (n < 1 || n > StudyPlan.MAX_SUBGROUP_SIZE) {
+            throw new UserException(file, PlanMessage.SUBGROUP_SIZE_RANGE, "$.design.subgroupSize", StudyPlan.MAX_SUBGROUP_SIZE, n);
+        }
         Design design = value("$.design", () -> new Design(req(dj.subgroupSize(), "$.design.subgroupSize"),
                 req(dj.subgroups(), "$.design.subgroups"),
                 value("$.design.sigmaMethod", () -> SigmaMethod.fromToken(req(dj.sigmaMethod(), "$.design.sigmaMethod"))),

@@ -1,9 +1,7 @@
 package dev.proofrun.plan;
 
-import com.fasterxml.jackson.core.JsonParser;
 import com.fasterxml.jackson.core.JsonProcessingException;
-import com.fasterxml.jackson.core.JsonStreamContext;
-import com.fasterxml.jackson.core.io.JsonEOFException;
+import com.fasterxml.jackson.core.StreamReadFeature;
 import com.fasterxml.jackson.core.util.DefaultIndenter;
 import com.fasterxml.jackson.core.util.DefaultPrettyPrinter;
 import com.fasterxml.jackson.core.util.Separators;
@@ -67,6 +65,7 @@ public final class PlanFiles {
             .disable(DeserializationFeature.ACCEPT_FLOAT_AS_INT)
             .disable(MapperFeature.ALLOW_COERCION_OF_SCALARS)
             .disable(MapperFeature.SORT_PROPERTIES_ALPHABETICALLY)
+            .enable(StreamReadFeature.STRICT_DUPLICATE_DETECTION) // a key said twice is refused (JsonTrouble)
             .build();
 
     private static final DefaultPrettyPrinter PRETTY = new DefaultPrettyPrinter(Separators.createDefaultInstance()
@@ -387,7 +386,7 @@ public final class PlanFiles {
         try {
             tree = MAPPER.readTree(bytes);
         } catch (JsonProcessingException e) {
-            throw syntax(e, where, bytes.length);
+            throw JsonTrouble.of(e, where, bytes);
         } catch (IOException e) {
             throw new UserException(where, PlanMessage.CANNOT_READ, describe(e));
         }
@@ -414,27 +413,13 @@ public final class PlanFiles {
             String wanted = e.getTargetType() == null ? "another kind of value" : JsonPaths.kind(e.getTargetType());
             throw new UserException(where, PlanMessage.WRONG_TYPE, JsonPaths.of(e.getPath()), wanted);
         } catch (JsonMappingException e) {
-            throw new UserException(where, PlanMessage.BAD_VALUE, JsonPaths.of(e.getPath()), e.getOriginalMessage());
+            // the records take any value of their type; what is left is a value of the wrong kind
+            throw new UserException(where, PlanMessage.WRONG_TYPE, JsonPaths.of(e.getPath()), "another kind of value");
         } catch (JsonProcessingException e) {
-            throw syntax(e, where, bytes.length);
+            throw JsonTrouble.of(e, where, bytes);
         } catch (IOException e) {
             throw new UserException(where, PlanMessage.CANNOT_READ, describe(e));
         }
-    }
-
-    private static UserException syntax(JsonProcessingException e, Location where, int length) {
-        int line = e.getLocation() == null ? 0 : e.getLocation().getLineNr();
-        int column = e.getLocation() == null ? 0 : e.getLocation().getColumnNr();
-        String path = "$";
-        if (e.getProcessor() instanceof JsonParser) {
-            JsonStreamContext ctx = ((JsonParser) e.getProcessor()).getParsingContext();
-            path = JsonPaths.of(ctx);
-        }
-        boolean atEnd = e.getLocation() != null && e.getLocation().getByteOffset() >= length;
-        if (e instanceof JsonEOFException || atEnd) {
-            return new UserException(where, PlanMessage.TRUNCATED, path, line);
-        }
-        return new UserException(where, PlanMessage.NOT_JSON, path, line, column, e.getOriginalMessage().replace('\n', ' '));
     }
 
     /** What went wrong with the file, in words (the file's name is already in front of the message). */

@@ -9,12 +9,14 @@ public enum PlanMessage implements MessageKey {
     EMPTY_FILE("the file is empty; expected a proofrun plan (JSON)"),
     TRUNCATED("the file ends too early, after %s (line %d); is it truncated?"),
     NOT_JSON("not valid JSON at %s (line %d, column %d): %s"),
+    DUPLICATE_KEY("at %s: the key \"%s\" appears twice in the same object (line %d); a plan says each thing once: keep one"),
     NOT_A_PLAN("not a proofrun plan: $.format is %s, expected \"" + PlanJson.FORMAT + "\""),
     UNKNOWN_VERSION("at $.formatVersion: plan format version %s is not known; this proofrun reads version %d"),
     UNKNOWN_FIELD("at %s: unknown field \"%s\""),
     WRONG_TYPE("at %s: expected %s"),
     MISSING("at %s: a value is required"),
     BAD_VALUE("at %s: %s"),
+    SUBGROUP_SIZE_RANGE("at %s: the fill-in files hold subgroups of 1 to %d readings, not %d"),
     EDITED_AFTER_ISSUE("the plan was changed after it was issued as revision %s (its content now gives %s);"
             + " run 'proofrun plan issue' on it to issue the change as a new revision"),
     ISSUED_FILE_PROTECTED("%s holds issued revision %s; an issued plan is not overwritten: issue the change"

@@ -41,6 +41,13 @@ public record StudyPlan(String id, Part part, People people, List<Characteristic
         ProductionCalendar calendar, StudySpan span, Design design, Spacing spacing, long seed, Schedule schedule,
         PlanState state, Optional<String> revision, Optional<String> supersedes) {
 
+    /**
+     * The largest subgroup size a plan file may state: the fill-in workbook has one column per reading beside
+     * eight others (plan, slot, characteristic, planned, taken, lot, operator, remark), and a sheet has 16,384
+     * columns (A to XFD).
+     */
+    public static final int MAX_SUBGROUP_SIZE = 16_384 - 8;
+
     /** A revision fingerprint: 12 lower-case hex digits. */
     public static final String REVISION_PATTERN = "[0-9a-f]{12}";
 

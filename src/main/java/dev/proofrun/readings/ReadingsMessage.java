@@ -10,6 +10,7 @@ public enum ReadingsMessage implements MessageKey {
     NO_HEADER("no header: expected a 'value' column (optionally with 'subgroup') or columns x1, x2, ..."),
     NOT_A_NUMBER("not a number: '%s'"),
     NOT_FINITE("not a finite number: '%s'"),
+    TOO_LARGE("'%s' is too large to compute with (at most %.0e either side of zero): probably a typing error"),
     MISSING_VALUE("missing reading"),
     EMPTY_ROW("no readings in this row"),
     MISSING_COLUMN("missing column x%d"),

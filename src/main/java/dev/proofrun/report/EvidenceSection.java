@@ -38,7 +38,7 @@ final class EvidenceSection {
     void place(Flow flow, CharacteristicGrade g, double nominal) {
         flow.newPage();
         String unit = g.unit() == null || g.unit().isEmpty() ? "" : " (" + g.unit() + ")";
-        flow.place(Paragraph.of(g.id() + "  " + g.name() + unit + ": " + g.verdict().id(), bold, 14));
+        flow.place(Paragraph.of(g.id() + "  " + Fmt.name(g.name()) + unit + ": " + g.verdict().id(), bold, 14));
         String gloss = VerdictSection.gloss(g.verdict());
         flow.place(Paragraph.of(Character.toUpperCase(gloss.charAt(0)) + gloss.substring(1) + ".", regular, 9));
         g.additionalSubgroups().ifPresent(k -> flow.place(Paragraph.of(String.format(Locale.ROOT,

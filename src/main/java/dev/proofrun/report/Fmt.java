@@ -10,6 +10,17 @@ final class Fmt {
     private Fmt() {
     }
 
+    /** Characters of a name from the plan (part, characteristic) printed in the report before it is cut. */
+    static final int NAME_CHARACTERS = 120;
+
+    /**
+     * A name from the plan as the report prints it: cut after {@value #NAME_CHARACTERS} characters with an
+     * ellipsis, so a name typed at any length never makes a heading or the verdict box taller than a page.
+     */
+    static String name(String text) {
+        return text.length() <= NAME_CHARACTERS ? text : text.substring(0, NAME_CHARACTERS - 1) + "\u2026";
+    }
+
     /** An index: two decimals. */
     static String index(double v) {
         return Double.isFinite(v) ? String.format(Locale.ROOT, "%.2f", v) : NONE;

@@ -39,7 +39,7 @@ public final class GradeReport {
      * @param out    where to write
      */
     public static void write(GradeResult result, StudyPlan plan, Paper paper, OutputStream out) {
-        PageHeading heading = new PageHeading(plan.part().name(), "Grade report: returned file " + result.file(),
+        PageHeading heading = new PageHeading(Fmt.name(plan.part().name()), "Grade report: returned file " + result.file(),
                 "Plan " + result.planId() + " @ " + result.revision(),
                 "Part verdict: " + result.verdict().id() + ". A statistical statement under assumptions; see page 1.",
                 false);

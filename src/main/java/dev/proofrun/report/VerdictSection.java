@@ -54,8 +54,8 @@ final class VerdictSection {
     void place(Flow flow, GradeResult result, StudyPlan plan) {
         flow.place(Paragraph.of("Grade of the capability study", bold, 16));
         flow.gap(3);
-        flow.place(Paragraph.of("Part: " + plan.part().name() + (plan.part().number().isBlank() ? "" : "   No. "
-                + plan.part().number()), bold, 10));
+        flow.place(Paragraph.of("Part: " + Fmt.name(plan.part().name()) + (plan.part().number().isBlank() ? "" : "   No. "
+                + Fmt.name(plan.part().number())), bold, 10));
         flow.place(Paragraph.of("Plan " + result.planId() + ", revision " + result.revision() + ". Returned file: "
                 + result.file() + ".", regular, 9));
         flow.gap(8);
@@ -65,7 +65,7 @@ final class VerdictSection {
         box.add(Paragraph.of("The worst of its characteristics: " + gloss(result.verdict()) + ".", regular, 9));
         box.add(Block.space(6));
         for (CharacteristicGrade g : result.characteristics()) {
-            box.add(Paragraph.of(g.id() + "  " + g.name() + ": " + g.verdict().id() + headline(g), bold, 9.5f));
+            box.add(Paragraph.of(g.id() + "  " + Fmt.name(g.name()) + ": " + g.verdict().id() + headline(g), bold, 9.5f));
             for (Reason r : decisive(g)) {
                 box.add(new Item("\u2013", new Paragraph(r.text(), regular, 9, 1.3f, 0), 10));
             }

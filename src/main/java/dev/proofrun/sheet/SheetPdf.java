@@ -3,6 +3,7 @@ package dev.proofrun.sheet;
 import dev.proofrun.plan.StudyPlan;
 import dev.proofrun.schedule.Slot;
 import dev.proofrun.sheet.layout.Flow;
+import dev.proofrun.text.UserException;
 import dev.proofrun.sheet.layout.PageHeading;
 import dev.proofrun.sheet.layout.Pages;
 import dev.proofrun.sheet.layout.Paper;
@@ -25,6 +26,7 @@ public final class SheetPdf {
      * @param plan  the plan
      * @param paper A4 or Letter
      * @param out   where to write; not closed
+     * @throws UserException if one slot's boxes (characteristics × lines of boxes) are taller than a page
      */
     public static void write(StudyPlan plan, Paper paper, OutputStream out) {
         boolean draft = !plan.isIssued();
@@ -37,6 +39,16 @@ public final class SheetPdf {
             new IntroPage(plan, pages).place(flow, draft);
             SlotTable table = new SlotTable(plan.characteristics(), plan.design().subgroupSize(), pages.regular(),
                     pages.bold(), flow.width());
+            float room = pages.bodyHeight() - table.header().height(flow.width());
+            if (table.blockHeight() > room) {
+                String sheet = paper.name().toLowerCase(java.util.Locale.ROOT);
+                int largest = table.largestSubgroupSize(room);
+                throw largest > 0
+                        ? new UserException(SheetMessage.SLOT_TOO_TALL, plan.characteristics().size(), plan.design().subgroupSize(),
+                                sheet, largest)
+                        : new UserException(SheetMessage.TOO_MANY_CHARACTERISTICS, plan.characteristics().size(), sheet,
+                                SlotTable.characteristicsPerPage(room));
+            }
             flow.newPage();
             flow.startTable(table.header());
             for (Slot slot : plan.schedule().slots()) {

@@ -82,6 +82,24 @@ final class SlotTable {
         return Math.max(characteristics.size() * linesPerBand * LINE, MIN_BLOCK);
     }
 
+    /**
+     * The largest subgroup size whose slot block fits in {@code room} points with these characteristics, or 0
+     * when not even one line of boxes per characteristic fits.
+     */
+    int largestSubgroupSize(float room) {
+        int lines = (int) Math.floor(room / LINE) / Math.max(1, characteristics.size());
+        return lines * perLineAtMinimum();
+    }
+
+    /** The most characteristics whose slot block, one line of boxes each, fits in {@code room} points. */
+    static int characteristicsPerPage(float room) {
+        return (int) Math.floor(room / LINE);
+    }
+
+    private int perLineAtMinimum() {
+        return (int) Math.floor((width - (SLOT_W + CHAR_W + TAKEN_W + LOT_W + OPERATOR_W + REMARK_MIN)) / MIN_BOX);
+    }
+
     /** Boxes across one line. */
     int boxesPerLine() {
         return perLine;

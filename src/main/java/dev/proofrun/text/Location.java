@@ -24,15 +24,18 @@ public record Location(String file, long row, String column) {
         return new Location(file, row, column);
     }
 
-    /** "data.csv, row 12, column x3" or shorter when row or column are unknown. */
+    /**
+     * "data.csv, row 12, column x3" or shorter when row or column are unknown; the file name is shown
+     * {@link Shown#escaped escaped} and the column header as a {@link Shown#cell cell} (it comes from the file).
+     */
     @Override
     public String toString() {
-        StringBuilder sb = new StringBuilder(file);
+        StringBuilder sb = new StringBuilder(Shown.escaped(file));
         if (row > 0) {
             sb.append(", row ").append(row);
         }
         if (column != null && !column.isEmpty()) {
-            sb.append(", column ").append(column);
+            sb.append(", column ").append(Shown.cell(column));
         }
         return sb.toString();
     }

@@ -18,12 +18,22 @@ public interface MessageKey {
     String english();
 
     /**
-     * Formats the template with the given arguments.
+     * Formats the template with the given arguments. Text arguments are shown {@link Shown#escaped escaped}, so
+     * a value with a line break in it cannot split the message into two lines.
      *
      * @param args the values the template refers to
      * @return the text to show
      */
     default String format(Object... args) {
-        return String.format(Locale.ROOT, english(), args);
+        Object[] shown = args;
+        for (int i = 0; i < args.length; i++) {
+            if (args[i] instanceof CharSequence) {
+                if (shown == args) {
+                    shown = args.clone();
+                }
+                shown[i] = Shown.escaped(args[i].toString());
+            }
+        }
+        return String.format(Locale.ROOT, english(), shown);
     }
 }

@@ -16,6 +16,7 @@ import java.nio.file.attribute.PosixFileAttributeView;
 import java.nio.file.attribute.PosixFilePermission;
 import java.nio.file.attribute.PosixFilePermissions;
 import java.util.Arrays;
+import java.util.List;
 import java.util.Set;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -204,27 +205,58 @@ class PlanFilesTest {
 
     /**
      * A plan is read once, straight into the records, and only a file refused that way is read again as a tree
-     * for its message. These are the cases where the two ways could part: the header is checked as the tree
-     * sees it (the last of repeated keys), and header refusals come before any refusal of the body.
+     * for its message. Header refusals come before any refusal of the body. A key said twice in one object is
+     * refused whichever way the file is read (issue 17: {@code "id":"DUP","id":"PR-…"} kept the last value and
+     * passed the revision check), naming the key and its JSON path.
      */
     @Test
     void theHeaderIsCheckedAsTheTreeSeesIt() throws Exception {
         String text = demoText();
-        String lastFormatOther = text.replaceFirst("\\{", "{\"format\": \"proofrun-plan\", \"formatVersion\": 1,")
-                .replace("\"format\": \"proofrun-plan\",\n", "\"format\": \"shopping-list\",\n");
-        assertEquals(PlanMessage.NOT_A_PLAN, refused(lastFormatOther).key(), lastFormatOther.substring(0, 120));
-        String lastVersionOther = text.replaceFirst("\\{", "{\"formatVersion\": 1,")
-                .replace("\"formatVersion\": 1,\n", "\"formatVersion\": 3,\n");
-        assertEquals(PlanMessage.UNKNOWN_VERSION, refused(lastVersionOther).key());
         // an unknown field and another format: the format is what is wrong
         assertEquals(PlanMessage.NOT_A_PLAN, refused(text.replace("proofrun-plan", "shopping-list")
                 .replace("\"part\": {", "\"part\": {\"colour\": \"red\",")).key());
         // the version given as text is another version, not a type error of the body
         assertEquals(PlanMessage.UNKNOWN_VERSION, refused(text.replace("\"formatVersion\": 1", "\"formatVersion\": \"1\"")).key());
         assertEquals(PlanMessage.UNKNOWN_VERSION, refused(text.replace("\"formatVersion\": 1", "\"formatVersion\": 1.0")).key());
-        // repeated keys that agree with the file are read as before
-        String repeated = text.replaceFirst("\\{", "{\"format\": \"shopping-list\", \"formatVersion\": 9,");
-        assertEquals(PlanFiles.inspect(saved(DemoPlan.create())).plan(), readText(repeated));
+        // repeated keys, even ones that agree with the file, are refused
+        String lastFormatOther = text.replaceFirst("\\{", "{\"format\": \"proofrun-plan\", \"formatVersion\": 1,");
+        UserException header = refused(lastFormatOther);
+        assertEquals(PlanMessage.DUPLICATE_KEY, header.key());
+        assertTrue(header.getMessage().contains("at $.format: the key \"format\" appears twice"), header.getMessage());
+    }
+
+    @Test
+    void duplicateKeysAreRefusedWithKeyAndPath() throws Exception {
+        String text = demoText();
+        UserException id = refused(text.replace("\"id\": \"PR-2027-0311\"", "\"id\": \"DUP\", \"id\": \"PR-2027-0311\""));
+        assertEquals(PlanMessage.DUPLICATE_KEY, id.key());
+        assertTrue(id.getMessage().startsWith(dir.resolve("broken.json") + ": at $.id: the key \"id\" appears twice"), id.getMessage());
+        UserException lsl = refused(text.replace("\"lsl\": 21.987", "\"lsl\": 21.987, \"lsl\": 21.0"));
+        assertEquals(PlanMessage.DUPLICATE_KEY, lsl.key());
+        assertTrue(lsl.getMessage().contains("at $.characteristics[0].lsl: the key \"lsl\""), lsl.getMessage());
+    }
+
+    @Test
+    void syntaxErrorsAreSaidInOurWords() throws Exception {
+        String text = demoText();
+        for (String broken : List.of(text.replace("\"days\": 3", "\"days\": 3,,"), text.replace("\"days\": 3", "\"days\": three"),
+                text.replace("\"days\": 3", "\"days\": 99999999999999999999"), text.replace("\"unit\": \"kN\"", "\"unit\": \"k\nN\""))) {
+            UserException e = refused(broken);
+            assertEquals(1, e.getMessage().lines().count(), e.getMessage());
+            for (String libraryWord : List.of("code ", "Unexpected character", "Unrecognized token", "CTRL-CHAR", "out of range of", "Jackson",
+                    "Exception")) {
+                assertFalse(e.getMessage().contains(libraryWord), e.getMessage());
+            }
+        }
+    }
+
+    @Test
+    void aSubgroupSizeBeyondTheFillInFilesIsRefusedWithTheRange() throws Exception {
+        String text = demoText().replace("\"subgroupSize\": 5", "\"subgroupSize\": 100000");
+        UserException e = refused(text);
+        assertEquals(PlanMessage.SUBGROUP_SIZE_RANGE, e.key());
+        assertTrue(e.getMessage().endsWith("at $.design.subgroupSize: the fill-in files hold subgroups of 1 to 16376 readings, not 100000"),
+                e.getMessage());
     }
 
     private StudyPlan readText(String text) throws Exception {

@@ -57,17 +57,31 @@ class ReadingsCsvTest {
         assertArrayEquals(new double[] {4, 6}, r.subgroups().get(1));
     }
 
+    /**
+     * The one dialect (issue 16): the same cells read alike in a returned file and a file of readings — a
+     * {@code ;} file with decimal commas, and a quoted decimal comma in a {@code ,} file.
+     */
+    @Test
+    void semicolonFilesAndDecimalCommasReadAsReturnedFilesDo() throws IOException {
+        Readings semi = ReadingsCsv.read(write("subgroup;value\nS1;22,001\nS1;21,999\nS2;22,0005\nS2;1,5e1\n"), OptionalInt.empty());
+        assertEquals(Layout.LABELLED, semi.layout());
+        assertArrayEquals(new double[] {22.001, 21.999}, semi.subgroups().get(0));
+        assertArrayEquals(new double[] {22.0005, 15.0}, semi.subgroups().get(1));
+        Readings quoted = ReadingsCsv.read(write("x1,x2\n1,2\n3,\"1,5\"\n"), OptionalInt.empty());
+        assertArrayEquals(new double[] {3, 1.5}, quoted.subgroups().get(1));
+    }
+
     @Test
     void badInputNamesFileRowAndColumn() throws IOException {
         UserException e = fails("value\n1\nabc\n", OptionalInt.empty());
         assertEquals(ReadingsMessage.NOT_A_NUMBER, e.key());
         assertEquals(dir.resolve("r.csv") + ", row 3, column value: not a number: 'abc'", e.getMessage());
         assertEquals(ReadingsMessage.EXTRA_CELLS, fails("x1,x2\n1,2\n3,1,5\n", OptionalInt.empty()).key());
-        UserException comma = fails("x1,x2\n1,2\n3,\"1,5\"\n", OptionalInt.empty());
+        UserException comma = fails("x1,x2\n1,2\n3,\"1,5,0\"\n", OptionalInt.empty());
         assertEquals(3, comma.location().orElseThrow().row());
         assertEquals("x2", comma.location().orElseThrow().column());
         assertEquals(ReadingsMessage.NOT_A_NUMBER, fails("value\n1\n0x1p3\n", OptionalInt.empty()).key());
-        assertEquals(ReadingsMessage.NOT_A_NUMBER, fails("value\n1\nNaN\n", OptionalInt.empty()).key());
+        assertEquals(ReadingsMessage.NOT_FINITE, fails("value\n1\nNaN\n", OptionalInt.empty()).key());
         assertEquals(ReadingsMessage.NOT_FINITE, fails("value\n1\n1e999\n", OptionalInt.empty()).key());
         assertEquals(ReadingsMessage.EMPTY_FILE, fails("", OptionalInt.empty()).key());
         assertEquals(ReadingsMessage.NO_HEADER, fails("1.0\n2.0\n", OptionalInt.empty()).key());

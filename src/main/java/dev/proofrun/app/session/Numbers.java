@@ -1,15 +1,14 @@
 package dev.proofrun.app.session;
 
+import dev.proofrun.text.Decimals;
 import java.util.OptionalDouble;
-import java.util.regex.Pattern;
 
 /**
- * Reads numbers as people type them in the wizard: a point as the decimal mark (as the plan files and
- * the command line do), optional sign and exponent; no thousands separators, no NaN or infinity.
+ * Reads numbers as people type them in the wizard, by the one number rule ({@link Decimals}) with a point as
+ * the decimal mark (as the plan files and the command line take them); no thousands separators, no NaN or
+ * infinity (a number too large for a double is not one either).
  */
 public final class Numbers {
-
-    private static final Pattern NUMBER = Pattern.compile("[-+]?(\\d+\\.?\\d*|\\.\\d+)([eE][-+]?\\d+)?");
 
     private Numbers() {
     }
@@ -24,11 +23,7 @@ public final class Numbers {
         if (isBlank(text)) {
             return OptionalDouble.empty();
         }
-        String t = text.trim();
-        if (!NUMBER.matcher(t).matches()) {
-            return OptionalDouble.empty();
-        }
-        double v = Double.parseDouble(t);
+        double v = Decimals.parse(text.trim(), false);
         return Double.isFinite(v) ? OptionalDouble.of(v) : OptionalDouble.empty();
     }
 

@@ -4,8 +4,8 @@ import java.util.List;
 import java.util.Locale;
 
 /**
- * Places blocks down the body of successive pages. A block never splits: when it does not fit in what
- * is left of a page, a new page starts. Inside a table ({@link #startTable}) the table's header block is
+ * Places blocks down the body of successive pages. A block never splits (save a paragraph taller than a
+ * page, see {@link #place}): when it does not fit in what is left of a page, a new page starts. Inside a table ({@link #startTable}) the table's header block is
  * repeated at the top of every page the table runs onto.
  */
 public final class Flow {
@@ -30,8 +30,18 @@ public final class Flow {
         return canvas == null ? pages.bodyHeight() : cursor - pages.bodyBottom();
     }
 
-    /** Places one block, on a new page if it does not fit on this one. */
+    /**
+     * Places one block, on a new page if it does not fit on this one. A {@link Paragraph} taller than a page is
+     * placed in parts, page by page; any other block must fit a page.
+     */
     public void place(Block block) {
+        float room = pages.bodyHeight() - (tableHeader == null ? 0 : tableHeader.height(width()));
+        if (block instanceof Paragraph p && p.height(width()) > room) {
+            for (Paragraph part : p.split(width(), room)) {
+                placeTogether(List.of(part));
+            }
+            return;
+        }
         placeTogether(List.of(block));
     }
 

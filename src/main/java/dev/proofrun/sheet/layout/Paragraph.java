@@ -3,8 +3,9 @@ package dev.proofrun.sheet.layout;
 import java.util.List;
 
 /**
- * Wrapped text in one face and size, drawn as one {@link Block} (so a paragraph never splits across
- * pages; keep paragraphs short).
+ * Wrapped text in one face and size, drawn as one {@link Block}: a paragraph that fits a page never splits
+ * across pages; one taller than a page (a 10,000-character remark) is placed in page-sized parts by
+ * {@link Flow#place} ({@link #split}).
  *
  * @param text    the text; newlines start new lines
  * @param face    the face
@@ -26,6 +27,21 @@ public record Paragraph(String text, Typeface face, float size, float leading, f
 
     private List<String> lines(float width) {
         return Text.wrap(text, face, size, width - indent);
+    }
+
+    /**
+     * This paragraph in parts, each at most {@code maxHeight} points tall at this width (at least one line each),
+     * whose lines together are this paragraph's lines.
+     */
+    public List<Paragraph> split(float width, float maxHeight) {
+        List<String> lines = lines(width);
+        int per = Math.max(1, (int) Math.floor(maxHeight / (size * leading)));
+        List<Paragraph> parts = new java.util.ArrayList<>();
+        for (int i = 0; i < lines.size(); i += per) {
+            parts.add(new Paragraph(String.join("\n", lines.subList(i, Math.min(lines.size(), i + per))), face, size,
+                    leading, indent));
+        }
+        return parts;
     }
 
     @Override

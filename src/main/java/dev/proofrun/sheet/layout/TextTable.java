@@ -85,7 +85,18 @@ public final class TextTable {
         if (cells.size() != columns.size()) {
             throw new IllegalArgumentException("a row needs one cell per column");
         }
-        return new Row(List.copyOf(cells), regular, false, 0);
+        return new Row(clipped(cells), regular, false, 0);
+    }
+
+    /** Longest cell text set in a body row; longer text is cut with an ellipsis, so a row always fits a page. */
+    public static final int CELL_CHARACTERS = 600;
+
+    private static List<String> clipped(List<String> cells) {
+        List<String> out = new java.util.ArrayList<>(cells.size());
+        for (String c : cells) {
+            out.add(c.length() <= CELL_CHARACTERS ? c : c.substring(0, CELL_CHARACTERS - 1) + "\u2026");
+        }
+        return List.copyOf(out);
     }
 
     /** A body row at least {@code minHeight} points tall (room to write or sign by hand). */
@@ -93,7 +104,7 @@ public final class TextTable {
         if (cells.size() != columns.size()) {
             throw new IllegalArgumentException("a row needs one cell per column");
         }
-        return new Row(List.copyOf(cells), regular, false, minHeight);
+        return new Row(clipped(cells), regular, false, minHeight);
     }
 
     /** A body row. */
