@@ -368,6 +368,11 @@ final class ReturnedData implements RowHandler {
      * @param outOfReach readings set aside because they lie beyond the {@link Reach}
      */
     record Collection(Completeness completeness, List<double[]> subgroups, List<String> slots, int outOfReach) {
+
+        /** Subgroups with no reading set aside (simulated studies). */
+        Collection(Completeness completeness, List<double[]> subgroups, List<String> slots) {
+            this(completeness, subgroups, slots, 0);
+        }
     }
 
     /** Per-slot state of one characteristic, in primitive arrays. */
