@@ -37,7 +37,6 @@ public final class ShellView {
     private final List<Button> railButtons = new ArrayList<>();
     private boolean railPending;
     private final java.util.Map<Integer, ScrollPane> pages = new java.util.HashMap<>();
-    private final Unfolding unfolding = new Unfolding();
 
     public ShellView(ShellViewModel vm, List<StepView> views) {
         if (views.size() != vm.steps().size()) {
@@ -58,16 +57,6 @@ public final class ShellView {
 
     public Parent root() {
         return root;
-    }
-
-    /** Puts the page on screen together at once; for the window's first page, before the window shows. */
-    public void unfoldNow() {
-        unfolding.finish();
-    }
-
-    /** True while a page shown for the first time is still being put together (a few frames). */
-    public javafx.beans.value.ObservableBooleanValue unfoldingProperty() {
-        return unfolding.runningProperty();
     }
 
     private Node rail() {
@@ -166,9 +155,7 @@ public final class ShellView {
     /**
      * Shows the step's page. A page is put in the scene on its first showing and then stays there, hidden
      * while another step is shown: showing it again does not make its skins or apply the style sheet to it
-     * again (a page taken out of the scene and put back gets all its CSS again). On its first showing the
-     * page unfolds a part per frame ({@link Unfolding}): done in one frame, the skins, styles and layout of
-     * a whole page held the FX thread for a few hundred milliseconds on a cold start.
+     * again (a page taken out of the scene and put back gets all its CSS again).
      */
     private void show(int index) {
         StepView v = views.get(index);
@@ -176,9 +163,6 @@ public final class ShellView {
         if (shown == null) {
             shown = page(index, v);
             pages.put(index, shown);
-            if (v.root() instanceof javafx.scene.layout.Pane parts) {
-                unfolding.unfold(parts);
-            }
             stage.getChildren().add(shown);
         }
         for (Node p : stage.getChildren()) {
