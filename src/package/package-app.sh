@@ -42,11 +42,13 @@ display_run() {
 # one training run: the wizard shows each step once (dev.proofrun.app.TrainingRun) and closes; the JVM writes
 # the classes it loaded to the archive as it exits
 train() {
-  local java="$1" archive="$2" classpath="$3" home
+  local java="$1" archive classpath="$3" home
+  archive="$(cd "$(dirname "$2")" && pwd)/$(basename "$2")"
   home="$(mktemp -d)"
   rm -f "$archive"
-  if display_run "$java" -XX:ArchiveClassesAtExit="$archive" -Dproofrun.home="$home" \
-      -cp "$classpath" dev.proofrun.app.TrainingRun >target/training.log 2>&1 && [ -s "$archive" ]; then
+  # run in the temporary home, so that the wizard's default plans folder (./plans) is not the project's
+  if (cd "$home" && display_run "$java" -XX:ArchiveClassesAtExit="$archive" -Dproofrun.home="$home" \
+      -cp "$classpath" dev.proofrun.app.TrainingRun) >target/training.log 2>&1 && [ -s "$archive" ]; then
     echo "package-app: recorded $archive ($(du -h "$archive" | cut -f1)); $(grep 'training run:' target/training.log)"
   else
     rm -f "$archive"
@@ -79,29 +81,36 @@ train "$image/lib/runtime/bin/java" "$image/lib/app/proofrun.jsa" "$image/lib/ap
 echo "package-app: archive for java -jar"
 train java target/proofrun.jsa "$jar"
 
-# The package installs the image to /opt/proofrun. JDK 17 accepts an archive only where the jar lies at the path
-# it was recorded with, so the package's archive is recorded in a copy of the image at that very place, made
-# only if nothing is there yet (and removed after); otherwise the package starts without it.
-deb_image() {
-  local staged=target/deb-image/$name installed=/opt/$name
-  rm -rf target/deb-image && mkdir -p target/deb-image && cp -a "$image" "$staged"
-  rm -f "$staged/lib/app/proofrun.jsa"
-  if [ -w /opt ] && [ ! -e "$installed" ]; then
-    cp -a "$image" "$installed"
-    train "$installed/lib/runtime/bin/java" "$installed/lib/app/proofrun.jsa" "$installed/lib/app/$(basename "$jar")"
-    [ -f "$installed/lib/app/proofrun.jsa" ] && cp -a "$installed/lib/app/proofrun.jsa" "$staged/lib/app/"
-    rm -rf "$installed"
-  else
+# The package installs the image to /opt/proofrun. JDK 17 accepts an archive only where the jar lies at the path,
+# and with the modification time, it was recorded with; jpackage gives the packaged files new times. So the
+# package is built without an archive, unpacked, its /opt/proofrun trained in place (only if nothing is there
+# yet, and removed after), and packed again with the archive; otherwise it starts without one.
+add_archive_to_deb() {
+  local deb="$1" root=target/deb-root installed=/opt/$name
+  if [ ! -w /opt ] || [ -e "$installed" ]; then
     echo "package-app: $installed exists or /opt is not writable; the .deb has no class-data-sharing archive" >&2
+    return
   fi
+  rm -rf "$root" && dpkg-deb -R "$deb" "$root"
+  cp -a "$root/opt/$name" "$installed"
+  train "$installed/lib/runtime/bin/java" "$installed/lib/app/proofrun.jsa" "$installed/lib/app/$(basename "$jar")"
+  if [ -f "$installed/lib/app/proofrun.jsa" ]; then
+    cp -a "$installed/lib/app/proofrun.jsa" "$root/opt/$name/lib/app/"
+    sed -i "s/^Installed-Size: .*/Installed-Size: $(du -sk "$root/opt" | cut -f1)/" "$root/DEBIAN/control"
+    fakeroot dpkg-deb -b "$root" "$deb" >/dev/null
+  fi
+  rm -rf "$installed" "$root"
 }
 
 if command -v dpkg-deb >/dev/null && command -v fakeroot >/dev/null; then
   echo "package-app: Debian package"
-  deb_image
+  rm -rf target/deb-image && mkdir -p target/deb-image && cp -a "$image" "target/deb-image/$name"
+  rm -f "target/deb-image/$name/lib/app/proofrun.jsa"
   jpackage --type deb --app-image "target/deb-image/$name" --name "$name" --app-version "$app_version" \
     --dest target/jpackage --linux-shortcut --linux-menu-group Science
-  ls target/jpackage/*.deb
+  deb="$(ls target/jpackage/${name}_*.deb)"
+  add_archive_to_deb "$deb"
+  echo "package-app: $deb"
 else
   echo "package-app: dpkg-deb or fakeroot missing; no .deb"
 fi

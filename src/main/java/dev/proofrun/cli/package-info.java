@@ -13,6 +13,11 @@
  * command line's, {@code ProofrunCommandTest}).</li>
  * <li>JSON views: {@code SizeJson}, {@code GradeJson}, {@code capability.CapabilityJson} (shared by
  * {@code estimate} and {@code grade}).</li>
+ * <li>{@code plan new} writes nothing when anything is refused and refuses an existing {@code --out} unless
+ * {@code --force}. Its defaults: this computer's zone, days MON-FRI, shifts 06:00-14:00,14:00-22:00 (named A,
+ * B unless {@code name=} is given), no breaks, 60 parts an hour (said on the output), one working day, even
+ * spacing, and a new seed, stored, when the spacing is random. Calendars are written
+ * {@code early=06:00-14:00} here ({@code PlanSyntax}).</li>
  * </ul>
  */
 package dev.proofrun.cli;
