@@ -192,20 +192,20 @@ public final class ShellView {
 
     /**
      * Builds the step's page, hidden, if it has not been shown yet: put in the scene at the size of the shown
-     * page, styled and laid out, so that its first showing needs no skins, styles or layout of its own.
+     * page, it is styled and laid out in the next pulse, so that its first showing needs no skins, styles or
+     * layout of its own.
      */
     private void buildAhead(int index) {
-        if (index >= views.size() || pages.containsKey(index)) {
-            return;
+        if (index >= views.size() || pages.containsKey(index) || root.getScene() == null) {
+            return; // the last step, a page already built, or a window being closed
         }
         ScrollPane ahead = page(index, views.get(index));
         pages.put(index, ahead);
         ahead.setVisible(false);
         ahead.setManaged(false);
         stage.getChildren().add(ahead);
+        // unmanaged, it keeps this size; the next pulse styles and lays it out like any node of the scene
         ahead.resize(stage.getWidth(), stage.getHeight());
-        ahead.applyCss();
-        ahead.layout();
     }
 
     private ScrollPane page(int index, StepView v) {
