@@ -81,9 +81,9 @@ public final class Wizard {
         }
     }
 
-    /** True while a step computes in the background, a plan file is read or a page is still unfolding. */
+    /** True while a step computes in the background, a plan file is read or written, or a report is made. */
     public boolean busy() {
-        return start.openingProperty().get() || view.unfoldingProperty().get()
+        return start.openingProperty().get()
                 || sizing.busyProperty().get() || timing.busyProperty().get() || handout.busyProperty().get()
                 || handout.exportingProperty().get()
                 || handout.issuingProperty().get() || grading.busyProperty().get() || grading.reportingProperty().get();

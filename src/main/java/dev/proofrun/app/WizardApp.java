@@ -16,15 +16,6 @@ public final class WizardApp extends Application {
 
     private Wizard wizard;
 
-    /** The longest the window waits for the classes to be loaded ahead before it shows anyway. */
-    private static final long PRIMING_WAIT_MS = 1500;
-
-    /** On the launcher thread, once the toolkit runs: the pages' classes are loaded while the window is built. */
-    @Override
-    public void init() {
-        dev.proofrun.app.shell.Primer.begin();
-    }
-
     private static String theme() {
         return WizardApp.class.getResource(THEME).toExternalForm();
     }
@@ -36,7 +27,6 @@ public final class WizardApp extends Application {
 
     /** Opens the wizard with its files under the given home (tests pass a temporary one). */
     public void start(Stage stage, AppHome home) {
-        dev.proofrun.app.shell.Primer.begin();
         wizard = Wizard.create(home, getHostServices());
         // the demo plan of a first start is read on a worker while the window is built; it lands after
         wizard.opened();
@@ -54,14 +44,6 @@ public final class WizardApp extends Application {
                 e.consume();
             }
         });
-        // before the window shows: the classes loaded ahead (that work then no longer competes with the shown
-        // window for the processor), the controls' code run once (WarmUp), and the first frame drawn once:
-        // on a cold start the renderer's first frame (its code and every glyph met for the first time) and
-        // the first table or text field of a page kept the shown window from answering
-        dev.proofrun.app.shell.Primer.awaitDone(PRIMING_WAIT_MS);
-        dev.proofrun.app.shell.WarmUp.run(theme());
-        wizard.view().unfoldNow();
-        scene.snapshot(null);
         stage.show();
     }
 

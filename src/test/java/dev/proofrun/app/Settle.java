@@ -5,8 +5,8 @@ import java.util.concurrent.TimeoutException;
 import org.testfx.util.WaitForAsyncUtils;
 
 /**
- * Waits, in robot tests, until the wizard shows a step and is at rest: the plan file read, the page put
- * together (pages unfold over a few frames on their first showing) and no step computing.
+ * Waits, in robot tests, until the wizard shows a step and is at rest: the plan file read and no step
+ * computing in the background.
  */
 final class Settle {
 

@@ -37,7 +37,14 @@ public final class ShellView {
     private final List<Button> railButtons = new ArrayList<>();
     private boolean railPending;
     private final java.util.Map<Integer, ScrollPane> pages = new java.util.HashMap<>();
-    private final Unfolding unfolding = new Unfolding();
+    private final PauseTransition idle = new PauseTransition(IDLE_BEFORE_NEXT_PAGE);
+
+    /**
+     * How long nobody may type or click, after a step comes on screen, before the page after it is built.
+     * Building a page (its controls' skins, styles and layout) holds the FX thread for one pulse; done while
+     * nobody waits, the step's first showing later is only a change of what is visible.
+     */
+    static final Duration IDLE_BEFORE_NEXT_PAGE = Duration.millis(400);
 
     public ShellView(ShellViewModel vm, List<StepView> views) {
         if (views.size() != vm.steps().size()) {
@@ -50,6 +57,12 @@ public final class ShellView {
         root.setCenter(stage);
         root.setBottom(footer());
         stage.getStyleClass().add("pr-stage");
+        idle.setOnFinished(e -> buildAhead(vm.currentProperty().get() + 1));
+        root.addEventFilter(javafx.scene.input.InputEvent.ANY, e -> {
+            if (idle.getStatus() == javafx.animation.Animation.Status.RUNNING) {
+                idle.playFromStart();
+            }
+        });
         show(vm.currentProperty().get());
         vm.currentProperty().addListener((obs, was, now) -> show(now.intValue()));
         keys();
@@ -58,16 +71,6 @@ public final class ShellView {
 
     public Parent root() {
         return root;
-    }
-
-    /** Puts the page on screen together at once; for the window's first page, before the window shows. */
-    public void unfoldNow() {
-        unfolding.finish();
-    }
-
-    /** True while a page shown for the first time is still being put together (a few frames). */
-    public javafx.beans.value.ObservableBooleanValue unfoldingProperty() {
-        return unfolding.runningProperty();
     }
 
     private Node rail() {
@@ -164,11 +167,10 @@ public final class ShellView {
     }
 
     /**
-     * Shows the step's page. A page is put in the scene on its first showing and then stays there, hidden
-     * while another step is shown: showing it again does not make its skins or apply the style sheet to it
-     * again (a page taken out of the scene and put back gets all its CSS again). On its first showing the
-     * page unfolds a part per frame ({@link Unfolding}): done in one frame, the skins, styles and layout of
-     * a whole page held the FX thread for a few hundred milliseconds on a cold start.
+     * Shows the step's page. A page is put in the scene on its first showing (or earlier, built ahead while
+     * the user was idle, see {@link #IDLE_BEFORE_NEXT_PAGE}) and then stays there, hidden while another step
+     * is shown: showing it again does not make its skins or apply the style sheet to it again (a page taken
+     * out of the scene and put back gets all its CSS again).
      */
     private void show(int index) {
         StepView v = views.get(index);
@@ -176,9 +178,6 @@ public final class ShellView {
         if (shown == null) {
             shown = page(index, v);
             pages.put(index, shown);
-            if (v.root() instanceof javafx.scene.layout.Pane parts) {
-                unfolding.unfold(parts);
-            }
             stage.getChildren().add(shown);
         }
         for (Node p : stage.getChildren()) {
@@ -188,6 +187,25 @@ public final class ShellView {
         }
         styleRail();
         focusFirst(index, v.firstFocus());
+        idle.playFromStart();
+    }
+
+    /**
+     * Builds the step's page, hidden, if it has not been shown yet: put in the scene at the size of the shown
+     * page, it is styled and laid out in the next pulse, so that its first showing needs no skins, styles or
+     * layout of its own.
+     */
+    private void buildAhead(int index) {
+        if (index >= views.size() || pages.containsKey(index) || root.getScene() == null) {
+            return; // the last step, a page already built, or a window being closed
+        }
+        ScrollPane ahead = page(index, views.get(index));
+        pages.put(index, ahead);
+        ahead.setVisible(false);
+        ahead.setManaged(false);
+        stage.getChildren().add(ahead);
+        // unmanaged, it keeps this size; the next pulse styles and lays it out like any node of the scene
+        ahead.resize(stage.getWidth(), stage.getHeight());
     }
 
     private ScrollPane page(int index, StepView v) {

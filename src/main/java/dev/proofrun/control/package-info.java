@@ -1,0 +1,12 @@
+/**
+ * Control charts on a study's own data ("phase I"): {@code ControlCharts} makes the location and spread
+ * charts ({@code ChartPair}) that fit the sigma estimator ({@code ChartKind.forMethod}: R̄/d2 → X̄–R, S̄/c4 or
+ * pooled → X̄–S, moving range → individuals/MR) with 3σ limits from the data, per-point limits for unequal
+ * subgroup sizes; {@code RunRules} applies the eight {@code RunRule}s ({@code beyond-limits},
+ * {@code run-one-side}, {@code trend}, {@code alternating}, {@code two-of-three-outer},
+ * {@code four-of-five-middle}, {@code hugging-centre}, {@code avoiding-centre}) and reports {@code Signal}s.
+ * Whether signals make a process unstable is the grader's question ({@code grade.StabilityJudge}); the
+ * design's stored run-rule risk table ({@code design.RuleRiskTable}) must be remade after any change to
+ * {@code RunRules}.
+ */
+package dev.proofrun.control;

@@ -1,0 +1,16 @@
+/**
+ * What every layer shares about the words people read and the input they give.
+ *
+ * <ul>
+ * <li>{@code MessageKey}: a user-visible message is an enum constant implementing it (stable key, English
+ * template inline, formatted with {@code Locale.ROOT}); one enum per package, so the command line and the
+ * wizard say the same words. {@code MessageKeysTest} finds every enum and fails on a template that does not
+ * format.</li>
+ * <li>{@code UserException} with a {@code Location} (file, row, column): bad input. The command line prints its
+ * message on one line and exits 2, never with a stack trace.</li>
+ * <li>{@code FormulaGuard}: the one rule for spreadsheet formula guarding. A prefilled cell that starts with
+ * {@code =}, {@code +}, {@code -}, {@code @}, tab or CR gets a leading {@code '}; {@code restore} takes it off
+ * again. The sheet writer and the grade reader both use it, so the two cannot drift.</li>
+ * </ul>
+ */
+package dev.proofrun.text;
