@@ -8,17 +8,26 @@
  * <ol>
  * <li><b>Completeness</b> ({@code Completeness}, {@code Problem}, {@code ProblemLog}): every problem names
  * file, row and column; fatal ones are one line and exit 2, errors drop a row or subgroup, warnings keep it.
- * Nothing is dropped silently (the first 100 of each kind, the rest counted).</li>
- * <li><b>Stability</b> ({@code StabilityJudge}): the number of signalled points is compared with what
- * {@code ChanceSignals} finds for stable normal studies of the same n, k, chart and rules (seeded); unstable
- * when either chart's count has chance &lt; 0.005, or when the ANOVA p &lt; 0.001 and σ_overall/σ_within ≥ 1.2
- * (our rule).</li>
- * <li><b>Shape</b> ({@code ShapeJudge}): readings spread over their resolution cell (seeded) before
- * Anderson–Darling against the normal; if rejected, Box–Cox, lognormal and Weibull fits
- * ({@code DistributionFits}, {@code AndersonDarlingFit}), the fitting model with the smallest AIC chosen.</li>
- * <li><b>Capability</b> ({@code CapabilityJudge} → {@code JudgedIndex} → {@code IndexEvidence}): the required
- * index under the chosen model with the plan's estimator and bound method; the ISO 22514-2 percentile method
- * for Weibull.</li>
+ * Nothing is dropped silently (the first 100 of each kind, the rest counted). A reading beyond the reach of the
+ * limits ({@code Reach}) or not finite is set aside, located, and makes the characteristic not valid. Readings
+ * with no spread ({@code NoSpread}) are a finding, not valid.</li>
+ * <li><b>Stability</b> ({@code StabilityJudge} over {@code control.StabilityRule}, the rule the designer also
+ * runs): the number of signalled points is compared with what {@code control.ChanceSignals} finds for stable
+ * normal studies of the same n, k, chart and rules (seeded); unstable when either chart's count has chance
+ * &lt; 0.005, or, for a within (Cpk-like) requirement, when the ANOVA p &lt; 0.001 and σ_overall/σ_within ≥ 1.2
+ * (our rule); for an overall (Ppk-like) requirement the subgroup means are judged on their own chart instead.
+ * Under a declared skewed shape the charts see the readings' normal scores under the fitted model
+ * ({@code NormalScores}).</li>
+ * <li><b>Shape</b> ({@code GaugeStep}, then {@code ShapeJudge}): the gauge's step (the plan's resolution, or the
+ * readings' own grid) is reported, and a step too coarse for the spread is its own finding; otherwise the plan's
+ * declared shape — and only it — is fitted ({@code stats.ShapeFitter}) and checked at 1 % (with a large-study
+ * rule that judges a departure where the index looks). When it does not fit, the characteristic is not valid
+ * with "re-plan with the shape it really has"; no other model is tried.</li>
+ * <li><b>Capability</b>: normal shape — {@code CapabilityJudge} → {@code JudgedIndex} → {@code IndexEvidence},
+ * the required index with the plan's estimator and exact (or Bissell) bounds; lognormal or Weibull —
+ * {@code PercentileJudge}, the ISO 22514-2 percentile index on the overall spread with generalized pivotal
+ * bounds ({@code stats.PivotalBound}, seeded, the seed in the output). {@code IndexEvidence} names the model and
+ * {@code IndexMethod}; every output leads with them.</li>
  * </ol>
  * {@code Verdict}: not-valid, not-demonstrated, demonstrated (lower bound ≥ c0) or inconclusive (with about how
  * many more subgroups would settle it); the part's verdict is the worst. The caution
