@@ -92,6 +92,12 @@ public final class GradeCommand implements Callable<Integer> {
         } else {
             text(result, out);
         }
+        if (report != null) {
+            // stdout stays one JSON object with --json; the note then goes to stderr
+            PrintWriter note = json ? spec.commandLine().getErr() : out;
+            note.println("Wrote the grade report " + report);
+            note.flush();
+        }
         out.flush();
         return requireDemonstrated && !result.allDemonstrated() ? EXIT_NOT_DEMONSTRATED : 0;
     }
