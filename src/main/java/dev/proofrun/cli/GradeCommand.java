@@ -104,10 +104,10 @@ public final class GradeCommand implements Callable<Integer> {
 
     static void text(GradeResult r, PrintWriter out) {
         out.printf(Locale.ROOT, "Plan %s@%s, file %s%n", r.planId(), r.revision(), r.file());
-        out.printf(Locale.ROOT, "Part verdict: %s%n", r.verdict().id());
+        out.printf(Locale.ROOT, "Part verdict: %s%n", r.verdict().words()); // words as on paper; ids in --json
         for (CharacteristicGrade g : r.characteristics()) {
             out.println();
-            out.printf(Locale.ROOT, "%s %s: %s%n", g.id(), g.name(), g.verdict().id());
+            out.printf(Locale.ROOT, "%s %s: %s%n", g.id(), g.name(), g.verdict().words());
             if (g.judged() != null) {
                 out.printf(Locale.ROOT, "  %s under the %s model, %s%n", g.judged().index().symbol(),
                         g.judged().model().id(), g.judged().method().words());
