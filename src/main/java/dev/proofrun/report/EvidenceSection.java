@@ -79,10 +79,13 @@ final class EvidenceSection {
             TextTable t = table();
             s.add(Block.space(4));
             s.add(t.header());
-            s.add(t.row("location points signalling", st.locationSignalPoints() + " (by chance " + Fmt.fixed(st.expectedLocationByChance(), 1) + ")",
-                    "chance of as many", st.locationAtFloor() ? Stability.below(st.locationChance()) : Fmt.p(st.locationChance())));
-            s.add(t.row("spread points beyond limits", st.spreadSignalPoints() + " (by chance " + Fmt.fixed(st.expectedSpreadByChance(), 1) + ")",
-                    "chance of as many", st.spreadAtFloor() ? Stability.below(st.spreadChance()) : Fmt.p(st.spreadChance())));
+            // in words a reader takes in: "about 0.4 expected", "below 0.0005", not "(by chance 0.4)", "< 0.00050"
+            s.add(t.row("location points signalling", st.locationSignalPoints() + " (about "
+                    + Fmt.fixed(st.expectedLocationByChance(), 1) + " expected)", "chance of as many if stable",
+                    chance(st.locationAtFloor(), st.locationChance())));
+            s.add(t.row("spread points beyond limits", st.spreadSignalPoints() + " (about "
+                    + Fmt.fixed(st.expectedSpreadByChance(), 1) + " expected)", "chance of as many if stable",
+                    chance(st.spreadAtFloor(), st.spreadChance())));
             s.add(t.row("\u03c3 overall / \u03c3 within", Fmt.fixed(st.stabilityRatio(), 3), "ANOVA F (p)",
                     st.anovaF().isPresent() ? Fmt.fixed(st.anovaF().getAsDouble(), 2) + " (" + Fmt.p(st.anovaP().orElse(Double.NaN)) + ")" : Fmt.NONE));
             if (!st.signals().isEmpty()) {
@@ -171,6 +174,15 @@ final class EvidenceSection {
             default:
                 return java.util.OptionalDouble.empty();
         }
+    }
+
+    /** A chance in words: "below 0.0005" at the simulation's floor, "below 0.001", or three decimals. */
+    private static String chance(boolean atFloor, double p) {
+        if (atFloor) {
+            return "below " + new java.math.BigDecimal(Stability.below(p).substring(2)).stripTrailingZeros()
+                    .toPlainString();
+        }
+        return p < 0.001 ? "below 0.001" : Fmt.p(p);
     }
 
     private static String ix(java.util.OptionalDouble v) {
