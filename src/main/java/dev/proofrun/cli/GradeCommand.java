@@ -92,16 +92,22 @@ public final class GradeCommand implements Callable<Integer> {
         } else {
             text(result, out);
         }
+        if (report != null) {
+            // stdout stays one JSON object with --json; the note then goes to stderr
+            PrintWriter note = json ? spec.commandLine().getErr() : out;
+            note.println("Wrote the grade report " + report);
+            note.flush();
+        }
         out.flush();
         return requireDemonstrated && !result.allDemonstrated() ? EXIT_NOT_DEMONSTRATED : 0;
     }
 
     static void text(GradeResult r, PrintWriter out) {
         out.printf(Locale.ROOT, "Plan %s@%s, file %s%n", r.planId(), r.revision(), r.file());
-        out.printf(Locale.ROOT, "Part verdict: %s%n", r.verdict().id());
+        out.printf(Locale.ROOT, "Part verdict: %s%n", r.verdict().words()); // words as on paper; ids in --json
         for (CharacteristicGrade g : r.characteristics()) {
             out.println();
-            out.printf(Locale.ROOT, "%s %s: %s%n", g.id(), g.name(), g.verdict().id());
+            out.printf(Locale.ROOT, "%s %s: %s%n", g.id(), g.name(), g.verdict().words());
             if (g.judged() != null && g.verdict() != dev.proofrun.grade.Verdict.NOT_VALID) {
                 out.println("  " + g.judged().summary() + ".");
             }

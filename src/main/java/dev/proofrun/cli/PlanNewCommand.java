@@ -93,7 +93,8 @@ public final class PlanNewCommand implements Callable<Integer> {
     Double resolution;
     @Option(names = "--gauge-sd", paramLabel = "SD", description = "Gauge standard deviation, if known.")
     Double gaugeSd;
-    @Option(names = "--index", defaultValue = "cpk", paramLabel = "cpk|ppk|cpu|cpl|...", description = "Required index (default ${DEFAULT-VALUE}).")
+    @Option(names = "--index", defaultValue = "cpk", paramLabel = "INDEX",
+            description = "Required index: cpk, ppk, cp, pp, cpu, cpl, ppu or ppl (default ${DEFAULT-VALUE}).")
     String index;
     @Option(names = "--target", paramLabel = "C0", description = "Required minimum of the index.")
     Double target;
@@ -115,12 +116,15 @@ public final class PlanNewCommand implements Callable<Integer> {
     @Option(names = "--days", defaultValue = "MON-FRI", paramLabel = "MON-FRI",
             description = "Working days: a range MON-FRI or a list MON,TUE,SAT (default ${DEFAULT-VALUE}).")
     String days;
-    @Option(names = "--shifts", defaultValue = "06:00-14:00,14:00-22:00", paramLabel = "[NAME=]HH:MM-HH:MM,...",
-            description = "Shifts; one may run past midnight (22:00-06:00); unnamed shifts are A, B, C... (default ${DEFAULT-VALUE}).")
+    @Option(names = "--shifts", defaultValue = "06:00-14:00,14:00-22:00", paramLabel = "SHIFTS",
+            description = {"Shifts, comma-separated, each [NAME=]HH:MM-HH:MM; one may run past midnight; unnamed "
+                    + "shifts are named A, B, C and on.", "Default: ${DEFAULT-VALUE}"})
     String shifts;
-    @Option(names = "--breaks", paramLabel = "HH:MM-HH:MM,...", description = "Breaks repeated every working day.")
+    @Option(names = "--breaks", paramLabel = "BREAKS",
+            description = "Breaks repeated every working day, comma-separated, each HH:MM-HH:MM.")
     String breaks;
-    @Option(names = "--non-working", paramLabel = "DATE,...", description = "Dates without shifts (holidays).")
+    @Option(names = "--non-working", paramLabel = "DATES",
+            description = "Dates without shifts (holidays), comma-separated, each YYYY-MM-DD.")
     String nonWorking;
     @Option(names = "--rate", paramLabel = "PARTS_PER_HOUR", description = "Production rate (default 60 parts per hour).")
     Double rate;
@@ -146,9 +150,9 @@ public final class PlanNewCommand implements Callable<Integer> {
 
     /** A span of material lots. */
     static final class Lots {
-        @Option(names = "--span-lots", required = true, paramLabel = "L", description = "Span L material lots...")
+        @Option(names = "--span-lots", required = true, paramLabel = "L", description = "Span L material lots (with --lot-parts).")
         int lots;
-        @Option(names = "--lot-parts", required = true, paramLabel = "P", description = "...of P parts each.")
+        @Option(names = "--lot-parts", required = true, paramLabel = "P", description = "Parts in each material lot (with --span-lots).")
         long lotParts;
     }
 

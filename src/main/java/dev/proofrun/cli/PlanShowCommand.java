@@ -26,7 +26,7 @@ public final class PlanShowCommand implements Callable<Integer> {
     @Parameters(index = "0", paramLabel = "FILE.json", description = "The plan file.")
     Path file;
 
-    @Option(names = "--json", description = "Print the plan as one JSON object (slots, summary, state, revision, ...).")
+    @Option(names = "--json", description = "Print the plan as one JSON object with its slots, summary, state and revision.")
     boolean json;
 
     @Override

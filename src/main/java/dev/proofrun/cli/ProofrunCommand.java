@@ -77,11 +77,44 @@ public final class ProofrunCommand implements Runnable {
         return commandLine();
     }
 
+    /**
+     * A command line picocli could not parse, said in one line or two. For a misspelt option only the option
+     * is named, with the likely spellings: picocli also reports the argument the misspelt option left over
+     * (its value is taken as the first file, so the last file seems one too many), which sends people looking
+     * at a file that is fine.
+     */
+    private static int refuseArguments(CommandLine.ParameterException ex, String[] args) {
+        CommandLine line = ex.getCommandLine();
+        PrintWriter err = line.getErr();
+        String message = ex.getMessage();
+        if (ex instanceof CommandLine.UnmatchedArgumentException u) {
+            List<String> options = u.getUnmatched().stream().filter(a -> a.startsWith("-")).toList();
+            if (!options.isEmpty()) {
+                message = (options.size() == 1 ? "unknown option " : "unknown options ")
+                        + String.join(", ", options.stream().map(o -> "'" + o + "'").toList());
+                List<String> near = u.getSuggestions();
+                if (!near.isEmpty()) {
+                    message += " (did you mean " + String.join(" or ", near.subList(0, Math.min(3, near.size())))
+                            + "?)";
+                }
+            } else if (line.getParent() == null && !u.getSuggestions().isEmpty()) {
+                message = "unknown command '" + u.getUnmatched().get(0) + "' (did you mean "
+                        + String.join(" or ", u.getSuggestions()) + "?)";
+            }
+        }
+        String name = line.getCommandSpec().qualifiedName();
+        err.println(name + ": " + message);
+        err.println("See '" + name + " --help'.");
+        err.flush();
+        return EXIT_INPUT;
+    }
+
     private static CommandLine configured(List<Class<?>> subcommands) {
         CommandLine cl = new CommandLine(new ProofrunCommand());
         for (Class<?> c : subcommands) {
             cl.addSubcommand(c);
         }
+        cl.setParameterExceptionHandler(ProofrunCommand::refuseArguments);
         cl.setExecutionExceptionHandler((ex, line, parseResult) -> {
             Throwable cause = ex;
             if (cause instanceof UserException || cause instanceof IllegalArgumentException) {

@@ -2,6 +2,7 @@ package dev.proofrun.grade;
 
 import dev.proofrun.text.CsvDialect;
 import dev.proofrun.text.Location;
+import dev.proofrun.text.TextFile;
 import dev.proofrun.text.UserException;
 import java.io.IOException;
 import java.io.InputStream;
@@ -20,6 +21,7 @@ final class CsvTable {
     }
 
     static void read(Path path, String display, RowHandler handler) {
+        TextFile.requireText(path, display);
         try (InputStream in = Files.newInputStream(path)) {
             CsvLines reader = new CsvLines(in, 1 << 16);
             String line;

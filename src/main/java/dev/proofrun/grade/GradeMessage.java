@@ -19,6 +19,8 @@ public enum GradeMessage implements MessageKey {
     UNKNOWN_CHARACTERISTIC("characteristic '%s' is not in the plan; the row is not used"),
     DUPLICATE_ROW("slot %s of %s appears again (first at row %d); this row is not used"),
     MISSING_SLOT("slot %s of %s did not come back"),
+    /** A slot's row came back with no reading at all: counted as missing, not as incomplete. */
+    BLANK_SLOT("slot %s of %s came back with every box empty: counted as missing"),
     MISSING_READINGS("slot %s of %s has %d of %d readings; the subgroup is not graded"),
     EXTRA_READINGS("slot %s of %s has %d readings, the plan asks for %d; the subgroup is not graded"),
     NOT_NUMERIC("'%s' is not a number; the reading is missing"),

@@ -323,6 +323,12 @@ final class ReturnedData implements RowHandler {
                 log.add(Location.file(display), Severity.ERROR, id, GradeMessage.MISSING_SLOT, slotId, id);
                 continue;
             }
+            if (col.count[s] == 0 && !col.spoiled[s]) {
+                // the prefilled row came back with every box empty: the slot was not taken, not taken short
+                missing++;
+                log.add(Location.cell(display, col.row[s], null), Severity.ERROR, id, GradeMessage.BLANK_SLOT, slotId, id);
+                continue;
+            }
             boolean late = col.late[s];
             if (col.taken[s] != Long.MIN_VALUE) {
                 if (previous >= 0 && col.taken[s] < col.taken[previous]) {

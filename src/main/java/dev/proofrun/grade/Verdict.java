@@ -17,18 +17,25 @@ package dev.proofrun.grade;
  * </ul>
  */
 public enum Verdict {
-    DEMONSTRATED("demonstrated"),
-    INCONCLUSIVE("inconclusive"),
-    NOT_DEMONSTRATED("not-demonstrated"),
-    NOT_VALID("not-valid");
+    DEMONSTRATED("demonstrated", "Demonstrated"),
+    INCONCLUSIVE("inconclusive", "Inconclusive"),
+    NOT_DEMONSTRATED("not-demonstrated", "Not demonstrated"),
+    NOT_VALID("not-valid", "Not valid");
 
     private final String id;
+    private final String words;
 
-    Verdict(String id) {
+    Verdict(String id, String words) {
         this.id = id;
+        this.words = words;
     }
 
-    /** The word used in JSON and on screen, e.g. {@code not-valid}. */
+    /** The verdict as a reader sees it on paper and on screen, e.g. "Not valid" (the id stays in JSON). */
+    public String words() {
+        return words;
+    }
+
+    /** The token used in JSON and in scripts, e.g. {@code not-valid}. */
     public String id() {
         return id;
     }

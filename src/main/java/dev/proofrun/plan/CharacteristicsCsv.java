@@ -6,6 +6,7 @@ import dev.proofrun.stats.IndexKind;
 import dev.proofrun.stats.ShapeFamily;
 import dev.proofrun.stats.SpecLimits;
 import dev.proofrun.text.Location;
+import dev.proofrun.text.TextFile;
 import dev.proofrun.text.UserException;
 import java.io.IOException;
 import java.io.Reader;
@@ -45,6 +46,7 @@ public final class CharacteristicsCsv {
      */
     public static List<Characteristic> read(Path file, IndexKind defaultIndex, double defaultConfidence) {
         String name = file.toString();
+        TextFile.requireText(file, name);
         try (Reader in = Files.newBufferedReader(file, StandardCharsets.UTF_8);
              CSVParser parser = CSVFormat.DEFAULT.builder().setHeader().setSkipHeaderRecord(true)
                      .setIgnoreSurroundingSpaces(true).setIgnoreEmptyLines(true).build().parse(in)) {

@@ -4,6 +4,7 @@ import dev.proofrun.text.CsvDialect;
 import dev.proofrun.text.Decimals;
 import dev.proofrun.text.Location;
 import dev.proofrun.text.Shown;
+import dev.proofrun.text.TextFile;
 import dev.proofrun.text.UserException;
 import java.io.BufferedReader;
 import java.io.IOException;
@@ -69,6 +70,7 @@ public final class ReadingsCsv {
         if (subgroupSize.isPresent() && subgroupSize.getAsInt() < 1) {
             throw new UserException(Location.file(name), ReadingsMessage.BAD_SUBGROUP_SIZE, subgroupSize.getAsInt());
         }
+        TextFile.requireText(file, name);
         try (BufferedReader in = Files.newBufferedReader(file, StandardCharsets.UTF_8);
                 CSVParser parser = CSVParser.builder().setReader(in)
                         .setFormat(FORMAT.builder().setDelimiter(separator(file)).get()).get()) {

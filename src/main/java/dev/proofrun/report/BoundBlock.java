@@ -78,7 +78,7 @@ final class BoundBlock extends PlotBlock {
         float rx = area.x(e.required());
         // the requirement's label sits above the bounds' labels, so the two never overlap
         c.line(rx, area.bottom(), rx, area.top() + 13);
-        c.text(bold, 7.5f, rx + 3, area.top() + 10, "required " + Fmt.index(e.required()));
+        c.text(bold, 7.5f, rx + 3, area.top() + 10, "required " + sym + " \u2265 " + Fmt.index(e.required()));
         c.text(regular, 7.5f, left, mid - 2.6f, sym);
         String conf = Fmt.fixed(e.confidence() * 100, 0) + " %";
         String bar = hasUpper ? "bar: lower to upper " + conf + " bound (each one-sided)"

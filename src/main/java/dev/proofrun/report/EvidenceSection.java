@@ -16,6 +16,7 @@ import dev.proofrun.sheet.layout.Paragraph;
 import dev.proofrun.sheet.layout.TextTable;
 import dev.proofrun.sheet.layout.TextTable.Column;
 import dev.proofrun.sheet.layout.Typeface;
+import dev.proofrun.stats.IndexKind;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -23,7 +24,9 @@ import java.util.Locale;
 /**
  * The evidence for one characteristic, in the order of the argument: 1 completeness, 2 stability (control
  * charts), 3 shape (histogram with limits and fitted curve, probability plot), 4 capability (the bound
- * against the requirement, then every index). Each step opens with the reasons the grade gave for it.
+ * against the requirement, then the nonconforming parts in one sentence ({@link NonconformingWords}), the
+ * required index with its bound first and the others after). Each step opens with the reasons the grade gave
+ * for it.
  */
 final class EvidenceSection {
 
@@ -35,10 +38,17 @@ final class EvidenceSection {
         this.bold = bold;
     }
 
-    void place(Flow flow, CharacteristicGrade g, double nominal) {
+    /**
+     * @param nominal the plan's nominal, or NaN
+     * @param step    the gauge's step (resolution), or NaN when the plan names no gauge
+     */
+    void place(Flow flow, CharacteristicGrade g, double nominal, double step) {
         flow.newPage();
         String unit = g.unit() == null || g.unit().isEmpty() ? "" : " (" + g.unit() + ")";
-        flow.place(Paragraph.of(g.id() + "  " + Fmt.name(g.name()) + unit + ": " + g.verdict().id(), bold, 14));
+        flow.place(Paragraph.of(g.id() + "  " + Fmt.name(g.name()) + unit, bold, 14));
+        flow.gap(2);
+        flow.place(new VerdictBadge(g.verdict(), "", regular, bold, 11));
+        flow.gap(2);
         String gloss = VerdictSection.gloss(g.verdict());
         flow.place(Paragraph.of(Character.toUpperCase(gloss.charAt(0)) + gloss.substring(1) + ".", regular, 9));
         g.additionalSubgroups().ifPresent(k -> flow.place(Paragraph.of(String.format(Locale.ROOT,
@@ -67,10 +77,13 @@ final class EvidenceSection {
             TextTable t = table();
             s.add(Block.space(4));
             s.add(t.header());
-            s.add(t.row("location points signalling", st.locationSignalPoints() + " (by chance " + Fmt.fixed(st.expectedLocationByChance(), 1) + ")",
-                    "chance of as many", st.locationAtFloor() ? Stability.below(st.locationChance()) : Fmt.p(st.locationChance())));
-            s.add(t.row("spread points beyond limits", st.spreadSignalPoints() + " (by chance " + Fmt.fixed(st.expectedSpreadByChance(), 1) + ")",
-                    "chance of as many", st.spreadAtFloor() ? Stability.below(st.spreadChance()) : Fmt.p(st.spreadChance())));
+            // in words a reader takes in: "about 0.4 expected", "below 0.0005", not "(by chance 0.4)", "< 0.00050"
+            s.add(t.row("location points signalling", st.locationSignalPoints() + " (about "
+                    + Fmt.fixed(st.expectedLocationByChance(), 1) + " expected)", "chance of as many if stable",
+                    chance(st.locationAtFloor(), st.locationChance())));
+            s.add(t.row("spread points beyond limits", st.spreadSignalPoints() + " (about "
+                    + Fmt.fixed(st.expectedSpreadByChance(), 1) + " expected)", "chance of as many if stable",
+                    chance(st.spreadAtFloor(), st.spreadChance())));
             s.add(t.row("\u03c3 overall / \u03c3 within", Fmt.fixed(st.stabilityRatio(), 3), "ANOVA F (p)",
                     st.anovaF().isPresent() ? Fmt.fixed(st.anovaF().getAsDouble(), 2) + " (" + Fmt.p(st.anovaP().orElse(Double.NaN)) + ")" : Fmt.NONE));
             if (!st.signals().isEmpty()) {
@@ -85,7 +98,7 @@ final class EvidenceSection {
         double[] x = flatten(g.subgroups());
         if (sh != null && x.length > 0) {
             ModelCurve curve = curve(sh, x);
-            h.add(new HistogramBlock(x, g.limits(), nominal, curve, "Readings against the limits", regular, bold));
+            h.add(new HistogramBlock(x, g.limits(), nominal, step, curve, "Readings against the limits", regular, bold));
             h.add(Block.space(4));
             h.add(new ProbabilityPlotBlock(x, curve, "Probability plot under the " + curve.model().id() + " model", regular, bold));
             h.add(Block.space(4));
@@ -108,39 +121,68 @@ final class EvidenceSection {
             k.add(new BoundBlock(g.judged(), g.verdict() == dev.proofrun.grade.Verdict.NOT_VALID, regular, bold));
         }
         CapabilityResult f = g.capability();
+        k.add(Block.space(4));
+        k.add(Paragraph.of(NonconformingWords.statement(g), regular, 9));
         if (f != null) {
-            var i = f.indices();
-            var lb = f.lower();
             TextTable t = TextTable.of(List.of(Column.left("Index", 1.3f), Column.right("estimate", 1.3f),
-                    Column.right("lower bound", 1.3f), Column.left("", 0.4f), Column.left("Index", 1.3f),
-                    Column.right("estimate", 1.3f), Column.right("lower bound", 1.3f)), regular, bold, 8);
+                    Column.right("lower bound", 1.3f), Column.left("", 5f)), regular, bold, 8);
             List<Block> figures = new ArrayList<>();
             figures.add(Block.space(4));
-            if (g.judged() != null && g.judged().otherThanNormalTheory()) {
-                figures.add(Paragraph.of("Normal-theory figures of the readings as they are, for comparison; the verdict"
-                        + " rests on the " + g.judged().index().symbol() + " above, under the " + g.judged().model().id()
-                        + " model.", regular, 8.5f));
-                figures.add(Block.space(3));
-            }
             figures.add(t.header());
-            figures.add(t.row("Cp", ix(i.cp()), ix(lb.cp()), "", "Pp", ix(i.pp()), ix(lb.pp())));
-            figures.add(t.row("Cpk", ix(i.cpk()), ix(lb.cpk()), "", "Ppk", ix(i.ppk()), ix(lb.ppk())));
-            figures.add(t.row("Cpu", ix(i.cpu()), "", "", "Ppu", ix(i.ppu()), ""));
-            figures.add(t.row("Cpl", ix(i.cpl()), "", "", "Ppl", ix(i.ppl()), ""));
-            figures.add(t.row("Cpm", ix(i.cpm()), "", "", "", "", ""));
+            IndexKind required = g.judged() == null ? null : g.judged().index();
+            if (required != null) {
+                figures.add(t.row(required.symbol(), Fmt.index(g.judged().estimate()), Fmt.index(g.judged().lower()),
+                        "required \u2265 " + Fmt.index(g.judged().required()) + ", as graded above"));
+            }
+            for (IndexKind kind : OTHERS) {
+                if (kind == required || f.indices().of(kind).isEmpty()) {
+                    continue;
+                }
+                figures.add(t.row(kind.symbol(), ix(f.indices().of(kind)), ix(lowerOf(f, kind)), ""));
+            }
+            f.indices().cpm().ifPresent(v -> figures.add(t.row("Cpm", Fmt.index(v), Fmt.NONE, "with the nominal as target")));
             figures.add(Block.space(4));
             String size = f.subgroupSize().isPresent() ? " of " + f.subgroupSize().getAsInt() : "";
             figures.add(Paragraph.of(String.format(Locale.ROOT,
-                    "Mean %s, \u03c3 within %s (%s), \u03c3 overall %s from %d readings in %d subgroups%s. Parts per "
-                            + "million outside the tolerance: expected %s (within), %s (overall); observed %s. Lower "
-                            + "bounds at %s %% confidence. These figures assume the normal model on the readings' own scale.",
+                    "Mean %s, \u03c3 within %s (%s), \u03c3 overall %s from %d readings in %d subgroups%s. The "
+                            + "other indices are normal-model figures on the readings' own scale, lower bounds at "
+                            + "%s %% confidence.",
                     Fmt.value(f.mean()), Fmt.value(f.within().value()), f.within().method().token(),
-                    Fmt.value(f.sigmaOverall()), f.readings(), f.subgroups(), size, Fmt.ppm(f.ppm().within()),
-                    Fmt.ppm(f.ppm().overall()), Fmt.ppm(f.ppm().observed()), Fmt.fixed(f.confidence() * 100, 0)),
+                    Fmt.value(f.sigmaOverall()), f.readings(), f.subgroups(), size, Fmt.fixed(f.confidence() * 100, 0)),
                     regular, 8.5f));
             k.add(Block.stack(figures));
         }
         step(flow, "4  Capability: does the bound reach the requirement?", g, Step.CAPABILITY, k);
+    }
+
+    /**
+     * The indices after the required one, in this order: the other of Cpk/Ppk first. The one-sided indices
+     * (Cpu, Cpl, …) are left out: Cpk is the smaller of its two, and with one limit it is the one.
+     */
+    private static final List<IndexKind> OTHERS = List.of(IndexKind.CPK, IndexKind.PPK, IndexKind.CP, IndexKind.PP);
+
+    private static java.util.OptionalDouble lowerOf(CapabilityResult f, IndexKind kind) {
+        switch (kind) {
+            case CP:
+                return f.lower().cp();
+            case CPK:
+                return f.lower().cpk();
+            case PP:
+                return f.lower().pp();
+            case PPK:
+                return f.lower().ppk();
+            default:
+                return java.util.OptionalDouble.empty();
+        }
+    }
+
+    /** A chance in words: "below 0.0005" at the simulation's floor, "below 0.001", or three decimals. */
+    private static String chance(boolean atFloor, double p) {
+        if (atFloor) {
+            return "below " + new java.math.BigDecimal(Stability.below(p).substring(2)).stripTrailingZeros()
+                    .toPlainString();
+        }
+        return p < 0.001 ? "below 0.001" : Fmt.p(p);
     }
 
     private static String ix(java.util.OptionalDouble v) {

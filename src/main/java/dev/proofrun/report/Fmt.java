@@ -75,4 +75,13 @@ final class Fmt {
     static String fixed(double v, int decimals) {
         return Double.isFinite(v) ? String.format(Locale.ROOT, "%." + decimals + "f", v) : NONE;
     }
+
+    /**
+     * The returned file by its name only: what follows the last {@code /} or {@code \\}. A report leaves the
+     * grading machine; the folders it was graded from are nobody else's business and mean nothing elsewhere.
+     */
+    static String fileName(String file) {
+        int cut = Math.max(file.lastIndexOf('/'), file.lastIndexOf('\\'));
+        return cut >= 0 && cut < file.length() - 1 ? file.substring(cut + 1) : file;
+    }
 }

@@ -2,6 +2,8 @@ package dev.proofrun.report;
 
 import dev.proofrun.grade.CharacteristicGrade;
 import dev.proofrun.grade.GradeResult;
+import dev.proofrun.plan.Characteristic;
+import dev.proofrun.plan.Gauge;
 import dev.proofrun.plan.StudyPlan;
 import dev.proofrun.sheet.layout.Flow;
 import dev.proofrun.sheet.layout.PageHeading;
@@ -16,6 +18,8 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.nio.file.StandardOpenOption;
+import java.time.Clock;
+import java.util.Optional;
 import java.util.UUID;
 
 /**
@@ -24,6 +28,10 @@ import java.util.UUID;
  * the evidence in the order that matters ({@link EvidenceSection}): completeness, stability with its
  * control charts, shape with histogram and probability plot, capability with the bound against the
  * requirement and every index. Vector charts, black and white, fonts embedded (the sheet's toolkit).
+ *
+ * <p>As evidence for a customer's file every page names the part, the plan with its revision fingerprint, the
+ * returned file by name (never the grading machine's folders), the part's verdict in words, and when and by
+ * which version of the tool the grade was made ({@link ReportStamp}); page 1 carries a block to sign.
  */
 public final class GradeReport {
 
@@ -39,18 +47,31 @@ public final class GradeReport {
      * @param out    where to write
      */
     public static void write(GradeResult result, StudyPlan plan, Paper paper, OutputStream out) {
-        PageHeading heading = new PageHeading(Fmt.name(plan.part().name()), "Grade report: returned file " + result.file(),
+        write(result, plan, paper, ReportStamp.now(Clock.systemDefaultZone()), out);
+    }
+
+    /**
+     * Writes the report to a stream (not closed), stamped with the given time and version.
+     *
+     * @param stamp when and by which version the grade was made
+     */
+    public static void write(GradeResult result, StudyPlan plan, Paper paper, ReportStamp stamp, OutputStream out) {
+        PageHeading heading = new PageHeading(Fmt.name(plan.part().name()),
+                "Grade report: returned file " + Fmt.fileName(result.file()),
                 "Plan " + result.planId() + " @ " + result.revision(),
-                "Part verdict: " + result.verdict().id() + ". A statistical statement under assumptions; see page 1.",
+                "Part verdict: " + result.verdict().words() + ". " + stamp.line()
+                        + ". Not an approval; see page 1.",
                 false);
         try (Pages pages = Pages.open(paper, heading)) {
             Flow flow = new Flow(pages);
-            new VerdictSection(pages.regular(), pages.bold()).place(flow, result, plan);
+            new VerdictSection(pages.regular(), pages.bold()).place(flow, result, plan, stamp);
             EvidenceSection evidence = new EvidenceSection(pages.regular(), pages.bold());
             for (CharacteristicGrade g : result.characteristics()) {
-                double nominal = plan.characteristic(g.id()).flatMap(c -> c.nominal().isPresent()
-                        ? java.util.Optional.of(c.nominal().getAsDouble()) : java.util.Optional.empty()).orElse(Double.NaN);
-                evidence.place(flow, g, nominal);
+                Optional<Characteristic> c = plan.characteristic(g.id());
+                double nominal = c.filter(x -> x.nominal().isPresent()).map(x -> x.nominal().getAsDouble())
+                        .orElse(Double.NaN);
+                double step = c.flatMap(Characteristic::gauge).map(Gauge::resolution).orElse(Double.NaN);
+                evidence.place(flow, g, nominal, step);
             }
             pages.write(out);
         }
@@ -63,6 +84,11 @@ public final class GradeReport {
      */
     public static void write(GradeResult result, StudyPlan plan, Paper paper, Path file) {
         Path dir = file.toAbsolutePath().getParent();
+        if (dir == null || !Files.isDirectory(dir)) {
+            // said before anything is made: the temporary file's name would otherwise be the one reported
+            throw new UserException(Location.file(file.toString()), ReportMessage.FOLDER_MISSING,
+                    String.valueOf(file.getParent() == null ? dir : file.getParent()));
+        }
         Path temp = dir.resolve(".proofrun-" + UUID.randomUUID() + ".tmp");
         try {
             try (OutputStream out = Files.newOutputStream(temp, StandardOpenOption.CREATE_NEW, StandardOpenOption.WRITE)) {

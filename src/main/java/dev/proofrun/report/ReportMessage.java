@@ -5,7 +5,9 @@ import dev.proofrun.text.MessageKey;
 /** What the report step tells people. */
 public enum ReportMessage implements MessageKey {
     /** Writing the report failed. */
-    WRITE_FAILED("could not write the grade report: %s");
+    WRITE_FAILED("could not write the grade report: %s"),
+    /** The report's folder does not exist. */
+    FOLDER_MISSING("the folder %s does not exist: create it first or write the report elsewhere");
 
     private final String english;
 

@@ -23,7 +23,8 @@ import java.util.Locale;
 /**
  * The first part of the report: the verdict and why, before any evidence. A framed box with the part's
  * verdict, one entry per characteristic with the reasons that decided it, and the caution as its last
- * line; then the problems found in the returned file.
+ * line (once; later pages point back to it in their footnote); the block to sign; then the problems found
+ * in the returned file. Verdicts carry their {@link VerdictBadge}.
  */
 final class VerdictSection {
 
@@ -51,21 +52,24 @@ final class VerdictSection {
         }
     }
 
-    void place(Flow flow, GradeResult result, StudyPlan plan) {
+    void place(Flow flow, GradeResult result, StudyPlan plan, ReportStamp stamp) {
         flow.place(Paragraph.of("Grade of the capability study", bold, 16));
         flow.gap(3);
         flow.place(Paragraph.of("Part: " + Fmt.name(plan.part().name()) + (plan.part().number().isBlank() ? "" : "   No. "
                 + Fmt.name(plan.part().number())), bold, 10));
         flow.place(Paragraph.of("Plan " + result.planId() + ", revision " + result.revision() + ". Returned file: "
-                + result.file() + ".", regular, 9));
+                + Fmt.fileName(result.file()) + ".", regular, 9));
+        flow.place(Paragraph.of(stamp.line() + ".", regular, 9));
         flow.gap(8);
 
         List<Block> box = new ArrayList<>();
-        box.add(Paragraph.of("Verdict for the part: " + result.verdict().id(), bold, 14));
+        box.add(new VerdictBadge(result.verdict(), "for the part", bold, bold, 14));
+        box.add(Block.space(2));
         box.add(Paragraph.of("The worst of its characteristics: " + gloss(result.verdict()) + ".", regular, 9));
         box.add(Block.space(6));
         for (CharacteristicGrade g : result.characteristics()) {
-            box.add(Paragraph.of(g.id() + "  " + Fmt.name(g.name()) + ": " + g.verdict().id() + headline(g), bold, 9.5f));
+            box.add(new VerdictBadge(g.verdict(), g.id() + "  " + Fmt.name(g.name()) + headline(g), bold, bold, 9.5f));
+            box.add(Block.space(1));
             for (Reason r : decisive(g)) {
                 box.add(new Item("\u2013", new Paragraph(r.text(), regular, 9, 1.3f, 0), 10));
             }
@@ -75,6 +79,8 @@ final class VerdictSection {
         box.add(Paragraph.of(result.caution(), regular, 8.5f));
         flow.place(new Framed(box, 8f, Pen.solid(1.4f), 0.96f));
 
+        flow.gap(10);
+        signing(flow);
         flow.gap(10);
         List<Problem> problems = result.problems();
         String count = problems.isEmpty() ? "No problems were found in the returned file."
@@ -99,20 +105,30 @@ final class VerdictSection {
         }
     }
 
+    /**
+     * The block to sign: who prepared the grade and who reviewed it, each with name, date and signature. A
+     * report without it is a printout; with it, it is a record someone stands behind.
+     */
+    private void signing(Flow flow) {
+        TextTable t = TextTable.of(List.of(Column.left("", 2.2f), Column.left("Name", 3), Column.left("Date", 1.6f),
+                Column.left("Signature", 3)), regular, bold, 9);
+        flow.placeTogether(List.of(Paragraph.of("Sign-off", bold, 11), Block.space(3), t.header(),
+                t.row(24f, List.of("Prepared by", "", "", "")), t.row(24f, List.of("Reviewed by", "", "", ""))));
+    }
+
     private static String headline(CharacteristicGrade g) {
         if (g.judged() == null) {
             return "";
         }
         var e = g.judged();
         if (g.verdict() == Verdict.NOT_VALID) {
-            // an estimate beside "not-valid" would be read as a capability statement; the reasons say why not
-            return String.format(Locale.ROOT, " (%s required %s; no capability statement)", e.index().symbol(),
-                    Fmt.index(e.required()));
+            // an estimate beside "Not valid" would be read as a capability statement; the reasons say why not
+            return String.format(Locale.ROOT, " (%s \u2265 %s required; no capability statement)",
+                    e.index().symbol(), Fmt.index(e.required()));
         }
-        // what the verdict rests on: the index, how it was computed and under which model
-        return String.format(Locale.ROOT, " (%s under the %s model by %s: estimate %s, lower bound %s, required %s)",
-                e.index().symbol(), e.model().id(), e.method().words(), Fmt.index(e.estimate()), Fmt.index(e.lower()),
-                Fmt.index(e.required()));
+        return String.format(Locale.ROOT, " (%s \u2265 %s required: estimate %s, lower bound %s; %s model, %s)",
+                e.index().symbol(), Fmt.index(e.required()), Fmt.index(e.estimate()), Fmt.index(e.lower()),
+                e.model().id(), e.method().words());
     }
 
     /**

@@ -46,8 +46,9 @@ final class IntroPage {
         String state = plan.revision().map(r -> "issued, revision " + r)
                 .orElse("DRAFT: not issued; readings collected against a draft cannot be graded");
         flow.place(Paragraph.of("Plan " + plan.id() + " (" + state + ")", regular, BODY));
-        flow.place(Paragraph.of("Prepared by: " + orDash(plan.people().author()) + "      To be collected by: "
-                + orDash(plan.people().collector()), regular, BODY));
+        // one line each: set side by side, a long name ran into the next label ("...quality To be collected by")
+        flow.place(Paragraph.of("Prepared by: " + orDash(plan.people().author()), regular, BODY));
+        flow.place(Paragraph.of("To be collected by: " + orDash(plan.people().collector()), regular, BODY));
         if (draft && !plan.isIssued()) {
             flow.gap(2);
             flow.place(Paragraph.of("This sheet is marked DRAFT. Use it to review the plan, not to collect data.",

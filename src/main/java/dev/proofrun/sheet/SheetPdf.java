@@ -8,6 +8,7 @@ import dev.proofrun.sheet.layout.PageHeading;
 import dev.proofrun.sheet.layout.Pages;
 import dev.proofrun.sheet.layout.Paper;
 import java.io.OutputStream;
+import java.util.List;
 
 /**
  * Writes the printed collection sheet: the opening pages ({@link IntroPage}), then the slot table
@@ -51,12 +52,29 @@ public final class SheetPdf {
             }
             flow.newPage();
             flow.startTable(table.header());
-            for (Slot slot : plan.schedule().slots()) {
-                flow.place(table.slot(slot));
+            List<Slot> slots = plan.schedule().slots();
+            float block = table.blockHeight();
+            for (int i = 0; i < slots.size(); i++) {
+                if (lastWouldBeAlone(slots.size() - i, flow.remaining(), block)) {
+                    flow.newPage(); // the last two slots share the last page: none stands alone on it
+                }
+                flow.place(table.slot(slots.get(i)));
             }
             flow.endTable();
             pages.write(out);
         }
+    }
+
+    /**
+     * Whether placing the next slot here would leave the last slot alone on a page of its own: two slots are
+     * left and the page has room for this one but not both. Then both go to the next page together.
+     *
+     * @param left      slots still to place, this one included
+     * @param remaining room left on the current page
+     * @param block     height of one slot block
+     */
+    static boolean lastWouldBeAlone(int left, float remaining, float block) {
+        return left == 2 && remaining >= block && remaining < 2 * block;
     }
 
     private static String partSuffix(StudyPlan plan) {

@@ -18,6 +18,16 @@ final class SheetWording {
                     + "licensed professional practice, or the extra controls that safety-critical characteristics "
                     + "need.");
 
+    /** The reaction line's lead, bold on the sheet. */
+    static final String REACTION_HEAD = "A reading outside its limits:";
+    /** What to do with it (common practice for a nonconforming part found during a study). */
+    static final String REACTION = "stop collecting, tag the part and keep it apart, note slot and box in the "
+            + "remark.";
+    /** Whom to call, before the next reading: the name is written by hand on the ruled field after it. */
+    static final String REACTION_CALL = "Call before going on:";
+    /** The hint under the right end of the call field. */
+    static final String REACTION_FIELD = "(name and phone)";
+
     private SheetWording() {
     }
 
@@ -43,8 +53,8 @@ final class SheetWording {
                         + "write the reason in the remark. Do not make it up later.",
                 "Part scrapped, damaged or lost before it was measured: leave its box empty, write which box and "
                         + "why in the remark. Do not replace it with another part.",
-                "A reading that looks wrong: measure again, write the value you trust and note it in the remark. "
-                        + "Never erase: strike through and write beside.",
+                "A reading that looks wrong: measure again, write the value you trust, note it in the remark; "
+                        + "never erase. Outside its limits: as the line above the table says.",
                 "Return this sheet and the fill-in file (CSV or XLSX) unchanged in layout: the prefilled plan, "
                         + "slot, characteristic and planned columns must stay as they are.");
     }

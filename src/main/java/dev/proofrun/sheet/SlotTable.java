@@ -26,6 +26,11 @@ import java.util.Locale;
  * characteristic (and give them the chance to disagree). When n boxes do not fit across the page at the
  * minimum width, a characteristic's band takes two or more lines of boxes, numbered inside the box.
  * A block never splits across pages ({@link dev.proofrun.sheet.layout.Flow}).
+ *
+ * <p>Every band prints its characteristic's limits under the id; the characteristic column is at least
+ * {@value #CHAR_W} pt and wider when the widest id or limits need it ("21.9870–22.0130"), so that no limits
+ * are ever left out. The header, repeated on every page, opens with the reaction line: what to do with a
+ * reading outside its limits, with a field for the name to call ({@link SheetWording#REACTION}).
  */
 final class SlotTable {
 
@@ -49,6 +54,8 @@ final class SlotTable {
     private static final float ID_SIZE = 10f;
     private static final float TEXT = 8f;
     private static final float SMALL = 7.5f;
+    /** The reaction line's strip above the column labels. */
+    static final float REACTION_H = 26f;
 
     private final List<Characteristic> characteristics;
     private final int n;
@@ -59,6 +66,7 @@ final class SlotTable {
     private final int perLine;
     private final int linesPerBand;
     private final float remark;
+    private final float charW;
 
     SlotTable(List<Characteristic> characteristics, int n, Typeface regular, Typeface bold, float width) {
         this.characteristics = characteristics;
@@ -66,7 +74,8 @@ final class SlotTable {
         this.regular = regular;
         this.bold = bold;
         this.width = width;
-        float fixed = SLOT_W + CHAR_W + TAKEN_W + LOT_W + OPERATOR_W + REMARK_MIN;
+        this.charW = charWidth(characteristics, regular, bold);
+        float fixed = SLOT_W + charW + TAKEN_W + LOT_W + OPERATOR_W + REMARK_MIN;
         float area = width - fixed;
         if (area < MIN_BOX) {
             throw new IllegalArgumentException(String.format(Locale.ROOT, "page too narrow for the slot table: %.0f pt", width));
@@ -74,7 +83,26 @@ final class SlotTable {
         this.perLine = Math.min(n, (int) Math.floor(area / MIN_BOX));
         this.linesPerBand = (n + perLine - 1) / perLine;
         this.box = Math.min(MAX_BOX, area / perLine);
-        this.remark = width - (SLOT_W + CHAR_W + TAKEN_W + LOT_W + OPERATOR_W) - box * perLine;
+        this.remark = width - (SLOT_W + charW + TAKEN_W + LOT_W + OPERATOR_W) - box * perLine;
+    }
+
+    /** The characteristic column: {@link #CHAR_W}, or wider so that every id with its unit and every range fits. */
+    static float charWidth(List<Characteristic> characteristics, Typeface regular, Typeface bold) {
+        float w = CHAR_W;
+        for (Characteristic ch : characteristics) {
+            w = Math.max(w, bold.width(idLine(ch), TEXT) + 2 * PAD);
+            w = Math.max(w, regular.width(Values.range(ch), SMALL) + 2 * PAD);
+        }
+        return (float) Math.ceil(w);
+    }
+
+    /** Width of the characteristic column as laid out. */
+    float charColumn() {
+        return charW;
+    }
+
+    private static String idLine(Characteristic ch) {
+        return ch.id() + (ch.unit().isEmpty() ? "" : " " + ch.unit());
     }
 
     /** Height of every slot block. */
@@ -110,12 +138,14 @@ final class SlotTable {
         return new Block() {
             @Override
             public float height(float w) {
-                return 27f;
+                return REACTION_H + 27f;
             }
 
             @Override
             public void draw(Canvas c, float left, float top, float w) {
-                float h = height(w);
+                drawReaction(c, left, top);
+                top -= REACTION_H;
+                float h = 27f;
                 c.fillRect(left, top - h, width, h, TextTable.HEADER_GRAY);
                 c.pen(Pen.HAIR);
                 c.rect(left, top - h, width, h);
@@ -124,8 +154,8 @@ final class SlotTable {
                 float x = left;
                 label(c, x, SLOT_W, b1, b2, "Slot", "planned, window");
                 x += SLOT_W;
-                label(c, x, CHAR_W, b1, b2, "Char.", "limits");
-                x += CHAR_W;
+                label(c, x, charW, b1, b2, "Char.", "limits");
+                x += charW;
                 float readingsW = box * perLine;
                 c.line(x, top, x, top - h);
                 if (linesPerBand == 1) {
@@ -147,6 +177,21 @@ final class SlotTable {
                 label(c, x, remark, b1, b2, "Remark", "if any");
             }
         };
+    }
+
+    /**
+     * The reaction lines above the column labels: what to do with a reading outside its limits, then whom to
+     * call, on a ruled field to be filled in by hand.
+     */
+    private void drawReaction(Canvas c, float left, float top) {
+        float base = top - 9f;
+        float x = left + c.text(bold, TEXT, left, base, SheetWording.REACTION_HEAD + " ");
+        c.text(regular, TEXT, x, base, SheetWording.REACTION);
+        base -= 11f;
+        x = left + c.text(regular, TEXT, left, base, SheetWording.REACTION_CALL + " ");
+        c.pen(Pen.HAIR);
+        c.line(x, base - 1.5f, left + width * 0.75f, base - 1.5f);
+        c.textRight(regular, SMALL, left + width, base, SheetWording.REACTION_FIELD);
     }
 
     private void label(Canvas c, float x, float w, float b1, float b2, String head, String hint) {
@@ -192,7 +237,7 @@ final class SlotTable {
         c.line(x, top, x, bottom);
         // characteristic bands
         float band = h / characteristics.size();
-        float readingsLeft = x + CHAR_W;
+        float readingsLeft = x + charW;
         for (int k = 0; k < characteristics.size(); k++) {
             Characteristic ch = characteristics.get(k);
             float bandTop = top - k * band;
@@ -200,13 +245,9 @@ final class SlotTable {
                 c.line(x, bandTop, readingsLeft + box * perLine, bandTop);
             }
             float b = bandTop - 8.5f;
-            c.text(bold, TEXT, x + PAD, b, Text.fit(ch.id() + (ch.unit().isEmpty() ? "" : " " + ch.unit()), bold, TEXT,
-                    CHAR_W - 2 * PAD));
-            String range = Values.range(ch);
-            if (band >= 17 && regular.width(range, SMALL) <= CHAR_W - 2 * PAD) {
-                // the limits as a reminder; left out rather than cut when they do not fit (page 1 has them)
-                c.text(regular, SMALL, x + PAD, b - 8f, range);
-            }
+            c.text(bold, TEXT, x + PAD, b, idLine(ch));
+            // the column is wide enough for both (charWidth), and a band is at least LINE (19 pt) tall
+            c.text(regular, SMALL, x + PAD, b - 8f, Values.range(ch));
             float line = band / linesPerBand;
             for (int i = 0; i < n; i++) {
                 int row = i / perLine;

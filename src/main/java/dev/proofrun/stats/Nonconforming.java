@@ -54,6 +54,43 @@ public final class Nonconforming {
         return count;
     }
 
+    /**
+     * An upper confidence bound on the fraction of a normal process outside the tolerance, in ppm, from the
+     * lower confidence bound L of an index (Cpk with σ_w, Ppk with s, or the one-sided index of a one-sided
+     * specification).
+     *
+     * <p>For a normal process the fraction beyond the upper limit is Φ(−3·Cpu) and below the lower limit
+     * Φ(−3·Cpl). With Cpk = min(Cpu, Cpl) = c both are at most Φ(−3c), so p ≤ 2·Φ(−3c) (equality for a centred
+     * process) and p ≤ Φ(−3c) with one limit; both decrease in c. Hence the event "c ≥ L", which the lower
+     * bound gives with confidence 1 − α, implies p ≤ 2·Φ(−3L) (two limits) or Φ(−3L) (one limit): an upper
+     * bound at the same confidence, conservative by up to a factor 2 for an off-centre two-sided process. It
+     * inherits the coverage of L and the normal model; it says nothing under another shape, and Cp or Pp alone
+     * (which ignore centring) bound nothing. The related published tool is the tolerance interval (ISO 16269-6).
+     *
+     * @param kind  the index L bounds; Cp and Pp give no bound
+     * @param lower its lower confidence bound
+     * @return the upper bound in ppm, or empty when the index gives none or L is not finite
+     */
+    public static java.util.OptionalDouble upperPpm(IndexKind kind, SpecLimits limits, double lower) {
+        Objects.requireNonNull(kind, "kind");
+        Objects.requireNonNull(limits, "limits");
+        if (!Double.isFinite(lower)) {
+            return java.util.OptionalDouble.empty();
+        }
+        boolean twoLimits = limits.lower().isPresent() && limits.upper().isPresent();
+        double tail = normalTail(3 * lower);
+        switch (kind.side()) {
+            case NEAREST:
+                return java.util.OptionalDouble.of(1e6 * (twoLimits ? 2 * tail : tail));
+            case UPPER:
+            case LOWER:
+                // the side's own fraction only; with two limits the other side is not bounded by it
+                return twoLimits ? java.util.OptionalDouble.empty() : java.util.OptionalDouble.of(1e6 * tail);
+            default:
+                return java.util.OptionalDouble.empty();
+        }
+    }
+
     /** 1 − Φ(z) = erfc(z/√2)/2. */
     static double normalTail(double z) {
         return 0.5 * Erf.erfc(z / Math.sqrt(2));

@@ -47,10 +47,10 @@ class GradeCommandTest {
     void demoGradesToAMixOfVerdictsWithTheCaution() {
         Run r = run("grade", plan.toString(), data.toString());
         assertEquals(0, r.code(), r.err());
-        assertTrue(r.out().contains("D1 bore diameter: demonstrated"), r.out());
-        assertTrue(r.out().contains("R4 surface roughness Ra: inconclusive"), r.out());
-        assertTrue(r.out().contains("F7 seat push-out force: not-valid"), r.out());
-        assertTrue(r.out().contains("Part verdict: not-valid"));
+        assertTrue(r.out().contains("D1 bore diameter: Demonstrated"), r.out());
+        assertTrue(r.out().contains("R4 surface roughness Ra: Inconclusive"), r.out());
+        assertTrue(r.out().contains("F7 seat push-out force: Not valid"), r.out());
+        assertTrue(r.out().contains("Part verdict: Not valid"));
         assertTrue(r.out().contains("Caution: a statistical statement under assumptions"));
     }
 

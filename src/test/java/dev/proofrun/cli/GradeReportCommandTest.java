@@ -39,7 +39,7 @@ class GradeReportCommandTest {
         assertFalse(err.toString().contains("not available"), err.toString());
         try (PDDocument doc = Loader.loadPDF(Files.readAllBytes(pdf))) {
             String text = new PDFTextStripper().getText(doc);
-            assertTrue(text.contains("Verdict for the part:"), text);
+            assertTrue(text.contains("Not valid for the part"), text);
             PDFTextStripper firstPage = new PDFTextStripper();
             firstPage.setStartPage(1);
             firstPage.setEndPage(1);
@@ -47,9 +47,17 @@ class GradeReportCommandTest {
             // the demo: R4 inconclusive says in the verdict box how many more subgroups would settle it; F7 is
             // not valid and shows no estimate beside its verdict; every page's foot names the part's verdict
             assertTrue(first.contains("more subgroups"), first);
-            assertTrue(first.contains("F7 seat push-out force: not-valid (Cpk required 1.33; no capability statement)"), first);
+            assertTrue(first.contains("Not valid F7 seat push-out force (Cpk \u2265 1.33 required; no capability statement)"), first);
             assertTrue(text.contains("Not valid: these figures describe the study's past, not the process."), text);
-            assertTrue(text.contains("Part verdict: not-valid. A statistical statement under assumptions"), text);
+            assertTrue(text.contains("Part verdict: Not valid. Graded "), text);
+            assertFalse(text.contains("not-valid"), "verdicts in words, not tokens");
+            // evidence a customer files: the returned file by name only, the tool's version, the plan's revision
+            assertFalse(text.contains(tmp.toString()), "no folder of the grading machine in the report");
+            assertTrue(text.contains("Returned file: " + DemoCommand.RETURNED + "."), text);
+            assertTrue(text.contains("proofrun " + dev.proofrun.text.ProductVersion.get()), text);
+            assertTrue(text.contains("revision " + DemoPlan.create().revision().orElseThrow()), text);
+            assertTrue(text.contains("Prepared by") && text.contains("Reviewed by"), "the block to sign");
+            assertTrue(out.toString().contains("Wrote the grade report " + pdf), out.toString());
             assertTrue(doc.getNumberOfPages() >= 1 + DemoPlan.create().characteristics().size());
         }
     }
@@ -61,7 +69,8 @@ class GradeReportCommandTest {
         Path data = tmp.resolve(DemoCommand.RETURNED);
         Path pdf = tmp.resolve("no-such-dir").resolve("grade.pdf");
         assertEquals(2, run("grade", plan.toString(), data.toString(), "--report", pdf.toString()));
-        assertTrue(err.toString().contains("could not write the grade report"), err.toString());
+        assertTrue(err.toString().contains("the folder " + tmp.resolve("no-such-dir") + " does not exist"), err.toString());
+        assertFalse(err.toString().contains(".tmp"), "no temporary file's name");
         assertFalse(err.toString().contains("Exception"), err.toString());
     }
 

@@ -54,7 +54,7 @@ class GradeShapeCommandTest {
         SimulatedReturn.writeCsv(PlanAdapter.of(PlanFiles.read(plan)), Map.of("C1", SimulatedReturn.Process.skewed(0.02, 0.2)),
                 11L, data);
         assertEquals(0, run("grade", plan.toString(), data.toString()), err);
-        assertTrue(out.contains("C1 face flatness: demonstrated"), out);
+        assertTrue(out.contains("C1 face flatness: Demonstrated"), out);
         assertTrue(out.contains("Cpk under the lognormal model by the ISO 22514-2 percentile method, generalized pivotal bounds"), out);
         assertTrue(out.contains("seed " + PivotalBound.DEFAULT_SEED), out);
 
@@ -80,7 +80,7 @@ class GradeShapeCommandTest {
         Files.write(data, lines);
         byte[] before = Files.readAllBytes(data);
         assertEquals(0, run("grade", plan.toString(), data.toString()), err);
-        assertTrue(out.contains("C1 face flatness: not-valid"), out);
+        assertTrue(out.contains("C1 face flatness: Not valid"), out);
         assertTrue(out.contains("a reading at or below zero cannot come from the planned shape (lognormal): 0.0 in subgroup "
                 + cells[1] + ", reading 2"), out);
         assertTrue(java.util.Arrays.equals(before, Files.readAllBytes(data)));

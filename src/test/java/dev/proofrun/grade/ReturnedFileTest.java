@@ -136,6 +136,19 @@ class ReturnedFileTest {
     }
 
     @Test
+    void aSlotReturnedWithEveryBoxEmptyCountsAsMissingNotIncomplete() throws IOException {
+        // the fill-in file's prefilled row for S02 came back as printed: no time, no readings
+        String csv = HEADER + REF + ",S01,D1,,06:05,,,10.001,10.002,\n" + REF + ",S02,D1,,,,,,,\n"
+                + REF + ",S03,D1,,07:00,,,10.001,,\n";
+        GradeResult r = grade("blank.csv", csv);
+        var c = r.characteristics().get(0).completeness();
+        assertEquals(1, c.missingSubgroups(), "the blank S02");
+        assertEquals(1, c.incompleteSubgroups(), "S03 with one of two readings");
+        assertTrue(problems(r).contains("blank.csv, row 3: error: slot S02 of D1 came back with every box empty: "
+                + "counted as missing"), problems(r).toString());
+    }
+
+    @Test
     void numbersAsPeopleTypeThem() {
         assertEquals(10.5, Cells.number("10,5"), 0.0);
         assertEquals(-0.25, Cells.number("-0.25"), 0.0);

@@ -68,10 +68,61 @@ class SheetPdfTest {
     }
 
     /**
+     * Every slot band prints its characteristic's limits, two-sided ones too (D1's "21.9870–22.0130" was left
+     * out when it did not fit the column); every table page opens with the reaction line and its call field;
+     * the last page holds at least two slots; names in the opening lines do not run into the next label.
+     */
+    @Test
+    void everyBandCarriesItsLimitsAndEveryTablePageTheReactionLine() throws IOException {
+        StudyPlan plan = DemoPlan.create();
+        try (PDDocument doc = Loader.loadPDF(pdf(plan, Paper.A4))) {
+            int pages = doc.getNumberOfPages();
+            int slotsSeen = 0;
+            int lastPageSlots = 0;
+            for (int p = 1; p <= pages; p++) {
+                String page = text(doc, p, p);
+                int slotsHere = 0;
+                for (Slot s : plan.schedule().slots()) {
+                    if (page.contains(s.id() + " ")) {
+                        slotsHere++;
+                    }
+                }
+                if (!page.contains("Readings, part 1 to")) {
+                    continue; // an opening page (it names the first and last slot)
+                }
+                slotsSeen += slotsHere;
+                lastPageSlots = slotsHere;
+                assertTrue(page.contains(SheetWording.REACTION_HEAD), "reaction line on page " + p);
+                assertTrue(page.contains(SheetWording.REACTION_CALL), "call field on page " + p);
+                // each characteristic's limits once per slot block on the page
+                for (Characteristic c : plan.characteristics()) {
+                    assertEquals(slotsHere, count(page, Values.range(c)), Values.range(c) + " on page " + p);
+                }
+            }
+            assertEquals(plan.schedule().slots().size(), slotsSeen, "every slot once");
+            assertTrue(lastPageSlots >= 2, "the last page holds " + lastPageSlots + " slot(s)");
+            String opening = text(doc, 1, 1);
+            assertTrue(opening.contains("Prepared by: " + plan.people().author() + "\n")
+                    || opening.contains("Prepared by: " + plan.people().author() + "\r"), "author on a line of its own");
+        }
+        // the demo's limits as the bands print them (plans/demo-valve-body.json, gauges' resolution)
+        assertEquals("21.9870\u201322.0130", Values.range(plan.characteristics().get(0)));
+    }
+
+    @Test
+    void theLastSlotNeverStandsAloneOnAPage() {
+        assertTrue(SheetPdf.lastWouldBeAlone(2, 60f, 57f), "room for one of the last two: break before them");
+        assertTrue(!SheetPdf.lastWouldBeAlone(2, 120f, 57f), "room for both");
+        assertTrue(!SheetPdf.lastWouldBeAlone(3, 60f, 57f), "three left: the last page gets two anyway");
+        assertTrue(!SheetPdf.lastWouldBeAlone(1, 60f, 57f), "a one-slot plan");
+    }
+
+    /**
      * 500 slots × 5 characteristics × n = 5 on A4: the body is 841.89 − 2·32 (margins) − 34 (heading) − 20
-     * (footer) = 723.89 pt; the table header takes 27 pt, leaving 696.89 pt; a slot block is 5 bands × 19 pt
-     * = 95 pt, so 7 blocks fit a page (665 pt; 8 would need 760). 500 / 7 → 72 table pages, plus the one
-     * opening page: 73. On Letter (792 pt): 792 − 118 − 27 = 647 pt → 6 blocks, 84 table pages; Letter is
+     * (footer) = 723.89 pt; the table header takes 53 pt (26 reaction line + 27 labels), leaving 670.89 pt; a
+     * slot block is 5 bands × 19 pt = 95 pt, so 7 blocks fit a page (665 pt; 8 would need 760). 500 / 7 → 72
+     * table pages (the last with 3 slots), plus the one opening page: 73. On Letter (792 pt): 792 − 118 − 53 =
+     * 621 pt → 6 blocks (570 pt), 84 table pages (the last with 2); Letter is
      * 50 pt shorter and the five-row characteristic table pushes the signature block onto a second opening
      * page (the table always starts on a fresh page): 86 in all.
      */

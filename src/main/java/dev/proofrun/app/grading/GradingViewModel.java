@@ -192,8 +192,7 @@ public final class GradingViewModel extends StepViewModel {
 
     /** "demonstrated" → "Demonstrated". */
     public static String verdictWords(dev.proofrun.grade.Verdict v) {
-        String s = v.id().replace('-', ' ');
-        return Character.toUpperCase(s.charAt(0)) + s.substring(1);
+        return v.words();
     }
 
     /** The characteristic by id, if graded. */
