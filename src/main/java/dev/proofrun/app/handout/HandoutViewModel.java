@@ -99,6 +99,10 @@ public final class HandoutViewModel extends StepViewModel {
         // a new base (another plan, or a new revision) makes the exported files someone else's; no listener
         // on the composed plan itself, which would compose and fingerprint it on every edit of any step
         session.baseProperty().addListener((o, a, b) -> exported.set(null));
+        session.openedProperty().addListener((o, a, b) -> {
+            exported.set(null);
+            message.set("");
+        });
     }
 
     @Override
@@ -320,14 +324,20 @@ public final class HandoutViewModel extends StepViewModel {
         exporting.set(true);
         exported.set(null);
         message.set(AppMessage.HANDOUT_EXPORTING.format(dir));
+        int openedAtStart = session.openedCount();
         background.submit(() -> SheetFiles.write(plan, dir, size, false), w -> {
             exporting.set(false);
+            if (session.openedCount() != openedAtStart) {
+                return; // written for a plan no longer on the desk: nothing of it shows under this one
+            }
             exported.set(w);
             message.set(AppMessage.HANDOUT_EXPORTED.format(dir, w.pdf().getFileName(), w.csv().getFileName(),
                     w.xlsx().getFileName()));
         }, ex -> {
             exporting.set(false);
-            message.set(AppMessage.HANDOUT_EXPORT_FAILED.failure(ex));
+            if (session.openedCount() == openedAtStart) {
+                message.set(AppMessage.HANDOUT_EXPORT_FAILED.failure(ex));
+            }
         });
         return true;
     }

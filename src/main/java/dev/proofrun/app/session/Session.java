@@ -9,6 +9,8 @@ import java.util.List;
 import java.util.Objects;
 import java.util.Optional;
 import javafx.beans.property.ObjectProperty;
+import javafx.beans.property.ReadOnlyIntegerProperty;
+import javafx.beans.property.ReadOnlyIntegerWrapper;
 import javafx.beans.property.SimpleObjectProperty;
 
 /**
@@ -22,7 +24,7 @@ public final class Session {
     private final RecentPlans recent;
     private final DraftStore drafts;
     private final ObjectProperty<StudyPlan> base = new SimpleObjectProperty<>(this, "base");
-    private int opened;
+    private final ReadOnlyIntegerWrapper opened = new ReadOnlyIntegerWrapper(this, "opened", 0);
 
     public Session(AppHome home) {
         this.home = Objects.requireNonNull(home, "home");
@@ -102,7 +104,7 @@ public final class Session {
 
     /** On the FX thread: the plan that {@link #load} read becomes the base and its content the draft. */
     public void apply(Opening o) {
-        opened++;
+        opened.set(opened.get() + 1);
         base.set(o.plan());
         draft.restore(o.snapshot(), o.restored());
         if (o.restored()) {
@@ -121,7 +123,7 @@ public final class Session {
 
     /** Starts a new plan (a fresh draft, or the draft of a new plan left unsaved last time). */
     public boolean startNew() {
-        opened++;
+        opened.set(opened.get() + 1);
         base.set(null);
         Optional<DraftSnapshot> left = drafts.newerDraft(null);
         if (left.isPresent()) {
@@ -138,7 +140,15 @@ public final class Session {
      * under another belongs to a draft that is no longer on screen.
      */
     public int openedCount() {
-        return opened;
+        return opened.get();
+    }
+
+    /**
+     * {@link #openedCount()} as a property: it changes whenever another plan (or a new one) is put on the
+     * desk, the moment every step drops what it showed about the plan before (messages, a verdict).
+     */
+    public ReadOnlyIntegerProperty openedProperty() {
+        return opened.getReadOnlyProperty();
     }
 
     /**
