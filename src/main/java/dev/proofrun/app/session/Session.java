@@ -32,6 +32,18 @@ public final class Session {
         this.drafts = new DraftStore(home);
     }
 
+    private PlanFileChooser chooser = PlanFileChooser.SUGGESTED;
+
+    /** How the user is asked where a plan file goes (the window installs a file dialog). */
+    public void setPlanFileChooser(PlanFileChooser chooser) {
+        this.chooser = Objects.requireNonNull(chooser, "chooser");
+    }
+
+    /** Asks where a plan file goes, offering {@code suggested}; empty when the user chose nothing. */
+    public Optional<Path> choosePlanFile(Path suggested) {
+        return chooser.choose(suggested);
+    }
+
     public AppHome home() {
         return home;
     }
@@ -112,7 +124,10 @@ public final class Session {
         }
     }
 
-    /** The bundled demo plan in the plans folder, written there first if it is not there yet. */
+    /**
+     * The bundled demo plan as a copy in the user's plans folder, written there first if it is not there
+     * yet (never the demo file of a checkout or an installation).
+     */
     public Path demoFile() {
         Path f = home.plansFolder().resolve(DemoPlan.FILE_NAME);
         if (!Files.exists(f)) {
