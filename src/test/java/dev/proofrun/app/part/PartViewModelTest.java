@@ -127,4 +127,35 @@ class PartViewModelTest {
         vm.typingDone();
         assertEquals("", vm.typingProblemProperty().get());
     }
+
+    @Test
+    void aPastedBlockAddsRowsLeavesOutExtraColumnsAndUndoesAsOne() {
+        goodRow();
+        // at (row 1, target): two columns fit (target, expected), the third is left out; two rows added
+        int pasted = vm.paste(0, CharacteristicField.TARGET.ordinal(), "12.01\t1.9\textra\r\n\t2.0\n5\t\n");
+        assertEquals(6, pasted);
+        assertEquals(3, draft.characteristics().size());
+        assertEquals("12.01", draft.characteristics().get(0).text(CharacteristicField.TARGET));
+        assertEquals("1.9", draft.characteristics().get(0).text(CharacteristicField.EXPECTED));
+        assertEquals("2.0", draft.characteristics().get(1).text(CharacteristicField.EXPECTED));
+        assertEquals("5", draft.characteristics().get(2).text(CharacteristicField.TARGET));
+        assertTrue(vm.undo());
+        assertEquals(1, draft.characteristics().size(), "the added rows go with the undo");
+        assertEquals("", draft.characteristics().get(0).text(CharacteristicField.TARGET));
+        assertEquals("1.8", draft.characteristics().get(0).text(CharacteristicField.EXPECTED));
+        assertFalse(vm.undo(), "nothing more to undo");
+    }
+
+    @Test
+    void aCellSetTwiceUndoesStepByStep() {
+        goodRow();
+        vm.setCell(0, CharacteristicField.NAME, "Bore A");
+        vm.setCell(0, CharacteristicField.NAME, "Bore B");
+        vm.setCell(0, CharacteristicField.NAME, "Bore B"); // no change, no undo step
+        assertTrue(vm.undo());
+        assertEquals("Bore A", draft.characteristics().get(0).text(CharacteristicField.NAME));
+        assertTrue(vm.undo());
+        assertEquals("Bore", draft.characteristics().get(0).text(CharacteristicField.NAME));
+        assertFalse(vm.undo());
+    }
 }
