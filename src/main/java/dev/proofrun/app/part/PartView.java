@@ -71,8 +71,9 @@ public final class PartView implements StepView {
             // a width of its own: the default width makes the skin measure every cell on the first showing
             // (hundreds of ms on a loaded machine); the constrained policy spreads the rest
             c.setPrefWidth(dev.proofrun.app.shell.Em.of(switch (f) {
-                case NAME -> 16;
+                case NAME -> 13;
                 case ID, UNIT -> 5;
+                case EXPECTED -> 9;
                 default -> 7;
             }));
             c.setCellValueFactory(cd -> cd.getValue().cell(f));
@@ -108,7 +109,7 @@ public final class PartView implements StepView {
         remove.setOnAction(e -> vm.removeRow(table.getSelectionModel().getSelectedIndex()));
         Button importCsv = new Button("_Import list…");
         importCsv.setId("import-list");
-        importCsv.setTooltip(new Tooltip("A CSV file with the columns id,name,unit,nominal,lsl,usl,target,expected"));
+        importCsv.setTooltip(new Tooltip("A CSV file with the columns id,name,unit,nominal,lsl,usl,target,expected,shape"));
         importCsv.setOnAction(e -> {
             FileChooser fc = new FileChooser();
             fc.getExtensionFilters().add(new FileChooser.ExtensionFilter("CSV list", "*.csv"));

@@ -14,6 +14,7 @@ import dev.proofrun.app.session.CharacteristicField;
 import dev.proofrun.app.session.CharacteristicListFile;
 import dev.proofrun.app.session.DraftField;
 import dev.proofrun.app.session.Numbers;
+import dev.proofrun.app.session.PlanBridge;
 import dev.proofrun.app.session.StudyDraft;
 import dev.proofrun.app.shell.StepViewModel;
 import dev.proofrun.text.UserException;
@@ -270,6 +271,13 @@ public final class PartViewModel extends StepViewModel {
                 return same > 1 ? Optional.of(AppMessage.PART_ID_REPEATED.format(text)) : Optional.empty();
             case NAME:
                 return Optional.empty();
+            case SHAPE:
+                try {
+                    PlanBridge.shapeOf(row);
+                    return Optional.empty();
+                } catch (IllegalArgumentException e) {
+                    return Optional.of(e.getMessage());
+                }
             case UNIT:
                 if (text.isEmpty()) {
                     return Optional.of(AppMessage.PART_UNIT_MISSING.format());
@@ -352,6 +360,7 @@ public final class PartViewModel extends StepViewModel {
             case USL -> "USL";
             case TARGET -> "Cpm target";
             case EXPECTED -> "Expected index";
+            case SHAPE -> "Shape";
         };
     }
 }

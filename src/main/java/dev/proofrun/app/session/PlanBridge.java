@@ -74,6 +74,7 @@ public final class PlanBridge {
             r.put("usl", ch.limits().upper().isPresent() ? num(ch.limits().upper().getAsDouble()) : "");
             r.put("target", "");
             r.put("expected", num(ch.expectation().index()));
+            r.put("shape", ch.shape().token());
             rows.add(r);
         }
         return new DraftSnapshot(DraftSnapshot.FORMAT, file == null ? "" : file.toString(), f, rows);
@@ -98,14 +99,19 @@ public final class PlanBridge {
             OptionalDouble nominal = row.number(CharacteristicField.NOMINAL);
             chars.add(new Characteristic(row.id(), row.text(CharacteristicField.NAME).trim(),
                     row.text(CharacteristicField.UNIT).trim(), nominal, row.limits().orElseThrow(), gauge, requirement, e,
-                    // the wizard does not edit the planned shape yet: keep the one the plan was opened with
-                    was.map(Characteristic::shape).orElse(dev.proofrun.stats.ShapeFamily.NORMAL)));
+                    shapeOf(row)));
         }
         Part part = new Part(d.text(DraftField.PART_NAME), d.text(DraftField.PART_NUMBER), d.text(DraftField.PART_REVISION));
         People people = new People(d.text(DraftField.PREPARED_BY), d.text(DraftField.COLLECTOR));
         // The schedule the Timing step already had the core compute for these inputs (not computed again).
         return new StudyPlan(d.text(DraftField.PLAN_ID), part, people, chars, calendar, span, design, spacing, seed,
                 schedule, dev.proofrun.plan.PlanState.DRAFT, Optional.empty(), Optional.empty());
+    }
+
+    /** The planned shape typed in the row; blank is normal. */
+    public static dev.proofrun.stats.ShapeFamily shapeOf(CharacteristicDraft row) {
+        String t = row.text(CharacteristicField.SHAPE).trim();
+        return t.isEmpty() ? dev.proofrun.stats.ShapeFamily.NORMAL : dev.proofrun.stats.ShapeFamily.fromToken(t);
     }
 
     /** The expected centring of the plan the draft came from, kept when it still fits the index typed. */

@@ -110,7 +110,7 @@ class PartViewModelTest {
         Files.writeString(csv, "id,name,unit,tolerance\nA1,x,mm,3\n");
         assertFalse(vm.importList(csv));
         assertEquals("bad.csv, row 1, column tolerance: unknown column 'tolerance' "
-                + "(expected id,name,unit,nominal,lsl,usl,target,expected)", vm.importMessageProperty().get());
+                + "(expected id,name,unit,nominal,lsl,usl,target,expected,shape)", vm.importMessageProperty().get());
         assertEquals(1, vm.rows().size());
     }
 
@@ -131,17 +131,17 @@ class PartViewModelTest {
     @Test
     void aPastedBlockAddsRowsLeavesOutExtraColumnsAndUndoesAsOne() {
         goodRow();
-        // at (row 1, target): two columns fit (target, expected), the third is left out; two rows added
-        int pasted = vm.paste(0, CharacteristicField.TARGET.ordinal(), "12.01\t1.9\textra\r\n\t2.0\n5\t\n");
+        // at (row 1, expected): two columns fit (expected, shape), the third is left out; two rows added
+        int pasted = vm.paste(0, CharacteristicField.EXPECTED.ordinal(), "1.9\tlognormal\textra\r\n\tweibull\n5\t\n");
         assertEquals(6, pasted);
         assertEquals(3, draft.characteristics().size());
-        assertEquals("12.01", draft.characteristics().get(0).text(CharacteristicField.TARGET));
         assertEquals("1.9", draft.characteristics().get(0).text(CharacteristicField.EXPECTED));
-        assertEquals("2.0", draft.characteristics().get(1).text(CharacteristicField.EXPECTED));
-        assertEquals("5", draft.characteristics().get(2).text(CharacteristicField.TARGET));
+        assertEquals("lognormal", draft.characteristics().get(0).text(CharacteristicField.SHAPE));
+        assertEquals("weibull", draft.characteristics().get(1).text(CharacteristicField.SHAPE));
+        assertEquals("5", draft.characteristics().get(2).text(CharacteristicField.EXPECTED));
         assertTrue(vm.undo());
         assertEquals(1, draft.characteristics().size(), "the added rows go with the undo");
-        assertEquals("", draft.characteristics().get(0).text(CharacteristicField.TARGET));
+        assertEquals("", draft.characteristics().get(0).text(CharacteristicField.SHAPE));
         assertEquals("1.8", draft.characteristics().get(0).text(CharacteristicField.EXPECTED));
         assertFalse(vm.undo(), "nothing more to undo");
     }
