@@ -71,10 +71,12 @@ public final class PartView implements StepView {
             // a width of its own: the default width makes the skin measure every cell on the first showing
             // (hundreds of ms on a loaded machine); the constrained policy spreads the rest
             c.setPrefWidth(dev.proofrun.app.shell.Em.of(switch (f) {
-                case NAME -> 13;
-                case ID, UNIT -> 5;
+                case NAME -> 11;
+                case ID, UNIT -> 4;
                 case EXPECTED -> 9;
-                default -> 7;
+                case GAUGE -> 11;
+                case TARGET, RESOLUTION -> 7.5;
+                default -> 5.5;
             }));
             c.setCellValueFactory(cd -> cd.getValue().cell(f));
             c.setCellFactory(col -> new CheckedCell(vm, f, grid));
@@ -109,7 +111,7 @@ public final class PartView implements StepView {
         remove.setOnAction(e -> vm.removeRow(table.getSelectionModel().getSelectedIndex()));
         Button importCsv = new Button("_Import list…");
         importCsv.setId("import-list");
-        importCsv.setTooltip(new Tooltip("A CSV file with the columns id,name,unit,nominal,lsl,usl,target,expected,shape"));
+        importCsv.setTooltip(new Tooltip("A CSV file with the columns id,name,unit,nominal,lsl,usl,target,expected,shape,gauge,resolution"));
         importCsv.setOnAction(e -> {
             FileChooser fc = new FileChooser();
             fc.getExtensionFilters().add(new FileChooser.ExtensionFilter("CSV list", "*.csv"));

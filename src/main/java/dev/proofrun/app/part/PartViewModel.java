@@ -271,6 +271,17 @@ public final class PartViewModel extends StepViewModel {
                 return same > 1 ? Optional.of(AppMessage.PART_ID_REPEATED.format(text)) : Optional.empty();
             case NAME:
                 return Optional.empty();
+            case GAUGE:
+                return row.text(CharacteristicField.RESOLUTION).isBlank() || !text.isEmpty() ? Optional.empty()
+                        : Optional.of(AppMessage.PART_GAUGE_UNNAMED.format());
+            case RESOLUTION:
+                if (text.isEmpty()) {
+                    String gauge = row.text(CharacteristicField.GAUGE).trim();
+                    return gauge.isEmpty() ? Optional.empty() : Optional.of(AppMessage.PART_RESOLUTION_MISSING.format(gauge));
+                }
+                OptionalDouble step = Numbers.parse(text);
+                return step.isPresent() && step.getAsDouble() > 0 ? Optional.empty()
+                        : Optional.of(AppMessage.PART_RESOLUTION_BAD.format(text));
             case SHAPE:
                 try {
                     PlanBridge.shapeOf(row);
@@ -361,6 +372,8 @@ public final class PartViewModel extends StepViewModel {
             case TARGET -> "Cpm target";
             case EXPECTED -> "Expected index";
             case SHAPE -> "Shape";
+            case GAUGE -> "Gauge";
+            case RESOLUTION -> "Resolution";
         };
     }
 }

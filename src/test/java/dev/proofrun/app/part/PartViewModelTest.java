@@ -110,7 +110,7 @@ class PartViewModelTest {
         Files.writeString(csv, "id,name,unit,tolerance\nA1,x,mm,3\n");
         assertFalse(vm.importList(csv));
         assertEquals("bad.csv, row 1, column tolerance: unknown column 'tolerance' "
-                + "(expected id,name,unit,nominal,lsl,usl,target,expected,shape)", vm.importMessageProperty().get());
+                + "(expected id,name,unit,nominal,lsl,usl,target,expected,shape,gauge,resolution)", vm.importMessageProperty().get());
         assertEquals(1, vm.rows().size());
     }
 
@@ -131,18 +131,23 @@ class PartViewModelTest {
     @Test
     void aPastedBlockAddsRowsLeavesOutExtraColumnsAndUndoesAsOne() {
         goodRow();
-        // at (row 1, expected): two columns fit (expected, shape), the third is left out; two rows added
-        int pasted = vm.paste(0, CharacteristicField.EXPECTED.ordinal(), "1.9\tlognormal\textra\r\n\tweibull\n5\t\n");
+        // at (row 1, the last column but one): two columns fit (gauge, resolution), the third is left out;
+        // two rows added
+        CharacteristicField[] all = CharacteristicField.values();
+        CharacteristicField second = all[all.length - 2];
+        CharacteristicField last = all[all.length - 1];
+        int pasted = vm.paste(0, second.ordinal(), "A\tB\textra\r\n\tD\nE\t\n");
         assertEquals(6, pasted);
         assertEquals(3, draft.characteristics().size());
-        assertEquals("1.9", draft.characteristics().get(0).text(CharacteristicField.EXPECTED));
-        assertEquals("lognormal", draft.characteristics().get(0).text(CharacteristicField.SHAPE));
-        assertEquals("weibull", draft.characteristics().get(1).text(CharacteristicField.SHAPE));
-        assertEquals("5", draft.characteristics().get(2).text(CharacteristicField.EXPECTED));
+        assertEquals("A", draft.characteristics().get(0).text(second));
+        assertEquals("B", draft.characteristics().get(0).text(last));
+        assertEquals("D", draft.characteristics().get(1).text(last));
+        assertEquals("E", draft.characteristics().get(2).text(second));
+        assertEquals("1.8", draft.characteristics().get(0).text(CharacteristicField.EXPECTED), "untouched");
         assertTrue(vm.undo());
         assertEquals(1, draft.characteristics().size(), "the added rows go with the undo");
-        assertEquals("", draft.characteristics().get(0).text(CharacteristicField.SHAPE));
-        assertEquals("1.8", draft.characteristics().get(0).text(CharacteristicField.EXPECTED));
+        assertEquals("", draft.characteristics().get(0).text(second));
+        assertEquals("", draft.characteristics().get(0).text(last));
         assertFalse(vm.undo(), "nothing more to undo");
     }
 
