@@ -60,6 +60,20 @@ public final class Wizard {
                 new SizingView(sizing), new TimingView(timing), new HandoutView(handout),
                 new GradingView(grading));
         view = new ShellView(shell, views);
+        session.setPlanFileChooser(this::askWhere);
+    }
+
+    /** A save dialog over the window, opening at the suggested file (tests install their own answer). */
+    private java.util.Optional<java.nio.file.Path> askWhere(java.nio.file.Path suggested) {
+        javafx.stage.FileChooser fc = new javafx.stage.FileChooser();
+        fc.getExtensionFilters().add(new javafx.stage.FileChooser.ExtensionFilter("proofrun plan", "*.json"));
+        java.io.File dir = suggested.getParent().toFile();
+        if (dir.isDirectory() || dir.mkdirs()) {
+            fc.setInitialDirectory(dir);
+        }
+        fc.setInitialFileName(suggested.getFileName().toString());
+        javafx.stage.Window owner = view.root().getScene() == null ? null : view.root().getScene().getWindow();
+        return java.util.Optional.ofNullable(fc.showSaveDialog(owner)).map(java.io.File::toPath);
     }
 
     public static Wizard create(AppHome home, HostServices host) {

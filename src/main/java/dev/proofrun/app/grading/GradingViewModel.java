@@ -49,11 +49,44 @@ public final class GradingViewModel extends StepViewModel {
     private Background.Job running;
     private long generation;
     private StudyPlan gradedAgainst;
+    private String gradedFile;
 
     public GradingViewModel(Session session, Background background) {
         this.session = session;
         this.background = background;
         bindMissing(Bindings.createStringBinding(() -> "", result));
+        session.openedProperty().addListener((o, was, now) -> forget(true));
+        returnedFile().addListener((o, was, now) -> {
+            if (gradedFile != null && !gradedFile.equals(now == null ? "" : now.trim())) {
+                forget(false);
+            }
+        });
+    }
+
+    /**
+     * Drops the result (and with it the verdict and the report it could export) and any job still running:
+     * it belonged to another plan or another returned file. The message goes too when the plan changed.
+     */
+    private void forget(boolean message) {
+        if (running != null) {
+            running.cancel();
+            running = null;
+        }
+        generation++;
+        busy.set(false);
+        clearResult();
+        if (message) {
+            this.message.set("");
+        }
+    }
+
+    private void clearResult() {
+        result.set(null);
+        problems.clear();
+        grades.clear();
+        selected.set(null);
+        gradedAgainst = null;
+        gradedFile = null;
     }
 
     @Override
@@ -104,16 +137,19 @@ public final class GradingViewModel extends StepViewModel {
     public boolean grade() {
         StudyPlan plan = session.baseProperty().get();
         if (plan == null || !plan.isIssued()) {
+            clearResult();
             message.set(AppMessage.GRADING_ISSUE_FIRST.format());
             return false;
         }
         String text = returnedFile().get().trim();
         if (text.isEmpty()) {
+            clearResult();
             message.set(AppMessage.GRADING_NO_FILE.format());
             return false;
         }
         Path file = Path.of(text);
         if (!Files.isRegularFile(file)) {
+            clearResult();
             message.set(AppMessage.GRADING_NOT_FOUND.format(text));
             return false;
         }
@@ -122,16 +158,19 @@ public final class GradingViewModel extends StepViewModel {
         }
         String display = file.getFileName().toString();
         long mine = ++generation;
+        clearResult();
         busy.set(true);
         message.set("");
         running = background.submit(() -> Grader.grade(PlanAdapter.of(plan), file, display), r -> {
             if (mine == generation) {
                 gradedAgainst = plan;
+                gradedFile = text;
                 apply(r);
             }
         }, ex -> {
             if (mine == generation) {
                 busy.set(false);
+                clearResult();
                 message.set(AppMessage.GRADING_FAILED.failure(ex));
             }
         });
@@ -159,16 +198,21 @@ public final class GradingViewModel extends StepViewModel {
             return false;
         }
         reporting.set(true);
+        long mine = generation;
         message.set(AppMessage.GRADING_REPORTING.format(target));
         background.submit(() -> {
             GradeReport.write(r, against, Paper.A4, target);
             return target;
         }, written -> {
             reporting.set(false);
-            message.set(AppMessage.GRADING_REPORT.format(written));
+            if (mine == generation) {
+                message.set(AppMessage.GRADING_REPORT.format(written));
+            }
         }, ex -> {
             reporting.set(false);
-            message.set(AppMessage.GRADING_REPORT_FAILED.failure(ex));
+            if (mine == generation) {
+                message.set(AppMessage.GRADING_REPORT_FAILED.failure(ex));
+            }
         });
         return true;
     }

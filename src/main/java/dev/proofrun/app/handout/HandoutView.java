@@ -44,7 +44,13 @@ public final class HandoutView implements StepView {
         message.setId("handout-message");
         message.setWrapText(true);
         message.textProperty().bind(vm.messageProperty());
-        VBox issueCard = new VBox(state, new HBox(8, issue), message);
+        Button saveAs = new Button("Sa_ve as…");
+        saveAs.setId("save-as");
+        saveAs.disableProperty().bind(Bindings.createBooleanBinding(() -> (vm.composedBinding().get().plan().isEmpty()
+                && vm.issuedBinding().get().isEmpty()) || vm.issuingProperty().get(), vm.composedBinding(),
+                vm.issuedBinding(), vm.issuingProperty()));
+        saveAs.setOnAction(e -> vm.saveAs());
+        VBox issueCard = new VBox(state, new HBox(8, issue, saveAs), message);
         issueCard.getStyleClass().add("pr-card");
 
         ChoiceBox<Paper> paper = new ChoiceBox<>(FXCollections.observableArrayList(Paper.values()));

@@ -99,6 +99,10 @@ public final class HandoutViewModel extends StepViewModel {
         // a new base (another plan, or a new revision) makes the exported files someone else's; no listener
         // on the composed plan itself, which would compose and fingerprint it on every edit of any step
         session.baseProperty().addListener((o, a, b) -> exported.set(null));
+        session.openedProperty().addListener((o, a, b) -> {
+            exported.set(null);
+            message.set("");
+        });
     }
 
     @Override
@@ -241,8 +245,8 @@ public final class HandoutViewModel extends StepViewModel {
     }
 
     /**
-     * Issues what the steps describe and writes it to the plan file (a new plan goes to the plans folder as
-     * {@code <id>.json}). A changed issued plan becomes a new revision that supersedes the old one.
+     * Issues what the steps describe and writes it to the plan file; for a new plan the user is asked where
+     * ({@link Session#choosePlanFile}, offering {@code <id>.json} in the user's plans folder). A changed issued plan becomes a new revision that supersedes the old one.
      *
      * <p>The fingerprint and the synced write run in the background ({@link #issuingProperty()} is true
      * meanwhile); the revision appears when the file is written, and a failure is said in
@@ -267,7 +271,13 @@ public final class HandoutViewModel extends StepViewModel {
         StudyPlan base = session.baseProperty().get();
         StudyPlan draft = base != null && base.isIssued() ? withSupersedes(now.get(), base.revision()) : now.get();
         Path planFile = session.draft().planFileProperty().get();
-        Path file = planFile != null ? planFile : session.home().plansFolder().resolve(draft.id() + ".json");
+        Optional<Path> chosen = planFile != null ? Optional.of(planFile)
+                : session.choosePlanFile(session.home().plansFolder().resolve(draft.id() + ".json"));
+        if (chosen.isEmpty()) {
+            message.set(AppMessage.HANDOUT_NOT_SAVED.format());
+            return false;
+        }
+        Path file = chosen.get();
         int editsAtStart = session.draft().editsProperty().get();
         int openedAtStart = session.openedCount();
         issuing.set(true);
@@ -295,6 +305,46 @@ public final class HandoutViewModel extends StepViewModel {
     private record Written(Path file, StudyPlan plan) {
     }
 
+    /**
+     * Save as…: writes the plan as it stands (the issued plan when the steps describe it, else the draft
+     * plan) to a file the user chooses, in the background; the draft then belongs to that file. Nothing is
+     * written when the user chooses nothing or the plan is incomplete.
+     *
+     * @return true when the write was started
+     */
+    public boolean saveAs() {
+        if (issuing.get()) {
+            return false;
+        }
+        Optional<StudyPlan> plan = issuedNow().or(() -> composed.get().plan());
+        if (plan.isEmpty()) {
+            message.set(getMissing());
+            return false;
+        }
+        Optional<Path> chosen = session.choosePlanFile(exportFolder().resolve(plan.get().id() + ".json"));
+        if (chosen.isEmpty()) {
+            message.set(AppMessage.HANDOUT_NOT_SAVED.format());
+            return false;
+        }
+        StudyPlan p = plan.get();
+        int editsAtStart = session.draft().editsProperty().get();
+        int openedAtStart = session.openedCount();
+        issuing.set(true);
+        message.set(AppMessage.HANDOUT_SAVING.format(chosen.get().getFileName()));
+        files.submit(() -> session.write(chosen.get(), p), written -> {
+            issuing.set(false);
+            if (session.openedCount() != openedAtStart) {
+                return;
+            }
+            session.adopt(written, p, session.draft().editsProperty().get() != editsAtStart);
+            message.set(AppMessage.HANDOUT_SAVED_AS.format(written));
+        }, ex -> {
+            issuing.set(false);
+            message.set(AppMessage.HANDOUT_SAVE_FAILED.failure(ex));
+        });
+        return true;
+    }
+
     /** True while the plan is being issued and written. */
     public BooleanProperty issuingProperty() {
         return issuing;
@@ -320,14 +370,20 @@ public final class HandoutViewModel extends StepViewModel {
         exporting.set(true);
         exported.set(null);
         message.set(AppMessage.HANDOUT_EXPORTING.format(dir));
+        int openedAtStart = session.openedCount();
         background.submit(() -> SheetFiles.write(plan, dir, size, false), w -> {
             exporting.set(false);
+            if (session.openedCount() != openedAtStart) {
+                return; // written for a plan no longer on the desk: nothing of it shows under this one
+            }
             exported.set(w);
             message.set(AppMessage.HANDOUT_EXPORTED.format(dir, w.pdf().getFileName(), w.csv().getFileName(),
                     w.xlsx().getFileName()));
         }, ex -> {
             exporting.set(false);
-            message.set(AppMessage.HANDOUT_EXPORT_FAILED.failure(ex));
+            if (session.openedCount() == openedAtStart) {
+                message.set(AppMessage.HANDOUT_EXPORT_FAILED.failure(ex));
+            }
         });
         return true;
     }

@@ -10,10 +10,14 @@ import javafx.scene.Node;
 import javafx.scene.control.Button;
 import javafx.scene.control.Label;
 import javafx.scene.control.TableColumn;
+import javafx.scene.control.TablePosition;
 import javafx.scene.control.TableView;
 import javafx.scene.control.TextField;
 import javafx.scene.control.Tooltip;
 import javafx.scene.control.cell.TextFieldTableCell;
+import javafx.scene.input.Clipboard;
+import javafx.scene.input.KeyCode;
+import javafx.scene.input.KeyEvent;
 import javafx.scene.layout.GridPane;
 import javafx.scene.layout.HBox;
 import javafx.scene.layout.VBox;
@@ -52,6 +56,8 @@ public final class PartView implements StepView {
         // as tall as its rows: at least 6, at most 12 (then it scrolls); fewer blank rows to make and style
         dev.proofrun.app.shell.Tables.fitHeight(table, 2.2, 6, 12);
         table.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY_FLEX_LAST_COLUMN);
+        Grid grid = new Grid(table, vm);
+        table.addEventFilter(KeyEvent.KEY_PRESSED, grid::keyOnTable);
         for (CharacteristicField f : CharacteristicField.values()) {
             TableColumn<CharacteristicDraft, String> c = new TableColumn<>();
             String title = PartViewModel.label(f);
@@ -65,13 +71,16 @@ public final class PartView implements StepView {
             // a width of its own: the default width makes the skin measure every cell on the first showing
             // (hundreds of ms on a loaded machine); the constrained policy spreads the rest
             c.setPrefWidth(dev.proofrun.app.shell.Em.of(switch (f) {
-                case NAME -> 16;
-                case ID, UNIT -> 5;
-                default -> 7;
+                case NAME -> 11;
+                case ID, UNIT -> 4;
+                case EXPECTED -> 9;
+                case GAUGE -> 11;
+                case TARGET, RESOLUTION -> 7.5;
+                default -> 5.5;
             }));
             c.setCellValueFactory(cd -> cd.getValue().cell(f));
-            c.setCellFactory(col -> new CheckedCell(vm, f));
-            c.setOnEditCommit(e -> e.getRowValue().cell(f).set(e.getNewValue()));
+            c.setCellFactory(col -> new CheckedCell(vm, f, grid));
+            c.setOnEditCommit(e -> vm.setCell(e.getTablePosition().getRow(), f, e.getNewValue()));
             table.getColumns().add(c);
         }
         table.getSelectionModel().selectedIndexProperty().addListener((obs, was, now) -> vm.selectedProperty().set(now.intValue()));
@@ -102,7 +111,7 @@ public final class PartView implements StepView {
         remove.setOnAction(e -> vm.removeRow(table.getSelectionModel().getSelectedIndex()));
         Button importCsv = new Button("_Import list…");
         importCsv.setId("import-list");
-        importCsv.setTooltip(new Tooltip("A CSV file with the columns id,name,unit,nominal,lsl,usl,target,expected"));
+        importCsv.setTooltip(new Tooltip("A CSV file with the columns id,name,unit,nominal,lsl,usl,target,expected,shape,gauge,resolution"));
         importCsv.setOnAction(e -> {
             FileChooser fc = new FileChooser();
             fc.getExtensionFilters().add(new FileChooser.ExtensionFilter("CSV list", "*.csv"));
@@ -114,9 +123,15 @@ public final class PartView implements StepView {
         Label imported = new Label();
         imported.setId("import-message");
         imported.getStyleClass().add("pr-note");
+        imported.setWrapText(true);
         imported.textProperty().bind(vm.importMessageProperty());
-        HBox actions = new HBox(8, add, remove, importCsv, imported);
-        VBox card = new VBox(new Label("Characteristics (double-click or start typing in a cell to edit)"), table, rowProblem, actions);
+        imported.managedProperty().bind(imported.textProperty().isNotEmpty());
+        for (Button b : new Button[] {add, remove, importCsv}) {
+            b.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE); // a long message never squeezes a label to "…"
+        }
+        HBox actions = new HBox(8, add, remove, importCsv);
+        VBox card = new VBox(new Label("Characteristics (Enter or double-click to edit a cell; Tab to the next cell,"
+                + " Ctrl+V pastes cells copied from a spreadsheet, Ctrl+Z undoes)"), table, rowProblem, actions, imported);
         card.getStyleClass().add("pr-card");
         root.getChildren().addAll(form, card);
     }
@@ -143,10 +158,13 @@ public final class PartView implements StepView {
         private final PartViewModel vm;
         private final CharacteristicField field;
 
-        CheckedCell(PartViewModel vm, CharacteristicField field) {
+        private final Grid grid;
+
+        CheckedCell(PartViewModel vm, CharacteristicField field, Grid grid) {
             super(new javafx.util.converter.DefaultStringConverter());
             this.vm = vm;
             this.field = field;
+            this.grid = grid;
             vm.rows().addListener((javafx.collections.ListChangeListener<CharacteristicDraft>) c -> mark());
         }
 
@@ -160,6 +178,27 @@ public final class PartView implements StepView {
                 tf.textProperty().addListener((obs, was, now) -> {
                     if (isEditing()) {
                         vm.typing(row, field, now);
+                    }
+                });
+                tf.addEventFilter(KeyEvent.KEY_PRESSED, k -> {
+                    int at = getIndex();
+                    switch (k.getCode()) {
+                        case TAB -> {
+                            k.consume();
+                            commitEdit(tf.getText());
+                            grid.step(at, field.ordinal(), k.isShiftDown() ? -1 : 1, true);
+                        }
+                        case ENTER -> {
+                            k.consume();
+                            commitEdit(tf.getText());
+                            grid.go(Math.min(at + 1, vm.rows().size() - 1), field.ordinal(), false);
+                        }
+                        case ESCAPE -> {
+                            k.consume();
+                            cancelEdit();
+                            grid.go(at, field.ordinal(), false);
+                        }
+                        default -> { }
                     }
                 });
                 tf.focusedProperty().addListener((obs, was, now) -> {
@@ -204,6 +243,81 @@ public final class PartView implements StepView {
                 getStyleClass().add("pr-invalid");
                 setTooltip(new Tooltip(now));
             }
+        }
+    }
+
+    /**
+     * The characteristics table as a grid people type into: Tab / Shift+Tab to the next / previous cell
+     * (wrapping to the next row; a new row after the last cell), Enter edits the focused cell and, while
+     * editing, commits and moves down, Escape cancels, Delete clears, Ctrl+V pastes a tab-separated block,
+     * Ctrl+Z undoes the last grid edit. Keys never reach a field outside the grid (Ctrl+Tab leaves it).
+     */
+    private static final class Grid {
+        private final TableView<CharacteristicDraft> table;
+        private final PartViewModel vm;
+
+        Grid(TableView<CharacteristicDraft> table, PartViewModel vm) {
+            this.table = table;
+            this.vm = vm;
+        }
+
+        /** Moves one cell forward or back from (row, col), wrapping rows; past the last cell adds a row. */
+        void step(int row, int col, int direction, boolean edit) {
+            int last = table.getColumns().size() - 1;
+            int r = Math.max(row, 0);
+            int c = col + direction;
+            if (c > last) {
+                c = 0;
+                r++;
+            } else if (c < 0) {
+                c = r == 0 ? 0 : last;
+                r = Math.max(r - 1, 0);
+            }
+            if (r >= vm.rows().size()) {
+                vm.addRow();
+            }
+            go(r, c, edit);
+        }
+
+        /** Focuses the cell (row, col) in the table, editing it if asked. */
+        void go(int row, int col, boolean edit) {
+            if (row < 0 || row >= vm.rows().size()) {
+                table.requestFocus();
+                return;
+            }
+            TableColumn<CharacteristicDraft, ?> column = table.getColumns().get(col);
+            table.requestFocus();
+            table.getSelectionModel().clearAndSelect(row);
+            table.getFocusModel().focus(row, column);
+            table.scrollTo(row);
+            if (edit) {
+                table.edit(row, column);
+            }
+        }
+
+        void keyOnTable(KeyEvent k) {
+            if (table.getEditingCell() != null) {
+                return; // the cell's own field handles its keys
+            }
+            TablePosition<CharacteristicDraft, ?> at = table.getFocusModel().getFocusedCell();
+            int row = at == null ? -1 : at.getRow();
+            int col = at == null || at.getColumn() < 0 ? 0 : at.getColumn();
+            CharacteristicField field = CharacteristicField.values()[col];
+            if (k.getCode() == KeyCode.TAB && !k.isShortcutDown()) {
+                step(row, col, k.isShiftDown() ? -1 : 1, false);
+            } else if (k.getCode() == KeyCode.ENTER && row >= 0) {
+                go(row, col, true);
+            } else if ((k.getCode() == KeyCode.DELETE || k.getCode() == KeyCode.BACK_SPACE) && row >= 0) {
+                vm.setCell(row, field, "");
+            } else if (k.getCode() == KeyCode.V && k.isShortcutDown()) {
+                String text = Clipboard.getSystemClipboard().getString();
+                vm.paste(row < 0 ? vm.rows().size() : row, col, text);
+            } else if (k.getCode() == KeyCode.Z && k.isShortcutDown()) {
+                vm.undo();
+            } else {
+                return;
+            }
+            k.consume();
         }
     }
 }

@@ -14,10 +14,12 @@ import dev.proofrun.app.session.CharacteristicField;
 import dev.proofrun.app.session.CharacteristicListFile;
 import dev.proofrun.app.session.DraftField;
 import dev.proofrun.app.session.Numbers;
+import dev.proofrun.app.session.PlanBridge;
 import dev.proofrun.app.session.StudyDraft;
 import dev.proofrun.app.shell.StepViewModel;
 import dev.proofrun.text.UserException;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import java.util.OptionalDouble;
@@ -130,6 +132,7 @@ public final class PartViewModel extends StepViewModel {
         try {
             List<CharacteristicDraft> read = CharacteristicListFile.read(file);
             rows().setAll(read);
+            undo.clear();
             selected.set(0);
             importMessage.set(AppMessage.PART_IMPORTED.format(read.size(), file.getFileName()));
             return true;
@@ -137,6 +140,85 @@ public final class PartViewModel extends StepViewModel {
             importMessage.set(e.getMessage());
             return false;
         }
+    }
+
+    /** One cell's text before an edit: undoing puts it back. */
+    private record Change(CharacteristicDraft row, CharacteristicField field, String before) {
+    }
+
+    /** One undoable edit: the cells it changed and the rows it added at the end. */
+    private record Edit(List<Change> changes, List<CharacteristicDraft> added) {
+    }
+
+    private final java.util.Deque<Edit> undo = new java.util.ArrayDeque<>();
+
+    /** Sets one cell of the grid (an edit committed, a cell cleared) as one undoable edit. */
+    public void setCell(int row, CharacteristicField field, String text) {
+        if (row < 0 || row >= rows().size()) {
+            return;
+        }
+        CharacteristicDraft r = rows().get(row);
+        String now = text == null ? "" : text;
+        String before = r.cell(field).get();
+        if (!now.equals(before)) {
+            undo.push(new Edit(List.of(new Change(r, field, before)), List.of()));
+            r.cell(field).set(now);
+        }
+    }
+
+    /**
+     * Pastes a tab-separated block (rows on lines, as a spreadsheet copies them) with its top-left cell at
+     * ({@code row}, {@code column}), adding rows at the end as needed; columns past the last are left out.
+     * Each cell is then checked as if typed. One undoable edit.
+     *
+     * @return the number of cells pasted
+     */
+    public int paste(int row, int column, String block) {
+        if (block == null || block.isEmpty() || row < 0 || column < 0) {
+            return 0;
+        }
+        String[] lines = block.replace("\r\n", "\n").replace('\r', '\n').split("\n", -1);
+        int count = lines.length;
+        while (count > 0 && lines[count - 1].isEmpty()) {
+            count--; // the line break a spreadsheet puts after its last row
+        }
+        CharacteristicField[] fields = CharacteristicField.values();
+        List<Change> changes = new ArrayList<>();
+        List<CharacteristicDraft> added = new ArrayList<>();
+        int pasted = 0;
+        for (int i = 0; i < count; i++) {
+            int at = Math.min(row, rows().size()) + i;
+            if (at >= rows().size()) {
+                added.add(addRow());
+            }
+            CharacteristicDraft r = rows().get(at);
+            String[] cells = lines[i].split("\t", -1);
+            for (int j = 0; j < cells.length && column + j < fields.length; j++) {
+                CharacteristicField f = fields[column + j];
+                changes.add(new Change(r, f, r.cell(f).get()));
+                r.cell(f).set(cells[j].trim());
+                pasted++;
+            }
+        }
+        if (!changes.isEmpty() || !added.isEmpty()) {
+            undo.push(new Edit(List.copyOf(changes), List.copyOf(added)));
+        }
+        return pasted;
+    }
+
+    /** Undoes the latest grid edit (a cell, a clear, a paste); false when there is nothing to undo. */
+    public boolean undo() {
+        Edit e = undo.poll();
+        if (e == null) {
+            return false;
+        }
+        for (int i = e.changes().size() - 1; i >= 0; i--) {
+            Change c = e.changes().get(i);
+            c.row().cell(c.field()).set(c.before());
+        }
+        rows().removeAll(e.added());
+        selected.set(Math.min(selected.get(), rows().size() - 1));
+        return true;
     }
 
     /** The problem of the cell being typed into, checked on each keystroke before it is committed. */
@@ -189,6 +271,24 @@ public final class PartViewModel extends StepViewModel {
                 return same > 1 ? Optional.of(AppMessage.PART_ID_REPEATED.format(text)) : Optional.empty();
             case NAME:
                 return Optional.empty();
+            case GAUGE:
+                return row.text(CharacteristicField.RESOLUTION).isBlank() || !text.isEmpty() ? Optional.empty()
+                        : Optional.of(AppMessage.PART_GAUGE_UNNAMED.format());
+            case RESOLUTION:
+                if (text.isEmpty()) {
+                    String gauge = row.text(CharacteristicField.GAUGE).trim();
+                    return gauge.isEmpty() ? Optional.empty() : Optional.of(AppMessage.PART_RESOLUTION_MISSING.format(gauge));
+                }
+                OptionalDouble step = Numbers.parse(text);
+                return step.isPresent() && step.getAsDouble() > 0 ? Optional.empty()
+                        : Optional.of(AppMessage.PART_RESOLUTION_BAD.format(text));
+            case SHAPE:
+                try {
+                    PlanBridge.shapeOf(row);
+                    return Optional.empty();
+                } catch (IllegalArgumentException e) {
+                    return Optional.of(e.getMessage());
+                }
             case UNIT:
                 if (text.isEmpty()) {
                     return Optional.of(AppMessage.PART_UNIT_MISSING.format());
@@ -271,6 +371,9 @@ public final class PartViewModel extends StepViewModel {
             case USL -> "USL";
             case TARGET -> "Cpm target";
             case EXPECTED -> "Expected index";
+            case SHAPE -> "Shape";
+            case GAUGE -> "Gauge";
+            case RESOLUTION -> "Resolution";
         };
     }
 }

@@ -4,9 +4,11 @@ import java.nio.file.Path;
 import java.util.Objects;
 
 /**
- * Where the wizard keeps its own small files: the recent-plans list and the drafts of plans never saved.
- * Standard location {@code ~/.proofrun}; the system property {@code proofrun.home} moves it (tests point
- * it at a temporary folder). Plans themselves default to {@code plans/} in the working folder.
+ * The user's folder, the one place the wizard keeps its work: the recent-plans list, the drafts of plans
+ * never saved, and (in {@code plans/} inside it) the copy of the bundled demo plan and the plans saved
+ * where the user did not choose otherwise. Standard location {@code ~/.proofrun}; the system property
+ * {@code proofrun.home} moves it (tests point it at a temporary folder). The wizard never writes into the
+ * folder it was started from unless the user chooses a file there; the Start step shows this folder.
  *
  * @param dir         the folder for the wizard's own files
  * @param plansFolder the default folder for plan files
@@ -18,13 +20,14 @@ public record AppHome(Path dir, Path plansFolder) {
         Objects.requireNonNull(plansFolder, "plansFolder");
     }
 
-    /** {@code proofrun.home} or {@code ~/.proofrun}; plans in {@code ./plans}. */
+    /** {@code proofrun.home} or {@code ~/.proofrun}; plans in its {@code plans/}. */
     public static AppHome standard() {
         String override = System.getProperty("proofrun.home");
         Path dir = override != null && !override.isBlank()
                 ? Path.of(override)
                 : Path.of(System.getProperty("user.home"), ".proofrun");
-        return new AppHome(dir, Path.of("plans").toAbsolutePath());
+        Path home = dir.toAbsolutePath().normalize();
+        return new AppHome(home, home.resolve("plans"));
     }
 
     public Path recentFile() {

@@ -74,6 +74,9 @@ public final class PlanBridge {
             r.put("usl", ch.limits().upper().isPresent() ? num(ch.limits().upper().getAsDouble()) : "");
             r.put("target", "");
             r.put("expected", num(ch.expectation().index()));
+            r.put("shape", ch.shape().token());
+            r.put("gauge", ch.gauge().map(Gauge::name).orElse(""));
+            r.put("resolution", ch.gauge().map(g -> num(g.resolution())).orElse(""));
             rows.add(r);
         }
         return new DraftSnapshot(DraftSnapshot.FORMAT, file == null ? "" : file.toString(), f, rows);
@@ -93,19 +96,45 @@ public final class PlanBridge {
         List<Characteristic> chars = new ArrayList<>();
         for (CharacteristicDraft row : d.characteristics()) {
             Optional<Characteristic> was = base.flatMap(b -> b.characteristic(row.id()));
-            Optional<Gauge> gauge = was.flatMap(Characteristic::gauge);
+            Optional<Gauge> gauge = gaugeOf(row, was.flatMap(Characteristic::gauge));
             Expectation e = expectation.apply(row);
             OptionalDouble nominal = row.number(CharacteristicField.NOMINAL);
             chars.add(new Characteristic(row.id(), row.text(CharacteristicField.NAME).trim(),
                     row.text(CharacteristicField.UNIT).trim(), nominal, row.limits().orElseThrow(), gauge, requirement, e,
-                    // the wizard does not edit the planned shape yet: keep the one the plan was opened with
-                    was.map(Characteristic::shape).orElse(dev.proofrun.stats.ShapeFamily.NORMAL)));
+                    shapeOf(row)));
         }
         Part part = new Part(d.text(DraftField.PART_NAME), d.text(DraftField.PART_NUMBER), d.text(DraftField.PART_REVISION));
         People people = new People(d.text(DraftField.PREPARED_BY), d.text(DraftField.COLLECTOR));
         // The schedule the Timing step already had the core compute for these inputs (not computed again).
         return new StudyPlan(d.text(DraftField.PLAN_ID), part, people, chars, calendar, span, design, spacing, seed,
                 schedule, dev.proofrun.plan.PlanState.DRAFT, Optional.empty(), Optional.empty());
+    }
+
+    /**
+     * The gauge typed in the row (name and resolution; both blank is no gauge), with the repeatability of
+     * the gauge the plan had, which the wizard does not edit.
+     *
+     * @throws IllegalArgumentException when only one of name and resolution is given or the resolution is
+     *                                  not a positive number
+     */
+    public static Optional<Gauge> gaugeOf(CharacteristicDraft row, Optional<Gauge> was) {
+        String name = row.text(CharacteristicField.GAUGE).trim();
+        String step = row.text(CharacteristicField.RESOLUTION).trim();
+        if (name.isEmpty() && step.isEmpty()) {
+            return Optional.empty();
+        }
+        OptionalDouble resolution = Numbers.parse(step);
+        if (resolution.isEmpty() && !step.isEmpty()) {
+            throw new IllegalArgumentException(String.format(Locale.ROOT, "gauge resolution must be positive: %s", step));
+        }
+        OptionalDouble sd = was.map(Gauge::sd).orElse(OptionalDouble.empty());
+        return Optional.of(new Gauge(name, resolution.orElse(Double.NaN), sd));
+    }
+
+    /** The planned shape typed in the row; blank is normal. */
+    public static dev.proofrun.stats.ShapeFamily shapeOf(CharacteristicDraft row) {
+        String t = row.text(CharacteristicField.SHAPE).trim();
+        return t.isEmpty() ? dev.proofrun.stats.ShapeFamily.NORMAL : dev.proofrun.stats.ShapeFamily.fromToken(t);
     }
 
     /** The expected centring of the plan the draft came from, kept when it still fits the index typed. */

@@ -9,6 +9,8 @@ import java.util.List;
 import java.util.Objects;
 import java.util.Optional;
 import javafx.beans.property.ObjectProperty;
+import javafx.beans.property.ReadOnlyIntegerProperty;
+import javafx.beans.property.ReadOnlyIntegerWrapper;
 import javafx.beans.property.SimpleObjectProperty;
 
 /**
@@ -22,12 +24,24 @@ public final class Session {
     private final RecentPlans recent;
     private final DraftStore drafts;
     private final ObjectProperty<StudyPlan> base = new SimpleObjectProperty<>(this, "base");
-    private int opened;
+    private final ReadOnlyIntegerWrapper opened = new ReadOnlyIntegerWrapper(this, "opened", 0);
 
     public Session(AppHome home) {
         this.home = Objects.requireNonNull(home, "home");
         this.recent = new RecentPlans(home);
         this.drafts = new DraftStore(home);
+    }
+
+    private PlanFileChooser chooser = PlanFileChooser.SUGGESTED;
+
+    /** How the user is asked where a plan file goes (the window installs a file dialog). */
+    public void setPlanFileChooser(PlanFileChooser chooser) {
+        this.chooser = Objects.requireNonNull(chooser, "chooser");
+    }
+
+    /** Asks where a plan file goes, offering {@code suggested}; empty when the user chose nothing. */
+    public Optional<Path> choosePlanFile(Path suggested) {
+        return chooser.choose(suggested);
     }
 
     public AppHome home() {
@@ -102,7 +116,7 @@ public final class Session {
 
     /** On the FX thread: the plan that {@link #load} read becomes the base and its content the draft. */
     public void apply(Opening o) {
-        opened++;
+        opened.set(opened.get() + 1);
         base.set(o.plan());
         draft.restore(o.snapshot(), o.restored());
         if (o.restored()) {
@@ -110,7 +124,10 @@ public final class Session {
         }
     }
 
-    /** The bundled demo plan in the plans folder, written there first if it is not there yet. */
+    /**
+     * The bundled demo plan as a copy in the user's plans folder, written there first if it is not there
+     * yet (never the demo file of a checkout or an installation).
+     */
     public Path demoFile() {
         Path f = home.plansFolder().resolve(DemoPlan.FILE_NAME);
         if (!Files.exists(f)) {
@@ -121,7 +138,7 @@ public final class Session {
 
     /** Starts a new plan (a fresh draft, or the draft of a new plan left unsaved last time). */
     public boolean startNew() {
-        opened++;
+        opened.set(opened.get() + 1);
         base.set(null);
         Optional<DraftSnapshot> left = drafts.newerDraft(null);
         if (left.isPresent()) {
@@ -138,7 +155,15 @@ public final class Session {
      * under another belongs to a draft that is no longer on screen.
      */
     public int openedCount() {
-        return opened;
+        return opened.get();
+    }
+
+    /**
+     * {@link #openedCount()} as a property: it changes whenever another plan (or a new one) is put on the
+     * desk, the moment every step drops what it showed about the plan before (messages, a verdict).
+     */
+    public ReadOnlyIntegerProperty openedProperty() {
+        return opened.getReadOnlyProperty();
     }
 
     /**

@@ -54,6 +54,7 @@ public final class ShellViewModel {
             return m.isEmpty() ? "" : AppMessage.MISSING_PREFIX.format(m);
         }, all);
         current.addListener((obs, was, now) -> currentStep().entered());
+        session.openedProperty().addListener((obs, was, now) -> status.set(""));
     }
 
     /** How the shell saves the plan file (set once the plan core is wired); returns true when saved. */

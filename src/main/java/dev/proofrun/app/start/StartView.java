@@ -1,5 +1,7 @@
 package dev.proofrun.app.start;
 
+import dev.proofrun.app.AppMessage;
+
 import dev.proofrun.app.shell.StepView;
 import java.nio.file.Path;
 import javafx.geometry.Pos;
@@ -24,7 +26,7 @@ public final class StartView implements StepView {
         recent.setId("recent");
         recent.setItems(vm.recent());
         recent.setPrefHeight(dev.proofrun.app.shell.Em.of(16.5));
-        recent.setPlaceholder(new Label("No plans opened yet. Plans are kept in " + vm.plansFolder()));
+        recent.setPlaceholder(new Label("No plans opened yet."));
         recent.setCellFactory(l -> new ListCell<>() {
             @Override
             protected void updateItem(Path p, boolean empty) {
@@ -75,7 +77,11 @@ public final class StartView implements StepView {
         message.setId("start-message");
         message.getStyleClass().add("pr-note");
         message.textProperty().bind(vm.messageProperty());
-        root.getChildren().addAll(title, recent, actions, message);
+        Label folder = new Label(AppMessage.WORK_FOLDER.format(vm.plansFolder().getParent()));
+        folder.setId("work-folder");
+        folder.setWrapText(true);
+        folder.getStyleClass().add("pr-note");
+        root.getChildren().addAll(title, recent, actions, message, folder);
     }
 
     @Override

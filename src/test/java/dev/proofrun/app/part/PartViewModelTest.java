@@ -110,7 +110,7 @@ class PartViewModelTest {
         Files.writeString(csv, "id,name,unit,tolerance\nA1,x,mm,3\n");
         assertFalse(vm.importList(csv));
         assertEquals("bad.csv, row 1, column tolerance: unknown column 'tolerance' "
-                + "(expected id,name,unit,nominal,lsl,usl,target,expected)", vm.importMessageProperty().get());
+                + "(expected id,name,unit,nominal,lsl,usl,target,expected,shape,gauge,resolution)", vm.importMessageProperty().get());
         assertEquals(1, vm.rows().size());
     }
 
@@ -126,5 +126,41 @@ class PartViewModelTest {
         assertEquals("row 1 (?): give it an id", vm.typingProblemProperty().get());
         vm.typingDone();
         assertEquals("", vm.typingProblemProperty().get());
+    }
+
+    @Test
+    void aPastedBlockAddsRowsLeavesOutExtraColumnsAndUndoesAsOne() {
+        goodRow();
+        // at (row 1, the last column but one): two columns fit (gauge, resolution), the third is left out;
+        // two rows added
+        CharacteristicField[] all = CharacteristicField.values();
+        CharacteristicField second = all[all.length - 2];
+        CharacteristicField last = all[all.length - 1];
+        int pasted = vm.paste(0, second.ordinal(), "A\tB\textra\r\n\tD\nE\t\n");
+        assertEquals(6, pasted);
+        assertEquals(3, draft.characteristics().size());
+        assertEquals("A", draft.characteristics().get(0).text(second));
+        assertEquals("B", draft.characteristics().get(0).text(last));
+        assertEquals("D", draft.characteristics().get(1).text(last));
+        assertEquals("E", draft.characteristics().get(2).text(second));
+        assertEquals("1.8", draft.characteristics().get(0).text(CharacteristicField.EXPECTED), "untouched");
+        assertTrue(vm.undo());
+        assertEquals(1, draft.characteristics().size(), "the added rows go with the undo");
+        assertEquals("", draft.characteristics().get(0).text(second));
+        assertEquals("", draft.characteristics().get(0).text(last));
+        assertFalse(vm.undo(), "nothing more to undo");
+    }
+
+    @Test
+    void aCellSetTwiceUndoesStepByStep() {
+        goodRow();
+        vm.setCell(0, CharacteristicField.NAME, "Bore A");
+        vm.setCell(0, CharacteristicField.NAME, "Bore B");
+        vm.setCell(0, CharacteristicField.NAME, "Bore B"); // no change, no undo step
+        assertTrue(vm.undo());
+        assertEquals("Bore A", draft.characteristics().get(0).text(CharacteristicField.NAME));
+        assertTrue(vm.undo());
+        assertEquals("Bore", draft.characteristics().get(0).text(CharacteristicField.NAME));
+        assertFalse(vm.undo());
     }
 }

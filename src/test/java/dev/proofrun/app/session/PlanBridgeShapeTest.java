@@ -11,7 +11,10 @@ import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
-/** The wizard does not edit a characteristic's planned shape yet; opening a plan and composing it again keeps it. */
+/**
+ * A characteristic's planned shape and gauge are columns of the Part table: opening a plan and composing it
+ * again keeps them, an edit changes them.
+ */
 class PlanBridgeShapeTest {
 
     @TempDir
@@ -30,5 +33,58 @@ class PlanBridgeShapeTest {
                 demo.design(), demo.spacing(), demo.seed(), demo.schedule());
         assertEquals(ShapeFamily.LOGNORMAL, again.characteristic("R4").orElseThrow().shape());
         assertEquals(ShapeFamily.NORMAL, again.characteristic("D1").orElseThrow().shape());
+    }
+
+    @Test
+    void theShapeColumnSetsThePlannedShapeAndABadNameIsMarked() throws Exception {
+        StudyPlan demo = DemoPlan.create();
+        Path plans = Files.createDirectories(home.resolve("plans"));
+        Path file = plans.resolve(DemoPlan.FILE_NAME);
+        PlanFiles.write(file, demo);
+        Session session = new Session(new AppHome(home, plans));
+        session.open(file);
+        CharacteristicDraft d1 = session.draft().characteristics().get(0);
+        assertEquals("normal", d1.text(CharacteristicField.SHAPE));
+        d1.cell(CharacteristicField.SHAPE).set(" Weibull ");
+        StudyPlan again = PlanBridge.compose(session.draft(), session.base(), demo.characteristics().get(0).requirement(),
+                row -> demo.characteristic(row.id()).orElseThrow().expectation(), demo.calendar(), demo.span(),
+                demo.design(), demo.spacing(), demo.seed(), demo.schedule());
+        assertEquals(ShapeFamily.WEIBULL, again.characteristic("D1").orElseThrow().shape());
+        d1.cell(CharacteristicField.SHAPE).set("");
+        assertEquals(ShapeFamily.NORMAL, PlanBridge.shapeOf(d1), "blank is normal");
+        d1.cell(CharacteristicField.SHAPE).set("gamma");
+        dev.proofrun.app.part.PartViewModel vm = new dev.proofrun.app.part.PartViewModel(session.draft());
+        assertEquals(java.util.Optional.of("unknown shape 'gamma'; the shapes are " + ShapeFamily.names()),
+                vm.problem(d1, CharacteristicField.SHAPE));
+    }
+
+    @Test
+    void theGaugeColumnsSetTheGaugeAndKeepItsRepeatability() throws Exception {
+        StudyPlan demo = DemoPlan.create();
+        Path plans = Files.createDirectories(home.resolve("plans"));
+        Path file = plans.resolve(DemoPlan.FILE_NAME);
+        PlanFiles.write(file, demo);
+        Session session = new Session(new AppHome(home, plans));
+        session.open(file);
+        CharacteristicDraft d1 = session.draft().characteristics().get(0);
+        dev.proofrun.plan.Gauge was = demo.characteristic("D1").orElseThrow().gauge().orElseThrow();
+        assertEquals(was.name(), d1.text(CharacteristicField.GAUGE));
+        assertEquals(was.resolution(), Double.parseDouble(d1.text(CharacteristicField.RESOLUTION)), 0.0, "exact");
+
+        d1.cell(CharacteristicField.RESOLUTION).set("0.0005");
+        dev.proofrun.plan.Gauge now = PlanBridge.gaugeOf(d1, java.util.Optional.of(was)).orElseThrow();
+        assertEquals(0.0005, now.resolution(), 0.0);
+        assertEquals(was.sd(), now.sd(), "the repeatability the wizard does not edit is kept");
+
+        dev.proofrun.app.part.PartViewModel vm = new dev.proofrun.app.part.PartViewModel(session.draft());
+        d1.cell(CharacteristicField.RESOLUTION).set("");
+        assertEquals(java.util.Optional.of("give the smallest step gauge '" + was.name() + "' reads"),
+                vm.problem(d1, CharacteristicField.RESOLUTION));
+        d1.cell(CharacteristicField.RESOLUTION).set("-0.01");
+        assertEquals(java.util.Optional.of("the resolution must be a positive number, not '-0.01'"),
+                vm.problem(d1, CharacteristicField.RESOLUTION));
+        d1.cell(CharacteristicField.GAUGE).set("");
+        d1.cell(CharacteristicField.RESOLUTION).set("");
+        assertEquals(java.util.Optional.empty(), PlanBridge.gaugeOf(d1, java.util.Optional.of(was)), "both blank: no gauge");
     }
 }
