@@ -188,8 +188,7 @@ public final class PlanNewCommand implements Callable<Integer> {
         w.println(design.reason());
         for (Characteristic c : chars) {
             if (!c.shape().isNormal()) {
-                w.println("warning: " + (c.shape().isLocationScale() ? SizeMessage.SHAPE_SIZED_AS_NORMAL.format(c.id(), c.shape().token(), c.shape().token())
-                        : SizeMessage.SHAPE_NOT_SIZED_AS_NORMAL.format(c.id(), c.shape().token(), ShapeSize.plannable())));
+                w.println("warning: " + SizeMessage.SHAPE_SIZED_AS_NORMAL.format(c.id(), c.shape().token(), c.shape().token()));
             }
         }
         w.println(PlanOptionMessage.WROTE.format(out, plan.summary()));

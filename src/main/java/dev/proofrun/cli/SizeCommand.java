@@ -153,9 +153,6 @@ public final class SizeCommand implements Callable<Integer> {
             throw new UserException(SizeMessage.TARGET_NEEDED);
         }
         ShapeFamily family = shape == null ? ShapeFamily.NORMAL : Conventions.shape(shape);
-        if (!family.isLocationScale()) {
-            throw new UserException(SizeMessage.SHAPE_NOT_SIZED, family.token(), ShapeSize.plannable());
-        }
         if (!family.isNormal()) {
             List<Integer> sizes = subgroupSizes == null || subgroupSizes.isEmpty()
                     ? IntStream.rangeClosed(1, 10).boxed().toList() : subgroupSizes;

@@ -3,7 +3,6 @@ package dev.proofrun.grade;
 import dev.proofrun.design.Requirement;
 import dev.proofrun.stats.IndexKind;
 import dev.proofrun.stats.PercentileIndex;
-import dev.proofrun.stats.FoldedNormalBootstrap;
 import dev.proofrun.stats.PivotalBound;
 import dev.proofrun.stats.ShapeFamily;
 import dev.proofrun.stats.ShapeFit;
@@ -15,8 +14,7 @@ import java.util.OptionalInt;
 /**
  * The capability step under a declared lognormal or Weibull shape: the percentile index of ISO 22514-2
  * ({@link PercentileIndex}) from the fitted model, its bounds by generalized pivotal quantities
- * ({@link PivotalBound}; for the folded normal, which is not location–scale, a parametric bootstrap with
- * refits, {@link FoldedNormalBootstrap}; seeded, the seed in the result), and the expected ppm under the model.
+ * ({@link PivotalBound}, seeded, the seed in the result), and the expected ppm under the model.
  *
  * <p><b>Within versus overall.</b> The fit uses all readings, so the index is an overall (Pp-family) index.
  * A Cp-family requirement (Cpk, Cpu, …) under such a shape is judged on this overall index and the result says
@@ -56,19 +54,16 @@ final class PercentileJudge {
             return null;
         }
         long seed = PivotalBound.DEFAULT_SEED;
-        boolean pivotal = family.isLocationScale();
-        double[] b = pivotal ? PivotalBound.bounds(fit, kind, limits, readings, req.confidence(), seed)
-                : FoldedNormalBootstrap.bounds(fit, kind, limits, readings, req.confidence(), seed);
+        double[] b = PivotalBound.bounds(fit, kind, limits, readings, req.confidence(), seed);
         double f = shape.tailFactor();
         double ppm = PercentileIndex.expectedPpm(limits, fit);
         if (kind.usesWithinSigma()) {
             reasons.add(new Reason(Step.CAPABILITY, false, GradeMessage.REASON_OVERALL_ONLY.format(family.token(),
                     kind.symbol(), overall(kind).symbol())));
         }
-        GradeMessage method = pivotal ? GradeMessage.REASON_PERCENTILE_METHOD : GradeMessage.REASON_PERCENTILE_BOOTSTRAP;
-        reasons.add(new Reason(Step.CAPABILITY, false, method.format(kind.symbol(), family.token(),
-                fit.quantile(PercentileIndex.LOW), fit.quantile(0.5), fit.quantile(PercentileIndex.HIGH), ppm,
-                pivotal ? PivotalBound.DRAWS : FoldedNormalBootstrap.BOUND_DRAWS, seed)));
+        reasons.add(new Reason(Step.CAPABILITY, false, GradeMessage.REASON_PERCENTILE_METHOD.format(kind.symbol(),
+                family.token(), fit.quantile(PercentileIndex.LOW), fit.quantile(0.5), fit.quantile(PercentileIndex.HIGH),
+                ppm, PivotalBound.DRAWS, seed)));
         double upper = estimate < req.minimum() ? b[1] * f : Double.NaN;
         return new IndexEvidence(kind, req.minimum(), req.confidence(), estimate * f, b[0] * f, upper,
                 ShapeModel.of(family), IndexMethod.PERCENTILE, ppm, seed);

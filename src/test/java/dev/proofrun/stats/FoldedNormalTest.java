@@ -1,7 +1,7 @@
 package dev.proofrun.stats;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -61,15 +61,14 @@ class FoldedNormalTest {
         assertEquals(0.2651641207645085, f[0], 1e-7);
         assertEquals(0.18392386743986866, f[1], 1e-7);
         assertEquals(1.4416824833482087, f[0] / f[1], 1e-4); // foldnorm.fit's own optimiser stops within 3e-5
-        ShapeFit fit = ShapeFitter.fit(ShapeFamily.FOLDED_NORMAL, X).fit();
-        double logL = Arrays.stream(X).map(fit::logDensity).sum();
+        double logL = Arrays.stream(X).map(v -> FoldedNormal.logDensity(f[0], f[1], v)).sum();
         assertEquals(9.108363012432847, logL, 1e-9);
         assertTrue(logL >= 9.108363005482165, "at least as high as foldnorm.fit's own maximum");
         // scipy.stats.foldnorm.ppf(p, c, 0, scale) at the polished fit, p = norm.cdf(-3), 0.5, norm.cdf(3):
         // 0.0008797133581713888, 0.26605707061826844, 0.8169358064780136
-        assertEquals(0.0008797133581713888, fit.quantile(PercentileIndex.LOW), 1e-8);
-        assertEquals(0.26605707061826844, fit.quantile(0.5), 1e-7);
-        assertEquals(0.8169358064780136, fit.quantile(PercentileIndex.HIGH), 1e-6);
+        assertEquals(0.0008797133581713888, FoldedNormal.quantile(f[0], f[1], PercentileIndex.LOW), 1e-8);
+        assertEquals(0.26605707061826844, FoldedNormal.quantile(f[0], f[1], 0.5), 1e-7);
+        assertEquals(0.8169358064780136, FoldedNormal.quantile(f[0], f[1], PercentileIndex.HIGH), 1e-6);
     }
 
     @Test
@@ -77,34 +76,26 @@ class FoldedNormalTest {
         // SciPy 1.17.1: scipy.stats.foldnorm.fit(Y, floc=0) -> c = 2.1012069902150423, scale = 0.8297848906026422
         // (log-likelihood -23.8480731610047); polished as above -> c = 2.101167455625106, scale = 0.8297966248342921,
         // μ = 1.74354166288937, log-likelihood -23.848073156995984
-        ShapeFit fit = ShapeFitter.fit(ShapeFamily.FOLDED_NORMAL, Y).fit();
-        assertEquals(1.74354166288937, fit.location(), 1e-6);
-        assertEquals(0.8297966248342921, fit.scale(), 1e-6);
-        assertEquals(-23.848073156995984, Arrays.stream(Y).map(fit::logDensity).sum(), 1e-9);
+        double[] f = FoldedNormal.fit(Y);
+        assertEquals(1.74354166288937, f[0], 1e-6);
+        assertEquals(0.8297966248342921, f[1], 1e-6);
+        assertEquals(-23.848073156995984, Arrays.stream(Y).map(v -> FoldedNormal.logDensity(f[0], f[1], v)).sum(), 1e-9);
         // ppf at the polished fit: 0.012763167355662818, 1.7435691330541954, 4.23293153744765
-        assertEquals(0.012763167355662818, fit.quantile(PercentileIndex.LOW), 1e-7);
-        assertEquals(1.7435691330541954, fit.quantile(0.5), 1e-6);
-        assertEquals(4.23293153744765, fit.quantile(PercentileIndex.HIGH), 1e-5);
+        assertEquals(0.012763167355662818, FoldedNormal.quantile(f[0], f[1], PercentileIndex.LOW), 1e-7);
+        assertEquals(1.7435691330541954, FoldedNormal.quantile(f[0], f[1], 0.5), 1e-6);
+        assertEquals(4.23293153744765, FoldedNormal.quantile(f[0], f[1], PercentileIndex.HIGH), 1e-5);
         // the score equation σ² + μ² = mean of x² holds at the maximum (Leone, Nelson & Nottingham 1961)
         double m2 = Arrays.stream(Y).map(v -> v * v).average().orElseThrow();
-        assertEquals(m2, fit.location() * fit.location() + fit.scale() * fit.scale(), 1e-12 * m2);
+        assertEquals(m2, f[0] * f[0] + f[1] * f[1], 1e-12 * m2);
     }
 
     @Test
-    void zerosAllowedNegativesAndNoSpreadRefused() {
+    void zerosAllowedAndDegenerateReadingsAreNoFit() {
         double[] withZero = X.clone();
         withZero[3] = 0;
-        assertTrue(ShapeFitter.fit(ShapeFamily.FOLDED_NORMAL, withZero).fitted());
-        double[] negative = X.clone();
-        negative[5] = -0.01;
-        ShapeFitter.Outcome o = ShapeFitter.fit(ShapeFamily.FOLDED_NORMAL, negative);
-        assertFalse(o.fitted());
-        assertEquals(ShapeFitter.Failure.AT_OR_BELOW_BOUND, o.failure());
-        assertEquals(5, o.index());
-        assertEquals(ShapeFitter.Failure.NO_SPREAD, ShapeFitter.fit(ShapeFamily.FOLDED_NORMAL, new double[] {2, 2, 2}).failure());
+        assertNotNull(FoldedNormal.fit(withZero));
         assertNull(FoldedNormal.fit(new double[] {0, 0, 0}));
-        // readings far from zero with little spread: mean/σ beyond the search, not a fit
-        double[] far = {100.01, 99.99, 100.02, 99.98, 100.0, 100.01};
-        assertEquals(ShapeFitter.Failure.AT_SEARCH_LIMIT, ShapeFitter.fit(ShapeFamily.FOLDED_NORMAL, far).failure());
+        // readings far from zero with little spread: mean/sigma beyond the search, not a fit
+        assertNull(FoldedNormal.fit(new double[] {100.01, 99.99, 100.02, 99.98, 100.0, 100.01}));
     }
 }
