@@ -1,0 +1,62 @@
+package dev.proofrun.design;
+
+import java.util.Arrays;
+import java.util.Optional;
+import java.util.stream.Collectors;
+
+import org.apache.commons.statistics.distribution.NormalDistribution;
+
+/**
+ * How a staged study spends its false-pass risk α across its planned looks: the cumulative α allowed by the
+ * information fraction t (readings so far over the most the plan collects). Both are the Lan–DeMets spending
+ * functions (Lan &amp; DeMets 1983, Biometrika 70:659–663), one-sided:
+ * <ul>
+ * <li>{@link #OBRIEN_FLEMING}: α(t) = 2 − 2Φ(z<sub>1−α/2</sub>/√t), which spends almost nothing early;</li>
+ * <li>{@link #POCOCK}: α(t) = α·ln(1 + (e − 1)t), which spends evenly.</li>
+ * </ul>
+ * Both give α(1) = α.
+ */
+public enum Spending {
+    OBRIEN_FLEMING("obrien-fleming"),
+    POCOCK("pocock");
+
+    private static final NormalDistribution STANDARD = NormalDistribution.of(0, 1);
+
+    private final String token;
+
+    Spending(String token) {
+        this.token = token;
+    }
+
+    /** The name in plan files and on the command line. */
+    public String token() {
+        return token;
+    }
+
+    /** The spending function named by {@code token}, if any. */
+    public static Optional<Spending> fromToken(String token) {
+        return Arrays.stream(values()).filter(s -> s.token.equals(token)).findFirst();
+    }
+
+    /** Every token, comma-separated, for messages. */
+    public static String tokens() {
+        return Arrays.stream(values()).map(Spending::token).collect(Collectors.joining(", "));
+    }
+
+    /**
+     * The cumulative α spent by information fraction {@code t}.
+     *
+     * @param alpha the whole study's one-sided false-pass risk, in (0, 1)
+     * @param t     the information fraction, in (0, 1]
+     */
+    public double spent(double alpha, double t) {
+        if (!(alpha > 0 && alpha < 1) || !(t > 0 && t <= 1)) {
+            throw new IllegalArgumentException("alpha " + alpha + ", t " + t);
+        }
+        return switch (this) {
+            case OBRIEN_FLEMING -> 2 - 2 * STANDARD.cumulativeProbability(
+                    STANDARD.inverseCumulativeProbability(1 - alpha / 2) / Math.sqrt(t));
+            case POCOCK -> alpha * Math.log(1 + (Math.E - 1) * t);
+        };
+    }
+}
