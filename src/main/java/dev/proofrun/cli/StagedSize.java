@@ -74,8 +74,7 @@ final class StagedSize {
         out.printf(Locale.ROOT, "  (from %d simulated studies per size: standard error about %.3f on a chance near the"
                 + " power)%n", d.paths(), Math.sqrt(d.power() * (1 - d.power()) / Math.max(1, d.paths())));
         out.println("  " + reason(d));
-        out.println("  A look's 'stop if' is a futility stop: not demonstrated. Grading more than planned at a look"
-                + " keeps the risk only at the planned looks.");
+        out.println("  " + StagedMessage.STAGED_HOW_TO_READ.english());
     }
 
     static Map<String, Object> json(StagedDesign d) {

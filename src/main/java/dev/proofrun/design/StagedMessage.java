@@ -15,7 +15,11 @@ public enum StagedMessage implements MessageKey {
             + " for %.0f %% more at most."),
     STAGED_NOT_RECOMMENDED("Single stage: %d looks would save %.0f %% of the readings on average when the process is as"
             + " expected for %.0f %% more at most; proofrun stages a study when it saves at least %.0f %% for at most"
-            + " %.0f %% more.");
+            + " %.0f %% more."),
+    STAGED_HOW_TO_READ("At a look the study is demonstrated when the estimate reaches 'demonstrated if' (at the expected"
+            + " centring; the grader's bound at the look's confidence decides) and stops, not demonstrated, below"
+            + " 'stop if'; otherwise it goes on to the next look. The risk holds only when grading happens at the"
+            + " planned looks.");
 
     private final String english;
 
