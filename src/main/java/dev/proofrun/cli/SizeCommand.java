@@ -14,6 +14,10 @@ import dev.proofrun.design.PowerPoint;
 import dev.proofrun.design.ProcedurePower;
 import dev.proofrun.design.ProcessFacts;
 import dev.proofrun.design.Requirement;
+import dev.proofrun.design.Spending;
+import dev.proofrun.design.StagedDesign;
+import dev.proofrun.design.StagedDesigner;
+import dev.proofrun.design.StagedMessage;
 import dev.proofrun.design.StudyDesigner;
 import dev.proofrun.plan.Characteristic;
 import dev.proofrun.stats.BoundMethod;
@@ -130,6 +134,15 @@ public final class SizeCommand implements Callable<Integer> {
     @Option(names = "--skewness", paramLabel = "G", description = "The expected skewness of the readings (with --shape).")
     Double skewness;
 
+    @Option(names = "--stages", defaultValue = "1", paramLabel = "S",
+            description = "Planned looks, 1 to 4 (default ${DEFAULT-VALUE}): with 2 or more, the staged design of the"
+                    + " recommended subgroup size, which may stop early at a look (simulated; takes some seconds).")
+    int stages;
+
+    @Option(names = "--spending", defaultValue = "obrien-fleming", paramLabel = "obrien-fleming|pocock",
+            description = "How a staged study spends its false-pass risk across the looks (default ${DEFAULT-VALUE}).")
+    String spending;
+
     @Option(names = "--json", description = "Print one JSON object.")
     boolean json;
 
@@ -137,6 +150,14 @@ public final class SizeCommand implements Callable<Integer> {
     public Integer call() throws Exception {
         PrintWriter out = spec.commandLine().getOut();
         Conventions.confidence(confidence);
+        int looks = StagedSize.stages(stages);
+        Spending spendingFunction = StagedSize.spending(spending);
+        if (looks > 1 && characteristics != null) {
+            throw new UserException(StagedMessage.STAGES_NEED_ONE_CHARACTERISTIC);
+        }
+        if (looks > 1 && shape != null && !Conventions.shape(shape).isNormal()) {
+            throw new UserException(StagedMessage.STAGES_NEED_NORMAL, shape);
+        }
         if (characteristics != null) {
             SharedSize shared = SharedSize.design(characteristics, this::sharedRequest, Conventions.index(index),
                     confidence, refusedBesideFile());
@@ -181,12 +202,21 @@ public final class SizeCommand implements Callable<Integer> {
             throw new UserException(OptionMessage.BAD_VALUE, "--skewness", "only with --shape lognormal or weibull");
         }
         DesignRequest request = request();
+        if (looks > 1 && request.lossRate() > 0) {
+            throw new UserException(StagedMessage.STAGES_WITHOUT_LOSSES);
+        }
         DesignTable table = StudyDesigner.design(request);
+        StagedDesign staged = looks > 1
+                ? StagedDesigner.design(request, table.recommended().subgroupSize(), looks, spendingFunction) : null;
         if (json) {
             ObjectMapper mapper = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
-            out.println(mapper.writeValueAsString(SizeJson.of(table)));
+            java.util.Map<String, Object> root = SizeJson.of(table);
+            if (staged != null) {
+                root.put("staged", StagedSize.json(staged));
+            }
+            out.println(mapper.writeValueAsString(root));
         } else {
-            print(out, table, request);
+            print(out, table, request, staged);
         }
         out.flush();
         return 0;
@@ -280,7 +310,7 @@ public final class SizeCommand implements Callable<Integer> {
         }
     }
 
-    private void print(PrintWriter out, DesignTable t, DesignRequest request) {
+    private void print(PrintWriter out, DesignTable t, DesignRequest request, StagedDesign staged) {
         out.println("   n     k      N   power   bound    c*      df  limited by     called unstable   some rule fires");
         out.println("                          alone                                  stable   shift    stable   shift");
         for (DesignRow r : t.rows()) {
@@ -315,6 +345,10 @@ public final class SizeCommand implements Callable<Integer> {
         for (int i = 0; i < curve.size(); i += stride) {
             out.printf(Locale.ROOT, "  k = %4d  N = %5d  %6.3f%n", curve.get(i).subgroups(), curve.get(i).readings(),
                     curve.get(i).power());
+        }
+        if (staged != null) {
+            out.println();
+            StagedSize.print(out, staged, symbol);
         }
         for (String w : t.warnings()) {
             out.println("warning: " + w);

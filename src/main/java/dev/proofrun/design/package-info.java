@@ -24,6 +24,10 @@
  * {@code stats.CapabilityBounds}, ±0.015; the whole grid with {@code -Dlong}: every row within ±0.007),
  * {@code DesignReferenceTest} (SciPy 1.17.1) and {@code DesignPropertiesTest}.</li>
  * </ul>
+ * <b>Staged studies</b>: {@code StagedDesigner.design(request, n, looks, spending)} → {@code StagedDesign} (the
+ * {@code Stages} contract the plan and the grader share, each look's boundaries and stop chances, expected readings
+ * at c0 and c1, the single stage beside it); per-look confidences from simulated joint looks ({@code StagedPaths},
+ * {@code LookPValue}), see {@code docs/decisions/staged-studies-design.md}.
  * This package must not import {@code grade} (grade imports design).
  */
 package dev.proofrun.design;

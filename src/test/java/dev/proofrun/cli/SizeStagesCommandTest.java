@@ -1,0 +1,84 @@
+package dev.proofrun.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.util.ArrayList;
+import java.util.List;
+import org.junit.jupiter.api.Test;
+
+/** {@code size --stages S --spending F}: one stage is today's output, staged JSON's shape, bad input in one line. */
+class SizeStagesCommandTest {
+
+    private record Run(int code, String out, String err) {
+    }
+
+    private static Run run(String... args) {
+        StringWriter out = new StringWriter();
+        StringWriter err = new StringWriter();
+        int code = ProofrunCommand.run(new PrintWriter(out), new PrintWriter(err), args);
+        return new Run(code, out.toString(), err.toString());
+    }
+
+    @Test
+    void oneStageIsTodaysOutputByteForByte() {
+        String[] base = {"size", "--target", "1.33", "--expected", "1.67", "--subgroup-size", "5"};
+        Run plain = run(base);
+        List<String> args = new ArrayList<>(List.of(base));
+        args.addAll(List.of("--stages", "1", "--spending", "pocock"));
+        Run one = run(args.toArray(String[]::new));
+        assertEquals(0, plain.code(), plain.err());
+        assertEquals(plain.out(), one.out());
+    }
+
+    @Test
+    void stagedJsonCarriesTheLooksAndTheirFigures() throws Exception {
+        Run r = run("size", "--target", "1.33", "--expected", "1.67", "--expected-cp", "1.8", "--subgroup-size", "5",
+                "--stages", "2", "--json");
+        assertEquals(0, r.code(), r.err());
+        JsonNode staged = new ObjectMapper().readTree(r.out()).get("staged");
+        assertEquals(List.of("spending", "subgroupSize", "stages", "power", "boundPower", "passAtTarget",
+                "expectedReadings", "maxReadings", "singleStageReadings", "saving", "extra", "recommended", "reason",
+                "simulatedStudies"), iterate(staged.fieldNames()));
+        assertEquals("obrien-fleming", staged.get("spending").asText());
+        JsonNode first = staged.get("stages").get(0);
+        assertEquals(List.of("subgroups", "readings", "confidence", "efficacy", "futility", "stopAtTarget",
+                "stopAtExpected"), iterate(first.fieldNames()));
+        assertTrue(staged.get("stages").get(1).get("futility").isNull());
+        assertEquals(5 * staged.get("stages").get(1).get("subgroups").asInt(), staged.get("maxReadings").asInt());
+        assertTrue(staged.get("expectedReadings").get("atExpected").asDouble() < staged.get("maxReadings").asDouble());
+        assertTrue(staged.get("power").asDouble() >= 0.9);
+    }
+
+    @Test
+    void badStagesAreOneLineAndExitTwo() {
+        String[][] cases = {
+            {"size", "--target", "1.33", "--expected", "1.67", "--stages", "5"},
+            {"size", "--target", "1.33", "--expected", "1.67", "--stages", "0"},
+            {"size", "--target", "1.33", "--expected", "1.67", "--stages", "2", "--spending", "haybittle"},
+            {"size", "--target", "1.33", "--expected", "2.5", "--stages", "4", "--subgroup-size", "10",
+                "--min-subgroups", "10", "--min-readings", "10"},
+            {"size", "--target", "1.33", "--expected", "1.67", "--stages", "2", "--loss-rate", "0.05"},
+            {"size", "--target", "1.33", "--expected", "1.67", "--stages", "2", "--shape", "lognormal",
+                "--skewness", "1", "--spec", "upper"},
+        };
+        for (String[] c : cases) {
+            Run r = run(c);
+            assertEquals(2, r.code(), String.join(" ", c) + "\n" + r.out() + r.err());
+            assertEquals("", r.out(), String.join(" ", c));
+            assertEquals(1, r.err().strip().lines().count(), r.err());
+            assertFalse(r.err().contains("Exception"), r.err());
+        }
+    }
+
+    private static List<String> iterate(java.util.Iterator<String> it) {
+        List<String> out = new ArrayList<>();
+        it.forEachRemaining(out::add);
+        return out;
+    }
+}
