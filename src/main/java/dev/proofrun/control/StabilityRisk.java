@@ -31,7 +31,9 @@ import org.apache.commons.rng.simple.RandomSource;
  * interpolated between its points (it is small and moves by its own simulation error between neighbours), so that
  * the search for k does not simulate; elsewhere it is simulated when asked. Detection is always simulated at the
  * row's own k: the decision's count thresholds step with k, and detection jumps by up to 0.05 between neighbouring
- * k (0.89 at 164 individuals, 0.84 at 165), which no interpolation follows.
+ * k (0.89 at 164 individuals, 0.84 at 165), which no interpolation follows. For the default charts, within
+ * requirements and δ = 1.5 it is stored at every k up to 500 readings ({@link DetectionTable}: the same simulation
+ * run once, so the same figure), so that a design table of typical studies simulates nothing.
  * For an overall requirement with n ≥ 2 (the means on their own chart, two chance
  * references) the stable studies are simulated too.
  */
@@ -84,8 +86,13 @@ public final class StabilityRisk {
         Key key = new Key(kind, n, k, shift, overallIndex);
         Double known = DETECTION.get(key);
         double detection;
+        // for individuals the overall rule is the within rule (the means are the readings)
+        java.util.OptionalDouble stored = overallIndex && n > 1 ? java.util.OptionalDouble.empty()
+                : DetectionTable.get().detection(kind, n, k, shift);
         if (known != null) {
             detection = known;
+        } else if (stored.isPresent()) {
+            detection = stored.getAsDouble();
         } else {
             UniformRandomProvider rng = RandomSource.XO_RO_SHI_RO_128_PP.create(SEED ^ ((long) n << 40)
                     ^ ((long) k << 8) ^ Double.doubleToLongBits(shift));

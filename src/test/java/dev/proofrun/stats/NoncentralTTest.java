@@ -12,6 +12,7 @@ import java.util.ArrayList;
 import java.util.List;
 import org.apache.commons.statistics.distribution.NormalDistribution;
 import org.hipparchus.distribution.continuous.TDistribution;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
@@ -87,6 +88,18 @@ class NoncentralTTest {
         return rows;
     }
 
+    @ParameterizedTest
+    @CsvSource({
+        // SciPy 1.17.1: scipy.stats.nct.cdf(t, 1e5, 2)
+        "-1, 0.0013499423503819802", "0.5, 0.06680716079458941", "2, 0.49999800529774086",
+        "2.7, 0.7580302565884631", "5, 0.998649215434754"})
+    void largeDegreesOfFreedomMatchTheReference(double t, double expected) {
+        // the default run's check of large df (100,000: under a second); df = 1e7, where one cdf takes seconds,
+        // is the long run's (hugeDegreesOfFreedomTendToTheNormal)
+        assertEquals(expected, NoncentralT.cdf(t, 1e5, 2), ABSOLUTE);
+    }
+
+    @Tag("long")
     @Test
     void hugeDegreesOfFreedomTendToTheNormal() {
         // As df grows W -> 1 and T -> N(ncp, 1); Var T is about 1 + (1 + ncp^2/2)/df, so at ncp = 2 and

@@ -42,7 +42,13 @@ import org.junit.jupiter.params.provider.CsvSource;
  */
 class WithinSigmaBoundsCoverageTest {
 
+    /** Studies per cell of the long grid (the figures above). */
     private static final int STUDIES = 20_000;
+    /**
+     * Studies in the default run's cell: standard error 0.0024 at 95 %, the band −4.1 to +10.4 of them; a bound that
+     * covers 93.5 % or less still fails it. Measured with 8,000 (n = 2, k = 25, off centre): Cp 0.9596, Cpk 0.9606.
+     */
+    private static final int DEFAULT_STUDIES = 8_000;
     private static final double CONFIDENCE = 0.95;
     private static final double LOWEST = 0.94;
     private static final double HIGHEST = 0.975;
@@ -51,25 +57,25 @@ class WithinSigmaBoundsCoverageTest {
     @ParameterizedTest(name = "n={0} k={1}")
     @CsvSource({"2, 25"})
     void representativeCell(int n, int k) {
-        check(n, k, false);
+        check(n, k, false, DEFAULT_STUDIES);
     }
 
     @Tag("long")
     @ParameterizedTest(name = "n={0} k={1}")
     @CsvSource({"2, 25", "2, 50", "5, 25", "5, 50", "8, 25", "8, 50"})
     void wholeGrid(int n, int k) {
-        check(n, k, true);
+        check(n, k, true, STUDIES);
     }
 
-    private static void check(int n, int k, boolean centredToo) {
+    private static void check(int n, int k, boolean centredToo, int studies) {
         List<String> failures = new ArrayList<>();
         double nu = WithinSigma.degreesOfFreedom(SigmaMethod.RBAR, n, k);
-        double[] off = coverage(n, k, 1.33, 1.83);
+        double[] off = coverage(n, k, 1.33, 1.83, studies);
         String line = String.format(Locale.ROOT, "n=%d k=%d nu=%.1f: Cp %.4f Cpk off-centre %.4f", n, k, nu, off[0], off[1]);
         inBand("Cp", off[0], failures);
         inBand("Cpk off-centre", off[1], failures);
         if (centredToo) {
-            double[] centred = coverage(n, k, 1.33, 1.33);
+            double[] centred = coverage(n, k, 1.33, 1.33, studies);
             line += String.format(Locale.ROOT, " Cp(centred draws) %.4f Cpk centred %.4f", centred[0], centred[1]);
             inBand("Cp", centred[0], failures);
             inBand("Cpk centred", centred[1], failures);
@@ -85,7 +91,7 @@ class WithinSigmaBoundsCoverageTest {
     }
 
     /** Coverage rates {Cp, Cpk EXACT} of the 95 % lower bounds with σ̂_w = R̄/d2. */
-    static double[] coverage(int n, int k, double cpk, double cp) {
+    static double[] coverage(int n, int k, double cpk, double cp, int studies) {
         long seed = 4_000_037L * n + 7919L * k + Math.round(1000 * cp);
         UniformRandomProvider rng = RandomSource.XO_RO_SHI_RO_128_PP.create(seed);
         ZigguratSampler.NormalizedGaussian normal = ZigguratSampler.NormalizedGaussian.of(rng);
@@ -96,7 +102,7 @@ class WithinSigmaBoundsCoverageTest {
         int cpCovered = 0;
         int cpkCovered = 0;
         List<double[]> subgroups = new ArrayList<>(k);
-        for (int s = 0; s < STUDIES; s++) {
+        for (int s = 0; s < studies; s++) {
             subgroups.clear();
             double sum = 0;
             for (int g = 0; g < k; g++) {
@@ -119,6 +125,6 @@ class WithinSigmaBoundsCoverageTest {
                 cpkCovered++;
             }
         }
-        return new double[] {cpCovered / (double) STUDIES, cpkCovered / (double) STUDIES};
+        return new double[] {cpCovered / (double) studies, cpkCovered / (double) studies};
     }
 }
