@@ -117,6 +117,16 @@ public enum AppMessage implements MessageKey {
     GRADING_REPORTING("Writing the report to %s …"),
     GRADING_REPORT_FAILED("The report could not be written: %s"),
     GRADING_DONE("%s graded: %s, %d problems listed"),
+    GRADING_VERDICT("Verdict for plan %s: %s"),
+    GRADING_CHARACTERISTIC("%s %s: %s"),
+    GRADING_MORE_SUBGROUPS("%s (about %d more subgroups would settle it)"),
+    GRADING_NOT_REACHED("Not judged: %s; an earlier step decided the verdict."),
+    GRADING_INDICES("All indices (normal model)"),
+    GRADING_LOWER_HEAD("lower %.0f %% bound"),
+    GRADING_HISTOGRAM("Histogram of the readings"),
+    GRADING_HISTOGRAM_BARS("readings: %s"),
+    GRADING_HISTOGRAM_CURVE("fitted %s model"),
+    GRADING_READINGS_CHART("Readings against the limits"),
     GOAL_PILOT_SHOWN("%d pilot readings in %d subgroups: %s estimate %s, lower %d %% bound %s. The design uses the estimate; "
             + "the bound shows how uncertain a pilot is."),
     GOAL_EXPECTED_NOT_ABOVE("the expected %s (%.3f) must be above the required %.3f, or no study can show it");

@@ -211,7 +211,8 @@ class FullFlowTest {
         assertTrue(verdict.endsWith(GradingViewModel.verdictWords(overall)), verdict);
         String caution = text(robot, "#caution");
         assertTrue(caution.startsWith("Caution: a statistical statement under assumptions"), caution);
-        assertTrue(robot.lookup("#char-caution").queryAs(Label.class).isVisible());
+        // the caution once on the page, not once per characteristic
+        assertEquals(1, fx(() -> robot.lookup(".pr-caution").queryAll().stream().filter(Node::isVisible).count()));
         // the charts name every line with its value: centre and both control limits, both specification limits
         for (String chart : List.of("#location-chart", "#spread-chart")) {
             List<String> legend = fx(() -> robot.lookup(chart).queryAs(CurvePlot.class).legend());
@@ -221,6 +222,10 @@ class FullFlowTest {
         List<String> limits = fx(() -> robot.lookup("#readings-chart").queryAs(CurvePlot.class).legend());
         assertTrue(limits.stream().anyMatch(n -> n.startsWith("LSL ")) && limits.stream().anyMatch(n -> n.startsWith("USL ")),
                 limits.toString());
+        // the histogram as in the report: bars, the planned shape's curve, both limits
+        List<String> bars = fx(() -> robot.lookup("#histogram-chart").queryAs(CurvePlot.class).legend());
+        assertTrue(bars.get(0).startsWith("readings: ") && bars.get(1).startsWith("fitted ")
+                && bars.stream().anyMatch(n -> n.startsWith("LSL ")), bars.toString());
         assertEquals(6, step());
         probe.phase("report");
         robot.clickOn("#export-report");

@@ -86,7 +86,7 @@ class ReportPiecesTest {
      */
     @Test
     void histogramBinsAreWholeGaugeSteps() {
-        HistogramBlock.Bins b = HistogramBlock.bins(21.9950, 22.0070, 125, 0.0005);
+        Histogram.Bins b = HistogramBlock.bins(21.9950, 22.0070, 125, 0.0005);
         assertEquals(3, b.steps());
         assertEquals(9, b.count());
         assertEquals(0.0015, b.width(), 1e-12);
@@ -98,7 +98,7 @@ class ReportPiecesTest {
             assertTrue(frac > 0.1 && frac < 0.9, "grid value " + j + " sits inside its bin: " + frac);
             assertTrue(Math.floor(pos) < b.count(), "grid value " + j + " has a bin");
         }
-        HistogramBlock.Bins plain = HistogramBlock.bins(0, 1, 100, Double.NaN);
+        Histogram.Bins plain = HistogramBlock.bins(0, 1, 100, Double.NaN);
         assertEquals(10, plain.count());
         assertEquals(0, plain.steps());
     }
