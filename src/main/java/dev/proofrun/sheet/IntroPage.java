@@ -43,7 +43,7 @@ final class IntroPage {
                 + (plan.part().number().isBlank() ? "" : "   No. " + plan.part().number())
                 + (plan.part().revision().isBlank() ? "" : "   Rev. " + plan.part().revision());
         flow.place(Paragraph.of(partLine, bold, 10));
-        String state = plan.revision().map(r -> "issued, revision " + r)
+        String state = plan.revision().map(r -> "issued as " + plan.revisionWords())
                 .orElse("DRAFT: not issued; readings collected against a draft cannot be graded");
         flow.place(Paragraph.of("Plan " + plan.id() + " (" + state + ")", regular, BODY));
         // one line each: set side by side, a long name ran into the next label ("...quality To be collected by")

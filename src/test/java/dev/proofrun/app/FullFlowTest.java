@@ -180,7 +180,7 @@ class FullFlowTest {
         await("the plan issued", () -> app.wizard().handout().issuedNow().isPresent());
         idle();
         String state = text(robot, "#plan-state");
-        assertTrue(state.matches("Issued as revision [0-9a-f]{12}"), state);
+        assertTrue(state.matches("Issued as revision 2 \\([0-9a-f]{12}\\)"), state);
         await("the sheet preview has pages", () -> !app.wizard().handout().pages().isEmpty());
         probe.phase("export");
         Path out = Files.createDirectories(home.resolve("out"));
@@ -206,7 +206,7 @@ class FullFlowTest {
         await("a verdict", () -> app.wizard().grading().resultProperty().get() != null
                 && !app.wizard().grading().busyProperty().get());
         String verdict = text(robot, "#verdict");
-        assertTrue(verdict.startsWith("Verdict for plan " + id + "@" + issued.revision().orElseThrow() + ": "), verdict);
+        assertTrue(verdict.startsWith("Verdict for plan " + id + ", revision 2 (" + issued.revision().orElseThrow() + "): "), verdict);
         Verdict overall = fx(() -> app.wizard().grading().resultProperty().get().verdict());
         assertTrue(verdict.endsWith(GradingViewModel.verdictWords(overall)), verdict);
         String caution = text(robot, "#caution");

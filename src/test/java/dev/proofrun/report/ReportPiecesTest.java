@@ -54,7 +54,7 @@ class ReportPiecesTest {
                 s.setEndPage(p);
                 String page = s.getText(doc).replaceAll("\\s+", " ");
                 assertTrue(page.contains("Graded 2027-04-02 14:07 +02:00, proofrun 9.8.7"), "stamp on page " + p);
-                assertTrue(page.contains("@ " + plan.revision().orElseThrow()), "revision on page " + p);
+                assertTrue(page.contains(", revision 1 (" + plan.revision().orElseThrow() + ")"), "revision on page " + p);
                 assertTrue(page.contains("returned file returned.csv"), "file name on page " + p);
                 assertFalse(page.contains(dir.toString()), "no folder on page " + p);
                 assertTrue(page.contains("Part verdict: " + result.verdict().words() + "."), "verdict on page " + p);

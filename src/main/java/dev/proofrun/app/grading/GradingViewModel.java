@@ -52,8 +52,8 @@ public final class GradingViewModel extends StepViewModel {
     private final ObjectProperty<GradingDisplay.Characteristic> shown = new SimpleObjectProperty<>(this, "shown");
     private final BooleanBinding graded = result.isNotNull();
     private final StringBinding verdictLine = Bindings.createStringBinding(() -> result.get() == null ? ""
-            : AppMessage.GRADING_VERDICT.format(result.get().planId() + "@" + result.get().revision(),
-                    result.get().verdict().words()), result);
+            : AppMessage.GRADING_VERDICT.format(result.get().planId(), this.gradedAgainst == null ? "revision " + result.get().revision()
+                    : this.gradedAgainst.revisionWords(), result.get().verdict().words()), result);
     private final ObjectBinding<Tone> tone = Bindings.createObjectBinding(() -> result.get() == null ? Tone.OPEN
             : EvidenceDisplay.tone(result.get().verdict()), result);
     private final BooleanProperty busy = new SimpleBooleanProperty(this, "busy", false);
@@ -128,7 +128,7 @@ public final class GradingViewModel extends StepViewModel {
         return graded;
     }
 
-    /** "Verdict for plan PR-2027-0311@31ec1269d925: Not valid", or "" with no grade. */
+    /** "Verdict for plan PR-2027-0311, revision 1 (31ec1269d925): Not valid", or "" with no grade. */
     public StringBinding verdictLineBinding() {
         return verdictLine;
     }

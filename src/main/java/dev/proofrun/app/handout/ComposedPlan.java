@@ -92,13 +92,15 @@ final class ComposedPlan {
     /** The plan as a draft with the base's supersedes and number: the content the base's revision was taken over. */
     private static StudyPlan asDraftOf(StudyPlan p, StudyPlan base) {
         return new StudyPlan(p.id(), p.part(), p.people(), p.characteristics(), p.calendar(), p.span(), p.design(),
-                p.spacing(), p.seed(), p.schedule(), PlanState.DRAFT, Optional.empty(), base.supersedes());
+                p.spacing(), p.seed(), p.schedule(), PlanState.DRAFT, Optional.empty(), base.supersedes(),
+                base.revisionNumber());
     }
 
     /** The plan as the draft of the revision after the base's. */
     private static StudyPlan successorOf(StudyPlan p, StudyPlan base) {
         return new StudyPlan(p.id(), p.part(), p.people(), p.characteristics(), p.calendar(), p.span(), p.design(),
-                p.spacing(), p.seed(), p.schedule(), PlanState.DRAFT, Optional.empty(), base.revision());
+                p.spacing(), p.seed(), p.schedule(), PlanState.DRAFT, Optional.empty(), base.revision(),
+                base.revisionNumber() + 1);
     }
 
     private HandoutViewModel.Composed compose() {

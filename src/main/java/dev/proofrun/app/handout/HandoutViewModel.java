@@ -160,7 +160,7 @@ public final class HandoutViewModel extends StepViewModel {
         return exported;
     }
 
-    /** "Issued as revision 3f2a9c01b7de", "Draft, not issued", "Changed since revision … was issued". */
+    /** "Issued as revision 2 (3f2a9c01b7de)", "Draft of revision 1, not issued yet", "Changed since revision … was issued". */
     public StringBinding stateBinding() {
         return state;
     }
@@ -188,12 +188,12 @@ public final class HandoutViewModel extends StepViewModel {
     private String describeState() {
         StudyPlan base = session.baseProperty().get();
         if (issuedNow().isPresent()) {
-            return AppMessage.HANDOUT_ISSUED.format(base.revision().orElse(""));
+            return AppMessage.HANDOUT_ISSUED.format(base.revisionWords());
         }
         if (base != null && base.isIssued()) {
-            return AppMessage.HANDOUT_CHANGED.format(base.revision().orElse(""));
+            return AppMessage.HANDOUT_CHANGED.format(base.revisionWords(), base.revisionNumber() + 1);
         }
-        return AppMessage.HANDOUT_DRAFT.format();
+        return AppMessage.HANDOUT_DRAFT.format(base == null ? 1 : base.revisionNumber());
     }
 
     /**

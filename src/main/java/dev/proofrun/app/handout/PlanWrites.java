@@ -57,7 +57,7 @@ final class PlanWrites {
             return false;
         }
         if (plans.issued().get().isPresent()) {
-            message.set(AppMessage.HANDOUT_ALREADY.format(plans.issued().get().get().revision().orElse("")));
+            message.set(AppMessage.HANDOUT_ALREADY.format(plans.issued().get().get().revisionWords()));
             return true;
         }
         StudyPlan draft = plans.nextIssue().orElseThrow();
@@ -78,7 +78,7 @@ final class PlanWrites {
             return new Written(session.write(file, issued), issued);
         }, w -> {
             issuing.set(false);
-            String revision = w.plan().revision().orElse("");
+            String revision = w.plan().revisionWords();
             if (session.openedCount() != openedAtStart) {
                 message.set(AppMessage.HANDOUT_ISSUED_ELSEWHERE.format(revision, w.file()));
                 return;
@@ -107,7 +107,8 @@ final class PlanWrites {
         if (issuing.get()) {
             return false;
         }
-        Optional<StudyPlan> plan = plans.issued().get().or(() -> plans.composed().get().plan());
+        // a draft made from an issued plan keeps its lineage: it supersedes that revision, numbered one more
+        Optional<StudyPlan> plan = plans.issued().get().or(plans::nextIssue);
         if (plan.isEmpty()) {
             message.set(missing.get());
             return false;

@@ -69,7 +69,7 @@ class GradingViewModelTest {
         grade(returned);
         assertTrue(vm.gradedBinding().get());
         // the demo's return: D1 demonstrated, R4 inconclusive, F7 not valid (DemoParityTest), so the part is not valid
-        assertEquals("Verdict for plan " + plan.id() + "@" + plan.revision().orElseThrow() + ": Not valid",
+        assertEquals("Verdict for plan " + plan.id() + ", revision 1 (" + plan.revision().orElseThrow() + "): Not valid",
                 vm.verdictLineBinding().get());
         assertEquals(Tone.SHORT, vm.toneBinding().get());
         assertEquals(GradeMessage.CAUTION.format(), vm.caution());

@@ -94,7 +94,10 @@ class HandoutViewModelTest {
         assertEquals(issued.revision(), PlanFiles.read(planFile).revision(), "the file holds the new revision");
         assertFalse(session.draft().dirtyProperty().get());
         assertTrue(vm.issuedNow().isPresent());
-        assertEquals("Issued as revision " + issued.revision().orElseThrow(), vm.stateBinding().get());
+        // the demo plan is revision 1; the change issued is revision 2, said beside its fingerprint
+        assertEquals(2, issued.revisionNumber());
+        assertEquals(2, PlanFiles.read(planFile).revisionNumber(), "the file holds the number");
+        assertEquals("Issued as revision 2 (" + issued.revision().orElseThrow() + ")", vm.stateBinding().get());
         assertTrue(vm.completeBinding().get());
     }
 
@@ -110,7 +113,7 @@ class HandoutViewModelTest {
         DraftSnapshot kept = session.drafts().newerDraft(planFile).orElseThrow();
         assertEquals("Night shift lead", kept.fields().get(DraftField.COLLECTOR.name()), "and it is autosaved");
         assertTrue(vm.issuedNow().isEmpty());
-        assertTrue(vm.stateBinding().get().startsWith("Changed since revision " + issued.revision().orElseThrow()),
+        assertTrue(vm.stateBinding().get().startsWith("Changed since revision 2 (" + issued.revision().orElseThrow() + ") was issued: issue it again to make revision 3"),
                 vm.stateBinding().get());
     }
 
