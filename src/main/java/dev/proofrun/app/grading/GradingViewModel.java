@@ -276,7 +276,8 @@ public final class GradingViewModel extends StepViewModel {
     }
 
     private static GradeRow row(CharacteristicGrade g) {
-        IndexEvidence e = g.judged();
+        // an estimate beside "Not valid" would be read as a capability statement (the report leaves it out too)
+        IndexEvidence e = g.verdict() == dev.proofrun.grade.Verdict.NOT_VALID ? null : g.judged();
         return new GradeRow(g.id(), g.name(), g.verdict().words(), e == null ? "—" : e.index().symbol() + " " + fmt(e.estimate()),
                 e == null ? "—" : fmt(e.lower()) + " vs " + fmt(e.required()));
     }
