@@ -176,11 +176,17 @@ class FullFlowTest {
         idle();
         String was = text(robot, "#plan-state");
         assertTrue(was.startsWith("Changed since revision"), was);
+        // before it is issued the changed plan can be exported as a DRAFT, as `sheet --draft` writes it
+        String draftExport = fx(() -> robot.lookup("#export").queryAs(javafx.scene.control.Button.class).getText());
+        assertTrue(draftExport.contains("DRAFT"), draftExport);
+        assertTrue(fx(() -> !robot.lookup("#export").query().isDisabled()), "a draft can be exported");
         robot.clickOn("#issue");
         await("the plan issued", () -> app.wizard().handout().issuedNow().isPresent());
         idle();
         String state = text(robot, "#plan-state");
         assertTrue(state.matches("Issued as revision 2 \\([0-9a-f]{12}\\)"), state);
+        String issuedExport = fx(() -> robot.lookup("#export").queryAs(javafx.scene.control.Button.class).getText());
+        assertTrue(!issuedExport.contains("DRAFT"), issuedExport);
         await("the sheet preview has pages", () -> !app.wizard().handout().pages().isEmpty());
         probe.phase("export");
         Path out = Files.createDirectories(home.resolve("out"));
