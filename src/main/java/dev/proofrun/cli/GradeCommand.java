@@ -85,12 +85,12 @@ public final class GradeCommand implements Callable<Integer> {
         }
         if (json) {
             try {
-                out.println(new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT).writeValueAsString(GradeJson.of(result)));
+                out.println(new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT).writeValueAsString(GradeJson.of(result, plan)));
             } catch (IOException e) {
                 throw new UncheckedIOException(e);
             }
         } else {
-            text(result, out);
+            text(result, plan, out);
         }
         if (report != null) {
             // stdout stays one JSON object with --json; the note then goes to stderr
@@ -102,8 +102,8 @@ public final class GradeCommand implements Callable<Integer> {
         return requireDemonstrated && !result.allDemonstrated() ? EXIT_NOT_DEMONSTRATED : 0;
     }
 
-    static void text(GradeResult r, PrintWriter out) {
-        out.printf(Locale.ROOT, "Plan %s@%s, file %s%n", r.planId(), r.revision(), r.file());
+    static void text(GradeResult r, StudyPlan plan, PrintWriter out) {
+        out.printf(Locale.ROOT, "Plan %s, %s, file %s%n", r.planId(), plan.revisionWords(), r.file());
         out.printf(Locale.ROOT, "Part verdict: %s%n", r.verdict().words()); // words as on paper; ids in --json
         for (CharacteristicGrade g : r.characteristics()) {
             out.println();

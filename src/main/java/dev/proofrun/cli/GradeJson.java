@@ -31,11 +31,12 @@ final class GradeJson {
     private GradeJson() {
     }
 
-    static Map<String, Object> of(GradeResult r) {
+    static Map<String, Object> of(GradeResult r, dev.proofrun.plan.StudyPlan graded) {
         Map<String, Object> root = new LinkedHashMap<>();
         Map<String, Object> plan = new LinkedHashMap<>();
         plan.put("id", r.planId());
         plan.put("revision", r.revision());
+        plan.put("revisionNumber", graded.revisionNumber());
         root.put("plan", plan);
         List<Object> problems = new ArrayList<>();
         for (Problem p : r.problems()) {

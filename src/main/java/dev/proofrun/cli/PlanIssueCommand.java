@@ -29,15 +29,16 @@ public final class PlanIssueCommand implements Callable<Integer> {
         String rev = after.revision().orElseThrow();
         switch (before.integrity()) {
             case INTACT:
-                out.println(PlanOptionMessage.ALREADY_ISSUED.format(file, rev));
+                out.println(PlanOptionMessage.ALREADY_ISSUED.format(file, after.revisionWords()));
                 break;
             case CHANGED_AFTER_ISSUE: {
                 String old = before.plan().revision().orElseThrow();
-                out.println(PlanOptionMessage.REISSUED.format(file, old, rev, old, file.getFileName()));
+                out.println(PlanOptionMessage.REISSUED.format(file, before.plan().revisionWords(), after.revisionWords(), old,
+                        file.getFileName()));
                 break;
             }
             default:
-                out.println(PlanOptionMessage.ISSUED.format(file, rev, after.reference()));
+                out.println(PlanOptionMessage.ISSUED.format(file, after.revisionWords(), after.reference()));
         }
         out.println(rev);
         out.flush();

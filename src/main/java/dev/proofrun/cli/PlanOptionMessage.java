@@ -9,9 +9,9 @@ public enum PlanOptionMessage implements MessageKey {
     OUT_EXISTS("%s exists; add --force to replace it (the old file is kept as .bak)"),
     RATE_ASSUMED("no --rate or --cycle-seconds given: assumed %s parts per hour"),
     WROTE("wrote %s: %s, draft"),
-    ISSUED("issued %s as revision %s (%s)"),
-    ALREADY_ISSUED("%s is already issued as revision %s; nothing changed"),
-    REISSUED("%s was changed after it was issued as revision %s; issued the change as revision %s (it supersedes %s);"
+    ISSUED("issued %s as %s, reference %s"),
+    ALREADY_ISSUED("%s is already issued as %s; nothing changed"),
+    REISSUED("%s was changed after it was issued as %s; issued the change as %s (it supersedes %s);"
             + " the file as found is kept as %s.bak"),
     CHANGED_WARNING("warning: this plan was changed after it was issued as revision %s (its content gives %s);"
             + " it cannot be used until the change is issued ('proofrun plan issue')");

@@ -44,7 +44,7 @@ public final class PlanShowCommand implements Callable<Integer> {
             out.flush();
             return 0;
         }
-        out.printf(Locale.ROOT, "plan %s  %s%s%n", p.reference(), p.state().token(),
+        out.printf(Locale.ROOT, "plan %s  %s, %s%s%n", p.reference(), p.state().token(), p.revisionWords(),
                 p.supersedes().map(s -> " (supersedes " + s + ")").orElse(""));
         out.printf(Locale.ROOT, "part %s%s%s%n", p.part().name(),
                 p.part().number().isEmpty() ? "" : "  no. " + p.part().number(),

@@ -49,21 +49,32 @@ public record Stability(ChartPair charts, List<ChartSignal> signals, int locatio
     }
 
     /**
-     * The chance as people read it: "P = 0.708", or at the floor "P < 0.00050" (the floor to two significant
-     * digits, rounded up so the statement stays true).
+     * The chance as people read it: "0.708", or at the floor "below 0.0005" (the floor rounded up to two
+     * significant digits, so the statement stays true, and written without trailing zeros).
      *
      * @param p       the chance
      * @param atFloor whether it is the simulation's floor
      * @param digits  the format of an ordinary value, e.g. "%.3f"
      */
     public static String chanceText(double p, boolean atFloor, String digits) {
-        return atFloor ? "P " + below(p) : "P = " + String.format(Locale.ROOT, digits, p);
+        return atFloor ? below(p) : String.format(Locale.ROOT, digits, p);
     }
 
-    /** "&lt; 0.00050" for a floor of 1/2001: the floor rounded up to two significant digits. */
+    /** "below 0.0005" for a floor of 1/2001: the floor rounded up to two significant digits, no trailing zeros. */
     public static String below(double floor) {
-        return "< " + upTwoDigits(floor);
+        return "below " + new BigDecimal(upTwoDigits(floor)).stripTrailingZeros().toPlainString();
     }
+
+    /**
+     * A p-value after "p": "= 0.81", "= 0.0023", or "below 0.0001" for anything smaller (a figure such as
+     * 2.5e-18 says no more than that, and few readers take it in).
+     */
+    public static String pText(double p) {
+        return p < P_FLOOR ? "below 0.0001" : "= " + String.format(Locale.ROOT, "%.2g", p);
+    }
+
+    /** Below this a p-value is said as "below 0.0001". */
+    static final double P_FLOOR = 1e-4;
 
     /** v rounded up to two significant digits, in plain notation: 1/2001 → "0.00050", 1/401 → "0.0025". */
     static String upTwoDigits(double v) {

@@ -79,13 +79,13 @@ final class StabilityJudge {
         }
         if (d.meansOnOwnChart()) {
             reasons.add(new Reason(Step.STABILITY, false, GradeMessage.REASON_MEANS_OWN_CHART.format(ratio,
-                    d.anovaF().getAsDouble(), d.anovaP().getAsDouble())));
+                    d.anovaF().getAsDouble(), Stability.pText(d.anovaP().getAsDouble()))));
         } else if (between) {
             reasons.add(new Reason(Step.STABILITY, true,
-                    GradeMessage.REASON_UNSTABLE_BETWEEN.format(ratio, d.anovaF().getAsDouble(), d.anovaP().getAsDouble())));
+                    GradeMessage.REASON_UNSTABLE_BETWEEN.format(ratio, d.anovaF().getAsDouble(), Stability.pText(d.anovaP().getAsDouble()))));
         } else if (d.anovaF().isPresent()) {
             reasons.add(new Reason(Step.STABILITY, false,
-                    GradeMessage.REASON_RATIO.format(ratio, d.anovaF().getAsDouble(), d.anovaP().getAsDouble())));
+                    GradeMessage.REASON_RATIO.format(ratio, d.anovaF().getAsDouble(), Stability.pText(d.anovaP().getAsDouble()))));
         } else {
             reasons.add(new Reason(Step.STABILITY, false, GradeMessage.REASON_RATIO_INDIVIDUALS.format(ratio)));
         }

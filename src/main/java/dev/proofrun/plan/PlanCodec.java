@@ -96,7 +96,8 @@ final class PlanCodec {
         };
         Design d = p.design();
         return new PlanJson.File(PlanJson.FORMAT, PlanJson.VERSION, p.id(), p.state().token(),
-                p.revision().orElse(null), p.supersedes().orElse(null),
+                // revision number 1 is left out: files written before the number existed keep their bytes and revision
+                p.revision().orElse(null), p.revisionNumber() == 1 ? null : p.revisionNumber(), p.supersedes().orElse(null),
                 new PlanJson.PartJ(p.part().name(), p.part().number(), p.part().revision()),
                 new PlanJson.PeopleJ(p.people().author(), p.people().collector()),
                 new PlanJson.DesignJ(d.subgroupSize(), d.subgroups(), d.sigmaMethod().token(), d.boundMethod().token()),
@@ -142,8 +143,12 @@ final class PlanCodec {
         Spacing spacing = value("$.spacing", () -> Spacing.fromToken(req(f.spacing(), "$.spacing")));
         long seed = req(f.seed(), "$.seed");
         Schedule schedule = schedule(req(f.schedule(), "$.schedule"), design.subgroupSize());
+        Integer number = f.revisionNumber();
+        if (number != null && number < 2) {
+            throw new UserException(file, PlanMessage.REVISION_NUMBER_RANGE, number);
+        }
         return value("$", () -> new StudyPlan(id, part, people, chars, calendar, span, design, spacing, seed, schedule,
-                state, Optional.ofNullable(f.revision()), Optional.ofNullable(f.supersedes())));
+                state, Optional.ofNullable(f.revision()), Optional.ofNullable(f.supersedes()), number == null ? 1 : number));
     }
 
     private Characteristic characteristic(PlanJson.CharacteristicJ c, String path) {

@@ -44,7 +44,7 @@ import java.util.concurrent.FutureTask;
  * <li><b>Fingerprint</b>: the first 12 hex digits of SHA-256 over the canonical form — the plan written as
  * compact JSON (UTF-8, the fixed property order of {@link PlanJson}, no whitespace, numbers as Java's
  * shortest round-trip decimal) with {@code state} and {@code revision} left out; everything else, including
- * {@code supersedes}, is in. The layout of the file does not matter; a changed value does.</li>
+ * {@code supersedes} and {@code revisionNumber} (written only from 2 up), is in. The layout of the file does not matter; a changed value does.</li>
  * <li><b>An issued plan that was edited</b> no longer matches its revision: {@link #read} refuses it,
  * {@link #inspect} reports it, {@link #issue(Path)} issues the change as a new revision that names the old
  * one in {@code supersedes}.</li>
@@ -247,7 +247,8 @@ public final class PlanFiles {
 
     private static void writeCanonical(StudyPlan plan, OutputStream out) {
         PlanJson.File f = PlanCodec.toJson(plan);
-        PlanJson.File content = new PlanJson.File(f.format(), f.formatVersion(), f.id(), null, null, f.supersedes(),
+        PlanJson.File content = new PlanJson.File(f.format(), f.formatVersion(), f.id(), null, null, f.revisionNumber(),
+                f.supersedes(),
                 f.part(), f.people(), f.design(), f.characteristics(), f.calendar(), f.span(), f.spacing(), f.seed(),
                 f.schedule());
         try {

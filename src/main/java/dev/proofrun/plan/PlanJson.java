@@ -22,11 +22,11 @@ final class PlanJson {
     }
 
     @JsonInclude(JsonInclude.Include.NON_NULL)
-    @JsonPropertyOrder({"format", "formatVersion", "id", "state", "revision", "supersedes", "part", "people",
-        "design", "characteristics", "calendar", "span", "spacing", "seed", "schedule"})
-    record File(String format, Integer formatVersion, String id, String state, String revision, String supersedes,
-            PartJ part, PeopleJ people, DesignJ design, List<CharacteristicJ> characteristics, CalendarJ calendar,
-            SpanJ span, String spacing, Long seed, ScheduleJ schedule) {
+    @JsonPropertyOrder({"format", "formatVersion", "id", "state", "revision", "revisionNumber", "supersedes", "part",
+        "people", "design", "characteristics", "calendar", "span", "spacing", "seed", "schedule"})
+    record File(String format, Integer formatVersion, String id, String state, String revision, Integer revisionNumber,
+            String supersedes, PartJ part, PeopleJ people, DesignJ design, List<CharacteristicJ> characteristics,
+            CalendarJ calendar, SpanJ span, String spacing, Long seed, ScheduleJ schedule) {
     }
 
     @JsonPropertyOrder({"name", "number", "revision"})

@@ -5,6 +5,9 @@ import dev.proofrun.text.MessageKey;
 /** Messages of the plan package: reading, writing and issuing plan files; designing a plan's characteristics. */
 public enum PlanMessage implements MessageKey {
     CANNOT_READ("cannot read the plan file: %s"),
+    REVISION_ISSUED("revision %d (%s)"),
+    REVISION_DRAFT("DRAFT of revision %d"),
+    REVISION_NUMBER_RANGE("at $.revisionNumber: a revision number is a whole number from 2 up (1 is left out of the file), not %s"),
     CANNOT_WRITE("cannot write the plan file: %s"),
     EMPTY_FILE("the file is empty; expected a proofrun plan (JSON)"),
     TRUNCATED("the file ends too early, after %s (line %d); is it truncated?"),

@@ -30,6 +30,7 @@ public final class PlanView {
         } else {
             out.putNull("revision");
         }
+        out.put("revisionNumber", plan.revisionNumber());
         out.put("integrity", integrity.name().toLowerCase(java.util.Locale.ROOT).replace('_', '-'));
         out.put("summary", plan.summary());
         ArrayNode slots = (ArrayNode) file.path("schedule").path("slots");

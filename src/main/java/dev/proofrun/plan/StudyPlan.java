@@ -36,10 +36,13 @@ import java.util.Set;
  * @param state           draft or issued
  * @param revision        the fingerprint of the issued content (12 hex digits), empty for a draft
  * @param supersedes      the revision this plan replaces, if it was made by changing an issued plan
+ * @param revisionNumber  the revision as people say it: 1 for a plan's first issue, one more for each issued
+ *                        change after it (a draft carries the number it will be issued as). The fingerprint
+ *                        stays the identity; the number is for speaking ("revision 2") and is covered by it
  */
 public record StudyPlan(String id, Part part, People people, List<Characteristic> characteristics,
         ProductionCalendar calendar, StudySpan span, Design design, Spacing spacing, long seed, Schedule schedule,
-        PlanState state, Optional<String> revision, Optional<String> supersedes) {
+        PlanState state, Optional<String> revision, Optional<String> supersedes, int revisionNumber) {
 
     /**
      * The largest subgroup size a plan file may state: the fill-in workbook has one column per reading beside
@@ -55,6 +58,7 @@ public record StudyPlan(String id, Part part, People people, List<Characteristic
      * @throws IllegalArgumentException if a part is missing, ids are bad or repeated
      * @throws IllegalArgumentException if the schedule does not have k slots of n parts
      * @throws IllegalArgumentException if an issued plan lacks a revision or a draft has one
+     * @throws IllegalArgumentException if the revision number is below 1
      */
     public StudyPlan {
         if (id == null || !id.matches("[A-Za-z0-9._-]{1,40}")) {
@@ -87,6 +91,26 @@ public record StudyPlan(String id, Part part, People people, List<Characteristic
         }
         revision.ifPresent(StudyPlan::requireRevision);
         supersedes.ifPresent(StudyPlan::requireRevision);
+        if (revisionNumber < 1) {
+            throw new IllegalArgumentException(String.format(Locale.ROOT, "a revision number is 1 or more: %d", revisionNumber));
+        }
+    }
+
+    /** A plan of revision number 1: a first issue, or a plan written before revisions were numbered. */
+    public StudyPlan(String id, Part part, People people, List<Characteristic> characteristics,
+            ProductionCalendar calendar, StudySpan span, Design design, Spacing spacing, long seed, Schedule schedule,
+            PlanState state, Optional<String> revision, Optional<String> supersedes) {
+        this(id, part, people, characteristics, calendar, span, design, spacing, seed, schedule, state, revision,
+                supersedes, 1);
+    }
+
+    /**
+     * The revision as people say it beside the fingerprint: "revision 2 (3f2a9c01b7de)" when issued, "draft of
+     * revision 2" before.
+     */
+    public String revisionWords() {
+        return revision.map(r -> PlanMessage.REVISION_ISSUED.format(revisionNumber, r))
+                .orElseGet(() -> PlanMessage.REVISION_DRAFT.format(revisionNumber));
     }
 
     private static void requireRevision(String r) {
@@ -127,21 +151,21 @@ public record StudyPlan(String id, Part part, People people, List<Characteristic
     }
 
     /**
-     * A draft to change an issued plan: same content, no revision, remembering the revision it replaces.
-     * Issuing it gives a new revision; the old issued file is never rewritten in place.
+     * A draft to change an issued plan: same content, no revision, remembering the revision it replaces, and
+     * numbered one more. Issuing it gives a new revision; the old issued file is never rewritten in place.
      */
     public StudyPlan reopen() {
         if (!isIssued()) {
             return this;
         }
         return new StudyPlan(id, part, people, characteristics, calendar, span, design, spacing, seed, schedule,
-                PlanState.DRAFT, Optional.empty(), revision);
+                PlanState.DRAFT, Optional.empty(), revision, revisionNumber + 1);
     }
 
     /** The same plan, issued with the given fingerprint (package use: {@link PlanFiles#issue(StudyPlan)}). */
     StudyPlan issuedAs(String fingerprint) {
         return new StudyPlan(id, part, people, characteristics, calendar, span, design, spacing, seed, schedule,
-                PlanState.ISSUED, Optional.of(fingerprint), supersedes);
+                PlanState.ISSUED, Optional.of(fingerprint), supersedes, revisionNumber);
     }
 
     /** The same plan with another schedule (re-scheduling a draft, e.g. after changing the seed). */
@@ -150,6 +174,6 @@ public record StudyPlan(String id, Part part, People people, List<Characteristic
             throw new IllegalStateException("an issued plan is frozen; reopen() it first");
         }
         return new StudyPlan(id, part, people, characteristics, calendar, span, design, spacing, seed, newSchedule,
-                state, revision, supersedes);
+                state, revision, supersedes, revisionNumber);
     }
 }

@@ -14,7 +14,9 @@
  * <li>States: DRAFT → ISSUED by {@code PlanFiles.issue}. The revision is the first 12 hex digits of SHA-256
  * over {@code PlanFiles.canonical(plan)} (state and revision left out). An issued file whose content no longer
  * gives its revision was edited: {@code read} refuses it, {@code inspect} reports it. Changing an issued plan
- * makes a new revision that {@code supersedes} the old one. {@code fingerprint} streams the canonical bytes
+ * makes a new revision that {@code supersedes} the old one, numbered one more ({@code revisionNumber}: 1, 2, 3…, the
+ * revision as people say it beside the fingerprint; left out of the file when 1, so plans written before it
+ * keep their bytes and fingerprint; covered by the fingerprint when written). {@code fingerprint} streams the canonical bytes
  * into the digest as they are written (a 200,000-slot plan is about 20 MB of them, never held whole);
  * {@code PlanReadingTest} checks them against the form re-made from the saved file as a plain JSON tree, on
  * 120 generated plans and the demo.</li>

@@ -65,7 +65,7 @@ final class EvidenceSection {
             c.add(t.row("taken late or out of order", Integer.toString(m.lateSubgroups()), "readings flagged", Integer.toString(m.flaggedReadings())));
             c.add(t.row("unusable subgroups allowed", Integer.toString(m.allowedShortfall()), "shortfall", Integer.toString(m.shortfall())));
         }
-        step(flow, "1  Completeness: was the plan followed?", g, Step.COMPLETENESS, c);
+        step(flow, ReportMessage.heading(Step.COMPLETENESS).format(), g, Step.COMPLETENESS, c);
 
         List<Block> s = new ArrayList<>();
         Stability st = g.stability();
@@ -91,13 +91,13 @@ final class EvidenceSection {
                 s.add(Paragraph.of("Signals by rule: " + signals(st.signals()), regular, 8.5f));
             }
         }
-        step(flow, "2  Stability: was the process in control?", g, Step.STABILITY, s);
+        step(flow, ReportMessage.heading(Step.STABILITY).format(), g, Step.STABILITY, s);
 
         List<Block> h = new ArrayList<>();
         Shape sh = g.shape();
         double[] x = flatten(g.subgroups());
         if (sh != null && x.length > 0) {
-            ModelCurve curve = curve(sh, x);
+            ModelCurve curve = Histogram.curve(sh, x);
             h.add(new HistogramBlock(x, g.limits(), nominal, step, curve, "Readings against the limits", regular, bold));
             h.add(Block.space(4));
             h.add(new ProbabilityPlotBlock(x, curve, "Probability plot under the " + curve.model().id() + " model", regular, bold));
@@ -114,7 +114,7 @@ final class EvidenceSection {
             h.add(Paragraph.of("The plan declares the " + sh.family().token() + " shape; only that model is fitted"
                     + (sh.modelFits() ? "." : ", and it does not fit these readings."), regular, 8.5f));
         }
-        step(flow, "3  Shape: is the distribution model fair?", g, Step.SHAPE, h);
+        step(flow, ReportMessage.heading(Step.SHAPE).format(), g, Step.SHAPE, h);
 
         List<Block> k = new ArrayList<>();
         if (g.judged() != null) {
@@ -152,7 +152,7 @@ final class EvidenceSection {
                     regular, 8.5f));
             k.add(Block.stack(figures));
         }
-        step(flow, "4  Capability: does the bound reach the requirement?", g, Step.CAPABILITY, k);
+        step(flow, ReportMessage.heading(Step.CAPABILITY).format(), g, Step.CAPABILITY, k);
     }
 
     /**
@@ -179,8 +179,7 @@ final class EvidenceSection {
     /** A chance in words: "below 0.0005" at the simulation's floor, "below 0.001", or three decimals. */
     private static String chance(boolean atFloor, double p) {
         if (atFloor) {
-            return "below " + new java.math.BigDecimal(Stability.below(p).substring(2)).stripTrailingZeros()
-                    .toPlainString();
+            return Stability.below(p);
         }
         return p < 0.001 ? "below 0.001" : Fmt.p(p);
     }
@@ -236,15 +235,6 @@ final class EvidenceSection {
     /** One entry per pattern (a run of one rule over consecutive subgroups), as the reasons say it. */
     private static String signals(List<ChartSignal> signals) {
         return dev.proofrun.grade.SignalPatterns.describe(signals);
-    }
-
-    private static ModelCurve curve(Shape sh, double[] x) {
-        for (ModelFit f : sh.fits()) {
-            if (f.model() == sh.model()) {
-                return ModelCurve.of(f);
-            }
-        }
-        return ModelCurve.normal(mean(x), sd(x));
     }
 
     static double[] flatten(List<double[]> subgroups) {

@@ -63,12 +63,12 @@ final class Fmt {
         return v >= 10 ? String.format(Locale.ROOT, "%,.0f", v) : String.format(Locale.ROOT, "%.1f", v);
     }
 
-    /** A probability or p-value: three decimals, "< 0.001" below. */
+    /** A probability or p-value: three decimals, "below 0.001" below. */
     static String p(double v) {
         if (!Double.isFinite(v)) {
             return NONE;
         }
-        return v < 0.001 ? "< 0.001" : String.format(Locale.ROOT, "%.3f", v);
+        return v < 0.001 ? "below 0.001" : String.format(Locale.ROOT, "%.3f", v);
     }
 
     /** A plain number with the given decimals. */

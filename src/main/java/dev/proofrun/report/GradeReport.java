@@ -58,7 +58,7 @@ public final class GradeReport {
     public static void write(GradeResult result, StudyPlan plan, Paper paper, ReportStamp stamp, OutputStream out) {
         PageHeading heading = new PageHeading(Fmt.name(plan.part().name()),
                 "Grade report: returned file " + Fmt.fileName(result.file()),
-                "Plan " + result.planId() + " @ " + result.revision(),
+                "Plan " + result.planId() + ", " + revision(result, plan),
                 "Part verdict: " + result.verdict().words() + ". " + stamp.line()
                         + ". Not an approval; see page 1.",
                 false);
@@ -75,6 +75,15 @@ public final class GradeReport {
             }
             pages.write(out);
         }
+    }
+
+    /**
+     * The plan's revision as people say it, "revision 2 (3f2a9c01b7de)", when the plan given is the one graded
+     * against; else the grade's fingerprint alone.
+     */
+    static String revision(GradeResult result, StudyPlan plan) {
+        return plan.revision().map(result.revision()::equals).orElse(false) ? plan.revisionWords()
+                : "revision " + result.revision();
     }
 
     /**

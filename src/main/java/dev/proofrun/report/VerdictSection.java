@@ -57,7 +57,7 @@ final class VerdictSection {
         flow.gap(3);
         flow.place(Paragraph.of("Part: " + Fmt.name(plan.part().name()) + (plan.part().number().isBlank() ? "" : "   No. "
                 + Fmt.name(plan.part().number())), bold, 10));
-        flow.place(Paragraph.of("Plan " + result.planId() + ", revision " + result.revision() + ". Returned file: "
+        flow.place(Paragraph.of("Plan " + result.planId() + ", " + GradeReport.revision(result, plan) + ". Returned file: "
                 + Fmt.fileName(result.file()) + ".", regular, 9));
         flow.place(Paragraph.of(stamp.line() + ".", regular, 9));
         flow.gap(8);

@@ -43,9 +43,9 @@ final class IntroPage {
                 + (plan.part().number().isBlank() ? "" : "   No. " + plan.part().number())
                 + (plan.part().revision().isBlank() ? "" : "   Rev. " + plan.part().revision());
         flow.place(Paragraph.of(partLine, bold, 10));
-        String state = plan.revision().map(r -> "issued, revision " + r)
-                .orElse("DRAFT: not issued; readings collected against a draft cannot be graded");
-        flow.place(Paragraph.of("Plan " + plan.id() + " (" + state + ")", regular, BODY));
+        String state = plan.isIssued() ? ", issued as " + plan.revisionWords()
+                : " (" + plan.revisionWords() + ": not issued; readings collected against a draft cannot be graded)";
+        flow.place(Paragraph.of("Plan " + plan.id() + state, regular, BODY));
         // one line each: set side by side, a long name ran into the next label ("...quality To be collected by")
         flow.place(Paragraph.of("Prepared by: " + orDash(plan.people().author()), regular, BODY));
         flow.place(Paragraph.of("To be collected by: " + orDash(plan.people().collector()), regular, BODY));

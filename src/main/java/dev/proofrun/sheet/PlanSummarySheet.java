@@ -19,7 +19,7 @@ final class PlanSummarySheet {
         Writer w = new Writer(sheet, plain, quoted);
         List<Slot> slots = plan.schedule().slots();
         w.row(header, "Plan", plan.id());
-        w.row(null, "Revision", plan.revision().orElse("draft (not issued)"));
+        w.row(null, "Revision", plan.revision().isPresent() ? plan.revisionWords() : "draft (not issued)");
         w.row(null, "Reference in the fill-in file", plan.reference());
         w.row(null, "Part", plan.part().name());
         w.row(null, "Part number", plan.part().number());

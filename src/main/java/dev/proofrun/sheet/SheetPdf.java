@@ -31,7 +31,8 @@ public final class SheetPdf {
      */
     public static void write(StudyPlan plan, Paper paper, OutputStream out) {
         boolean draft = !plan.isIssued();
-        String identity = "Plan " + plan.id() + " @ " + plan.revision().orElse("DRAFT");
+        // the revision as people say it beside the fingerprint: "Plan PR-2027-0311, revision 2 (3f2a9c01b7de)"
+        String identity = "Plan " + plan.id() + ", " + plan.revisionWords();
         PageHeading heading = new PageHeading(plan.part().name() + partSuffix(plan), "Collection sheet", identity,
                 "Fill-in file: " + plan.id() + "-fill-in.csv or .xlsx (keep the prefilled columns as printed)",
                 draft);

@@ -176,11 +176,17 @@ class FullFlowTest {
         idle();
         String was = text(robot, "#plan-state");
         assertTrue(was.startsWith("Changed since revision"), was);
+        // before it is issued the changed plan can be exported as a DRAFT, as `sheet --draft` writes it
+        String draftExport = fx(() -> robot.lookup("#export").queryAs(javafx.scene.control.Button.class).getText());
+        assertTrue(draftExport.contains("DRAFT"), draftExport);
+        assertTrue(fx(() -> !robot.lookup("#export").query().isDisabled()), "a draft can be exported");
         robot.clickOn("#issue");
         await("the plan issued", () -> app.wizard().handout().issuedNow().isPresent());
         idle();
         String state = text(robot, "#plan-state");
-        assertTrue(state.matches("Issued as revision [0-9a-f]{12}"), state);
+        assertTrue(state.matches("Issued as revision 2 \\([0-9a-f]{12}\\)"), state);
+        String issuedExport = fx(() -> robot.lookup("#export").queryAs(javafx.scene.control.Button.class).getText());
+        assertTrue(!issuedExport.contains("DRAFT"), issuedExport);
         await("the sheet preview has pages", () -> !app.wizard().handout().pages().isEmpty());
         probe.phase("export");
         Path out = Files.createDirectories(home.resolve("out"));
@@ -206,12 +212,13 @@ class FullFlowTest {
         await("a verdict", () -> app.wizard().grading().resultProperty().get() != null
                 && !app.wizard().grading().busyProperty().get());
         String verdict = text(robot, "#verdict");
-        assertTrue(verdict.startsWith("Verdict for plan " + id + "@" + issued.revision().orElseThrow() + ": "), verdict);
+        assertTrue(verdict.startsWith("Verdict for plan " + id + ", revision 2 (" + issued.revision().orElseThrow() + "): "), verdict);
         Verdict overall = fx(() -> app.wizard().grading().resultProperty().get().verdict());
         assertTrue(verdict.endsWith(GradingViewModel.verdictWords(overall)), verdict);
         String caution = text(robot, "#caution");
         assertTrue(caution.startsWith("Caution: a statistical statement under assumptions"), caution);
-        assertTrue(robot.lookup("#char-caution").queryAs(Label.class).isVisible());
+        // the caution once on the page, not once per characteristic
+        assertEquals(1, fx(() -> robot.lookup(".pr-caution").queryAll().stream().filter(Node::isVisible).count()));
         // the charts name every line with its value: centre and both control limits, both specification limits
         for (String chart : List.of("#location-chart", "#spread-chart")) {
             List<String> legend = fx(() -> robot.lookup(chart).queryAs(CurvePlot.class).legend());
@@ -221,6 +228,10 @@ class FullFlowTest {
         List<String> limits = fx(() -> robot.lookup("#readings-chart").queryAs(CurvePlot.class).legend());
         assertTrue(limits.stream().anyMatch(n -> n.startsWith("LSL ")) && limits.stream().anyMatch(n -> n.startsWith("USL ")),
                 limits.toString());
+        // the histogram as in the report: bars, the planned shape's curve, both limits
+        List<String> bars = fx(() -> robot.lookup("#histogram-chart").queryAs(CurvePlot.class).legend());
+        assertTrue(bars.get(0).startsWith("readings: ") && bars.get(1).startsWith("fitted ")
+                && bars.stream().anyMatch(n -> n.startsWith("LSL ")), bars.toString());
         assertEquals(6, step());
         probe.phase("report");
         robot.clickOn("#export-report");

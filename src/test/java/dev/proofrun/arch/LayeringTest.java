@@ -37,7 +37,7 @@ class LayeringTest {
                         "dev.proofrun.control..", "dev.proofrun.design..", "dev.proofrun.schedule..",
                         "dev.proofrun.plan..", "dev.proofrun.grade..", "dev.proofrun.sheet..",
                         "dev.proofrun.report..", "dev.proofrun.cli..", "dev.proofrun.app..",
-                        "dev.proofrun.estimate..", "dev.proofrun.readings..", "dev.proofrun.capability..")
+                        "dev.proofrun.readings..", "dev.proofrun.capability..")
                 .check(classes);
     }
 
@@ -45,9 +45,17 @@ class LayeringTest {
     void theJobDoesNotReachForFilesOutOrPeopleIn() {
         noClasses().that().resideInAnyPackage("dev.proofrun.stats..", "dev.proofrun.control..",
                         "dev.proofrun.design..", "dev.proofrun.schedule..", "dev.proofrun.plan..",
-                        "dev.proofrun.grade..", "dev.proofrun.estimate..", "dev.proofrun.readings..", "dev.proofrun.capability..")
+                        "dev.proofrun.grade..", "dev.proofrun.readings..", "dev.proofrun.capability..")
                 .should().dependOnClassesThat().resideInAnyPackage(
                         "dev.proofrun.sheet..", "dev.proofrun.report..", "dev.proofrun.cli..", "dev.proofrun.app..")
+                .check(classes);
+    }
+
+    @Test
+    void theDesignDoesNotReachForTheGrader() {
+        // grade imports design (the plan's requirement, the stages); the designer simulates through control
+        noClasses().that().resideInAPackage("dev.proofrun.design..")
+                .should().dependOnClassesThat().resideInAPackage("dev.proofrun.grade..")
                 .check(classes);
     }
 

@@ -107,11 +107,12 @@ class GradeCommandTest {
         assertTrue(f7.at("/control/signals").size() > 0);
         assertTrue(f7.at("/control/signals/0/rule").asText().matches("[a-z-]+"));
         // the chance stays numeric; the demo's step goes beyond every simulated stable study, so its P is the floor
-        // 1/(S + 1) (S = 2000 simulated studies of 25 subgroups of 5) and the text says "P < 0.00050"
+        // 1/(S + 1) (S = 2000 simulated studies of 25 subgroups of 5) and the text says "below 0.0005"
         assertEquals(1.0 / 2001, f7.at("/control/chance/floor").asDouble(), 1e-15);
         assertEquals(1.0 / 2001, f7.at("/control/chance/location/p").asDouble(), 1e-15);
         assertTrue(f7.at("/control/chance/location/points").asInt() > 0);
-        assertTrue(f7.at("/reasons/1").asText().contains("P < 0.00050"), f7.at("/reasons/1").asText());
+        assertTrue(f7.at("/reasons/1").asText().contains("chance of as many or more: below 0.0005 and "),
+                f7.at("/reasons/1").asText());
         assertEquals(1.0, c.at("/control/chance/location/p").asDouble(), 0.0); // D1 is quiet
     }
 

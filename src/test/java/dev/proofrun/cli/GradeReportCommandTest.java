@@ -55,7 +55,7 @@ class GradeReportCommandTest {
             assertFalse(text.contains(tmp.toString()), "no folder of the grading machine in the report");
             assertTrue(text.contains("Returned file: " + DemoCommand.RETURNED + "."), text);
             assertTrue(text.contains("proofrun " + dev.proofrun.text.ProductVersion.get()), text);
-            assertTrue(text.contains("revision " + DemoPlan.create().revision().orElseThrow()), text);
+            assertTrue(text.contains("revision 1 (" + DemoPlan.create().revision().orElseThrow() + ")"), text);
             assertTrue(text.contains("Prepared by") && text.contains("Reviewed by"), "the block to sign");
             assertTrue(out.toString().contains("Wrote the grade report " + pdf), out.toString());
             assertTrue(doc.getNumberOfPages() >= 1 + DemoPlan.create().characteristics().size());

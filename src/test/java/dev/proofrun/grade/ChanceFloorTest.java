@@ -13,7 +13,7 @@ import org.junit.jupiter.api.io.TempDir;
 
 /**
  * When no simulated stable study reaches the observed count, the chance is not "P = 1/(S + 1)" but below it:
- * the text says "P &lt; floor" with the floor computed from the number of simulated studies S, while the
+ * the text says "below 0.0005" with the floor computed from the number of simulated studies S, while the
  * number itself (for JSON) stays the floor.
  */
 class ChanceFloorTest {
@@ -26,9 +26,19 @@ class ChanceFloorTest {
         assertEquals("0.00050", Stability.upTwoDigits(1.0 / 2001)); // 0.00049975... rounded up
         assertEquals("0.0025", Stability.upTwoDigits(1.0 / 401)); // 0.0024938...
         assertEquals("0.00050", Stability.upTwoDigits(0.0005));
-        assertEquals("P < 0.00050", Stability.chanceText(1.0 / 2001, true, "%.2g"));
-        assertEquals("P = 0.00050", Stability.chanceText(1.0 / 2001, false, "%.2g"));
-        assertEquals("P = 0.708", Stability.chanceText(0.7081, false, "%.3f"));
+        assertEquals("below 0.0005", Stability.chanceText(1.0 / 2001, true, "%.2g"));
+        assertEquals("below 0.0025", Stability.chanceText(1.0 / 401, true, "%.2g"));
+        assertEquals("0.00050", Stability.chanceText(1.0 / 2001, false, "%.2g"));
+        assertEquals("0.708", Stability.chanceText(0.7081, false, "%.3f"));
+    }
+
+    @Test
+    void pValuesReadAsWords() {
+        assertEquals("= 0.81", Stability.pText(0.8123));
+        assertEquals("= 0.00023", Stability.pText(0.00023));
+        assertEquals("below 0.0001", Stability.pText(2.5e-18));
+        assertEquals("below 0.0001", Stability.pText(Math.nextDown(1e-4)));
+        assertEquals("= 0.00010", Stability.pText(1e-4));
     }
 
     @Test
@@ -46,8 +56,8 @@ class ChanceFloorTest {
         assertEquals(floor, st.locationChance(), 0.0); // numeric value kept (JSON)
         assertFalse(st.spreadAtFloor());
         String text = g.reasons().stream().filter(r -> r.step() == Step.STABILITY).findFirst().orElseThrow().text();
-        assertTrue(text.contains("P < 0.00050 and P = "), text);
-        assertFalse(text.contains("P = 0.00050"), text);
+        assertTrue(text.contains("the chance of as many or more: below 0.0005 and "), text);
+        assertFalse(text.contains("0.00050"), text);
     }
 
     @Test

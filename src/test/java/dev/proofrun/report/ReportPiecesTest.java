@@ -54,7 +54,7 @@ class ReportPiecesTest {
                 s.setEndPage(p);
                 String page = s.getText(doc).replaceAll("\\s+", " ");
                 assertTrue(page.contains("Graded 2027-04-02 14:07 +02:00, proofrun 9.8.7"), "stamp on page " + p);
-                assertTrue(page.contains("@ " + plan.revision().orElseThrow()), "revision on page " + p);
+                assertTrue(page.contains(", revision 1 (" + plan.revision().orElseThrow() + ")"), "revision on page " + p);
                 assertTrue(page.contains("returned file returned.csv"), "file name on page " + p);
                 assertFalse(page.contains(dir.toString()), "no folder on page " + p);
                 assertTrue(page.contains("Part verdict: " + result.verdict().words() + "."), "verdict on page " + p);
@@ -86,7 +86,7 @@ class ReportPiecesTest {
      */
     @Test
     void histogramBinsAreWholeGaugeSteps() {
-        HistogramBlock.Bins b = HistogramBlock.bins(21.9950, 22.0070, 125, 0.0005);
+        Histogram.Bins b = HistogramBlock.bins(21.9950, 22.0070, 125, 0.0005);
         assertEquals(3, b.steps());
         assertEquals(9, b.count());
         assertEquals(0.0015, b.width(), 1e-12);
@@ -98,7 +98,7 @@ class ReportPiecesTest {
             assertTrue(frac > 0.1 && frac < 0.9, "grid value " + j + " sits inside its bin: " + frac);
             assertTrue(Math.floor(pos) < b.count(), "grid value " + j + " has a bin");
         }
-        HistogramBlock.Bins plain = HistogramBlock.bins(0, 1, 100, Double.NaN);
+        Histogram.Bins plain = HistogramBlock.bins(0, 1, 100, Double.NaN);
         assertEquals(10, plain.count());
         assertEquals(0, plain.steps());
     }

@@ -59,7 +59,8 @@ class SheetPdfTest {
             int pages = doc.getNumberOfPages();
             for (int p = 1; p <= pages; p++) {
                 String page = text(doc, p, p);
-                assertTrue(page.contains("Plan " + plan.id() + " @ " + revision), "fingerprint on page " + p);
+                // the revision said aloud beside the fingerprint (the demo plan is its first issue: revision 1)
+                assertTrue(page.contains("Plan " + plan.id() + ", revision 1 (" + revision + ")"), "fingerprint on page " + p);
                 assertTrue(page.contains("page " + p + " of " + pages), "page number on page " + p);
                 assertTrue(page.contains("valve body"), "part on page " + p);
                 assertTrue(!page.contains("DRAFT"), "an issued plan is not marked DRAFT");

@@ -1,6 +1,9 @@
 package dev.proofrun.app.grading;
 
 import dev.proofrun.app.AppMessage;
+import dev.proofrun.app.grading.GradingDisplay.GradeRow;
+import dev.proofrun.app.grading.GradingDisplay.ProblemRow;
+import dev.proofrun.app.grading.GradingDisplay.Tone;
 import dev.proofrun.app.session.Background;
 import dev.proofrun.app.session.DraftField;
 import dev.proofrun.app.session.Session;
@@ -10,17 +13,20 @@ import dev.proofrun.grade.GradeResult;
 import dev.proofrun.grade.Grader;
 import dev.proofrun.grade.PlanAdapter;
 import dev.proofrun.grade.Problem;
-import dev.proofrun.grade.Reason;
-import dev.proofrun.grade.Step;
+import dev.proofrun.grade.IndexEvidence;
 import dev.proofrun.plan.StudyPlan;
 import dev.proofrun.report.GradeReport;
 import dev.proofrun.sheet.layout.Paper;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
+import javafx.beans.binding.BooleanBinding;
 import javafx.beans.binding.Bindings;
+import javafx.beans.binding.ObjectBinding;
+import javafx.beans.binding.StringBinding;
 import javafx.beans.property.BooleanProperty;
 import javafx.beans.property.ObjectProperty;
 import javafx.beans.property.SimpleBooleanProperty;
@@ -39,9 +45,17 @@ public final class GradingViewModel extends StepViewModel {
 
     private final Session session;
     private final ObjectProperty<GradeResult> result = new SimpleObjectProperty<>(this, "result");
-    private final ObservableList<Problem> problems = FXCollections.observableArrayList();
-    private final ObservableList<CharacteristicGrade> grades = FXCollections.observableArrayList();
-    private final ObjectProperty<CharacteristicGrade> selected = new SimpleObjectProperty<>(this, "selected");
+    private final ObservableList<ProblemRow> problemRows = FXCollections.observableArrayList();
+    private final ObservableList<GradeRow> gradeRows = FXCollections.observableArrayList();
+    private final List<CharacteristicGrade> grades = new ArrayList<>();
+    private final StringProperty selected = new SimpleStringProperty(this, "selected");
+    private final ObjectProperty<GradingDisplay.Characteristic> shown = new SimpleObjectProperty<>(this, "shown");
+    private final BooleanBinding graded = result.isNotNull();
+    private final StringBinding verdictLine = Bindings.createStringBinding(() -> result.get() == null ? ""
+            : AppMessage.GRADING_VERDICT.format(result.get().planId(), this.gradedAgainst == null ? "revision " + result.get().revision()
+                    : this.gradedAgainst.revisionWords(), result.get().verdict().words()), result);
+    private final ObjectBinding<Tone> tone = Bindings.createObjectBinding(() -> result.get() == null ? Tone.OPEN
+            : EvidenceDisplay.tone(result.get().verdict()), result);
     private final BooleanProperty busy = new SimpleBooleanProperty(this, "busy", false);
     private final BooleanProperty reporting = new SimpleBooleanProperty(this, "reporting", false);
     private final StringProperty message = new SimpleStringProperty(this, "message", "");
@@ -56,6 +70,7 @@ public final class GradingViewModel extends StepViewModel {
         this.background = background;
         bindMissing(Bindings.createStringBinding(() -> "", result));
         session.openedProperty().addListener((o, was, now) -> forget(true));
+        selected.addListener((o, was, id) -> shown.set(grade(id).map(g -> EvidenceDisplay.of(g, gradedAgainst)).orElse(null)));
         returnedFile().addListener((o, was, now) -> {
             if (gradedFile != null && !gradedFile.equals(now == null ? "" : now.trim())) {
                 forget(false);
@@ -82,7 +97,8 @@ public final class GradingViewModel extends StepViewModel {
 
     private void clearResult() {
         result.set(null);
-        problems.clear();
+        problemRows.clear();
+        gradeRows.clear();
         grades.clear();
         selected.set(null);
         gradedAgainst = null;
@@ -107,16 +123,39 @@ public final class GradingViewModel extends StepViewModel {
         return result;
     }
 
-    public ObservableList<Problem> problems() {
-        return problems;
+    /** Whether a grade is on screen (its verdict, problems and evidence). */
+    public BooleanBinding gradedBinding() {
+        return graded;
     }
 
-    public ObservableList<CharacteristicGrade> grades() {
-        return grades;
+    /** "Verdict for plan PR-2027-0311, revision 1 (31ec1269d925): Not valid", or "" with no grade. */
+    public StringBinding verdictLineBinding() {
+        return verdictLine;
     }
 
-    public ObjectProperty<CharacteristicGrade> selectedProperty() {
+    /** The part verdict's mark. */
+    public ObjectBinding<Tone> toneBinding() {
+        return tone;
+    }
+
+    /** The problems of the returned file, in file order. */
+    public ObservableList<ProblemRow> problemRows() {
+        return problemRows;
+    }
+
+    /** One row per characteristic, in the plan's order. */
+    public ObservableList<GradeRow> gradeRows() {
+        return gradeRows;
+    }
+
+    /** The id of the characteristic looked at; setting it shows its evidence in {@link #shownProperty()}. */
+    public StringProperty selectedProperty() {
         return selected;
+    }
+
+    /** The evidence of the characteristic looked at, or null. */
+    public ObjectProperty<GradingDisplay.Characteristic> shownProperty() {
+        return shown;
     }
 
     public BooleanProperty busyProperty() {
@@ -178,10 +217,11 @@ public final class GradingViewModel extends StepViewModel {
     }
 
     private void apply(GradeResult r) {
+        grades.addAll(r.characteristics());
+        problemRows.setAll(r.problems().stream().map(GradingViewModel::row).toList());
+        gradeRows.setAll(r.characteristics().stream().map(GradingViewModel::row).toList());
         result.set(r);
-        problems.setAll(r.problems());
-        grades.setAll(r.characteristics());
-        selected.set(r.characteristics().isEmpty() ? null : r.characteristics().get(0));
+        selected.set(r.characteristics().isEmpty() ? null : r.characteristics().get(0).id());
         busy.set(false);
         message.set(AppMessage.GRADING_DONE.format(r.file(), verdictWords(r.verdict()).toLowerCase(Locale.ROOT), r.problems().size()));
     }
@@ -229,9 +269,17 @@ public final class GradingViewModel extends StepViewModel {
         return f.resolveSibling((r == null ? "proofrun" : r.planId()) + "-report.pdf");
     }
 
-    /** The reasons of one step of the evidence chain, one sentence each. */
-    public static List<String> reasons(CharacteristicGrade g, Step step) {
-        return g.reasons().stream().filter(r -> r.step() == step).map(Reason::text).toList();
+    private static ProblemRow row(Problem p) {
+        return new ProblemRow(p.location().row() > 0 ? Long.toString(p.location().row()) : "",
+                p.location().column() == null ? "" : p.location().column(), p.severity().id(),
+                p.characteristic() == null ? "" : p.characteristic(), p.message());
+    }
+
+    private static GradeRow row(CharacteristicGrade g) {
+        // an estimate beside "Not valid" would be read as a capability statement (the report leaves it out too)
+        IndexEvidence e = g.verdict() == dev.proofrun.grade.Verdict.NOT_VALID ? null : g.judged();
+        return new GradeRow(g.id(), g.name(), g.verdict().words(), e == null ? "—" : e.index().symbol() + " " + fmt(e.estimate()),
+                e == null ? "—" : fmt(e.lower()) + " vs " + fmt(e.required()));
     }
 
     /** "demonstrated" → "Demonstrated". */
@@ -245,6 +293,6 @@ public final class GradingViewModel extends StepViewModel {
     }
 
     static String fmt(double v) {
-        return String.format(Locale.ROOT, "%.3f", v);
+        return EvidenceDisplay.fmt(v);
     }
 }

@@ -1,10 +1,7 @@
 package dev.proofrun.app.handout;
 
 import dev.proofrun.app.shell.StepView;
-import dev.proofrun.sheet.layout.Paper;
 import java.io.File;
-import javafx.beans.binding.Bindings;
-import javafx.collections.FXCollections;
 import javafx.collections.ListChangeListener;
 import javafx.scene.Node;
 import javafx.scene.control.Button;
@@ -26,7 +23,7 @@ public final class HandoutView implements StepView {
 
     private final VBox root = new VBox(12);
     private final Button issue = new Button("_Issue the plan");
-    private final Button export = new Button("_Export PDF, CSV and XLSX");
+    private final Button export = new Button();
 
     public HandoutView(HandoutViewModel vm) {
         Label state = new Label();
@@ -37,26 +34,21 @@ public final class HandoutView implements StepView {
         issue.setId("issue");
         issue.getStyleClass().add("pr-primary");
         issue.setOnAction(e -> vm.issue());
-        issue.disableProperty().bind(Bindings.createBooleanBinding(() -> vm.composedBinding().get().plan().isEmpty()
-                || vm.issuedBinding().get().isPresent() || vm.issuingProperty().get(), vm.composedBinding(),
-                vm.issuedBinding(), vm.issuingProperty()));
+        issue.disableProperty().bind(vm.canIssueBinding().not());
         Label message = new Label();
         message.setId("handout-message");
         message.setWrapText(true);
         message.textProperty().bind(vm.messageProperty());
         Button saveAs = new Button("Sa_ve as…");
         saveAs.setId("save-as");
-        saveAs.disableProperty().bind(Bindings.createBooleanBinding(() -> (vm.composedBinding().get().plan().isEmpty()
-                && vm.issuedBinding().get().isEmpty()) || vm.issuingProperty().get(), vm.composedBinding(),
-                vm.issuedBinding(), vm.issuingProperty()));
+        saveAs.disableProperty().bind(vm.canSaveAsBinding().not());
         saveAs.setOnAction(e -> vm.saveAs());
         VBox issueCard = new VBox(state, new HBox(8, issue, saveAs), message);
         issueCard.getStyleClass().add("pr-card");
 
-        ChoiceBox<Paper> paper = new ChoiceBox<>(FXCollections.observableArrayList(Paper.values()));
+        ChoiceBox<String> paper = new ChoiceBox<>(vm.papers());
         paper.setId("paper");
-        paper.valueProperty().bindBidirectional(vm.paperProperty());
-        paper.valueProperty().addListener((o, a, b) -> vm.refreshPreview());
+        paper.valueProperty().bindBidirectional(vm.paperChoiceProperty());
         TextField folder = new TextField(vm.exportFolder().toString());
         folder.setId("export-folder");
         folder.setPrefColumnCount(28);
@@ -74,8 +66,8 @@ public final class HandoutView implements StepView {
             }
         });
         export.setId("export");
-        export.disableProperty().bind(Bindings.createBooleanBinding(() -> vm.issuedBinding().get().isEmpty()
-                || vm.exportingProperty().get(), vm.issuedBinding(), vm.exportingProperty()));
+        export.textProperty().bind(vm.exportLabelBinding());
+        export.disableProperty().bind(vm.exportableBinding().not().or(vm.exportingProperty()));
         export.setOnAction(e -> vm.exportTo(folder.getText()));
         Button open = new Button("_Open the PDF");
         open.setId("open-pdf");

@@ -3,24 +3,15 @@ package dev.proofrun.app.handout;
 import dev.proofrun.app.AppMessage;
 import dev.proofrun.app.goal.GoalViewModel;
 import dev.proofrun.app.session.Background;
-import dev.proofrun.app.session.CharacteristicDraft;
-import dev.proofrun.app.session.PlanBridge;
 import dev.proofrun.app.session.Session;
 import dev.proofrun.app.shell.StepViewModel;
 import dev.proofrun.app.sizing.SizingViewModel;
 import dev.proofrun.app.timing.TimingViewModel;
-import dev.proofrun.design.Design;
-import dev.proofrun.plan.PlanFiles;
-import dev.proofrun.plan.PlanState;
 import dev.proofrun.plan.StudyPlan;
 import dev.proofrun.sheet.SheetFiles;
-import dev.proofrun.sheet.SheetPdf;
+import dev.proofrun.sheet.SheetPreview;
 import dev.proofrun.sheet.layout.Paper;
-import dev.proofrun.text.UserException;
-import java.awt.image.BufferedImage;
-import java.io.ByteArrayOutputStream;
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import java.util.function.Consumer;
@@ -37,9 +28,6 @@ import javafx.collections.FXCollections;
 import javafx.collections.ObservableList;
 import javafx.embed.swing.SwingFXUtils;
 import javafx.scene.image.Image;
-import org.apache.pdfbox.Loader;
-import org.apache.pdfbox.pdmodel.PDDocument;
-import org.apache.pdfbox.rendering.PDFRenderer;
 
 /**
  * Issues the plan (the core fingerprints it and the file is written), previews the collection sheet
@@ -50,11 +38,11 @@ public final class HandoutViewModel extends StepViewModel {
 
     private static final float PREVIEW_DPI = 60f;
     private final Session session;
-    private final GoalViewModel goal;
-    private final SizingViewModel sizing;
-    private final TimingViewModel timing;
+    private final ComposedPlan plans;
+    private final PlanWrites writes;
     private final ObjectBinding<Composed> composed;
-    private final ObjectProperty<Paper> paper = new SimpleObjectProperty<>(this, "paper", Paper.A4);
+    private final ObservableList<String> papers = FXCollections.observableArrayList(paperNames());
+    private final StringProperty paperChoice = new SimpleStringProperty(this, "paper", papers.get(0));
     private final ObservableList<Image> pages = FXCollections.observableArrayList();
     private final BooleanProperty busy = new SimpleBooleanProperty(this, "busy", false);
     private final BooleanProperty exporting = new SimpleBooleanProperty(this, "exporting", false);
@@ -62,10 +50,11 @@ public final class HandoutViewModel extends StepViewModel {
     private final StringProperty message = new SimpleStringProperty(this, "message", "");
     private final ObjectProperty<SheetFiles.Written> exported = new SimpleObjectProperty<>(this, "exported");
     private final StringBinding state;
+    private final StringBinding exportLabel;
+    private final javafx.beans.binding.BooleanBinding exportable;
     private final ObjectBinding<Optional<StudyPlan>> issued;
     private Consumer<String> opener = uri -> { };
     private final Background background;
-    private final Background files;
     private Background.Job preview;
     private long generation;
 
@@ -81,13 +70,15 @@ public final class HandoutViewModel extends StepViewModel {
             Background background, Background files) {
         this.session = session;
         this.background = background;
-        this.files = files;
-        this.goal = goal;
-        this.sizing = sizing;
-        this.timing = timing;
-        composed = Bindings.createObjectBinding(this::compose, session.draft().editsProperty(), sizing.designBinding(),
-                timing.scheduleChanges(), timing.busyProperty(), goal.requirementBinding(), session.baseProperty());
-        issued = Bindings.createObjectBinding(this::computeIssued, composed, session.baseProperty());
+        plans = new ComposedPlan(session, goal, sizing, timing);
+        writes = new PlanWrites(session, plans, files, issuing, message, this::getMissing, this::refreshPreview);
+        composed = plans.composed();
+        issued = plans.issued();
+        paperChoice.addListener((o, a, b) -> refreshPreview());
+        exportable = Bindings.createBooleanBinding(() -> issued.get().isPresent() || composed.get().plan().isPresent(),
+                issued, composed);
+        exportLabel = Bindings.createStringBinding(() -> (issued.get().isPresent() || !exportable.get()
+                ? AppMessage.HANDOUT_EXPORT : AppMessage.HANDOUT_EXPORT_DRAFT).format(), issued, exportable);
         state = Bindings.createStringBinding(this::describeState, issued, session.baseProperty());
         bindMissing(Bindings.createStringBinding(() -> {
             Composed c = composed.get();
@@ -125,8 +116,32 @@ public final class HandoutViewModel extends StepViewModel {
         this.opener = opener;
     }
 
-    public ObjectProperty<Paper> paperProperty() {
-        return paper;
+    /** The paper sizes offered, by name ("A4", "Letter"). */
+    public ObservableList<String> papers() {
+        return papers;
+    }
+
+    /** The paper chosen, one of {@link #papers()}; a change draws the preview again. */
+    public StringProperty paperChoiceProperty() {
+        return paperChoice;
+    }
+
+    private static List<String> paperNames() {
+        return java.util.Arrays.stream(Paper.values()).map(HandoutViewModel::paperName).toList();
+    }
+
+    private static String paperName(Paper p) {
+        String token = p.name();
+        return token.length() <= 2 ? token : token.charAt(0) + token.substring(1).toLowerCase(java.util.Locale.ROOT);
+    }
+
+    private Paper paper() {
+        for (Paper p : Paper.values()) {
+            if (paperName(p).equals(paperChoice.get())) {
+                return p;
+            }
+        }
+        return Paper.A4;
     }
 
     public ObservableList<Image> pages() {
@@ -145,7 +160,7 @@ public final class HandoutViewModel extends StepViewModel {
         return exported;
     }
 
-    /** "Issued as revision 3f2a9c01b7de", "Draft, not issued", "Changed since revision … was issued". */
+    /** "Issued as revision 2 (3f2a9c01b7de)", "Draft of revision 1, not issued yet", "Changed since revision … was issued". */
     public StringBinding stateBinding() {
         return state;
     }
@@ -164,185 +179,41 @@ public final class HandoutViewModel extends StepViewModel {
         return issued;
     }
 
-    /**
-     * The base, when it is issued and the steps describe exactly it. Equal plans have equal fingerprints, so
-     * a plan equal to the base (apart from state and revision) needs no fingerprint; otherwise the
-     * fingerprint is taken once per distinct plan (the rail asks on every edit of any step, and most edits
-     * leave the plan as it was or return to it).
-     */
-    private Optional<StudyPlan> computeIssued() {
-        StudyPlan base = session.baseProperty().get();
-        Optional<StudyPlan> now = composed.get().plan();
-        if (base == null || !base.isIssued() || now.isEmpty()) {
-            return Optional.empty();
-        }
-        StudyPlan same = withSupersedes(now.get(), base.supersedes());
-        if (same.equals(withSupersedes(base, base.supersedes()))) {
-            return Optional.of(base);
-        }
-        return fingerprintOf(same).equals(base.revision().orElse("")) ? Optional.of(base) : Optional.empty();
-    }
-
-    private StudyPlan fingerprinted;
-    private String fingerprint;
-
-    private String fingerprintOf(StudyPlan plan) {
-        if (!plan.equals(fingerprinted)) {
-            fingerprint = PlanFiles.fingerprint(plan);
-            fingerprinted = plan;
-        }
-        return fingerprint;
-    }
-
-    private static StudyPlan withSupersedes(StudyPlan p, Optional<String> supersedes) {
-        return new StudyPlan(p.id(), p.part(), p.people(), p.characteristics(), p.calendar(), p.span(), p.design(),
-                p.spacing(), p.seed(), p.schedule(), PlanState.DRAFT, Optional.empty(), supersedes);
-    }
-
     /** The folder exports go to by default: beside the plan file, else the plans folder. */
     public Path exportFolder() {
         Path f = session.draft().planFileProperty().get();
         return f != null ? f.toAbsolutePath().getParent() : session.home().plansFolder();
     }
 
-    private Composed compose() {
-        Optional<Design> design = sizing.designBinding().get();
-        Optional<dev.proofrun.design.Requirement> req = goal.requirementBinding().get();
-        if (design.isEmpty() || req.isEmpty() || timing.calendarBinding().get().isEmpty()
-                || timing.spanBinding().get().isEmpty() || timing.spacing().isEmpty() || timing.seed().isEmpty()
-                || timing.busyProperty().get() || timing.schedule().isEmpty()) {
-            return new Composed(Optional.empty(), "");
-        }
-        List<String> lacking = new ArrayList<>();
-        for (CharacteristicDraft row : session.draft().characteristics()) {
-            if (goal.expectationFor(row).isEmpty() || row.limits().isEmpty()) {
-                lacking.add(row.id());
-            }
-        }
-        if (!lacking.isEmpty()) {
-            return new Composed(Optional.empty(), AppMessage.HANDOUT_NO_EXPECTATION.format(String.join(", ", lacking)));
-        }
-        try {
-            StudyPlan p = PlanBridge.compose(session.draft(), session.base(), req.get(),
-                    row -> goal.expectationFor(row).orElseThrow(), timing.calendarBinding().get().get(),
-                    timing.spanBinding().get().get(), design.get(), timing.spacing().get(), timing.seed().get(),
-                    timing.schedule().get());
-            return new Composed(Optional.of(p), "");
-        } catch (UserException | IllegalArgumentException | java.util.NoSuchElementException e) {
-            return new Composed(Optional.empty(), e.getMessage());
-        }
-    }
-
     private String describeState() {
         StudyPlan base = session.baseProperty().get();
         if (issuedNow().isPresent()) {
-            return AppMessage.HANDOUT_ISSUED.format(base.revision().orElse(""));
+            return AppMessage.HANDOUT_ISSUED.format(base.revisionWords());
         }
         if (base != null && base.isIssued()) {
-            return AppMessage.HANDOUT_CHANGED.format(base.revision().orElse(""));
+            return AppMessage.HANDOUT_CHANGED.format(base.revisionWords(), base.revisionNumber() + 1);
         }
-        return AppMessage.HANDOUT_DRAFT.format();
+        return AppMessage.HANDOUT_DRAFT.format(base == null ? 1 : base.revisionNumber());
     }
 
     /**
-     * Issues what the steps describe and writes it to the plan file; for a new plan the user is asked where
-     * ({@link Session#choosePlanFile}, offering {@code <id>.json} in the user's plans folder). A changed issued plan becomes a new revision that supersedes the old one.
-     *
-     * <p>The fingerprint and the synced write run in the background ({@link #issuingProperty()} is true
-     * meanwhile); the revision appears when the file is written, and a failure is said in
-     * {@link #messageProperty()}. Edits made meanwhile are kept as unsaved (see {@link Session#adopt}); if
-     * another plan was opened meanwhile, only the message tells where the issued plan went.
+     * Issues what the steps describe and writes it to the plan file, in the background; see
+     * {@link PlanWrites#issue()}.
      *
      * @return true when the issue was started (or the plan is already issued as it stands)
      */
     public boolean issue() {
-        if (issuing.get()) {
-            return false;
-        }
-        Optional<StudyPlan> now = composed.get().plan();
-        if (now.isEmpty()) {
-            message.set(getMissing());
-            return false;
-        }
-        if (issuedNow().isPresent()) {
-            message.set(AppMessage.HANDOUT_ALREADY.format(issuedNow().get().revision().orElse("")));
-            return true;
-        }
-        StudyPlan base = session.baseProperty().get();
-        StudyPlan draft = base != null && base.isIssued() ? withSupersedes(now.get(), base.revision()) : now.get();
-        Path planFile = session.draft().planFileProperty().get();
-        Optional<Path> chosen = planFile != null ? Optional.of(planFile)
-                : session.choosePlanFile(session.home().plansFolder().resolve(draft.id() + ".json"));
-        if (chosen.isEmpty()) {
-            message.set(AppMessage.HANDOUT_NOT_SAVED.format());
-            return false;
-        }
-        Path file = chosen.get();
-        int editsAtStart = session.draft().editsProperty().get();
-        int openedAtStart = session.openedCount();
-        issuing.set(true);
-        message.set(AppMessage.HANDOUT_ISSUING.format(file.getFileName()));
-        files.submit(() -> {
-            StudyPlan issued = PlanFiles.issue(draft);
-            return new Written(session.write(file, issued), issued);
-        }, w -> {
-            issuing.set(false);
-            String revision = w.plan().revision().orElse("");
-            if (session.openedCount() != openedAtStart) {
-                message.set(AppMessage.HANDOUT_ISSUED_ELSEWHERE.format(revision, w.file()));
-                return;
-            }
-            session.adopt(w.file(), w.plan(), session.draft().editsProperty().get() != editsAtStart);
-            message.set(AppMessage.HANDOUT_ISSUED_NOW.format(revision, w.file().getFileName()));
-            refreshPreview();
-        }, ex -> {
-            issuing.set(false);
-            message.set(AppMessage.HANDOUT_ISSUE_FAILED.failure(ex));
-        });
-        return true;
-    }
-
-    private record Written(Path file, StudyPlan plan) {
+        return writes.issue();
     }
 
     /**
-     * Save as…: writes the plan as it stands (the issued plan when the steps describe it, else the draft
-     * plan) to a file the user chooses, in the background; the draft then belongs to that file. Nothing is
-     * written when the user chooses nothing or the plan is incomplete.
+     * Save as…: writes the plan as it stands to a file the user chooses, in the background; see
+     * {@link PlanWrites#saveAs(Path)}.
      *
      * @return true when the write was started
      */
     public boolean saveAs() {
-        if (issuing.get()) {
-            return false;
-        }
-        Optional<StudyPlan> plan = issuedNow().or(() -> composed.get().plan());
-        if (plan.isEmpty()) {
-            message.set(getMissing());
-            return false;
-        }
-        Optional<Path> chosen = session.choosePlanFile(exportFolder().resolve(plan.get().id() + ".json"));
-        if (chosen.isEmpty()) {
-            message.set(AppMessage.HANDOUT_NOT_SAVED.format());
-            return false;
-        }
-        StudyPlan p = plan.get();
-        int editsAtStart = session.draft().editsProperty().get();
-        int openedAtStart = session.openedCount();
-        issuing.set(true);
-        message.set(AppMessage.HANDOUT_SAVING.format(chosen.get().getFileName()));
-        files.submit(() -> session.write(chosen.get(), p), written -> {
-            issuing.set(false);
-            if (session.openedCount() != openedAtStart) {
-                return;
-            }
-            session.adopt(written, p, session.draft().editsProperty().get() != editsAtStart);
-            message.set(AppMessage.HANDOUT_SAVED_AS.format(written));
-        }, ex -> {
-            issuing.set(false);
-            message.set(AppMessage.HANDOUT_SAVE_FAILED.failure(ex));
-        });
-        return true;
+        return writes.saveAs(exportFolder());
     }
 
     /** True while the plan is being issued and written. */
@@ -355,30 +226,33 @@ public final class HandoutViewModel extends StepViewModel {
     }
 
     /**
-     * Writes the sheet PDF and both fill-in files of the issued plan into the folder, in the background
-     * (the PDF and the workbook take a second or more on a cold start). {@link #exportedProperty()} is set
-     * when they are written; {@link #exportingProperty()} is true meanwhile.
+     * Writes the sheet PDF and both fill-in files into the folder, in the background (the PDF and the workbook
+     * take a second or more on a cold start): the issued plan's, or, before it is issued, the plan as the steps
+     * describe it, marked DRAFT on every page as {@code proofrun sheet --draft} writes it (for review; the
+     * grader refuses a draft's returned file). {@link #exportedProperty()} is set when they are written;
+     * {@link #exportingProperty()} is true meanwhile.
      */
     public boolean export(Path dir) {
-        Optional<StudyPlan> issued = issuedNow();
-        if (issued.isEmpty()) {
-            message.set(AppMessage.HANDOUT_ISSUE.format());
+        Optional<StudyPlan> chosen = issuedNow().or(plans::nextIssue);
+        if (chosen.isEmpty()) {
+            message.set(getMissing());
             return false;
         }
-        StudyPlan plan = issued.get();
-        Paper size = paper.get();
+        StudyPlan plan = chosen.get();
+        boolean draft = !plan.isIssued();
+        Paper size = paper();
         exporting.set(true);
         exported.set(null);
         message.set(AppMessage.HANDOUT_EXPORTING.format(dir));
         int openedAtStart = session.openedCount();
-        background.submit(() -> SheetFiles.write(plan, dir, size, false), w -> {
+        background.submit(() -> SheetFiles.write(plan, dir, size, draft), w -> {
             exporting.set(false);
             if (session.openedCount() != openedAtStart) {
                 return; // written for a plan no longer on the desk: nothing of it shows under this one
             }
             exported.set(w);
-            message.set(AppMessage.HANDOUT_EXPORTED.format(dir, w.pdf().getFileName(), w.csv().getFileName(),
-                    w.xlsx().getFileName()));
+            message.set((draft ? AppMessage.HANDOUT_EXPORTED_DRAFT : AppMessage.HANDOUT_EXPORTED).format(dir,
+                    w.pdf().getFileName(), w.csv().getFileName(), w.xlsx().getFileName()));
         }, ex -> {
             exporting.set(false);
             if (session.openedCount() == openedAtStart) {
@@ -401,6 +275,28 @@ public final class HandoutViewModel extends StepViewModel {
             message.set(AppMessage.HANDOUT_BAD_FOLDER.format(text));
             return false;
         }
+    }
+
+    /** Whether Issue can be pressed: a complete plan, not issued as it stands, no write under way. */
+    public javafx.beans.binding.BooleanBinding canIssueBinding() {
+        return Bindings.createBooleanBinding(() -> composed.get().plan().isPresent() && issued.get().isEmpty()
+                && !issuing.get(), composed, issued, issuing);
+    }
+
+    /** Whether Save as… can be pressed: a complete or issued plan, no write under way. */
+    public javafx.beans.binding.BooleanBinding canSaveAsBinding() {
+        return Bindings.createBooleanBinding(() -> (composed.get().plan().isPresent() || issued.get().isPresent())
+                && !issuing.get(), composed, issued, issuing);
+    }
+
+    /** What the export button says: the issued plan's files, or a DRAFT's before it is issued. */
+    public StringBinding exportLabelBinding() {
+        return exportLabel;
+    }
+
+    /** Whether there is something to export: the issued plan, or a complete draft. */
+    public javafx.beans.binding.BooleanBinding exportableBinding() {
+        return exportable;
     }
 
     /** True while the three files are being written. */
@@ -431,18 +327,13 @@ public final class HandoutViewModel extends StepViewModel {
             return;
         }
         StudyPlan p = plan.get();
-        Paper size = paper.get();
+        Paper size = paper();
         busy.set(true);
         preview = background.submit(() -> {
-            ByteArrayOutputStream bytes = new ByteArrayOutputStream();
-            SheetPdf.write(p, size, bytes);
-            List<Image> out = new ArrayList<>();
-            try (PDDocument doc = Loader.loadPDF(bytes.toByteArray())) {
-                PDFRenderer r = new PDFRenderer(doc);
-                for (int i = 0; i < doc.getNumberOfPages() && !Thread.currentThread().isInterrupted(); i++) {
-                    BufferedImage img = r.renderImageWithDPI(i, PREVIEW_DPI);
-                    out.add(SwingFXUtils.toFXImage(img, null));
-                }
+            List<Image> out = new java.util.ArrayList<>();
+            for (java.awt.image.BufferedImage page : SheetPreview.pages(p, size, PREVIEW_DPI,
+                    () -> Thread.currentThread().isInterrupted())) {
+                out.add(SwingFXUtils.toFXImage(page, null));
             }
             return out;
         }, images -> {

@@ -94,7 +94,10 @@ class HandoutViewModelTest {
         assertEquals(issued.revision(), PlanFiles.read(planFile).revision(), "the file holds the new revision");
         assertFalse(session.draft().dirtyProperty().get());
         assertTrue(vm.issuedNow().isPresent());
-        assertEquals("Issued as revision " + issued.revision().orElseThrow(), vm.stateBinding().get());
+        // the demo plan is revision 1; the change issued is revision 2, said beside its fingerprint
+        assertEquals(2, issued.revisionNumber());
+        assertEquals(2, PlanFiles.read(planFile).revisionNumber(), "the file holds the number");
+        assertEquals("Issued as revision 2 (" + issued.revision().orElseThrow() + ")", vm.stateBinding().get());
         assertTrue(vm.completeBinding().get());
     }
 
@@ -110,7 +113,7 @@ class HandoutViewModelTest {
         DraftSnapshot kept = session.drafts().newerDraft(planFile).orElseThrow();
         assertEquals("Night shift lead", kept.fields().get(DraftField.COLLECTOR.name()), "and it is autosaved");
         assertTrue(vm.issuedNow().isEmpty());
-        assertTrue(vm.stateBinding().get().startsWith("Changed since revision " + issued.revision().orElseThrow()),
+        assertTrue(vm.stateBinding().get().startsWith("Changed since revision 2 (" + issued.revision().orElseThrow() + ") was issued: issue it again to make revision 3"),
                 vm.stateBinding().get());
     }
 
@@ -127,5 +130,40 @@ class HandoutViewModelTest {
         assertFalse(vm.messageProperty().get().isBlank());
         assertEquals(before, session.base().orElseThrow().revision().orElseThrow());
         assertTrue(session.draft().dirtyProperty().get());
+    }
+
+    @Test
+    void aDraftCanBeExportedMarkedDraftAndTheIssuedPlanAsItIs() throws Exception {
+        session = new Session(new AppHome(home, home.resolve("plans")));
+        GoalViewModel goal = new GoalViewModel(session.draft(), session.baseProperty());
+        SizingViewModel sizing = new SizingViewModel(session.draft(), goal, Background.inline());
+        TimingViewModel timing = new TimingViewModel(session.draft(), sizing.designBinding(), Background.inline());
+        Held exports = new Held();
+        vm = new HandoutViewModel(session, goal, sizing, timing, exports, files);
+        session.open(session.demoFile());
+        assertTrue(vm.exportableBinding().get());
+        assertEquals("_Export PDF, CSV and XLSX", vm.exportLabelBinding().get(), "the demo is issued as it stands");
+
+        session.draft().field(DraftField.SEED).set("20270405"); // changed: a draft until issued again
+        assertTrue(vm.issuedNow().isEmpty());
+        assertTrue(vm.exportableBinding().get(), "a complete draft can be exported");
+        assertEquals("_Export the DRAFT sheet and files", vm.exportLabelBinding().get());
+        Path out = home.resolve("draft-out");
+        assertTrue(vm.export(out));
+        exports.runAll();
+        assertTrue(vm.messageProperty().get().startsWith("Written to " + out + ", marked DRAFT on every page"),
+                vm.messageProperty().get());
+        String id = session.base().orElseThrow().id();
+        String text;
+        try (org.apache.pdfbox.pdmodel.PDDocument doc = org.apache.pdfbox.Loader.loadPDF(out.resolve(id + "-sheet.pdf").toFile())) {
+            text = new org.apache.pdfbox.text.PDFTextStripper().getText(doc);
+        }
+        assertTrue(text.contains("DRAFT"), "the sheet is marked DRAFT");
+        assertTrue(Files.readString(out.resolve(id + "-fill-in.csv")).contains(id + "@draft"),
+                "the fill-in file names no revision");
+
+        session.draft().field(DraftField.SEED).set("");  // incomplete: nothing to export
+        assertFalse(vm.exportableBinding().get());
+        assertFalse(vm.export(out));
     }
 }
