@@ -75,7 +75,7 @@ final class PercentileJudge {
         reasons.add(new Reason(Step.CAPABILITY, false, method));
         double upper = estimate < req.minimum() ? b[1] * f : Double.NaN;
         return new IndexEvidence(kind, req.minimum(), req.confidence(), estimate * f, b[0] * f, upper,
-                ShapeModel.of(family), IndexMethod.PERCENTILE, ppm, seed);
+                ShapeModel.of(family), pivotal ? IndexMethod.PERCENTILE : IndexMethod.PERCENTILE_INVERTED, ppm, seed);
     }
 
     /** The overall-family index with the same side: Cpk → Ppk. */
