@@ -19,8 +19,8 @@ import org.apache.commons.statistics.distribution.NormalDistribution;
  *     model cannot tell from normal ones far from zero, and is not a fit. SciPy's
  *     {@code foldnorm.fit(x, floc=0)} (shape c = μ/σ, scale σ) maximises the same likelihood.</li>
  * </ul>
- * Not yet a declared shape: the lower bound of the percentile index under this model has not been shown
- * to hold (see {@code docs/decisions/declared-shape-grading.md}, "Folded normal and the threshold forms").
+ * The declared shape {@code folded-normal}; its index bounds are {@link FoldedNormalBound}'s, its fit check
+ * {@link FoldedNormalBootstrap}'s (coverage figures: {@code docs/decisions/declared-shape-grading.md}, "Folded normal").
  */
 public final class FoldedNormal {
 
