@@ -84,7 +84,7 @@ public final class PlanNewCommand implements Callable<Integer> {
     @Option(names = "--nominal", paramLabel = "X", description = "Nominal value.")
     Double nominal;
     @Option(names = "--shape", paramLabel = "NAME",
-            description = "The distribution the readings are planned to follow: normal (default), lognormal or weibull.")
+            description = "The distribution the readings are planned to follow: normal (default), lognormal, weibull or folded-normal.")
     String shape;
     @Option(names = "--gauge", paramLabel = "NAME", description = "Gauge name (with --resolution; a resolution alone"
             + " is kept for an unnamed gauge).")
@@ -192,7 +192,8 @@ public final class PlanNewCommand implements Callable<Integer> {
         w.println(design.reason());
         for (Characteristic c : chars) {
             if (!c.shape().isNormal()) {
-                w.println("warning: " + SizeMessage.SHAPE_SIZED_AS_NORMAL.format(c.id(), c.shape().token(), c.shape().token()));
+                w.println("warning: " + (c.shape().isLocationScale() ? SizeMessage.SHAPE_SIZED_AS_NORMAL.format(c.id(), c.shape().token(), c.shape().token())
+                        : SizeMessage.SHAPE_NOT_SIZED_AS_NORMAL.format(c.id(), c.shape().token(), ShapeSize.plannable())));
             }
         }
         w.println(PlanOptionMessage.WROTE.format(out, plan.summary()));

@@ -48,6 +48,12 @@ final class ShapeSize {
         this.rows = rows;
     }
 
+    /** The skewed shapes {@code size --shape} can plan, comma separated (the location–scale ones). */
+    static String plannable() {
+        return java.util.Arrays.stream(ShapeFamily.values()).filter(f -> !f.isNormal() && f.isLocationScale())
+                .map(ShapeFamily::token).collect(java.util.stream.Collectors.joining(", "));
+    }
+
     /**
      * From pilot readings: the declared shape fitted to them gives the shape parameter (hence the skewness) and,
      * unless {@code c1} is given, the expected index (the pilot's estimate; its own uncertainty is not in the

@@ -68,7 +68,8 @@ final class SharedSize {
         List<String> warnings = new ArrayList<>();
         for (Characteristic c : chars) {
             if (!c.shape().isNormal()) {
-                warnings.add(SizeMessage.SHAPE_SIZED_AS_NORMAL.format(c.id(), c.shape().token(), c.shape().token()));
+                warnings.add((c.shape().isLocationScale() ? SizeMessage.SHAPE_SIZED_AS_NORMAL.format(c.id(), c.shape().token(), c.shape().token())
+                        : SizeMessage.SHAPE_NOT_SIZED_AS_NORMAL.format(c.id(), c.shape().token(), ShapeSize.plannable())));
             }
         }
         for (int n : first.subgroupSizes()) {

@@ -128,7 +128,7 @@ public final class SizeCommand implements Callable<Integer> {
     java.nio.file.Path characteristics;
 
     @Option(names = "--shape", paramLabel = "normal|lognormal|weibull",
-            description = "The shape the readings are planned to follow (default normal); lognormal and weibull need --skewness.")
+            description = "The shape the readings are planned to follow (default normal); lognormal and weibull need --skewness; folded-normal cannot be planned here yet.")
     String shape;
 
     @Option(names = "--skewness", paramLabel = "G", description = "The expected skewness of the readings (with --shape).")
@@ -174,6 +174,9 @@ public final class SizeCommand implements Callable<Integer> {
             throw new UserException(SizeMessage.TARGET_NEEDED);
         }
         ShapeFamily family = shape == null ? ShapeFamily.NORMAL : Conventions.shape(shape);
+        if (!family.isLocationScale()) {
+            throw new UserException(SizeMessage.SHAPE_NOT_SIZED, family.token(), ShapeSize.plannable());
+        }
         if (!family.isNormal()) {
             List<Integer> sizes = subgroupSizes == null || subgroupSizes.isEmpty()
                     ? IntStream.rangeClosed(1, 10).boxed().toList() : subgroupSizes;

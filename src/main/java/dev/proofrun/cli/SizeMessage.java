@@ -22,6 +22,10 @@ public enum SizeMessage implements MessageKey {
             + " To raise it, ask each characteristic for more power."),
     SHAPE_SIZED_AS_NORMAL("%s is planned %s, but its power here is the normal model's; size it alone with"
             + " 'size --shape %s --skewness G --spec upper|lower' and use the larger study"),
+    SHAPE_NOT_SIZED("size --shape cannot plan the %s shape: its power is not computed yet; size --shape plans %s."
+            + " Characteristics of that shape can still be planned (plan new --shape) and graded"),
+    SHAPE_NOT_SIZED_AS_NORMAL("%s is planned %s, but its power here is the normal model's, and size --shape cannot"
+            + " plan that shape yet (it plans %s): treat the promised power as approximate"),
     SHAPE_CAUTION("A demonstrated index is a statistical statement under assumptions (stability, independence, readings"
             + " of the planned shape, a capable gauge). It does not replace the customer's requirements, applicable"
             + " standards or local codes, licensed practice, or the extra controls that safety-critical characteristics need."),

@@ -14,7 +14,13 @@ public enum IndexMethod {
      * Lognormal or Weibull model: the percentile index of ISO 22514-2 (Clements 1989) from the fitted model's
      * quantiles, on the overall spread; bounds by generalized pivotal quantities ({@code stats.PivotalBound}).
      */
-    PERCENTILE("iso-22514-2-percentile", "the ISO 22514-2 percentile method, generalized pivotal bounds");
+    PERCENTILE("iso-22514-2-percentile", "the ISO 22514-2 percentile method, generalized pivotal bounds"),
+    /**
+     * Folded-normal model: the same percentile index (the same JSON token, the model tells them apart); bounds by
+     * inverting the test of the index at each mean/σ of a confidence set and keeping the least favourable
+     * ({@code stats.FoldedNormalBound}).
+     */
+    PERCENTILE_INVERTED("iso-22514-2-percentile", "the ISO 22514-2 percentile method, bounds at the least favourable mean/sigma");
 
     private final String id;
     private final String words;

@@ -3,6 +3,7 @@ package dev.proofrun.grade;
 import dev.proofrun.design.Requirement;
 import dev.proofrun.stats.IndexKind;
 import dev.proofrun.stats.PercentileIndex;
+import dev.proofrun.stats.FoldedNormalBound;
 import dev.proofrun.stats.PivotalBound;
 import dev.proofrun.stats.ShapeFamily;
 import dev.proofrun.stats.ShapeFit;
@@ -14,7 +15,8 @@ import java.util.OptionalInt;
 /**
  * The capability step under a declared lognormal or Weibull shape: the percentile index of ISO 22514-2
  * ({@link PercentileIndex}) from the fitted model, its bounds by generalized pivotal quantities
- * ({@link PivotalBound}, seeded, the seed in the result), and the expected ppm under the model.
+ * ({@link PivotalBound}; for the folded normal, which is not location–scale, test inversion at the least
+ * favourable mean/σ, {@link FoldedNormalBound}; seeded, the seed in the result), and the expected ppm under the model.
  *
  * <p><b>Within versus overall.</b> The fit uses all readings, so the index is an overall (Pp-family) index.
  * A Cp-family requirement (Cpk, Cpu, …) under such a shape is judged on this overall index and the result says
@@ -54,19 +56,26 @@ final class PercentileJudge {
             return null;
         }
         long seed = PivotalBound.DEFAULT_SEED;
-        double[] b = PivotalBound.bounds(fit, kind, limits, readings, req.confidence(), seed);
+        boolean pivotal = family.isLocationScale();
+        double[] b = pivotal ? PivotalBound.bounds(fit, kind, limits, readings, req.confidence(), seed)
+                : FoldedNormalBound.bounds(fit, kind, limits, readings, req.confidence(), seed);
         double f = shape.tailFactor();
         double ppm = PercentileIndex.expectedPpm(limits, fit);
         if (kind.usesWithinSigma()) {
             reasons.add(new Reason(Step.CAPABILITY, false, GradeMessage.REASON_OVERALL_ONLY.format(family.token(),
                     kind.symbol(), overall(kind).symbol())));
         }
-        reasons.add(new Reason(Step.CAPABILITY, false, GradeMessage.REASON_PERCENTILE_METHOD.format(kind.symbol(),
-                family.token(), fit.quantile(PercentileIndex.LOW), fit.quantile(0.5), fit.quantile(PercentileIndex.HIGH),
-                ppm, PivotalBound.DRAWS, seed)));
+        double q0 = fit.quantile(PercentileIndex.LOW);
+        double q50 = fit.quantile(0.5);
+        double q1 = fit.quantile(PercentileIndex.HIGH);
+        String method = pivotal
+                ? GradeMessage.REASON_PERCENTILE_METHOD.format(kind.symbol(), family.token(), q0, q50, q1, ppm, PivotalBound.DRAWS, seed)
+                : GradeMessage.REASON_PERCENTILE_INVERTED.format(kind.symbol(), family.token(), q0, q50, q1, ppm,
+                        FoldedNormalBound.GRID_SIZE, FoldedNormalBound.DRAWS, seed);
+        reasons.add(new Reason(Step.CAPABILITY, false, method));
         double upper = estimate < req.minimum() ? b[1] * f : Double.NaN;
         return new IndexEvidence(kind, req.minimum(), req.confidence(), estimate * f, b[0] * f, upper,
-                ShapeModel.of(family), IndexMethod.PERCENTILE, ppm, seed);
+                ShapeModel.of(family), pivotal ? IndexMethod.PERCENTILE : IndexMethod.PERCENTILE_INVERTED, ppm, seed);
     }
 
     /** The overall-family index with the same side: Cpk → Ppk. */

@@ -1,6 +1,7 @@
 package dev.proofrun.grade;
 
 import dev.proofrun.stats.AndersonDarling;
+import dev.proofrun.stats.FoldedNormalBootstrap;
 import dev.proofrun.stats.PercentileIndex;
 import dev.proofrun.stats.ShapeFamily;
 import dev.proofrun.stats.ShapeFit;
@@ -26,6 +27,9 @@ import org.apache.commons.rng.simple.RandomSource;
  * <li>Weibull: A² against the fitted Weibull, A*² = A²(1 + 0.2/√N), rejected above {@value #WEIBULL_CRITICAL_1}
  *     (D'Agostino &amp; Stephens 1986, Table 4.17, extreme-value distribution with both parameters estimated
  *     — from memory; the test {@code ShapeJudgeTest} checks the 1 % level by simulation).</li>
+ * <li>folded normal: A² against the fitted model with a parametric-bootstrap p-value, each simulated study
+ *     refitted ({@link FoldedNormalBootstrap#fitCheck}, seeded with {@value #CHECK_SEED}): no table exists for
+ *     this model with both parameters estimated, and the null distribution depends on μ/σ.</li>
  * </ul>
  *
  * <p><b>Large studies.</b> With thousands of readings the test rejects departures too small to matter (readings
@@ -49,6 +53,8 @@ final class ShapeJudge {
      */
     static final double LEVEL = 0.01;
     static final double WEIBULL_CRITICAL_1 = 1.038;
+    /** The seed of the folded normal's bootstrap fit check. */
+    static final long CHECK_SEED = 0x5eed_2272L;
     static final int MIN_READINGS = 8;
     static final int TAIL_RULE_READINGS = 2000;
     static final double TAIL_TOLERANCE = 0.15;
@@ -111,6 +117,9 @@ final class ShapeJudge {
         boolean rejected = test[2] > 0;
         String evidence = family == ShapeFamily.WEIBULL
                 ? String.format(Locale.ROOT, "1 %% critical value %.3f", WEIBULL_CRITICAL_1)
+                : family == ShapeFamily.FOLDED_NORMAL
+                ? String.format(Locale.ROOT, "bootstrap p = %.2g of %d refitted studies, seed %d", test[1],
+                        FoldedNormalBootstrap.CHECK_DRAWS, CHECK_SEED)
                 : String.format(Locale.ROOT, "p = %.2g", test[1]);
         if (!rejected) {
             reasons.add(new Reason(Step.SHAPE, false,
@@ -133,6 +142,10 @@ final class ShapeJudge {
     /** {A*², p (NaN for Weibull), 1 if rejected at 1 % else 0}. */
     static double[] test(ShapeFamily family, ShapeFit fit, double[] x) {
         int n = x.length;
+        if (family == ShapeFamily.FOLDED_NORMAL) {
+            double[] r = FoldedNormalBootstrap.fitCheck(fit, x, CHECK_SEED);
+            return new double[] {r[0], r[1], r[1] < LEVEL ? 1 : 0};
+        }
         if (family == ShapeFamily.WEIBULL) {
             double a2 = AndersonDarlingFit.statistic(x, fit::cdf) * (1 + 0.2 / Math.sqrt(n));
             return new double[] {a2, Double.NaN, a2 > WEIBULL_CRITICAL_1 ? 1 : 0};

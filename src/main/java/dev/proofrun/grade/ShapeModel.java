@@ -8,15 +8,17 @@ package dev.proofrun.grade;
  * <li>{@link #NORMAL}: the readings as they are; normal-theory indices and exact bounds.</li>
  * <li>{@link #LOGNORMAL}: ln x normal, fitted by maximum likelihood.</li>
  * <li>{@link #WEIBULL}: two-parameter Weibull fitted by maximum likelihood.</li>
+ * <li>{@link #FOLDED_NORMAL}: |Y| with Y normal(μ, σ), fitted by maximum likelihood.</li>
  * </ul>
- * Under the lognormal and Weibull models the index is the percentile index of ISO 22514-2 (Clements 1989,
+ * Under the lognormal, Weibull and folded-normal models the index is the percentile index of ISO 22514-2 (Clements 1989,
  * Quality Progress 22(9):95–100): Ppu = (USL − X₅₀)/(X₉₉.₈₆₅ − X₅₀), Ppl = (X₅₀ − LSL)/(X₅₀ − X₀.₁₃₅),
  * Pp = (USL − LSL)/(X₉₉.₈₆₅ − X₀.₁₃₅).
  */
 public enum ShapeModel {
     NORMAL("normal"),
     LOGNORMAL("lognormal"),
-    WEIBULL("weibull");
+    WEIBULL("weibull"),
+    FOLDED_NORMAL("folded-normal");
 
     private final String id;
 
@@ -35,6 +37,8 @@ public enum ShapeModel {
                 return LOGNORMAL;
             case WEIBULL:
                 return WEIBULL;
+            case FOLDED_NORMAL:
+                return FOLDED_NORMAL;
             default:
                 return NORMAL;
         }

@@ -26,7 +26,8 @@
  * <li><b>Capability</b>: normal shape — {@code CapabilityJudge} → {@code JudgedIndex} → {@code IndexEvidence},
  * the required index with the plan's estimator and exact (or Bissell) bounds; lognormal or Weibull —
  * {@code PercentileJudge}, the ISO 22514-2 percentile index on the overall spread with generalized pivotal
- * bounds ({@code stats.PivotalBound}, seeded, the seed in the output). {@code IndexEvidence} names the model and
+ * bounds ({@code stats.PivotalBound}, seeded, the seed in the output); folded normal — the same index with bounds
+ * by test inversion at the least favourable mean/σ ({@code stats.FoldedNormalBound}). {@code IndexEvidence} names the model and
  * {@code IndexMethod}; every output leads with them.</li>
  * </ol>
  * {@code Verdict}: not-valid, not-demonstrated, demonstrated (lower bound ≥ c0) or inconclusive (with about how

@@ -13,13 +13,15 @@ import org.apache.commons.statistics.distribution.NormalDistribution;
  * <li>lognormal: ln x normal(μ, σ); f(x) = φ((ln x − μ)/σ)/(σx); plot ln x against Φ⁻¹(p).</li>
  * <li>Weibull (shape k, scale η): f(x) = (k/η)(x/η)^(k−1)·exp(−(x/η)^k); plot ln x against ln(−ln(1−p)),
  *     on which the model is the line ln η + q/k.</li>
+ * <li>folded normal (μ, σ of the unfolded normal): f(x) = [φ((x−μ)/σ) + φ((x+μ)/σ)]/σ for x ≥ 0; plot x
+ *     against the fitted model's own p-quantile, on which the model is the line y = q.</li>
  * </ul>
  * Plotting positions p_i = (i − 3/8)/(N + 1/4) (Blom 1958, <i>Statistical Estimates and Transformed
  * Beta-Variables</i>).
  *
  * @param model  which model
- * @param first  μ (normal, lognormal), k (Weibull)
- * @param second σ (normal, lognormal), η (Weibull)
+ * @param first  μ (normal, lognormal, folded normal), k (Weibull)
+ * @param second σ (normal, lognormal, folded normal), η (Weibull)
  */
 record ModelCurve(ShapeModel model, double first, double second) {
 
@@ -48,6 +50,8 @@ record ModelCurve(ShapeModel model, double first, double second) {
                 }
                 double r = x / second;
                 return first / second * Math.pow(r, first - 1) * Math.exp(-Math.pow(r, first));
+            case FOLDED_NORMAL:
+                return x < 0 ? 0 : (phi((x - first) / second) + phi((x + first) / second)) / second;
             default:
                 throw new IllegalStateException(model.name());
         }
@@ -57,6 +61,7 @@ record ModelCurve(ShapeModel model, double first, double second) {
     double straighten(double x) {
         switch (model) {
             case NORMAL:
+            case FOLDED_NORMAL:
                 return x;
             default:
                 return x > 0 ? Math.log(x) : Double.NaN;
@@ -65,6 +70,9 @@ record ModelCurve(ShapeModel model, double first, double second) {
 
     /** The probability plot's horizontal value for a plotting position p. */
     double quantile(double p) {
+        if (model == ShapeModel.FOLDED_NORMAL) {
+            return dev.proofrun.stats.FoldedNormal.quantile(first, second, p);
+        }
         return model == ShapeModel.WEIBULL ? Math.log(-Math.log(1 - p)) : STANDARD.inverseCumulativeProbability(p);
     }
 
@@ -76,6 +84,8 @@ record ModelCurve(ShapeModel model, double first, double second) {
                 return first + second * q;
             case WEIBULL:
                 return Math.log(second) + q / first;
+            case FOLDED_NORMAL:
+                return q;
             default:
                 throw new IllegalStateException(model.name());
         }
@@ -88,6 +98,8 @@ record ModelCurve(ShapeModel model, double first, double second) {
                 return new String[] {"normal quantile", "reading"};
             case LOGNORMAL:
                 return new String[] {"normal quantile", "ln(reading)"};
+            case FOLDED_NORMAL:
+                return new String[] {"model quantile", "reading"};
             default:
                 return new String[] {"ln(\u2212ln(1\u2212p))", "ln(reading)"};
         }

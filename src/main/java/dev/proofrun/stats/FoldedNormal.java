@@ -13,14 +13,14 @@ import org.apache.commons.statistics.distribution.NormalDistribution;
  * <li>Quantiles by Newton's method kept inside the bracket
  *     [max(0, μ + σΦ⁻¹(p)), μ + σΦ⁻¹((1 + p)/2)].</li>
  * <li>Maximum likelihood: the two score equations give Σ(2wᵢ − 1)xᵢ = Nμ and σ² = m₂ − μ² with
- *     m₂ = mean of x² (wᵢ the weight of the +xᵢ branch), so the likelihood is profiled over θ = μ/σ alone:
- *     σ² = m₂/(1 + θ²). θ is searched on a grid over [0, {@value #THETA_MAX}] and refined by golden section.
+ *     m₂ = mean of x² (wᵢ the weight of the +xᵢ branch), so the likelihood is profiled over μ alone and the
+ *     first equation is solved by Newton's method (see {@link #fit}); θ = μ/σ is searched on [0, {@value #THETA_MAX}].
  *     θ̂ = 0 is the half-normal, a member of the family; a maximum at {@value #THETA_MAX} is readings the
  *     model cannot tell from normal ones far from zero, and is not a fit. SciPy's
  *     {@code foldnorm.fit(x, floc=0)} (shape c = μ/σ, scale σ) maximises the same likelihood.</li>
  * </ul>
- * Not yet a declared shape: the lower bound of the percentile index under this model has not been shown
- * to hold (see {@code docs/decisions/declared-shape-grading.md}, "Folded normal and the threshold forms").
+ * The declared shape {@code folded-normal}; its index bounds are {@link FoldedNormalBound}'s, its fit check
+ * {@link FoldedNormalBootstrap}'s (coverage figures: {@code docs/decisions/declared-shape-grading.md}, "Folded normal").
  */
 public final class FoldedNormal {
 
@@ -29,21 +29,9 @@ public final class FoldedNormal {
 
     private static final NormalDistribution STANDARD = NormalDistribution.of(0, 1);
     private static final double LOG_ROOT_2PI = 0.5 * Math.log(2 * Math.PI);
-    private static final int GRID = 32;
-    private static final double[] THETAS = grid();
+    private static final int SCAN = 6;
 
     private FoldedNormal() {
-    }
-
-    private static double[] grid() {
-        double[] t = new double[GRID];
-        t[0] = 0;
-        double lo = Math.log(0.01);
-        double hi = Math.log(THETA_MAX);
-        for (int i = 1; i < GRID; i++) {
-            t[i] = Math.exp(lo + (hi - lo) * (i - 1) / (GRID - 2));
-        }
-        return t;
     }
 
     /** F(x); 0 below zero. */
@@ -101,6 +89,12 @@ public final class FoldedNormal {
      * The maximum-likelihood (μ̂, σ̂) of readings x ≥ 0, or null when the maximum lies at θ = {@value #THETA_MAX}
      * or the readings are all zero. The readings must be finite and not negative (not checked here).
      *
+     * <p>On readings scaled to m₂ = 1 the profile score in μ is h(μ) = mean(y·tanh(μy/(1 − μ²))) − μ, with
+     * σ² = 1 − μ². μ = 0 (the half-normal) is always a root; near it h(μ) ≈ μ³(1 − m₄/3), so the half-normal
+     * is a local maximum exactly when the readings' fourth moment about zero m₄ ≥ 3. h is scanned at
+     * {@value #SCAN} points of (0, μ_max); the last sign change from + to − (a local maximum) is refined by
+     * Newton's method inside its bracket, and kept if its likelihood beats the half-normal's.
+     *
      * @return {μ̂, σ̂}
      */
     public static double[] fit(double[] x) {
@@ -115,59 +109,93 @@ public final class FoldedNormal {
         for (double v : x) {
             m2 += (v / scale) * (v / scale);
         }
-        m2 /= x.length;
-        int best = 0;
-        double bestL = Double.NEGATIVE_INFINITY;
-        for (int i = 0; i < GRID; i++) {
-            double l = profile(x, scale, m2, THETAS[i]);
-            if (l > bestL) {
-                bestL = l;
-                best = i;
-            }
+        double root = Math.sqrt(m2 / x.length) * scale;
+        double[] y = new double[x.length];
+        for (int i = 0; i < y.length; i++) {
+            y[i] = x[i] / root;
         }
-        if (best == GRID - 1) {
+        double muMax = THETA_MAX / Math.sqrt(1 + THETA_MAX * THETA_MAX);
+        if (score(y, muMax)[0] > 0) {
             return null;
         }
-        double a = THETAS[Math.max(0, best - 1)];
-        double b = THETAS[best + 1];
-        double g = 0.5 * (Math.sqrt(5) - 1);
-        double c = b - g * (b - a);
-        double d = a + g * (b - a);
-        double lc = profile(x, scale, m2, c);
-        double ld = profile(x, scale, m2, d);
-        for (int iter = 0; iter < 50 && b - a > 1e-9 * (1 + b); iter++) {
-            if (lc >= ld) {
-                b = d;
-                d = c;
-                ld = lc;
-                c = b - g * (b - a);
-                lc = profile(x, scale, m2, c);
-            } else {
-                a = c;
-                c = d;
-                lc = ld;
-                d = a + g * (b - a);
-                ld = profile(x, scale, m2, d);
+        double m4 = 0;
+        for (double v : y) {
+            m4 += v * v * v * v;
+        }
+        boolean halfNormalIsLocalMaximum = m4 / y.length >= 3;
+        // scan for the last + to − change; h > 0 just above 0 when m4 < 3
+        double lo = Double.NaN;
+        double hi = Double.NaN;
+        double prev = muMax;
+        for (int i = SCAN; i >= 1; i--) {
+            double mu = muMax * i / (SCAN + 1);
+            if (score(y, mu)[0] > 0) {
+                lo = mu;
+                hi = prev;
+                break;
             }
+            prev = mu;
         }
-        double theta = 0.5 * (a + b);
-        if (profile(x, scale, m2, theta) < bestL) {
-            theta = THETAS[best];
+        if (Double.isNaN(lo)) {
+            if (halfNormalIsLocalMaximum) {
+                return new double[] {0, root};
+            }
+            lo = 0;
+            hi = prev;
         }
-        double sigma = Math.sqrt(m2 / (1 + theta * theta));
-        return new double[] {theta * sigma * scale, sigma * scale};
+        double mu = newton(y, lo, hi);
+        if (halfNormalIsLocalMaximum && profile(y, mu) < profile(y, 0)) {
+            mu = 0;
+        }
+        return new double[] {mu * root, Math.sqrt(1 - mu * mu) * root};
     }
 
-    /** The log-likelihood at θ = μ/σ with σ² = m₂/(1 + θ²), on readings divided by {@code scale} (constants dropped). */
-    private static double profile(double[] x, double scale, double m2, double theta) {
-        double sigma = Math.sqrt(m2 / (1 + theta * theta));
-        double mu = theta * sigma;
-        double s = 0;
-        for (double v : x) {
-            double y = v / scale;
-            double z = (y - mu) / sigma;
-            s += -0.5 * z * z + Math.log1p(Math.exp(-2 * mu * y / (sigma * sigma)));
+    /** The root of h in (lo, hi), h(lo) ≥ 0 ≥ h(hi): Newton's method kept inside the bracket. */
+    private static double newton(double[] y, double lo, double hi) {
+        double mu = 0.5 * (lo + hi);
+        for (int iter = 0; iter < 100 && hi - lo > 1e-15; iter++) {
+            double[] h = score(y, mu);
+            if (h[0] == 0) {
+                return mu;
+            }
+            if (h[0] > 0) {
+                lo = mu;
+            } else {
+                hi = mu;
+            }
+            double next = mu - h[0] / h[1];
+            if (Math.abs(next - mu) < 1e-14) {
+                return next > lo && next < hi ? next : mu;
+            }
+            mu = next > lo && next < hi ? next : 0.5 * (lo + hi);
         }
-        return s - x.length * Math.log(sigma);
+        return mu;
+    }
+
+    /** {h(μ), h′(μ)} on readings scaled to m₂ = 1. */
+    private static double[] score(double[] y, double mu) {
+        double s2 = 1 - mu * mu;
+        double u = mu / s2;
+        double h = 0;
+        double d = 0;
+        for (double v : y) {
+            double e = Math.exp(-2 * u * v); // tanh(uv) for uv ≥ 0, without Math.tanh's cost
+            double t = (1 - e) / (1 + e);
+            h += v * t;
+            d += v * v * (1 - t * t);
+        }
+        int n = y.length;
+        return new double[] {h / n - mu, d / n * (1 + mu * mu) / (s2 * s2) - 1};
+    }
+
+    /** The log-likelihood at μ with σ² = 1 − μ², on readings scaled to m₂ = 1 (constants dropped). */
+    private static double profile(double[] y, double mu) {
+        double sigma = Math.sqrt(1 - mu * mu);
+        double s = 0;
+        for (double v : y) {
+            double z = (v - mu) / sigma;
+            s += -0.5 * z * z + Math.log1p(Math.exp(-2 * mu * v / (sigma * sigma)));
+        }
+        return s - y.length * Math.log(sigma);
     }
 }

@@ -49,9 +49,13 @@ public final class PivotalBound {
      * @param kind the index (its side only: Cp-like, upper, lower or nearest)
      * @param readings N, the number of readings the fit came from
      * @return {lower, upper}
-     * @throws IllegalArgumentException if the confidence is not in (0.5, 1) or N &lt; 3
+     * @throws IllegalArgumentException if the confidence is not in (0.5, 1), N &lt; 3, or the family is not
+     *                                  location–scale (the folded normal: {@link FoldedNormalBound})
      */
     public static double[] bounds(ShapeFit fit, IndexKind kind, SpecLimits limits, int readings, double confidence, long seed) {
+        if (!fit.family().isLocationScale()) {
+            throw new IllegalArgumentException("no pivotal bound for the " + fit.family().token() + " shape");
+        }
         if (!(confidence > 0.5 && confidence < 1)) {
             throw new IllegalArgumentException(String.format(Locale.ROOT, "confidence must be in (0.5, 1): %s", confidence));
         }

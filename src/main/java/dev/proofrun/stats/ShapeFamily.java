@@ -17,6 +17,9 @@ import java.util.stream.Collectors;
  *     smallest-extreme-value distribution with location ln c and scale 1/k (Lawless 2003, <em>Statistical
  *     Models and Methods for Lifetime Data</em>, 2nd ed., §4.1) — for zero-bounded characteristics whose skew
  *     changes with the shape k (runout, burr height, loosening torque; common practice).</li>
+ * <li>{@link #FOLDED_NORMAL}: x = |Y| with Y normal(μ, σ) ({@link FoldedNormal}) — for characteristics bounded
+ *     at zero whose signed deviation is normal (position, runout; common practice). It is not a location–scale
+ *     family: its bound is a test inversion at the least favourable mean/σ ({@link FoldedNormalBound}), not a pivotal one.</li>
  * </ul>
  * The location–scale form is what makes the lower bound of a percentile index a pivotal computation
  * ({@code grade.PercentileBound}). Tokens are the words in plan files, the characteristics CSV and
@@ -28,7 +31,9 @@ public enum ShapeFamily {
     /** Lognormal: ln x is normal; readings must be positive. */
     LOGNORMAL("lognormal", 0),
     /** Two-parameter Weibull: ln x is smallest-extreme-value; readings must be positive. */
-    WEIBULL("weibull", 0);
+    WEIBULL("weibull", 0),
+    /** Folded normal |Y|, Y normal(μ, σ): readings must not be negative ({@link FoldedNormal}). Not location–scale. */
+    FOLDED_NORMAL("folded-normal", 0);
 
     private final String token;
     private final double lowerBound;
@@ -38,12 +43,12 @@ public enum ShapeFamily {
         this.lowerBound = lowerBound;
     }
 
-    /** The word in files and options: "normal", "lognormal", "weibull". */
+    /** The word in files and options: "normal", "lognormal", "weibull", "folded-normal". */
     public String token() {
         return token;
     }
 
-    /** The smallest value the model allows (readings must lie above it): −∞ for the normal, 0 otherwise. */
+    /** The smallest value the model allows: −∞ for the normal, 0 otherwise (readings must lie above it; the folded normal also allows 0 itself). */
     public double lowerBound() {
         return lowerBound;
     }
@@ -53,7 +58,12 @@ public enum ShapeFamily {
         return this == NORMAL;
     }
 
-    /** The tokens, comma separated, for messages: "normal, lognormal, weibull". */
+    /** True for the families whose bound is pivotal ({@link PivotalBound}): normal, lognormal, Weibull. */
+    public boolean isLocationScale() {
+        return this != FOLDED_NORMAL;
+    }
+
+    /** The tokens, comma separated, for messages: "normal, lognormal, weibull, folded-normal". */
     public static String names() {
         return Arrays.stream(values()).map(ShapeFamily::token).collect(Collectors.joining(", "));
     }

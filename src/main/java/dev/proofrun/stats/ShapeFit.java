@@ -8,10 +8,12 @@ import org.apache.commons.statistics.distribution.NormalDistribution;
  * location–scale scale y = g(x) (x for the normal, ln x for the lognormal and Weibull):
  * F(x) = G((g(x) − u)/b) with G the standard normal (normal, lognormal) or the standard smallest-extreme-value
  * distribution G(z) = 1 − exp(−eᶻ) (Weibull: shape k = 1/b, scale c = eᵘ).
+ * The folded normal is not of that form: location and scale are the μ ≥ 0 and σ of the normal Y whose
+ * absolute value is read ({@link FoldedNormal} does its arithmetic).
  *
  * @param family   the model
- * @param location u: μ (normal), μ of ln x (lognormal), ln c (Weibull)
- * @param scale    b &gt; 0: σ (normal), σ of ln x (lognormal), 1/k (Weibull)
+ * @param location u: μ (normal), μ of ln x (lognormal), ln c (Weibull), μ of Y (folded normal)
+ * @param scale    b &gt; 0: σ (normal), σ of ln x (lognormal), 1/k (Weibull), σ of Y (folded normal)
  */
 public record ShapeFit(ShapeFamily family, double location, double scale) {
 
@@ -55,11 +57,17 @@ public record ShapeFit(ShapeFamily family, double location, double scale) {
 
     /** The p-quantile on the readings' scale. */
     public double quantile(double p) {
+        if (family == ShapeFamily.FOLDED_NORMAL) {
+            return FoldedNormal.quantile(location, scale, p);
+        }
         return fromScale(family, location + scale * standardQuantile(family, p));
     }
 
     /** F(x); 0 at or below the model's lower bound. */
     public double cdf(double x) {
+        if (family == ShapeFamily.FOLDED_NORMAL) {
+            return FoldedNormal.cdf(location, scale, x);
+        }
         if (x <= family.lowerBound()) {
             return 0;
         }
@@ -68,6 +76,9 @@ public record ShapeFit(ShapeFamily family, double location, double scale) {
 
     /** 1 − F(x), accurate far in the upper tail. */
     public double survival(double x) {
+        if (family == ShapeFamily.FOLDED_NORMAL) {
+            return FoldedNormal.survival(location, scale, x);
+        }
         if (x <= family.lowerBound()) {
             return 1;
         }
@@ -76,6 +87,9 @@ public record ShapeFit(ShapeFamily family, double location, double scale) {
 
     /** ln f(x), the log-density on the readings' scale (Jacobian of y = ln x included); −∞ outside the support. */
     public double logDensity(double x) {
+        if (family == ShapeFamily.FOLDED_NORMAL) {
+            return FoldedNormal.logDensity(location, scale, x);
+        }
         if (x <= family.lowerBound()) {
             return Double.NEGATIVE_INFINITY;
         }
@@ -86,6 +100,12 @@ public record ShapeFit(ShapeFamily family, double location, double scale) {
 
     /** Φ⁻¹(F(x)): the reading on the normal scale under this model (ln x standardised for the lognormal). */
     public double normalScore(double x) {
+        if (family == ShapeFamily.FOLDED_NORMAL) {
+            double upper = FoldedNormal.survival(location, scale, x);
+            double score = upper > 0.5 ? STANDARD.inverseCumulativeProbability(FoldedNormal.cdf(location, scale, x))
+                    : -STANDARD.inverseCumulativeProbability(upper);
+            return Math.max(-MAX_SCORE, Math.min(MAX_SCORE, score));
+        }
         if (family != ShapeFamily.WEIBULL) {
             return (toScale(family, x) - location) / scale;
         }
@@ -115,6 +135,8 @@ public record ShapeFit(ShapeFamily family, double location, double scale) {
                 return String.format(Locale.ROOT, "mu = %.4g, sigma = %.4g of ln x", location, scale);
             case WEIBULL:
                 return String.format(Locale.ROOT, "shape = %.4g, scale = %.4g", first(), second());
+            case FOLDED_NORMAL:
+                return String.format(Locale.ROOT, "mu = %.4g, sigma = %.4g of the unfolded normal", location, scale);
             default:
                 return String.format(Locale.ROOT, "mean = %.6g, sigma = %.4g", location, scale);
         }

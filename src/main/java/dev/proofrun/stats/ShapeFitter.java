@@ -14,6 +14,8 @@ package dev.proofrun.stats;
  *     Newton's method kept inside a bisection bracket on [{@value #K_LOW}, {@value #K_HIGH}]. Then
  *     u = ȳ + s_y·ln(mean wᵢ)/k_z, b = s_y/k_z, and the Weibull shape is k = 1/b, scale c = eᵘ.
  *     SciPy's {@code weibull_min.fit(x, floc=0)} maximises the same likelihood.</li>
+ * <li><b>Folded normal</b>: μ ≥ 0 and σ of the unfolded normal by the profile likelihood of
+ *     {@link FoldedNormal}; readings at zero are allowed, negative ones are not.</li>
  * </ul>
  * Not fits: a root at the search limit, a Weibull shape above {@value #MAX_WEIBULL_SHAPE} (such readings are
  * indistinguishable from normal ones sitting far from zero, and the tails the index needs are then an
@@ -89,10 +91,13 @@ public final class ShapeFitter {
             if (!Double.isFinite(x[i])) {
                 return Outcome.failed(Failure.NOT_FINITE, i);
             }
-            if (!(x[i] > family.lowerBound())) {
+            if (family == ShapeFamily.FOLDED_NORMAL ? x[i] < 0 : !(x[i] > family.lowerBound())) {
                 return Outcome.failed(Failure.AT_OR_BELOW_BOUND, i);
             }
             y[i] = ShapeFit.toScale(family, x[i]);
+        }
+        if (family == ShapeFamily.FOLDED_NORMAL) {
+            return folded(x);
         }
         double[] ms = meanSd(y);
         if (!(ms[1] > 0) || ms[1] <= 1e-13 * Math.abs(ms[0])) {
@@ -102,6 +107,15 @@ public final class ShapeFitter {
             return Outcome.of(new ShapeFit(family, ms[0], ms[1]));
         }
         return extremeValue(y, ms[0], ms[1], capShape);
+    }
+
+    private static Outcome folded(double[] x) {
+        double[] ms = meanSd(x);
+        if (!(ms[1] > 0) || ms[1] <= 1e-13 * Math.abs(ms[0])) {
+            return Outcome.failed(Failure.NO_SPREAD, -1);
+        }
+        double[] f = FoldedNormal.fit(x);
+        return f == null ? Outcome.failed(Failure.AT_SEARCH_LIMIT, -1) : Outcome.of(new ShapeFit(ShapeFamily.FOLDED_NORMAL, f[0], f[1]));
     }
 
     /** {mean, sd with divisor N}, computed on the values scaled by their largest magnitude. */

@@ -68,6 +68,28 @@ class GradeShapeCommandTest {
     }
 
     @Test
+    void aFoldedNormalCharacteristicNamesItsBound() throws Exception {
+        Path plan = dir.resolve("folded.json");
+        assertEquals(0, run("plan", "new", "--out", plan.toString(), "--id", "PR-2027-0079", "--part", "pump lid",
+                "--characteristic", "bore position", "--unit", "mm", "--usl", "0.2", "--target", "1.33", "--expected", "1.8",
+                "--shape", "folded-normal", "--subgroup-size", "5", "--subgroups", "25", "--zone", "Europe/Berlin",
+                "--start", "2027-03-01T06:00"), err);
+        assertEquals(0, run("plan", "issue", plan.toString()), err);
+        Path data = dir.resolve("returned.csv");
+        // invented: readings about 0.05 mm apart from zero, sd 0.01 (mean/sigma 5): Ppu about (0.2 - 0.05)/0.03 = 5
+        SimulatedReturn.writeCsv(PlanAdapter.of(PlanFiles.read(plan)), Map.of("C1", SimulatedReturn.Process.stable(0.05, 0.01)),
+                13L, data);
+        assertEquals(0, run("grade", plan.toString(), data.toString()), err);
+        assertTrue(out.contains("C1 bore position: Demonstrated"), out);
+        assertTrue(out.contains("under the folded-normal model by the ISO 22514-2 percentile method, bounds at the least favourable mean/sigma"), out);
+        assertEquals(0, run("grade", plan.toString(), data.toString(), "--json"), err);
+        JsonNode j = new ObjectMapper().readTree(out).get("characteristics").get(0);
+        assertEquals("iso-22514-2-percentile", j.get("method").asText());
+        assertEquals("folded-normal", j.get("model").asText());
+        assertTrue(j.get("lower").asDouble() < j.get("estimate").asDouble());
+    }
+
+    @Test
     void aReadingAtZeroIsAFindingNotACrash() throws Exception {
         Path plan = issuedPlan();
         Path data = dir.resolve("returned.csv");

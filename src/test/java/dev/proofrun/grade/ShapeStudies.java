@@ -31,7 +31,8 @@ final class ShapeStudies {
      * One simulated process.
      *
      * @param family    the true (and declared) shape
-     * @param parameter σ of ln x (lognormal), shape k (Weibull), unused (normal)
+     * @param parameter σ of ln x (lognormal), shape k (Weibull), μ/σ of the unfolded normal (folded normal, σ = 1),
+     *                  unused (normal)
      * @param index     the true percentile index
      * @param n         subgroup size
      * @param k         subgroups
@@ -45,9 +46,11 @@ final class ShapeStudies {
                     twoSided ? ", two-sided" : "");
         }
 
-        /** The true quantile: normal(10, 1), lognormal(median 1, σ), Weibull(k, scale 1). */
+        /** The true quantile: normal(10, 1), lognormal(median 1, σ), Weibull(k, scale 1), |normal(μ/σ, 1)|. */
         double quantile(double p) {
             switch (family) {
+                case FOLDED_NORMAL:
+                    return dev.proofrun.stats.FoldedNormal.quantile(parameter, 1, p);
                 case LOGNORMAL:
                     return Math.exp(parameter * dev.proofrun.stats.ShapeFit.standardQuantile(ShapeFamily.NORMAL, p));
                 case WEIBULL:
@@ -59,6 +62,8 @@ final class ShapeStudies {
 
         double draw(ZigguratSampler.NormalizedGaussian g, ZigguratSampler.Exponential e) {
             switch (family) {
+                case FOLDED_NORMAL:
+                    return Math.abs(parameter + g.sample());
                 case LOGNORMAL:
                     return Math.exp(parameter * g.sample());
                 case WEIBULL:

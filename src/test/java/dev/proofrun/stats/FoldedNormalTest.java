@@ -89,6 +89,22 @@ class FoldedNormalTest {
         assertEquals(m2, f[0] * f[0] + f[1] * f[1], 1e-12 * m2);
     }
 
+    /** Heavier-tailed than any folded normal with μ &gt; 0 (m₄/m₂² = 3.89 ≥ 3): the maximum is the half-normal. */
+    static final double[] H = {0.41, 1.87, 0.09, 0.66, 2.95, 0.23, 1.12, 0.05, 0.78, 3.40, 0.31, 0.14, 1.56, 0.92, 0.02,
+        0.48, 2.21, 0.60, 0.17, 1.03};
+
+    @Test
+    void maximumLikelihoodAtTheHalfNormal() {
+        // SciPy 1.17.1: scipy.stats.foldnorm.fit(H, floc=0) -> c = 0.00014954678369035677, scale = 1.346287492837737
+        // (its optimiser's stop; the likelihood is flat there); scipy.stats.halfnorm.fit(H, floc=0) -> scale
+        // 1.3462874878717397 = sqrt(mean of H^2); foldnorm log-likelihood at c = 0: -20.462842957795477,
+        // at c = 0.1: -20.462991984107646 (lower), so the maximum is c = 0
+        double[] f = FoldedNormal.fit(H);
+        assertEquals(0, f[0], 0);
+        assertEquals(1.3462874878717397, f[1], 1e-12);
+        assertEquals(-20.462842957795477, Arrays.stream(H).map(v -> FoldedNormal.logDensity(f[0], f[1], v)).sum(), 1e-10);
+    }
+
     @Test
     void zerosAllowedAndDegenerateReadingsAreNoFit() {
         double[] withZero = X.clone();
