@@ -71,7 +71,21 @@ public enum GradeMessage implements MessageKey {
     REASON_UPPER_ABOVE("The upper bound is above the requirement: the process might reach it, this study does not show it."),
     REASON_INDEX_UNDEFINED("Capability: %s is not defined for this specification."),
     REASON_CAPABILITY_NOT_VALID("Capability: %s = %.3f (lower bound %.3f) describes the study's past, not the process."),
-    JUDGED("%s under the %s model by %s: estimate %.3f, lower %.0f%% bound %.3f, required %.2f"),
+    REASON_MORE_IS_A_NEW_LOOK("That figure is for planning only: grading again with more readings is a second look at the same question, and each new look raises the chance that a process at the requirement passes (in simulation about 3.4 %% to 6.1 %% at 95 %% confidence)."),
+    REASON_MORE_BEYOND_TENFOLD("If the estimate holds, more than ten times this study's %d subgroups would be needed to settle it: no figure is given; the estimate is too close to the requirement for more of the same data to help."),
+    REASON_EXTEND_PROPERLY("The sound way on: plan the rest as an extension of this study whose boundary keeps the overall false-pass risk (for example the conditional-error approach, Proschan & Hunsberger 1995, Biometrics 51:1315-1324), or plan a new study with planned looks (plan new --stages)."),
+    REASON_LOOK("Look %d of %d, after slot %s (%d subgroups planned so far): the bound is taken at %s %% confidence, this look's share of the plan's false-pass risk (%s spending)%s."),
+    REASON_LOOK_FUTILITY_RULE("; the study stops for futility when the estimate is below %.3f"),
+    REASON_LOOK_EARLIER("Readings up to slot %s came back: graded at look %d, the furthest look the file completes, with all its readings so far; look %s before it is taken to have said continue (a file sent on past a look without its decision is graded here, and that look's decision is not taken afterwards)."),
+    REASON_LOOK_SHORT("The file does not reach the end of stage 1 (slot %s): graded as look 1, the slots not yet taken count as missing."),
+    REASON_LOOK_BEYOND("%d later slots came back too (up to %s): they belong to a stage not yet ended and are graded at its look, not at this one."),
+    REASON_LOOK_DEMONSTRATED("Capability at look %d of %d: %s = %.3f, lower %s%% bound %.3f >= %.2f required: demonstrated; the later stages are not needed."),
+    REASON_LOOK_FUTILITY("Capability at look %d of %d: %s = %.3f is below the futility boundary %.3f (lower %s%% bound %.3f): the study stops here, not demonstrated."),
+    REASON_LOOK_CONTINUE("Capability at look %d of %d: %s = %.3f, lower %s%% bound %.3f is below %.2f required%s: continue: collect stage %d, slots %s to %s, then send the whole file back."),
+    REASON_LOOK_ABOVE_FUTILITY(" and the estimate is above the futility boundary %.3f"),
+    REASON_LAST_LOOK_SHORT("Capability at the last look (%d of %d): %s = %.3f, lower %s%% bound %.3f is below %.2f required: not demonstrated. The planned stages are spent: grading more data against this plan would be a new look that raises the false-pass risk."),
+    REASON_LOOK_NOT_VALID("At look %d of %d the evidence cannot carry a decision: what stands in the way applies at every look; correct it before stage %s is collected, or re-plan."),
+    JUDGED("%s under the %s model by %s: estimate %.3f, lower %s%% bound %.3f, required %.2f"),
     CAUTION("Caution: a statistical statement under assumptions (stability, independence, the fitted distribution, a capable gauge). It does not replace the customer's requirements, applicable standards or local codes, licensed practice, or the extra controls that safety-critical characteristics need.");
 
     private final String english;

@@ -36,6 +36,12 @@ final class PercentileJudge {
      * @param readings N, the number of readings the fit came from
      */
     static IndexEvidence judge(GradedCharacteristic gc, Shape shape, int readings, List<Reason> reasons) {
+        return judge(gc, shape, readings, reasons, gc.requirement().confidence());
+    }
+
+    /** As above, the bounds at {@code confidence} (a staged study's look) instead of the requirement's. */
+    static IndexEvidence judge(GradedCharacteristic gc, Shape shape, int readings, List<Reason> reasons,
+            double confidence) {
         ShapeFit fit = shape.fit();
         ShapeFamily family = fit.family();
         Requirement req = gc.requirement();
@@ -54,7 +60,7 @@ final class PercentileJudge {
             return null;
         }
         long seed = PivotalBound.DEFAULT_SEED;
-        double[] b = PivotalBound.bounds(fit, kind, limits, readings, req.confidence(), seed);
+        double[] b = PivotalBound.bounds(fit, kind, limits, readings, confidence, seed);
         double f = shape.tailFactor();
         double ppm = PercentileIndex.expectedPpm(limits, fit);
         if (kind.usesWithinSigma()) {
@@ -65,7 +71,7 @@ final class PercentileJudge {
                 family.token(), fit.quantile(PercentileIndex.LOW), fit.quantile(0.5), fit.quantile(PercentileIndex.HIGH),
                 ppm, PivotalBound.DRAWS, seed)));
         double upper = estimate < req.minimum() ? b[1] * f : Double.NaN;
-        return new IndexEvidence(kind, req.minimum(), req.confidence(), estimate * f, b[0] * f, upper,
+        return new IndexEvidence(kind, req.minimum(), confidence, estimate * f, b[0] * f, upper,
                 ShapeModel.of(family), IndexMethod.PERCENTILE, ppm, seed);
     }
 

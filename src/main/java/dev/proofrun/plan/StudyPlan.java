@@ -1,6 +1,7 @@
 package dev.proofrun.plan;
 
 import dev.proofrun.design.Design;
+import dev.proofrun.design.Stages;
 import dev.proofrun.schedule.ProductionCalendar;
 import dev.proofrun.schedule.Schedule;
 import dev.proofrun.schedule.Scheduler;
@@ -36,10 +37,12 @@ import java.util.Set;
  * @param state           draft or issued
  * @param revision        the fingerprint of the issued content (12 hex digits), empty for a draft
  * @param supersedes      the revision this plan replaces, if it was made by changing an issued plan
+ * @param stages          the planned looks of a staged study (its last look at all k subgroups); empty for a
+ *                        single-stage study, whose file then has no {@code stages} object
  */
 public record StudyPlan(String id, Part part, People people, List<Characteristic> characteristics,
         ProductionCalendar calendar, StudySpan span, Design design, Spacing spacing, long seed, Schedule schedule,
-        PlanState state, Optional<String> revision, Optional<String> supersedes) {
+        PlanState state, Optional<String> revision, Optional<String> supersedes, Optional<Stages> stages) {
 
     /**
      * The largest subgroup size a plan file may state: the fill-in workbook has one column per reading beside
@@ -55,6 +58,7 @@ public record StudyPlan(String id, Part part, People people, List<Characteristic
      * @throws IllegalArgumentException if a part is missing, ids are bad or repeated
      * @throws IllegalArgumentException if the schedule does not have k slots of n parts
      * @throws IllegalArgumentException if an issued plan lacks a revision or a draft has one
+     * @throws IllegalArgumentException if the stages' last look is not at the design's k subgroups
      */
     public StudyPlan {
         if (id == null || !id.matches("[A-Za-z0-9._-]{1,40}")) {
@@ -87,6 +91,20 @@ public record StudyPlan(String id, Part part, People people, List<Characteristic
         }
         revision.ifPresent(StudyPlan::requireRevision);
         supersedes.ifPresent(StudyPlan::requireRevision);
+        stages = stages == null ? Optional.empty() : stages;
+        if (stages.isPresent() && stages.get().last().subgroups() != design.subgroups()) {
+            throw new IllegalArgumentException(String.format(Locale.ROOT,
+                    "the last look is at %d subgroups, the design has %d", stages.get().last().subgroups(),
+                    design.subgroups()));
+        }
+    }
+
+    /** A single-stage plan (no planned looks before the end). */
+    public StudyPlan(String id, Part part, People people, List<Characteristic> characteristics,
+            ProductionCalendar calendar, StudySpan span, Design design, Spacing spacing, long seed, Schedule schedule,
+            PlanState state, Optional<String> revision, Optional<String> supersedes) {
+        this(id, part, people, characteristics, calendar, span, design, spacing, seed, schedule, state, revision,
+                supersedes, Optional.empty());
     }
 
     private static void requireRevision(String r) {
@@ -135,13 +153,13 @@ public record StudyPlan(String id, Part part, People people, List<Characteristic
             return this;
         }
         return new StudyPlan(id, part, people, characteristics, calendar, span, design, spacing, seed, schedule,
-                PlanState.DRAFT, Optional.empty(), revision);
+                PlanState.DRAFT, Optional.empty(), revision, stages);
     }
 
     /** The same plan, issued with the given fingerprint (package use: {@link PlanFiles#issue(StudyPlan)}). */
     StudyPlan issuedAs(String fingerprint) {
         return new StudyPlan(id, part, people, characteristics, calendar, span, design, spacing, seed, schedule,
-                PlanState.ISSUED, Optional.of(fingerprint), supersedes);
+                PlanState.ISSUED, Optional.of(fingerprint), supersedes, stages);
     }
 
     /** The same plan with another schedule (re-scheduling a draft, e.g. after changing the seed). */
@@ -150,6 +168,25 @@ public record StudyPlan(String id, Part part, People people, List<Characteristic
             throw new IllegalStateException("an issued plan is frozen; reopen() it first");
         }
         return new StudyPlan(id, part, people, characteristics, calendar, span, design, spacing, seed, newSchedule,
-                state, revision, supersedes);
+                state, revision, supersedes, stages);
+    }
+
+    /**
+     * The same draft with these planned looks (or none, for a single-stage study).
+     *
+     * @throws IllegalStateException    for an issued plan
+     * @throws IllegalArgumentException if the last look is not at the design's k subgroups
+     */
+    public StudyPlan withStages(Optional<Stages> newStages) {
+        if (isIssued()) {
+            throw new IllegalStateException("an issued plan is frozen; reopen() it first");
+        }
+        return new StudyPlan(id, part, people, characteristics, calendar, span, design, spacing, seed, schedule,
+                state, revision, supersedes, newStages);
+    }
+
+    /** Whether the plan has planned looks before its end. */
+    public boolean isStaged() {
+        return stages.isPresent() && stages.get().staged();
     }
 }
