@@ -58,7 +58,8 @@ public final class GradeCommand implements Callable<Integer> {
             description = "Paper size of the --report PDF (default: ${DEFAULT-VALUE}).")
     String paper;
 
-    @Option(names = "--require-demonstrated", description = "Exit 1 unless every characteristic is demonstrated.")
+    @Option(names = "--require-demonstrated", description = "Exit 1 unless every characteristic is demonstrated"
+            + " (at a staged plan's look, 'continue' exits 1 too).")
     boolean requireDemonstrated;
 
     @Override
@@ -102,9 +103,18 @@ public final class GradeCommand implements Callable<Integer> {
         return requireDemonstrated && !result.allDemonstrated() ? EXIT_NOT_DEMONSTRATED : 0;
     }
 
+    /** "Graded at look 1 of 2 (after slot S18, 18 subgroups): continue with stage 2, slots S19 to S36." */
+    static String lookLine(dev.proofrun.grade.GradedLook l, dev.proofrun.grade.Verdict part) {
+        String next = part == dev.proofrun.grade.Verdict.CONTINUE
+                ? GradeOutputMessage.LOOK_NEXT.format(l.number() + 1, l.nextFrom().orElseThrow(), l.nextTo().orElseThrow())
+                : "";
+        return GradeOutputMessage.LOOK_LINE.format(l.number(), l.of(), l.endSlot(), l.look().subgroups(), next);
+    }
+
     static void text(GradeResult r, PrintWriter out) {
         out.printf(Locale.ROOT, "Plan %s@%s, file %s%n", r.planId(), r.revision(), r.file());
         out.printf(Locale.ROOT, "Part verdict: %s%n", r.verdict().words()); // words as on paper; ids in --json
+        r.look().ifPresent(l -> out.println(lookLine(l, r.verdict())));
         for (CharacteristicGrade g : r.characteristics()) {
             out.println();
             out.printf(Locale.ROOT, "%s %s: %s%n", g.id(), g.name(), g.verdict().words());

@@ -61,7 +61,7 @@ public record GradedLook(int number, Look look, Stages stages, String endSlot, O
     }
 
     /** A confidence as a percentage with up to three decimals; one that would round to 100 is cut (99.999). */
-    static String percent(double confidence) {
+    public static String percent(double confidence) {
         BigDecimal p = BigDecimal.valueOf(100 * confidence);
         BigDecimal shown = p.setScale(3, RoundingMode.HALF_EVEN);
         if (shown.compareTo(BigDecimal.valueOf(100)) >= 0) {

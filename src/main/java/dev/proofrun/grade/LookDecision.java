@@ -39,7 +39,7 @@ final class LookDecision {
         String pct = look.confidencePercent();
         if (ev.lower() >= c0) {
             reasons.add(new Reason(Step.CAPABILITY, true, GradeMessage.REASON_LOOK_DEMONSTRATED.format(j, of, symbol,
-                    ev.estimate(), pct, ev.lower(), c0)));
+                    ev.estimate(), pct, ev.lower(), c0, look.last() ? "" : GradeMessage.REASON_LOOK_STOPS_EARLY.format())));
             return Verdict.DEMONSTRATED;
         }
         if (look.last()) {
