@@ -103,18 +103,10 @@ public final class GradeCommand implements Callable<Integer> {
         return requireDemonstrated && !result.allDemonstrated() ? EXIT_NOT_DEMONSTRATED : 0;
     }
 
-    /** "Graded at look 1 of 2 (after slot S18, 18 subgroups): continue with stage 2, slots S19 to S36." */
-    static String lookLine(dev.proofrun.grade.GradedLook l, dev.proofrun.grade.Verdict part) {
-        String next = part == dev.proofrun.grade.Verdict.CONTINUE
-                ? GradeOutputMessage.LOOK_NEXT.format(l.number() + 1, l.nextFrom().orElseThrow(), l.nextTo().orElseThrow())
-                : "";
-        return GradeOutputMessage.LOOK_LINE.format(l.number(), l.of(), l.endSlot(), l.look().subgroups(), next);
-    }
-
     static void text(GradeResult r, PrintWriter out) {
         out.printf(Locale.ROOT, "Plan %s@%s, file %s%n", r.planId(), r.revision(), r.file());
         out.printf(Locale.ROOT, "Part verdict: %s%n", r.verdict().words()); // words as on paper; ids in --json
-        r.look().ifPresent(l -> out.println(lookLine(l, r.verdict())));
+        r.look().ifPresent(l -> out.println(l.line(r.verdict())));
         for (CharacteristicGrade g : r.characteristics()) {
             out.println();
             out.printf(Locale.ROOT, "%s %s: %s%n", g.id(), g.name(), g.verdict().words());

@@ -86,6 +86,8 @@ public enum GradeMessage implements MessageKey {
     REASON_LOOK_ABOVE_FUTILITY(" and the estimate is above the futility boundary %.3f"),
     REASON_LAST_LOOK_SHORT("Capability at the last look (%d of %d): %s = %.3f, lower %s%% bound %.3f is below %.2f required: not demonstrated. The planned stages are spent: grading more data against this plan would be a new look that raises the false-pass risk."),
     REASON_LOOK_NOT_VALID("At look %d of %d the evidence cannot carry a decision: what stands in the way applies at every look; correct it before stage %s is collected, or re-plan."),
+    LOOK_LINE("Graded at look %d of %d (after slot %s, %d subgroups planned so far)%s."),
+    LOOK_NEXT(": continue, collect stage %d, slots %s to %s, then send the whole file back"),
     JUDGED("%s under the %s model by %s: estimate %.3f, lower %s%% bound %.3f, required %.2f"),
     CAUTION("Caution: a statistical statement under assumptions (stability, independence, the fitted distribution, a capable gauge). It does not replace the customer's requirements, applicable standards or local codes, licensed practice, or the extra controls that safety-critical characteristics need.");
 

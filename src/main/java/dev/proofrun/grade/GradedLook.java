@@ -55,6 +55,19 @@ public record GradedLook(int number, Look look, Stages stages, String endSlot, O
         return stages.spending();
     }
 
+    /**
+     * One line for the part's grade, the same on the command line, in the report and in the wizard: "Graded at look 1
+     * of 2 (after slot S18, 18 subgroups planned so far): continue, collect stage 2, slots S19 to S36, then send the
+     * whole file back."
+     *
+     * @param part the part's verdict (the next stage is named only when it is {@link Verdict#CONTINUE})
+     */
+    public String line(Verdict part) {
+        String next = part == Verdict.CONTINUE && nextFrom.isPresent()
+                ? GradeMessage.LOOK_NEXT.format(number + 1, nextFrom.get(), nextTo.orElseThrow()) : "";
+        return GradeMessage.LOOK_LINE.format(number, of(), endSlot, look.subgroups(), next);
+    }
+
     /** The look's confidence as a percentage for people, e.g. "95" or "99.437" (never rounded up to 100). */
     public String confidencePercent() {
         return percent(look.confidence());

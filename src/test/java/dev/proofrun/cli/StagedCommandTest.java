@@ -154,5 +154,13 @@ class StagedCommandTest {
         assertTrue(look.path("futility").isNull());
         assertTrue(look.path("confidence").asDouble() > 0.95);
         assertEquals("S16", look.path("next").path("from").asText());
+        Path report = dir.resolve("grade.pdf");
+        assertEquals(0, run("grade", p.toString(), returned.toString(), "--report", report.toString()));
+        try (org.apache.pdfbox.pdmodel.PDDocument doc = org.apache.pdfbox.Loader.loadPDF(report.toFile())) {
+            String pdf = new org.apache.pdfbox.text.PDFTextStripper().getText(doc).replaceAll("\\s+", " ");
+            assertTrue(pdf.contains("Graded at look 1 of 2 (after slot S15, 15 subgroups planned so far): continue,"), pdf);
+            assertTrue(pdf.contains("collect the next stage"), "the verdict's gloss");
+            assertTrue(pdf.contains("Capability at look 1 of 2"), "the decisive reason");
+        }
     }
 }

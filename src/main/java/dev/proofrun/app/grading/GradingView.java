@@ -176,7 +176,8 @@ public final class GradingView implements StepView {
             verdict.setText("");
             return;
         }
-        verdict.setText("Verdict for plan " + r.planId() + "@" + r.revision() + ": " + GradingViewModel.verdictWords(r.verdict()));
+        verdict.setText("Verdict for plan " + r.planId() + "@" + r.revision() + ": " + GradingViewModel.verdictWords(r.verdict())
+                + r.look().map(l -> "\n" + l.line(r.verdict())).orElse(""));
         style(verdict, r.verdict());
     }
 
@@ -192,7 +193,7 @@ public final class GradingView implements StepView {
         }
         charVerdict.setText(g.id() + " " + g.name() + ": " + GradingViewModel.verdictWords(g.verdict())
                 + (g.additionalSubgroups().isPresent()
-                        ? " (about " + g.additionalSubgroups().getAsInt() + " more subgroups would settle it)" : ""));
+                        ? " (about " + g.additionalSubgroups().getAsInt() + " more subgroups would settle it: a planning figure)" : ""));
         style(charVerdict, g.verdict());
         String[] titles = {"1 Complete?", "2 Stable?", "3 Shape", "4 Capable?"};
         Step[] steps = {Step.COMPLETENESS, Step.STABILITY, Step.SHAPE, Step.CAPABILITY};
@@ -321,7 +322,7 @@ public final class GradingView implements StepView {
         l.getStyleClass().removeAll("pr-verdict-good", "pr-verdict-short", "pr-verdict-open");
         l.getStyleClass().add(switch (v) {
             case DEMONSTRATED -> "pr-verdict-good";
-            case INCONCLUSIVE -> "pr-verdict-open";
+            case INCONCLUSIVE, CONTINUE -> "pr-verdict-open";
             default -> "pr-verdict-short";
         });
     }
