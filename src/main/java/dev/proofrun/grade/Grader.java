@@ -62,12 +62,44 @@ public final class Grader {
         List<CharacteristicGrade> grades = new ArrayList<>();
         Verdict part = Verdict.DEMONSTRATED;
         for (int c = 0; c < plan.characteristics().size(); c++) {
-            CharacteristicGrade g = CharacteristicGrader.grade(plan.characteristics().get(c), plan.design(), plan.interval(),
-                    data.finish(c, slotsSoFar, allowed), look);
+            int ci = c;
+            CharacteristicGrade g = decidedEarlier(plan, data, ci, look).orElseGet(() -> CharacteristicGrader.grade(
+                    plan.characteristics().get(ci), plan.design(), plan.interval(), data.finish(ci, slotsSoFar, allowed), look));
             grades.add(g);
             part = part.worse(g.verdict());
         }
         return new GradeResult(plan.id(), plan.revision(), display, data.problems(), grades, part, look);
+    }
+
+    /**
+     * A characteristic an earlier look already decided: the planned looks are replayed on the readings up to each
+     * one, and the first that says demonstrated or stops the study for futility is its grade — as it would have been
+     * had the file been sent back there (a later look neither takes back an early pass nor gives a second chance
+     * after a stop). Empty when no earlier look decided it, or the plan is single-stage.
+     */
+    private static Optional<CharacteristicGrade> decidedEarlier(GradingPlan plan, ReturnedData data, int c,
+            Optional<GradedLook> graded) {
+        if (graded.isEmpty()) {
+            return Optional.empty();
+        }
+        for (int i = 1; i < graded.get().number(); i++) {
+            int m = plan.stages().orElseThrow().looks().get(i - 1).subgroups();
+            GradedLook at = look(plan, m);
+            // replayed: no "furthest look" or "later slots" notes, which speak of the file, not of this look
+            GradedLook earlier = new GradedLook(at.number(), at.look(), at.stages(), at.endSlot(), at.nextFrom(),
+                    at.nextTo(), List.of(), true, 0, at.reachSlot());
+            CharacteristicGrade g = CharacteristicGrader.grade(plan.characteristics().get(c), plan.design(),
+                    plan.interval(), data.replay(c, m, GradingPlan.defaultAllowedShortfall(m)), Optional.of(earlier));
+            if (g.verdict() == Verdict.DEMONSTRATED || g.verdict() == Verdict.NOT_DEMONSTRATED) {
+                List<Reason> reasons = new ArrayList<>(List.of(new Reason(Step.COMPLETENESS, false,
+                        GradeMessage.REASON_DECIDED_EARLIER.format(i, earlier.of(), earlier.endSlot(), graded.get().number()))));
+                reasons.addAll(g.reasons());
+                return Optional.of(new CharacteristicGrade(g.id(), g.name(), g.unit(), g.limits(), g.requirement(),
+                        g.completeness(), g.subgroups(), g.slots(), g.stability(), g.shape(), g.judged(), g.capability(),
+                        g.verdict(), reasons, g.additionalSubgroups(), g.look()));
+            }
+        }
+        return Optional.empty();
     }
 
     /**

@@ -334,6 +334,15 @@ final class ReturnedData implements RowHandler {
      * graded nor missing.
      */
     Collection finish(int ci, int slotsSoFar, int allowedShortfall) {
+        return finish(ci, slotsSoFar, allowedShortfall, log);
+    }
+
+    /** As above, for an earlier look replayed: its problems are those of the look graded, so none are recorded twice. */
+    Collection replay(int ci, int slotsSoFar, int allowedShortfall) {
+        return finish(ci, slotsSoFar, allowedShortfall, new ProblemLog());
+    }
+
+    private Collection finish(int ci, int slotsSoFar, int allowedShortfall, ProblemLog log) {
         Collected col = collected[ci];
         String id = plan.characteristics().get(ci).id();
         int k = slotsSoFar;

@@ -91,7 +91,8 @@ public record StudyPlan(String id, Part part, People people, List<Characteristic
         }
         revision.ifPresent(StudyPlan::requireRevision);
         supersedes.ifPresent(StudyPlan::requireRevision);
-        stages = stages == null ? Optional.empty() : stages;
+        // one look is the single-stage study: stored as no stages, so its file is the single-stage file
+        stages = stages == null || stages.isPresent() && !stages.get().staged() ? Optional.empty() : stages;
         if (stages.isPresent() && stages.get().last().subgroups() != design.subgroups()) {
             throw new IllegalArgumentException(String.format(Locale.ROOT,
                     "the last look is at %d subgroups, the design has %d", stages.get().last().subgroups(),

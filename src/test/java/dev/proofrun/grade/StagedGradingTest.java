@@ -133,4 +133,28 @@ class StagedGradingTest {
         assertEquals(Verdict.NOT_VALID, g.verdict(), "5 of 15 lost is beyond the allowance of 1");
         assertTrue(says(g, "does not reach the end of stage 1 (slot S15)"), g.reasons().toString());
     }
+
+    @Test
+    void aPassAtTheFirstLookStandsWhenTheFileGoesOnWithWorseReadings() throws IOException {
+        // stage 1 as a Cpk 2.0 process, then the mean steps by 0.05 (an invented set-up change): at look 2 the
+        // readings so far are unstable, but look 1 already decided
+        GradeResult r = graded(SimulatedReturn.Process.stepping(10.0, 0.1 / 6, 0.5, 0.05), 1L, 30);
+        CharacteristicGrade g = r.characteristics().get(0);
+        assertEquals(2, r.look().orElseThrow().number());
+        assertEquals(Verdict.DEMONSTRATED, g.verdict(), g.reasons().toString());
+        assertEquals(1, g.look().orElseThrow().number());
+        assertEquals(15, g.completeness().completeSubgroups());
+        assertTrue(says(g, "Decided at look 1 of 2 (after slot S15)"), g.reasons().toString());
+        assertTrue(r.problems().stream().noneMatch(p -> p.message().contains("S16")), "no problem listed twice");
+    }
+
+    @Test
+    void aFutilityStopAtTheFirstLookStandsWhenLaterReadingsLookBetter() throws IOException {
+        // stage 1 off centre (Cpk 0.8), then the mean steps back to the centre: the stop at look 1 is final
+        GradeResult r = graded(SimulatedReturn.Process.stepping(10.06, 0.1 / 6, 0.5, -0.06), 5L, 30);
+        CharacteristicGrade g = r.characteristics().get(0);
+        assertEquals(Verdict.NOT_DEMONSTRATED, g.verdict(), g.reasons().toString());
+        assertEquals(1, g.look().orElseThrow().number());
+        assertTrue(says(g, "below the futility boundary"), g.reasons().toString());
+    }
 }
