@@ -119,7 +119,7 @@ public enum AppMessage implements MessageKey {
     GRADING_DONE("%s graded: %s, %d problems listed"),
     GRADING_VERDICT("Verdict for plan %s, %s: %s"),
     GRADING_CHARACTERISTIC("%s %s: %s"),
-    GRADING_MORE_SUBGROUPS("%s (about %d more subgroups would settle it)"),
+    GRADING_MORE_SUBGROUPS("%s (about %d more subgroups would settle it: a planning figure)"),
     GRADING_NOT_REACHED("Not judged: %s; an earlier step decided the verdict."),
     GRADING_INDICES("All indices (normal model)"),
     GRADING_LOWER_HEAD("lower %.0f %% bound"),

@@ -58,7 +58,8 @@ public final class GradeCommand implements Callable<Integer> {
             description = "Paper size of the --report PDF (default: ${DEFAULT-VALUE}).")
     String paper;
 
-    @Option(names = "--require-demonstrated", description = "Exit 1 unless every characteristic is demonstrated.")
+    @Option(names = "--require-demonstrated", description = "Exit 1 unless every characteristic is demonstrated"
+            + " (at a staged plan's look, 'continue' exits 1 too).")
     boolean requireDemonstrated;
 
     @Override
@@ -105,6 +106,7 @@ public final class GradeCommand implements Callable<Integer> {
     static void text(GradeResult r, StudyPlan plan, PrintWriter out) {
         out.printf(Locale.ROOT, "Plan %s, %s, file %s%n", r.planId(), plan.revisionWords(), r.file());
         out.printf(Locale.ROOT, "Part verdict: %s%n", r.verdict().words()); // words as on paper; ids in --json
+        r.look().ifPresent(l -> out.println(l.line(r.verdict())));
         for (CharacteristicGrade g : r.characteristics()) {
             out.println();
             out.printf(Locale.ROOT, "%s %s: %s%n", g.id(), g.name(), g.verdict().words());

@@ -25,6 +25,12 @@ import java.util.Map;
  * {@link CapabilityKeys} — sit under {@code normalTheory}, never at the top level, so that a figure another model
  * contradicts cannot be read beside the verdict as if it carried it ({@code normalTheory.carriesVerdict} says
  * whether it did).
+ *
+ * <p>For a staged plan the root and each characteristic carry {@code look}: {@code {number, of, subgroups,
+ * confidence, efficacy, futility}} — the look graded, how many the plan has, the subgroups planned up to it, the
+ * confidence of its bound, the efficacy boundary (c₀, which the bound must reach) and the futility boundary
+ * (null where the look has none); {@code null} for a single-stage plan. The verdict {@code continue} says to
+ * collect the next stage ({@code look.next: {from, to}} names its slots).
  */
 final class GradeJson {
 
@@ -55,6 +61,8 @@ final class GradeJson {
         }
         root.put("characteristics", cs);
         root.put("verdict", r.verdict().id());
+        root.put("look", look(r.look(), r.characteristics().isEmpty() ? Double.NaN
+                : r.characteristics().get(0).requirement().minimum()));
         root.put("caution", r.caution());
         return root;
     }
@@ -118,6 +126,33 @@ final class GradeJson {
         }
         m.put("reasons", reasons);
         m.put("additionalSubgroups", g.additionalSubgroups().isPresent() ? g.additionalSubgroups().getAsInt() : null);
+        m.put("look", look(g.look(), g.requirement().minimum()));
+        return m;
+    }
+
+    /** The look a staged return was graded at, or null. */
+    private static Map<String, Object> look(java.util.Optional<dev.proofrun.grade.GradedLook> graded, double efficacy) {
+        if (graded.isEmpty()) {
+            return null;
+        }
+        dev.proofrun.grade.GradedLook l = graded.get();
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("number", l.number());
+        m.put("of", l.of());
+        m.put("subgroups", l.look().subgroups());
+        m.put("confidence", l.look().confidence());
+        m.put("efficacy", finite(efficacy));
+        m.put("futility", l.look().stopsForFutility() ? l.look().futility() : null);
+        m.put("spending", l.spending().token());
+        m.put("endSlot", l.endSlot());
+        if (l.nextFrom().isPresent()) {
+            Map<String, Object> next = new LinkedHashMap<>();
+            next.put("from", l.nextFrom().get());
+            next.put("to", l.nextTo().orElseThrow());
+            m.put("next", next);
+        } else {
+            m.put("next", null);
+        }
         return m;
     }
 

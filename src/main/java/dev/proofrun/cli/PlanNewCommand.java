@@ -4,6 +4,8 @@ import static dev.proofrun.cli.Conventions.option;
 
 import dev.proofrun.design.Expectation;
 import dev.proofrun.design.Requirement;
+import dev.proofrun.design.Spending;
+import dev.proofrun.design.Stages;
 import dev.proofrun.plan.Characteristic;
 import dev.proofrun.plan.CharacteristicsCsv;
 import dev.proofrun.plan.CommonDesign;
@@ -35,6 +37,7 @@ import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.OptionalInt;
 import java.util.concurrent.Callable;
+import java.util.stream.Collectors;
 import picocli.CommandLine;
 import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.Command;
@@ -111,6 +114,14 @@ public final class PlanNewCommand implements Callable<Integer> {
     @Option(names = "--subgroups", paramLabel = "K", description = "Number of subgroups k (fixes k instead of solving for it).")
     Integer subgroups;
 
+    @Option(names = "--stages", defaultValue = "1", paramLabel = "S",
+            description = "Planned looks: 1 (default, one grade at the end) to 4; the study may stop at a look when the"
+                    + " answer is clear.")
+    int stages;
+    @Option(names = "--spending", paramLabel = "obrien-fleming|pocock",
+            description = "How a staged plan spends its false-pass risk across the looks (default obrien-fleming).")
+    String spending;
+
     @Option(names = "--zone", paramLabel = "ZONE", description = "Time zone of the plant (default: this computer's).")
     String zone;
     @Option(names = "--days", defaultValue = "MON-FRI", paramLabel = "MON-FRI",
@@ -174,13 +185,14 @@ public final class PlanNewCommand implements Callable<Integer> {
         ProductionCalendar calendar = calendar();
         StudySpan studySpan = studySpan();
         CommonDesign design = design(chars);
+        Optional<Stages> looks = stages(design.design().subgroups(), chars);
         Spacing sp = Conventions.spacing(spacing);
         long s = seed != null ? seed : sp == Spacing.RANDOM ? new SecureRandom().nextInt(1_000_000_000) : 0L;
         String planId = id != null ? id : String.format(Locale.ROOT, "PR-%d-%04d", studySpan.start().getYear(),
                 new SecureRandom().nextInt(10_000));
         StudyPlan plan = option("--id", () -> StudyPlan.draft(planId,
                 new Part(part, partNumber, partRevision), new People(author, collector), chars, calendar, studySpan,
-                design.design(), sp, s));
+                design.design(), sp, s)).withStages(looks);
         PlanFiles.write(out, plan);
         PrintWriter w = spec.commandLine().getOut();
         if (rate == null && cycleSeconds == null) {
@@ -190,6 +202,10 @@ public final class PlanNewCommand implements Callable<Integer> {
             GaugeCheck.ruleOfTen(c).ifPresent(w::println);
         }
         w.println(design.reason());
+        looks.ifPresent(st -> w.println(PlanOptionMessage.STAGES_PLACEHOLDER.format(st.count(),
+                st.looks().stream().map(l -> String.valueOf(l.subgroups())).collect(Collectors.joining(", ")),
+                st.looks().stream().map(l -> dev.proofrun.grade.GradedLook.percent(l.confidence()))
+                        .collect(Collectors.joining(", ")), st.spending().token())));
         for (Characteristic c : chars) {
             if (!c.shape().isNormal()) {
                 w.println("warning: " + (c.shape().isLocationScale() ? SizeMessage.SHAPE_SIZED_AS_NORMAL.format(c.id(), c.shape().token(), c.shape().token())
@@ -199,6 +215,27 @@ public final class PlanNewCommand implements Callable<Integer> {
         w.println(PlanOptionMessage.WROTE.format(out, plan.summary()));
         w.flush();
         return 0;
+    }
+
+    /** The planned looks for --stages and --spending; empty for one stage. */
+    private Optional<Stages> stages(int subgroups, List<Characteristic> chars) {
+        if (stages < 1 || stages > Stages.MOST) {
+            throw new UserException(PlanOptionMessage.STAGES_RANGE, Stages.MOST, stages);
+        }
+        if (stages == 1) {
+            if (spending != null) {
+                throw new UserException(PlanOptionMessage.SPENDING_WITHOUT_STAGES, Stages.MOST);
+            }
+            return Optional.empty();
+        }
+        Spending how = spending == null ? Spending.OBRIEN_FLEMING : Spending.fromToken(spending).orElseThrow(
+                () -> new UserException(PlanOptionMessage.UNKNOWN_SPENDING, spending, Spending.tokens()));
+        for (Characteristic c : chars) {
+            if (c.requirement().confidence() != chars.get(0).requirement().confidence()) {
+                throw new UserException(PlanOptionMessage.STAGES_ONE_CONFIDENCE);
+            }
+        }
+        return Optional.of(StagedLooks.of(subgroups, stages, how, chars.get(0).requirement().confidence()));
     }
 
     /** The plan's design; a characteristic refused from --characteristics is named with its file. */

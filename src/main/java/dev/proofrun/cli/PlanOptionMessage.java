@@ -13,6 +13,12 @@ public enum PlanOptionMessage implements MessageKey {
     ALREADY_ISSUED("%s is already issued as %s; nothing changed"),
     REISSUED("%s was changed after it was issued as %s; issued the change as %s (it supersedes %s);"
             + " the file as found is kept as %s.bak"),
+    STAGES_RANGE("--stages: a study has 1 to %d stages, not %d"),
+    STAGES_TOO_CLOSE("--stages %d: %d subgroups cannot be split into stages at least %d subgroups apart; plan at least %d subgroups or fewer stages"),
+    UNKNOWN_SPENDING("--spending: unknown spending function '%s' (known: %s)"),
+    SPENDING_WITHOUT_STAGES("--spending applies to a staged plan: give --stages 2 to %d with it"),
+    STAGES_ONE_CONFIDENCE("--stages: a staged plan needs one confidence for all characteristics (each look's boundary serves them all)"),
+    STAGES_PLACEHOLDER("stages: %d looks at %s subgroups, bounds at %s %% confidence (%s spending split look by look, a safe interim rule; no futility stops). The power above is the single-stage design's: these looks lower it a little, so check it before issuing"),
     CHANGED_WARNING("warning: this plan was changed after it was issued as revision %s (its content gives %s);"
             + " it cannot be used until the change is issued ('proofrun plan issue')");
 

@@ -1,5 +1,7 @@
 package dev.proofrun.cli;
 
+import dev.proofrun.design.Look;
+import dev.proofrun.grade.GradedLook;
 import dev.proofrun.plan.Characteristic;
 import dev.proofrun.plan.PlanFiles;
 import dev.proofrun.plan.PlanView;
@@ -7,6 +9,7 @@ import dev.proofrun.plan.StudyPlan;
 import dev.proofrun.schedule.Slot;
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.Locale;
 import java.util.OptionalDouble;
 import java.util.concurrent.Callable;
@@ -66,6 +69,19 @@ public final class PlanShowCommand implements Callable<Integer> {
                         p.design().subgroupSize(), p.design().readings());
         out.printf(Locale.ROOT, "design   %s, sigma %s, bound %s%n", what, p.design().sigmaMethod().token(),
                 p.design().boundMethod().token());
+        p.stages().filter(st -> st.staged()).ifPresent(st -> {
+            out.printf(Locale.ROOT, "stages   %d looks, %s spending%n", st.count(), st.spending().token());
+            int from = 1;
+            for (int j = 0; j < st.count(); j++) {
+                Look l = st.looks().get(j);
+                List<Slot> slots = p.schedule().slots();
+                out.printf(Locale.ROOT, "  look %d after slot %s (stage %d: slots %s to %s, %d subgroups so far): bound at %s %%%s%n",
+                        j + 1, slots.get(l.subgroups() - 1).id(), j + 1, slots.get(from - 1).id(),
+                        slots.get(l.subgroups() - 1).id(), l.subgroups(), GradedLook.percent(l.confidence()),
+                        l.stopsForFutility() ? String.format(Locale.ROOT, ", stops for futility below %s", l.futility()) : "");
+                from = l.subgroups() + 1;
+            }
+        });
         out.printf(Locale.ROOT, "when     %s%n", p.summary());
         out.printf(Locale.ROOT, "span     from %s to %s, %.0f minutes of running time, %s spacing%n",
                 p.span().start(), p.schedule().end(), p.schedule().workingMinutes(), p.spacing().token());

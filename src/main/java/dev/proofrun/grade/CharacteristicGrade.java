@@ -4,6 +4,7 @@ import dev.proofrun.design.Requirement;
 import dev.proofrun.stats.SpecLimits;
 import java.util.List;
 import java.util.Objects;
+import java.util.Optional;
 import java.util.OptionalInt;
 
 /**
@@ -27,11 +28,22 @@ import java.util.OptionalInt;
  * @param verdict              the verdict
  * @param reasons              the reasons, in the order of the steps
  * @param additionalSubgroups  for an inconclusive verdict: about how many more subgroups at the plan's
- *                             frequency would settle it
+ *                             frequency would settle it (a planning figure; empty beyond ten times the study)
+ * @param look                 the planned look this grade was made at, for a staged study; empty otherwise
  */
 public record CharacteristicGrade(String id, String name, String unit, SpecLimits limits, Requirement requirement,
         Completeness completeness, List<double[]> subgroups, List<String> slots, Stability stability, Shape shape,
-        IndexEvidence judged, dev.proofrun.capability.CapabilityResult capability, Verdict verdict, List<Reason> reasons, OptionalInt additionalSubgroups) {
+        IndexEvidence judged, dev.proofrun.capability.CapabilityResult capability, Verdict verdict, List<Reason> reasons, OptionalInt additionalSubgroups,
+        Optional<GradedLook> look) {
+
+    /** A grade of a single-stage study. */
+    public CharacteristicGrade(String id, String name, String unit, SpecLimits limits, Requirement requirement,
+            Completeness completeness, List<double[]> subgroups, List<String> slots, Stability stability, Shape shape,
+            IndexEvidence judged, dev.proofrun.capability.CapabilityResult capability, Verdict verdict,
+            List<Reason> reasons, OptionalInt additionalSubgroups) {
+        this(id, name, unit, limits, requirement, completeness, subgroups, slots, stability, shape, judged, capability,
+                verdict, reasons, additionalSubgroups, Optional.empty());
+    }
 
     public CharacteristicGrade {
         Objects.requireNonNull(id, "id");
@@ -39,5 +51,6 @@ public record CharacteristicGrade(String id, String name, String unit, SpecLimit
         subgroups = List.copyOf(subgroups);
         slots = List.copyOf(slots);
         reasons = List.copyOf(reasons);
+        look = look == null ? Optional.empty() : look;
     }
 }

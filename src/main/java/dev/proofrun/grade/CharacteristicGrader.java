@@ -11,6 +11,7 @@ import java.time.Duration;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
 import java.util.OptionalInt;
 import java.util.concurrent.ExecutionException;
 import java.util.concurrent.FutureTask;
@@ -23,20 +24,38 @@ import java.util.concurrent.FutureTask;
  * fewer than 2 subgroups are usable, when the process is unstable ({@link StabilityJudge}), when the shape the
  * plan declared does not fit ({@link ShapeJudge}) or when the required index does not exist for the limits
  * (normal model: {@link CapabilityJudge}; lognormal and Weibull: the percentile index, {@link PercentileJudge}); not demonstrated when the estimate is below c₀; demonstrated when the lower bound is
- * at or above c₀; otherwise inconclusive, with about how many more subgroups would settle it. When the
- * process is unstable the capability is still computed and shown, labelled as describing the past.
+ * at or above c₀; otherwise inconclusive, with about how many more subgroups would settle it — a planning
+ * figure, said with the warning that grading more data again is a new look that raises the false-pass risk and
+ * with the sound way on (an extension whose boundary keeps the risk), and left out when it is beyond
+ * {@value #TENFOLD} times the study. When the process is unstable the capability is still computed and shown,
+ * labelled as describing the past.
+ *
+ * <p>At a planned look of a staged study ({@link GradedLook}) the gates are the same; the bound is taken at the
+ * look's confidence and {@link LookDecision} decides: demonstrated, stopped (not demonstrated), or continue.
  */
 final class CharacteristicGrader {
 
     private CharacteristicGrader() {
     }
 
+    /** The "more subgroups" figure is left out beyond this many times the study's subgroups. */
+    static final int TENFOLD = 10;
+
     static CharacteristicGrade grade(GradedCharacteristic gc, Design design, Duration interval, ReturnedData.Collection data) {
+        return grade(gc, design, interval, data, Optional.empty());
+    }
+
+    /**
+     * @param look the planned look of a staged study this return is graded at; empty for a single-stage study
+     */
+    static CharacteristicGrade grade(GradedCharacteristic gc, Design design, Duration interval, ReturnedData.Collection data,
+            Optional<GradedLook> look) {
         Completeness c = data.completeness();
         List<double[]> subgroups = data.subgroups();
         Requirement req = gc.requirement();
         List<Reason> reasons = new ArrayList<>();
         boolean valid = true;
+        look.ifPresent(l -> LookDecision.describe(l, reasons));
 
         if (c.adequate() && c.shortfall() == 0) {
             reasons.add(new Reason(Step.COMPLETENESS, false, GradeMessage.REASON_COMPLETE.format(c.completeSubgroups(),
@@ -62,14 +81,14 @@ final class CharacteristicGrader {
         if (subgroups.size() < 2) {
             reasons.add(new Reason(Step.STABILITY, true, GradeMessage.REASON_TOO_FEW_FOR_CHARTS.format()));
             return new CharacteristicGrade(gc.id(), gc.name(), gc.unit(), gc.limits(), req, c, subgroups, data.slots(),
-                    null, null, null, null, Verdict.NOT_VALID, reasons, OptionalInt.empty());
+                    null, null, null, null, Verdict.NOT_VALID, reasons, OptionalInt.empty(), look);
         }
 
         java.util.Optional<Reason> noSpread = NoSpread.check(subgroups);
         if (noSpread.isPresent()) {
             reasons.add(noSpread.get());
             return new CharacteristicGrade(gc.id(), gc.name(), gc.unit(), gc.limits(), req, c, subgroups, data.slots(),
-                    null, null, null, null, Verdict.NOT_VALID, reasons, OptionalInt.empty());
+                    null, null, null, null, Verdict.NOT_VALID, reasons, OptionalInt.empty(), look);
         }
 
         // the shape step (a sort of all readings) runs beside the stability step; each is seeded on its own,
@@ -103,12 +122,13 @@ final class CharacteristicGrader {
         JudgedIndex judged = null;
         IndexEvidence ev = null;
         int readings = subgroups.size() * subgroups.get(0).length;
+        double conf = look.map(l -> l.look().confidence()).orElse(req.confidence());
         if (shape.modelFits() && shape.family().isNormal()) {
             judged = CapabilityJudge.judge(gc, design, subgroups);
-            ev = judged == null ? null : judged.evidence(req, shape.model()).scaled(shape.tailFactor(),
+            ev = judged == null ? null : judged.evidence(req, shape.model(), conf).scaled(shape.tailFactor(),
                     PercentileIndex.expectedPpm(gc.limits(), shape.fit()));
         } else if (shape.modelFits()) {
-            ev = PercentileJudge.judge(gc, shape, readings, reasons);
+            ev = PercentileJudge.judge(gc, shape, readings, reasons, conf);
         }
         String symbol = req.index().symbol();
         if (ev == null) {
@@ -116,9 +136,8 @@ final class CharacteristicGrader {
                 reasons.add(new Reason(Step.CAPABILITY, true, GradeMessage.REASON_INDEX_UNDEFINED.format(symbol)));
             }
             return new CharacteristicGrade(gc.id(), gc.name(), gc.unit(), gc.limits(), req, c, subgroups, data.slots(),
-                    stability, shape, null, figures, Verdict.NOT_VALID, reasons, OptionalInt.empty());
+                    stability, shape, null, figures, Verdict.NOT_VALID, reasons, OptionalInt.empty(), look);
         }
-        double conf = req.confidence();
         double c0 = req.minimum();
         double percent = 100 * conf;
         Verdict verdict;
@@ -127,6 +146,10 @@ final class CharacteristicGrader {
             verdict = Verdict.NOT_VALID;
             reasons.add(new Reason(Step.CAPABILITY, false,
                     GradeMessage.REASON_CAPABILITY_NOT_VALID.format(symbol, ev.estimate(), ev.lower())));
+            look.filter(l -> !l.last()).ifPresent(l -> reasons.add(new Reason(Step.CAPABILITY, false,
+                    GradeMessage.REASON_LOOK_NOT_VALID.format(l.number(), l.of(), l.number() + 1))));
+        } else if (look.isPresent()) {
+            verdict = LookDecision.decide(look.get(), symbol, ev, reasons);
         } else if (ev.estimate() < c0) {
             verdict = Verdict.NOT_DEMONSTRATED;
             reasons.add(new Reason(Step.CAPABILITY, true,
@@ -144,15 +167,20 @@ final class CharacteristicGrader {
             more = judged != null && shape.tailFactor() == 1
                     ? CapabilityJudge.additionalSubgroups(judged, design, subgroups.size(), c0, conf)
                     : PercentileJudge.additionalSubgroups(ev, design.subgroupSize(), subgroups.size());
-            if (more.isPresent()) {
+            if (more.isPresent() && more.getAsInt() > TENFOLD * subgroups.size()) {
+                more = OptionalInt.empty();
+                reasons.add(new Reason(Step.CAPABILITY, false, GradeMessage.REASON_MORE_BEYOND_TENFOLD.format(subgroups.size())));
+            } else if (more.isPresent()) {
                 reasons.add(new Reason(Step.CAPABILITY, false,
                         GradeMessage.REASON_MORE_SUBGROUPS.format(more.getAsInt(), span(interval.multipliedBy(more.getAsInt())))));
+                reasons.add(new Reason(Step.CAPABILITY, false, GradeMessage.REASON_MORE_IS_A_NEW_LOOK.format()));
             } else {
                 reasons.add(new Reason(Step.CAPABILITY, false, GradeMessage.REASON_NO_AMOUNT_SETTLES.format()));
             }
+            reasons.add(new Reason(Step.CAPABILITY, false, GradeMessage.REASON_EXTEND_PROPERLY.format()));
         }
         return new CharacteristicGrade(gc.id(), gc.name(), gc.unit(), gc.limits(), req, c, subgroups, data.slots(),
-                stability, shape, ev, figures, verdict, reasons, more);
+                stability, shape, ev, figures, verdict, reasons, more, look);
     }
 
     /** Below this many readings the shape step runs on the calling thread (a thread costs more than it saves). */

@@ -1,6 +1,7 @@
 package dev.proofrun.grade;
 
 import dev.proofrun.design.Design;
+import dev.proofrun.design.Stages;
 import java.time.Duration;
 import java.time.ZoneId;
 import java.util.HashMap;
@@ -8,6 +9,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Objects;
+import java.util.Optional;
 
 /**
  * What grading needs of a plan: its identity, characteristics, design and slots. Built from the plan file's
@@ -21,13 +23,21 @@ import java.util.Objects;
  * @param slots            the k slots in time order
  * @param allowedShortfall how many of the k subgroups may be unusable before the study is not valid
  * @param interval         the planned time between subgroups (the plan's frequency)
+ * @param stages           the planned looks of a staged study; empty for a single-stage study
  */
 public record GradingPlan(String id, String revision, ZoneId zone, List<GradedCharacteristic> characteristics,
-        Design design, List<PlannedSlot> slots, int allowedShortfall, Duration interval) {
+        Design design, List<PlannedSlot> slots, int allowedShortfall, Duration interval, Optional<Stages> stages) {
+
+    /** A single-stage plan. */
+    public GradingPlan(String id, String revision, ZoneId zone, List<GradedCharacteristic> characteristics,
+            Design design, List<PlannedSlot> slots, int allowedShortfall, Duration interval) {
+        this(id, revision, zone, characteristics, design, slots, allowedShortfall, interval, Optional.empty());
+    }
 
     /**
      * @throws IllegalArgumentException if there are no characteristics, duplicate ids, or the number of slots
      *                                  differs from the design's subgroups
+     * @throws IllegalArgumentException if the last planned look is not at the last slot
      */
     public GradingPlan {
         Objects.requireNonNull(id, "id");
@@ -48,6 +58,11 @@ public record GradingPlan(String id, String revision, ZoneId zone, List<GradedCh
         if (allowedShortfall < 0) {
             throw new IllegalArgumentException(String.format(Locale.ROOT, "allowed shortfall must not be negative: %d", allowedShortfall));
         }
+        stages = stages == null ? Optional.empty() : stages;
+        if (stages.isPresent() && stages.get().last().subgroups() != slots.size()) {
+            throw new IllegalArgumentException(String.format(Locale.ROOT, "the last look is at %d subgroups, the plan has %d slots",
+                    stages.get().last().subgroups(), slots.size()));
+        }
     }
 
     /**
@@ -57,6 +72,17 @@ public record GradingPlan(String id, String revision, ZoneId zone, List<GradedCh
      */
     public static int defaultAllowedShortfall(int subgroups) {
         return dev.proofrun.design.LossAllowance.of(subgroups);
+    }
+
+    /** Whether the plan has planned looks before its end. */
+    public boolean staged() {
+        return stages.isPresent() && stages.get().staged();
+    }
+
+    /** The same plan with these planned looks. */
+    public GradingPlan withStages(Stages planned) {
+        return new GradingPlan(id, revision, zone, characteristics, design, slots, allowedShortfall, interval,
+                Optional.of(planned));
     }
 
     /** "PR-2027-0042@1a2b3c4d5e6f", as in the fill-in file's plan cell. */

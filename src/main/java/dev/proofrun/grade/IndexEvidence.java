@@ -34,8 +34,8 @@ public record IndexEvidence(IndexKind index, double required, double confidence,
 
     /** "Cpk under the normal model by normal theory, exact bounds: estimate 1.473, lower 95 % bound 1.285, required 1.33". */
     public String summary() {
-        return GradeMessage.JUDGED.format(index.symbol(), model.id(), method.words(), estimate, 100 * confidence,
-                lower, required);
+        return GradeMessage.JUDGED.format(index.symbol(), model.id(), method.words(), estimate,
+                GradedLook.percent(confidence), lower, required);
     }
 
     /** Whether the verdict rests on figures other than the normal-theory ones of the raw readings. */

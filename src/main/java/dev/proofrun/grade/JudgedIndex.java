@@ -92,9 +92,14 @@ record JudgedIndex(IndexKind kind, double estimate, double cp, int readings, dou
 
     /** The evidence record for the result. */
     IndexEvidence evidence(Requirement r, ShapeModel model) {
+        return evidence(r, model, r.confidence());
+    }
+
+    /** The evidence record with its bounds at {@code confidence} (a staged study's look) instead of the requirement's. */
+    IndexEvidence evidence(Requirement r, ShapeModel model, double confidence) {
         // the upper bound only matters (and is only shown) when the estimate is below c0; the exact two-sided
         // bound costs about a second at a million readings, so it is not computed otherwise
-        double up = estimate < r.minimum() ? upper(r.confidence()) : Double.NaN;
-        return new IndexEvidence(kind, r.minimum(), r.confidence(), estimate, lower(r.confidence()), up, model);
+        double up = estimate < r.minimum() ? upper(confidence) : Double.NaN;
+        return new IndexEvidence(kind, r.minimum(), confidence, estimate, lower(confidence), up, model);
     }
 }

@@ -38,6 +38,12 @@ final class PercentileJudge {
      * @param readings N, the number of readings the fit came from
      */
     static IndexEvidence judge(GradedCharacteristic gc, Shape shape, int readings, List<Reason> reasons) {
+        return judge(gc, shape, readings, reasons, gc.requirement().confidence());
+    }
+
+    /** As above, the bounds at {@code confidence} (a staged study's look) instead of the requirement's. */
+    static IndexEvidence judge(GradedCharacteristic gc, Shape shape, int readings, List<Reason> reasons,
+            double confidence) {
         ShapeFit fit = shape.fit();
         ShapeFamily family = fit.family();
         Requirement req = gc.requirement();
@@ -57,8 +63,8 @@ final class PercentileJudge {
         }
         long seed = PivotalBound.DEFAULT_SEED;
         boolean pivotal = family.isLocationScale();
-        double[] b = pivotal ? PivotalBound.bounds(fit, kind, limits, readings, req.confidence(), seed)
-                : FoldedNormalBound.bounds(fit, kind, limits, readings, req.confidence(), seed);
+        double[] b = pivotal ? PivotalBound.bounds(fit, kind, limits, readings, confidence, seed)
+                : FoldedNormalBound.bounds(fit, kind, limits, readings, confidence, seed);
         double f = shape.tailFactor();
         double ppm = PercentileIndex.expectedPpm(limits, fit);
         if (kind.usesWithinSigma()) {
@@ -74,7 +80,7 @@ final class PercentileJudge {
                         FoldedNormalBound.GRID_SIZE, FoldedNormalBound.DRAWS, seed);
         reasons.add(new Reason(Step.CAPABILITY, false, method));
         double upper = estimate < req.minimum() ? b[1] * f : Double.NaN;
-        return new IndexEvidence(kind, req.minimum(), req.confidence(), estimate * f, b[0] * f, upper,
+        return new IndexEvidence(kind, req.minimum(), confidence, estimate * f, b[0] * f, upper,
                 ShapeModel.of(family), pivotal ? IndexMethod.PERCENTILE : IndexMethod.PERCENTILE_INVERTED, ppm, seed);
     }
 

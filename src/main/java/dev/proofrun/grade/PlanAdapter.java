@@ -16,7 +16,8 @@ public final class PlanAdapter {
 
     /**
      * What grading needs of the plan. The allowed shortfall is {@link GradingPlan#defaultAllowedShortfall}
-     * (plans do not state one yet); the frequency is the schedule's spacing in running time.
+     * (plans do not state one yet); the frequency is the schedule's spacing in running time; a staged plan's
+     * looks come along.
      */
     public static GradingPlan of(StudyPlan plan) {
         List<GradedCharacteristic> cs = new ArrayList<>();
@@ -32,6 +33,6 @@ public final class PlanAdapter {
         String revision = plan.revision().orElse("draft");
         return new GradingPlan(plan.id(), revision, plan.calendar().zone(), cs, plan.design(), slots,
                 GradingPlan.defaultAllowedShortfall(plan.design().subgroups()),
-                Duration.ofSeconds(Math.round(plan.schedule().spacingMinutes() * 60)));
+                Duration.ofSeconds(Math.round(plan.schedule().spacingMinutes() * 60)), plan.stages());
     }
 }

@@ -307,9 +307,45 @@ final class ReturnedData implements RowHandler {
 
     /** Finishes one characteristic: which subgroups are graded, and the problems of missing, short and late ones. */
     Collection finish(int ci) {
+        return finish(ci, plan.slots().size(), plan.allowedShortfall());
+    }
+
+    /**
+     * How far the return reaches: the number of planned slots up to and including the last one that came back
+     * with a reading (or an unusable entry in a reading box) for any characteristic; 0 when none did. A staged
+     * study's fill-in file carries the rows of every stage, so rows whose boxes are all empty do not count.
+     */
+    int reach() {
+        int last = 0;
+        for (Collected col : collected) {
+            for (int s = col.count.length - 1; s >= last; s--) {
+                if (col.row[s] != 0 && (col.count[s] > 0 || col.spoiled[s])) {
+                    last = s + 1;
+                    break;
+                }
+            }
+        }
+        return last;
+    }
+
+    /**
+     * Finishes one characteristic at a staged study's look: only the first {@code slotsSoFar} planned slots are
+     * graded, against the allowance of a study of that many subgroups; the slots of later stages are neither
+     * graded nor missing.
+     */
+    Collection finish(int ci, int slotsSoFar, int allowedShortfall) {
+        return finish(ci, slotsSoFar, allowedShortfall, log);
+    }
+
+    /** As above, for an earlier look replayed: its problems are those of the look graded, so none are recorded twice. */
+    Collection replay(int ci, int slotsSoFar, int allowedShortfall) {
+        return finish(ci, slotsSoFar, allowedShortfall, new ProblemLog());
+    }
+
+    private Collection finish(int ci, int slotsSoFar, int allowedShortfall, ProblemLog log) {
         Collected col = collected[ci];
         String id = plan.characteristics().get(ci).id();
-        int k = plan.slots().size();
+        int k = slotsSoFar;
         List<double[]> subgroups = new ArrayList<>();
         List<String> slots = new ArrayList<>();
         int missing = 0;
@@ -359,7 +395,7 @@ final class ReturnedData implements RowHandler {
             }
         }
         Completeness completeness = new Completeness(k, n, subgroups.size(), incomplete, missing,
-                (long) subgroups.size() * n, col.flagged, lateCount, plan.allowedShortfall());
+                (long) subgroups.size() * n, col.flagged, lateCount, allowedShortfall);
         return new Collection(completeness, subgroups, slots, col.outOfReach);
     }
 

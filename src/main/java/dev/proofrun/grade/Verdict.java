@@ -7,10 +7,14 @@ package dev.proofrun.grade;
  * <ul>
  * <li>{@link #DEMONSTRATED}: complete, stable, the distribution model fair, and the lower confidence bound
  *     of the required index at or above the required minimum c₀.</li>
+ * <li>{@link #CONTINUE}: at a planned look of a staged study before the last, neither demonstrated nor stopped
+ *     for futility: the people collect the next stage and send the whole file back (the reasons name its slots).
+ *     Not a pass: {@code --require-demonstrated} refuses it like the others.</li>
  * <li>{@link #INCONCLUSIVE}: the estimate is at or above c₀ but its lower bound is below — more data may
  *     settle it (the grade says about how many more subgroups).</li>
  * <li>{@link #NOT_DEMONSTRATED}: the estimate itself is below c₀ (the reasons say whether even the upper
- *     confidence bound is).</li>
+ *     confidence bound is); in a staged study also: stopped for futility at a look, or the last look's bound
+ *     below c₀.</li>
  * <li>{@link #NOT_VALID}: the evidence cannot carry a capability statement: incomplete beyond what the plan
  *     allows, unstable (the index then describes the past, not the process), or no distribution model fits.
  *     Worst, because nothing about the process is known from it.</li>
@@ -18,6 +22,7 @@ package dev.proofrun.grade;
  */
 public enum Verdict {
     DEMONSTRATED("demonstrated", "Demonstrated"),
+    CONTINUE("continue", "Continue"),
     INCONCLUSIVE("inconclusive", "Inconclusive"),
     NOT_DEMONSTRATED("not-demonstrated", "Not demonstrated"),
     NOT_VALID("not-valid", "Not valid");

@@ -31,8 +31,14 @@
  * {@code IndexMethod}; every output leads with them.</li>
  * </ol>
  * {@code Verdict}: not-valid, not-demonstrated, demonstrated (lower bound ≥ c0) or inconclusive (with about how
- * many more subgroups would settle it); the part's verdict is the worst. The caution
- * ({@code GradeMessage.CAUTION}) goes with every verdict.
+ * many more subgroups would settle it — a planning figure, warned, dropped beyond ten times the study); the
+ * part's verdict is the worst. The caution ({@code GradeMessage.CAUTION}) goes with every verdict.
+ *
+ * <p>Staged plans ({@code GradingPlan.stages()}): {@code Grader.look} picks the furthest planned look the return
+ * completes ({@code GradedLook}); the same steps run on the slots up to it with the bound at the look's confidence,
+ * earlier looks are replayed so their decisions stand, and {@code LookDecision} says demonstrated, not
+ * demonstrated (futility, or the last look short) or {@code Verdict.CONTINUE} with the next stage's slots.
+ * See docs/decisions/staged-studies-grading.md.
  *
  * <p>Reading streams one row at a time: {@code CsvLines}/{@code CsvTable} (UTF-8, {@code ,} or {@code ;} —
  * whichever the header has more of) and {@code XlsxTable} (POI's SAX reader) feed {@code ReturnedData}, which

@@ -3,6 +3,7 @@ package dev.proofrun.plan;
 import dev.proofrun.design.Design;
 import dev.proofrun.design.Expectation;
 import dev.proofrun.design.Requirement;
+import dev.proofrun.design.Stages;
 import dev.proofrun.schedule.BreakWindow;
 import dev.proofrun.schedule.ProductionCalendar;
 import dev.proofrun.schedule.ProductionRate;
@@ -101,11 +102,16 @@ final class PlanCodec {
                 new PlanJson.PartJ(p.part().name(), p.part().number(), p.part().revision()),
                 new PlanJson.PeopleJ(p.people().author(), p.people().collector()),
                 new PlanJson.DesignJ(d.subgroupSize(), d.subgroups(), d.sigmaMethod().token(), d.boundMethod().token()),
-                chars,
+                p.stages().map(PlanCodec::stagesJson).orElse(null), chars,
                 new PlanJson.CalendarJ(cal.zone().getId(), days, shifts, breaks, off, rate),
                 span, p.spacing().token(), p.seed(),
                 new PlanJson.ScheduleJ(s.workingMinutes(), s.spacingMinutes(), s.end().toString(), s.shifts(), s.days(),
                         slots));
+    }
+
+    private static PlanJson.StagesJ stagesJson(Stages st) {
+        return new PlanJson.StagesJ(st.spending().token(), st.looks().stream().map(l -> new PlanJson.LookJ(l.subgroups(),
+                l.confidence(), l.stopsForFutility() ? l.futility() : null)).toList());
     }
 
     private static Double boxed(OptionalDouble x) {
@@ -147,8 +153,11 @@ final class PlanCodec {
         if (number != null && number < 2) {
             throw new UserException(file, PlanMessage.REVISION_NUMBER_RANGE, number);
         }
+        Optional<Stages> stages = f.stages() == null ? Optional.empty()
+                : Optional.of(PlanStagesCodec.read(f.stages(), design.subgroups(), chars, file));
         return value("$", () -> new StudyPlan(id, part, people, chars, calendar, span, design, spacing, seed, schedule,
-                state, Optional.ofNullable(f.revision()), Optional.ofNullable(f.supersedes()), number == null ? 1 : number));
+                state, Optional.ofNullable(f.revision()), Optional.ofNullable(f.supersedes()), number == null ? 1 : number,
+                stages));
     }
 
     private Characteristic characteristic(PlanJson.CharacteristicJ c, String path) {

@@ -249,7 +249,7 @@ public final class PlanFiles {
         PlanJson.File f = PlanCodec.toJson(plan);
         PlanJson.File content = new PlanJson.File(f.format(), f.formatVersion(), f.id(), null, null, f.revisionNumber(),
                 f.supersedes(),
-                f.part(), f.people(), f.design(), f.characteristics(), f.calendar(), f.span(), f.spacing(), f.seed(),
+                f.part(), f.people(), f.design(), f.stages(), f.characteristics(), f.calendar(), f.span(), f.spacing(), f.seed(),
                 f.schedule());
         try {
             MAPPER.writeValue(out, content);

@@ -23,9 +23,9 @@ final class PlanJson {
 
     @JsonInclude(JsonInclude.Include.NON_NULL)
     @JsonPropertyOrder({"format", "formatVersion", "id", "state", "revision", "revisionNumber", "supersedes", "part",
-        "people", "design", "characteristics", "calendar", "span", "spacing", "seed", "schedule"})
+        "people", "design", "stages", "characteristics", "calendar", "span", "spacing", "seed", "schedule"})
     record File(String format, Integer formatVersion, String id, String state, String revision, Integer revisionNumber,
-            String supersedes, PartJ part, PeopleJ people, DesignJ design, List<CharacteristicJ> characteristics,
+            String supersedes, PartJ part, PeopleJ people, DesignJ design, StagesJ stages, List<CharacteristicJ> characteristics,
             CalendarJ calendar, SpanJ span, String spacing, Long seed, ScheduleJ schedule) {
     }
 
@@ -39,6 +39,17 @@ final class PlanJson {
 
     @JsonPropertyOrder({"subgroupSize", "subgroups", "sigmaMethod", "boundMethod"})
     record DesignJ(Integer subgroupSize, Integer subgroups, String sigmaMethod, String boundMethod) {
+    }
+
+    /** A staged study's looks; left out of the file of a single-stage plan, so its revision is as before. */
+    @JsonPropertyOrder({"spending", "looks"})
+    record StagesJ(String spending, List<LookJ> looks) {
+    }
+
+    /** One planned look; {@code futility} left out where the look has none (always at the last look). */
+    @JsonInclude(JsonInclude.Include.NON_NULL)
+    @JsonPropertyOrder({"subgroups", "confidence", "futility"})
+    record LookJ(Integer subgroups, Double confidence, Double futility) {
     }
 
     @JsonInclude(JsonInclude.Include.NON_NULL)

@@ -1,6 +1,7 @@
 package dev.proofrun.plan;
 
 import dev.proofrun.design.Design;
+import dev.proofrun.design.Stages;
 import dev.proofrun.schedule.ProductionCalendar;
 import dev.proofrun.schedule.Schedule;
 import dev.proofrun.schedule.Scheduler;
@@ -39,10 +40,13 @@ import java.util.Set;
  * @param revisionNumber  the revision as people say it: 1 for a plan's first issue, one more for each issued
  *                        change after it (a draft carries the number it will be issued as). The fingerprint
  *                        stays the identity; the number is for speaking ("revision 2") and is covered by it
+ * @param stages          the planned looks of a staged study (its last look at all k subgroups); empty for a
+ *                        single-stage study, whose file then has no {@code stages} object
  */
 public record StudyPlan(String id, Part part, People people, List<Characteristic> characteristics,
         ProductionCalendar calendar, StudySpan span, Design design, Spacing spacing, long seed, Schedule schedule,
-        PlanState state, Optional<String> revision, Optional<String> supersedes, int revisionNumber) {
+        PlanState state, Optional<String> revision, Optional<String> supersedes, int revisionNumber,
+        Optional<Stages> stages) {
 
     /**
      * The largest subgroup size a plan file may state: the fill-in workbook has one column per reading beside
@@ -59,6 +63,7 @@ public record StudyPlan(String id, Part part, People people, List<Characteristic
      * @throws IllegalArgumentException if the schedule does not have k slots of n parts
      * @throws IllegalArgumentException if an issued plan lacks a revision or a draft has one
      * @throws IllegalArgumentException if the revision number is below 1
+     * @throws IllegalArgumentException if the stages' last look is not at the design's k subgroups
      */
     public StudyPlan {
         if (id == null || !id.matches("[A-Za-z0-9._-]{1,40}")) {
@@ -94,14 +99,37 @@ public record StudyPlan(String id, Part part, People people, List<Characteristic
         if (revisionNumber < 1) {
             throw new IllegalArgumentException(String.format(Locale.ROOT, "a revision number is 1 or more: %d", revisionNumber));
         }
+        // one look is the single-stage study: stored as no stages, so its file is the single-stage file
+        stages = stages == null || stages.isPresent() && !stages.get().staged() ? Optional.empty() : stages;
+        if (stages.isPresent() && stages.get().last().subgroups() != design.subgroups()) {
+            throw new IllegalArgumentException(String.format(Locale.ROOT,
+                    "the last look is at %d subgroups, the design has %d", stages.get().last().subgroups(),
+                    design.subgroups()));
+        }
     }
 
-    /** A plan of revision number 1: a first issue, or a plan written before revisions were numbered. */
+    /** A single-stage plan with this revision number. */
+    public StudyPlan(String id, Part part, People people, List<Characteristic> characteristics,
+            ProductionCalendar calendar, StudySpan span, Design design, Spacing spacing, long seed, Schedule schedule,
+            PlanState state, Optional<String> revision, Optional<String> supersedes, int revisionNumber) {
+        this(id, part, people, characteristics, calendar, span, design, spacing, seed, schedule, state, revision,
+                supersedes, revisionNumber, Optional.empty());
+    }
+
+    /** A plan of revision number 1 with these planned looks (or none). */
+    public StudyPlan(String id, Part part, People people, List<Characteristic> characteristics,
+            ProductionCalendar calendar, StudySpan span, Design design, Spacing spacing, long seed, Schedule schedule,
+            PlanState state, Optional<String> revision, Optional<String> supersedes, Optional<Stages> stages) {
+        this(id, part, people, characteristics, calendar, span, design, spacing, seed, schedule, state, revision,
+                supersedes, 1, stages);
+    }
+
+    /** A single-stage plan of revision number 1: a first issue, or a plan written before revisions were numbered. */
     public StudyPlan(String id, Part part, People people, List<Characteristic> characteristics,
             ProductionCalendar calendar, StudySpan span, Design design, Spacing spacing, long seed, Schedule schedule,
             PlanState state, Optional<String> revision, Optional<String> supersedes) {
         this(id, part, people, characteristics, calendar, span, design, spacing, seed, schedule, state, revision,
-                supersedes, 1);
+                supersedes, 1, Optional.empty());
     }
 
     /**
@@ -159,13 +187,13 @@ public record StudyPlan(String id, Part part, People people, List<Characteristic
             return this;
         }
         return new StudyPlan(id, part, people, characteristics, calendar, span, design, spacing, seed, schedule,
-                PlanState.DRAFT, Optional.empty(), revision, revisionNumber + 1);
+                PlanState.DRAFT, Optional.empty(), revision, revisionNumber + 1, stages);
     }
 
     /** The same plan, issued with the given fingerprint (package use: {@link PlanFiles#issue(StudyPlan)}). */
     StudyPlan issuedAs(String fingerprint) {
         return new StudyPlan(id, part, people, characteristics, calendar, span, design, spacing, seed, schedule,
-                PlanState.ISSUED, Optional.of(fingerprint), supersedes, revisionNumber);
+                PlanState.ISSUED, Optional.of(fingerprint), supersedes, revisionNumber, stages);
     }
 
     /** The same plan with another schedule (re-scheduling a draft, e.g. after changing the seed). */
@@ -174,6 +202,25 @@ public record StudyPlan(String id, Part part, People people, List<Characteristic
             throw new IllegalStateException("an issued plan is frozen; reopen() it first");
         }
         return new StudyPlan(id, part, people, characteristics, calendar, span, design, spacing, seed, newSchedule,
-                state, revision, supersedes, revisionNumber);
+                state, revision, supersedes, revisionNumber, stages);
+    }
+
+    /**
+     * The same draft with these planned looks (or none, for a single-stage study).
+     *
+     * @throws IllegalStateException    for an issued plan
+     * @throws IllegalArgumentException if the last look is not at the design's k subgroups
+     */
+    public StudyPlan withStages(Optional<Stages> newStages) {
+        if (isIssued()) {
+            throw new IllegalStateException("an issued plan is frozen; reopen() it first");
+        }
+        return new StudyPlan(id, part, people, characteristics, calendar, span, design, spacing, seed, schedule,
+                state, revision, supersedes, revisionNumber, newStages);
+    }
+
+    /** Whether the plan has planned looks before its end. */
+    public boolean isStaged() {
+        return stages.isPresent() && stages.get().staged();
     }
 }

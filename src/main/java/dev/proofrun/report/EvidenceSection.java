@@ -52,7 +52,8 @@ final class EvidenceSection {
         String gloss = VerdictSection.gloss(g.verdict());
         flow.place(Paragraph.of(Character.toUpperCase(gloss.charAt(0)) + gloss.substring(1) + ".", regular, 9));
         g.additionalSubgroups().ifPresent(k -> flow.place(Paragraph.of(String.format(Locale.ROOT,
-                "About %d more subgroups at the plan's frequency would likely settle it.", k), regular, 9)));
+                "About %d more subgroups at the plan's frequency would likely settle it (a planning figure: grading"
+                        + " again with more data is a new look that raises the false-pass risk).", k), regular, 9)));
 
         List<Block> c = new ArrayList<>();
         Completeness m = g.completeness();

@@ -82,6 +82,10 @@ record VerdictBadge(Verdict verdict, String text, Typeface face, Typeface bold, 
                 c.pen(Pen.solid(1.1f));
                 c.marker(Canvas.Marker.RING, x, y, size - 1f);
             }
+            case CONTINUE -> { // an open triangle pointing on: collect the next stage
+                c.pen(Pen.solid(1.1f));
+                c.polyline(new double[] {x - r, x + r, x - r, x - r}, new double[] {y + r, y, y - r, y + r});
+            }
             case NOT_DEMONSTRATED -> {
                 c.pen(Pen.solid(1.1f));
                 c.polyline(new double[] {x - r, x + r, x, x - r}, new double[] {y + r, y + r, y - r, y + r});

@@ -43,6 +43,8 @@ final class VerdictSection {
         switch (v) {
             case DEMONSTRATED:
                 return "the lower confidence bound reaches the requirement, and the evidence is complete, stable and fits its model";
+            case CONTINUE:
+                return "at this planned look the bound does not yet reach the requirement and the study did not stop: collect the next stage";
             case INCONCLUSIVE:
                 return "the estimate reaches the requirement but its lower confidence bound does not yet";
             case NOT_DEMONSTRATED:
@@ -66,6 +68,7 @@ final class VerdictSection {
         box.add(new VerdictBadge(result.verdict(), "for the part", bold, bold, 14));
         box.add(Block.space(2));
         box.add(Paragraph.of("The worst of its characteristics: " + gloss(result.verdict()) + ".", regular, 9));
+        result.look().ifPresent(l -> box.add(Paragraph.of(l.line(result.verdict()), bold, 9)));
         box.add(Block.space(6));
         for (CharacteristicGrade g : result.characteristics()) {
             box.add(new VerdictBadge(g.verdict(), g.id() + "  " + Fmt.name(g.name()) + headline(g), bold, bold, 9.5f));

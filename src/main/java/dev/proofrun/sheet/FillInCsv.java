@@ -34,9 +34,12 @@ public final class FillInCsv {
         int n = plan.design().subgroupSize();
         Writer w = new OutputStreamWriter(out, StandardCharsets.UTF_8);
         CSVPrinter csv = new CSVPrinter(w, CSVFormat.RFC4180);
-        csv.printRecord(FillInColumns.header(n));
-        List<String> row = new ArrayList<>(FillInColumns.width(n));
-        for (Slot slot : plan.schedule().slots()) {
+        csv.printRecord(FillInColumns.header(plan));
+        List<String> row = new ArrayList<>(FillInColumns.width(plan));
+        int[] stage = FillInColumns.stageOfSlot(plan);
+        List<Slot> slots = plan.schedule().slots();
+        for (int s = 0; s < slots.size(); s++) {
+            Slot slot = slots.get(s);
             for (Characteristic c : plan.characteristics()) {
                 row.clear();
                 for (String cell : FillInColumns.prefilled(plan, slot, c)) {
@@ -44,6 +47,9 @@ public final class FillInCsv {
                 }
                 while (row.size() < FillInColumns.width(n)) {
                     row.add("");
+                }
+                if (plan.isStaged()) {
+                    row.add(Integer.toString(stage[s]));
                 }
                 csv.printRecord(row);
             }

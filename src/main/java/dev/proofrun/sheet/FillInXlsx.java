@@ -70,7 +70,9 @@ public final class FillInXlsx {
 
     private static void fillIn(StudyPlan plan, SXSSFSheet sheet, Styles styles) {
         int n = plan.design().subgroupSize();
-        List<String> header = FillInColumns.header(n);
+        List<String> header = FillInColumns.header(plan);
+        int editableEnd = FillInColumns.width(n); // a staged plan's stage column after it is prefilled
+        int[] stage = FillInColumns.stageOfSlot(plan);
         Row head = sheet.createRow(0);
         for (int i = 0; i < header.size(); i++) {
             Cell cell = head.createCell(i);
@@ -78,7 +80,9 @@ public final class FillInXlsx {
             cell.setCellStyle(styles.header);
         }
         int r = 1;
-        for (Slot slot : plan.schedule().slots()) {
+        List<Slot> slots = plan.schedule().slots();
+        for (int s = 0; s < slots.size(); s++) {
+            Slot slot = slots.get(s);
             for (Characteristic c : plan.characteristics()) {
                 Row row = sheet.createRow(r++);
                 List<String> pre = FillInColumns.prefilled(plan, slot, c);
@@ -87,9 +91,14 @@ public final class FillInXlsx {
                     cell.setCellValue(pre.get(i));
                     cell.setCellStyle(CellText.risky(pre.get(i)) ? styles.prefilledQuoted : styles.prefilled);
                 }
-                for (int i = FillInColumns.FIRST_EDITABLE; i < header.size(); i++) {
+                for (int i = FillInColumns.FIRST_EDITABLE; i < editableEnd; i++) {
                     boolean reading = i >= FillInColumns.FIRST_READING && i < FillInColumns.FIRST_READING + n;
                     row.createCell(i).setCellStyle(reading ? styles.reading : styles.editableText);
+                }
+                if (plan.isStaged()) {
+                    Cell cell = row.createCell(editableEnd);
+                    cell.setCellValue(Integer.toString(stage[s]));
+                    cell.setCellStyle(styles.prefilled);
                 }
             }
         }
@@ -110,7 +119,7 @@ public final class FillInXlsx {
         sheet.createFreezePane(0, 1);
         int[] widths = {22, 7, 14, 24, 18, 12, 12};
         for (int i = 0; i < header.size(); i++) {
-            int chars = i < widths.length ? widths[i] : (i == header.size() - 1 ? 30 : 10);
+            int chars = i < widths.length ? widths[i] : (i == editableEnd - 1 ? 30 : 10);
             sheet.setColumnWidth(i, chars * 256);
         }
         protect(sheet);

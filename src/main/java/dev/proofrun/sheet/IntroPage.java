@@ -76,6 +76,11 @@ final class IntroPage {
                 first.id(), Values.DAY.format(first.start()), Values.CLOCK.format(first.start()), last.id(),
                 Values.DAY.format(last.start()), Values.CLOCK.format(last.start()), plan.calendar().zone().getId());
         section(flow, "How often", List.of(Paragraph.of(often, regular, BODY)));
+        plan.stages().filter(st -> st.staged()).ifPresent(st -> {
+            String ends = st.looks().subList(0, st.count() - 1).stream()
+                    .map(l -> slots.get(l.subgroups() - 1).id()).collect(java.util.stream.Collectors.joining(", "));
+            section(flow, "Stages", List.of(Paragraph.of(SheetWording.stagesIntro(st.count(), ends), regular, BODY)));
+        });
 
         List<Block> items = new ArrayList<>();
         List<String> steps = SheetWording.instructions(n);

@@ -3,6 +3,9 @@ package dev.proofrun.sheet;
 import dev.proofrun.plan.StudyPlan;
 import dev.proofrun.schedule.Slot;
 import dev.proofrun.sheet.layout.Flow;
+import dev.proofrun.sheet.layout.Framed;
+import dev.proofrun.sheet.layout.Paragraph;
+import dev.proofrun.sheet.layout.Pen;
 import dev.proofrun.text.UserException;
 import dev.proofrun.sheet.layout.PageHeading;
 import dev.proofrun.sheet.layout.Pages;
@@ -13,7 +16,8 @@ import java.util.List;
 /**
  * Writes the printed collection sheet: the opening pages ({@link IntroPage}), then the slot table
  * ({@link SlotTable}) from a new page. Every page carries the part, the plan id with its revision and
- * "page x of y"; a draft is marked DRAFT across every page.
+ * "page x of y"; a draft is marked DRAFT across every page. A staged plan's table carries a framed line after the
+ * last slot of each stage but the last: stop, send the file back, collect the next stage only on "continue".
  */
 public final class SheetPdf {
 
@@ -55,11 +59,18 @@ public final class SheetPdf {
             flow.startTable(table.header());
             List<Slot> slots = plan.schedule().slots();
             float block = table.blockHeight();
+            int[] stage = FillInColumns.stageOfSlot(plan);
             for (int i = 0; i < slots.size(); i++) {
                 if (lastWouldBeAlone(slots.size() - i, flow.remaining(), block)) {
                     flow.newPage(); // the last two slots share the last page: none stands alone on it
                 }
                 flow.place(table.slot(slots.get(i)));
+                if (i + 1 < slots.size() && stage[i + 1] != stage[i]) {
+                    int next = plan.stages().orElseThrow().looks().get(stage[i]).subgroups();
+                    flow.place(new Framed(List.of(Paragraph.of(SheetWording.stageEnds(stage[i], stage[slots.size() - 1],
+                            slots.get(i).id(), slots.get(i + 1).id(), slots.get(next - 1).id()), pages.bold(), 9f)),
+                            4f, Pen.RULE, 1f));
+                }
             }
             flow.endTable();
             pages.write(out);

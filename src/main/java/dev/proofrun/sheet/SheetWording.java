@@ -32,6 +32,30 @@ final class SheetWording {
     }
 
     /**
+     * The mark after the last slot of a stage that is not the last: where the collectors stop and send the file.
+     *
+     * @param stage    the stage that ends, 1-based
+     * @param of       how many stages the plan has
+     * @param endSlot  its last slot
+     * @param nextFrom the first slot of the next stage
+     * @param nextTo   the last slot of the next stage
+     */
+    static String stageEnds(int stage, int of, String endSlot, String nextFrom, String nextTo) {
+        return String.format(Locale.ROOT, "Stage %d of %d ends after slot %s: stop here and send the fill-in file back"
+                + " now, with every reading so far. Collect stage %d (slots %s to %s) only when the grade says"
+                + " continue.", stage, of, endSlot, stage + 1, nextFrom, nextTo);
+    }
+
+    /** The paragraph of the opening pages that explains a staged plan. */
+    static String stagesIntro(int of, String ends) {
+        ends = ends.contains(",") ? ends.substring(0, ends.lastIndexOf(',')) + " and" + ends.substring(ends.lastIndexOf(',') + 1)
+                : ends;
+        return String.format(Locale.ROOT, "This study is collected in %d stages. After each stage but the last the"
+                + " fill-in file goes back for grading: it may settle the question early, and then the later stages"
+                + " are not collected. The stages before the last end after slot %s; the slot table marks each end.", of, ends);
+    }
+
+    /**
      * The numbered instructions.
      *
      * @param n subgroup size

@@ -45,7 +45,11 @@ class VerdictTest {
         assertTrue(g.judged().estimate() >= 1.33 && g.judged().lower() < 1.33);
         assertTrue(g.additionalSubgroups().isPresent());
         assertTrue(g.additionalSubgroups().getAsInt() > 0);
-        assertTrue(g.reasons().get(g.reasons().size() - 1).text().contains("more subgroups"));
+        assertTrue(g.reasons().stream().anyMatch(r -> r.text().startsWith("About " + g.additionalSubgroups().getAsInt()
+                + " more subgroups")), g.reasons().toString());
+        // the figure is a planning figure: re-grading more data is a new look, and the sound way on is named
+        assertTrue(g.reasons().stream().anyMatch(r -> r.text().contains("second look at the same question")));
+        assertTrue(g.reasons().get(g.reasons().size() - 1).text().contains("Proschan & Hunsberger 1995"));
     }
 
     @Test

@@ -53,7 +53,8 @@ public final class GradingViewModel extends StepViewModel {
     private final BooleanBinding graded = result.isNotNull();
     private final StringBinding verdictLine = Bindings.createStringBinding(() -> result.get() == null ? ""
             : AppMessage.GRADING_VERDICT.format(result.get().planId(), this.gradedAgainst == null ? "revision " + result.get().revision()
-                    : this.gradedAgainst.revisionWords(), result.get().verdict().words()), result);
+                    : this.gradedAgainst.revisionWords(), result.get().verdict().words())
+                    + result.get().look().map(l -> "\n" + l.line(result.get().verdict())).orElse(""), result);
     private final ObjectBinding<Tone> tone = Bindings.createObjectBinding(() -> result.get() == null ? Tone.OPEN
             : EvidenceDisplay.tone(result.get().verdict()), result);
     private final BooleanProperty busy = new SimpleBooleanProperty(this, "busy", false);
