@@ -1,6 +1,7 @@
 package dev.proofrun.grade;
 
 import dev.proofrun.design.Requirement;
+import dev.proofrun.stats.BoundEngine;
 import dev.proofrun.stats.IndexKind;
 import dev.proofrun.stats.PercentileIndex;
 import dev.proofrun.stats.PivotalBound;
@@ -49,12 +50,12 @@ final class PercentileJudge {
             }
             limits = new SpecLimits(OptionalDouble.empty(), limits.upper());
         }
-        double estimate = PercentileIndex.of(kind, limits, fit);
+        long seed = PivotalBound.DEFAULT_SEED;
+        BoundEngine bound = PivotalBound.Estimate.of(fit, kind, limits, readings, seed);
+        double estimate = bound.estimate();
         if (Double.isNaN(estimate)) {
             return null;
         }
-        long seed = PivotalBound.DEFAULT_SEED;
-        double[] b = PivotalBound.bounds(fit, kind, limits, readings, req.confidence(), seed);
         double f = shape.tailFactor();
         double ppm = PercentileIndex.expectedPpm(limits, fit);
         if (kind.usesWithinSigma()) {
@@ -64,8 +65,8 @@ final class PercentileJudge {
         reasons.add(new Reason(Step.CAPABILITY, false, GradeMessage.REASON_PERCENTILE_METHOD.format(kind.symbol(),
                 family.token(), fit.quantile(PercentileIndex.LOW), fit.quantile(0.5), fit.quantile(PercentileIndex.HIGH),
                 ppm, PivotalBound.DRAWS, seed)));
-        double upper = estimate < req.minimum() ? b[1] * f : Double.NaN;
-        return new IndexEvidence(kind, req.minimum(), req.confidence(), estimate * f, b[0] * f, upper,
+        double upper = estimate < req.minimum() ? bound.upper(req.confidence()) * f : Double.NaN;
+        return new IndexEvidence(kind, req.minimum(), req.confidence(), estimate * f, bound.lower(req.confidence()) * f, upper,
                 ShapeModel.of(family), IndexMethod.PERCENTILE, ppm, seed);
     }
 
