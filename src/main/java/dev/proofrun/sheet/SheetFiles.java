@@ -1,7 +1,7 @@
 package dev.proofrun.sheet;
 
 import dev.proofrun.plan.StudyPlan;
-import dev.proofrun.sheet.layout.Paper;
+import dev.proofrun.paper.Paper;
 import dev.proofrun.text.AtomicFile;
 import dev.proofrun.text.Location;
 import dev.proofrun.text.UserException;

@@ -14,7 +14,7 @@ import dev.proofrun.grade.Reason;
 import dev.proofrun.grade.Step;
 import dev.proofrun.plan.StudyPlan;
 import dev.proofrun.report.GradeReport;
-import dev.proofrun.sheet.layout.Paper;
+import dev.proofrun.paper.Paper;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;

@@ -1,7 +1,7 @@
 package dev.proofrun.app.handout;
 
 import dev.proofrun.app.shell.StepView;
-import dev.proofrun.sheet.layout.Paper;
+import dev.proofrun.paper.Paper;
 import java.io.File;
 import javafx.beans.binding.Bindings;
 import javafx.collections.FXCollections;

@@ -15,7 +15,7 @@ import dev.proofrun.plan.PlanState;
 import dev.proofrun.plan.StudyPlan;
 import dev.proofrun.sheet.SheetFiles;
 import dev.proofrun.sheet.SheetPdf;
-import dev.proofrun.sheet.layout.Paper;
+import dev.proofrun.paper.Paper;
 import dev.proofrun.text.UserException;
 import java.awt.image.BufferedImage;
 import java.io.ByteArrayOutputStream;
