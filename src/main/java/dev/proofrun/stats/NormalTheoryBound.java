@@ -59,25 +59,24 @@ public record NormalTheoryBound(Form form, double estimate, double cp, int readi
 
     @Override
     public double lower(double confidence) {
-        switch (form) {
-            case SPREAD:
-                return CapabilityBounds.lowerCp(estimate, nu, confidence);
-            case ONE_SIDED:
-                return CapabilityBounds.lowerOneSided(estimate, readings, nu, confidence);
-            default:
-                return CapabilityBounds.lowerCpk(estimate, cp, readings, nu, confidence, method);
-        }
+        return bound(true, confidence);
     }
 
     @Override
     public double upper(double confidence) {
+        return bound(false, confidence);
+    }
+
+    private double bound(boolean lower, double c) {
         switch (form) {
             case SPREAD:
-                return CapabilityBounds.upperCp(estimate, nu, confidence);
+                return lower ? CapabilityBounds.lowerCp(estimate, nu, c) : CapabilityBounds.upperCp(estimate, nu, c);
             case ONE_SIDED:
-                return CapabilityBounds.upperOneSided(estimate, readings, nu, confidence);
+                return lower ? CapabilityBounds.lowerOneSided(estimate, readings, nu, c)
+                        : CapabilityBounds.upperOneSided(estimate, readings, nu, c);
             default:
-                return CapabilityBounds.upperCpk(estimate, cp, readings, nu, confidence, method);
+                return lower ? CapabilityBounds.lowerCpk(estimate, cp, readings, nu, c, method)
+                        : CapabilityBounds.upperCpk(estimate, cp, readings, nu, c, method);
         }
     }
 

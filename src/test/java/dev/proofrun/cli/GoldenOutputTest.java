@@ -47,7 +47,7 @@ class GoldenOutputTest {
         Path demo = dir.resolve("demo");
         String plan = demo.resolve("demo-valve-body.json").toString();
         String returned = demo.resolve("demo-valve-body-returned.csv").toString();
-        Path shaft = shaftReadings();
+        Path shaft = EstimateCommandTest.shaftCsv(dir); // CapabilityAnalysisTest.SHAFT, invented
 
         run("demo", "--out", demo.toString());
         run("plan", "show", plan);
@@ -137,22 +137,6 @@ class GoldenOutputTest {
 
     private String hide(String s) {
         return s.replace(dir.toString(), "$DIR").replaceAll("Graded \\d{4}-\\d\\d-\\d\\d \\d\\d:\\d\\d", "Graded \\$WHEN");
-    }
-
-    /** The shaft readings of {@code CapabilityAnalysisTest.SHAFT} (invented) in the x1..x4 layout. */
-    private Path shaftReadings() throws IOException {
-        StringBuilder sb = new StringBuilder("slot,x1,x2,x3,x4\n");
-        int i = 1;
-        for (double[] g : dev.proofrun.capability.CapabilityAnalysisTest.SHAFT) {
-            sb.append("S").append(i++);
-            for (double x : g) {
-                sb.append(',').append(x);
-            }
-            sb.append('\n');
-        }
-        Path p = dir.resolve("shaft.csv");
-        Files.writeString(p, sb);
-        return p;
     }
 
     private static String sha256(byte[] bytes) {
