@@ -3,6 +3,8 @@ package dev.proofrun.capability;
 import dev.proofrun.stats.AndersonDarling;
 import dev.proofrun.stats.BoundMethod;
 import dev.proofrun.stats.CapabilityBounds;
+import dev.proofrun.stats.Confidence;
+import dev.proofrun.stats.NormalTheoryBound;
 import dev.proofrun.stats.Nonconforming;
 import dev.proofrun.stats.SampleMoments;
 import dev.proofrun.stats.SigmaEstimate;
@@ -30,7 +32,7 @@ import java.util.OptionalInt;
  *     T is the nominal when given, else the midpoint of a two-sided tolerance; a one-sided
  *     specification without a nominal has no Cpm; with a nominal it gets the one-sided analogue
  *     |limit − T|/(3τ).</li>
- * <li>Lower bounds with {@link CapabilityBounds}: Cp with ν_w = the estimator's (effective) degrees of
+ * <li>Lower bounds through the bound engine {@link NormalTheoryBound} (formulas in {@link CapabilityBounds}): Cp with ν_w = the estimator's (effective) degrees of
  *     freedom, Pp with N − 1; Cpk/Ppk with the chosen {@link BoundMethod} for a two-sided
  *     specification and the exact noncentral-t bound for a one-sided one.</li>
  * </ul>
@@ -77,7 +79,7 @@ public final class CapabilityAnalysis {
         Objects.requireNonNull(subgroups, "subgroups");
         Objects.requireNonNull(limits, "limits");
         Objects.requireNonNull(bound, "bound");
-        if (!(confidence > CapabilityBounds.MIN_CONFIDENCE && confidence < CapabilityBounds.MAX_CONFIDENCE)) {
+        if (!Confidence.isStatable(confidence)) {
             throw new UserException(CapabilityMessage.CONFIDENCE_OUT_OF_RANGE, confidence);
         }
         long total = subgroups.stream().mapToLong(g -> g.length).sum();
@@ -106,9 +108,9 @@ public final class CapabilityAnalysis {
         Indices idx = indices(limits, target, mean, within.value(), s);
         int n = Math.toIntExact(total);
         LowerBounds lower = new LowerBounds(
-                cpBound(idx.cp(), within.degreesOfFreedom(), confidence),
+                cpBound(idx.cp(), n, within.degreesOfFreedom(), confidence),
                 cpkBound(limits, idx.cpk(), idx.cp(), n, within.degreesOfFreedom(), confidence, bound),
-                cpBound(idx.pp(), moments.degreesOfFreedom(), confidence),
+                cpBound(idx.pp(), n, moments.degreesOfFreedom(), confidence),
                 cpkBound(limits, idx.ppk(), idx.pp(), n, moments.degreesOfFreedom(), confidence, bound));
         PartsPerMillion ppm = new PartsPerMillion(
                 Nonconforming.expectedPpm(limits, mean, within.value()),
@@ -159,17 +161,16 @@ public final class CapabilityAnalysis {
         return new Indices(cp, cpu, cpl, min(cpu, cpl), pp, ppu, ppl, min(ppu, ppl), cpm);
     }
 
-    private static OptionalDouble cpBound(OptionalDouble c, double nu, double confidence) {
-        return c.isPresent() ? OptionalDouble.of(CapabilityBounds.lowerCp(c.getAsDouble(), nu, confidence))
-                : OptionalDouble.empty();
+    private static OptionalDouble cpBound(OptionalDouble c, int n, double nu, double confidence) {
+        return c.isPresent() ? OptionalDouble.of(new NormalTheoryBound(NormalTheoryBound.Form.SPREAD, c.getAsDouble(),
+                Double.NaN, n, nu, BoundMethod.EXACT).lower(confidence)) : OptionalDouble.empty();
     }
 
     private static OptionalDouble cpkBound(SpecLimits limits, OptionalDouble ck, OptionalDouble c, int n, double nu,
             double confidence, BoundMethod bound) {
-        if (limits.isTwoSided()) {
-            return OptionalDouble.of(CapabilityBounds.lowerCpk(ck.getAsDouble(), c.getAsDouble(), n, nu, confidence, bound));
-        }
-        return OptionalDouble.of(CapabilityBounds.lowerOneSided(ck.getAsDouble(), n, nu, confidence));
+        NormalTheoryBound.Form form = limits.isTwoSided() ? NormalTheoryBound.Form.TWO_SIDED : NormalTheoryBound.Form.ONE_SIDED;
+        double cp = limits.isTwoSided() ? c.getAsDouble() : Double.NaN;
+        return OptionalDouble.of(new NormalTheoryBound(form, ck.getAsDouble(), cp, n, nu, bound).lower(confidence));
     }
 
     private static OptionalDouble scale(OptionalDouble distance, double spread) {

@@ -2,7 +2,7 @@ package dev.proofrun.cli;
 
 import dev.proofrun.schedule.Spacing;
 import dev.proofrun.stats.BoundMethod;
-import dev.proofrun.stats.CapabilityBounds;
+import dev.proofrun.stats.Confidence;
 import dev.proofrun.stats.IndexKind;
 import dev.proofrun.stats.SigmaMethod;
 import dev.proofrun.stats.SpecLimits;
@@ -102,14 +102,13 @@ final class Conventions {
 
     /**
      * @param confidence {@code --confidence}, 1 − α
-     * @return it, when strictly between {@link CapabilityBounds#MIN_CONFIDENCE} and
-     *         {@link CapabilityBounds#MAX_CONFIDENCE} (the range the bounds are computed for)
+     * @return it, when strictly between {@link Confidence#MIN} and
+     *         {@link Confidence#MAX_STATED} (the range a person may state, {@link Confidence#isStatable})
      * @throws UserException otherwise
      */
     static double confidence(double confidence) {
-        if (!(confidence > CapabilityBounds.MIN_CONFIDENCE && confidence < CapabilityBounds.MAX_CONFIDENCE)) {
-            throw new UserException(OptionMessage.CONFIDENCE_OUT_OF_RANGE, CapabilityBounds.MIN_CONFIDENCE,
-                    CapabilityBounds.MAX_CONFIDENCE, confidence);
+        if (!Confidence.isStatable(confidence)) {
+            throw new UserException(OptionMessage.CONFIDENCE_OUT_OF_RANGE, Confidence.MIN, Confidence.MAX_STATED, confidence);
         }
         return confidence;
     }

@@ -7,14 +7,13 @@ import dev.proofrun.grade.DemoReturn;
 import dev.proofrun.plan.DemoPlan;
 import dev.proofrun.plan.PlanFiles;
 import dev.proofrun.plan.StudyPlan;
+import dev.proofrun.text.AtomicFile;
 import dev.proofrun.text.Location;
 import dev.proofrun.text.UserException;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
-import java.util.UUID;
 import java.util.concurrent.Callable;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -54,14 +53,10 @@ public final class DemoCommand implements Callable<Integer> {
         GradingPlan gp = PlanAdapter.of(plan);
         try {
             Files.createDirectories(out);
-            // not Files.createTempFile: that file would be private to its owner, and the demo is for sharing
-            Path tmp = out.resolve(".demo-returned." + UUID.randomUUID() + ".tmp");
-            try {
-                DemoReturn.writeCsv(gp, tmp);
+            try (AtomicFile.Pending returned = AtomicFile.begin(dataFile)) {
+                DemoReturn.writeCsv(gp, returned.temp());
                 PlanFiles.write(planFile, plan);
-                Files.move(tmp, dataFile, StandardCopyOption.ATOMIC_MOVE);
-            } finally {
-                Files.deleteIfExists(tmp);
+                returned.commit();
             }
         } catch (IOException e) {
             throw new UserException(Location.file(out.toString()), GradeMessage.FILE_UNREADABLE, e.getMessage());

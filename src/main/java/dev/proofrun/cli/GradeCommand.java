@@ -14,7 +14,7 @@ import dev.proofrun.grade.Problem;
 import dev.proofrun.grade.Reason;
 import dev.proofrun.plan.PlanFiles;
 import dev.proofrun.plan.StudyPlan;
-import dev.proofrun.sheet.layout.Paper;
+import dev.proofrun.paper.Paper;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.io.UncheckedIOException;

@@ -3,7 +3,7 @@ package dev.proofrun.cli;
 import dev.proofrun.grade.GradeResult;
 import dev.proofrun.plan.StudyPlan;
 import dev.proofrun.report.GradeReport;
-import dev.proofrun.sheet.layout.Paper;
+import dev.proofrun.paper.Paper;
 import java.nio.file.Path;
 
 /** Writes the grade report PDF for {@code grade --report}. */

@@ -15,6 +15,7 @@ import dev.proofrun.plan.People;
 import dev.proofrun.plan.PlanFiles;
 import dev.proofrun.plan.PlanMessage;
 import dev.proofrun.plan.StudyPlan;
+import dev.proofrun.schedule.CalendarSyntax;
 import dev.proofrun.schedule.ProductionCalendar;
 import dev.proofrun.schedule.ProductionRate;
 import dev.proofrun.schedule.Spacing;
@@ -284,10 +285,10 @@ public final class PlanNewCommand implements Callable<Integer> {
         }
         ProductionRate r = option(rate != null ? "--rate" : "--cycle-seconds", () -> cycleSeconds != null
                 ? ProductionRate.cycleSeconds(cycleSeconds) : ProductionRate.perHour(rate != null ? rate : DEFAULT_RATE));
-        return option("--shifts", () -> new ProductionCalendar(z, option("--days", () -> PlanSyntax.days(days)),
-                option("--shifts", () -> PlanSyntax.shifts(shifts)),
-                option("--breaks", () -> PlanSyntax.breaks(breaks)),
-                option("--non-working", () -> PlanSyntax.dates(nonWorking)), r));
+        return option("--shifts", () -> new ProductionCalendar(z, option("--days", () -> CalendarSyntax.workingDays(days)),
+                option("--shifts", () -> CalendarSyntax.shifts(shifts)),
+                option("--breaks", () -> CalendarSyntax.breaks(breaks)),
+                option("--non-working", () -> CalendarSyntax.dates(nonWorking)), r));
     }
 
     private StudySpan studySpan() {

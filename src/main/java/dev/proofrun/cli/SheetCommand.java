@@ -5,7 +5,7 @@ import dev.proofrun.text.Location;
 import dev.proofrun.text.UserException;
 import dev.proofrun.plan.StudyPlan;
 import dev.proofrun.sheet.SheetFiles;
-import dev.proofrun.sheet.layout.Paper;
+import dev.proofrun.paper.Paper;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;

@@ -1,5 +1,7 @@
 package dev.proofrun.design;
 
+import dev.proofrun.stats.Confidence;
+
 /**
  * One planned look of a staged study. At {@code subgroups} usable subgroups the grader grades with all the
  * readings so far: <em>demonstrated</em> when the lower bound at {@code confidence} (above the plan's stated
@@ -9,6 +11,7 @@ package dev.proofrun.design;
  *
  * @param subgroups  usable subgroups at this look, counted from the start of the study
  * @param confidence the one-sided confidence of the bound compared with c₀ at this look, in (0.5, 1)
+ *                   ({@link Confidence#isComputable}: it may exceed what a person may state)
  * @param futility   the estimate below which the study stops for futility; NaN where this look has none
  */
 public record Look(int subgroups, double confidence, double futility) {
@@ -17,9 +20,7 @@ public record Look(int subgroups, double confidence, double futility) {
         if (subgroups < 1) {
             throw new IllegalArgumentException("a look needs at least one subgroup: " + subgroups);
         }
-        if (!(confidence > 0.5 && confidence < 1)) {
-            throw new IllegalArgumentException("confidence must be in (0.5, 1): " + confidence);
-        }
+        Confidence.requireComputable(confidence);
         if (Double.isInfinite(futility)) {
             throw new IllegalArgumentException("futility must be finite or NaN");
         }

@@ -1,5 +1,6 @@
 package dev.proofrun.design;
 
+import dev.proofrun.stats.Confidence;
 import dev.proofrun.stats.IndexKind;
 import java.util.Locale;
 
@@ -9,7 +10,7 @@ import java.util.Locale;
  *
  * @param index      the index the customer asks for
  * @param minimum    c₀, the smallest acceptable value of the index
- * @param confidence 1−α, in (0.5, 0.9999)
+ * @param confidence 1−α, in (0.5, 0.9999) ({@link Confidence#isStatable})
  */
 public record Requirement(IndexKind index, double minimum, double confidence) {
 
@@ -24,10 +25,7 @@ public record Requirement(IndexKind index, double minimum, double confidence) {
         if (!(minimum > 0) || !Double.isFinite(minimum)) {
             throw new IllegalArgumentException(String.format(Locale.ROOT, "required minimum must be positive: %s", minimum));
         }
-        if (!(confidence > 0.5 && confidence < 0.9999)) {
-            throw new IllegalArgumentException(String.format(Locale.ROOT,
-                    "confidence must be between 0.5 and 0.9999: %s", confidence));
-        }
+        Confidence.requireStatable(confidence);
     }
 
     public static Requirement of(IndexKind index, double minimum, double confidence) {

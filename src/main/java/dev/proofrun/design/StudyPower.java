@@ -2,13 +2,16 @@ package dev.proofrun.design;
 
 import dev.proofrun.stats.GaussLegendreRule;
 import dev.proofrun.stats.BoundMethod;
+import dev.proofrun.stats.NormalTheoryBound;
+import java.util.OptionalDouble;
 import java.util.function.DoubleUnaryOperator;
-import org.apache.commons.statistics.distribution.ChiSquaredDistribution;
-import org.apache.commons.statistics.distribution.NormalDistribution;
 
 /**
  * The probability that one design (N readings, ν degrees of freedom) demonstrates c₀ at confidence 1−α:
  * P(lower bound ≥ c₀) = P(Ĉ ≥ ĉ*), ĉ* the smallest estimate whose bound reaches c₀.
+ *
+ * <p>ĉ* comes from the bound engine ({@link NormalTheoryBound#passingEstimate}) where it has a closed form; the
+ * exact bounds' ĉ* is solved here from the estimate's distribution.
  *
  * <ul>
  * <li>Cp/Pp: ĉ* = c₀·sqrt(ν/χ²_{α,ν}); power = P(κW ≤ c₁/ĉ*) (chi-square; exact for Pp).</li>
@@ -36,11 +39,11 @@ final class StudyPower {
 
     private static final GaussLegendreRule GL = GaussLegendreRule.of(32);
     private static final double EDGE = 8.5;
-    private static final NormalDistribution NORMAL = NormalDistribution.of(0, 1);
 
     private final IndexShape shape;
     private final BoundMethod method;
     private final double target;
+    private final double confidence;
     private final double alpha;
     private final int readings;
     private final double nu;
@@ -48,6 +51,7 @@ final class StudyPower {
     private final double scale;
     private CriticalCurve curve;
     private double fixedCritical = Double.NaN;
+    private OptionalDouble closedForm;
 
     StudyPower(IndexShape shape, BoundMethod method, double target, double confidence, int readings, double nu) {
         this(shape, method, target, confidence, readings, nu, false);
@@ -66,6 +70,7 @@ final class StudyPower {
         this.shape = shape;
         this.method = method;
         this.target = target;
+        this.confidence = confidence;
         this.alpha = 1 - confidence;
         this.readings = readings;
         this.nu = nu;
@@ -95,7 +100,7 @@ final class StudyPower {
      * offset). Infinite when no estimate can pass (Bissell with ν ≤ z²/2).
      */
     double criticalEstimate(double relativeOffset) {
-        if (shape == IndexShape.TWO_SIDED_MIN && method == BoundMethod.EXACT) {
+        if (shape == IndexShape.TWO_SIDED_MIN && closedForm().isEmpty()) {
             return curve().at(relativeOffset);
         }
         return fixedCritical();
@@ -109,7 +114,7 @@ final class StudyPower {
             case ONE_SIDED:
                 return tail.oneSidedAtLeast(scale * fixedCritical(), trueIndex);
             default:
-                if (method == BoundMethod.BISSELL) {
+                if (closedForm().isPresent()) {
                     double c = fixedCritical();
                     return Double.isInfinite(c) ? 0 : tail.minAtLeast(scale * c, trueIndex, trueCp);
                 }
@@ -157,28 +162,35 @@ final class StudyPower {
     }
 
     private double computeFixedCritical() {
+        OptionalDouble closed = closedForm();
+        if (closed.isPresent()) {
+            return closed.getAsDouble();
+        }
+        return shape == IndexShape.ONE_SIDED ? exactCriticalAt(1, bissellCritical()) : curve().at(1);
+    }
+
+    /** ĉ* from the bound engine where it has a closed form (Cp/Pp; two-sided Bissell); empty for the exact bounds. */
+    private OptionalDouble closedForm() {
+        if (closedForm == null) {
+            closedForm = NormalTheoryBound.passingEstimate(form(shape), method, target, readings, nu, confidence);
+        }
+        return closedForm;
+    }
+
+    private static NormalTheoryBound.Form form(IndexShape shape) {
         switch (shape) {
             case SPREAD:
-                return target * Math.sqrt(nu / ChiSquaredDistribution.of(nu).inverseCumulativeProbability(alpha));
+                return NormalTheoryBound.Form.SPREAD;
             case ONE_SIDED:
-                return exactCriticalAt(1, bissellCritical());
+                return NormalTheoryBound.Form.ONE_SIDED;
             default:
-                if (method == BoundMethod.BISSELL) {
-                    return bissellCritical();
-                }
-                return curve().at(1);
+                return NormalTheoryBound.Form.TWO_SIDED;
         }
     }
 
-    /** The estimate whose Bissell bound equals c₀: (c₀ + sqrt(c₀² − A·C))/A, A = 1 − z²/(2ν). */
+    /** The estimate whose Bissell bound equals c₀ (the starting guess of the exact searches). */
     double bissellCritical() {
-        double z = NORMAL.inverseCumulativeProbability(1 - alpha);
-        double a = 1 - z * z / (2 * nu);
-        double c = target * target - z * z / (9.0 * readings);
-        if (!(a > 0)) {
-            return Double.POSITIVE_INFINITY;
-        }
-        return (target + Math.sqrt(target * target - a * c)) / a;
+        return NormalTheoryBound.bissellPassing(target, readings, nu, alpha);
     }
 
     CriticalCurve curve() {

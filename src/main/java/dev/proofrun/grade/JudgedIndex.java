@@ -3,6 +3,7 @@ package dev.proofrun.grade;
 import dev.proofrun.design.Requirement;
 import dev.proofrun.stats.BoundMethod;
 import dev.proofrun.stats.CapabilityBounds;
+import dev.proofrun.stats.NormalTheoryBound;
 import dev.proofrun.stats.IndexKind;
 import dev.proofrun.stats.SpecLimits;
 
@@ -12,7 +13,8 @@ import dev.proofrun.stats.SpecLimits;
  *
  * <p>Bounds, by the kind of index: Cp/Pp exact chi-square, Ĉ·sqrt(χ²_{α,ν}/ν); one-sided Cpu/Cpl/Ppu/Ppl
  * (and Cpk/Ppk of a one-sided specification) exact noncentral t; two-sided Cpk/Ppk by the plan's bound
- * method (exact, centring from the data, or Bissell) — all from {@link CapabilityBounds}. For the Weibull
+ * method (exact, centring from the data, or Bissell) — all through the one bound engine, {@link NormalTheoryBound}
+ * (formulas in {@link CapabilityBounds}). For the Weibull
  * percentile indices no exact theory exists: Cp-like indices use the chi-square bound with ν = N − 1 and the
  * others Bissell's approximation with ν = N − 1 (an approximation, named in the reasons by the model).
  *
@@ -46,47 +48,42 @@ record JudgedIndex(IndexKind kind, double estimate, double cp, int readings, dou
     }
 
     static BoundSide sideFor(IndexKind kind, SpecLimits limits) {
-        switch (kind.side()) {
-            case BOTH:
+        switch (NormalTheoryBound.Form.of(kind, limits.isTwoSided())) {
+            case SPREAD:
                 return BoundSide.POTENTIAL;
-            case UPPER:
-            case LOWER:
+            case ONE_SIDED:
                 return BoundSide.ONE_SIDED;
             default:
-                return limits.isTwoSided() ? BoundSide.TWO_SIDED : BoundSide.ONE_SIDED;
+                return BoundSide.TWO_SIDED;
         }
     }
 
     double lower(double confidence) {
-        return lowerAt(readings, df, confidence);
+        return bound().lower(confidence);
     }
 
     double upper(double confidence) {
-        switch (side) {
-            case POTENTIAL:
-            case APPROXIMATE_POTENTIAL:
-                return CapabilityBounds.upperCp(estimate, df, confidence);
-            case ONE_SIDED:
-                return CapabilityBounds.upperOneSided(estimate, readings, df, confidence);
-            case TWO_SIDED:
-                return CapabilityBounds.upperCpk(estimate, cp, readings, df, confidence, method);
-            default:
-                return CapabilityBounds.upperCpk(estimate, Double.NaN, readings, df, confidence, BoundMethod.BISSELL);
-        }
+        return bound().upper(confidence);
     }
 
     /** The lower bound a study of {@code n} readings and ν = {@code nu} would give with the same estimates. */
     double lowerAt(int n, double nu, double confidence) {
+        return bound().withStudy(n, nu).lower(confidence);
+    }
+
+    /** The bound engine of this estimate; the approximate sides use ν = N − 1 and Bissell's two-sided formula. */
+    NormalTheoryBound bound() {
         switch (side) {
             case POTENTIAL:
             case APPROXIMATE_POTENTIAL:
-                return CapabilityBounds.lowerCp(estimate, nu, confidence);
+                return new NormalTheoryBound(NormalTheoryBound.Form.SPREAD, estimate, cp, readings, df, method);
             case ONE_SIDED:
-                return CapabilityBounds.lowerOneSided(estimate, n, nu, confidence);
+                return new NormalTheoryBound(NormalTheoryBound.Form.ONE_SIDED, estimate, cp, readings, df, method);
             case TWO_SIDED:
-                return CapabilityBounds.lowerCpk(estimate, cp, n, nu, confidence, method);
+                return new NormalTheoryBound(NormalTheoryBound.Form.TWO_SIDED, estimate, cp, readings, df, method);
             default:
-                return CapabilityBounds.lowerCpk(estimate, Double.NaN, n, nu, confidence, BoundMethod.BISSELL);
+                return new NormalTheoryBound(NormalTheoryBound.Form.TWO_SIDED, estimate, Double.NaN, readings, df,
+                        BoundMethod.BISSELL);
         }
     }
 

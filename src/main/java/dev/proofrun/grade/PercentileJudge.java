@@ -1,6 +1,7 @@
 package dev.proofrun.grade;
 
 import dev.proofrun.design.Requirement;
+import dev.proofrun.stats.BoundEngine;
 import dev.proofrun.stats.IndexKind;
 import dev.proofrun.stats.PercentileIndex;
 import dev.proofrun.stats.FoldedNormalBound;
@@ -57,14 +58,14 @@ final class PercentileJudge {
             }
             limits = new SpecLimits(OptionalDouble.empty(), limits.upper());
         }
-        double estimate = PercentileIndex.of(kind, limits, fit);
+        long seed = PivotalBound.DEFAULT_SEED;
+        boolean pivotal = family.isLocationScale();
+        BoundEngine bound = pivotal ? PivotalBound.Estimate.of(fit, kind, limits, readings, seed)
+                : FoldedNormalBound.Estimate.of(fit, kind, limits, readings, seed);
+        double estimate = bound.estimate();
         if (Double.isNaN(estimate)) {
             return null;
         }
-        long seed = PivotalBound.DEFAULT_SEED;
-        boolean pivotal = family.isLocationScale();
-        double[] b = pivotal ? PivotalBound.bounds(fit, kind, limits, readings, confidence, seed)
-                : FoldedNormalBound.bounds(fit, kind, limits, readings, confidence, seed);
         double f = shape.tailFactor();
         double ppm = PercentileIndex.expectedPpm(limits, fit);
         if (kind.usesWithinSigma()) {
@@ -79,8 +80,8 @@ final class PercentileJudge {
                 : GradeMessage.REASON_PERCENTILE_INVERTED.format(kind.symbol(), family.token(), q0, q50, q1, ppm,
                         FoldedNormalBound.GRID_SIZE, FoldedNormalBound.DRAWS, seed);
         reasons.add(new Reason(Step.CAPABILITY, false, method));
-        double upper = estimate < req.minimum() ? b[1] * f : Double.NaN;
-        return new IndexEvidence(kind, req.minimum(), confidence, estimate * f, b[0] * f, upper,
+        double upper = estimate < req.minimum() ? bound.upper(confidence) * f : Double.NaN;
+        return new IndexEvidence(kind, req.minimum(), confidence, estimate * f, bound.lower(confidence) * f, upper,
                 ShapeModel.of(family), pivotal ? IndexMethod.PERCENTILE : IndexMethod.PERCENTILE_INVERTED, ppm, seed);
     }
 

@@ -49,7 +49,7 @@ final class ReturnedData implements RowHandler {
     private final String display;
     private final Map<String, Integer> slotIndex;
     private final Map<String, Integer> characteristicIndex = new HashMap<>();
-    private final Collected[] collected;
+    private final SlotReadings[] collected;
     private final Reach[] reach;
     private final ProblemLog log = new ProblemLog();
     private final int n;
@@ -84,11 +84,11 @@ final class ReturnedData implements RowHandler {
             windowBegin[s] = start - 60L * slot.windowMinutes();
             windowEnd[s] = start + 60L * slot.windowMinutes();
         }
-        this.collected = new Collected[plan.characteristics().size()];
+        this.collected = new SlotReadings[plan.characteristics().size()];
         this.reach = new Reach[collected.length];
         for (int c = 0; c < collected.length; c++) {
             characteristicIndex.put(plan.characteristics().get(c).id(), c);
-            collected[c] = new Collected(plan.slots().size(), n);
+            collected[c] = new SlotReadings(plan.slots().size(), n);
             reach[c] = Reach.of(plan.characteristics().get(c).limits(), plan.characteristics().get(c).nominal());
         }
     }
@@ -181,7 +181,7 @@ final class ReturnedData implements RowHandler {
             log.add(Location.cell(display, row, name(slotCol)), Severity.ERROR, id, GradeMessage.UNKNOWN_SLOT, Shown.cell(slotCell));
             return;
         }
-        Collected col = collected[ci];
+        SlotReadings col = collected[ci];
         if (longForm) {
             if (col.row[si] == 0) {
                 col.row[si] = row;
@@ -206,7 +206,7 @@ final class ReturnedData implements RowHandler {
         }
     }
 
-    private void taken(Collected col, int si, long row, String[] cells, int count, String id) {
+    private void taken(SlotReadings col, int si, long row, String[] cells, int count, String id) {
         String text = cell(cells, count, takenCol);
         if (text.isEmpty()) {
             return;
@@ -236,7 +236,7 @@ final class ReturnedData implements RowHandler {
         return plannedDay[si];
     }
 
-    private void reading(Collected col, int ci, int si, long row, String text, int column, String id) {
+    private void reading(SlotReadings col, int ci, int si, long row, String text, int column, String id) {
         double v = Cells.number(text);
         if (Double.isInfinite(v) || Decimals.namesNonFinite(text)) { // 1e309 overflows; a gauge may write "Infinity"
             col.spoiled[si] = true;
@@ -317,7 +317,7 @@ final class ReturnedData implements RowHandler {
      */
     int reach() {
         int last = 0;
-        for (Collected col : collected) {
+        for (SlotReadings col : collected) {
             for (int s = col.count.length - 1; s >= last; s--) {
                 if (col.row[s] != 0 && (col.count[s] > 0 || col.spoiled[s])) {
                     last = s + 1;
@@ -343,7 +343,7 @@ final class ReturnedData implements RowHandler {
     }
 
     private Collection finish(int ci, int slotsSoFar, int allowedShortfall, ProblemLog log) {
-        Collected col = collected[ci];
+        SlotReadings col = collected[ci];
         String id = plan.characteristics().get(ci).id();
         int k = slotsSoFar;
         List<double[]> subgroups = new ArrayList<>();
@@ -414,28 +414,6 @@ final class ReturnedData implements RowHandler {
         /** Subgroups with no reading set aside (simulated studies). */
         Collection(Completeness completeness, List<double[]> subgroups, List<String> slots) {
             this(completeness, subgroups, slots, 0);
-        }
-    }
-
-    /** Per-slot state of one characteristic, in primitive arrays. */
-    private static final class Collected {
-        final double[] values;
-        final int[] count;
-        final long[] row;
-        final long[] taken;
-        final boolean[] spoiled;
-        final boolean[] late;
-        int flagged;
-        int outOfReach;
-
-        Collected(int k, int n) {
-            values = new double[k * n];
-            count = new int[k];
-            row = new long[k];
-            taken = new long[k];
-            java.util.Arrays.fill(taken, Long.MIN_VALUE);
-            spoiled = new boolean[k];
-            late = new boolean[k];
         }
     }
 }

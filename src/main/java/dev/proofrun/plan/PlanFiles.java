@@ -13,24 +13,19 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.exc.MismatchedInputException;
 import com.fasterxml.jackson.databind.exc.UnrecognizedPropertyException;
 import com.fasterxml.jackson.databind.json.JsonMapper;
+import dev.proofrun.text.AtomicFile;
 import dev.proofrun.text.Location;
 import dev.proofrun.text.UserException;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.OutputStream;
-import java.nio.ByteBuffer;
-import java.nio.channels.FileChannel;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
-import java.nio.file.StandardOpenOption;
-import java.nio.file.attribute.PosixFileAttributeView;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
 import java.util.HexFormat;
-import java.util.UUID;
 import java.util.concurrent.ExecutionException;
 import java.util.concurrent.FutureTask;
 
@@ -316,53 +311,19 @@ public final class PlanFiles {
         save(path, plan);
     }
 
-    private static void keepPermissions(Path from, Path to) throws IOException {
-        PosixFileAttributeView source = Files.getFileAttributeView(from, PosixFileAttributeView.class);
-        PosixFileAttributeView target = Files.getFileAttributeView(to, PosixFileAttributeView.class);
-        if (source != null && target != null) {
-            target.setPermissions(source.readAttributes().permissions());
-        }
-    }
-
     private static void save(Path path, StudyPlan plan) {
         byte[] bytes = toBytes(plan);
         Path target = path.toAbsolutePath();
-        Path dir = target.getParent();
-        String name = target.getFileName().toString();
-        Path tmp = null;
-        try {
-            Files.createDirectories(dir);
-            // not Files.createTempFile: that makes the file private to its owner, and plans are for sharing;
-            // a new file gets the ordinary permissions (umask), a replaced one keeps the old file's
-            tmp = dir.resolve("." + name + "." + UUID.randomUUID() + ".tmp");
-            try (FileChannel ch = FileChannel.open(tmp, StandardOpenOption.WRITE, StandardOpenOption.CREATE_NEW)) {
-                ByteBuffer buf = ByteBuffer.wrap(bytes);
-                while (buf.hasRemaining()) {
-                    ch.write(buf);
-                }
-                ch.force(true);
-            }
+        // a new file gets the ordinary permissions (umask), a replaced one keeps the old file's (AtomicFile)
+        try (AtomicFile.Pending file = AtomicFile.begin(target)) {
+            file.write(out -> out.write(bytes));
             if (Files.exists(target)) {
-                Files.copy(target, dir.resolve(name + ".bak"), StandardCopyOption.REPLACE_EXISTING,
+                Files.copy(target, target.resolveSibling(target.getFileName() + ".bak"), StandardCopyOption.REPLACE_EXISTING,
                         StandardCopyOption.COPY_ATTRIBUTES);
-                keepPermissions(target, tmp);
             }
-            try {
-                Files.move(tmp, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
-            } catch (AtomicMoveNotSupportedException e) {
-                Files.move(tmp, target, StandardCopyOption.REPLACE_EXISTING);
-            }
-            tmp = null;
+            file.commit();
         } catch (IOException e) {
             throw new UserException(Location.file(path.toString()), PlanMessage.CANNOT_WRITE, describe(e));
-        } finally {
-            if (tmp != null) {
-                try {
-                    Files.deleteIfExists(tmp);
-                } catch (IOException ignored) {
-                    // the temporary file is all that is left; the target is untouched
-                }
-            }
         }
     }
 

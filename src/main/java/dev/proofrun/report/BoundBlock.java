@@ -1,10 +1,10 @@
 package dev.proofrun.report;
 
 import dev.proofrun.grade.IndexEvidence;
-import dev.proofrun.sheet.layout.Canvas;
-import dev.proofrun.sheet.layout.Pen;
-import dev.proofrun.sheet.layout.PlotArea;
-import dev.proofrun.sheet.layout.Typeface;
+import dev.proofrun.paper.Canvas;
+import dev.proofrun.paper.Pen;
+import dev.proofrun.paper.PlotArea;
+import dev.proofrun.paper.Typeface;
 
 /**
  * The capability argument in one picture: a scale of the index, the requirement c₀ as a heavy vertical line,

@@ -5,10 +5,11 @@ import dev.proofrun.grade.GradeResult;
 import dev.proofrun.plan.Characteristic;
 import dev.proofrun.plan.Gauge;
 import dev.proofrun.plan.StudyPlan;
-import dev.proofrun.sheet.layout.Flow;
-import dev.proofrun.sheet.layout.PageHeading;
-import dev.proofrun.sheet.layout.Pages;
-import dev.proofrun.sheet.layout.Paper;
+import dev.proofrun.paper.Flow;
+import dev.proofrun.paper.PageHeading;
+import dev.proofrun.paper.Pages;
+import dev.proofrun.paper.Paper;
+import dev.proofrun.text.AtomicFile;
 import dev.proofrun.text.Location;
 import dev.proofrun.text.UserException;
 import java.io.IOException;
@@ -16,11 +17,8 @@ import java.io.OutputStream;
 import java.io.UncheckedIOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
-import java.nio.file.StandardOpenOption;
 import java.time.Clock;
 import java.util.Optional;
-import java.util.UUID;
 
 /**
  * The grade report PDF, written as an argument: first the verdict for the part and each characteristic
@@ -98,20 +96,10 @@ public final class GradeReport {
             throw new UserException(Location.file(file.toString()), ReportMessage.FOLDER_MISSING,
                     String.valueOf(file.getParent() == null ? dir : file.getParent()));
         }
-        Path temp = dir.resolve(".proofrun-" + UUID.randomUUID() + ".tmp");
         try {
-            try (OutputStream out = Files.newOutputStream(temp, StandardOpenOption.CREATE_NEW, StandardOpenOption.WRITE)) {
-                write(result, plan, paper, out);
-            }
-            Files.move(temp, file, StandardCopyOption.REPLACE_EXISTING);
+            AtomicFile.write(file, out -> write(result, plan, paper, out));
         } catch (IOException | UncheckedIOException e) {
             throw new UserException(Location.file(file.toString()), ReportMessage.WRITE_FAILED, e.getMessage());
-        } finally {
-            try {
-                Files.deleteIfExists(temp);
-            } catch (IOException ignored) {
-                // best effort
-            }
         }
     }
 }

@@ -1,9 +1,9 @@
 package dev.proofrun.report;
 
-import dev.proofrun.sheet.layout.Block;
-import dev.proofrun.sheet.layout.Canvas;
-import dev.proofrun.sheet.layout.PlotArea;
-import dev.proofrun.sheet.layout.Typeface;
+import dev.proofrun.paper.Block;
+import dev.proofrun.paper.Canvas;
+import dev.proofrun.paper.PlotArea;
+import dev.proofrun.paper.Typeface;
 
 /**
  * The frame the report's charts share: a block of fixed height with an optional bold title on its first

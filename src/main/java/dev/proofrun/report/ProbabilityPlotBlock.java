@@ -1,9 +1,9 @@
 package dev.proofrun.report;
 
-import dev.proofrun.sheet.layout.Canvas;
-import dev.proofrun.sheet.layout.Pen;
-import dev.proofrun.sheet.layout.PlotArea;
-import dev.proofrun.sheet.layout.Typeface;
+import dev.proofrun.paper.Canvas;
+import dev.proofrun.paper.Pen;
+import dev.proofrun.paper.PlotArea;
+import dev.proofrun.paper.Typeface;
 import java.util.Arrays;
 
 /**

@@ -1,11 +1,11 @@
 package dev.proofrun.report;
 
 import dev.proofrun.grade.Verdict;
-import dev.proofrun.sheet.layout.Block;
-import dev.proofrun.sheet.layout.Canvas;
-import dev.proofrun.sheet.layout.Paragraph;
-import dev.proofrun.sheet.layout.Pen;
-import dev.proofrun.sheet.layout.Typeface;
+import dev.proofrun.paper.Block;
+import dev.proofrun.paper.Canvas;
+import dev.proofrun.paper.Paragraph;
+import dev.proofrun.paper.Pen;
+import dev.proofrun.paper.Typeface;
 
 /**
  * A verdict's badge followed by text: a framed tag holding a shape and the verdict in words, then the text

@@ -1,6 +1,6 @@
 /**
  * The grade report: {@code GradeReport.write(GradeResult, StudyPlan, Paper, …)} renders a grade as a PDF with
- * {@code sheet.layout}. Page 1 is the verdict box ({@code VerdictSection}: the part's verdict, each
+ * {@code paper}. Page 1 is the verdict box ({@code VerdictSection}: the part's verdict, each
  * characteristic's verdict with its decisive reasons, the caution last) and the problems found in the file;
  * then one section per characteristic ({@code EvidenceSection}): completeness, stability
  * ({@code ControlChartBlock}), shape ({@code HistogramBlock} with the fitted {@code ModelCurve},

@@ -18,7 +18,14 @@ public enum ScheduleMessage implements MessageKey {
     COUNT_SHIFT("1 shift"),
     COUNT_SHIFTS("%d shifts"),
     COUNT_DAY("1 day"),
-    COUNT_DAYS("%d days");
+    COUNT_DAYS("%d days"),
+    NOT_A_SHIFT("'%s' is not a shift such as early 06:00-14:00"),
+    NO_SHIFT("give at least one shift, such as early 06:00-14:00"),
+    NOT_A_BREAK("'%s' is not a break such as 09:30-09:45"),
+    NOT_A_DAY("'%s' is not a day such as Mon or Mon-Fri"),
+    NO_WORKING_DAYS("give the working days, such as Mon-Fri"),
+    NOT_A_DATE("'%s' is not a date such as 2027-03-26"),
+    ITEM_REFUSED("'%s': %s");
 
     private final String english;
 

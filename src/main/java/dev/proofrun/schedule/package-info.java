@@ -15,6 +15,8 @@
  * <li>Daylight-saving changes ({@code WallClock}): a wall time that occurs twice means its first occurrence;
  * one
  * that does not exist means the instant the clocks jump. Tested for Europe/Berlin and America/Chicago.</li>
+ * <li>{@code CalendarSyntax}: the one text grammar of shifts ({@code early 06:00-14:00} or
+ * {@code early=06:00-14:00}), breaks, working days and dates, read by {@code plan new} and the wizard alike.</li>
  * <li>Known limit: a subgroup that starts just before a break finishes after it; calendars are searched
  * {@code Scheduler.HORIZON_DAYS} ahead.</li>
  * </ul>

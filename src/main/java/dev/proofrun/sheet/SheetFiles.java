@@ -1,20 +1,16 @@
 package dev.proofrun.sheet;
 
 import dev.proofrun.plan.StudyPlan;
-import dev.proofrun.sheet.layout.Paper;
+import dev.proofrun.paper.Paper;
+import dev.proofrun.text.AtomicFile;
 import dev.proofrun.text.Location;
 import dev.proofrun.text.UserException;
 import java.io.IOException;
-import java.io.OutputStream;
 import java.io.UncheckedIOException;
-import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
-import java.nio.file.StandardOpenOption;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.UUID;
 import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.CompletionException;
 
@@ -42,10 +38,6 @@ public final class SheetFiles {
         }
     }
 
-    private interface Body {
-        void write(OutputStream out) throws IOException;
-    }
-
     private SheetFiles() {
     }
 
@@ -69,44 +61,37 @@ public final class SheetFiles {
         }
         Written target = new Written(dir.resolve(plan.id() + "-sheet.pdf"), dir.resolve(plan.id() + "-fill-in.csv"),
                 dir.resolve(plan.id() + "-fill-in.xlsx"));
-        List<Path> temps = new ArrayList<>();
+        List<AtomicFile.Pending> files = new ArrayList<>();
         try {
             Files.createDirectories(dir);
             // The workbook is written on a second thread while the PDF is laid out: on a fresh JVM most of
             // the time is class loading of PDFBox and POI, which two cores do side by side.
-            CompletableFuture<Path> xlsx = CompletableFuture.supplyAsync(() -> {
+            CompletableFuture<AtomicFile.Pending> xlsx = CompletableFuture.supplyAsync(() -> {
                 try {
-                    return temp(dir, out -> FillInXlsx.write(plan, out));
+                    return pending(target.xlsx(), out -> FillInXlsx.write(plan, out));
                 } catch (IOException e) {
                     throw new UncheckedIOException(e);
                 }
             });
             try {
-                temps.add(temp(dir, out -> SheetPdf.write(plan, paper, out)));
-                temps.add(temp(dir, out -> FillInCsv.write(plan, out)));
+                files.add(pending(target.pdf(), out -> SheetPdf.write(plan, paper, out)));
+                files.add(pending(target.csv(), out -> FillInCsv.write(plan, out)));
             } finally {
-                temps.add(join(xlsx));
+                files.add(join(xlsx));
             }
-            List<Path> finals = target.all();
-            for (int i = 0; i < finals.size(); i++) {
-                move(temps.get(i), finals.get(i));
+            for (AtomicFile.Pending f : files) {
+                f.commit();
             }
             return target;
         } catch (IOException | UncheckedIOException e) {
             throw new UserException(Location.file(dir.toString()), SheetMessage.WRITE_FAILED, e.getMessage());
         } finally {
-            for (Path t : temps) {
-                try {
-                    Files.deleteIfExists(t);
-                } catch (IOException ignored) {
-                    // best effort: a temporary file we could not delete is named .proofrun-*.tmp
-                }
-            }
+            files.forEach(AtomicFile.Pending::close);
         }
     }
 
     /** The result of the workbook thread; its failure surfaces here as the I/O failure it was. */
-    private static Path join(CompletableFuture<Path> f) throws IOException {
+    private static AtomicFile.Pending join(CompletableFuture<AtomicFile.Pending> f) throws IOException {
         try {
             return f.join();
         } catch (CompletionException e) {
@@ -121,23 +106,15 @@ public final class SheetFiles {
         }
     }
 
-    private static Path temp(Path dir, Body body) throws IOException {
-        // not Files.createTempFile: that makes the file private to its owner, and the sheet files are for sharing
-        Path t = dir.resolve(".proofrun-" + UUID.randomUUID() + ".tmp");
-        try (OutputStream out = Files.newOutputStream(t, StandardOpenOption.CREATE_NEW, StandardOpenOption.WRITE)) {
-            body.write(out);
-        } catch (IOException | RuntimeException e) {
-            Files.deleteIfExists(t);
-            throw e;
-        }
-        return t;
-    }
-
-    private static void move(Path from, Path to) throws IOException {
+    /** The file's content written to its temporary file; moved into place when all three are complete. */
+    private static AtomicFile.Pending pending(Path file, AtomicFile.Body body) throws IOException {
+        AtomicFile.Pending p = AtomicFile.begin(file);
         try {
-            Files.move(from, to, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
-        } catch (AtomicMoveNotSupportedException e) {
-            Files.move(from, to, StandardCopyOption.REPLACE_EXISTING);
+            p.write(body);
+            return p;
+        } catch (IOException | RuntimeException e) {
+            p.close();
+            throw e;
         }
     }
 }

@@ -2,14 +2,14 @@ package dev.proofrun.sheet;
 
 import dev.proofrun.plan.StudyPlan;
 import dev.proofrun.schedule.Slot;
-import dev.proofrun.sheet.layout.Flow;
-import dev.proofrun.sheet.layout.Framed;
-import dev.proofrun.sheet.layout.Paragraph;
-import dev.proofrun.sheet.layout.Pen;
+import dev.proofrun.paper.Flow;
+import dev.proofrun.paper.Framed;
+import dev.proofrun.paper.Paragraph;
+import dev.proofrun.paper.Pen;
 import dev.proofrun.text.UserException;
-import dev.proofrun.sheet.layout.PageHeading;
-import dev.proofrun.sheet.layout.Pages;
-import dev.proofrun.sheet.layout.Paper;
+import dev.proofrun.paper.PageHeading;
+import dev.proofrun.paper.Pages;
+import dev.proofrun.paper.Paper;
 import java.io.OutputStream;
 import java.util.List;
 

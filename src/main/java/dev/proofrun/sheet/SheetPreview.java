@@ -1,7 +1,7 @@
 package dev.proofrun.sheet;
 
 import dev.proofrun.plan.StudyPlan;
-import dev.proofrun.sheet.layout.Paper;
+import dev.proofrun.paper.Paper;
 import java.awt.image.BufferedImage;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;

@@ -2,12 +2,12 @@ package dev.proofrun.sheet;
 
 import dev.proofrun.plan.Characteristic;
 import dev.proofrun.schedule.Slot;
-import dev.proofrun.sheet.layout.Block;
-import dev.proofrun.sheet.layout.Canvas;
-import dev.proofrun.sheet.layout.Pen;
-import dev.proofrun.sheet.layout.Text;
-import dev.proofrun.sheet.layout.TextTable;
-import dev.proofrun.sheet.layout.Typeface;
+import dev.proofrun.paper.Block;
+import dev.proofrun.paper.Canvas;
+import dev.proofrun.paper.Pen;
+import dev.proofrun.paper.Text;
+import dev.proofrun.paper.TextTable;
+import dev.proofrun.paper.Typeface;
 import java.util.List;
 import java.util.Locale;
 
@@ -25,7 +25,7 @@ import java.util.Locale;
  * would make the collector page back and forth for one subgroup and repeat time, lot and operator per
  * characteristic (and give them the chance to disagree). When n boxes do not fit across the page at the
  * minimum width, a characteristic's band takes two or more lines of boxes, numbered inside the box.
- * A block never splits across pages ({@link dev.proofrun.sheet.layout.Flow}).
+ * A block never splits across pages ({@link dev.proofrun.paper.Flow}).
  *
  * <p>Every band prints its characteristic's limits under the id; the characteristic column is at least
  * {@value #CHAR_W} pt and wider when the widest id or limits need it ("21.9870–22.0130"), so that no limits

@@ -20,15 +20,16 @@ import org.apache.commons.statistics.distribution.NormalDistribution;
  * Applied Statistics 39:331–340; his formula has ν = N − 1).</li>
  * </ul>
  *
- * <p>Inputs are validated here: confidence in (0.5, 0.9999), ν &gt; 0 and finite, N ≥ 2, estimates
- * finite; an {@link IllegalArgumentException} names the bad value.
+ * <p>Inputs are validated here: confidence {@link Confidence#isComputable computable}, in (0.5, 1), ν &gt; 0
+ * and finite, N ≥ 2, estimates finite; an {@link IllegalArgumentException} names the bad value. Callers go
+ * through {@link BoundEngine} ({@link NormalTheoryBound}), which chooses the formula.
  */
 public final class CapabilityBounds {
 
-    /** Lowest accepted confidence (exclusive). */
-    public static final double MIN_CONFIDENCE = 0.5;
-    /** Highest accepted confidence (exclusive). */
-    public static final double MAX_CONFIDENCE = 0.9999;
+    /** Lowest confidence a person may state (exclusive); {@link Confidence#MIN}. */
+    public static final double MIN_CONFIDENCE = Confidence.MIN;
+    /** Highest confidence a person may state (exclusive); {@link Confidence#MAX_STATED}. */
+    public static final double MAX_CONFIDENCE = Confidence.MAX_STATED;
     private static final NormalDistribution STANDARD_NORMAL = NormalDistribution.of(0, 1);
     private static final double ROOT_TOLERANCE = 1e-10;
 
@@ -43,7 +44,7 @@ public final class CapabilityBounds {
      * Exact lower bound of Cp (or Pp): Ĉp·sqrt(χ²_{α,ν}/ν).
      *
      * @throws IllegalArgumentException if Ĉp is not finite and positive, if ν is not finite and
-     *         positive, if the confidence is outside (0.5, 0.9999)
+     *         positive, if the confidence is outside (0.5, 1)
      */
     public static double lowerCp(double cpHat, double nu, double confidence) {
         checkCp(cpHat);
@@ -77,7 +78,7 @@ public final class CapabilityBounds {
      * beyond the limit); the bound is then negative.
      *
      * @throws IllegalArgumentException if Ĉ is not finite, if N &lt; 2, if ν is not finite and positive,
-     *         if the confidence is outside (0.5, 0.9999)
+     *         if the confidence is outside (0.5, 1)
      */
     public static double lowerOneSided(double cHat, int n, double nu, double confidence) {
         checkOneSided(cHat, n, nu, confidence);
@@ -218,10 +219,7 @@ public final class CapabilityBounds {
     }
 
     private static void checkConfidence(double confidence) {
-        if (!(confidence > MIN_CONFIDENCE && confidence < MAX_CONFIDENCE)) {
-            throw new IllegalArgumentException(String.format(Locale.ROOT,
-                    "confidence must be in (0.5, 0.9999): %s", confidence));
-        }
+        Confidence.requireComputable(confidence);
     }
 
     private static void checkCp(double cpHat) {

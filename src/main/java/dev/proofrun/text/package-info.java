@@ -11,6 +11,8 @@
  * <li>{@code FormulaGuard}: the one rule for spreadsheet formula guarding. A prefilled cell that starts with
  * {@code =}, {@code +}, {@code -}, {@code @}, tab or CR gets a leading {@code '}; {@code restore} takes it off
  * again. The sheet writer and the grade reader both use it, so the two cannot drift.</li>
+ * <li>{@code AtomicFile}: the one way a file is written — temporary file beside it, forced, moved in one step; new
+ * files as the umask says, replaced ones keep their permissions.</li>
  * </ul>
  */
 package dev.proofrun.text;

@@ -9,8 +9,8 @@ import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 
 /**
- * The layers: stats (pure math) ← control, design, schedule, plan, grade (the job) ← sheet, report
- * (files out) ← cli, app (people in). Arrows point one way; only {@code app} may touch JavaFX.
+ * The layers: stats (pure math) ← control, design, schedule, plan, grade (the job) ← paper (the PDF toolkit) ←
+ * sheet, report (files out) ← cli, app (people in). Arrows point one way; only {@code app} may touch JavaFX.
  */
 class LayeringTest {
 
@@ -35,7 +35,7 @@ class LayeringTest {
         noClasses().that().resideInAPackage("dev.proofrun.stats..")
                 .should().dependOnClassesThat().resideInAnyPackage(
                         "dev.proofrun.control..", "dev.proofrun.design..", "dev.proofrun.schedule..",
-                        "dev.proofrun.plan..", "dev.proofrun.grade..", "dev.proofrun.sheet..",
+                        "dev.proofrun.plan..", "dev.proofrun.grade..", "dev.proofrun.sheet..", "dev.proofrun.paper..",
                         "dev.proofrun.report..", "dev.proofrun.cli..", "dev.proofrun.app..",
                         "dev.proofrun.readings..", "dev.proofrun.capability..")
                 .check(classes);
@@ -47,7 +47,17 @@ class LayeringTest {
                         "dev.proofrun.design..", "dev.proofrun.schedule..", "dev.proofrun.plan..",
                         "dev.proofrun.grade..", "dev.proofrun.readings..", "dev.proofrun.capability..")
                 .should().dependOnClassesThat().resideInAnyPackage(
-                        "dev.proofrun.sheet..", "dev.proofrun.report..", "dev.proofrun.cli..", "dev.proofrun.app..")
+                        "dev.proofrun.sheet..", "dev.proofrun.paper..", "dev.proofrun.report..", "dev.proofrun.cli..",
+                        "dev.proofrun.app..")
+                .check(classes);
+    }
+
+    @Test
+    void thePdfToolkitKnowsNoDocument() {
+        noClasses().that().resideInAPackage("dev.proofrun.paper..")
+                .should().dependOnClassesThat().resideInAnyPackage("dev.proofrun.sheet..", "dev.proofrun.report..",
+                        "dev.proofrun.cli..", "dev.proofrun.app..", "dev.proofrun.plan..", "dev.proofrun.grade..",
+                        "dev.proofrun.design..")
                 .check(classes);
     }
 

@@ -30,6 +30,11 @@ class EstimateCommandTest {
 
     /** The shaft demo data of CapabilityAnalysisTest in the x1..x4 layout. */
     private Path shaft() throws IOException {
+        return shaftCsv(dir);
+    }
+
+    /** The shaft readings written as {@code shaft.csv} in {@code dir}; the golden-output harness uses them too. */
+    static Path shaftCsv(Path dir) throws IOException {
         StringBuilder sb = new StringBuilder("slot,x1,x2,x3,x4\n");
         int i = 1;
         for (double[] g : dev.proofrun.capability.CapabilityAnalysisTest.SHAFT) {

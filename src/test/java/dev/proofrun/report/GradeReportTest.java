@@ -11,7 +11,7 @@ import dev.proofrun.grade.Reason;
 import dev.proofrun.grade.SimulatedReturn;
 import dev.proofrun.plan.DemoPlan;
 import dev.proofrun.plan.StudyPlan;
-import dev.proofrun.sheet.layout.Paper;
+import dev.proofrun.paper.Paper;
 import java.awt.image.BufferedImage;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;

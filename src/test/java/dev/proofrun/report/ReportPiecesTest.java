@@ -13,7 +13,7 @@ import dev.proofrun.grade.SimulatedReturn;
 import dev.proofrun.grade.Verdict;
 import dev.proofrun.plan.DemoPlan;
 import dev.proofrun.plan.StudyPlan;
-import dev.proofrun.sheet.layout.Paper;
+import dev.proofrun.paper.Paper;
 import dev.proofrun.stats.Nonconforming;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;

@@ -8,7 +8,7 @@ import dev.proofrun.grade.GradeResult;
 import dev.proofrun.grade.Grader;
 import dev.proofrun.grade.PlanAdapter;
 import dev.proofrun.plan.StudyPlan;
-import dev.proofrun.sheet.layout.Paper;
+import dev.proofrun.paper.Paper;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.OutputStream;

@@ -7,7 +7,7 @@ import dev.proofrun.plan.Characteristic;
 import dev.proofrun.plan.DemoPlan;
 import dev.proofrun.plan.StudyPlan;
 import dev.proofrun.schedule.Slot;
-import dev.proofrun.sheet.layout.Paper;
+import dev.proofrun.paper.Paper;
 import java.awt.image.BufferedImage;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;

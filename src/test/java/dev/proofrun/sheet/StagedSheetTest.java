@@ -13,7 +13,7 @@ import dev.proofrun.grade.PlanAdapter;
 import dev.proofrun.grade.Verdict;
 import dev.proofrun.plan.PlanFiles;
 import dev.proofrun.plan.StudyPlan;
-import dev.proofrun.sheet.layout.Paper;
+import dev.proofrun.paper.Paper;
 import java.io.IOException;
 import java.io.InputStream;
 import java.nio.charset.StandardCharsets;

@@ -91,7 +91,8 @@ class CapabilityBoundsTest {
     @Test
     void rejectsBadInput() {
         assertThrows(IllegalArgumentException.class, () -> CapabilityBounds.lowerCp(1.33, 29, 0.5));
-        assertThrows(IllegalArgumentException.class, () -> CapabilityBounds.lowerCp(1.33, 29, 0.9999));
+        assertThrows(IllegalArgumentException.class, () -> CapabilityBounds.lowerCp(1.33, 29, 1.0));
+        assertThrows(IllegalArgumentException.class, () -> CapabilityBounds.lowerCp(1.33, 29, Double.NaN));
         assertThrows(IllegalArgumentException.class, () -> CapabilityBounds.lowerCp(1.33, 0, 0.95));
         assertThrows(IllegalArgumentException.class, () -> CapabilityBounds.lowerCp(-1, 29, 0.95));
         assertThrows(IllegalArgumentException.class, () -> CapabilityBounds.lowerOneSided(1.33, 1, 29, 0.95));

@@ -18,6 +18,7 @@ import dev.proofrun.capability.CapabilityResult;
 import dev.proofrun.readings.Readings;
 import dev.proofrun.readings.ReadingsCsv;
 import dev.proofrun.stats.BoundMethod;
+import dev.proofrun.stats.Confidence;
 import dev.proofrun.design.Requirement;
 import javafx.beans.property.SimpleStringProperty;
 import javafx.beans.value.ObservableValue;
@@ -179,7 +180,7 @@ public final class GoalViewModel extends StepViewModel {
         OptionalDouble min = Numbers.parse(draft.text(DraftField.MINIMUM));
         OptionalDouble conf = Numbers.parse(draft.text(DraftField.CONFIDENCE));
         if (min.isEmpty() || !(min.getAsDouble() > 0) || conf.isEmpty()
-                || !(conf.getAsDouble() > 0.5 && conf.getAsDouble() < 0.9999) || index.get() == null) {
+                || !Confidence.isStatable(conf.getAsDouble()) || index.get() == null) {
             return Optional.empty();
         }
         return Optional.of(Requirement.of(index.get(), min.getAsDouble(), conf.getAsDouble()));

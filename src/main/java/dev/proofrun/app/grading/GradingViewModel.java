@@ -16,7 +16,7 @@ import dev.proofrun.grade.Problem;
 import dev.proofrun.grade.IndexEvidence;
 import dev.proofrun.plan.StudyPlan;
 import dev.proofrun.report.GradeReport;
-import dev.proofrun.sheet.layout.Paper;
+import dev.proofrun.paper.Paper;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;

@@ -10,7 +10,7 @@ import dev.proofrun.app.timing.TimingViewModel;
 import dev.proofrun.plan.StudyPlan;
 import dev.proofrun.sheet.SheetFiles;
 import dev.proofrun.sheet.SheetPreview;
-import dev.proofrun.sheet.layout.Paper;
+import dev.proofrun.paper.Paper;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Optional;

@@ -2,13 +2,12 @@ package dev.proofrun.app.session;
 
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
+import dev.proofrun.text.AtomicFile;
 import java.io.IOException;
 import java.io.UncheckedIOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 
-/** Small JSON files of the wizard, written atomically (temporary file, then move). */
+/** Small JSON files of the wizard, written atomically ({@link AtomicFile}). */
 final class JsonFiles {
 
     static final ObjectMapper MAPPER = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
@@ -18,15 +17,7 @@ final class JsonFiles {
 
     static void write(Path file, Object value) {
         try {
-            Path dir = file.toAbsolutePath().getParent();
-            Files.createDirectories(dir);
-            Path tmp = Files.createTempFile(dir, ".proofrun", ".tmp");
-            try {
-                MAPPER.writeValue(tmp.toFile(), value);
-                Files.move(tmp, file, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
-            } finally {
-                Files.deleteIfExists(tmp);
-            }
+            AtomicFile.write(file, out -> MAPPER.writeValue(out, value));
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }

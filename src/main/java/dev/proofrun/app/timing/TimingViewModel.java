@@ -7,6 +7,7 @@ import dev.proofrun.app.session.DraftField;
 import dev.proofrun.app.session.StudyDraft;
 import dev.proofrun.app.shell.StepViewModel;
 import dev.proofrun.design.Design;
+import dev.proofrun.schedule.CalendarSyntax;
 import dev.proofrun.schedule.ProductionCalendar;
 import dev.proofrun.schedule.Schedule;
 import dev.proofrun.schedule.Scheduler;
@@ -167,10 +168,10 @@ public final class TimingViewModel extends StepViewModel {
                     }
                 }
                 case ZONE -> ZoneId.of(t);
-                case WORKING_DAYS -> CalendarText.workingDays(t);
-                case SHIFTS -> CalendarText.shifts(t);
-                case BREAKS -> CalendarText.breaks(t);
-                case NON_WORKING -> CalendarText.dates(t);
+                case WORKING_DAYS -> CalendarSyntax.workingDays(t);
+                case SHIFTS -> CalendarSyntax.shifts(t);
+                case BREAKS -> CalendarSyntax.breaks(t);
+                case NON_WORKING -> CalendarSyntax.dates(t);
                 case RATE -> CalendarText.rate(t);
                 case SPACING -> Spacing.fromToken(t);
                 case SEED -> Long.parseLong(t);
@@ -205,10 +206,10 @@ public final class TimingViewModel extends StepViewModel {
         }
         try {
             return Optional.of(new ProductionCalendar(ZoneId.of(draft.text(DraftField.ZONE)),
-                    CalendarText.workingDays(draft.text(DraftField.WORKING_DAYS)),
-                    CalendarText.shifts(draft.text(DraftField.SHIFTS)),
-                    CalendarText.breaks(draft.text(DraftField.BREAKS)),
-                    CalendarText.dates(draft.text(DraftField.NON_WORKING)),
+                    CalendarSyntax.workingDays(draft.text(DraftField.WORKING_DAYS)),
+                    CalendarSyntax.shifts(draft.text(DraftField.SHIFTS)),
+                    CalendarSyntax.breaks(draft.text(DraftField.BREAKS)),
+                    CalendarSyntax.dates(draft.text(DraftField.NON_WORKING)),
                     CalendarText.rate(draft.text(DraftField.RATE))));
         } catch (IllegalArgumentException | UserException e) {
             return Optional.empty();

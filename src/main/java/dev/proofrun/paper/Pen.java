@@ -1,4 +1,4 @@
-package dev.proofrun.sheet.layout;
+package dev.proofrun.paper;
 
 /**
  * How a line is stroked: width in points, grey level (0 black … 1 white) and an optional dash pattern

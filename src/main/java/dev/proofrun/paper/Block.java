@@ -1,4 +1,4 @@
-package dev.proofrun.sheet.layout;
+package dev.proofrun.paper;
 
 /**
  * Something laid out top to bottom that must not be split across pages: a paragraph, a table row, a

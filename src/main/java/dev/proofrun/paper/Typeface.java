@@ -1,4 +1,4 @@
-package dev.proofrun.sheet.layout;
+package dev.proofrun.paper;
 
 import java.io.IOException;
 import java.io.InputStream;
@@ -15,7 +15,7 @@ import org.apache.pdfbox.pdmodel.font.PDType0Font;
  * An embedded font for one document, with the text measurements layout needs.
  *
  * <p>The faces are DejaVu Sans (regular and bold), shipped inside the jar (licence beside the font files in
- * {@code dev/proofrun/sheet/layout/fonts/}) and embedded as subsets, so a PDF prints the same on any
+ * {@code dev/proofrun/paper/fonts/}) and embedded as subsets, so a PDF prints the same on any
  * machine. PDFBox's Standard 14 fonts are not used: they are not embedded and cover only WinAnsi text.
  *
  * <p>Characters the font has no glyph for are printed as {@code ?} (see {@link #printable}); control

@@ -1,4 +1,4 @@
-package dev.proofrun.sheet.layout;
+package dev.proofrun.paper;
 
 /**
  * A list item: a label ("1.", "–") in the left gutter and a paragraph beside it with a hanging indent.

@@ -7,4 +7,4 @@
  * Sans, embedded as subsets; characters without a glyph print as {@code ?}). Coordinates are PDF points, origin
  * bottom left; {@code Paper} is A4 or Letter.
  */
-package dev.proofrun.sheet.layout;
+package dev.proofrun.paper;

@@ -1,4 +1,4 @@
-package dev.proofrun.sheet.layout;
+package dev.proofrun.paper;
 
 import java.util.Locale;
 import org.apache.pdfbox.pdmodel.common.PDRectangle;
