@@ -2,6 +2,7 @@ package dev.proofrun.cli;
 
 import static dev.proofrun.cli.Conventions.option;
 
+import dev.proofrun.design.Design;
 import dev.proofrun.design.Expectation;
 import dev.proofrun.design.Requirement;
 import dev.proofrun.design.Spending;
@@ -186,14 +187,16 @@ public final class PlanNewCommand implements Callable<Integer> {
         ProductionCalendar calendar = calendar();
         StudySpan studySpan = studySpan();
         CommonDesign design = design(chars);
-        Optional<Stages> looks = stages(design.design().subgroups(), chars);
+        Optional<StagedLooks.Planned> staged = stages(design.design(), chars);
+        Optional<Stages> looks = staged.map(StagedLooks.Planned::stages);
+        Design chosen = staged.map(StagedLooks.Planned::design).orElse(design.design());
         Spacing sp = Conventions.spacing(spacing);
         long s = seed != null ? seed : sp == Spacing.RANDOM ? new SecureRandom().nextInt(1_000_000_000) : 0L;
         String planId = id != null ? id : String.format(Locale.ROOT, "PR-%d-%04d", studySpan.start().getYear(),
                 new SecureRandom().nextInt(10_000));
         StudyPlan plan = option("--id", () -> StudyPlan.draft(planId,
                 new Part(part, partNumber, partRevision), new People(author, collector), chars, calendar, studySpan,
-                design.design(), sp, s)).withStages(looks);
+                chosen, sp, s)).withStages(looks);
         PlanFiles.write(out, plan);
         PrintWriter w = spec.commandLine().getOut();
         if (rate == null && cycleSeconds == null) {
@@ -203,10 +206,7 @@ public final class PlanNewCommand implements Callable<Integer> {
             GaugeCheck.ruleOfTen(c).ifPresent(w::println);
         }
         w.println(design.reason());
-        looks.ifPresent(st -> w.println(PlanOptionMessage.STAGES_PLACEHOLDER.format(st.count(),
-                st.looks().stream().map(l -> String.valueOf(l.subgroups())).collect(Collectors.joining(", ")),
-                st.looks().stream().map(l -> dev.proofrun.grade.GradedLook.percent(l.confidence()))
-                        .collect(Collectors.joining(", ")), st.spending().token())));
+        staged.ifPresent(st -> st.lines().forEach(w::println));
         for (Characteristic c : chars) {
             if (!c.shape().isNormal()) {
                 w.println("warning: " + (c.shape().isLocationScale() ? SizeMessage.SHAPE_SIZED_AS_NORMAL.format(c.id(), c.shape().token(), c.shape().token())
@@ -219,7 +219,7 @@ public final class PlanNewCommand implements Callable<Integer> {
     }
 
     /** The planned looks for --stages and --spending; empty for one stage. */
-    private Optional<Stages> stages(int subgroups, List<Characteristic> chars) {
+    private Optional<StagedLooks.Planned> stages(Design design, List<Characteristic> chars) {
         if (stages < 1 || stages > Stages.MOST) {
             throw new UserException(PlanOptionMessage.STAGES_RANGE, Stages.MOST, stages);
         }
@@ -236,7 +236,23 @@ public final class PlanNewCommand implements Callable<Integer> {
                 throw new UserException(PlanOptionMessage.STAGES_ONE_CONFIDENCE);
             }
         }
-        return Optional.of(StagedLooks.of(subgroups, stages, how, chars.get(0).requirement().confidence()));
+        if (subgroups != null) {
+            requireApart(subgroups);
+        }
+        return Optional.of(StagedLooks.of(chars, design, subgroups != null, power, stages, how));
+    }
+
+    /** A given k must split into looks at least {@value Stages#LEAST_APART} subgroups apart. */
+    private void requireApart(int k) {
+        int before = 0;
+        for (int j = 1; j <= stages; j++) {
+            int at = (int) Math.round(k * (double) j / stages);
+            if (at - before < Stages.LEAST_APART) {
+                throw new UserException(PlanOptionMessage.STAGES_TOO_CLOSE, stages, k, Stages.LEAST_APART,
+                        Stages.LEAST_APART * stages);
+            }
+            before = at;
+        }
     }
 
     /** The plan's design; a characteristic refused from --characteristics is named with its file. */

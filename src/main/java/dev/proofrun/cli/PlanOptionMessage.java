@@ -18,7 +18,9 @@ public enum PlanOptionMessage implements MessageKey {
     UNKNOWN_SPENDING("--spending: unknown spending function '%s' (known: %s)"),
     SPENDING_WITHOUT_STAGES("--spending applies to a staged plan: give --stages 2 to %d with it"),
     STAGES_ONE_CONFIDENCE("--stages: a staged plan needs one confidence for all characteristics (each look's boundary serves them all)"),
-    STAGES_PLACEHOLDER("stages: %d looks at %s subgroups, bounds at %s %% confidence (%s spending split look by look, a safe interim rule; no futility stops). The power above is the single-stage design's: these looks lower it a little, so check it before issuing"),
+    STAGES_PLANNED("stages: %d looks at %s subgroups, bounds at %s %% confidence (%s spending, calibrated on the looks' joint distribution so the whole study keeps its false-pass risk); %d subgroups of %d (%d readings) at most"),
+    STAGES_POWER("stages: %s power %.3f, on average %.0f readings when the process is as expected (one stage: %d)%s"),
+    STAGES_SHARED(" (its own calibration at this k; the plan takes the strictest confidence of all characteristics at each look and no futility stops, so this is approximate)"),
     CHANGED_WARNING("warning: this plan was changed after it was issued as revision %s (its content gives %s);"
             + " it cannot be used until the change is issued ('proofrun plan issue')");
 

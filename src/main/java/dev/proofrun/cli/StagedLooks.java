@@ -1,59 +1,106 @@
 package dev.proofrun.cli;
 
+import dev.proofrun.design.Design;
+import dev.proofrun.design.DesignRequest;
 import dev.proofrun.design.Look;
 import dev.proofrun.design.Spending;
+import dev.proofrun.design.StagedDesign;
+import dev.proofrun.design.StagedDesigner;
+import dev.proofrun.design.StagedMessage;
 import dev.proofrun.design.Stages;
+import dev.proofrun.plan.Characteristic;
 import dev.proofrun.text.UserException;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 
 /**
- * The planned looks {@code plan new --stages S} writes into a plan.
+ * The planned looks {@code plan new --stages S} writes into a plan, from the staged designer
+ * ({@link StagedDesigner}): the looks' confidences calibrated on the joint distribution of the looks so that the
+ * whole study keeps its false-pass risk, and futility boundaries from β-spending at the expected index.
  *
- * <p><b>PLACEHOLDER until the staged designer is merged</b> (issue 14, item 1: {@code size --stages}). The looks
- * are equally spaced, look j at round(k·j/S) subgroups, and look j's bound is taken at confidence 1 − Δα<sub>j</sub>,
- * where Δα<sub>j</sub> = α(t<sub>j</sub>) − α(t<sub>j−1</sub>) is the α the Lan–DeMets spending function
- * ({@link Spending}) spends between the two information fractions t = k<sub>j</sub>/k. By Bonferroni's inequality
- * the chance of a false pass at any look is then at most ΣΔα<sub>j</sub> = α — whatever the correlation of the
- * looks, which share their readings. That is safe but conservative: the designer computes the boundaries from
- * the joint distribution of the stage estimates, which gives the same α with lower boundaries and so more power,
- * and adds futility boundaries. These looks have none (no futility stop: every study that does not pass early
- * runs to the last look). Replace {@link #of} with the designer's call when it is merged.
+ * <p>One characteristic: the designer chooses the most subgroups K (the smallest that gives the wanted power at
+ * every look's gates), unless k is given, when the looks are calibrated at that k. Several characteristics: K is
+ * the largest any of them needs (or the given k); each look takes the strictest (highest) confidence any
+ * characteristic's own calibration asks for at that K, so none of them passes a false study more often than its
+ * own staged design allows; and there are no futility stops, since one boundary cannot serve indices of
+ * different targets. The power printed for several is each characteristic's own at K, an approximation the
+ * command says.
  */
 final class StagedLooks {
+
+    /** The design and looks of a staged plan, with what {@code plan new} prints about them. */
+    record Planned(Design design, Stages stages, List<String> lines) {
+    }
 
     private StagedLooks() {
     }
 
     /**
-     * @param subgroups  the design's k
-     * @param stages     S, 1 to {@value Stages#MOST}
-     * @param spending   how α is spent across the looks
-     * @param confidence the plan's confidence 1 − α
-     * @return S equally spaced looks, the last at k
-     * @throws UserException {@link PlanOptionMessage#STAGES_RANGE} for S outside 1..4,
-     *                       {@link PlanOptionMessage#STAGES_TOO_CLOSE} when the looks would be fewer than
-     *                       {@value Stages#LEAST_APART} subgroups apart
+     * @param chars     the plan's characteristics (each normal-model; one confidence)
+     * @param design    the single-stage design chosen for the plan (its n; its k if given)
+     * @param kGiven    whether k was given on the command line
+     * @param power     the wanted power
+     * @param stages    S, 2 to {@value Stages#MOST}
+     * @param spending  how α is spent across the looks
+     * @throws UserException for a skewed shape, looks fewer than {@value Stages#LEAST_APART} apart, or a design
+     *                       the designer cannot reach
      */
-    static Stages of(int subgroups, int stages, Spending spending, double confidence) {
-        if (stages < 1 || stages > Stages.MOST) {
-            throw new UserException(PlanOptionMessage.STAGES_RANGE, Stages.MOST, stages);
-        }
-        double alpha = 1 - confidence;
-        List<Look> looks = new ArrayList<>();
-        int before = 0;
-        double spentBefore = 0;
-        for (int j = 1; j <= stages; j++) {
-            int at = (int) Math.round(subgroups * (double) j / stages);
-            if (at - before < Stages.LEAST_APART) {
-                throw new UserException(PlanOptionMessage.STAGES_TOO_CLOSE, stages, subgroups, Stages.LEAST_APART,
-                        Stages.LEAST_APART * stages);
+    static Planned of(List<Characteristic> chars, Design design, boolean kGiven, double power, int stages,
+            Spending spending) {
+        for (Characteristic c : chars) {
+            if (!c.shape().isNormal()) {
+                throw new UserException(StagedMessage.STAGES_NEED_NORMAL, c.shape().token());
             }
-            double spent = j == stages ? alpha : spending.spent(alpha, at / (double) subgroups);
-            looks.add(new Look(at, 1 - (spent - spentBefore), Double.NaN));
-            before = at;
-            spentBefore = spent;
         }
-        return new Stages(spending, looks);
+        int n = design.subgroupSize();
+        List<DesignRequest> requests = new ArrayList<>();
+        for (Characteristic c : chars) {
+            requests.add(DesignRequest.of(c.limits().sides(), c.requirement(), c.expectation()).withPower(power)
+                    .withSubgroupSizes(List.of(n)));
+        }
+        List<StagedDesign> own = new ArrayList<>();
+        int k = design.subgroups();
+        if (!kGiven) {
+            k = 0;
+            for (DesignRequest r : requests) {
+                StagedDesign d = StagedDesigner.design(r, n, stages, spending);
+                own.add(d);
+                k = Math.max(k, d.stages().last().subgroups());
+            }
+        }
+        List<StagedDesign> atK = new ArrayList<>();
+        for (int i = 0; i < requests.size(); i++) {
+            boolean ready = !own.isEmpty() && own.get(i).stages().last().subgroups() == k;
+            atK.add(ready ? own.get(i) : StagedDesigner.at(requests.get(i), n, k, stages, spending));
+        }
+        List<Look> looks = new ArrayList<>();
+        for (int j = 0; j < stages; j++) {
+            double confidence = 0;
+            for (StagedDesign d : atK) {
+                confidence = Math.max(confidence, d.stages().looks().get(j).confidence());
+            }
+            double futility = atK.size() == 1 ? atK.get(0).stages().looks().get(j).futility() : Double.NaN;
+            looks.add(new Look(atK.get(0).stages().looks().get(j).subgroups(), confidence, futility));
+        }
+        Stages planned = new Stages(spending, looks);
+        List<String> lines = new ArrayList<>();
+        lines.add(PlanOptionMessage.STAGES_PLANNED.format(stages, joined(looks, true), joined(looks, false),
+                spending.token(), k, n, n * k));
+        for (int i = 0; i < chars.size(); i++) {
+            StagedDesign d = atK.get(i);
+            lines.add(PlanOptionMessage.STAGES_POWER.format(chars.get(i).id(), d.power(), d.expectedReadingsAtExpected(),
+                    d.singleStage().readings(), chars.size() == 1 ? "" : PlanOptionMessage.STAGES_SHARED.english()));
+        }
+        return new Planned(Design.of(n, k), planned, lines);
+    }
+
+    private static String joined(List<Look> looks, boolean subgroups) {
+        List<String> parts = new ArrayList<>();
+        for (Look l : looks) {
+            parts.add(subgroups ? String.valueOf(l.subgroups())
+                    : String.format(Locale.ROOT, "%.2f", 100 * l.confidence()));
+        }
+        return String.join(", ", parts);
     }
 }

@@ -102,6 +102,31 @@ public final class StagedDesigner {
     }
 
     /**
+     * The staged design of {@code stages} looks with the most subgroups fixed at {@code subgroups} (a plan whose k
+     * is given, or shared with other characteristics): the looks' confidences and futility boundaries are
+     * calibrated as in {@link #design}, and its power is whatever that K gives.
+     *
+     * @throws UserException as {@link #design}, and if the looks would be fewer than {@value Stages#LEAST_APART}
+     *                       subgroups apart
+     */
+    public static StagedDesign at(DesignRequest request, int n, int subgroups, int stages, Spending spending) {
+        if (stages < 1 || stages > Stages.MOST) {
+            throw new UserException(StagedMessage.BAD_STAGES, Stages.MOST, stages);
+        }
+        if (request.lossRate() > 0) {
+            throw new UserException(StagedMessage.STAGES_WITHOUT_LOSSES);
+        }
+        request.requireAttainable();
+        SizeSearch search = new SizeSearch(request, n);
+        DesignRow single = search.row();
+        if (single == null) {
+            throw new UserException(DesignMessage.UNREACHABLE_FOR_SIZE, n, request.power(), StudyDesigner.MAX_READINGS);
+        }
+        looks(subgroups, stages);
+        return new StagedEvaluation(request, search, single, stages, spending).at(subgroups);
+    }
+
+    /**
      * The next K to try when K = {@code k} falls {@code shortfall} short of the wanted power: the K whose
      * single-stage power is that much above k's (the staged power grows with K about as the single stage's does),
      * at least k + 1.

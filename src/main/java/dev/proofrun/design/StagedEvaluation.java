@@ -46,7 +46,10 @@ final class StagedEvaluation {
             atTarget.add(e);
             centrings.add(pValues(paths, e, ceiling));
         }
-        double[] levels = StagedDesigner.calibrate(alpha, spending, looks, centrings, ceiling);
+        // no look is less strict than the plan's stated confidence (a reader of any look's bound can take it at
+        // its word, and a plan file's looks can be checked against it); the last look may otherwise come out a
+        // hair above α where the exact bound is conservative at the centrings tried
+        double[] levels = StagedDesigner.calibrate(alpha, spending, looks, centrings, Math.min(ceiling, alpha));
         StudyPower[] bounds = new StudyPower[stages];
         for (int j = 0; j < stages; j++) {
             bounds[j] = new StudyPower(shape, request.boundMethod(), c0, 1 - levels[j], paths.readingsAt(j),

@@ -114,7 +114,7 @@ class GradingViewModelTest {
         vm.selectedProperty().set("R4");
         Characteristic r4 = vm.shownProperty().get();
         assertTrue(r4.heading().startsWith("R4 surface roughness Ra: Inconclusive (about "), r4.heading());
-        assertTrue(r4.heading().endsWith(" more subgroups would settle it)"), r4.heading());
+        assertTrue(r4.heading().endsWith(" more subgroups would settle it: a planning figure)"), r4.heading());
         assertEquals(Tone.OPEN, r4.tone());
     }
 
