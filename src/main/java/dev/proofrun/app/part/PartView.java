@@ -62,7 +62,9 @@ public final class PartView implements StepView {
             TableColumn<CharacteristicDraft, String> c = new TableColumn<>();
             String title = PartViewModel.label(f);
             if (dev.proofrun.app.shell.IndexTooltips.tipsFor(title).isEmpty()) {
-                c.setText(title);
+                Label head = new Label(title);
+                PartViewModel.headerTip(f).ifPresent(t -> head.setTooltip(wrapping(t)));
+                c.setGraphic(head);
             } else {
                 // a title naming an index carries its tooltip, as every label naming one does
                 c.setGraphic(dev.proofrun.app.shell.IndexTooltips.follow(new Label(title)));
@@ -72,10 +74,10 @@ public final class PartView implements StepView {
             // (hundreds of ms on a loaded machine); the constrained policy spreads the rest
             c.setPrefWidth(dev.proofrun.app.shell.Em.of(switch (f) {
                 case NAME -> 11;
-                case ID, UNIT -> 4;
-                case EXPECTED -> 9;
-                case GAUGE -> 11;
-                case TARGET, RESOLUTION -> 7.5;
+                case ID, UNIT, INDEX -> 4;
+                case EXPECTED, TARGET, CONFIDENCE, EXPECTED_CP -> 6.5;
+                case GAUGE -> 9;
+                case RESOLUTION -> 7;
                 default -> 5.5;
             }));
             c.setCellValueFactory(cd -> cd.getValue().cell(f));
@@ -111,7 +113,8 @@ public final class PartView implements StepView {
         remove.setOnAction(e -> vm.removeRow(table.getSelectionModel().getSelectedIndex()));
         Button importCsv = new Button("_Import list…");
         importCsv.setId("import-list");
-        importCsv.setTooltip(new Tooltip("A CSV file with the columns id,name,unit,nominal,lsl,usl,target,expected,shape,gauge,resolution"));
+        importCsv.setTooltip(new Tooltip("A CSV file with the columns "
+                + dev.proofrun.app.session.CharacteristicField.headers() + " (the command line's characteristics CSV)"));
         importCsv.setOnAction(e -> {
             FileChooser fc = new FileChooser();
             fc.getExtensionFilters().add(new FileChooser.ExtensionFilter("CSV list", "*.csv"));
@@ -134,6 +137,14 @@ public final class PartView implements StepView {
                 + " Ctrl+V pastes cells copied from a spreadsheet, Ctrl+Z undoes)"), table, rowProblem, actions, imported);
         card.getStyleClass().add("pr-card");
         root.getChildren().addAll(form, card);
+    }
+
+    /** A tooltip that wraps at a readable width instead of running off the screen. */
+    private static Tooltip wrapping(String text) {
+        Tooltip t = new Tooltip(text);
+        t.setWrapText(true);
+        t.setMaxWidth(dev.proofrun.app.shell.Em.of(30));
+        return t;
     }
 
     private static Label label(String text, Node field) {
