@@ -331,7 +331,9 @@ public final class GoalViewModel extends StepViewModel {
         Optional<Expectation> e = expectation.get();
         if (e.isEmpty()) {
             return switch (source.get()) {
-                case VALUE -> AppMessage.GOAL_EXPECTED_MISSING.format(index.get().symbol(), row.get().id());
+                case VALUE -> dev.proofrun.app.session.RowRequirement.problem(row.get(), CharacteristicField.EXPECTED_CP)
+                        .map(p -> row.get().id() + ": " + p) // a typed expected Cp below the expected index
+                        .orElse(AppMessage.GOAL_EXPECTED_MISSING.format(index.get().symbol(), row.get().id()));
                 case MEAN_SIGMA -> AppMessage.GOAL_MEAN_SIGMA_BAD.format();
                 case PILOT -> AppMessage.GOAL_PILOT_MISSING.format();
             };

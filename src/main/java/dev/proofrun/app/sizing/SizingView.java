@@ -68,7 +68,7 @@ public final class SizingView implements StepView {
         focusLabel.setLabelFor(focus);
         form.addRow(0, focusLabel, focus);
         form.addRow(1, powerLabel, power, spinner);
-        Label sizedFor = note("sizing-for", "pr-note");
+        Label sizedFor = dev.proofrun.app.shell.IndexTooltips.follow(note("sizing-for", "pr-note"));
         sizedFor.textProperty().bind(vm.sizedForBinding());
 
         table.setId("designs");
