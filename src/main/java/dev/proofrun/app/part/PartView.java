@@ -46,6 +46,7 @@ public final class PartView implements StepView {
         by.textProperty().bindBidirectional(vm.preparedBy());
         for (TextField f : new TextField[] {planId, number, name, by}) {
             f.setPrefColumnCount(22);
+            f.setMinWidth(dev.proofrun.app.shell.Em.of(8)); // a narrow window narrows the fields, not the page
         }
         form.addRow(0, label("_Plan id", planId), planId, label("Part n_umber", number), number);
         form.addRow(1, label("Part na_me", name), name, label("Prepared b_y", by), by);
@@ -56,14 +57,17 @@ public final class PartView implements StepView {
         // as tall as its rows: at least 6, at most 12 (then it scrolls); fewer blank rows to make and style
         dev.proofrun.app.shell.Tables.fitHeight(table, 2.2, 6, 12);
         table.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY_FLEX_LAST_COLUMN);
+        // as wide as the card, not as the columns' widths added up: the columns share what there is
+        table.setPrefWidth(dev.proofrun.app.shell.Em.of(40));
+        table.setMinWidth(dev.proofrun.app.shell.Em.of(30));
         Grid grid = new Grid(table, vm);
         table.addEventFilter(KeyEvent.KEY_PRESSED, grid::keyOnTable);
         for (CharacteristicField f : CharacteristicField.values()) {
             TableColumn<CharacteristicDraft, String> c = new TableColumn<>();
-            String title = PartViewModel.label(f);
+            String title = PartHeaders.header(f);
             if (dev.proofrun.app.shell.IndexTooltips.tipsFor(title).isEmpty()) {
                 Label head = new Label(title);
-                PartViewModel.headerTip(f).ifPresent(t -> head.setTooltip(wrapping(t)));
+                PartHeaders.headerTip(f).ifPresent(t -> head.setTooltip(wrapping(t)));
                 c.setGraphic(head);
             } else {
                 // a title naming an index carries its tooltip, as every label naming one does
@@ -73,13 +77,15 @@ public final class PartView implements StepView {
             // a width of its own: the default width makes the skin measure every cell on the first showing
             // (hundreds of ms on a loaded machine); the constrained policy spreads the rest
             c.setPrefWidth(dev.proofrun.app.shell.Em.of(switch (f) {
-                case NAME -> 11;
-                case ID, UNIT, INDEX -> 4;
-                case EXPECTED, TARGET, CONFIDENCE, EXPECTED_CP -> 6.5;
-                case GAUGE -> 9;
-                case RESOLUTION -> 7;
+                case NAME, GAUGE -> 8;
+                case ID, UNIT, INDEX, TARGET, CONFIDENCE -> 4;
+                case EXPECTED, EXPECTED_CP, RESOLUTION -> 5.5;
                 default -> 5.5;
             }));
+            // never narrower than its header's longest line (bold), so a narrow window does not cut a title
+            int longest = java.util.Arrays.stream(title.split("\n")).mapToInt(String::length).max().orElse(1);
+            boolean limit = f == CharacteristicField.LSL || f == CharacteristicField.USL || f == CharacteristicField.NOMINAL;
+            c.setMinWidth(dev.proofrun.app.shell.Em.of(Math.max(0.62 * longest + 1, limit ? 5 : 0))); // limits: "21.987"
             c.setCellValueFactory(cd -> cd.getValue().cell(f));
             c.setCellFactory(col -> new CheckedCell(vm, f, grid));
             c.setOnEditCommit(e -> vm.setCell(e.getTablePosition().getRow(), f, e.getNewValue()));
@@ -133,8 +139,11 @@ public final class PartView implements StepView {
             b.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE); // a long message never squeezes a label to "…"
         }
         HBox actions = new HBox(8, add, remove, importCsv);
-        VBox card = new VBox(new Label("Characteristics (Enter or double-click to edit a cell; Tab to the next cell,"
-                + " Ctrl+V pastes cells copied from a spreadsheet, Ctrl+Z undoes)"), table, rowProblem, actions, imported);
+        Label keys = new Label("Characteristics (Enter or double-click to edit a cell; Tab to the next cell,"
+                + " Ctrl+V pastes cells copied from a spreadsheet, Ctrl+Z undoes)");
+        keys.setWrapText(true); // a narrow window wraps it instead of widening the page
+        keys.setMinWidth(0);
+        VBox card = new VBox(keys, table, rowProblem, actions, imported);
         card.getStyleClass().add("pr-card");
         root.getChildren().addAll(form, card);
     }

@@ -362,15 +362,6 @@ public final class PartViewModel extends StepViewModel {
         return "";
     }
 
-    /** What a column header's tooltip says beyond its title, where it needs saying. */
-    public static Optional<String> headerTip(CharacteristicField f) {
-        return switch (f) {
-            case INDEX, TARGET, CONFIDENCE -> Optional.of(PartMessage.REQUIREMENT_TIP.format(label(f)));
-            case EXPECTED -> Optional.of(PartMessage.EXPECTED_TIP.format());
-            default -> Optional.empty();
-        };
-    }
-
     /** The column title as the table shows it. */
     public static String label(CharacteristicField f) {
         return switch (f) {

@@ -74,7 +74,7 @@ public final class SizingView implements StepView {
         table.setId("designs");
         table.setItems(vm.shownRows());
         // grouped headers take two lines; as tall as the candidate designs, no empty rows to make and style
-        dev.proofrun.app.shell.Tables.fitToRows(table, 3.6, 3, 10);
+        dev.proofrun.app.shell.Tables.fitToRows(table, 4.2, 3, 10);
         table.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY_FLEX_LAST_COLUMN);
         Map<String, TableColumn<SizingRow, String>> groups = new LinkedHashMap<>();
         for (SizingColumn c : vm.columns()) {
@@ -201,7 +201,11 @@ public final class SizingView implements StepView {
         column.setSortable(false);
         // a width of its own: the default width makes the skin measure every cell on the first showing; the
         // constrained policy spreads the columns anyway
-        column.setPrefWidth(Em.of(c == SizingColumn.LIMITED_BY ? 6.5 : 4.5));
+        column.setPrefWidth(Em.of(switch (c) {
+            case N, K -> 3;
+            case LIMITED_BY -> 8.5;
+            default -> 4.5;
+        }));
         column.setCellValueFactory(cd -> new ReadOnlyStringWrapper(c.text(cd.getValue())));
         return column;
     }
