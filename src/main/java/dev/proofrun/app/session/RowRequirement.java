@@ -72,6 +72,10 @@ public final class RowRequirement {
         }
         String text = row.text(field).trim();
         OptionalDouble v = row.number(field);
+        if (v.isEmpty() && (field == CharacteristicField.TARGET || field == CharacteristicField.CONFIDENCE
+                || field == CharacteristicField.EXPECTED_CP)) {
+            return Optional.of(field.header() + ": not a number: '" + text + "'"); // the CSV reader's words
+        }
         try {
             switch (field) {
                 case INDEX -> {

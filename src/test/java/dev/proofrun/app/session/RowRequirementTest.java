@@ -105,6 +105,8 @@ class RowRequirementTest {
         assertEquals(Optional.of("Cp needs both limits, and F7 has only one"), vm.problem(f7, CharacteristicField.INDEX));
         f7.cell(CharacteristicField.CONFIDENCE).set("0.4");
         assertEquals(Optional.of("confidence must be between 0.5 and 0.9999: 0.4"), vm.problem(f7, CharacteristicField.CONFIDENCE));
+        f7.cell(CharacteristicField.TARGET).set("1,4x");
+        assertEquals(Optional.of("target: not a number: '1,4x'"), vm.problem(f7, CharacteristicField.TARGET));
         f7.cell(CharacteristicField.TARGET).set("0");
         assertEquals(Optional.of("required minimum must be positive: 0.0"), vm.problem(f7, CharacteristicField.TARGET));
         d1.cell(CharacteristicField.EXPECTED_CP).set("1.5");
