@@ -129,6 +129,26 @@ public final class StudyDesigner {
         return search.power(k);
     }
 
+    /**
+     * The operating characteristic of one given design — k subgroups of n — computed as the table's is for its
+     * recommended row, so that a plan keeping another k (its own, or a design shared by several characteristics)
+     * shows the curve of the k it will use.
+     *
+     * @throws IllegalArgumentException as {@link #power(DesignRequest, int, int)}
+     */
+    public static List<OcPoint> operatingCharacteristic(DesignRequest request, int n, int k) {
+        if (n < 1) {
+            throw new IllegalArgumentException(String.format(Locale.ROOT, "subgroup size %d is below 1", n));
+        }
+        SizeSearch search = new SizeSearch(request, n);
+        if (k < search.smallestK() || k > search.largestK()) {
+            throw new IllegalArgumentException(String.format(Locale.ROOT,
+                    "%d subgroups of %d is outside %d..%d, the studies the designer can evaluate", k, n,
+                    search.smallestK(), search.largestK()));
+        }
+        return operatingCharacteristic(request, search, k);
+    }
+
     private static List<OcPoint> operatingCharacteristic(DesignRequest request, SizeSearch search, int k) {
         double c0 = request.requirement().minimum();
         double c1 = request.expectation().index();

@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.proofrun.app.grading.GradingViewModel;
 import dev.proofrun.app.session.AppHome;
+import dev.proofrun.app.sizing.SizingRow;
 import dev.proofrun.design.DesignRow;
 import dev.proofrun.app.chart.CurvePlot;
 import dev.proofrun.grade.DemoReturn;
@@ -124,7 +125,8 @@ class FullFlowTest {
         // change the expected index on the Goal step: the design table is recomputed
         robot.clickOn("#back");
         Settle.onStep(app, 2); // the Goal step
-        replaceText(robot, "#expected", "2.0");
+        // (1.78: better than the demo's 1.67 and still below D1's expected Cp of 1.8, which Cpk cannot exceed)
+        replaceText(robot, "#expected", "1.78");
         robot.clickOn("#next");
         await("a recomputed design table (a better process needs fewer subgroups)", () ->
                 !app.wizard().sizing().busyProperty().get() && !app.wizard().sizing().rows().isEmpty()
@@ -135,8 +137,8 @@ class FullFlowTest {
         // the recommendation moved: exactly the row of the new recommended size is marked
         await("only the recommended row marked", () -> {
             int n = app.wizard().sizing().tableProperty().get().recommended().subgroupSize();
-            List<Integer> marked = robot.lookup("#designs .table-row-cell").match((TableRow<DesignRow> r) ->
-                    r.getStyleClass().contains("pr-recommended")).<TableRow<DesignRow>>queryAll().stream()
+            List<Integer> marked = robot.lookup("#designs .table-row-cell").match((TableRow<SizingRow> r) ->
+                    r.getStyleClass().contains("pr-recommended")).<TableRow<SizingRow>>queryAll().stream()
                     .map(r -> r.getItem() == null ? -1 : r.getItem().subgroupSize()).toList();
             return marked.equals(List.of(n));
         });
@@ -145,8 +147,8 @@ class FullFlowTest {
         // pick another design (subgroups of 3) and read what it costs
         TableView<?> designs = robot.lookup("#designs").queryAs(TableView.class);
         await("the row for subgroups of 3 drawn", () -> robot.lookup("#designs .table-row-cell")
-                .match((TableRow<DesignRow> r) -> r.getItem() != null && r.getItem().subgroupSize() == 3).tryQuery().isPresent());
-        Node rowOf3 = robot.lookup("#designs .table-row-cell").match((TableRow<DesignRow> r) ->
+                .match((TableRow<SizingRow> r) -> r.getItem() != null && r.getItem().subgroupSize() == 3).tryQuery().isPresent());
+        Node rowOf3 = robot.lookup("#designs .table-row-cell").match((TableRow<SizingRow> r) ->
                 r.getItem() != null && r.getItem().subgroupSize() == 3).query();
         robot.clickOn(rowOf3);
         await("subgroups of 3 chosen", () -> app.wizard().sizing().chosenProperty().get() != null

@@ -148,21 +148,21 @@ class GridKeyboardTest {
         assertEquals(rowsAtStart + 1, (int) fx(() -> rows().size()), "a new row at the end");
         assertEquals(List.of(rowsAtStart, 0), List.of(focused(table)[0], focused(table)[1]));
 
-        // a 3 x 4 block pasted at (row 1, nominal): nominal, lsl, usl, target of rows 1..3
+        // a 3 x 4 block pasted at (row 1, nominal): nominal, lsl, usl, index of rows 1..3
         List<java.util.Map<String, String>> before3x4 = fx(() -> rows().subList(0, 3).stream().map(CharacteristicDraft::values)
                 .toList());
         robot.interact(() -> {
             ClipboardContent c = new ClipboardContent();
-            c.putString("10.0\t9.9\t10.1\t10.0\n20.0\t19.8\tnot a number\t20.0\n30.0\t29.7\t30.3\t30.1\n");
+            c.putString("10.0\t9.9\t10.1\tcpk\n20.0\t19.8\tnot a number\tppk\n30.0\t29.7\t30.3\tPpk\n");
             Clipboard.getSystemClipboard().setContent(c);
             table.getSelectionModel().select(0);
             table.getFocusModel().focus(0, table.getColumns().get(CharacteristicField.NOMINAL.ordinal()));
         });
         robot.press(KeyCode.CONTROL).type(KeyCode.V).release(KeyCode.CONTROL);
         assertEquals("10.0", cell(0, CharacteristicField.NOMINAL));
-        assertEquals("10.0", cell(0, CharacteristicField.TARGET));
+        assertEquals("cpk", cell(0, CharacteristicField.INDEX));
         assertEquals("not a number", cell(1, CharacteristicField.USL), "pasted as copied, then checked");
-        assertEquals("30.1", cell(2, CharacteristicField.TARGET));
+        assertEquals("Ppk", cell(2, CharacteristicField.INDEX));
         assertTrue(fx(() -> app.wizard().part().problem(rows().get(1), CharacteristicField.USL)).isPresent(),
                 "the bad cell is marked");
         robot.press(KeyCode.CONTROL).type(KeyCode.Z).release(KeyCode.CONTROL);

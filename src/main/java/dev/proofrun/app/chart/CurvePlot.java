@@ -379,32 +379,6 @@ public final class CurvePlot extends Region {
         if (lines.isEmpty() || mouseX < left || mouseX > right) {
             return title;
         }
-        double x = x0 + (mouseX - left) / (right - left) * (x1 - x0);
-        StringBuilder s = new StringBuilder(title);
-        for (Line l : lines) {
-            if (l.pen() == Pen.CURVE) {
-                double[] xs = l.xs();
-                int i = nearest(xs, x);
-                s.append(String.format(Locale.ROOT, "%n%s: at %s = %s, %s %.3f", l.name(), xLabel,
-                        number(xs[i]), yLabel, l.ys()[i]));
-            } else {
-                s.append(System.lineSeparator()).append(l.name());
-            }
-        }
-        return s.toString();
-    }
-
-    private static int nearest(double[] xs, double x) {
-        int best = 0;
-        for (int i = 1; i < xs.length; i++) {
-            if (Math.abs(xs[i] - x) < Math.abs(xs[best] - x)) {
-                best = i;
-            }
-        }
-        return best;
-    }
-
-    private static String number(double v) {
-        return v == Math.rint(v) && Math.abs(v) < 1e9 ? Long.toString((long) v) : String.format(Locale.ROOT, "%.3f", v);
+        return PointerText.at(title, lines, xLabel, yLabel, x0 + (mouseX - left) / (right - left) * (x1 - x0));
     }
 }

@@ -170,7 +170,8 @@ public final class GoalView implements StepView {
         result.textProperty().bind(Bindings.createStringBinding(() -> vm.expectationBinding().get()
                 .map(e -> String.format(java.util.Locale.ROOT, "Designing for a true %s of %.3f%s", vm.indexProperty().get().symbol(),
                         e.index(), e.potential().isPresent()
-                                ? String.format(java.util.Locale.ROOT, " (Cp %.3f, off centre)", e.potential().getAsDouble()) : " (centred)"))
+                                ? String.format(java.util.Locale.ROOT, " (Cp %.3f, off centre, as the Part table's Expected Cp says)", e.potential().getAsDouble())
+                                : " (centred; an off-centre Cp is typed in the Part table's Expected Cp column)"))
                 .orElse(""), vm.expectationBinding(), vm.indexProperty()));
         Label problem = new Label();
         problem.setId("goal-problem");

@@ -6,7 +6,6 @@ import dev.proofrun.app.session.CharacteristicField;
 import dev.proofrun.app.session.DraftField;
 import dev.proofrun.app.session.ExpectationSource;
 import dev.proofrun.app.session.Numbers;
-import dev.proofrun.app.session.PlanBridge;
 import dev.proofrun.design.ProcessFacts;
 import dev.proofrun.plan.StudyPlan;
 import dev.proofrun.text.UserException;
@@ -301,7 +300,11 @@ public final class GoalViewModel extends StepViewModel {
         if (v.isEmpty() || !(v.getAsDouble() > 0)) {
             return Optional.empty();
         }
-        return Optional.of(PlanBridge.withCentringOf(Optional.ofNullable(base.getValue()), row.id(), v.getAsDouble()));
+        try {
+            return Optional.of(dev.proofrun.app.session.RowRequirement.expectation(row, v.getAsDouble()));
+        } catch (IllegalArgumentException belowTheIndex) {
+            return Optional.empty(); // the Part table marks the Expected Cp cell
+        }
     }
 
     /** Whether the index exists for these limits (Cp/Pp need both, Cpu an upper, Cpl a lower limit). */
@@ -329,7 +332,9 @@ public final class GoalViewModel extends StepViewModel {
         Optional<Expectation> e = expectation.get();
         if (e.isEmpty()) {
             return switch (source.get()) {
-                case VALUE -> AppMessage.GOAL_EXPECTED_MISSING.format(index.get().symbol(), row.get().id());
+                case VALUE -> dev.proofrun.app.session.RowRequirement.problem(row.get(), CharacteristicField.EXPECTED_CP)
+                        .map(p -> row.get().id() + ": " + p) // a typed expected Cp below the expected index
+                        .orElse(AppMessage.GOAL_EXPECTED_MISSING.format(index.get().symbol(), row.get().id()));
                 case MEAN_SIGMA -> AppMessage.GOAL_MEAN_SIGMA_BAD.format();
                 case PILOT -> AppMessage.GOAL_PILOT_MISSING.format();
             };

@@ -46,6 +46,7 @@ public final class PartView implements StepView {
         by.textProperty().bindBidirectional(vm.preparedBy());
         for (TextField f : new TextField[] {planId, number, name, by}) {
             f.setPrefColumnCount(22);
+            f.setMinWidth(dev.proofrun.app.shell.Em.of(8)); // a narrow window narrows the fields, not the page
         }
         form.addRow(0, label("_Plan id", planId), planId, label("Part n_umber", number), number);
         form.addRow(1, label("Part na_me", name), name, label("Prepared b_y", by), by);
@@ -56,13 +57,18 @@ public final class PartView implements StepView {
         // as tall as its rows: at least 6, at most 12 (then it scrolls); fewer blank rows to make and style
         dev.proofrun.app.shell.Tables.fitHeight(table, 2.2, 6, 12);
         table.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY_FLEX_LAST_COLUMN);
+        // as wide as the card, not as the columns' widths added up: the columns share what there is
+        table.setPrefWidth(dev.proofrun.app.shell.Em.of(40));
+        table.setMinWidth(dev.proofrun.app.shell.Em.of(30));
         Grid grid = new Grid(table, vm);
         table.addEventFilter(KeyEvent.KEY_PRESSED, grid::keyOnTable);
         for (CharacteristicField f : CharacteristicField.values()) {
             TableColumn<CharacteristicDraft, String> c = new TableColumn<>();
-            String title = PartViewModel.label(f);
+            String title = PartHeaders.header(f);
             if (dev.proofrun.app.shell.IndexTooltips.tipsFor(title).isEmpty()) {
-                c.setText(title);
+                Label head = new Label(title);
+                PartHeaders.headerTip(f).ifPresent(t -> head.setTooltip(wrapping(t)));
+                c.setGraphic(head);
             } else {
                 // a title naming an index carries its tooltip, as every label naming one does
                 c.setGraphic(dev.proofrun.app.shell.IndexTooltips.follow(new Label(title)));
@@ -71,13 +77,15 @@ public final class PartView implements StepView {
             // a width of its own: the default width makes the skin measure every cell on the first showing
             // (hundreds of ms on a loaded machine); the constrained policy spreads the rest
             c.setPrefWidth(dev.proofrun.app.shell.Em.of(switch (f) {
-                case NAME -> 11;
-                case ID, UNIT -> 4;
-                case EXPECTED -> 9;
-                case GAUGE -> 11;
-                case TARGET, RESOLUTION -> 7.5;
+                case NAME, GAUGE -> 8;
+                case ID, UNIT, INDEX, TARGET, CONFIDENCE -> 4;
+                case EXPECTED, EXPECTED_CP, RESOLUTION -> 5.5;
                 default -> 5.5;
             }));
+            // never narrower than its header's longest line (bold), so a narrow window does not cut a title
+            int longest = java.util.Arrays.stream(title.split("\n")).mapToInt(String::length).max().orElse(1);
+            boolean limit = f == CharacteristicField.LSL || f == CharacteristicField.USL || f == CharacteristicField.NOMINAL;
+            c.setMinWidth(dev.proofrun.app.shell.Em.of(Math.max(0.62 * longest + 1, limit ? 5 : 0))); // limits: "21.987"
             c.setCellValueFactory(cd -> cd.getValue().cell(f));
             c.setCellFactory(col -> new CheckedCell(vm, f, grid));
             c.setOnEditCommit(e -> vm.setCell(e.getTablePosition().getRow(), f, e.getNewValue()));
@@ -111,7 +119,8 @@ public final class PartView implements StepView {
         remove.setOnAction(e -> vm.removeRow(table.getSelectionModel().getSelectedIndex()));
         Button importCsv = new Button("_Import list…");
         importCsv.setId("import-list");
-        importCsv.setTooltip(new Tooltip("A CSV file with the columns id,name,unit,nominal,lsl,usl,target,expected,shape,gauge,resolution"));
+        importCsv.setTooltip(new Tooltip("A CSV file with the columns "
+                + dev.proofrun.app.session.CharacteristicField.headers() + " (the command line's characteristics CSV)"));
         importCsv.setOnAction(e -> {
             FileChooser fc = new FileChooser();
             fc.getExtensionFilters().add(new FileChooser.ExtensionFilter("CSV list", "*.csv"));
@@ -130,10 +139,21 @@ public final class PartView implements StepView {
             b.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE); // a long message never squeezes a label to "…"
         }
         HBox actions = new HBox(8, add, remove, importCsv);
-        VBox card = new VBox(new Label("Characteristics (Enter or double-click to edit a cell; Tab to the next cell,"
-                + " Ctrl+V pastes cells copied from a spreadsheet, Ctrl+Z undoes)"), table, rowProblem, actions, imported);
+        Label keys = new Label("Characteristics (Enter or double-click to edit a cell; Tab to the next cell,"
+                + " Ctrl+V pastes cells copied from a spreadsheet, Ctrl+Z undoes)");
+        keys.setWrapText(true); // a narrow window wraps it instead of widening the page
+        keys.setMinWidth(0);
+        VBox card = new VBox(keys, table, rowProblem, actions, imported);
         card.getStyleClass().add("pr-card");
         root.getChildren().addAll(form, card);
+    }
+
+    /** A tooltip that wraps at a readable width instead of running off the screen. */
+    private static Tooltip wrapping(String text) {
+        Tooltip t = new Tooltip(text);
+        t.setWrapText(true);
+        t.setMaxWidth(dev.proofrun.app.shell.Em.of(30));
+        return t;
     }
 
     private static Label label(String text, Node field) {

@@ -4,7 +4,6 @@ import static dev.proofrun.app.session.CharacteristicField.EXPECTED;
 import static dev.proofrun.app.session.CharacteristicField.ID;
 import static dev.proofrun.app.session.CharacteristicField.LSL;
 import static dev.proofrun.app.session.CharacteristicField.NOMINAL;
-import static dev.proofrun.app.session.CharacteristicField.TARGET;
 import static dev.proofrun.app.session.CharacteristicField.UNIT;
 import static dev.proofrun.app.session.CharacteristicField.USL;
 
@@ -15,6 +14,7 @@ import dev.proofrun.app.session.CharacteristicListFile;
 import dev.proofrun.app.session.DraftField;
 import dev.proofrun.app.session.Numbers;
 import dev.proofrun.app.session.PlanBridge;
+import dev.proofrun.app.session.RowRequirement;
 import dev.proofrun.app.session.StudyDraft;
 import dev.proofrun.app.shell.StepViewModel;
 import dev.proofrun.text.UserException;
@@ -289,6 +289,8 @@ public final class PartViewModel extends StepViewModel {
                 } catch (IllegalArgumentException e) {
                     return Optional.of(e.getMessage());
                 }
+            case INDEX, TARGET, CONFIDENCE, EXPECTED_CP:
+                return RowRequirement.problem(row, field);
             case UNIT:
                 if (text.isEmpty()) {
                     return Optional.of(AppMessage.PART_UNIT_MISSING.format());
@@ -313,7 +315,7 @@ public final class PartViewModel extends StepViewModel {
             }
             return Optional.empty();
         }
-        if (field == NOMINAL || field == TARGET) {
+        if (field == NOMINAL) {
             OptionalDouble v = Numbers.parse(text);
             if (v.isPresent() && ((lsl.isPresent() && v.getAsDouble() < lsl.getAsDouble())
                     || (usl.isPresent() && v.getAsDouble() > usl.getAsDouble()))) {
@@ -369,8 +371,11 @@ public final class PartViewModel extends StepViewModel {
             case NOMINAL -> "Nominal";
             case LSL -> "LSL";
             case USL -> "USL";
-            case TARGET -> "Cpm target";
+            case INDEX -> "Index";
+            case TARGET -> "Required c₀";
+            case CONFIDENCE -> "Confidence";
             case EXPECTED -> "Expected index";
+            case EXPECTED_CP -> "Expected Cp";
             case SHAPE -> "Shape";
             case GAUGE -> "Gauge";
             case RESOLUTION -> "Resolution";

@@ -1,6 +1,9 @@
 /**
  * Part: the part, the people and the characteristics table (cells checked on every keystroke on a copy of the
- * row, committed on Enter or on leaving the cell). The view only binds and draws; the view-model holds the
+ * row, committed on Enter or on leaving the cell). The table's columns are those of the command line's
+ * characteristics CSV plus the gauge ({@code app.session.CharacteristicField}); each row may carry its own
+ * requirement (index, c₀, confidence; blank cells take the plan's, set on Goal) and the expected Cp of an
+ * off-centre process ({@code app.session.RowRequirement}). The view only binds and draws; the view-model holds the
  * state, validates, and is the only caller of the core.
  */
 package dev.proofrun.app.part;

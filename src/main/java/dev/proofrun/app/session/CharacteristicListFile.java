@@ -17,7 +17,7 @@ import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
 
 /**
- * Reads a list of characteristics from CSV with the header {@code id,name,unit,nominal,lsl,usl,target,expected,shape,gauge,resolution}
+ * Reads a list of characteristics from CSV with the header {@link CharacteristicField#headers()}
  * (any order, case ignored; {@code id} and {@code unit} and at least one of {@code lsl}/{@code usl} must be
  * present as columns; the other columns may be left out). The text is taken as written; the Part step
  * validates it as it does typed input, so an imported list shows its problems in the table.
@@ -45,7 +45,7 @@ public final class CharacteristicListFile {
                     known |= f.header().equals(key);
                 }
                 if (!known) {
-                    throw new UserException(Location.cell(name, 1, h), ImportMessage.UNKNOWN_COLUMN, h);
+                    throw new UserException(Location.cell(name, 1, h), ImportMessage.UNKNOWN_COLUMN, h, CharacteristicField.headers());
                 }
                 columns.put(key, h);
             }
@@ -81,7 +81,7 @@ public final class CharacteristicListFile {
     /** Problems with a characteristic list file. */
     public enum ImportMessage implements dev.proofrun.text.MessageKey {
         UNREADABLE("cannot read the list: %s"),
-        UNKNOWN_COLUMN("unknown column '%s' (expected id,name,unit,nominal,lsl,usl,target,expected,shape,gauge,resolution)"),
+        UNKNOWN_COLUMN("unknown column '%s' (expected %s)"),
         MISSING_COLUMN("the column '%s' is required"),
         NO_LIMIT_COLUMN("a column lsl or usl is required"),
         ROW_LENGTH("the row has %d cells, the header %d"),

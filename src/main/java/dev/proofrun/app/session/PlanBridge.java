@@ -24,15 +24,19 @@ import java.util.function.Function;
 /**
  * Between the plan model and the draft the wizard edits: a plan file becomes text fields
  * ({@link #snapshotOf}), and the checked inputs of the steps become a plan again ({@link #compose}).
- * What the wizard does not edit (gauges, the expected centring) is carried over from the plan the draft
- * was opened from, matched by characteristic id.
+ * What the wizard does not edit (a gauge's repeatability) is carried over from the plan the draft was opened
+ * from, matched by characteristic id. Each row keeps its own requirement and expected centring
+ * ({@link RowRequirement}); the Goal step shows the first characteristic's requirement as the plan's.
  */
 public final class PlanBridge {
 
     private PlanBridge() {
     }
 
-    /** The plan as the wizard's text fields. One requirement is shown for the plan: the first characteristic's. */
+    /**
+     * The plan as the wizard's text fields. The first characteristic's requirement is the plan's (on Goal); a row
+     * whose requirement differs keeps the differing cells, the others are left blank.
+     */
     public static DraftSnapshot snapshotOf(StudyPlan plan, java.nio.file.Path file) {
         Map<String, String> f = new LinkedHashMap<>();
         for (DraftField d : DraftField.values()) {
@@ -73,8 +77,14 @@ public final class PlanBridge {
             r.put("nominal", ch.nominal().isPresent() ? num(ch.nominal().getAsDouble()) : "");
             r.put("lsl", ch.limits().lower().isPresent() ? num(ch.limits().lower().getAsDouble()) : "");
             r.put("usl", ch.limits().upper().isPresent() ? num(ch.limits().upper().getAsDouble()) : "");
-            r.put("target", "");
+            // the row's own requirement where it differs from the plan's (the first characteristic's, on Goal)
+            Requirement req = ch.requirement();
+            Requirement shown = first.requirement();
+            r.put("index", req.index() == shown.index() ? "" : req.index().token());
+            r.put("target", req.minimum() == shown.minimum() ? "" : num(req.minimum()));
+            r.put("confidence", req.confidence() == shown.confidence() ? "" : num(req.confidence()));
             r.put("expected", num(ch.expectation().index()));
+            r.put("expected_cp", ch.expectation().potential().isPresent() ? num(ch.expectation().potential().getAsDouble()) : "");
             r.put("shape", ch.shape().token());
             r.put("gauge", ch.gauge().map(Gauge::name).orElse(""));
             r.put("resolution", ch.gauge().map(g -> num(g.resolution())).orElse(""));
@@ -87,6 +97,8 @@ public final class PlanBridge {
      * A draft plan from the steps' checked inputs.
      *
      * @param base        the plan the draft was opened from, for what the wizard does not edit
+     * @param requirement the plan's requirement (the Goal step's), for the cells a row leaves blank
+     *                    ({@link RowRequirement#of})
      * @param expectation the expectation for each characteristic row
      * @param schedule    the schedule computed for this calendar, span, design, spacing and seed
      * @throws IllegalArgumentException when a value is refused by the plan model
@@ -101,7 +113,9 @@ public final class PlanBridge {
             Expectation e = expectation.apply(row);
             OptionalDouble nominal = row.number(CharacteristicField.NOMINAL);
             chars.add(new Characteristic(row.id(), row.text(CharacteristicField.NAME).trim(),
-                    row.text(CharacteristicField.UNIT).trim(), nominal, row.limits().orElseThrow(), gauge, requirement, e,
+                    row.text(CharacteristicField.UNIT).trim(), nominal, row.limits().orElseThrow(), gauge,
+                    RowRequirement.of(row, Optional.of(requirement)).orElseThrow(() -> new IllegalArgumentException(
+                            "the requirement of " + row.id() + " is not complete")), e,
                     shapeOf(row)));
         }
         Part part = new Part(d.text(DraftField.PART_NAME), d.text(DraftField.PART_NUMBER), d.text(DraftField.PART_REVISION));
@@ -136,15 +150,6 @@ public final class PlanBridge {
     public static dev.proofrun.stats.ShapeFamily shapeOf(CharacteristicDraft row) {
         String t = row.text(CharacteristicField.SHAPE).trim();
         return t.isEmpty() ? dev.proofrun.stats.ShapeFamily.NORMAL : dev.proofrun.stats.ShapeFamily.fromToken(t);
-    }
-
-    /** The expected centring of the plan the draft came from, kept when it still fits the index typed. */
-    public static Expectation withCentringOf(Optional<StudyPlan> base, String id, double index) {
-        Optional<OptionalDouble> p = base.flatMap(b -> b.characteristic(id)).map(c -> c.expectation().potential());
-        if (p.isPresent() && p.get().isPresent() && p.get().getAsDouble() >= index) {
-            return Expectation.offCentre(index, p.get().getAsDouble());
-        }
-        return Expectation.centred(index);
     }
 
     static String num(double v) {

@@ -1,21 +1,16 @@
 package dev.proofrun.app.sizing;
 
 import dev.proofrun.app.chart.CurvePlot;
-import dev.proofrun.app.chart.CurvePlot.Line;
-import dev.proofrun.app.chart.CurvePlot.Pen;
+import dev.proofrun.app.shell.Em;
 import dev.proofrun.app.shell.StepView;
-import dev.proofrun.design.DesignRow;
-import dev.proofrun.design.DesignTable;
-import dev.proofrun.design.OcPoint;
-import dev.proofrun.design.PowerPoint;
-import java.util.ArrayList;
+import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.function.Function;
-import javafx.beans.InvalidationListener;
-import javafx.beans.WeakInvalidationListener;
+import java.util.Map;
 import javafx.beans.binding.Bindings;
 import javafx.beans.property.ReadOnlyStringWrapper;
 import javafx.scene.Node;
+import javafx.scene.control.Button;
+import javafx.scene.control.ComboBox;
 import javafx.scene.control.Label;
 import javafx.scene.control.ProgressIndicator;
 import javafx.scene.control.TableColumn;
@@ -28,11 +23,15 @@ import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
 import javafx.scene.layout.VBox;
 
-/** The candidate designs, the recommendation, the chosen design's cost and its curves. */
+/**
+ * The characteristic the table sizes, the candidate designs, the recommendation, the chosen design's cost, the
+ * design for all characteristics and the two curves. It binds display rows, texts and chart lines the view-model
+ * provides; it imports nothing of the core.
+ */
 public final class SizingView implements StepView {
 
     private final VBox root = new VBox(12);
-    private final TableView<DesignRow> table = new TableView<>();
+    private final TableView<SizingRow> table = new TableView<>();
     private final CurvePlot powerChart =
             new CurvePlot("power-chart", "Power against the number of subgroups", "subgroups k", "power");
     private final CurvePlot ocChart =
@@ -45,70 +44,57 @@ public final class SizingView implements StepView {
         power.textProperty().bindBidirectional(vm.power());
         ProgressIndicator spinner = new ProgressIndicator();
         spinner.setId("design-busy");
-        spinner.setMaxSize(dev.proofrun.app.shell.Em.of(1.8), dev.proofrun.app.shell.Em.of(1.8));
+        spinner.setMaxSize(Em.of(1.8), Em.of(1.8));
         spinner.visibleProperty().bind(vm.busyProperty());
-        Label refusal = new Label();
-        refusal.setId("design-refusal");
-        refusal.getStyleClass().add("pr-problem");
-        refusal.setWrapText(true);
+        Label refusal = note("design-refusal", "pr-problem");
         refusal.textProperty().bind(vm.refusalProperty());
+        ComboBox<String> focus = new ComboBox<>(vm.characteristicIds());
+        focus.setId("sizing-focus");
+        focus.setValue(shownFocus(vm));
+        vm.focusId().addListener((obs, was, now) -> focus.setValue(shownFocus(vm)));
+        vm.characteristicIds().addListener((javafx.collections.ListChangeListener<String>) c -> focus.setValue(shownFocus(vm)));
+        focus.valueProperty().addListener((obs, was, now) -> {
+            if (now != null && !now.equalsIgnoreCase(shownFocus(vm))) {
+                vm.focusId().set(now);
+            }
+        });
+        // a chooser only when there is a choice; the sentence under it says which one is sized either way
+        focus.disableProperty().bind(Bindings.size(vm.characteristicIds()).lessThan(2));
         GridPane form = new GridPane();
         form.getStyleClass().add("pr-form");
         Label powerLabel = new Label("Wanted power (chance to show the goal if the process is as expected)");
         powerLabel.setLabelFor(power);
-        form.addRow(0, powerLabel, power, spinner);
+        Label focusLabel = new Label(SizingMessage.SIZED_FOR.format());
+        focusLabel.setLabelFor(focus);
+        form.addRow(0, focusLabel, focus);
+        form.addRow(1, powerLabel, power, spinner);
+        Label sizedFor = dev.proofrun.app.shell.IndexTooltips.follow(note("sizing-for", "pr-note"));
+        sizedFor.textProperty().bind(vm.sizedForBinding());
 
         table.setId("designs");
-        table.setItems(vm.rows());
-        // two-line column headers; as tall as the candidate designs, no empty rows to make and style
-        dev.proofrun.app.shell.Tables.fitToRows(table, 3.6, 3, 10);
+        table.setItems(vm.shownRows());
+        // grouped headers take two lines; as tall as the candidate designs, no empty rows to make and style
+        dev.proofrun.app.shell.Tables.fitToRows(table, 4.2, 3, 10);
         table.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY_FLEX_LAST_COLUMN);
-        table.getColumns().addAll(List.of(
-                column("n", "Subgroup size n: consecutive parts taken at each slot", r -> Integer.toString(r.subgroupSize())),
-                column("k", "Number of subgroups k", r -> Integer.toString(r.subgroups())),
-                column("N", "Readings N = n·k", r -> Integer.toString(r.readings())),
-                column("Power", "Chance that grading returns 'demonstrated' when the process is as expected: the lower "
-                        + "bound reaches the required minimum and no check (shape, stability, lost subgroups) voids "
-                        + "the study", r -> SizingViewModel.fmt(r.power())),
-                column("Bound alone", "Chance that the lower bound alone reaches the required minimum (no checks "
-                        + "counted)", r -> SizingViewModel.fmt(r.boundPower())),
-                column("ĉ* to pass", "ĉ*: the smallest estimated index whose lower bound reaches the "
-                        + "required minimum, at the expected centring", r -> SizingViewModel.fmt(r.criticalEstimate())),
-                column("ν", "Degrees of freedom of the within-sigma estimate (effective, after Patnaik 1950, for "
-                        + "R̄/d2, S̄/c4 and moving range)", r -> String.format(java.util.Locale.ROOT, "%.1f", r.degreesOfFreedom())),
-                column("Set by", "What fixed k: the wanted power, or a practice floor (25 subgroups, 100 readings)",
-                        r -> r.limitedBy().token()),
-                column("Called unstable\nwhen stable", "Chance that grading calls a stable process unstable (and the "
-                        + "study not valid), with grading's own stability rule at this number of subgroups",
-                        r -> SizingViewModel.fmt(r.falseAlarm())),
-                column("Called unstable\nafter a shift", "Chance that grading calls the process unstable when its mean "
-                        + "moves by δ·σ_w for the second half of the study (grading's own rule)",
-                        r -> SizingViewModel.fmt(r.detection())),
-                column("Some rule fires\nstable / shift", "Chance that some chart rule fires at least once in the "
-                        + "study (all eight run rules), on a stable process / after the shift: what a chart shows, "
-                        + "not what grading decides",
-                        r -> SizingViewModel.fmtOrDash(r.anySignalFalseAlarm().allRules()) + " / "
-                                + SizingViewModel.fmtOrDash(r.anySignalDetection().allRules()))));
-        // each row marks itself when it shows the recommended design, and again when the recommendation
-        // changes (a table refresh would remake every row and cell)
+        Map<String, TableColumn<SizingRow, String>> groups = new LinkedHashMap<>();
+        for (SizingColumn c : vm.columns()) {
+            TableColumn<SizingRow, String> column = column(c);
+            if (c.group().isEmpty()) {
+                table.getColumns().add(column);
+            } else {
+                TableColumn<SizingRow, String> group = groups.computeIfAbsent(c.group().get(), g -> {
+                    TableColumn<SizingRow, String> made = new TableColumn<>(g);
+                    table.getColumns().add(made);
+                    return made;
+                });
+                group.getColumns().add(column);
+            }
+        }
         table.setRowFactory(t -> new TableRow<>() {
-            private final InvalidationListener restyle = o -> mark();
-
-            {
-                vm.tableProperty().addListener(new WeakInvalidationListener(restyle));
-            }
-
             @Override
-            protected void updateItem(DesignRow r, boolean empty) {
+            protected void updateItem(SizingRow r, boolean empty) {
                 super.updateItem(r, empty);
-                mark();
-            }
-
-            private void mark() {
-                DesignRow r = getItem();
-                DesignTable dt = vm.tableProperty().get();
-                boolean recommended = !isEmpty() && r != null && dt != null
-                        && dt.recommended().subgroupSize() == r.subgroupSize();
+                boolean recommended = !empty && r != null && r.recommended();
                 if (recommended != getStyleClass().contains("pr-recommended")) {
                     if (recommended) {
                         getStyleClass().add("pr-recommended");
@@ -119,55 +105,83 @@ public final class SizingView implements StepView {
             }
         });
         table.getSelectionModel().selectedItemProperty().addListener((obs, was, now) -> {
-            if (now != null && (vm.chosenProperty().get() == null || vm.chosenProperty().get().subgroupSize() != now.subgroupSize())) {
-                vm.choose(now);
+            if (now != null) {
+                vm.choose(now.subgroupSize());
             }
         });
         vm.chosenProperty().addListener((obs, was, now) -> selectChosen(vm));
+        vm.shownRows().addListener((javafx.collections.ListChangeListener<SizingRow>) c -> selectChosen(vm));
 
-        Label reason = new Label();
-        reason.setId("design-reason");
-        reason.setWrapText(true);
-        reason.getStyleClass().add("pr-fine");
-        reason.textProperty().bind(Bindings.createStringBinding(() -> vm.tableProperty().get() == null ? ""
-                : "Recommended: " + vm.tableProperty().get().reason(), vm.tableProperty()));
-        Label cost = new Label();
-        cost.setId("design-cost");
-        cost.setWrapText(true);
+        Label reason = note("design-reason", "pr-fine");
+        reason.textProperty().bind(vm.reasonBinding());
+        Label cost = note("design-cost", null);
         cost.textProperty().bind(vm.costBinding());
-        Label together = new Label();
-        together.setId("design-together");
-        together.setWrapText(true);
+        Label together = note("design-together", null);
         together.textProperty().bind(vm.togetherProperty());
-        together.visibleProperty().bind(vm.togetherProperty().isNotEmpty());
-        together.managedProperty().bind(together.visibleProperty());
-        Label warnings = new Label();
-        warnings.setId("design-warnings");
-        warnings.setWrapText(true);
-        warnings.getStyleClass().add("pr-note");
-        warnings.textProperty().bind(Bindings.createStringBinding(() -> vm.tableProperty().get() == null ? ""
-                : String.join("\n", vm.tableProperty().get().warnings()), vm.tableProperty()));
+        showWhenSet(together);
+        Label shared = note("design-shared", null);
+        shared.textProperty().bind(vm.sharedLineProperty());
+        Button useShared = new Button(SizingMessage.USE_SHARED.format());
+        useShared.setId("use-shared");
+        useShared.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
+        useShared.disableProperty().bind(vm.sharedProperty().isNull());
+        useShared.setOnAction(e -> vm.useShared());
+        HBox sharedRow = new HBox(8, shared, useShared);
+        HBox.setHgrow(shared, Priority.ALWAYS);
+        sharedRow.visibleProperty().bind(vm.sharedLineProperty().isNotEmpty());
+        sharedRow.managedProperty().bind(sharedRow.visibleProperty());
+        Label warnings = note("design-warnings", "pr-note");
+        warnings.textProperty().bind(vm.warningsBinding());
 
-        vm.chosenTableProperty().addListener((obs, was, now) -> drawCurves(vm, now));
-        vm.designBinding().addListener((obs, was, now) -> drawCurves(vm, vm.chosenTableProperty().get()));
+        powerChart.show(vm.powerLinesProperty().get());
+        ocChart.show(vm.ocLinesProperty().get());
+        vm.powerLinesProperty().addListener((obs, was, now) -> powerChart.show(now));
+        vm.ocLinesProperty().addListener((obs, was, now) -> ocChart.show(now));
         HBox charts = new HBox(12, powerChart, ocChart);
         HBox.setHgrow(powerChart, Priority.ALWAYS);
         HBox.setHgrow(ocChart, Priority.ALWAYS);
 
-        Label hint = new Label("Pick a row to use another subgroup size; the line below says what it costs.");
+        Label hint = new Label(SizingMessage.HINT.format());
         hint.getStyleClass().add("pr-note");
-        VBox card = new VBox(form, refusal, table, hint, reason, cost, together, warnings);
+        hint.setWrapText(true);
+        VBox card = new VBox(form, sizedFor, refusal, table, hint, reason, cost, sharedRow, together, warnings);
         card.getStyleClass().add("pr-card");
         root.getChildren().addAll(card, charts);
     }
 
+    private static String shownFocus(SizingViewModel vm) {
+        String id = vm.focusId().get();
+        for (String s : vm.characteristicIds()) {
+            if (s.equalsIgnoreCase(id)) {
+                return s;
+            }
+        }
+        return vm.characteristicIds().isEmpty() ? null : vm.characteristicIds().get(0);
+    }
+
+    private static Label note(String id, String style) {
+        Label l = new Label();
+        l.setId(id);
+        l.setWrapText(true);
+        if (style != null) {
+            l.getStyleClass().add(style);
+        }
+        return l;
+    }
+
+    private static void showWhenSet(Label l) {
+        l.visibleProperty().bind(l.textProperty().isNotEmpty());
+        l.managedProperty().bind(l.visibleProperty());
+    }
+
     private void selectChosen(SizingViewModel vm) {
-        DesignRow c = vm.chosenProperty().get();
-        if (c == null) {
+        if (vm.chosenProperty().get() == null) {
             return;
         }
-        for (int i = 0; i < table.getItems().size(); i++) {
-            if (table.getItems().get(i).subgroupSize() == c.subgroupSize()) {
+        int n = vm.chosenProperty().get().subgroupSize();
+        List<SizingRow> items = table.getItems();
+        for (int i = 0; i < items.size(); i++) {
+            if (items.get(i).subgroupSize() == n) {
                 if (table.getSelectionModel().getSelectedIndex() != i) {
                     table.getSelectionModel().select(i);
                 }
@@ -176,51 +190,24 @@ public final class SizingView implements StepView {
         }
     }
 
-    private void drawCurves(SizingViewModel vm, DesignTable t) {
-        List<Line> power = new ArrayList<>();
-        List<Line> ocLines = new ArrayList<>();
-        if (t != null) {
-            DesignRow c = t.recommended();
-            List<PowerPoint> pc = t.powerCurve();
-            if (!pc.isEmpty()) {
-                power.add(new Line("power, n = " + c.subgroupSize(), Pen.CURVE,
-                        pc.stream().mapToDouble(PowerPoint::subgroups).toArray(),
-                        pc.stream().mapToDouble(PowerPoint::power).toArray()));
-                double wanted = vm.request().map(r -> r.power()).orElse(0.9);
-                power.add(Line.horizontal("wanted " + SizingViewModel.fmt(wanted), Pen.WANTED, wanted,
-                        pc.get(0).subgroups(), pc.get(pc.size() - 1).subgroups()));
-                // the k the plan will use: the plan file's own k until a row is picked, else the row's
-                int k = vm.design().map(d -> d.subgroups()).orElse(c.subgroups());
-                power.add(Line.vertical((k == c.subgroups() ? "chosen k = " : "plan's k = ") + k, Pen.CHOSEN, k));
-            }
-            List<OcPoint> oc = t.operatingCharacteristic();
-            if (!oc.isEmpty()) {
-                ocLines.add(new Line(c.subgroups() + " × " + c.subgroupSize(), Pen.CURVE,
-                        oc.stream().mapToDouble(OcPoint::trueIndex).toArray(),
-                        oc.stream().mapToDouble(OcPoint::probability).toArray()));
-                vm.request().ifPresent(r -> {
-                    ocLines.add(Line.vertical("required " + r.requirement().minimum(), Pen.WANTED, r.requirement().minimum()));
-                    ocLines.add(Line.vertical("expected " + SizingViewModel.fmt(r.expectation().index()), Pen.CHOSEN,
-                            r.expectation().index()));
-                });
-            }
-        }
-        powerChart.show(power);
-        ocChart.show(ocLines);
-    }
-
-    private static TableColumn<DesignRow, String> column(String title, String tip, Function<DesignRow, String> text) {
-        TableColumn<DesignRow, String> c = new TableColumn<>();
-        Label header = new Label(title);
-        header.setTooltip(new Tooltip(tip));
-        header.setWrapText(true);
-        c.setGraphic(header);
-        c.setSortable(false);
-        // a width of its own: the default width makes the skin measure every cell on the first showing
-        // (hundreds of ms on a loaded machine); the constrained policy spreads the columns anyway
-        c.setPrefWidth(dev.proofrun.app.shell.Em.of(7));
-        c.setCellValueFactory(cd -> new ReadOnlyStringWrapper(text.apply(cd.getValue())));
-        return c;
+    private static TableColumn<SizingRow, String> column(SizingColumn c) {
+        TableColumn<SizingRow, String> column = new TableColumn<>();
+        Label header = new Label(c.header());
+        Tooltip tip = new Tooltip(c.tip());
+        tip.setWrapText(true); // a long explanation wraps instead of running off the screen
+        tip.setMaxWidth(Em.of(28));
+        header.setTooltip(tip);
+        column.setGraphic(header);
+        column.setSortable(false);
+        // a width of its own: the default width makes the skin measure every cell on the first showing; the
+        // constrained policy spreads the columns anyway
+        column.setPrefWidth(Em.of(switch (c) {
+            case N, K -> 3;
+            case LIMITED_BY -> 8.5;
+            default -> 4.5;
+        }));
+        column.setCellValueFactory(cd -> new ReadOnlyStringWrapper(c.text(cd.getValue())));
+        return column;
     }
 
     @Override

@@ -1,17 +1,22 @@
 package dev.proofrun.app.sizing;
 
 import dev.proofrun.app.AppMessage;
+import dev.proofrun.app.chart.CurvePlot.Line;
 import dev.proofrun.app.goal.GoalViewModel;
 import dev.proofrun.app.session.Background;
+import dev.proofrun.app.session.CharacteristicDraft;
 import dev.proofrun.app.session.DraftField;
 import dev.proofrun.app.session.Numbers;
+import dev.proofrun.app.session.RowRequirement;
 import dev.proofrun.app.session.StudyDraft;
 import dev.proofrun.app.shell.StepViewModel;
 import dev.proofrun.design.Design;
 import dev.proofrun.design.DesignRequest;
 import dev.proofrun.design.DesignRow;
 import dev.proofrun.design.DesignTable;
-import dev.proofrun.design.StudyDesigner;
+import dev.proofrun.design.OcPoint;
+import dev.proofrun.design.Requirement;
+import dev.proofrun.design.SharedDesign;
 import dev.proofrun.stats.SigmaMethod;
 import dev.proofrun.text.UserException;
 import java.util.List;
@@ -31,11 +36,15 @@ import javafx.collections.FXCollections;
 import javafx.collections.ObservableList;
 
 /**
- * The design table, recomputed whenever an input changes: the request is built on the FX thread, the
- * designer runs in a JavaFX Task on a worker thread ({@link Background}), and only the latest request's answer is applied
- * (an older task is cancelled and its answer dropped). The user may pick a row other than the
- * recommended one; its cost against the recommendation is spelled out and its own power and OC curves
- * are computed the same way.
+ * The design table of one characteristic (the one in focus, which the step names and lets the user change),
+ * recomputed whenever an input changes: the request is built on the FX thread, the designer runs in a JavaFX
+ * Task on a worker thread ({@link Background}), and only the latest request's answer is applied (an older task
+ * is cancelled and its answer dropped). The user may pick a row other than the recommended one; its cost against
+ * the recommendation is spelled out ({@link SizingCost}). With several characteristics the powers of all at the
+ * chosen design and the one design for all are worked out beside it ({@link AllCharacteristics}).
+ *
+ * <p>The view gets display rows ({@link SizingRow}), column definitions ({@link SizingColumn}) and the charts'
+ * lines ({@link SizingCurves}) from here, all naming one design: the plan's k × n.
  */
 public final class SizingViewModel extends StepViewModel {
 
@@ -45,32 +54,49 @@ public final class SizingViewModel extends StepViewModel {
     private final ObjectProperty<DesignTable> table = new SimpleObjectProperty<>(this, "table");
     private final ObjectProperty<DesignTable> chosenTable = new SimpleObjectProperty<>(this, "chosenTable");
     private final ObservableList<DesignRow> rows = FXCollections.observableArrayList();
+    private final ObservableList<SizingRow> shownRows = FXCollections.observableArrayList();
     private final ObjectProperty<DesignRow> chosen = new SimpleObjectProperty<>(this, "chosen");
     private final BooleanProperty busy = new SimpleBooleanProperty(this, "busy", false);
     private final StringProperty refusal = new SimpleStringProperty(this, "refusal", "");
-    private final StringProperty together = new SimpleStringProperty(this, "together", "");
-    private Background.Job togetherJob;
-    private long togetherGeneration;
-    private Together togetherAsked;
+    private final ObjectProperty<List<Line>> powerLines = new SimpleObjectProperty<>(this, "powerLines", List.of());
+    private final ObjectProperty<List<Line>> ocLines = new SimpleObjectProperty<>(this, "ocLines", List.of());
+    private final ObservableList<String> ids = FXCollections.observableArrayList();
+    private final StringBinding sizedFor;
+    private final StringBinding reason;
+    private final StringBinding warnings;
+    private final AllCharacteristics all;
     private final StringBinding cost;
     private final ObjectBinding<Optional<Design>> designBinding;
     private final Background background;
     private Background.Job running;
     private long generation;
-    private KeptPower keptPower;
+    private SizingCost.KeptPower keptPower;
+    private SizingCurves.PlanCurve planCurve;
 
     public SizingViewModel(StudyDraft draft, GoalViewModel goal, Background background) {
         this.draft = draft;
         this.background = background;
         this.goal = goal;
+        this.all = new AllCharacteristics(background);
         request = Bindings.createObjectBinding(this::buildRequest, goal.requirementBinding(), goal.expectationBinding(),
                 goal.focusBinding(), draft.field(DraftField.POWER), draft.characteristics());
         request.addListener((obs, was, now) -> recompute());
         draft.field(DraftField.CHOSEN_SUBGROUP_SIZE).addListener((obs, was, now) -> recompute());
-        cost = Bindings.createStringBinding(this::describeCost, chosen, table, chosenTable, draft.field(DraftField.CHOSEN_SUBGROUPS));
+        cost = Bindings.createStringBinding(() -> SizingCost.describe(chosen.get(), table.get(), chosenTable.get(),
+                keptSubgroups(), keptPower, all.shared().get(), all.driver(), focusName()), chosen, table, chosenTable,
+                draft.field(DraftField.CHOSEN_SUBGROUPS), all.shared());
         designBinding = Bindings.createObjectBinding(this::design, chosen, draft.field(DraftField.CHOSEN_SUBGROUPS));
-        designBinding.addListener((obs, was, now) -> recomputeTogether());
-        draft.editsProperty().addListener((obs, was, now) -> recomputeTogether());
+        designBinding.addListener((obs, was, now) -> {
+            updateAll();
+            drawCurves();
+        });
+        draft.editsProperty().addListener((obs, was, now) -> updateAll());
+        // the list fires on any cell's edit too (its extractor), so an id typed shows in the chooser
+        draft.characteristics().addListener((javafx.collections.ListChangeListener<CharacteristicDraft>) c -> refreshIds());
+        refreshIds();
+        sizedFor = Bindings.createStringBinding(() -> SizingCost.sizedFor(focusName(), request.get()), request, goal.focusBinding());
+        reason = Bindings.createStringBinding(() -> table.get() == null ? "" : "Recommended: " + table.get().reason(), table);
+        warnings = Bindings.createStringBinding(() -> table.get() == null ? "" : String.join("\n", table.get().warnings()), table);
         bindMissing(Bindings.createStringBinding(() -> {
             if (goal.requirementBinding().get().isEmpty() || goal.expectationBinding().get().isEmpty()) {
                 return AppMessage.SIZING_GOAL_FIRST.format();
@@ -106,15 +132,26 @@ public final class SizingViewModel extends StepViewModel {
         return draft.field(DraftField.POWER);
     }
 
+    /** The core's rows of the table. */
     public ObservableList<DesignRow> rows() {
         return rows;
+    }
+
+    /** The rows as the table shows them. */
+    public ObservableList<SizingRow> shownRows() {
+        return shownRows;
+    }
+
+    /** The table's columns, in order. */
+    public List<SizingColumn> columns() {
+        return List.of(SizingColumn.values());
     }
 
     public ObjectProperty<DesignTable> tableProperty() {
         return table;
     }
 
-    /** The table computed for the chosen subgroup size alone (its power and OC curves). */
+    /** The table computed for the chosen subgroup size alone (its power curve). */
     public ObjectProperty<DesignTable> chosenTableProperty() {
         return chosenTable;
     }
@@ -136,19 +173,64 @@ public final class SizingViewModel extends StepViewModel {
         return cost;
     }
 
+    /** The designer's reason for its recommendation, empty without a table. */
+    public StringBinding reasonBinding() {
+        return reason;
+    }
+
+    /** The designer's warnings, one a line. */
+    public StringBinding warningsBinding() {
+        return warnings;
+    }
+
     /**
      * With several characteristics: the chance that each is demonstrated at the chosen design and that all
      * are (the product, taken as independent), as the core computes each power; empty with one.
      */
     public StringProperty togetherProperty() {
-        return together;
+        return all.together();
+    }
+
+    /** The line naming the one design for all characteristics and its driver; empty with one characteristic. */
+    public StringProperty sharedLineProperty() {
+        return all.sharedLine();
+    }
+
+    /** The one design for all characteristics, once worked out (null with one characteristic or before). */
+    public ObjectProperty<SharedDesign> sharedProperty() {
+        return all.shared();
+    }
+
+    /** The power chart's lines for the plan's design. */
+    public ObjectProperty<List<Line>> powerLinesProperty() {
+        return powerLines;
+    }
+
+    /** The OC chart's lines for the plan's design. */
+    public ObjectProperty<List<Line>> ocLinesProperty() {
+        return ocLines;
+    }
+
+    /** The ids of the characteristics, for the chooser of the one the table sizes. */
+    public ObservableList<String> characteristicIds() {
+        return ids;
+    }
+
+    /** The id of the characteristic the table sizes (empty = the first); the Goal step's focus. */
+    public StringProperty focusId() {
+        return draft.field(DraftField.FOCUS);
+    }
+
+    /** One sentence: which characteristic the table sizes, its requirement and expectation. */
+    public StringBinding sizedForBinding() {
+        return sizedFor;
     }
 
     public Optional<DesignRequest> request() {
         return request.get();
     }
 
-    /** The chosen design as the plan keeps it: the chosen row, or its size with the k kept from the plan file. */
+    /** The chosen design as the plan keeps it: the chosen row, or its size with the k kept (plan file, shared design). */
     public Optional<Design> design() {
         DesignRow r = chosen.get();
         Optional<DesignRequest> q = request.get();
@@ -165,7 +247,7 @@ public final class SizingViewModel extends StepViewModel {
         return designBinding;
     }
 
-    /** The k kept from the plan file, when there is one (at least 2). */
+    /** The k kept from the plan file or the shared design, when there is one (at least 2). */
     public Optional<Integer> keptSubgroups() {
         OptionalDouble k = Numbers.parse(draft.text(DraftField.CHOSEN_SUBGROUPS));
         return k.isPresent() && k.getAsDouble() >= 2 ? Optional.of((int) k.getAsDouble()) : Optional.empty();
@@ -173,30 +255,51 @@ public final class SizingViewModel extends StepViewModel {
 
     /** Picks the row with this subgroup size (the choice survives recomputation). */
     public void choose(DesignRow row) {
-        if (row == null) {
+        choose(row == null ? 0 : row.subgroupSize());
+    }
+
+    /** Picks the row with subgroup size n (0: none). */
+    public void choose(int n) {
+        DesignTable t = table.get();
+        if (n < 1 || (chosen.get() != null && chosen.get().subgroupSize() == n)) {
+            return;
+        }
+        boolean recommended = t != null && t.recommended().subgroupSize() == n;
+        draft.field(DraftField.CHOSEN_SUBGROUPS).set("");
+        draft.field(DraftField.CHOSEN_SUBGROUP_SIZE).set(recommended ? "" : Integer.toString(n));
+    }
+
+    /**
+     * Takes the one design for all characteristics, as {@code plan new} would write it: its subgroup size as the
+     * chosen row, its k (the driver's) as the plan's k.
+     */
+    public void useShared() {
+        SharedDesign d = all.shared().get();
+        if (d == null) {
             return;
         }
         DesignTable t = table.get();
-        boolean recommended = t != null && t.recommended().subgroupSize() == row.subgroupSize();
-        if (chosen.get() != null && chosen.get().subgroupSize() == row.subgroupSize()) {
-            return;
-        }
-        draft.field(DraftField.CHOSEN_SUBGROUPS).set("");
-        draft.field(DraftField.CHOSEN_SUBGROUP_SIZE).set(recommended ? "" : Integer.toString(row.subgroupSize()));
+        boolean recommended = t != null && t.recommended().subgroupSize() == d.subgroupSize();
+        draft.field(DraftField.CHOSEN_SUBGROUPS).set(Integer.toString(d.subgroups()));
+        draft.field(DraftField.CHOSEN_SUBGROUP_SIZE).set(recommended ? "" : Integer.toString(d.subgroupSize()));
+        recompute();
+    }
+
+    private Optional<Requirement> focusRequirement() {
+        return goal.focusBinding().get().flatMap(row -> RowRequirement.of(row, goal.requirementBinding().get()));
     }
 
     private Optional<DesignRequest> buildRequest() {
-        Optional<dev.proofrun.design.Requirement> req = goal.requirementBinding().get();
+        Optional<Requirement> req = focusRequirement();
         Optional<dev.proofrun.design.Expectation> exp = goal.expectationBinding().get();
-        if (req.isEmpty() || exp.isEmpty() || goal.focusBinding().get().isEmpty()
+        if (goal.requirementBinding().get().isEmpty() || req.isEmpty() || exp.isEmpty()
                 || goal.focusBinding().get().get().limits().isEmpty()) {
             return Optional.empty();
         }
         OptionalDouble p = Numbers.parse(draft.text(DraftField.POWER));
-        double power = p.isPresent() ? p.getAsDouble() : DesignRequest.DEFAULT_POWER;
         try {
             DesignRequest r = DesignRequest.of(goal.focusBinding().get().get().limits().get().sides(), req.get(), exp.get());
-            return Optional.of(p.isPresent() ? r.withPower(power) : r);
+            return Optional.of(p.isPresent() ? r.withPower(p.getAsDouble()) : r);
         } catch (UserException | IllegalArgumentException e) {
             refusal.set(e.getMessage());
             return Optional.empty();
@@ -212,37 +315,17 @@ public final class SizingViewModel extends StepViewModel {
         Optional<DesignRequest> q = request.get();
         if (q.isEmpty()) {
             busy.set(false);
-            table.set(null);
-            chosenTable.set(null);
-            rows.clear();
-            chosen.set(null);
+            clear();
             return;
         }
         refusal.set("");
         DesignRequest req = q.get();
-        int wanted = Numbers.parse(draft.text(DraftField.CHOSEN_SUBGROUP_SIZE)).isPresent()
-                ? (int) Numbers.parse(draft.text(DraftField.CHOSEN_SUBGROUP_SIZE)).getAsDouble() : 0;
+        OptionalDouble size = Numbers.parse(draft.text(DraftField.CHOSEN_SUBGROUP_SIZE));
+        int wanted = size.isPresent() ? (int) size.getAsDouble() : 0;
         Optional<Integer> kept = keptSubgroups();
         long mine = ++generation;
         busy.set(true);
-        running = background.submit(() -> {
-            DesignTable all = StudyDesigner.design(req);
-            DesignTable own = null;
-            if (wanted > 0 && wanted != all.recommended().subgroupSize()
-                    && all.rows().stream().anyMatch(r -> r.subgroupSize() == wanted)) {
-                own = StudyDesigner.design(req.withSubgroupSizes(List.of(wanted)));
-            }
-            int n = (own != null ? own : all).recommended().subgroupSize();
-            KeptPower keptPower = null;
-            if (kept.isPresent()) {
-                try {
-                    keptPower = new KeptPower(n, kept.get(), StudyDesigner.power(req, n, kept.get()));
-                } catch (IllegalArgumentException outsideTheDesignersRange) {
-                    keptPower = null; // said as "power not computed for this k"
-                }
-            }
-            return new Answer(all, own, keptPower);
-        }, answer -> {
+        running = background.submit(() -> SizingJob.compute(req, wanted, kept), answer -> {
             if (mine == generation) {
                 apply(answer);
             }
@@ -250,171 +333,57 @@ public final class SizingViewModel extends StepViewModel {
             if (mine == generation) {
                 busy.set(false);
                 refusal.set(AppMessage.SIZING_FAILED.failure(ex));
-                table.set(null);
-                rows.clear();
-                chosen.set(null);
+                clear();
             }
         });
     }
 
-    /** What the "all characteristics" line is computed from: the design and one request per characteristic. */
-    private record Together(int n, int k, double power, List<String> ids, List<DesignRequest> requests,
-            List<String> leftOut) {
+    private void clear() {
+        table.set(null);
+        chosenTable.set(null);
+        rows.clear();
+        shownRows.clear();
+        chosen.set(null);
+        drawCurves();
     }
 
-    /**
-     * Starts the powers of all characteristics at the chosen design (on the worker, after any design table
-     * asked for before); the latest inputs win. Nothing is computed again for the same inputs.
-     */
-    private void recomputeTogether() {
-        Optional<Design> d = designBinding.get();
-        Optional<dev.proofrun.design.Requirement> req = goal.requirementBinding().get();
-        if (d.isEmpty() || req.isEmpty() || draft.characteristics().size() < 2) {
-            togetherAsked = null;
-            together.set("");
-            return;
-        }
-        OptionalDouble p = Numbers.parse(draft.text(DraftField.POWER));
-        double power = p.isPresent() ? p.getAsDouble() : DesignRequest.DEFAULT_POWER;
-        List<String> ids = new java.util.ArrayList<>();
-        List<DesignRequest> requests = new java.util.ArrayList<>();
-        List<String> leftOut = new java.util.ArrayList<>();
-        for (dev.proofrun.app.session.CharacteristicDraft row : draft.characteristics()) {
-            Optional<dev.proofrun.design.Expectation> e = goal.expectationFor(row);
-            if (e.isEmpty() || row.limits().isEmpty()) {
-                leftOut.add(row.id());
-                continue;
-            }
-            try {
-                requests.add(DesignRequest.of(row.limits().get().sides(), req.get(), e.get()).withPower(power));
-                ids.add(row.id());
-            } catch (UserException | IllegalArgumentException refused) {
-                leftOut.add(row.id());
-            }
-        }
-        Together asked = new Together(d.get().subgroupSize(), d.get().subgroups(), power, List.copyOf(ids),
-                List.copyOf(requests), List.copyOf(leftOut));
-        if (asked.equals(togetherAsked)) {
-            return;
-        }
-        togetherAsked = asked;
-        if (togetherJob != null) {
-            togetherJob.cancel();
-        }
-        long mine = ++togetherGeneration;
-        togetherJob = background.submit(() -> {
-            double[] powers = new double[asked.requests().size()];
-            for (int i = 0; i < powers.length; i++) {
-                try {
-                    powers[i] = StudyDesigner.power(asked.requests().get(i), asked.n(), asked.k());
-                } catch (IllegalArgumentException | UserException outsideTheDesignersRange) {
-                    powers[i] = Double.NaN;
-                }
-            }
-            return powers;
-        }, powers -> {
-            if (mine == togetherGeneration) {
-                together.set(togetherText(asked, powers));
-            }
-        }, ex -> {
-            if (mine == togetherGeneration) {
-                together.set("");
-            }
-        });
-    }
-
-    /** The line for these powers: each characteristic's, their product, and who falls short of the wanted power. */
-    private static String togetherText(Together t, double[] powers) {
-        if (powers.length == 0) {
-            return "";
-        }
-        StringBuilder each = new StringBuilder();
-        StringBuilder shortOf = new StringBuilder();
-        double all = 1;
-        for (int i = 0; i < powers.length; i++) {
-            each.append(i == 0 ? "" : ", ").append(t.ids().get(i)).append(' ').append(fmtOrDash(powers[i]));
-            all *= powers[i];
-            if (!(powers[i] >= t.power())) {
-                shortOf.append(shortOf.length() == 0 ? "" : ", ").append(t.ids().get(i));
-            }
-        }
-        String line = AppMessage.SIZING_TOGETHER.format(powers.length + t.leftOut().size(), t.k(), t.n(), each, fmtOrDash(all));
-        if (shortOf.length() > 0) {
-            line += AppMessage.SIZING_TOGETHER_SHORT.format(fmt(t.power()), shortOf);
-        }
-        if (!t.leftOut().isEmpty()) {
-            line += AppMessage.SIZING_TOGETHER_LEFT_OUT.format(String.join(", ", t.leftOut()));
-        }
-        return line;
-    }
-
-    /** The power of the k kept from the plan file, at subgroup size n, as the core computes it. */
-    private record KeptPower(int n, int k, double power) {
-    }
-
-    /** What one background computation answers. */
-    private record Answer(DesignTable all, DesignTable own, KeptPower kept) {
-    }
-
-    private void apply(Answer answer) {
-        DesignTable all = answer.all();
-        table.set(all);
-        rows.setAll(all.rows());
-        DesignRow pick = all.recommended();
-        DesignTable own = all;
-        if (answer.own() != null) {
-            pick = answer.own().recommended();
-            own = answer.own();
-        }
+    private void apply(SizingJob.Answer answer) {
+        DesignTable every = answer.all();
         keptPower = answer.kept();
+        planCurve = answer.curve();
+        table.set(every);
+        rows.setAll(every.rows());
+        shownRows.setAll(every.rows().stream()
+                .map(r -> SizingRow.of(r, r.subgroupSize() == every.recommended().subgroupSize())).toList());
+        DesignTable own = answer.own() != null ? answer.own() : every;
         chosenTable.set(own);
-        chosen.set(pick);
+        chosen.set(own.recommended());
         busy.set(false);
+        drawCurves();
     }
 
-    private String describeCost() {
-        DesignRow c = chosen.get();
-        DesignTable t = table.get();
-        if (c == null || t == null) {
-            return "";
-        }
-        DesignRow r = t.recommended();
-        Optional<Integer> kept = keptSubgroups();
-        if (kept.isPresent() && kept.get() != c.subgroups()) {
-            DesignTable own = chosenTable.get();
-            KeptPower computed = keptPower;
-            String power = computed != null && computed.n() == c.subgroupSize() && computed.k() == kept.get()
-                    ? AppMessage.SIZING_POWER_AT.format(fmt(computed.power())) : keptPower(own, kept.get());
-            return AppMessage.SIZING_KEPT.format(kept.get(), c.subgroupSize(), kept.get() * c.subgroupSize(),
-                    power, c.subgroups(), fmt(c.power()));
-        }
-        if (c.subgroupSize() == r.subgroupSize()) {
-            return AppMessage.SIZING_RECOMMENDED_CHOSEN.format(c.subgroups(), c.subgroupSize(), c.readings(), c.power());
-        }
-        int extra = c.readings() - r.readings();
-        return AppMessage.SIZING_OTHER_CHOSEN.format(c.subgroups(), c.subgroupSize(), c.readings(),
-                extra >= 0 ? "+" + extra : Integer.toString(extra), r.readings(), c.power(), r.power(),
-                fmtOrDash(c.falseAlarm()), fmtOrDash(r.falseAlarm()));
+    private void updateAll() {
+        OptionalDouble p = Numbers.parse(draft.text(DraftField.POWER));
+        all.update(draft.characteristics(), goal.requirementBinding().get(), goal::expectationFor,
+                p.isPresent() ? p.getAsDouble() : DesignRequest.DEFAULT_POWER, designBinding.get());
     }
 
-    /**
-     * The power of k subgroups read off the core's power curve: its value when the curve has a point at k,
-     * else the values of the neighbouring points (power grows with k), else "not computed".
-     */
-    static String keptPower(DesignTable own, int k) {
-        if (own == null || own.powerCurve().isEmpty()) {
-            return AppMessage.SIZING_POWER_UNKNOWN.format();
+    private void drawCurves() {
+        Optional<Design> d = design();
+        List<OcPoint> oc = SizingCurves.ocOf(d, chosenTable.get(), planCurve);
+        powerLines.set(SizingCurves.power(chosenTable.get(), d, request.get()));
+        ocLines.set(SizingCurves.oc(oc, d, request.get()));
+    }
+
+    private void refreshIds() {
+        List<String> now = draft.characteristics().stream().map(CharacteristicDraft::id).toList();
+        if (!now.equals(ids)) {
+            ids.setAll(now);
         }
-        OptionalDouble at = own.powerCurve().stream().filter(p -> p.subgroups() == k).mapToDouble(p -> p.power()).findFirst();
-        if (at.isPresent()) {
-            return AppMessage.SIZING_POWER_AT.format(fmt(at.getAsDouble()));
-        }
-        OptionalDouble below = own.powerCurve().stream().filter(p -> p.subgroups() < k).mapToDouble(p -> p.power()).max();
-        OptionalDouble above = own.powerCurve().stream().filter(p -> p.subgroups() > k).mapToDouble(p -> p.power()).min();
-        if (below.isPresent() && above.isPresent()) {
-            return AppMessage.SIZING_POWER_BETWEEN.format(fmt(below.getAsDouble()), fmt(above.getAsDouble()));
-        }
-        return AppMessage.SIZING_POWER_UNKNOWN.format();
+    }
+
+    private String focusName() {
+        return goal.focusBinding().get().map(CharacteristicDraft::id).orElse("");
     }
 
     /** "0.903", or "—" when the core has no value (NaN). */

@@ -1,17 +1,20 @@
 /**
- * Sample size: the design table of the characteristic in focus ({@code design.StudyDesigner}, in the
- * background), the OC and power curves ({@code app.chart.CurvePlot}), and the cost of a picked row against the
- * recommendation. The view only binds and draws; the view-model holds the state, validates, and is the only
- * caller of the core.
+ * Sample size: the design table of the characteristic in focus ({@code design.StudyDesigner}, in the background,
+ * {@link dev.proofrun.app.sizing.SizingJob}), named and chosen on the step and sized with the row's own
+ * requirement; the OC and power curves ({@code app.chart.CurvePlot}, lines from
+ * {@link dev.proofrun.app.sizing.SizingCurves}); the cost of a picked row against the recommendation
+ * ({@link dev.proofrun.app.sizing.SizingCost}). The view binds display rows ({@link dev.proofrun.app.sizing.SizingRow},
+ * {@link dev.proofrun.app.sizing.SizingColumn}: the command line's words) and texts; the view-model holds the state,
+ * validates, and is the only caller of the core.
  *
  * Picking a row keeps its subgroup size across recomputation. A plan opened from a file keeps its own k
- * ({@code CHOSEN_SUBGROUPS}) until the user picks a row; its power is computed by the core for that k ({@code
- * StudyDesigner.power(request, n, k)}, in the same background job as the table), not read between points of
- * the power curve, and the curve's vertical line marks it ("plan's k"). With several characteristics a line
- * under the cost gives each one's power at the chosen design (with its own limits and expected index) and
- * their product — the chance that all are demonstrated, taken as independent, as {@code size
- * --characteristics} says it — and names those below the wanted power. The design follows the characteristic
- * in focus; {@code plan new} sizes all at once with {@code plan.CommonDesign}, which the wizard does not yet
- * offer.
+ * ({@code CHOSEN_SUBGROUPS}) until the user picks a row; its power and OC curve are computed by the core for that k
+ * ({@code StudyDesigner.power} and {@code operatingCharacteristic(request, n, k)}), so the table's highlighted row,
+ * the cost line and both charts name one design ("plan: k × n"). With several characteristics
+ * ({@link dev.proofrun.app.sizing.AllCharacteristics}) a line gives each one's power at the chosen design and their
+ * product (taken as independent, as {@code size --characteristics} says it), and the one design for all that
+ * {@code plan new} chooses ({@code design.SharedDesigner}: one n, k the largest any needs, the driver named) can be
+ * taken with one button. A characteristic planned with a skewed shape is sized with the normal model there, and the
+ * line says so (docs/decisions/sizing-step-per-characteristic.md).
  */
 package dev.proofrun.app.sizing;

@@ -1,0 +1,24 @@
+package dev.proofrun.app.part;
+
+import dev.proofrun.text.MessageKey;
+
+/** What the Part step says about the characteristics' requirement columns. */
+public enum PartMessage implements MessageKey {
+    REQUIREMENT_TIP("%s of this characteristic's requirement, as the command line's characteristics CSV has it;"
+            + " blank: the plan's, set on the Goal step"),
+    EXPECTED_CP_TIP("The expected Cp (Pp) of a process that is not centred, for a two-sided Cpk or Ppk requirement:"
+            + " at least the expected index; blank is centred (Cp = Cpk)"),
+    EXPECTED_TIP("The expected value c₁ of the required index (the value the study is sized for). For a two-sided"
+            + " Cpk or Ppk, the Expected Cp column says how far off centre: blank is centred (Cp = Cpk)");
+
+    private final String english;
+
+    PartMessage(String english) {
+        this.english = english;
+    }
+
+    @Override
+    public String english() {
+        return english;
+    }
+}
