@@ -1,0 +1,113 @@
+package dev.proofrun.grade;
+
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import dev.proofrun.design.DesignRequest;
+import dev.proofrun.design.Expectation;
+import dev.proofrun.design.Requirement;
+import dev.proofrun.design.Spending;
+import dev.proofrun.design.StagedDesign;
+import dev.proofrun.design.StagedDesigner;
+import dev.proofrun.design.Stages;
+import dev.proofrun.stats.IndexKind;
+import dev.proofrun.stats.SpecLimits;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Optional;
+import org.apache.commons.rng.UniformRandomProvider;
+import org.apache.commons.rng.sampling.distribution.ZigguratSampler;
+import org.apache.commons.rng.simple.RandomSource;
+import org.junit.jupiter.api.Tag;
+import org.junit.jupiter.api.Test;
+
+/**
+ * The staged designer's looks (what {@code plan new --stages} writes), graded look by look through the grader's
+ * own staged path ({@link Grader#look}, {@link CharacteristicGrader} with every gate, the bound at the look's
+ * confidence and the look's futility boundary): at the requirement (true Cpk = c₀) the whole study passes at
+ * most α plus two standard errors, centred and off centre (Cp 2.0); at the expected Cpk it passes at least the
+ * promised power less 0.02 and two standard errors. Fixed seeds.
+ */
+class DesignedStagesThroughGraderTest {
+
+    private static final double LSL = 9.9;
+    private static final double USL = 10.1;
+    private static final double C0 = 1.33;
+    private static final double C1 = 1.67;
+    private static final double ALPHA = 0.05;
+
+    @Test
+    void twoObrienFlemingLooksOfFiveKeepTheRiskAndThePower() {
+        check(Spending.OBRIEN_FLEMING, 2, 5, 600, 300, 61L);
+    }
+
+    @Test
+    @Tag("long")
+    void everyDesignKeepsTheRiskAndThePower() {
+        check(Spending.POCOCK, 2, 5, 2000, 800, 62L);
+        check(Spending.OBRIEN_FLEMING, 3, 5, 2000, 800, 63L);
+        check(Spending.POCOCK, 3, 5, 2000, 800, 64L);
+        check(Spending.OBRIEN_FLEMING, 2, 1, 2000, 800, 65L);
+    }
+
+    private static void check(Spending spending, int looks, int n, int atTarget, int atExpected, long seed) {
+        DesignRequest request = DesignRequest.of(SpecLimits.Sides.TWO_SIDED, new Requirement(IndexKind.CPK, C0, 1 - ALPHA),
+                Expectation.centred(C1)).withPower(0.9).withSubgroupSizes(List.of(n));
+        StagedDesign design = StagedDesigner.design(request, n, looks, spending);
+        Stages stages = design.stages();
+        int k = stages.last().subgroups();
+        GradingPlan plan = TestPlans.plan(n, k, new GradedCharacteristic("D1", "bore diameter", "mm",
+                SpecLimits.twoSided(LSL, USL), null, 0, Requirement.of(IndexKind.CPK, C0, 1 - ALPHA))).withStages(stages);
+        double mid = (LSL + USL) / 2;
+        double sdCentred = (USL - LSL) / (6 * C0);
+        double sdOff = (USL - LSL) / (6 * 2.0); // Cp 2.0
+        double meanOff = USL - 3 * C0 * sdOff;  // Cpk 1.33
+        double se = Math.sqrt(ALPHA * (1 - ALPHA) / atTarget);
+        double centred = share(plan, stages, n, mid, sdCentred, atTarget, seed);
+        double off = share(plan, stages, n, meanOff, sdOff, atTarget, seed + 1000);
+        double power = share(plan, stages, n, mid, (USL - LSL) / (6 * C1), atExpected, seed + 2000);
+        double floor = design.power() - 0.02 - 2 * Math.sqrt(design.power() * (1 - design.power()) / atExpected);
+        System.out.printf(Locale.ROOT, "designed-stages %s %d looks at %s of %d: at c0 centred %.4f, off centre %.4f"
+                + " (limit %.4f, %d studies); at c1 %.4f (promised %.4f, floor %.4f, %d studies)%n", spending.token(),
+                looks, stages.looks().stream().map(l -> String.valueOf(l.subgroups())).toList(), n, centred, off,
+                ALPHA + 2 * se, atTarget, power, design.power(), floor, atExpected);
+        assertTrue(centred <= ALPHA + 2 * se, "false passes centred " + centred);
+        assertTrue(off <= ALPHA + 2 * se, "false passes off centre " + off);
+        assertTrue(power >= floor, "power " + power + " below the promise " + design.power());
+    }
+
+    /** The share of simulated studies the grader calls demonstrated at some look. */
+    private static double share(GradingPlan plan, Stages stages, int n, double mean, double sd, int studies, long seed) {
+        GradedCharacteristic gc = plan.characteristics().get(0);
+        int k = stages.last().subgroups();
+        UniformRandomProvider rng = RandomSource.XO_RO_SHI_RO_128_PP.create(seed);
+        ZigguratSampler.NormalizedGaussian g = ZigguratSampler.NormalizedGaussian.of(rng);
+        int passed = 0;
+        for (int s = 0; s < studies; s++) {
+            List<double[]> all = new ArrayList<>(k);
+            for (int i = 0; i < k; i++) {
+                double[] x = new double[n];
+                for (int j = 0; j < n; j++) {
+                    x[j] = mean + sd * g.sample();
+                }
+                all.add(x);
+            }
+            for (int j = 0; j < stages.count(); j++) {
+                int m = stages.looks().get(j).subgroups();
+                GradedLook look = Grader.look(plan, m);
+                List<String> slots = plan.slots().subList(0, m).stream().map(PlannedSlot::id).toList();
+                Completeness c = new Completeness(m, n, m, 0, 0, (long) n * m, 0, 0,
+                        GradingPlan.defaultAllowedShortfall(m));
+                Verdict v = CharacteristicGrader.grade(gc, plan.design(), plan.interval(),
+                        new ReturnedData.Collection(c, all.subList(0, m), slots), Optional.of(look)).verdict();
+                if (v == Verdict.DEMONSTRATED) {
+                    passed++;
+                }
+                if (v != Verdict.CONTINUE) {
+                    break;
+                }
+            }
+        }
+        return passed / (double) studies;
+    }
+}
