@@ -77,6 +77,9 @@ public enum AppMessage implements MessageKey {
     SIZING_OTHER_CHOSEN("Chosen: %d subgroups of %d = %d readings (%s against the recommended %d); "
             + "power %.3f against %.3f; chance of a false alarm (3σ rule) %s against %s."),
     TIMING_BUSY("the schedule is being worked out"),
+    TIMING_NO_SCHEDULE("No schedule yet."),
+    TIMING_IDS_LEFT_OUT("Slot ids left out where slots lie close together at this width: %d (every slot is on the sheet)."),
+    TIMING_START_EMPTY("enter a start such as 2027-03-24 06:00"),
     TIMING_COUNT("the span needs a whole number of days or shifts, 1 or more"),
     TIMING_SEED("'%s' is not a whole number"),
     TIMING_ZONE("'%s' is not a time zone such as Europe/Berlin"),
