@@ -33,6 +33,9 @@ public enum AppMessage implements MessageKey {
     CLOSE_SAVE("Save the plan"),
     CLOSE_KEEP("Keep as a draft"),
     CLOSE_STAY("Stay"),
+    CLOSE_NOT_SAVED("The plan was not saved and the window stays open: %s"),
+    CLOSE_NO_FILE("no file was chosen"),
+    CLOSE_SAVED("Saved into %s"),
     DIRTY_MARK("unsaved changes"),
 
     PART_NO_ROWS("add at least one characteristic"),
