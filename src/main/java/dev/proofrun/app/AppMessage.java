@@ -62,6 +62,10 @@ public enum AppMessage implements MessageKey {
     GOAL_EXPECTED_MISSING("give the expected %s for %s (in the Part table or here)"),
     GOAL_MEAN_SIGMA_BAD("give the expected mean and a sigma above zero"),
     GOAL_PILOT_MISSING("load the pilot readings"),
+    GOAL_PILOT_READING("Reading %s …"),
+    GOAL_DESIGNING_FOR("Designing for a true %s of %.3f%s"),
+    GOAL_OFF_CENTRE(" (Cp %.3f, off centre)"),
+    GOAL_CENTRED(" (centred)"),
     GOAL_PILOT_BAD("the pilot readings could not be used: %s"),
     SIZING_KEPT("Kept from the plan file: %d subgroups of %d = %d readings, %s. The smallest k that reaches the "
             + "wanted power with this size is %d (power %s); pick a row to use it."),
