@@ -56,6 +56,10 @@ public enum AppMessage implements MessageKey {
     PART_NAME_MISSING("name the part"),
     PART_IMPORTED("%d characteristics read from %s"),
 
+    NUMBER_WRONG_MARK("'%s' has a decimal comma, and the decimal mark is set to a point (1.33): retype it, or choose the comma on the Open step"),
+    DECIMAL_MARK_LABEL("Decimal mark in fields"),
+    DECIMAL_MARK_NOT_KEPT("The decimal mark could not be kept for the next start: %s"),
+    DECIMAL_MARK_LOCALE("this computer's language writes %s"),
     GOAL_MINIMUM_BAD("the required minimum must be a number above zero"),
     GOAL_CONFIDENCE_BAD("the confidence must be between 0.5 and 0.9999 (e.g. 0.95)"),
     GOAL_INDEX_SIDES("%s needs both limits, and %s has only one"),

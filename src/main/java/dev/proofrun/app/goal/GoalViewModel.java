@@ -90,7 +90,8 @@ public final class GoalViewModel extends StepViewModel {
         syncEnum(source, draft.field(DraftField.EXPECTATION_SOURCE), ExpectationSource::token, ExpectationSource::fromToken);
         ObservableList<CharacteristicDraft> rows = draft.characteristics();
         focus = Bindings.createObjectBinding(this::findFocus, rows, draft.field(DraftField.FOCUS));
-        Observable[] inputs = {rows, index, source, focus, base, pilot, draft.field(DraftField.MINIMUM), draft.field(DraftField.CONFIDENCE),
+        Observable[] inputs = {rows, index, source, focus, base, pilot, Numbers.decimalMarkProperty(), draft.editsProperty(),
+            draft.field(DraftField.MINIMUM), draft.field(DraftField.CONFIDENCE),
             draft.field(DraftField.EXPECTED_MEAN), draft.field(DraftField.EXPECTED_SIGMA)};
         requirement = Bindings.createObjectBinding(this::computeRequirement, inputs);
         expectation = Bindings.createObjectBinding(this::computeExpectation, inputs);
@@ -385,6 +386,16 @@ public final class GoalViewModel extends StepViewModel {
     }
 
     private String computeMissing() {
+        for (DraftField f : List.of(DraftField.MINIMUM, DraftField.CONFIDENCE, DraftField.EXPECTED_MEAN, DraftField.EXPECTED_SIGMA)) {
+            Optional<String> mark = Numbers.wrongMark(draft.text(f));
+            if (mark.isPresent()) {
+                return mark.get();
+            }
+        }
+        Optional<String> expectedMark = focus.get().flatMap(r -> Numbers.wrongMark(r.text(CharacteristicField.EXPECTED)));
+        if (expectedMark.isPresent()) {
+            return expectedMark.get();
+        }
         if (computeRequirement().isEmpty()) {
             OptionalDouble min = Numbers.parse(draft.text(DraftField.MINIMUM));
             return min.isEmpty() || !(min.getAsDouble() > 0) ? AppMessage.GOAL_MINIMUM_BAD.format() : AppMessage.GOAL_CONFIDENCE_BAD.format();

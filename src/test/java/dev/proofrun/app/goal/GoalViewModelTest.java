@@ -161,4 +161,20 @@ class GoalViewModelTest {
         assertEquals("Designing for a true Cpk of 1.800 (centred)", vm.expectationText().get());
         assertTrue(vm.tipFor("Cpk").length() > 10, vm.tipFor("Cpk"));
     }
+
+    @Test
+    void aDecimalCommaIsTakenWhereTheWindowSaysSoAndOtherwiseSaidToBeTheOtherMark() {
+        bore();
+        try {
+            draft.field(DraftField.MINIMUM).set("1,33");
+            assertEquals("'1,33' has a decimal comma, and the decimal mark is set to a point (1.33): retype it, "
+                    + "or choose the comma on the Open step", vm.missingProperty().get());
+            assertTrue(vm.requirementBinding().get().isEmpty());
+            dev.proofrun.app.session.Numbers.decimalMarkProperty().set(dev.proofrun.text.DecimalMark.COMMA);
+            assertEquals(1.33, vm.requirementBinding().get().orElseThrow().minimum(), 0, "checked again when the mark changes");
+            assertEquals("", vm.missingProperty().get());
+        } finally {
+            dev.proofrun.app.session.Numbers.decimalMarkProperty().set(dev.proofrun.text.DecimalMark.POINT);
+        }
+    }
 }
