@@ -112,7 +112,7 @@ final class Timeline extends Pane {
         double row = 3.4 * em;
         double top = 1.8 * em;
         double left = 8.5 * em;
-        double right = w - em;
+        double right = w - 1.8 * em; // room for half of the "24:00" centred on the right edge
         double h = top + rows * row + 2 * em;
         canvas.setWidth(w);
         canvas.setHeight(h);
