@@ -11,6 +11,7 @@ import dev.proofrun.app.part.PartViewModel;
 import dev.proofrun.app.session.AppHome;
 import dev.proofrun.app.session.Background;
 import dev.proofrun.app.session.Session;
+import dev.proofrun.app.shell.CloseSave;
 import dev.proofrun.app.shell.ShellView;
 import dev.proofrun.app.shell.ShellViewModel;
 import dev.proofrun.app.shell.StepView;
@@ -45,7 +46,7 @@ public final class Wizard {
         session = new Session(home);
         start = new StartViewModel(session, Background.fx("proofrun-open"));
         part = new PartViewModel(session.draft());
-        goal = new GoalViewModel(session.draft(), session.baseProperty());
+        goal = new GoalViewModel(session.draft(), session.baseProperty(), Background.fx("proofrun-pilot"));
         sizing = new SizingViewModel(session.draft(), goal, Background.fx("proofrun-design"));
         timing = new TimingViewModel(session.draft(), sizing.designBinding(), Background.fx("proofrun-schedule"));
         handout = new HandoutViewModel(session, goal, sizing, timing, Background.fx("proofrun-preview"),
@@ -61,6 +62,16 @@ public final class Wizard {
                 new GradingView(grading));
         view = new ShellView(shell, views);
         session.setPlanFileChooser(this::askWhere);
+        shell.setSaver(this::saveOnClose);
+    }
+
+    /** "Save the plan" on close: what the steps describe, into the plan file; false (and why) when it cannot be. */
+    private boolean saveOnClose() {
+        HandoutViewModel.Composed composed = handout.composedBinding().get();
+        String why = composed.problem().isEmpty() ? AppMessage.HANDOUT_EARLIER.format() : composed.problem();
+        CloseSave.Outcome o = CloseSave.save(session, handout.issuedNow().or(composed::plan), why);
+        shell.statusProperty().set(o.message());
+        return o.saved();
     }
 
     /** A save dialog over the window, opening at the suggested file (tests install their own answer). */
@@ -97,7 +108,7 @@ public final class Wizard {
 
     /** True while a step computes in the background, a plan file is read or written, or a report is made. */
     public boolean busy() {
-        return start.openingProperty().get()
+        return start.openingProperty().get() || goal.pilotLoadingProperty().get()
                 || sizing.busyProperty().get() || timing.busyProperty().get() || handout.busyProperty().get()
                 || handout.exportingProperty().get()
                 || handout.issuingProperty().get() || grading.busyProperty().get() || grading.reportingProperty().get();

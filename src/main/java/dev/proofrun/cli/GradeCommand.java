@@ -32,7 +32,24 @@ import picocli.CommandLine.Parameters;
  * not demonstrated, 2 for unusable input.
  */
 @Command(name = "grade", mixinStandardHelpOptions = true,
-        description = "Grade returned readings against their plan: completeness, stability, shape, capability, verdict.")
+        description = "Grade returned readings against their plan: completeness, stability, shape, capability, verdict.",
+        footer = {"",
+            "DATA in the fill-in form: the CSV or XLSX that 'sheet' writes, one row per",
+            "slot and characteristic, the readings in columns x1, x2 and on up to xn.",
+            "",
+            "DATA in a gauge's long form (CSV): one reading per row, with the header",
+            "  plan,slot,characteristic,taken,value",
+            "for example",
+            "  PR-2027-0311@0123456789ab,S01,D1,2027-03-01 06:03,22.004",
+            "  PR-2027-0311@0123456789ab,S01,D1,2027-03-01 06:03,22.006",
+            "The rows of one slot and characteristic, in file order, are its subgroup;",
+            "the time of its first row is the time it was taken. The plan and taken",
+            "columns may be left out; columns may come in any order, in any case.",
+            "",
+            "Cells are separated by ',' or ';' (whichever the header has more of). In a",
+            "';' file a comma is a decimal mark, in a ',' file only inside quotes; the",
+            "result says how many readings were read with a decimal comma. Thousands",
+            "separators are never read."})
 public final class GradeCommand implements Callable<Integer> {
 
     /** Exit code when --require-demonstrated and something is not demonstrated. */

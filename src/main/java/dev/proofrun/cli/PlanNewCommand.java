@@ -19,6 +19,7 @@ import dev.proofrun.plan.StudyPlan;
 import dev.proofrun.schedule.CalendarSyntax;
 import dev.proofrun.schedule.ProductionCalendar;
 import dev.proofrun.schedule.ProductionRate;
+import dev.proofrun.schedule.CalendarDefaults;
 import dev.proofrun.schedule.Spacing;
 import dev.proofrun.schedule.StudySpan;
 import dev.proofrun.stats.IndexKind;
@@ -169,7 +170,7 @@ public final class PlanNewCommand implements Callable<Integer> {
         long lotParts;
     }
 
-    @Option(names = "--spacing", defaultValue = "even", paramLabel = "even|random",
+    @Option(names = "--spacing", defaultValue = CalendarDefaults.SPACING_TOKEN, paramLabel = "even|random",
             description = "Even over the running time, or one random time in each interval (default ${DEFAULT-VALUE}).")
     String spacing;
     @Option(names = "--seed", paramLabel = "N", description = "Seed of the random spacing (default: a new one, stored in the plan).")
@@ -295,7 +296,7 @@ public final class PlanNewCommand implements Callable<Integer> {
     }
 
     private ProductionCalendar calendar() {
-        ZoneId z = zone == null ? ZoneId.systemDefault() : option("--zone", () -> ZoneId.of(zone));
+        ZoneId z = zone == null ? CalendarDefaults.zone() : option("--zone", () -> ZoneId.of(zone));
         if (rate != null && cycleSeconds != null) {
             throw new UserException(OptionMessage.BAD_VALUE, "--rate/--cycle-seconds", "give one of them, not both");
         }

@@ -1,5 +1,6 @@
 package dev.proofrun.cli;
 
+import dev.proofrun.design.DesignTerm;
 import dev.proofrun.design.DesignMessage;
 import dev.proofrun.design.DesignRequest;
 import dev.proofrun.design.SharedDesign;
@@ -93,7 +94,7 @@ final class SharedSize {
         int w = Math.max(6, characteristics.stream().mapToInt(c -> c.id().length()).max().orElse(0));
         out.println(SizeMessage.SHARED_HEADING.format(characteristics.size(), file));
         out.printf(Locale.ROOT, "   n     k      N  %-" + w + "s  %-13s lowest   called unstable    some rule fires%n",
-                "driver", "limited by");
+                "driver", DesignTerm.LIMITED_BY.english());
         out.printf(Locale.ROOT, "                   %" + w + "s  %13s  power   stable   shift    stable   shift%n", "", "");
         for (SharedDesign d : bySize()) {
             double lowest = d.powers().stream().mapToDouble(Double::doubleValue).min().orElseThrow();

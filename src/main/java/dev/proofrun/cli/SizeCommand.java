@@ -2,6 +2,7 @@ package dev.proofrun.cli;
 
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
+import dev.proofrun.design.DesignTerm;
 import dev.proofrun.design.ChartRisk;
 import dev.proofrun.design.DesignMessage;
 import dev.proofrun.design.DesignRequest;
@@ -314,7 +315,8 @@ public final class SizeCommand implements Callable<Integer> {
     }
 
     private void print(PrintWriter out, DesignTable t, DesignRequest request, StagedDesign staged) {
-        out.println("   n     k      N   power   bound    c*      df  limited by     called unstable   some rule fires");
+        out.printf(Locale.ROOT, "   n     k      N   power   bound  %6s  %6s  %-13s called unstable   some rule fires%n",
+                DesignTerm.CRITICAL.english(), DesignTerm.DF.english(), DesignTerm.LIMITED_BY.english());
         out.println("                          alone                                  stable   shift    stable   shift");
         for (DesignRow r : t.rows()) {
             out.printf(Locale.ROOT, "%s%3d %5d %6d  %6.3f  %6.3f  %6.3f  %6.1f  %-13s %6.3f  %6.3f    %6s  %6s%n",

@@ -38,6 +38,7 @@ final class CsvTable {
                 }
                 if (separator == 0) {
                     separator = CsvDialect.separator(line);
+                    handler.separator(separator);
                     int n = split(line, separator, cells, display, row);
                     if (n > cells.length) {
                         cells = ensure(cells, n);

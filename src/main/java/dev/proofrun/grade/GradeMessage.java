@@ -6,6 +6,8 @@ import dev.proofrun.text.MessageKey;
 public enum GradeMessage implements MessageKey {
     // the file as a whole (fatal: a UserException)
     FILE_UNREADABLE("cannot read the file: %s"),
+    DECIMAL_COMMA_READ("readings with a decimal comma, read as the decimal mark (never a thousands separator) in this %s: "
+            + "%d; the first, '%s', is %s"),
     UNSUPPORTED_FORMAT("unsupported file type '%s': use .csv or .xlsx"),
     NO_HEADER("no header row: expected plan,slot,characteristic,planned,taken,lot,operator,x1..xn,remark or plan,slot,characteristic,taken,value"),
     MISSING_COLUMN("the header has no column '%s'"),

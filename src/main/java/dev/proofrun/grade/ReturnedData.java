@@ -52,6 +52,13 @@ final class ReturnedData implements RowHandler {
     private final SlotReadings[] collected;
     private final Reach[] reach;
     private final ProblemLog log = new ProblemLog();
+    /** Readings written with a decimal comma: how many, and the first, said once as a note. */
+    private long decimalCommas;
+    private Location firstComma;
+    private String firstCommaText;
+    private double firstCommaValue;
+    private String layout = "workbook";
+    private boolean commaNoted;
     private final int n;
     private final java.time.LocalDate[] plannedDay;
     private final long[] windowBegin;
@@ -108,6 +115,11 @@ final class ReturnedData implements RowHandler {
     private static boolean readingColumn(String h) {
         // x1 .. x9999999: ASCII digits only, few enough that the number fits an int
         return h.length() > 1 && h.length() <= 8 && h.charAt(0) == 'x' && h.substring(1).chars().allMatch(c -> c >= '0' && c <= '9');
+    }
+
+    @Override
+    public void separator(char separator) {
+        layout = "'" + separator + "'-separated file";
     }
 
     @Override
@@ -248,6 +260,11 @@ final class ReturnedData implements RowHandler {
             col.spoiled[si] = true;
             log.add(Location.cell(display, row, name(column)), Severity.ERROR, id, GradeMessage.NOT_NUMERIC, Shown.cell(text));
             return;
+        }
+        if (text.indexOf(',') >= 0 && decimalCommas++ == 0) {
+            firstComma = Location.cell(display, row, name(column));
+            firstCommaText = text;
+            firstCommaValue = v;
         }
         GradedCharacteristic gc = plan.characteristics().get(ci);
         if (!reach[ci].contains(v)) {
@@ -401,6 +418,11 @@ final class ReturnedData implements RowHandler {
 
     /** All problems so far, in the order found, then the counts of those not listed. */
     List<Problem> problems() {
+        if (decimalCommas > 0 && !commaNoted) {
+            commaNoted = true;
+            log.add(firstComma, Severity.NOTE, null, GradeMessage.DECIMAL_COMMA_READ, layout, decimalCommas,
+                    Shown.cell(firstCommaText), Cells.brief(firstCommaValue));
+        }
         return log.all(display);
     }
 

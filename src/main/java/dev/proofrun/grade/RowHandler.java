@@ -27,4 +27,8 @@ interface RowHandler {
      * @param count how many cells the row has
      */
     void row(long row, String[] cells, int count);
+
+    /** The cell separator a text file was found to use ({@code ,} or {@code ;}), told before its header. */
+    default void separator(char separator) {
+    }
 }

@@ -48,4 +48,15 @@ class HelpTextTest {
             }
         }
     }
+
+    @Test
+    void gradeHelpDescribesTheGaugesLongFormAndTheDecimalRule() {
+        StringWriter out = new StringWriter();
+        assertEquals(0, ProofrunCommand.run(new PrintWriter(out, true), new PrintWriter(new StringWriter(), true), "grade", "--help"));
+        String help = out.toString();
+        for (String wanted : new String[] {"  plan,slot,characteristic,taken,value", "one reading per row",
+            "are its subgroup", "Thousands", "separators are never read."}) {
+            org.junit.jupiter.api.Assertions.assertTrue(help.contains(wanted), wanted + " in\n" + help);
+        }
+    }
 }

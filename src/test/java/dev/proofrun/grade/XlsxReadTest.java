@@ -58,10 +58,13 @@ class XlsxReadTest {
         assertEquals(10.0015, g.subgroups().get(0)[1], 0.0); // stored value, not the "10.00" the format shows
         assertEquals(9.999, g.subgroups().get(1)[0], 0.0);
         assertEquals(9.998, g.subgroups().get(1)[1], 0.0);
-        // 10.0015 is off the 0.001 resolution: flagged with its row and column, nothing else
-        assertEquals(1, r.problems().size(), r.problems().toString());
+        // 10.0015 is off the 0.001 resolution: flagged with its row and column; the text "9,998" is said as
+        // read with a decimal comma; nothing else
+        assertEquals(2, r.problems().size(), r.problems().toString());
         assertTrue(r.problems().get(0).toString().startsWith("returned.xlsx, row 2, column x2: warning: 10.0015 is not a multiple"),
                 r.problems().toString());
+        assertEquals("returned.xlsx, row 4, column x2: note: readings with a decimal comma, read as the decimal mark (never a "
+                + "thousands separator) in this workbook: 1; the first, '9,998', is 9.998", r.problems().get(1).toString());
         assertEquals(0, g.completeness().lateSubgroups());
     }
 

@@ -3,10 +3,8 @@ package dev.proofrun.app.goal;
 import dev.proofrun.app.session.CharacteristicDraft;
 import dev.proofrun.app.session.CharacteristicField;
 import dev.proofrun.app.session.ExpectationSource;
-import dev.proofrun.app.shell.IndexTip;
 import dev.proofrun.app.shell.IndexTooltips;
 import dev.proofrun.app.shell.StepView;
-import dev.proofrun.stats.IndexKind;
 import java.util.Optional;
 import javafx.beans.binding.Bindings;
 import javafx.collections.FXCollections;
@@ -28,44 +26,33 @@ import javafx.util.StringConverter;
 public final class GoalView implements StepView {
 
     private final VBox root = new VBox(12);
-    private final ComboBox<IndexKind> index = new ComboBox<>();
+    private final ComboBox<String> index = new ComboBox<>();
     private final VBox pilotBox = new VBox(6);
 
     public GoalView(GoalViewModel vm) {
         GridPane req = new GridPane();
         req.getStyleClass().add("pr-form");
         index.setId("index");
-        index.setItems(FXCollections.observableArrayList(vm.indices()));
-        index.valueProperty().bindBidirectional(vm.indexProperty());
-        index.setConverter(new StringConverter<>() {
-            @Override
-            public String toString(IndexKind k) {
-                return k == null ? "" : k.symbol();
-            }
-
-            @Override
-            public IndexKind fromString(String s) {
-                return IndexKind.fromToken(s);
-            }
-        });
+        index.setItems(FXCollections.observableArrayList(vm.indexSymbols()));
+        index.valueProperty().bindBidirectional(vm.indexSymbolProperty());
         index.setCellFactory(l -> new ListCell<>() {
             @Override
-            protected void updateItem(IndexKind k, boolean empty) {
-                super.updateItem(k, empty);
-                setText(empty || k == null ? null : k.symbol());
-                if (empty || k == null) {
+            protected void updateItem(String symbol, boolean empty) {
+                super.updateItem(symbol, empty);
+                setText(empty || symbol == null ? null : symbol);
+                if (empty || symbol == null) {
                     setTooltip(null);
                 } else if (getTooltip() == null) {
-                    setTooltip(IndexTooltips.tooltip(IndexTip.of(k).english()));
+                    setTooltip(IndexTooltips.tooltip(vm.tipFor(symbol)));
                 } else {
                     // the cell's own tooltip, not a new one on every update
-                    getTooltip().setText(IndexTip.of(k).english());
+                    getTooltip().setText(vm.tipFor(symbol));
                 }
             }
         });
         index.setTooltip(IndexTooltips.tooltip(""));
         index.getTooltip().textProperty().bind(Bindings.createStringBinding(
-                () -> vm.indexProperty().get() == null ? "" : IndexTip.of(vm.indexProperty().get()).english(), vm.indexProperty()));
+                () -> vm.tipFor(vm.indexSymbolProperty().get()), vm.indexSymbolProperty()));
         TextField min = field("minimum", vm.minimum());
         TextField conf = field("confidence", vm.confidence());
         req.addRow(0, mnemonic("_Index the customer asks for", index), index);
@@ -114,7 +101,8 @@ public final class GoalView implements StepView {
         valueForm.getStyleClass().add("pr-form");
         Label expectedLabel = IndexTooltips.follow(mnemonic("_Expected index", expected));
         expectedLabel.textProperty().bind(Bindings.createStringBinding(() -> "_Expected "
-                + (vm.indexProperty().get() == null ? "index" : vm.indexProperty().get().symbol()), vm.indexProperty()));
+                + (vm.indexSymbolProperty().get() == null || vm.indexSymbolProperty().get().isEmpty() ? "index"
+                        : vm.indexSymbolProperty().get()), vm.indexSymbolProperty()));
         valueForm.addRow(0, expectedLabel, expected);
         valueForm.visibleProperty().bind(vm.sourceProperty().isEqualTo(ExpectationSource.VALUE));
         valueForm.managedProperty().bind(valueForm.visibleProperty());
@@ -148,6 +136,7 @@ public final class GoalView implements StepView {
         Button load = new Button("_Load");
         load.setId("load-pilot");
         load.setOnAction(e -> vm.loadPilot(java.nio.file.Path.of(pilotFile.getText().trim())));
+        load.disableProperty().bind(vm.pilotLoadingProperty());
         Label pilotShown = new Label();
         pilotShown.setId("pilot-estimate");
         pilotShown.setWrapText(true);
@@ -167,12 +156,7 @@ public final class GoalView implements StepView {
         Label result = IndexTooltips.follow(new Label());
         result.setId("expectation");
         result.getStyleClass().add("pr-fine");
-        result.textProperty().bind(Bindings.createStringBinding(() -> vm.expectationBinding().get()
-                .map(e -> String.format(java.util.Locale.ROOT, "Designing for a true %s of %.3f%s", vm.indexProperty().get().symbol(),
-                        e.index(), e.potential().isPresent()
-                                ? String.format(java.util.Locale.ROOT, " (Cp %.3f, off centre, as the Part table's Expected Cp says)", e.potential().getAsDouble())
-                                : " (centred; an off-centre Cp is typed in the Part table's Expected Cp column)"))
-                .orElse(""), vm.expectationBinding(), vm.indexProperty()));
+        result.textProperty().bind(vm.expectationText());
         Label problem = new Label();
         problem.setId("goal-problem");
         problem.getStyleClass().add("pr-problem");

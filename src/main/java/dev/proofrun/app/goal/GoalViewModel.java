@@ -1,6 +1,7 @@
 package dev.proofrun.app.goal;
 
 import dev.proofrun.app.AppMessage;
+import dev.proofrun.app.session.Background;
 import dev.proofrun.app.session.CharacteristicDraft;
 import dev.proofrun.app.session.CharacteristicField;
 import dev.proofrun.app.session.DraftField;
@@ -12,28 +13,32 @@ import dev.proofrun.text.UserException;
 import java.util.ArrayList;
 import java.nio.file.Path;
 import java.util.OptionalInt;
+import dev.proofrun.app.session.PlanBridge;
+import dev.proofrun.app.session.StudyDraft;
+import dev.proofrun.app.shell.IndexTip;
+import dev.proofrun.app.shell.StepViewModel;
 import dev.proofrun.capability.CapabilityAnalysis;
 import dev.proofrun.capability.CapabilityResult;
-import dev.proofrun.readings.Readings;
+import dev.proofrun.design.Expectation;
+import dev.proofrun.design.Requirement;
 import dev.proofrun.readings.ReadingsCsv;
 import dev.proofrun.stats.BoundMethod;
 import dev.proofrun.stats.Confidence;
-import dev.proofrun.design.Requirement;
 import javafx.beans.property.SimpleStringProperty;
 import javafx.beans.value.ObservableValue;
-import dev.proofrun.app.session.StudyDraft;
-import dev.proofrun.app.shell.StepViewModel;
-import dev.proofrun.design.Expectation;
-import dev.proofrun.design.Requirement;
 import dev.proofrun.stats.IndexKind;
 import dev.proofrun.stats.SpecLimits;
 import java.util.List;
+import java.util.Locale;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import javafx.beans.Observable;
 import javafx.beans.binding.Bindings;
 import javafx.beans.binding.ObjectBinding;
+import javafx.beans.binding.StringBinding;
+import javafx.beans.property.BooleanProperty;
 import javafx.beans.property.ObjectProperty;
+import javafx.beans.property.SimpleBooleanProperty;
 import javafx.beans.property.SimpleObjectProperty;
 import javafx.beans.property.StringProperty;
 import javafx.collections.ObservableList;
@@ -42,6 +47,10 @@ import javafx.collections.ObservableList;
  * The requirement (index, minimum, confidence) and the expectation of the process for the characteristic
  * in focus. {@link #requirementBinding()} and {@link #expectationBinding()} are what the sizing step designs
  * for; both are empty while the inputs are not usable, and {@link #missingProperty()} then says why.
+ *
+ * <p>The view sees no core type: the index as its symbol ({@link #indexSymbolProperty()}), its tooltip
+ * ({@link #tipFor}), and the expectation as a sentence ({@link #expectationText()}). Pilot readings are read
+ * and analysed on the background worker ({@link #loadPilot}); the latest file asked for wins.
  */
 public final class GoalViewModel extends StepViewModel {
 
@@ -54,12 +63,24 @@ public final class GoalViewModel extends StepViewModel {
     private final ObjectBinding<Optional<Expectation>> expectation;
     private final ObjectProperty<CapabilityResult> pilot = new SimpleObjectProperty<>(this, "pilot");
     private final StringProperty pilotMessage = new SimpleStringProperty(this, "pilotMessage", "");
+    private final BooleanProperty pilotLoading = new SimpleBooleanProperty(this, "pilotLoading", false);
+    private final StringProperty indexSymbol = new SimpleStringProperty(this, "indexSymbol");
+    private final Background background;
+    private Background.Job pilotJob;
+    private long pilotGeneration;
 
-    private javafx.beans.binding.StringBinding unit;
+    private StringBinding unit;
 
+    /** For plain tests: pilot readings are read at once on the calling thread. */
     public GoalViewModel(StudyDraft draft, ObservableValue<StudyPlan> base) {
+        this(draft, base, Background.inline());
+    }
+
+    /** @param background reads and analyses pilot readings off the FX thread */
+    public GoalViewModel(StudyDraft draft, ObservableValue<StudyPlan> base, Background background) {
         this.draft = draft;
         this.base = base;
+        this.background = background;
         syncEnum(index, draft.field(DraftField.INDEX), IndexKind::token, t -> {
             try {
                 return IndexKind.fromToken(t);
@@ -70,11 +91,45 @@ public final class GoalViewModel extends StepViewModel {
         syncEnum(source, draft.field(DraftField.EXPECTATION_SOURCE), ExpectationSource::token, ExpectationSource::fromToken);
         ObservableList<CharacteristicDraft> rows = draft.characteristics();
         focus = Bindings.createObjectBinding(this::findFocus, rows, draft.field(DraftField.FOCUS));
-        Observable[] inputs = {rows, index, source, focus, base, pilot, draft.field(DraftField.MINIMUM), draft.field(DraftField.CONFIDENCE),
+        Observable[] inputs = {rows, index, source, focus, base, pilot, Numbers.decimalMarkProperty(), draft.editsProperty(),
+            draft.field(DraftField.MINIMUM), draft.field(DraftField.CONFIDENCE),
             draft.field(DraftField.EXPECTED_MEAN), draft.field(DraftField.EXPECTED_SIGMA)};
         requirement = Bindings.createObjectBinding(this::computeRequirement, inputs);
         expectation = Bindings.createObjectBinding(this::computeExpectation, inputs);
         bindMissing(Bindings.createStringBinding(this::computeMissing, inputs));
+        indexSymbol.set(index.get() == null ? "" : index.get().symbol());
+        index.addListener((obs, was, now) -> indexSymbol.set(now == null ? "" : now.symbol()));
+        indexSymbol.addListener((obs, was, now) -> indices().stream().filter(k -> k.symbol().equals(now))
+                .findFirst().ifPresent(index::set));
+    }
+
+    /** The symbols of {@link #indices()}, in that order: what the index list shows. */
+    public List<String> indexSymbols() {
+        return indices().stream().map(IndexKind::symbol).toList();
+    }
+
+    /** The required index by its symbol ("Cpk"), kept in step with {@link #indexProperty()}. */
+    public StringProperty indexSymbolProperty() {
+        return indexSymbol;
+    }
+
+    /** The tooltip of an index named by its symbol, empty for none. */
+    public String tipFor(String symbol) {
+        return indices().stream().filter(k -> k.symbol().equals(symbol)).findFirst()
+                .map(k -> IndexTip.of(k).english()).orElse("");
+    }
+
+    /** "Designing for a true Cpk of 1.800 (centred)", or empty while there is no expectation. */
+    public StringBinding expectationText() {
+        return Bindings.createStringBinding(() -> expectation.get()
+                .map(e -> AppMessage.GOAL_DESIGNING_FOR.format(index.get().symbol(), e.index(), e.potential().isPresent()
+                        ? AppMessage.GOAL_OFF_CENTRE.format(e.potential().getAsDouble()) : AppMessage.GOAL_CENTRED.format()))
+                .orElse(""), expectation, index);
+    }
+
+    /** True while pilot readings are read and analysed in the background. */
+    public BooleanProperty pilotLoadingProperty() {
+        return pilotLoading;
     }
 
     private static <E> void syncEnum(ObjectProperty<E> value, StringProperty text,
@@ -141,7 +196,7 @@ public final class GoalViewModel extends StepViewModel {
     }
 
     /** The unit of the characteristic in focus, in brackets with a leading space (" (mm)"), or "". */
-    public javafx.beans.binding.StringBinding unitBinding() {
+    public StringBinding unitBinding() {
         if (unit == null) {
             unit = Bindings.createStringBinding(() -> focusBinding().get()
                     .map(c -> c.text(CharacteristicField.UNIT).trim())
@@ -217,7 +272,7 @@ public final class GoalViewModel extends StepViewModel {
                     return Optional.empty();
                 }
                 OptionalDouble cp = r.indices().cp();
-                boolean offCentre = index.get().side() == dev.proofrun.stats.IndexKind.Side.NEAREST && cp.isPresent()
+                boolean offCentre = index.get().side() == IndexKind.Side.NEAREST && cp.isPresent()
                         && cp.getAsDouble() >= est.getAsDouble();
                 return Optional.of(offCentre ? Expectation.offCentre(est.getAsDouble(), cp.getAsDouble())
                         : Expectation.centred(est.getAsDouble()));
@@ -242,36 +297,54 @@ public final class GoalViewModel extends StepViewModel {
 
     /**
      * Reads pilot readings (the core's readings reader) and estimates the index with its lower bound (the
-     * core's capability analysis) against the limits of the characteristic in focus. The estimate becomes
-     * the expectation; the bound is shown beside it, because a pilot estimate is itself uncertain.
+     * core's capability analysis) against the limits of the characteristic in focus, on the background
+     * worker; the answer lands on the FX thread. The estimate becomes the expectation; the bound is shown
+     * beside it, because a pilot estimate is itself uncertain. A later call wins over an earlier one.
+     *
+     * @return true when the reading was started; false (and why, in {@link #pilotMessageProperty()}) when
+     *         the earlier steps do not allow it yet
      */
     public boolean loadPilot(Path file) {
         pilot.set(null);
+        if (pilotJob != null) {
+            pilotJob.cancel();
+        }
+        long mine = ++pilotGeneration;
         Optional<CharacteristicDraft> row = focus.get();
         Optional<Requirement> req = requirement.get();
         if (row.isEmpty() || row.get().limits().isEmpty() || req.isEmpty()) {
+            pilotLoading.set(false);
             pilotMessage.set(AppMessage.GOAL_PILOT_BAD.format(AppMessage.HANDOUT_EARLIER.format()));
             return false;
         }
-        try {
-            Readings readings = ReadingsCsv.read(file, OptionalInt.empty());
-            OptionalDouble nominal = row.get().number(CharacteristicField.NOMINAL);
-            CapabilityResult r = CapabilityAnalysis.of(readings.subgroups(), row.get().limits().get(),
-                    nominal.isPresent() ? nominal.getAsDouble() : null, null, req.get().confidence(), BoundMethod.EXACT);
-            draft.field(DraftField.PILOT_FILE).set(file.toString());
-            pilot.set(r);
-            IndexKind k = index.get();
-            OptionalDouble est = r.indices().of(k);
-            OptionalDouble low = lowerOf(r, k);
-            pilotMessage.set(AppMessage.GOAL_PILOT_SHOWN.format(r.readings(), r.subgroups(), k.symbol(),
-                    est.isPresent() ? String.format(java.util.Locale.ROOT, "%.3f", est.getAsDouble()) : "—",
-                    Math.round(100 * req.get().confidence()),
-                    low.isPresent() ? String.format(java.util.Locale.ROOT, "%.3f", low.getAsDouble()) : "—"));
-            return true;
-        } catch (UserException | IllegalArgumentException e) {
-            pilotMessage.set(AppMessage.GOAL_PILOT_BAD.format(e.getMessage()));
-            return false;
-        }
+        SpecLimits limits = row.get().limits().get();
+        OptionalDouble nominal = row.get().number(CharacteristicField.NOMINAL);
+        double confidence = req.get().confidence();
+        IndexKind k = index.get();
+        pilotLoading.set(true);
+        pilotMessage.set(AppMessage.GOAL_PILOT_READING.format(file.getFileName()));
+        pilotJob = background.submit(() -> CapabilityAnalysis.of(ReadingsCsv.read(file, OptionalInt.empty()).subgroups(), limits,
+                nominal.isPresent() ? nominal.getAsDouble() : null, null, confidence, BoundMethod.EXACT), r -> {
+                    if (mine != pilotGeneration) {
+                        return;
+                    }
+                    pilotLoading.set(false);
+                    draft.field(DraftField.PILOT_FILE).set(file.toString());
+                    pilot.set(r);
+                    OptionalDouble est = r.indices().of(k);
+                    OptionalDouble low = lowerOf(r, k);
+                    pilotMessage.set(AppMessage.GOAL_PILOT_SHOWN.format(r.readings(), r.subgroups(), k.symbol(),
+                            est.isPresent() ? String.format(Locale.ROOT, "%.3f", est.getAsDouble()) : "—",
+                            Math.round(100 * confidence),
+                            low.isPresent() ? String.format(Locale.ROOT, "%.3f", low.getAsDouble()) : "—"));
+                }, ex -> {
+                    if (mine == pilotGeneration) {
+                        pilotLoading.set(false);
+                        pilotMessage.set(AppMessage.GOAL_PILOT_BAD.format(ex instanceof UserException
+                                || ex instanceof IllegalArgumentException ? ex.getMessage() : String.valueOf(ex)));
+                    }
+                });
+        return true;
     }
 
     private static OptionalDouble lowerOf(CapabilityResult r, IndexKind k) {
@@ -318,6 +391,16 @@ public final class GoalViewModel extends StepViewModel {
     }
 
     private String computeMissing() {
+        for (DraftField f : List.of(DraftField.MINIMUM, DraftField.CONFIDENCE, DraftField.EXPECTED_MEAN, DraftField.EXPECTED_SIGMA)) {
+            Optional<String> mark = Numbers.wrongMark(draft.text(f));
+            if (mark.isPresent()) {
+                return mark.get();
+            }
+        }
+        Optional<String> expectedMark = focus.get().flatMap(r -> Numbers.wrongMark(r.text(CharacteristicField.EXPECTED)));
+        if (expectedMark.isPresent()) {
+            return expectedMark.get();
+        }
         if (computeRequirement().isEmpty()) {
             OptionalDouble min = Numbers.parse(draft.text(DraftField.MINIMUM));
             return min.isEmpty() || !(min.getAsDouble() > 0) ? AppMessage.GOAL_MINIMUM_BAD.format() : AppMessage.GOAL_CONFIDENCE_BAD.format();

@@ -1,5 +1,7 @@
 package dev.proofrun.app.session;
 
+import dev.proofrun.schedule.CalendarDefaults;
+
 /**
  * The plan-level inputs of the wizard, kept as the user typed them (text), so that a draft can hold
  * input that is not yet valid and nothing typed is ever lost. Each step's view-model parses and
@@ -34,7 +36,8 @@ public enum DraftField {
     /** "days" or "shifts". */
     SPAN_KIND("days"),
     SPAN_COUNT("5"),
-    ZONE("Europe/Berlin"),
+    /** The command line's default: this computer's zone ({@link CalendarDefaults#zone()}). */
+    ZONE(CalendarDefaults.zone().getId()),
     /** "Mon-Fri" or a list "Mon, Tue, Thu". */
     WORKING_DAYS("Mon-Fri"),
     /** "early 06:00-14:00, late 14:00-22:00". */
@@ -45,7 +48,8 @@ public enum DraftField {
     NON_WORKING(""),
     /** "40 s" (seconds per part) or "90/h" (parts per hour). */
     RATE("60/h"),
-    SPACING("random"),
+    /** The command line's default ({@link CalendarDefaults#SPACING_TOKEN}). */
+    SPACING(CalendarDefaults.SPACING_TOKEN),
     SEED("1"),
     RETURNED_FILE("");
 

@@ -186,6 +186,8 @@ public final class ShellView {
             p.setManaged(current);
         }
         styleRail();
+        // a step comes back at its top, its title in view, wherever it was left scrolled
+        shown.setVvalue(shown.getVmin());
         focusFirst(index, v.firstFocus());
         idle.playFromStart();
     }
@@ -233,6 +235,10 @@ public final class ShellView {
         Runnable ask = () -> {
             if (vm.currentProperty().get() == index && focus.getScene() != null) {
                 focus.requestFocus();
+                ScrollPane page = pages.get(index);
+                if (page != null) {
+                    page.setVvalue(page.getVmin());
+                }
             }
         };
         ask.run();

@@ -81,7 +81,17 @@ public final class StartView implements StepView {
         folder.setId("work-folder");
         folder.setWrapText(true);
         folder.getStyleClass().add("pr-note");
-        root.getChildren().addAll(title, recent, actions, message, folder);
+        javafx.scene.control.ChoiceBox<String> mark = new javafx.scene.control.ChoiceBox<>(
+                javafx.collections.FXCollections.observableArrayList(vm.markChoices()));
+        mark.setId("decimal-mark");
+        mark.valueProperty().bindBidirectional(vm.markChoiceProperty());
+        Label markLabel = new Label(AppMessage.DECIMAL_MARK_LABEL.format());
+        markLabel.setLabelFor(mark);
+        Label markNote = new Label(vm.localeNote());
+        markNote.getStyleClass().add("pr-note");
+        HBox marks = new HBox(8, markLabel, mark, markNote);
+        marks.setAlignment(Pos.CENTER_LEFT);
+        root.getChildren().addAll(title, recent, actions, message, folder, marks);
     }
 
     @Override

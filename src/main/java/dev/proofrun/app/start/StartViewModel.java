@@ -2,8 +2,11 @@ package dev.proofrun.app.start;
 
 import dev.proofrun.app.AppMessage;
 import dev.proofrun.app.session.Background;
+import dev.proofrun.app.session.DecimalSetting;
+import dev.proofrun.app.session.Numbers;
 import dev.proofrun.app.session.Session;
 import dev.proofrun.app.shell.StepViewModel;
+import dev.proofrun.text.DecimalMark;
 import java.nio.file.Path;
 import javafx.beans.binding.Bindings;
 import javafx.beans.property.BooleanProperty;
@@ -36,6 +39,43 @@ public final class StartViewModel extends StepViewModel {
         this.files = files;
         bindMissing(Bindings.when(loaded).then("").otherwise(AppMessage.NO_PLAN.english()));
         refresh();
+        Numbers.decimalMarkProperty().set(DecimalSetting.load(session.home()));
+        markChoice.set(choiceOf(Numbers.decimalMarkProperty().get()));
+        markChoice.addListener((obs, was, now) -> {
+            for (DecimalMark m : DecimalMark.values()) {
+                if (choiceOf(m).equals(now) && Numbers.decimalMarkProperty().get() != m) {
+                    Numbers.decimalMarkProperty().set(m);
+                    files.submit(() -> {
+                        DecimalSetting.save(session.home(), m);
+                        return m;
+                    }, done -> { }, ex -> message.set(AppMessage.DECIMAL_MARK_NOT_KEPT.failure(ex)));
+                }
+            }
+        });
+    }
+
+    private final StringProperty markChoice = new SimpleStringProperty(this, "markChoice");
+
+    private static String choiceOf(DecimalMark m) {
+        return m.token() + "  " + m.example();
+    }
+
+    /** The decimal marks the fields can take, as the choice shows them ("point  1.33", "comma  1,33"). */
+    public java.util.List<String> markChoices() {
+        return java.util.Arrays.stream(DecimalMark.values()).map(StartViewModel::choiceOf).toList();
+    }
+
+    /**
+     * The decimal mark of every number field in the wizard, as chosen here (kept in the user's folder;
+     * a point to start with, as on the command line).
+     */
+    public StringProperty markChoiceProperty() {
+        return markChoice;
+    }
+
+    /** "this computer's language writes 1,33": the locale's own mark, beside the choice. */
+    public String localeNote() {
+        return AppMessage.DECIMAL_MARK_LOCALE.format(DecimalMark.of(java.util.Locale.getDefault(java.util.Locale.Category.FORMAT)).example());
     }
 
     @Override

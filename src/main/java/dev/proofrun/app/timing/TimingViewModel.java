@@ -159,7 +159,12 @@ public final class TimingViewModel extends StepViewModel {
         String t = draft.text(f);
         try {
             switch (f) {
-                case START -> CalendarText.start(t);
+                case START -> {
+                    if (t.isBlank()) {
+                        return AppMessage.TIMING_START_EMPTY.format();
+                    }
+                    CalendarText.start(t);
+                }
                 case SPAN_KIND -> kind(t);
                 case SPAN_COUNT -> {
                     int n = Integer.parseInt(t);

@@ -84,6 +84,7 @@ class GoalViewModelTest {
         java.nio.file.Files.writeString(csv, "x1,x2,x3,x4\n10.01,9.99,10.00,10.02\n9.98,10.00,10.01,9.99\n"
                 + "10.02,10.01,9.99,10.00\n10.00,9.98,10.01,10.02\n9.99,10.00,10.00,10.01\n");
         assertTrue(vm.loadPilot(csv), vm.pilotMessageProperty().get());
+        assertFalse(vm.pilotLoadingProperty().get());
         dev.proofrun.capability.CapabilityResult core = dev.proofrun.capability.CapabilityAnalysis.of(
                 dev.proofrun.readings.ReadingsCsv.read(csv, java.util.OptionalInt.empty()).subgroups(),
                 dev.proofrun.stats.SpecLimits.twoSided(9.9, 10.1), null, null, 0.95, dev.proofrun.stats.BoundMethod.EXACT);
@@ -98,9 +99,82 @@ class GoalViewModelTest {
         bore();
         java.nio.file.Path csv = dir.resolve("pilot.csv");
         java.nio.file.Files.writeString(csv, "value\n10.01\nabc\n");
-        assertFalse(vm.loadPilot(csv));
+        assertTrue(vm.loadPilot(csv), "started (and, inline, already done)");
+        assertFalse(vm.pilotLoadingProperty().get());
+        assertEquals(null, vm.pilotProperty().get());
         assertTrue(vm.pilotMessageProperty().get().startsWith("the pilot readings could not be used: ")
                 && vm.pilotMessageProperty().get().contains("pilot.csv, row 3, column value"),
                 vm.pilotMessageProperty().get());
+    }
+
+    /** A worker that holds its jobs until told to run them, as the FX worker does until its thread is free. */
+    private static final class HeldWorker implements dev.proofrun.app.session.Background {
+        private final java.util.List<Runnable> held = new java.util.ArrayList<>();
+
+        @Override
+        public <T> Job submit(java.util.concurrent.Callable<T> work, java.util.function.Consumer<T> done,
+                java.util.function.Consumer<Throwable> failed) {
+            held.add(() -> {
+                try {
+                    done.accept(work.call());
+                } catch (Exception e) {
+                    failed.accept(e);
+                }
+            });
+            return () -> { };
+        }
+
+        void runAll() {
+            held.forEach(Runnable::run);
+            held.clear();
+        }
+    }
+
+    @Test
+    void thePilotFileIsReadOnTheWorkerNotWhereLoadIsAskedFor(@org.junit.jupiter.api.io.TempDir java.nio.file.Path dir)
+            throws Exception {
+        HeldWorker worker = new HeldWorker();
+        GoalViewModel held = new GoalViewModel(draft, new SimpleObjectProperty<StudyPlan>(), worker);
+        bore();
+        held.sourceProperty().set(ExpectationSource.PILOT);
+        java.nio.file.Path csv = dir.resolve("pilot.csv");
+        // invented demo readings, three subgroups of four
+        java.nio.file.Files.writeString(csv, "x1,x2,x3,x4\n10.01,9.99,10.00,10.02\n9.98,10.00,10.01,9.99\n"
+                + "10.02,10.01,9.99,10.00\n");
+        assertTrue(held.loadPilot(csv));
+        assertTrue(held.pilotLoadingProperty().get(), "asked for, not yet read");
+        assertEquals(null, held.pilotProperty().get());
+        assertEquals("Reading pilot.csv …", held.pilotMessageProperty().get());
+        worker.runAll();
+        assertFalse(held.pilotLoadingProperty().get());
+        assertTrue(held.expectationBinding().get().isPresent(), held.pilotMessageProperty().get());
+    }
+
+    @Test
+    void theViewSeesTheIndexBySymbolAndTheExpectationAsASentence() {
+        bore();
+        assertEquals("Cpk", vm.indexSymbolProperty().get());
+        vm.indexSymbolProperty().set("Ppk");
+        assertEquals(IndexKind.PPK, vm.indexProperty().get());
+        vm.indexProperty().set(IndexKind.CPK);
+        assertEquals("Cpk", vm.indexSymbolProperty().get());
+        assertEquals("Designing for a true Cpk of 1.800 (centred)", vm.expectationText().get());
+        assertTrue(vm.tipFor("Cpk").length() > 10, vm.tipFor("Cpk"));
+    }
+
+    @Test
+    void aDecimalCommaIsTakenWhereTheWindowSaysSoAndOtherwiseSaidToBeTheOtherMark() {
+        bore();
+        try {
+            draft.field(DraftField.MINIMUM).set("1,33");
+            assertEquals("'1,33' has a decimal comma, and the decimal mark is set to a point (1.33): retype it, "
+                    + "or choose the comma on the Open step", vm.missingProperty().get());
+            assertTrue(vm.requirementBinding().get().isEmpty());
+            dev.proofrun.app.session.Numbers.decimalMarkProperty().set(dev.proofrun.text.DecimalMark.COMMA);
+            assertEquals(1.33, vm.requirementBinding().get().orElseThrow().minimum(), 0, "checked again when the mark changes");
+            assertEquals("", vm.missingProperty().get());
+        } finally {
+            dev.proofrun.app.session.Numbers.decimalMarkProperty().set(dev.proofrun.text.DecimalMark.POINT);
+        }
     }
 }

@@ -27,6 +27,7 @@ class TimingViewModelTest {
         draft.field(DraftField.SPAN_COUNT).set("3");
         draft.field(DraftField.SHIFTS).set("early 06:00-14:00, late 14:00-22:00");
         draft.field(DraftField.RATE).set("60/h");
+        draft.field(DraftField.SPACING).set("random");
     }
 
     @Test
@@ -63,6 +64,23 @@ class TimingViewModelTest {
         List<Slot> even = vm.schedule().orElseThrow().slots();
         vm.nextSeed();
         assertEquals(even, vm.schedule().orElseThrow().slots());
+    }
+
+    @Test
+    void anEmptyStartSaysWhatToEnterNotThatNothingIsNoStart() {
+        fill();
+        draft.field(DraftField.START).set("  ");
+        assertEquals("enter a start such as 2027-03-24 06:00", vm.problem(DraftField.START).get());
+    }
+
+    @Test
+    void aNewDraftTakesTheCommandLinesZoneAndSpacing() throws Exception {
+        StudyDraft fresh = new StudyDraft();
+        assertEquals(java.time.ZoneId.systemDefault().getId(), fresh.text(DraftField.ZONE));
+        picocli.CommandLine.Model.OptionSpec spacing = dev.proofrun.cli.ProofrunCommand.commandLine()
+                .getSubcommands().get("plan").getSubcommands().get("new").getCommandSpec().findOption("--spacing");
+        assertEquals(spacing.defaultValue(), fresh.text(DraftField.SPACING));
+        assertEquals("even", fresh.text(DraftField.SPACING));
     }
 
     @Test
