@@ -29,8 +29,6 @@ class ViewsTest {
      * are, and a view on it that no longer needs the exception fails {@link #theExceptionsAreStillNeeded}.
      */
     static final List<String> NOT_YET = List.of(
-            // Goal step: names the index kinds (stats.IndexKind) itself
-            "dev.proofrun.app.goal.GoalView",
             // Sample size step: draws design rows, OC and power points (design.*) itself
             "dev.proofrun.app.sizing.SizingView");
 
