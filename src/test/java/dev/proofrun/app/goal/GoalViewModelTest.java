@@ -158,7 +158,8 @@ class GoalViewModelTest {
         assertEquals(IndexKind.PPK, vm.indexProperty().get());
         vm.indexProperty().set(IndexKind.CPK);
         assertEquals("Cpk", vm.indexSymbolProperty().get());
-        assertEquals("Designing for a true Cpk of 1.800 (centred)", vm.expectationText().get());
+        assertEquals("Designing for a true Cpk of 1.800 (centred; an off-centre Cp is typed in the Part table's Expected Cp column)",
+                vm.expectationText().get());
         assertTrue(vm.tipFor("Cpk").length() > 10, vm.tipFor("Cpk"));
     }
 
