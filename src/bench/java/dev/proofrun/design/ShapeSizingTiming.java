@@ -28,7 +28,7 @@ public final class ShapeSizingTiming {
             for (double c1 : new double[] {1.67, 1.70, 1.65}) {
                 long t0 = System.nanoTime();
                 List<ShapeSizing.Row> rows = ShapeSizing.design(f, p, IndexKind.Side.UPPER, 1.33, c1, 0.95, 0.9, sizes,
-                        Floors.defaults());
+                        PracticeFloors.defaults());
                 System.out.printf(Locale.ROOT, "%s %.2f, expected %.2f: %.0f ms, n = 5 row %s%n", f.token(), p, c1,
                         (System.nanoTime() - t0) / 1e6, rows.get(4));
             }

@@ -1,6 +1,6 @@
 package dev.proofrun.grade;
 
-import dev.proofrun.control.ChanceSignals;
+import dev.proofrun.control.ChanceSignalCounts;
 import dev.proofrun.design.Design;
 import dev.proofrun.design.Requirement;
 import dev.proofrun.stats.IndexKind;
@@ -41,7 +41,7 @@ public final class GradeHarness {
             String digits = Integer.toString(i + 1);
             slots.add(new PlannedSlot("S" + "000000".substring(digits.length()) + digits, t.plusMinutes(2L * i), 1));
         }
-        GradedCharacteristic c = new GradedCharacteristic("D1", "bore diameter", "mm", SpecLimits.twoSided(9.9, 10.1), 10.0,
+        PlannedCharacteristic c = new PlannedCharacteristic("D1", "bore diameter", "mm", SpecLimits.twoSided(9.9, 10.1), 10.0,
                 0.0001, Requirement.of(IndexKind.CPK, 1.33, 0.95));
         return new GradingPlan("PR-BENCH-1", "0123456789ab", ZoneId.of("Europe/Berlin"), List.of(c), Design.of(5, SLOTS),
                 slots, GradingPlan.defaultAllowedShortfall(SLOTS), Duration.ofMinutes(2));
@@ -55,7 +55,7 @@ public final class GradeHarness {
     static void phases(GradingPlan plan, Path file) {
         long a = cpu();
         // as Grader.grade does for a large study: chance simulated on a background thread while reading
-        ChanceSignals.prepare(dev.proofrun.control.ChartKind.forMethod(plan.design().sigmaMethod()),
+        ChanceSignalCounts.prepare(dev.proofrun.control.ChartKind.forMethod(plan.design().sigmaMethod()),
                 plan.design().subgroupSize(), plan.slots().size(), StabilityJudge.rules());
         ReturnedData data = new ReturnedData(plan, file.toString());
         CsvTable.read(file, file.toString(), data);
@@ -65,7 +65,7 @@ public final class GradeHarness {
         List<Reason> reasons = new ArrayList<>();
         Stability st = StabilityJudge.judge(dev.proofrun.control.ChartKind.XBAR_R, c.subgroups(), c.slots(), reasons);
         long d = cpu();
-        GradedCharacteristic gc0 = plan.characteristics().get(0);
+        PlannedCharacteristic gc0 = plan.characteristics().get(0);
         Shape sh = ShapeJudge.judge(c.subgroups(), c.slots(), gc0.resolution(), gc0.shape(), gc0.limits(), reasons);
         long e = cpu();
         dev.proofrun.capability.CapabilityAnalysis.withoutNormality(c.subgroups(), plan.characteristics().get(0).limits(), 10.0,
@@ -86,18 +86,18 @@ public final class GradeHarness {
         if (args[0].equals("write-for")) {
             // write-for PLAN.json OUT.csv: a stable return for a real plan file, every characteristic centred
             // with sigma = tolerance width / 12 (Cp = 2; invented)
-            GradingPlan real = PlanAdapter.of(dev.proofrun.plan.PlanFiles.read(file));
+            GradingPlan real = GradingPlans.of(dev.proofrun.plan.PlanFiles.read(file));
             Map<String, SimulatedReturn.Process> processes = new java.util.HashMap<>();
-            for (GradedCharacteristic c : real.characteristics()) {
+            for (PlannedCharacteristic c : real.characteristics()) {
                 double mid = c.nominal() != null ? c.nominal()
                         : 0.5 * (c.limits().lower().getAsDouble() + c.limits().upper().getAsDouble());
                 processes.put(c.id(), SimulatedReturn.Process.stable(mid, c.limits().width().getAsDouble() / 12));
             }
             // characteristics without a gauge resolution are written to 4 decimals, as a gauge prints them
             // (full 17-digit doubles would measure Double.parseDouble's slow path, not a returned file)
-            List<GradedCharacteristic> rounded = new ArrayList<>();
-            for (GradedCharacteristic c : real.characteristics()) {
-                rounded.add(c.resolution() > 0 ? c : new GradedCharacteristic(c.id(), c.name(), c.unit(), c.limits(),
+            List<PlannedCharacteristic> rounded = new ArrayList<>();
+            for (PlannedCharacteristic c : real.characteristics()) {
+                rounded.add(c.resolution() > 0 ? c : new PlannedCharacteristic(c.id(), c.name(), c.unit(), c.limits(),
                         c.nominal(), 0.0001, c.requirement()));
             }
             GradingPlan written = new GradingPlan(real.id(), real.revision(), real.zone(), rounded, real.design(),

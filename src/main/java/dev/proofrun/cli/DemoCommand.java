@@ -2,7 +2,7 @@ package dev.proofrun.cli;
 
 import dev.proofrun.grade.GradeMessage;
 import dev.proofrun.grade.GradingPlan;
-import dev.proofrun.grade.PlanAdapter;
+import dev.proofrun.grade.GradingPlans;
 import dev.proofrun.grade.DemoReturn;
 import dev.proofrun.plan.DemoPlan;
 import dev.proofrun.plan.PlanFiles;
@@ -50,7 +50,7 @@ public final class DemoCommand implements Callable<Integer> {
             }
         }
         StudyPlan plan = DemoPlan.create();
-        GradingPlan gp = PlanAdapter.of(plan);
+        GradingPlan gp = GradingPlans.of(plan);
         try {
             Files.createDirectories(out);
             try (AtomicFile.Pending returned = AtomicFile.begin(dataFile)) {

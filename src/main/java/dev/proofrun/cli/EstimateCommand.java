@@ -66,9 +66,9 @@ public final class EstimateCommand implements Callable<Integer> {
     @Override
     public Integer call() throws JsonProcessingException {
         SpecLimits specLimits = limits.limits();
-        SigmaMethod method = Conventions.sigma(sigma).orElse(null);
-        BoundMethod boundMethod = Conventions.bound(bound);
-        Conventions.confidence(confidence);
+        SigmaMethod method = OptionValues.sigma(sigma).orElse(null);
+        BoundMethod boundMethod = OptionValues.bound(bound);
+        OptionValues.confidence(confidence);
         Readings readings = ReadingsCsv.read(file,
                 subgroupSize == null ? OptionalInt.empty() : OptionalInt.of(subgroupSize));
         CapabilityResult result;

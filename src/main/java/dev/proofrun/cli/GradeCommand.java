@@ -9,7 +9,7 @@ import dev.proofrun.text.UserException;
 import dev.proofrun.grade.GradeResult;
 import dev.proofrun.grade.Grader;
 import dev.proofrun.grade.GradingPlan;
-import dev.proofrun.grade.PlanAdapter;
+import dev.proofrun.grade.GradingPlans;
 import dev.proofrun.grade.Problem;
 import dev.proofrun.grade.Reason;
 import dev.proofrun.plan.PlanFiles;
@@ -90,7 +90,7 @@ public final class GradeCommand implements Callable<Integer> {
         }
         GradeResult result;
         try {
-            GradingPlan gp = PlanAdapter.of(plan);
+            GradingPlan gp = GradingPlans.of(plan);
             result = Grader.grade(gp, dataFile, dataFile.toString());
         } catch (RuntimeException e) {
             pending.confirm();

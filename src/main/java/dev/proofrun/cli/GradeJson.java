@@ -3,7 +3,7 @@ package dev.proofrun.cli;
 import dev.proofrun.control.ChartPair;
 import dev.proofrun.control.ControlChart;
 import dev.proofrun.grade.CharacteristicGrade;
-import dev.proofrun.grade.ChartSignal;
+import dev.proofrun.grade.SlotSignal;
 import dev.proofrun.grade.GradeResult;
 import dev.proofrun.grade.IndexEvidence;
 import dev.proofrun.grade.Problem;
@@ -98,7 +98,7 @@ final class GradeJson {
             control.put("location", limits(charts.location()));
             control.put("spread", limits(charts.spread()));
             List<Object> signals = new ArrayList<>();
-            for (ChartSignal s : g.stability().signals()) {
+            for (SlotSignal s : g.stability().signals()) {
                 Map<String, Object> sm = new LinkedHashMap<>();
                 sm.put("chart", s.chart().id());
                 sm.put("rule", s.rule().id());

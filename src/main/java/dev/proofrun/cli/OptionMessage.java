@@ -2,7 +2,7 @@ package dev.proofrun.cli;
 
 import dev.proofrun.text.MessageKey;
 
-/** Messages about option values: {@code OPTION: what is wrong}, and the ones every command reads alike ({@link Conventions}). */
+/** Messages about option values: {@code OPTION: what is wrong}, and the ones every command reads alike ({@link OptionValues}). */
 public enum OptionMessage implements MessageKey {
     BAD_VALUE("%s: %s"),
     UNKNOWN_SIDES("unknown specification sides '%s' (two-sided, upper or lower)"),

@@ -1,6 +1,6 @@
 package dev.proofrun.cli;
 
-import static dev.proofrun.cli.Conventions.option;
+import static dev.proofrun.cli.OptionValues.option;
 
 import dev.proofrun.design.Design;
 import dev.proofrun.design.Expectation;
@@ -9,7 +9,7 @@ import dev.proofrun.design.Spending;
 import dev.proofrun.design.Stages;
 import dev.proofrun.plan.Characteristic;
 import dev.proofrun.plan.CharacteristicsCsv;
-import dev.proofrun.plan.CommonDesign;
+import dev.proofrun.plan.PlanDesign;
 import dev.proofrun.plan.Gauge;
 import dev.proofrun.plan.Part;
 import dev.proofrun.plan.People;
@@ -187,11 +187,11 @@ public final class PlanNewCommand implements Callable<Integer> {
         List<Characteristic> chars = characteristics();
         ProductionCalendar calendar = calendar();
         StudySpan studySpan = studySpan();
-        CommonDesign design = design(chars);
+        PlanDesign design = design(chars);
         Optional<StagedLooks.Planned> staged = stages(design.design(), chars);
         Optional<Stages> looks = staged.map(StagedLooks.Planned::stages);
         Design chosen = staged.map(StagedLooks.Planned::design).orElse(design.design());
-        Spacing sp = Conventions.spacing(spacing);
+        Spacing sp = OptionValues.spacing(spacing);
         long s = seed != null ? seed : sp == Spacing.RANDOM ? new SecureRandom().nextInt(1_000_000_000) : 0L;
         String planId = id != null ? id : String.format(Locale.ROOT, "PR-%d-%04d", studySpan.start().getYear(),
                 new SecureRandom().nextInt(10_000));
@@ -257,9 +257,9 @@ public final class PlanNewCommand implements Callable<Integer> {
     }
 
     /** The plan's design; a characteristic refused from --characteristics is named with its file. */
-    private CommonDesign design(List<Characteristic> chars) {
+    private PlanDesign design(List<Characteristic> chars) {
         try {
-            return CommonDesign.choose(chars, power,
+            return PlanDesign.choose(chars, power,
                     subgroupSize == null ? OptionalInt.empty() : OptionalInt.of(subgroupSize),
                     subgroups == null ? OptionalInt.empty() : OptionalInt.of(subgroups));
         } catch (UserException e) {
@@ -269,8 +269,8 @@ public final class PlanNewCommand implements Callable<Integer> {
     }
 
     private List<Characteristic> characteristics() {
-        IndexKind kind = Conventions.index(index);
-        Conventions.confidence(confidence);
+        IndexKind kind = OptionValues.index(index);
+        OptionValues.confidence(confidence);
         if (characteristicsCsv != null) {
             if (characteristic != null || target != null || expected != null || shape != null || limits.given()) {
                 throw new UserException(PlanOptionMessage.BOTH_CHARACTERISTIC_FORMS);
@@ -289,7 +289,7 @@ public final class PlanNewCommand implements Callable<Integer> {
                 : Optional.of(option(gauge != null ? "--gauge" : "--resolution", () -> new Gauge(
                         gauge != null ? gauge : UNNAMED_GAUGE, resolution == null ? Double.NaN : resolution,
                         gaugeSd == null ? OptionalDouble.empty() : OptionalDouble.of(gaugeSd))));
-        ShapeFamily family = shape == null ? ShapeFamily.NORMAL : Conventions.shape(shape);
+        ShapeFamily family = shape == null ? ShapeFamily.NORMAL : OptionValues.shape(shape);
         return List.of(option("--characteristic", () -> new Characteristic(characteristicId == null ? "C1" : characteristicId,
                 characteristic, unit, nominal == null ? OptionalDouble.empty() : OptionalDouble.of(nominal), specLimits, g, req, exp,
                 family)));

@@ -4,7 +4,7 @@ import dev.proofrun.design.Look;
 import dev.proofrun.grade.GradedLook;
 import dev.proofrun.plan.Characteristic;
 import dev.proofrun.plan.PlanFiles;
-import dev.proofrun.plan.PlanView;
+import dev.proofrun.plan.PlanDocument;
 import dev.proofrun.plan.StudyPlan;
 import dev.proofrun.schedule.Slot;
 import java.io.PrintWriter;
@@ -43,7 +43,7 @@ public final class PlanShowCommand implements Callable<Integer> {
             err.flush();
         }
         if (json) {
-            out.println(PlanView.json(p, in.integrity()));
+            out.println(PlanDocument.json(p, in.integrity()));
             out.flush();
             return 0;
         }

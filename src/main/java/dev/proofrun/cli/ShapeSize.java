@@ -1,7 +1,7 @@
 package dev.proofrun.cli;
 
 import dev.proofrun.design.DesignMessage;
-import dev.proofrun.design.Floors;
+import dev.proofrun.design.PracticeFloors;
 import dev.proofrun.design.ShapeSizing;
 import dev.proofrun.stats.IndexKind;
 import dev.proofrun.stats.PercentileIndex;
@@ -62,7 +62,7 @@ final class ShapeSize {
      * @throws UserException naming the pilot file when the shape cannot be fitted to its readings
      */
     static ShapeSize fromPilot(ShapeFamily family, dev.proofrun.readings.Readings pilot, SpecLimits limits, IndexKind kind,
-            double c0, Double c1, double confidence, double power, List<Integer> sizes, Floors floors) {
+            double c0, Double c1, double confidence, double power, List<Integer> sizes, PracticeFloors floors) {
         double[] x = pilot.subgroups().stream().flatMapToDouble(java.util.Arrays::stream).toArray();
         ShapeFitter.Outcome o = ShapeFitter.fit(family, x);
         if (!o.fitted()) {
@@ -85,7 +85,7 @@ final class ShapeSize {
 
     /** @throws UserException for a skewness the shape cannot have, two-sided limits, or c₁ ≤ c₀ */
     static ShapeSize design(ShapeFamily family, Double skewness, SpecLimits.Sides sides, double c0, Double c1,
-            double confidence, double power, List<Integer> sizes, Floors floors) {
+            double confidence, double power, List<Integer> sizes, PracticeFloors floors) {
         if (skewness == null) {
             throw new UserException(OptionMessage.BAD_VALUE, "--shape", "a " + family.token()
                     + " shape needs --skewness G, the expected skewness of the readings, or --pilot FILE with --lsl/--usl");

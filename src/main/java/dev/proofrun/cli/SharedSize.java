@@ -8,7 +8,7 @@ import dev.proofrun.design.SharedDesigner;
 import dev.proofrun.design.StudyDesigner;
 import dev.proofrun.plan.Characteristic;
 import dev.proofrun.plan.CharacteristicsCsv;
-import dev.proofrun.plan.CommonDesign;
+import dev.proofrun.plan.PlanDesign;
 import dev.proofrun.plan.PlanMessage;
 import dev.proofrun.stats.IndexKind;
 import dev.proofrun.text.Location;
@@ -61,7 +61,7 @@ final class SharedSize {
         List<Characteristic> chars = CharacteristicsCsv.read(path, defaultIndex, defaultConfidence);
         List<SharedDesign> designs;
         try {
-            designs = CommonDesign.solve(chars, request);
+            designs = PlanDesign.solve(chars, request);
         } catch (UserException e) {
             throw e.key() == PlanMessage.CHARACTERISTIC_REFUSED ? e.placedIn(Location.file(file)) : e;
         }

@@ -9,7 +9,7 @@ import dev.proofrun.design.DesignRequest;
 import dev.proofrun.design.DesignRow;
 import dev.proofrun.design.DesignTable;
 import dev.proofrun.design.Expectation;
-import dev.proofrun.design.Floors;
+import dev.proofrun.design.PracticeFloors;
 import dev.proofrun.design.OcPoint;
 import dev.proofrun.design.PowerPoint;
 import dev.proofrun.design.ProcedurePower;
@@ -150,17 +150,17 @@ public final class SizeCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         PrintWriter out = spec.commandLine().getOut();
-        Conventions.confidence(confidence);
+        OptionValues.confidence(confidence);
         int looks = StagedSize.stages(stages);
         Spending spendingFunction = StagedSize.spending(spending);
         if (looks > 1 && characteristics != null) {
             throw new UserException(StagedMessage.STAGES_NEED_ONE_CHARACTERISTIC);
         }
-        if (looks > 1 && shape != null && !Conventions.shape(shape).isNormal()) {
+        if (looks > 1 && shape != null && !OptionValues.shape(shape).isNormal()) {
             throw new UserException(StagedMessage.STAGES_NEED_NORMAL, shape);
         }
         if (characteristics != null) {
-            SharedSize shared = SharedSize.design(characteristics, this::sharedRequest, Conventions.index(index),
+            SharedSize shared = SharedSize.design(characteristics, this::sharedRequest, OptionValues.index(index),
                     confidence, refusedBesideFile());
             if (json) {
                 ObjectMapper mapper = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
@@ -174,24 +174,24 @@ public final class SizeCommand implements Callable<Integer> {
         if (target == null) {
             throw new UserException(SizeMessage.TARGET_NEEDED);
         }
-        ShapeFamily family = shape == null ? ShapeFamily.NORMAL : Conventions.shape(shape);
+        ShapeFamily family = shape == null ? ShapeFamily.NORMAL : OptionValues.shape(shape);
         if (!family.isLocationScale()) {
             throw new UserException(SizeMessage.SHAPE_NOT_SIZED, family.token(), ShapeSize.plannable());
         }
         if (!family.isNormal()) {
             List<Integer> sizes = subgroupSizes == null || subgroupSizes.isEmpty()
                     ? IntStream.rangeClosed(1, 10).boxed().toList() : subgroupSizes;
-            Floors floors = wrap(() -> new Floors(minSubgroups, minReadings));
+            PracticeFloors floors = wrap(() -> new PracticeFloors(minSubgroups, minReadings));
             ShapeSize sized;
             if (pilot != null && skewness == null) {
                 if (lsl == null && usl == null) {
                     throw new UserException(DesignMessage.BAD_EXPECTATION, "--pilot needs the specification limits --lsl/--usl");
                 }
                 sized = ShapeSize.fromPilot(family, dev.proofrun.readings.ReadingsCsv.read(pilot, pilotSubgroupSize == null
-                        ? OptionalInt.empty() : OptionalInt.of(pilotSubgroupSize)), Conventions.limits(lsl, usl),
-                        Conventions.index(index), target, expected, confidence, power, sizes, floors);
+                        ? OptionalInt.empty() : OptionalInt.of(pilotSubgroupSize)), OptionValues.limits(lsl, usl),
+                        OptionValues.index(index), target, expected, confidence, power, sizes, floors);
             } else {
-                sized = ShapeSize.design(family, skewness, Conventions.sides(sides, lsl, usl), target, expected,
+                sized = ShapeSize.design(family, skewness, OptionValues.sides(sides, lsl, usl), target, expected,
                         confidence, power, sizes, floors);
             }
             if (json) {
@@ -250,14 +250,14 @@ public final class SizeCommand implements Callable<Integer> {
             List<String> notes) {
         List<Integer> sizes = subgroupSizes == null || subgroupSizes.isEmpty()
                 ? IntStream.rangeClosed(1, 10).boxed().toList() : subgroupSizes;
-        Floors floors = wrap(() -> new Floors(minSubgroups, minReadings));
-        return new DesignRequest(specSides, requirement, expectation, power, sizes, Conventions.sigma(sigma),
-                Conventions.bound(bound), floors, shift, lossRate, notes);
+        PracticeFloors floors = wrap(() -> new PracticeFloors(minSubgroups, minReadings));
+        return new DesignRequest(specSides, requirement, expectation, power, sizes, OptionValues.sigma(sigma),
+                OptionValues.bound(bound), floors, shift, lossRate, notes);
     }
 
     DesignRequest request() {
-        IndexKind kind = Conventions.index(index);
-        SpecLimits.Sides specSides = Conventions.sides(sides, lsl, usl);
+        IndexKind kind = OptionValues.index(index);
+        SpecLimits.Sides specSides = OptionValues.sides(sides, lsl, usl);
         List<String> notes = new ArrayList<>();
         Expectation expectation;
         if (pilot != null) {
@@ -273,7 +273,7 @@ public final class SizeCommand implements Callable<Integer> {
                 throw new UserException(DesignMessage.BAD_EXPECTATION,
                         "give --expected (with --expected-cp if off centre), or --mean and --sd with --lsl/--usl");
             }
-            ProcessFacts facts = ProcessFacts.of(Conventions.limits(lsl, usl), mean, sd)
+            ProcessFacts facts = ProcessFacts.of(OptionValues.limits(lsl, usl), mean, sd)
                     .withGauge(optional(gaugeSd), optional(resolution));
             expectation = facts.expectationFor(kind, notes);
         }
@@ -287,9 +287,9 @@ public final class SizeCommand implements Callable<Integer> {
         if (lsl == null && usl == null) {
             throw new UserException(DesignMessage.BAD_EXPECTATION, "--pilot needs the specification limits --lsl/--usl");
         }
-        SpecLimits limits = Conventions.limits(lsl, usl);
-        SigmaMethod method = Conventions.sigma(sigma).orElse(null);
-        BoundMethod boundMethod = Conventions.bound(bound);
+        SpecLimits limits = OptionValues.limits(lsl, usl);
+        SigmaMethod method = OptionValues.sigma(sigma).orElse(null);
+        BoundMethod boundMethod = OptionValues.bound(bound);
         dev.proofrun.readings.Readings readings = dev.proofrun.readings.ReadingsCsv.read(pilot,
                 pilotSubgroupSize == null ? OptionalInt.empty() : OptionalInt.of(pilotSubgroupSize));
         dev.proofrun.capability.CapabilityResult result;

@@ -5,7 +5,7 @@ import picocli.CommandLine.Option;
 
 /**
  * {@code --lsl} and {@code --usl} as {@code estimate} and {@code plan new} declare them (a picocli mixin);
- * {@code size} words them for its own use and reads them with the same {@link Conventions#limits}.
+ * {@code size} words them for its own use and reads them with the same {@link OptionValues#limits}.
  */
 final class SpecLimitOptions {
 
@@ -20,8 +20,8 @@ final class SpecLimitOptions {
         return lsl != null || usl != null;
     }
 
-    /** @throws dev.proofrun.text.UserException as {@link Conventions#limits} */
+    /** @throws dev.proofrun.text.UserException as {@link OptionValues#limits} */
     SpecLimits limits() {
-        return Conventions.limits(lsl, usl);
+        return OptionValues.limits(lsl, usl);
     }
 }

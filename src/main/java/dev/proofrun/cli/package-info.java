@@ -5,7 +5,7 @@
  * unusable input (one line, nothing on standard output, no file written).
  *
  * <ul>
- * <li>{@code Conventions} reads every convention option ({@code --index}, {@code --sigma}, {@code --bound},
+ * <li>{@code OptionValues} reads every convention option ({@code --index}, {@code --sigma}, {@code --bound},
  * {@code --spacing}, {@code --spec}), the limits and {@code --confidence} in one place, so a bad value is the
  * same line from every command ({@code OptionMessage}); options worded alike are mixins
  * ({@code SpecLimitOptions}).</li>

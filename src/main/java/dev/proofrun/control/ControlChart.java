@@ -23,7 +23,7 @@ import java.util.Objects;
  * @param signals   run-rule signals, indices into {@code points}
  */
 public record ControlChart(ChartStatistic statistic, double center, double ucl, double lcl, double[] points,
-        double[] z, double[] pointUcl, double[] pointLcl, int firstSubgroup, List<Signal> signals) {
+        double[] z, double[] pointUcl, double[] pointLcl, int firstSubgroup, List<RuleFiring> signals) {
 
     public ControlChart {
         Objects.requireNonNull(statistic, "statistic");

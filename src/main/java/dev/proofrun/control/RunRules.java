@@ -25,8 +25,8 @@ public final class RunRules {
      * @return the signals; empty when none fire
      * @throws IllegalArgumentException if a point is not finite
      */
-    public static List<Signal> scan(double[] z, Set<RunRule> rules) {
-        List<Signal> found = null;
+    public static List<RuleFiring> scan(double[] z, Set<RunRule> rules) {
+        List<RuleFiring> found = null;
         Scanner s = new Scanner(mask(rules));
         for (int i = 0; i < z.length; i++) {
             int fired = s.step(z, i);
@@ -36,7 +36,7 @@ public final class RunRules {
                 }
                 for (RunRule r : RULES) {
                     if ((fired & (1 << r.ordinal())) != 0) {
-                        found.add(new Signal(r, i));
+                        found.add(new RuleFiring(r, i));
                     }
                 }
             }

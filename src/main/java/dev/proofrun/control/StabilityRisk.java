@@ -13,7 +13,7 @@ import org.apache.commons.rng.simple.RandomSource;
  * calls a stable process unstable, and the chance that it calls unstable a process whose mean moves by δ·σ_within
  * for the second half of the study (the last k − ⌊k/2⌋ subgroups). Both by seeded simulation of normal studies
  * put through {@link StabilityRule#decide} — the very decision the grader makes, with the same chance reference
- * ({@link ChanceSignals}, shared through its cache).
+ * ({@link ChanceSignalCounts}, shared through its cache).
  *
  * <p>Why simulation: the decision compares counts of signalled points with a simulated reference and adds an
  * ANOVA test; no closed form describes it. The decision is invariant to the location and scale of the readings,
@@ -21,7 +21,7 @@ import org.apache.commons.rng.simple.RandomSource;
  * such key and kept for the life of the JVM.
  *
  * <p>The false-unstable rate is read from the grader's own chance reference, each of its simulated stable studies
- * judged against the others ({@link ChanceSignals#falseUnstableShare}: up to 2,000 studies, standard error ≤
+ * judged against the others ({@link ChanceSignalCounts#falseUnstableShare}: up to 2,000 studies, standard error ≤
  * 0.0023 near 1 %); where that reference holds blocks instead of whole studies, {@value #STABLE_STUDIES} stable
  * studies are simulated. Detection: {@value #SHIFTED_STUDIES} shifted studies (standard error ≤ 0.023). The errors
  * are returned beside the figures.
@@ -135,7 +135,7 @@ public final class StabilityRisk {
         if (!own) {
             java.util.OptionalDouble stored = StabilityRiskTable.get().falseUnstable(kind, n, k);
             if (stored.isPresent()) {
-                return new double[] {stored.getAsDouble(), error(stored.getAsDouble(), ChanceSignals.MAX_STUDIES)};
+                return new double[] {stored.getAsDouble(), error(stored.getAsDouble(), ChanceSignalCounts.MAX_STUDIES)};
             }
         }
         return simulatedFalseUnstable(kind, n, k, own, key);
@@ -146,7 +146,7 @@ public final class StabilityRisk {
         double p = Double.NaN;
         int studies = 0;
         if (!own) {
-            ChanceSignals chance = ChanceSignals.simulate(kind, n, k, StabilityRule.rules());
+            ChanceSignalCounts chance = ChanceSignalCounts.simulate(kind, n, k, StabilityRule.rules());
             p = chance.falseUnstableShare();
             studies = chance.studies();
         }

@@ -13,7 +13,7 @@ import org.hipparchus.special.Beta;
  *
  * <p><b>The rule</b> (proofrun's, documented here and tested): a stable process also signals by chance, the
  * more often the more subgroups and rules there are. So the count of signalled points is compared with what
- * chance gives a stable study of the same size with the same rules ({@link ChanceSignals}), separately for
+ * chance gives a stable study of the same size with the same rules ({@link ChanceSignalCounts}), separately for
  * the location chart (all eight rules) and the spread chart (points beyond its limits). The process is
  * judged <em>unstable</em> when either count is so high that a stable study reaches it with probability
  * below {@value #CHANCE_LEVEL} (two charts, so about 1 % of stable studies are called unstable at most; the
@@ -67,9 +67,9 @@ public final class StabilityRule {
      * @param meansChance    the chance reference of the means' own chart (overall requirements with n ≥ 2), or null
      *                       when the location chart is the usual one and {@code chance} serves both charts
      */
-    public record Decision(ChartPair charts, int locationPoints, int spreadPoints, ChanceSignals chance,
+    public record Decision(ChartPair charts, int locationPoints, int spreadPoints, ChanceSignalCounts chance,
             double locationChance, double spreadChance, double ratio, OptionalDouble anovaF, OptionalDouble anovaP,
-            boolean signalled, boolean between, ChanceSignals meansChance) {
+            boolean signalled, boolean between, ChanceSignalCounts meansChance) {
 
         /** Whether the means were judged on their own chart (an overall requirement with n ≥ 2). */
         public boolean meansOnOwnChart() {
@@ -77,7 +77,7 @@ public final class StabilityRule {
         }
 
         /** The chance reference of the location chart. */
-        public ChanceSignals locationReference() {
+        public ChanceSignalCounts locationReference() {
             return meansChance != null ? meansChance : chance;
         }
 
@@ -108,13 +108,13 @@ public final class StabilityRule {
         int n = subgroups.get(0).length;
         Set<RunRule> rules = rules();
         ChartPair charts = ControlCharts.of(kind, subgroups, rules);
-        ChanceSignals chance = ChanceSignals.simulate(kind, n, k, rules);
-        ChanceSignals meansChance = null;
+        ChanceSignalCounts chance = ChanceSignalCounts.simulate(kind, n, k, rules);
+        ChanceSignalCounts meansChance = null;
         if (overallIndex && n > 1) {
             List<double[]> means = subgroups.stream().map(g -> new double[] {mean(g)}).toList();
             ChartPair ofMeans = ControlCharts.of(ChartKind.INDIVIDUALS, means, rules);
             charts = new ChartPair(kind, ofMeans.location(), charts.spread(), charts.sigmaWithin());
-            meansChance = ChanceSignals.simulate(ChartKind.INDIVIDUALS, 1, k, rules);
+            meansChance = ChanceSignalCounts.simulate(ChartKind.INDIVIDUALS, 1, k, rules);
         }
         int locationPoints = distinctPoints(charts.location());
         int spreadPoints = distinctPoints(charts.spread());
@@ -148,7 +148,7 @@ public final class StabilityRule {
     public static int distinctPoints(ControlChart chart) {
         int count = 0;
         int last = -1;
-        for (Signal s : chart.signals()) {
+        for (RuleFiring s : chart.signals()) {
             if (s.index() != last) {
                 count++;
                 last = s.index();

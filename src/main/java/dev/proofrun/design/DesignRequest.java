@@ -28,7 +28,7 @@ import java.util.stream.IntStream;
  * @param notes         warnings already known about the expectation (pilot, gauge), shown with the table
  */
 public record DesignRequest(SpecLimits.Sides sides, Requirement requirement, Expectation expectation, double power,
-        List<Integer> subgroupSizes, Optional<SigmaMethod> sigmaMethod, BoundMethod boundMethod, Floors floors,
+        List<Integer> subgroupSizes, Optional<SigmaMethod> sigmaMethod, BoundMethod boundMethod, PracticeFloors floors,
         double shift, double lossRate, List<String> notes) {
 
     /** Largest subgroup size the designer plans for. */
@@ -73,7 +73,7 @@ public record DesignRequest(SpecLimits.Sides sides, Requirement requirement, Exp
     public static DesignRequest of(SpecLimits.Sides sides, Requirement requirement, Expectation expectation) {
         return new DesignRequest(sides, requirement, expectation, DEFAULT_POWER,
                 IntStream.rangeClosed(1, 10).boxed().toList(), Optional.empty(), BoundMethod.EXACT,
-                Floors.defaults(), DEFAULT_SHIFT, 0, List.of());
+                PracticeFloors.defaults(), DEFAULT_SHIFT, 0, List.of());
     }
 
     public DesignRequest withPower(double p) {
@@ -96,7 +96,7 @@ public record DesignRequest(SpecLimits.Sides sides, Requirement requirement, Exp
                 shift, lossRate, notes);
     }
 
-    public DesignRequest withFloors(Floors f) {
+    public DesignRequest withFloors(PracticeFloors f) {
         return new DesignRequest(sides, requirement, expectation, power, subgroupSizes, sigmaMethod, boundMethod, f,
                 shift, lossRate, notes);
     }

@@ -2,7 +2,7 @@ package dev.proofrun.design;
 
 /**
  * What fixed the number of subgroups of a design: the wanted power, or one of the practice floors
- * ({@link Floors}). When the power-driven k already meets the floors the design is limited by power.
+ * ({@link PracticeFloors}). When the power-driven k already meets the floors the design is limited by power.
  */
 public enum LimitedBy {
     /** The smallest k whose power reaches the wanted power already meets both floors. */

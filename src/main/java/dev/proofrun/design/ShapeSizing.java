@@ -66,7 +66,7 @@ public final class ShapeSizing {
      * @throws IllegalArgumentException if c₁ ≤ c₀ or the family or side cannot be planned here
      */
     public static List<Row> design(ShapeFamily family, double parameter, IndexKind.Side side, double c0, double c1,
-            double confidence, double wanted, List<Integer> sizes, Floors floors) {
+            double confidence, double wanted, List<Integer> sizes, PracticeFloors floors) {
         if (!(c1 > c0)) {
             throw new IllegalArgumentException(String.format(Locale.ROOT,
                     "the expected index %.3f is not above the required %.3f: no study size can show it", c1, c0));
@@ -97,7 +97,7 @@ public final class ShapeSizing {
         return rows;
     }
 
-    private static int firstK(int n, int readings, Floors floors) {
+    private static int firstK(int n, int readings, PracticeFloors floors) {
         return Math.max(floors.minSubgroups(), Math.max((readings + n - 1) / n, (floors.minReadings() + n - 1) / n));
     }
 

@@ -130,7 +130,7 @@ final class SizeSearch {
 
     /** The design row, or null when the power cannot be reached within the largest study. */
     DesignRow row() {
-        Floors floors = request.floors();
+        PracticeFloors floors = request.floors();
         int floor = Math.max(smallestK, floors.subgroupsFor(n));
         if (floor > largestK) {
             return null;

@@ -15,7 +15,7 @@ import java.util.TreeSet;
  * Plans a capability study: for each candidate subgroup size n, the smallest number of subgroups k whose
  * power (the chance that the grader returns demonstrated when the process is as expected — the exact power of
  * the lower bound, see {@link StudyPower}, with every gate of the grader counted, see {@link ProcedurePower})
- * reaches the wanted power, raised to the practice {@link Floors};
+ * reaches the wanted power, raised to the practice {@link PracticeFloors};
  * the stability side of each design ({@link ChartRisks}, {@link RuleRisks}); a recommended design; the
  * operating-characteristic curve and the power curve.
  *

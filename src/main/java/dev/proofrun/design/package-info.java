@@ -15,7 +15,7 @@
  * tabulates c*(k̂) at 8 Chebyshev nodes and the power integrates over the mean. {@code IndexTail} is a
  * fixed-node copy of {@code stats.IndexDistribution}'s integrals for speed. The estimator is modelled as
  * κ·W with κ = 1/E[W] ({@code ChiScale}); without it the power was about 0.01 too high against simulation.</li>
- * <li><b>Search</b> ({@code SizeSearch}): start at the floor (25 subgroups / 100 readings, {@code Floors});
+ * <li><b>Search</b> ({@code SizeSearch}): start at the floor (25 subgroups / 100 readings, {@code PracticeFloors});
  * gallop, bisect, step back; {@code LimitedBy} says what decided.</li>
  * <li><b>Stability side</b>: {@code ChartRisks} in closed form for the 3σ rule; {@code RuleRisks} for all eight
  * run rules from the stored seeded simulation {@code rule-risks.txt} ({@code RuleRiskTable}; its generator

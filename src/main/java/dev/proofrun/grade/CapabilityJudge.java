@@ -28,7 +28,7 @@ final class CapabilityJudge {
     }
 
     /** The required index under the normal model, or {@code null} when it does not exist for the limits. */
-    static JudgedIndex judge(GradedCharacteristic gc, Design design, List<double[]> subgroups) {
+    static JudgedIndex judge(PlannedCharacteristic gc, Design design, List<double[]> subgroups) {
         IndexKind kind = gc.requirement().index();
         List<double[]> data = subgroups;
         SpecLimits limits = gc.limits();

@@ -41,14 +41,14 @@ final class CharacteristicGrader {
     /** The "more subgroups" figure is left out beyond this many times the study's subgroups. */
     static final int TENFOLD = 10;
 
-    static CharacteristicGrade grade(GradedCharacteristic gc, Design design, Duration interval, ReturnedData.Collection data) {
+    static CharacteristicGrade grade(PlannedCharacteristic gc, Design design, Duration interval, ReturnedData.Collection data) {
         return grade(gc, design, interval, data, Optional.empty());
     }
 
     /**
      * @param look the planned look of a staged study this return is graded at; empty for a single-stage study
      */
-    static CharacteristicGrade grade(GradedCharacteristic gc, Design design, Duration interval, ReturnedData.Collection data,
+    static CharacteristicGrade grade(PlannedCharacteristic gc, Design design, Duration interval, ReturnedData.Collection data,
             Optional<GradedLook> look) {
         Completeness c = data.completeness();
         List<double[]> subgroups = data.subgroups();
@@ -208,7 +208,7 @@ final class CharacteristicGrader {
      * The shared capability figures (as {@code estimate} computes them, less the normality test, which the shape
      * step makes on the readings spread over the gauge's resolution), or null when they cannot be computed.
      */
-    private static CapabilityResult figures(GradedCharacteristic gc, Design design, List<double[]> subgroups) {
+    private static CapabilityResult figures(PlannedCharacteristic gc, Design design, List<double[]> subgroups) {
         try {
             return CapabilityAnalysis.withoutNormality(subgroups, gc.limits(), gc.nominal(), design.sigmaMethod(),
                     gc.requirement().confidence(), design.boundMethod());

@@ -1,6 +1,6 @@
 package dev.proofrun.grade;
 
-import dev.proofrun.control.ChanceSignals;
+import dev.proofrun.control.ChanceSignalCounts;
 import dev.proofrun.control.ChartKind;
 import dev.proofrun.design.Look;
 import dev.proofrun.design.Stages;
@@ -41,7 +41,7 @@ public final class Grader {
         int k = plan.slots().size();
         if ((long) n * k >= CharacteristicGrader.PARALLEL_READINGS && k >= 2) {
             // a large study: simulate what chance gives a complete return while the file is read
-            ChanceSignals.prepare(ChartKind.forMethod(plan.design().sigmaMethod()), n, k, StabilityJudge.rules());
+            ChanceSignalCounts.prepare(ChartKind.forMethod(plan.design().sigmaMethod()), n, k, StabilityJudge.rules());
         }
         ReturnedData data = new ReturnedData(plan, display);
         String name = file.getFileName().toString().toLowerCase(Locale.ROOT);

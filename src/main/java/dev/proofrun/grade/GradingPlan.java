@@ -13,7 +13,7 @@ import java.util.Optional;
 
 /**
  * What grading needs of a plan: its identity, characteristics, design and slots. Built from the plan file's
- * model (see {@code PlanAdapter}); the grade never takes any of this from the returned file.
+ * model (see {@code GradingPlans}); the grade never takes any of this from the returned file.
  *
  * @param id               the plan's id, e.g. "PR-2027-0042"
  * @param revision         the issued revision fingerprint
@@ -25,11 +25,11 @@ import java.util.Optional;
  * @param interval         the planned time between subgroups (the plan's frequency)
  * @param stages           the planned looks of a staged study; empty for a single-stage study
  */
-public record GradingPlan(String id, String revision, ZoneId zone, List<GradedCharacteristic> characteristics,
+public record GradingPlan(String id, String revision, ZoneId zone, List<PlannedCharacteristic> characteristics,
         Design design, List<PlannedSlot> slots, int allowedShortfall, Duration interval, Optional<Stages> stages) {
 
     /** A single-stage plan. */
-    public GradingPlan(String id, String revision, ZoneId zone, List<GradedCharacteristic> characteristics,
+    public GradingPlan(String id, String revision, ZoneId zone, List<PlannedCharacteristic> characteristics,
             Design design, List<PlannedSlot> slots, int allowedShortfall, Duration interval) {
         this(id, revision, zone, characteristics, design, slots, allowedShortfall, interval, Optional.empty());
     }
@@ -49,7 +49,7 @@ public record GradingPlan(String id, String revision, ZoneId zone, List<GradedCh
         if (characteristics.isEmpty()) {
             throw new IllegalArgumentException("a plan needs at least one characteristic");
         }
-        if (characteristics.stream().map(GradedCharacteristic::id).distinct().count() != characteristics.size()) {
+        if (characteristics.stream().map(PlannedCharacteristic::id).distinct().count() != characteristics.size()) {
             throw new IllegalArgumentException("characteristic ids must be unique");
         }
         if (slots.stream().map(PlannedSlot::id).distinct().count() != slots.size()) {

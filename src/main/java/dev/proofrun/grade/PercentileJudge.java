@@ -38,12 +38,12 @@ final class PercentileJudge {
      *
      * @param readings N, the number of readings the fit came from
      */
-    static IndexEvidence judge(GradedCharacteristic gc, Shape shape, int readings, List<Reason> reasons) {
+    static IndexEvidence judge(PlannedCharacteristic gc, Shape shape, int readings, List<Reason> reasons) {
         return judge(gc, shape, readings, reasons, gc.requirement().confidence());
     }
 
     /** As above, the bounds at {@code confidence} (a staged study's look) instead of the requirement's. */
-    static IndexEvidence judge(GradedCharacteristic gc, Shape shape, int readings, List<Reason> reasons,
+    static IndexEvidence judge(PlannedCharacteristic gc, Shape shape, int readings, List<Reason> reasons,
             double confidence) {
         ShapeFit fit = shape.fit();
         ShapeFamily family = fit.family();

@@ -225,9 +225,9 @@ final class ReturnedData implements RowHandler {
         }
         long epoch = OffsetTimes.epochSecond(text); // the fast path alone first: no planned day to look up
         if (epoch == OffsetTimes.NOT_FIXED) {
-            epoch = Cells.takenEpochSecond(text, plan.zone(), plannedDay(si));
+            epoch = CellValues.takenEpochSecond(text, plan.zone(), plannedDay(si));
         }
-        if (epoch == Cells.NOT_A_TIME) {
+        if (epoch == CellValues.NOT_A_TIME) {
             log.add(Location.cell(display, row, name(takenCol)), Severity.WARNING, id, GradeMessage.TAKEN_UNREADABLE, Shown.cell(text));
             return;
         }
@@ -249,7 +249,7 @@ final class ReturnedData implements RowHandler {
     }
 
     private void reading(SlotReadings col, int ci, int si, long row, String text, int column, String id) {
-        double v = Cells.number(text);
+        double v = CellValues.number(text);
         if (Double.isInfinite(v) || Decimals.namesNonFinite(text)) { // 1e309 overflows; a gauge may write "Infinity"
             col.spoiled[si] = true;
             col.outOfReach++;
@@ -266,12 +266,12 @@ final class ReturnedData implements RowHandler {
             firstCommaText = text;
             firstCommaValue = v;
         }
-        GradedCharacteristic gc = plan.characteristics().get(ci);
+        PlannedCharacteristic gc = plan.characteristics().get(ci);
         if (!reach[ci].contains(v)) {
             col.spoiled[si] = true;
             col.outOfReach++;
             log.add(Location.cell(display, row, name(column)), Severity.ERROR, id, GradeMessage.OUT_OF_REACH, Shown.cell(text),
-                    Cells.brief(reach[ci].low()), Cells.brief(reach[ci].high()));
+                    CellValues.brief(reach[ci].low()), CellValues.brief(reach[ci].high()));
             return;
         }
         boolean flagged = false;
@@ -281,14 +281,14 @@ final class ReturnedData implements RowHandler {
             if (Math.abs(steps - Math.rint(steps)) > RESOLUTION_SLACK * Math.max(1, Math.abs(steps))) {
                 flagged = true;
                 log.add(Location.cell(display, row, name(column)), Severity.WARNING, id, GradeMessage.OFF_RESOLUTION,
-                        Shown.cell(text), Cells.show(res));
+                        Shown.cell(text), CellValues.show(res));
             }
         }
         if (implausible(gc, v)) {
             flagged = true;
             log.add(Location.cell(display, row, name(column)), Severity.WARNING, id, GradeMessage.IMPLAUSIBLE, Shown.cell(text),
-                    gc.limits().lower().isPresent() ? Cells.show(gc.limits().lower().getAsDouble()) : "-",
-                    gc.limits().upper().isPresent() ? Cells.show(gc.limits().upper().getAsDouble()) : "-");
+                    gc.limits().lower().isPresent() ? CellValues.show(gc.limits().lower().getAsDouble()) : "-",
+                    gc.limits().upper().isPresent() ? CellValues.show(gc.limits().upper().getAsDouble()) : "-");
         }
         if (flagged) {
             col.flagged++;
@@ -300,7 +300,7 @@ final class ReturnedData implements RowHandler {
         col.count[si] = k + 1;
     }
 
-    private static boolean implausible(GradedCharacteristic gc, double v) {
+    private static boolean implausible(PlannedCharacteristic gc, double v) {
         double width;
         if (gc.limits().isTwoSided()) {
             width = gc.limits().width().getAsDouble();
@@ -421,7 +421,7 @@ final class ReturnedData implements RowHandler {
         if (decimalCommas > 0 && !commaNoted) {
             commaNoted = true;
             log.add(firstComma, Severity.NOTE, null, GradeMessage.DECIMAL_COMMA_READ, layout, decimalCommas,
-                    Shown.cell(firstCommaText), Cells.brief(firstCommaValue));
+                    Shown.cell(firstCommaText), CellValues.brief(firstCommaValue));
         }
         return log.all(display);
     }

@@ -25,9 +25,9 @@ public final class SignalPatterns {
      * @param signals the signals, in the order the charts give them; charts other than the location chart are
      *                named after the rule
      */
-    public static String describe(List<ChartSignal> signals) {
-        Map<String, List<ChartSignal>> byRule = new LinkedHashMap<>();
-        for (ChartSignal s : signals) {
+    public static String describe(List<SlotSignal> signals) {
+        Map<String, List<SlotSignal>> byRule = new LinkedHashMap<>();
+        for (SlotSignal s : signals) {
             String id = s.chart().id();
             boolean location = id.equals("mean") || id.equals("individual");
             byRule.computeIfAbsent(s.rule().id() + (location ? "" : " (" + id + ")"), r -> new ArrayList<>()).add(s);
@@ -48,17 +48,17 @@ public final class SignalPatterns {
     }
 
     /** The number of patterns (runs of consecutive subgroups of one rule on one chart). */
-    public static int count(List<ChartSignal> signals) {
-        Map<String, List<ChartSignal>> byRule = new LinkedHashMap<>();
-        for (ChartSignal s : signals) {
+    public static int count(List<SlotSignal> signals) {
+        Map<String, List<SlotSignal>> byRule = new LinkedHashMap<>();
+        for (SlotSignal s : signals) {
             byRule.computeIfAbsent(s.chart().id() + " " + s.rule().id(), r -> new ArrayList<>()).add(s);
         }
         return byRule.values().stream().mapToInt(l -> runs(l).size()).sum();
     }
 
     /** "S09–S16 (8 points)" or "S12" per run of consecutive subgroups. */
-    private static List<String> runs(List<ChartSignal> ofOneRule) {
-        List<ChartSignal> sorted = new ArrayList<>(ofOneRule);
+    private static List<String> runs(List<SlotSignal> ofOneRule) {
+        List<SlotSignal> sorted = new ArrayList<>(ofOneRule);
         sorted.sort((a, b) -> Integer.compare(a.subgroup(), b.subgroup()));
         List<String> out = new ArrayList<>();
         int i = 0;
@@ -67,8 +67,8 @@ public final class SignalPatterns {
             while (j + 1 < sorted.size() && sorted.get(j + 1).subgroup() <= sorted.get(j).subgroup() + 1) {
                 j++;
             }
-            ChartSignal first = sorted.get(i);
-            ChartSignal last = sorted.get(j);
+            SlotSignal first = sorted.get(i);
+            SlotSignal last = sorted.get(j);
             int points = last.subgroup() - first.subgroup() + 1;
             out.add(points == 1 ? first.slot()
                     : String.format(Locale.ROOT, "%s–%s (%d points)", first.slot(), last.slot(), points));

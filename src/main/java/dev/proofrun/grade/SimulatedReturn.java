@@ -77,7 +77,7 @@ public final class SimulatedReturn {
                 int late = (int) Math.floor(rng.nextDouble() * Math.max(1, slot.windowMinutes()));
                 String taken = MINUTES.format(slot.start().plusMinutes(late).toOffsetDateTime());
                 String lot = "L" + (1 + s * 3 / Math.max(1, slots.size()));
-                for (GradedCharacteristic c : plan.characteristics()) {
+                for (PlannedCharacteristic c : plan.characteristics()) {
                     Process p = processes.get(c.id());
                     if (p == null) {
                         throw new IllegalArgumentException("no process for characteristic " + c.id());

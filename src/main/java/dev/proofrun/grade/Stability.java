@@ -29,7 +29,7 @@ import java.util.OptionalDouble;
  *                               studies; a chance equal to it means none of them reached the count, so the true
  *                               chance is below it. 0 when the chance comes from a normal approximation
  */
-public record Stability(ChartPair charts, List<ChartSignal> signals, int locationSignalPoints,
+public record Stability(ChartPair charts, List<SlotSignal> signals, int locationSignalPoints,
         double expectedLocationByChance, double locationChance, int spreadSignalPoints, double expectedSpreadByChance,
         double spreadChance, double stabilityRatio, OptionalDouble anovaF, OptionalDouble anovaP, boolean stable,
         double chanceFloor) {

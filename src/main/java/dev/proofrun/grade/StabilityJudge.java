@@ -1,11 +1,11 @@
 package dev.proofrun.grade;
 
-import dev.proofrun.control.ChanceSignals;
+import dev.proofrun.control.ChanceSignalCounts;
 import dev.proofrun.control.ChartKind;
 import dev.proofrun.control.ChartPair;
 import dev.proofrun.control.ControlChart;
 import dev.proofrun.control.RunRule;
-import dev.proofrun.control.Signal;
+import dev.proofrun.control.RuleFiring;
 import dev.proofrun.control.StabilityRule;
 import java.util.ArrayList;
 import java.util.List;
@@ -47,13 +47,13 @@ final class StabilityJudge {
         int k = subgroups.size();
         StabilityRule.Decision d = StabilityRule.decide(kind, subgroups, overall);
         ChartPair charts = d.charts();
-        List<ChartSignal> signals = new ArrayList<>();
+        List<SlotSignal> signals = new ArrayList<>();
         place(charts.location(), slots, signals);
         place(charts.spread(), slots, signals);
         int locationPoints = d.locationPoints();
         int spreadPoints = d.spreadPoints();
-        ChanceSignals chance = d.chance();
-        ChanceSignals locationChance = d.locationReference();
+        ChanceSignalCounts chance = d.chance();
+        ChanceSignalCounts locationChance = d.locationReference();
         double pLocation = d.locationChance();
         double pSpread = d.spreadChance();
         double floor = chance.floor();
@@ -93,15 +93,15 @@ final class StabilityJudge {
                 chance.expectedSpread(), pSpread, ratio, d.anovaF(), d.anovaP(), d.stable(), floor);
     }
 
-    private static void place(ControlChart chart, List<String> slots, List<ChartSignal> out) {
-        for (Signal s : chart.signals()) {
+    private static void place(ControlChart chart, List<String> slots, List<SlotSignal> out) {
+        for (RuleFiring s : chart.signals()) {
             int g = chart.subgroupOf(s.index());
-            out.add(new ChartSignal(chart.statistic(), s.rule(), g + 1, slots.get(g)));
+            out.add(new SlotSignal(chart.statistic(), s.rule(), g + 1, slots.get(g)));
         }
     }
 
     /** The signals as patterns, see {@link SignalPatterns#describe}. */
-    static String describe(List<ChartSignal> signals) {
+    static String describe(List<SlotSignal> signals) {
         return SignalPatterns.describe(signals);
     }
 

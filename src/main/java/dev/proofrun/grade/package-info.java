@@ -1,6 +1,6 @@
 /**
  * Grading a returned file against its plan: {@code Grader.grade(GradingPlan, Path, display)} →
- * {@code GradeResult}. {@code PlanAdapter.of(StudyPlan)} makes the {@code GradingPlan}; <b>the plan wins</b>
+ * {@code GradeResult}. {@code GradingPlans.of(StudyPlan)} makes the {@code GradingPlan}; <b>the plan wins</b>
  * (limits, design, slots and requirement come from it; the file supplies readings and times). The allowed
  * shortfall is ⌊k/10⌋ subgroups (our choice). {@code CharacteristicGrader} grades one characteristic through
  * the {@code Step}s in order:
@@ -42,7 +42,7 @@
  *
  * <p>Reading streams one row at a time: {@code CsvLines}/{@code CsvTable} (UTF-8, {@code ,} or {@code ;} —
  * whichever the header has more of) and {@code XlsxTable} (POI's SAX reader) feed {@code ReturnedData}, which
- * keeps primitive arrays. {@code Cells} reads numbers ({@code .} or a single {@code ,} as the decimal mark,
+ * keeps primitive arrays. {@code CellValues} reads numbers ({@code .} or a single {@code ,} as the decimal mark,
  * the same double as {@code Double.parseDouble}) and taken times. {@code DemoReturn} and
  * {@code SimulatedReturn} make the demo's seeded returned file, shared by {@code proofrun demo}, the wizard
  * and the tests.

@@ -17,7 +17,7 @@ public interface Block {
      * @param top    top edge, points from the page's bottom
      * @param width  width available (the same as passed to {@link #height})
      */
-    void draw(Canvas canvas, float left, float top, float width);
+    void draw(PageCanvas canvas, float left, float top, float width);
 
     /** An empty block of a fixed height: vertical space. */
     static Block space(float height) {
@@ -28,7 +28,7 @@ public interface Block {
             }
 
             @Override
-            public void draw(Canvas canvas, float left, float top, float width) {
+            public void draw(PageCanvas canvas, float left, float top, float width) {
                 // nothing to draw
             }
         };
@@ -48,7 +48,7 @@ public interface Block {
             }
 
             @Override
-            public void draw(Canvas canvas, float left, float top, float width) {
+            public void draw(PageCanvas canvas, float left, float top, float width) {
                 float y = top;
                 for (Block b : parts) {
                     b.draw(canvas, left, y, width);

@@ -11,7 +11,7 @@ import java.util.Locale;
 public final class Flow {
 
     private final Pages pages;
-    private Canvas canvas;
+    private PageCanvas canvas;
     private float cursor;
     private Block tableHeader;
 
@@ -111,7 +111,7 @@ public final class Flow {
     }
 
     /** The canvas of the current page (for drawing beside the flow). */
-    public Canvas canvas() {
+    public PageCanvas canvas() {
         if (canvas == null) {
             newPage();
         }

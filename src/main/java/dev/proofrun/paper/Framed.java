@@ -11,7 +11,7 @@ import java.util.List;
  * @param pen    the frame's line
  * @param shade  background grey (1 for none)
  */
-public record Framed(List<Block> blocks, float pad, Pen pen, float shade) implements Block {
+public record Framed(List<Block> blocks, float pad, LineStyle pen, float shade) implements Block {
 
     public Framed {
         blocks = List.copyOf(blocks);
@@ -19,7 +19,7 @@ public record Framed(List<Block> blocks, float pad, Pen pen, float shade) implem
 
     /** A frame with a firm rule, 6 pt padding and no shade. */
     public static Framed of(List<Block> blocks) {
-        return new Framed(blocks, 6f, Pen.RULE, 1f);
+        return new Framed(blocks, 6f, LineStyle.RULE, 1f);
     }
 
     @Override
@@ -32,7 +32,7 @@ public record Framed(List<Block> blocks, float pad, Pen pen, float shade) implem
     }
 
     @Override
-    public void draw(Canvas canvas, float left, float top, float width) {
+    public void draw(PageCanvas canvas, float left, float top, float width) {
         float h = height(width);
         if (shade < 1f) {
             canvas.fillRect(left, top - h, width, h, shade);

@@ -15,7 +15,7 @@ public record Item(String label, Paragraph body, float gutter) implements Block 
     }
 
     @Override
-    public void draw(Canvas canvas, float left, float top, float width) {
+    public void draw(PageCanvas canvas, float left, float top, float width) {
         Paragraph label1 = new Paragraph(label, body.face(), body.size(), body.leading(), 0);
         label1.draw(canvas, left, top, gutter);
         body.draw(canvas, left + gutter, top, width - gutter);

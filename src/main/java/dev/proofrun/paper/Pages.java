@@ -37,7 +37,7 @@ public final class Pages implements AutoCloseable {
     private final PageHeading heading;
     private final Typeface regular;
     private final Typeface bold;
-    private Canvas canvas;
+    private PageCanvas canvas;
 
     private Pages(Paper paper, PageHeading heading) {
         this.paper = paper;
@@ -64,12 +64,12 @@ public final class Pages implements AutoCloseable {
     }
 
     /** Starts a new page and returns its canvas (the previous page's canvas is closed). */
-    public Canvas newPage() {
+    public PageCanvas newPage() {
         closeCanvas();
         PDPage page = new PDPage(paper.mediaBox());
         document.addPage(page);
         try {
-            canvas = new Canvas(new PDPageContentStream(document, page, AppendMode.APPEND, true, true));
+            canvas = new PageCanvas(new PDPageContentStream(document, page, AppendMode.APPEND, true, true));
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }
@@ -77,7 +77,7 @@ public final class Pages implements AutoCloseable {
     }
 
     /** The canvas of the current page; starts the first page if there is none yet. */
-    public Canvas canvas() {
+    public PageCanvas canvas() {
         return canvas == null ? newPage() : canvas;
     }
 
@@ -125,11 +125,11 @@ public final class Pages implements AutoCloseable {
             int pages = document.getNumberOfPages();
             for (int i = 0; i < pages; i++) {
                 PDPage page = document.getPage(i);
-                try (Canvas c = new Canvas(new PDPageContentStream(document, page, AppendMode.APPEND, true, true))) {
+                try (PageCanvas c = new PageCanvas(new PDPageContentStream(document, page, AppendMode.APPEND, true, true))) {
                     decorate(c, i + 1, pages);
                 }
                 if (heading.draft()) {
-                    try (Canvas c = new Canvas(new PDPageContentStream(document, page, AppendMode.PREPEND, true, true))) {
+                    try (PageCanvas c = new PageCanvas(new PDPageContentStream(document, page, AppendMode.PREPEND, true, true))) {
                         draftMark(c);
                     }
                 }
@@ -146,7 +146,7 @@ public final class Pages implements AutoCloseable {
         }
     }
 
-    private void decorate(Canvas c, int page, int pages) {
+    private void decorate(PageCanvas c, int page, int pages) {
         float top = paper.height() - MARGIN;
         float left = bodyLeft();
         float right = bodyRight();
@@ -154,24 +154,24 @@ public final class Pages implements AutoCloseable {
         float titleBase = top - bold.ascent(TITLE_SIZE);
         float identityWidth = bold.width(heading.identity(), 10f);
         float titleRoom = right - left - identityWidth - 12;
-        c.text(bold, TITLE_SIZE, left, titleBase, Text.fit(heading.title(), bold, TITLE_SIZE, titleRoom));
+        c.text(bold, TITLE_SIZE, left, titleBase, LineBreaker.fit(heading.title(), bold, TITLE_SIZE, titleRoom));
         c.textRight(bold, 10f, right, titleBase, heading.identity());
-        c.text(regular, SMALL + 1, left, titleBase - 13, Text.fit(heading.subtitle(), regular, SMALL + 1, right - left));
-        c.pen(Pen.RULE);
+        c.text(regular, SMALL + 1, left, titleBase - 13, LineBreaker.fit(heading.subtitle(), regular, SMALL + 1, right - left));
+        c.pen(LineStyle.RULE);
         float rule = top - HEAD + 6;
         c.line(left, rule, right, rule);
 
         float footRule = MARGIN + FOOT - 6;
-        c.pen(Pen.HAIR);
+        c.pen(LineStyle.HAIR);
         c.line(left, footRule, right, footRule);
         String pageText = String.format(Locale.ROOT, "page %d of %d", page, pages);
         float footBase = MARGIN + 2;
         c.textRight(bold, SMALL + 1, right, footBase, pageText);
         float room = right - left - bold.width(pageText, SMALL + 1) - 12;
-        c.text(regular, SMALL, left, footBase, Text.fit(heading.footnote(), regular, SMALL, room));
+        c.text(regular, SMALL, left, footBase, LineBreaker.fit(heading.footnote(), regular, SMALL, room));
     }
 
-    private void draftMark(Canvas c) {
+    private void draftMark(PageCanvas c) {
         float size = 120f;
         String word = "DRAFT";
         double angle = Math.atan2(paper.height(), paper.width());

@@ -26,7 +26,7 @@ public record Paragraph(String text, Typeface face, float size, float leading, f
     }
 
     private List<String> lines(float width) {
-        return Text.wrap(text, face, size, width - indent);
+        return LineBreaker.wrap(text, face, size, width - indent);
     }
 
     /**
@@ -50,7 +50,7 @@ public record Paragraph(String text, Typeface face, float size, float leading, f
     }
 
     @Override
-    public void draw(Canvas canvas, float left, float top, float width) {
+    public void draw(PageCanvas canvas, float left, float top, float width) {
         float baseline = top - face.ascent(size) - (leading * size - face.ascent(size) - face.descent(size)) / 2;
         for (String line : lines(width)) {
             canvas.text(face, size, left + indent, baseline, line);

@@ -83,9 +83,9 @@ public final class PlotArea {
     }
 
     /** Frame, ticks and tick labels on the left and bottom axes, in the given face at 7.5 pt. */
-    public void axes(Canvas c, Typeface face, boolean xTicks) {
+    public void axes(PageCanvas c, Typeface face, boolean xTicks) {
         float size = 7.5f;
-        c.pen(Pen.HAIR);
+        c.pen(LineStyle.HAIR);
         c.rect(left, bottom, width, height);
         List<Double> ys = ticks(yMin, yMax, 5);
         for (double t : ys) {
@@ -104,7 +104,7 @@ public final class PlotArea {
     }
 
     /** A horizontal line across the area at a data value, with a label at the right end. */
-    public void hline(Canvas c, Pen pen, double value, Typeface face, String label) {
+    public void hline(PageCanvas c, LineStyle pen, double value, Typeface face, String label) {
         c.pen(pen);
         float py = y(value);
         c.line(left, py, right(), py);
@@ -114,7 +114,7 @@ public final class PlotArea {
     }
 
     /** A vertical line across the area at a data value, with a label above the top. */
-    public void vline(Canvas c, Pen pen, double value, Typeface face, String label) {
+    public void vline(PageCanvas c, LineStyle pen, double value, Typeface face, String label) {
         c.pen(pen);
         float px = x(value);
         c.line(px, bottom, px, top());

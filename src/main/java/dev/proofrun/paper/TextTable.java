@@ -144,7 +144,7 @@ public final class TextTable {
                 float[] w = widths(width);
                 lines = new ArrayList<>();
                 for (int i = 0; i < w.length; i++) {
-                    lines.add(Text.wrap(cells.get(i), face, size, Math.max(1, w[i] - 2 * PAD)));
+                    lines.add(LineBreaker.wrap(cells.get(i), face, size, Math.max(1, w[i] - 2 * PAD)));
                 }
                 laidOutWidth = width;
             }
@@ -161,13 +161,13 @@ public final class TextTable {
         }
 
         @Override
-        public void draw(Canvas canvas, float left, float top, float width) {
+        public void draw(PageCanvas canvas, float left, float top, float width) {
             float h = height(width);
             float[] w = widths(width);
             if (head) {
                 canvas.fillRect(left, top - h, width, h, HEADER_GRAY);
             }
-            canvas.pen(Pen.HAIR);
+            canvas.pen(LineStyle.HAIR);
             float x = left;
             for (int i = 0; i < w.length; i++) {
                 canvas.rect(x, top - h, w[i], h);

@@ -4,7 +4,7 @@
  * <ul>
  * <li>{@code StudyPlan} (part, people, characteristics, calendar, span, design, spacing, seed, schedule,
  * state, revision, supersedes); {@code reference()} is {@code id@revision} as the fill-in files carry it.
- * One design per plan: {@code CommonDesign.choose} takes a given n and k as they are, else solves with
+ * One design per plan: {@code PlanDesign.choose} takes a given n and k as they are, else solves with
  * {@code design.SharedDesigner} (the n with the fewest readings wins).</li>
  * <li>The file: JSON, UTF-8, two-space indent, LF; property order fixed by the records in {@code PlanJson},
  * converted by {@code PlanCodec}. {@code PlanFiles.read} checks format and version, refuses unknown fields and

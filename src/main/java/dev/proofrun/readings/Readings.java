@@ -12,7 +12,7 @@ import java.util.Objects;
  * @param subgroups the subgroups (read-only list; the arrays are not copied)
  * @param count     the number of readings
  */
-public record Readings(String file, Layout layout, List<double[]> subgroups, long count) {
+public record Readings(String file, SubgroupLayout layout, List<double[]> subgroups, long count) {
 
     public Readings {
         Objects.requireNonNull(file, "file");

@@ -107,13 +107,13 @@ public final class ReadingsCsv {
         Integer label = columns.get("subgroup");
         if (value != null) {
             if (label != null) {
-                requireNoSize(name, subgroupSize, Layout.LABELLED);
+                requireNoSize(name, subgroupSize, SubgroupLayout.LABELLED);
                 return labelled(name, records, header, value, label);
             }
             return values(name, records, header, value, subgroupSize);
         }
         if (columns.containsKey("x1")) {
-            requireNoSize(name, subgroupSize, Layout.WIDE);
+            requireNoSize(name, subgroupSize, SubgroupLayout.WIDE);
             return wide(name, records, header, columns);
         }
         throw new UserException(Location.cell(name, header.getRecordNumber(), null), ReadingsMessage.NO_HEADER);
@@ -151,7 +151,7 @@ public final class ReadingsCsv {
         for (int i = 0; i < count; i += size) {
             groups.add(Arrays.copyOfRange(xs, i, i + size));
         }
-        return new Readings(name, Layout.VALUES, groups, count);
+        return new Readings(name, SubgroupLayout.VALUES, groups, count);
     }
 
     private static Readings labelled(String name, Iterator<CSVRecord> records, CSVRecord header, int value, int label) {
@@ -184,7 +184,7 @@ public final class ReadingsCsv {
         requireTwo(name, count);
         List<double[]> list = new ArrayList<>(groups.size());
         groups.forEach((k, g) -> list.add(Arrays.copyOf(g, sizes.get(k))));
-        return new Readings(name, Layout.LABELLED, list, count);
+        return new Readings(name, SubgroupLayout.LABELLED, list, count);
     }
 
     private static Readings wide(String name, Iterator<CSVRecord> records, CSVRecord header, Map<String, Integer> columns) {
@@ -225,7 +225,7 @@ public final class ReadingsCsv {
             count += n;
         }
         requireTwo(name, count);
-        return new Readings(name, Layout.WIDE, groups, count);
+        return new Readings(name, SubgroupLayout.WIDE, groups, count);
     }
 
     private static Map<String, Integer> columns(String name, CSVRecord header) {
@@ -293,7 +293,7 @@ public final class ReadingsCsv {
         }
     }
 
-    private static void requireNoSize(String name, OptionalInt subgroupSize, Layout layout) {
+    private static void requireNoSize(String name, OptionalInt subgroupSize, SubgroupLayout layout) {
         if (subgroupSize.isPresent()) {
             throw new UserException(Location.file(name), ReadingsMessage.SIZE_WITH_SUBGROUPS, layout.description());
         }

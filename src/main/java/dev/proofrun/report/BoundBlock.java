@@ -1,8 +1,8 @@
 package dev.proofrun.report;
 
 import dev.proofrun.grade.IndexEvidence;
-import dev.proofrun.paper.Canvas;
-import dev.proofrun.paper.Pen;
+import dev.proofrun.paper.PageCanvas;
+import dev.proofrun.paper.LineStyle;
 import dev.proofrun.paper.PlotArea;
 import dev.proofrun.paper.Typeface;
 
@@ -39,7 +39,7 @@ final class BoundBlock extends PlotBlock {
     }
 
     @Override
-    void drawPlot(Canvas c, float left, float top, float width) {
+    void drawPlot(PageCanvas c, float left, float top, float width) {
         if (notValid) {
             c.text(bold, 7.5f, left + AXIS_LABELS, top - 8,
                     "Not valid: these figures describe the study's past, not the process.");
@@ -50,12 +50,12 @@ final class BoundBlock extends PlotBlock {
         double hi = max(e.upper(), e.required(), e.estimate());
         double pad = (hi - lo) * 0.12 + 0.05;
         PlotArea area = plotArea(left, top, width, MARGIN, SCALE_FOOT, SCALE_HEIGHT, lo - pad, hi + pad, 0, 1);
-        c.pen(Pen.HAIR);
+        c.pen(LineStyle.HAIR);
         c.line(area.left(), area.bottom(), area.right(), area.bottom());
         for (double t : PlotArea.ticks(lo - pad, hi + pad, 8)) {
             float x = area.x(t);
             c.line(x, area.bottom() - 3, x, area.bottom());
-            c.textCentred(regular, 7.5f, x, area.bottom() - 11, Fmt.index(t));
+            c.textCentred(regular, 7.5f, x, area.bottom() - 11, ReportNumbers.index(t));
         }
         float mid = area.y(0.5);
         // the bar runs from the lower bound (what the verdict compares with c0) to the upper bound when it was
@@ -63,27 +63,27 @@ final class BoundBlock extends PlotBlock {
         boolean hasUpper = Double.isFinite(e.upper());
         if (Double.isFinite(e.lower())) {
             double end = hasUpper ? e.upper() : e.estimate();
-            c.pen(Pen.solid(2.2f));
+            c.pen(LineStyle.solid(2.2f));
             c.line(area.x(e.lower()), mid, area.x(end), mid);
-            c.pen(Pen.solid(0.9f));
+            c.pen(LineStyle.solid(0.9f));
             c.line(area.x(e.lower()), mid - 5, area.x(e.lower()), mid + 5);
-            c.textCentred(regular, 7.5f, area.x(e.lower()), mid + 8, "lower " + Fmt.index(e.lower()));
+            c.textCentred(regular, 7.5f, area.x(e.lower()), mid + 8, "lower " + ReportNumbers.index(e.lower()));
             if (hasUpper) {
                 c.line(area.x(e.upper()), mid - 5, area.x(e.upper()), mid + 5);
-                c.textCentred(regular, 7.5f, area.x(e.upper()), mid + 8, "upper " + Fmt.index(e.upper()));
+                c.textCentred(regular, 7.5f, area.x(e.upper()), mid + 8, "upper " + ReportNumbers.index(e.upper()));
             }
         }
-        c.marker(Canvas.Marker.SQUARE, area.x(e.estimate()), mid, 5f);
-        c.pen(Pen.dashed(1.4f, 3, 1.5f));
+        c.marker(PageCanvas.Marker.SQUARE, area.x(e.estimate()), mid, 5f);
+        c.pen(LineStyle.dashed(1.4f, 3, 1.5f));
         float rx = area.x(e.required());
         // the requirement's label sits above the bounds' labels, so the two never overlap
         c.line(rx, area.bottom(), rx, area.top() + 13);
-        c.text(bold, 7.5f, rx + 3, area.top() + 10, "required " + sym + " \u2265 " + Fmt.index(e.required()));
+        c.text(bold, 7.5f, rx + 3, area.top() + 10, "required " + sym + " \u2265 " + ReportNumbers.index(e.required()));
         c.text(regular, 7.5f, left, mid - 2.6f, sym);
-        String conf = Fmt.fixed(e.confidence() * 100, 0) + " %";
+        String conf = ReportNumbers.fixed(e.confidence() * 100, 0) + " %";
         String bar = hasUpper ? "bar: lower to upper " + conf + " bound (each one-sided)"
                 : "bar: lower " + conf + " bound (one-sided) to the estimate";
-        caption(c, area, top, "square: estimate " + Fmt.index(e.estimate()) + "; " + bar + "; dashed: the requirement");
+        caption(c, area, top, "square: estimate " + ReportNumbers.index(e.estimate()) + "; " + bar + "; dashed: the requirement");
     }
 
     private static double min(double... v) {

@@ -1,9 +1,9 @@
 package dev.proofrun.report;
 
 import dev.proofrun.control.ControlChart;
-import dev.proofrun.control.Signal;
-import dev.proofrun.paper.Canvas;
-import dev.proofrun.paper.Pen;
+import dev.proofrun.control.RuleFiring;
+import dev.proofrun.paper.PageCanvas;
+import dev.proofrun.paper.LineStyle;
 import dev.proofrun.paper.PlotArea;
 import dev.proofrun.paper.Typeface;
 import java.util.BitSet;
@@ -29,7 +29,7 @@ final class ControlChartBlock extends PlotBlock {
     }
 
     @Override
-    void drawPlot(Canvas c, float left, float top, float width) {
+    void drawPlot(PageCanvas c, float left, float top, float width) {
         double[] pts = chart.points();
         int count = pts.length;
         double lo = Math.min(chart.lcl(), chart.center());
@@ -49,20 +49,20 @@ final class ControlChartBlock extends PlotBlock {
                 lo - pad, hi + pad);
         area.axes(c, regular, true);
         boolean varying = varies(chart.pointUcl()) || varies(chart.pointLcl());
-        Pen limit = Pen.dashed(0.8f, 4, 2);
+        LineStyle limit = LineStyle.dashed(0.8f, 4, 2);
         if (varying) {
             steps(c, area, chart.pointUcl(), first, limit);
             steps(c, area, chart.pointLcl(), first, limit);
             c.text(regular, 7.5f, area.right() + 3, area.y(chart.ucl()) - 2.6f, "UCL varies");
         } else {
-            int d = Fmt.decimalsForSpan(chart.ucl() - chart.lcl());
-            area.hline(c, limit, chart.ucl(), regular, "UCL " + Fmt.value(chart.ucl(), d));
-            area.hline(c, limit, chart.lcl(), regular, "LCL " + Fmt.value(chart.lcl(), d));
+            int d = ReportNumbers.decimalsForSpan(chart.ucl() - chart.lcl());
+            area.hline(c, limit, chart.ucl(), regular, "UCL " + ReportNumbers.value(chart.ucl(), d));
+            area.hline(c, limit, chart.lcl(), regular, "LCL " + ReportNumbers.value(chart.lcl(), d));
         }
-        int dc = varying ? -1 : Fmt.decimalsForSpan(chart.ucl() - chart.lcl());
-        area.hline(c, Pen.solid(0.6f), chart.center(), regular, "CL " + Fmt.value(chart.center(), dc));
+        int dc = varying ? -1 : ReportNumbers.decimalsForSpan(chart.ucl() - chart.lcl());
+        area.hline(c, LineStyle.solid(0.6f), chart.center(), regular, "CL " + ReportNumbers.value(chart.center(), dc));
 
-        c.pen(Pen.solid(0.5f));
+        c.pen(LineStyle.solid(0.5f));
         if (count <= DETAIL) {
             double[] xs = new double[count];
             double[] ys = new double[count];
@@ -73,7 +73,7 @@ final class ControlChartBlock extends PlotBlock {
             c.polyline(xs, ys);
             for (int i = 0; i < count; i++) {
                 if (Double.isFinite(pts[i])) {
-                    c.marker(Canvas.Marker.DOT, (float) xs[i], (float) ys[i], count > 200 ? 1.2f : 2.2f);
+                    c.marker(PageCanvas.Marker.DOT, (float) xs[i], (float) ys[i], count > 200 ? 1.2f : 2.2f);
                 }
             }
         } else {
@@ -90,12 +90,12 @@ final class ControlChartBlock extends PlotBlock {
             }
         }
         BitSet flagged = new BitSet(count);
-        for (Signal s : chart.signals()) {
+        for (RuleFiring s : chart.signals()) {
             flagged.set(s.index());
         }
-        c.pen(Pen.solid(0.9f));
+        c.pen(LineStyle.solid(0.9f));
         for (int i = flagged.nextSetBit(0); i >= 0; i = flagged.nextSetBit(i + 1)) {
-            c.marker(Canvas.Marker.RING, area.x(first + i), area.y(pts[i]), 6.5f);
+            c.marker(PageCanvas.Marker.RING, area.x(first + i), area.y(pts[i]), 6.5f);
         }
         caption(c, area, top, "subgroup; ring: a run rule fired at this point (" + flagged.cardinality() + " of "
                 + count + ")");
@@ -113,7 +113,7 @@ final class ControlChartBlock extends PlotBlock {
         return false;
     }
 
-    private static void steps(Canvas c, PlotArea area, double[] v, int first, Pen pen) {
+    private static void steps(PageCanvas c, PlotArea area, double[] v, int first, LineStyle pen) {
         double[] xs = new double[2 * v.length];
         double[] ys = new double[2 * v.length];
         for (int i = 0; i < v.length; i++) {

@@ -1,7 +1,7 @@
 package dev.proofrun.report;
 
 import dev.proofrun.capability.CapabilityResult;
-import dev.proofrun.grade.ChartSignal;
+import dev.proofrun.grade.SlotSignal;
 import dev.proofrun.grade.CharacteristicGrade;
 import dev.proofrun.grade.Completeness;
 import dev.proofrun.grade.ModelFit;
@@ -45,7 +45,7 @@ final class EvidenceSection {
     void place(Flow flow, CharacteristicGrade g, double nominal, double step) {
         flow.newPage();
         String unit = g.unit() == null || g.unit().isEmpty() ? "" : " (" + g.unit() + ")";
-        flow.place(Paragraph.of(g.id() + "  " + Fmt.name(g.name()) + unit, bold, 14));
+        flow.place(Paragraph.of(g.id() + "  " + ReportNumbers.name(g.name()) + unit, bold, 14));
         flow.gap(2);
         flow.place(new VerdictBadge(g.verdict(), "", regular, bold, 11));
         flow.gap(2);
@@ -80,13 +80,13 @@ final class EvidenceSection {
             s.add(t.header());
             // in words a reader takes in: "about 0.4 expected", "below 0.0005", not "(by chance 0.4)", "< 0.00050"
             s.add(t.row("location points signalling", st.locationSignalPoints() + " (about "
-                    + Fmt.fixed(st.expectedLocationByChance(), 1) + " expected)", "chance of as many if stable",
+                    + ReportNumbers.fixed(st.expectedLocationByChance(), 1) + " expected)", "chance of as many if stable",
                     chance(st.locationAtFloor(), st.locationChance())));
             s.add(t.row("spread points beyond limits", st.spreadSignalPoints() + " (about "
-                    + Fmt.fixed(st.expectedSpreadByChance(), 1) + " expected)", "chance of as many if stable",
+                    + ReportNumbers.fixed(st.expectedSpreadByChance(), 1) + " expected)", "chance of as many if stable",
                     chance(st.spreadAtFloor(), st.spreadChance())));
-            s.add(t.row("\u03c3 overall / \u03c3 within", Fmt.fixed(st.stabilityRatio(), 3), "ANOVA F (p)",
-                    st.anovaF().isPresent() ? Fmt.fixed(st.anovaF().getAsDouble(), 2) + " (" + Fmt.p(st.anovaP().orElse(Double.NaN)) + ")" : Fmt.NONE));
+            s.add(t.row("\u03c3 overall / \u03c3 within", ReportNumbers.fixed(st.stabilityRatio(), 3), "ANOVA F (p)",
+                    st.anovaF().isPresent() ? ReportNumbers.fixed(st.anovaF().getAsDouble(), 2) + " (" + ReportNumbers.p(st.anovaP().orElse(Double.NaN)) + ")" : ReportNumbers.NONE));
             if (!st.signals().isEmpty()) {
                 s.add(Block.space(3));
                 s.add(Paragraph.of("Signals by rule: " + signals(st.signals()), regular, 8.5f));
@@ -108,9 +108,9 @@ final class EvidenceSection {
                     regular, bold, 8);
             h.add(t.header());
             for (ModelFit f : sh.fits()) {
-                h.add(t.row(f.model().id(), Fmt.value(f.first()), Fmt.value(f.second()),
-                        Fmt.fixed(sh.andersonDarling(), 3), (f.fits() ? "yes" : "no")
-                                + (Double.isNaN(sh.pValue()) ? "" : ", p " + Fmt.p(sh.pValue()))));
+                h.add(t.row(f.model().id(), ReportNumbers.value(f.first()), ReportNumbers.value(f.second()),
+                        ReportNumbers.fixed(sh.andersonDarling(), 3), (f.fits() ? "yes" : "no")
+                                + (Double.isNaN(sh.pValue()) ? "" : ", p " + ReportNumbers.p(sh.pValue()))));
             }
             h.add(Paragraph.of("The plan declares the " + sh.family().token() + " shape; only that model is fitted"
                     + (sh.modelFits() ? "." : ", and it does not fit these readings."), regular, 8.5f));
@@ -132,8 +132,8 @@ final class EvidenceSection {
             figures.add(t.header());
             IndexKind required = g.judged() == null ? null : g.judged().index();
             if (required != null) {
-                figures.add(t.row(required.symbol(), Fmt.index(g.judged().estimate()), Fmt.index(g.judged().lower()),
-                        "required \u2265 " + Fmt.index(g.judged().required()) + ", as graded above"));
+                figures.add(t.row(required.symbol(), ReportNumbers.index(g.judged().estimate()), ReportNumbers.index(g.judged().lower()),
+                        "required \u2265 " + ReportNumbers.index(g.judged().required()) + ", as graded above"));
             }
             for (IndexKind kind : OTHERS) {
                 if (kind == required || f.indices().of(kind).isEmpty()) {
@@ -141,15 +141,15 @@ final class EvidenceSection {
                 }
                 figures.add(t.row(kind.symbol(), ix(f.indices().of(kind)), ix(lowerOf(f, kind)), ""));
             }
-            f.indices().cpm().ifPresent(v -> figures.add(t.row("Cpm", Fmt.index(v), Fmt.NONE, "with the nominal as target")));
+            f.indices().cpm().ifPresent(v -> figures.add(t.row("Cpm", ReportNumbers.index(v), ReportNumbers.NONE, "with the nominal as target")));
             figures.add(Block.space(4));
             String size = f.subgroupSize().isPresent() ? " of " + f.subgroupSize().getAsInt() : "";
             figures.add(Paragraph.of(String.format(Locale.ROOT,
                     "Mean %s, \u03c3 within %s (%s), \u03c3 overall %s from %d readings in %d subgroups%s. The "
                             + "other indices are normal-model figures on the readings' own scale, lower bounds at "
                             + "%s %% confidence.",
-                    Fmt.value(f.mean()), Fmt.value(f.within().value()), f.within().method().token(),
-                    Fmt.value(f.sigmaOverall()), f.readings(), f.subgroups(), size, Fmt.fixed(f.confidence() * 100, 0)),
+                    ReportNumbers.value(f.mean()), ReportNumbers.value(f.within().value()), f.within().method().token(),
+                    ReportNumbers.value(f.sigmaOverall()), f.readings(), f.subgroups(), size, ReportNumbers.fixed(f.confidence() * 100, 0)),
                     regular, 8.5f));
             k.add(Block.stack(figures));
         }
@@ -182,11 +182,11 @@ final class EvidenceSection {
         if (atFloor) {
             return Stability.below(p);
         }
-        return p < 0.001 ? "below 0.001" : Fmt.p(p);
+        return p < 0.001 ? "below 0.001" : ReportNumbers.p(p);
     }
 
     private static String ix(java.util.OptionalDouble v) {
-        return v.isPresent() ? Fmt.index(v.getAsDouble()) : Fmt.NONE;
+        return v.isPresent() ? ReportNumbers.index(v.getAsDouble()) : ReportNumbers.NONE;
     }
 
     private TextTable table() {
@@ -234,7 +234,7 @@ final class EvidenceSection {
     }
 
     /** One entry per pattern (a run of one rule over consecutive subgroups), as the reasons say it. */
-    private static String signals(List<ChartSignal> signals) {
+    private static String signals(List<SlotSignal> signals) {
         return dev.proofrun.grade.SignalPatterns.describe(signals);
     }
 

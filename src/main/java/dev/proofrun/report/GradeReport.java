@@ -54,8 +54,8 @@ public final class GradeReport {
      * @param stamp when and by which version the grade was made
      */
     public static void write(GradeResult result, StudyPlan plan, Paper paper, ReportStamp stamp, OutputStream out) {
-        PageHeading heading = new PageHeading(Fmt.name(plan.part().name()),
-                "Grade report: returned file " + Fmt.fileName(result.file()),
+        PageHeading heading = new PageHeading(ReportNumbers.name(plan.part().name()),
+                "Grade report: returned file " + ReportNumbers.fileName(result.file()),
                 "Plan " + result.planId() + ", " + revision(result, plan),
                 "Part verdict: " + result.verdict().words() + ". " + stamp.line()
                         + ". Not an approval; see page 1.",

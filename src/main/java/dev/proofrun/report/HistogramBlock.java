@@ -1,7 +1,7 @@
 package dev.proofrun.report;
 
-import dev.proofrun.paper.Canvas;
-import dev.proofrun.paper.Pen;
+import dev.proofrun.paper.PageCanvas;
+import dev.proofrun.paper.LineStyle;
 import dev.proofrun.paper.PlotArea;
 import dev.proofrun.paper.Typeface;
 import dev.proofrun.stats.SpecLimits;
@@ -39,7 +39,7 @@ final class HistogramBlock extends PlotBlock {
     }
 
     @Override
-    void drawPlot(Canvas c, float left, float top, float width) {
+    void drawPlot(PageCanvas c, float left, float top, float width) {
         Histogram h = Histogram.of(readings, limits, nominal, step, curve);
         PlotArea area = plotArea(left, top, width, MARGIN, FOOT, HEIGHT - 48, h.lo(), h.hi(), 0, h.yMax());
         for (int i = 0; i < h.counts().length; i++) {
@@ -50,7 +50,7 @@ final class HistogramBlock extends PlotBlock {
             float x1 = area.x(h.edge(i + 1));
             float y1 = area.y(h.counts()[i]);
             c.fillRect(x0, area.bottom(), x1 - x0, y1 - area.bottom(), 0.85f);
-            c.pen(Pen.HAIR);
+            c.pen(LineStyle.HAIR);
             c.rect(x0, area.bottom(), x1 - x0, y1 - area.bottom());
         }
         area.axes(c, regular, true);
@@ -61,13 +61,13 @@ final class HistogramBlock extends PlotBlock {
             px[i] = area.x(h.curveX()[i]);
             py[i] = Double.isFinite(h.curveY()[i]) && h.curveY()[i] <= h.yMax() ? area.y(h.curveY()[i]) : Double.NaN;
         }
-        c.pen(Pen.solid(1.1f));
+        c.pen(LineStyle.solid(1.1f));
         c.polyline(px, py);
-        Pen limit = Pen.solid(1.6f);
-        limits.lower().ifPresent(v -> area.vline(c, limit, v, bold, "LSL " + Fmt.value(v)));
-        limits.upper().ifPresent(v -> area.vline(c, limit, v, bold, "USL " + Fmt.value(v)));
+        LineStyle limit = LineStyle.solid(1.6f);
+        limits.lower().ifPresent(v -> area.vline(c, limit, v, bold, "LSL " + ReportNumbers.value(v)));
+        limits.upper().ifPresent(v -> area.vline(c, limit, v, bold, "USL " + ReportNumbers.value(v)));
         if (Double.isFinite(nominal)) {
-            area.vline(c, Pen.dashed(0.6f, 1, 2), nominal, regular, null);
+            area.vline(c, LineStyle.dashed(0.6f, 1, 2), nominal, regular, null);
         }
         caption(c, area, top, h.caption());
     }

@@ -39,14 +39,14 @@ final class NonconformingWords {
         }
         OptionalDouble bound = e.model() == ShapeModel.NORMAL && e.method() == IndexMethod.NORMAL_THEORY
                 ? Nonconforming.upperPpm(e.index(), g.limits(), e.lower()) : OptionalDouble.empty();
-        String conf = Fmt.fixed(e.confidence() * 100, 0);
+        String conf = ReportNumbers.fixed(e.confidence() * 100, 0);
         if (bound.isPresent()) {
             return String.format(Locale.ROOT, "Nonconforming parts: at most %s ppm outside the tolerance at %s %% "
                     + "confidence (from the lower bound of %s under the normal model); %s.",
-                    Fmt.ppm(bound.getAsDouble()), conf, e.index().symbol(), counted);
+                    ReportNumbers.ppm(bound.getAsDouble()), conf, e.index().symbol(), counted);
         }
         String expected = Double.isFinite(e.expectedPpm()) ? String.format(Locale.ROOT,
-                "; about %s ppm expected under the fitted %s model", Fmt.ppm(e.expectedPpm()), e.model().id()) : "";
+                "; about %s ppm expected under the fitted %s model", ReportNumbers.ppm(e.expectedPpm()), e.model().id()) : "";
         return String.format(Locale.ROOT, "Nonconforming parts: %s%s. No upper bound is stated: %s.", counted,
                 expected, e.model() == ShapeModel.NORMAL ? "the required " + e.index().symbol()
                         + " does not bound the fraction outside" : "under the " + e.model().id()

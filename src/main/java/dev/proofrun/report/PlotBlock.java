@@ -1,7 +1,7 @@
 package dev.proofrun.report;
 
 import dev.proofrun.paper.Block;
-import dev.proofrun.paper.Canvas;
+import dev.proofrun.paper.PageCanvas;
 import dev.proofrun.paper.PlotArea;
 import dev.proofrun.paper.Typeface;
 
@@ -42,7 +42,7 @@ abstract class PlotBlock implements Block {
     }
 
     @Override
-    public final void draw(Canvas c, float left, float top, float width) {
+    public final void draw(PageCanvas c, float left, float top, float width) {
         if (title != null) {
             c.text(bold, 8.5f, left, top - 9, title);
         }
@@ -50,7 +50,7 @@ abstract class PlotBlock implements Block {
     }
 
     /** Draws the chart's content below its title; same arguments as {@link #draw}. */
-    abstract void drawPlot(Canvas c, float left, float top, float width);
+    abstract void drawPlot(PageCanvas c, float left, float top, float width);
 
     /**
      * The plot area of a frame whose top edge is {@code top}: {@value #AXIS_LABELS} pt in from the left,
@@ -64,7 +64,7 @@ abstract class PlotBlock implements Block {
     }
 
     /** The caption, on the last line of the frame whose top edge is {@code top}, starting under the plot area. */
-    final void caption(Canvas c, PlotArea area, float top, String text) {
+    final void caption(PageCanvas c, PlotArea area, float top, String text) {
         c.text(regular, 7.5f, area.left(), top - height + 1, text);
     }
 }

@@ -1,7 +1,7 @@
 package dev.proofrun.report;
 
-import dev.proofrun.paper.Canvas;
-import dev.proofrun.paper.Pen;
+import dev.proofrun.paper.PageCanvas;
+import dev.proofrun.paper.LineStyle;
 import dev.proofrun.paper.PlotArea;
 import dev.proofrun.paper.Typeface;
 import java.util.Arrays;
@@ -27,7 +27,7 @@ final class ProbabilityPlotBlock extends PlotBlock {
     }
 
     @Override
-    void drawPlot(Canvas c, float left, float top, float width) {
+    void drawPlot(PageCanvas c, float left, float top, float width) {
         double[] sorted = readings.clone();
         Arrays.sort(sorted);
         int n = sorted.length;
@@ -55,12 +55,12 @@ final class ProbabilityPlotBlock extends PlotBlock {
         PlotArea area = plotArea(left, top, width, MARGIN, FOOT, HEIGHT - 38, qLo - qPad, qHi + qPad, yLo - pad,
                 yHi + pad);
         area.axes(c, regular, true);
-        c.pen(Pen.solid(1f));
+        c.pen(LineStyle.solid(1f));
         c.line(area.x(qLo - qPad), area.y(curve.line(qLo - qPad)), area.x(qHi + qPad), area.y(curve.line(qHi + qPad)));
-        c.pen(Pen.solid(0.5f));
+        c.pen(LineStyle.solid(0.5f));
         for (int j = 0; j < shown; j++) {
             if (Double.isFinite(y[j])) {
-                c.marker(Canvas.Marker.RING, area.x(q[j]), area.y(y[j]), shown > 300 ? 2f : 3f);
+                c.marker(PageCanvas.Marker.RING, area.x(q[j]), area.y(y[j]), shown > 300 ? 2f : 3f);
             }
         }
         String[] names = curve.axisNames();

@@ -2,9 +2,9 @@ package dev.proofrun.report;
 
 import dev.proofrun.grade.Verdict;
 import dev.proofrun.paper.Block;
-import dev.proofrun.paper.Canvas;
+import dev.proofrun.paper.PageCanvas;
 import dev.proofrun.paper.Paragraph;
-import dev.proofrun.paper.Pen;
+import dev.proofrun.paper.LineStyle;
 import dev.proofrun.paper.Typeface;
 
 /**
@@ -57,10 +57,10 @@ record VerdictBadge(Verdict verdict, String text, Typeface face, Typeface bold, 
     }
 
     @Override
-    public void draw(Canvas c, float left, float top, float width) {
+    public void draw(PageCanvas c, float left, float top, float width) {
         float h = badgeHeight();
         float bottom = top - h;
-        c.pen(Pen.solid(0.9f));
+        c.pen(LineStyle.solid(0.9f));
         c.rect(left, bottom, badgeWidth(), h);
         float s = shapeSize();
         float cx = left + PAD + s / 2;
@@ -74,26 +74,26 @@ record VerdictBadge(Verdict verdict, String text, Typeface face, Typeface bold, 
     }
 
     /** The verdict's shape, centred on (x, y), of the given size. */
-    static void drawShape(Canvas c, Verdict v, float x, float y, float size) {
+    static void drawShape(PageCanvas c, Verdict v, float x, float y, float size) {
         float r = size / 2;
         switch (v) {
-            case DEMONSTRATED -> c.marker(Canvas.Marker.DOT, x, y, size);
+            case DEMONSTRATED -> c.marker(PageCanvas.Marker.DOT, x, y, size);
             case INCONCLUSIVE -> {
-                c.pen(Pen.solid(1.1f));
-                c.marker(Canvas.Marker.RING, x, y, size - 1f);
+                c.pen(LineStyle.solid(1.1f));
+                c.marker(PageCanvas.Marker.RING, x, y, size - 1f);
             }
             case CONTINUE -> { // an open triangle pointing on: collect the next stage
-                c.pen(Pen.solid(1.1f));
+                c.pen(LineStyle.solid(1.1f));
                 c.polyline(new double[] {x - r, x + r, x - r, x - r}, new double[] {y + r, y, y - r, y + r});
             }
             case NOT_DEMONSTRATED -> {
-                c.pen(Pen.solid(1.1f));
+                c.pen(LineStyle.solid(1.1f));
                 c.polyline(new double[] {x - r, x + r, x, x - r}, new double[] {y + r, y + r, y - r, y + r});
             }
             default -> {
-                c.pen(Pen.solid(0.9f));
+                c.pen(LineStyle.solid(0.9f));
                 c.rect(x - r, y - r, size, size);
-                c.marker(Canvas.Marker.CROSS, x, y, size);
+                c.marker(PageCanvas.Marker.CROSS, x, y, size);
             }
         }
     }

@@ -12,7 +12,7 @@ import dev.proofrun.paper.Flow;
 import dev.proofrun.paper.Framed;
 import dev.proofrun.paper.Item;
 import dev.proofrun.paper.Paragraph;
-import dev.proofrun.paper.Pen;
+import dev.proofrun.paper.LineStyle;
 import dev.proofrun.paper.TextTable;
 import dev.proofrun.paper.TextTable.Column;
 import dev.proofrun.paper.Typeface;
@@ -57,10 +57,10 @@ final class VerdictSection {
     void place(Flow flow, GradeResult result, StudyPlan plan, ReportStamp stamp) {
         flow.place(Paragraph.of("Grade of the capability study", bold, 16));
         flow.gap(3);
-        flow.place(Paragraph.of("Part: " + Fmt.name(plan.part().name()) + (plan.part().number().isBlank() ? "" : "   No. "
-                + Fmt.name(plan.part().number())), bold, 10));
+        flow.place(Paragraph.of("Part: " + ReportNumbers.name(plan.part().name()) + (plan.part().number().isBlank() ? "" : "   No. "
+                + ReportNumbers.name(plan.part().number())), bold, 10));
         flow.place(Paragraph.of("Plan " + result.planId() + ", " + GradeReport.revision(result, plan) + ". Returned file: "
-                + Fmt.fileName(result.file()) + ".", regular, 9));
+                + ReportNumbers.fileName(result.file()) + ".", regular, 9));
         flow.place(Paragraph.of(stamp.line() + ".", regular, 9));
         flow.gap(8);
 
@@ -71,7 +71,7 @@ final class VerdictSection {
         result.look().ifPresent(l -> box.add(Paragraph.of(l.line(result.verdict()), bold, 9)));
         box.add(Block.space(6));
         for (CharacteristicGrade g : result.characteristics()) {
-            box.add(new VerdictBadge(g.verdict(), g.id() + "  " + Fmt.name(g.name()) + headline(g), bold, bold, 9.5f));
+            box.add(new VerdictBadge(g.verdict(), g.id() + "  " + ReportNumbers.name(g.name()) + headline(g), bold, bold, 9.5f));
             box.add(Block.space(1));
             for (Reason r : decisive(g)) {
                 box.add(new Item("\u2013", new Paragraph(r.text(), regular, 9, 1.3f, 0), 10));
@@ -80,7 +80,7 @@ final class VerdictSection {
         }
         box.add(Block.space(2));
         box.add(Paragraph.of(result.caution(), regular, 8.5f));
-        flow.place(new Framed(box, 8f, Pen.solid(1.4f), 0.96f));
+        flow.place(new Framed(box, 8f, LineStyle.solid(1.4f), 0.96f));
 
         flow.gap(10);
         signing(flow);
@@ -127,10 +127,10 @@ final class VerdictSection {
         if (g.verdict() == Verdict.NOT_VALID) {
             // an estimate beside "Not valid" would be read as a capability statement; the reasons say why not
             return String.format(Locale.ROOT, " (%s \u2265 %s required; no capability statement)",
-                    e.index().symbol(), Fmt.index(e.required()));
+                    e.index().symbol(), ReportNumbers.index(e.required()));
         }
         return String.format(Locale.ROOT, " (%s \u2265 %s required: estimate %s, lower bound %s; %s model, %s)",
-                e.index().symbol(), Fmt.index(e.required()), Fmt.index(e.estimate()), Fmt.index(e.lower()),
+                e.index().symbol(), ReportNumbers.index(e.required()), ReportNumbers.index(e.estimate()), ReportNumbers.index(e.lower()),
                 e.model().id(), e.method().words());
     }
 

@@ -5,7 +5,7 @@
  * then one section per characteristic ({@code EvidenceSection}): completeness, stability
  * ({@code ControlChartBlock}), shape ({@code HistogramBlock} with the fitted {@code ModelCurve},
  * {@code ProbabilityPlotBlock}) and capability ({@code BoundBlock}). The charts share their frame,
- * {@code PlotBlock}; chart limits print with one precision per chart ({@code Fmt}). Large studies are thinned
+ * {@code PlotBlock}; chart limits print with one precision per chart ({@code ReportNumbers}). Large studies are thinned
  * for drawing only. Look at one with
  * {@code mvn -o -q test -Dtest=GradeReportTest -Dproofrun.keepReport=/tmp/report.pdf} and {@code pdftoppm}.
  */

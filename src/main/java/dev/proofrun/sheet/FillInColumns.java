@@ -75,6 +75,6 @@ final class FillInColumns {
 
     /** The four prefilled cells of a row, as plain values (not yet made inert). */
     static List<String> prefilled(StudyPlan plan, Slot slot, Characteristic c) {
-        return List.of(plan.reference(), slot.id(), c.id(), Values.planned(slot.start()));
+        return List.of(plan.reference(), slot.id(), c.id(), SheetNumbers.planned(slot.start()));
     }
 }

@@ -9,7 +9,7 @@ import dev.proofrun.paper.Framed;
 import dev.proofrun.paper.Item;
 import dev.proofrun.paper.Pages;
 import dev.proofrun.paper.Paragraph;
-import dev.proofrun.paper.Pen;
+import dev.proofrun.paper.LineStyle;
 import dev.proofrun.paper.TextTable;
 import dev.proofrun.paper.TextTable.Column;
 import dev.proofrun.paper.Typeface;
@@ -60,9 +60,9 @@ final class IntroPage {
         flow.placeTogether(List.of(Paragraph.of("What to measure", bold, HEAD), Block.space(3)));
         flow.startTable(table.header());
         for (Characteristic c : plan.characteristics()) {
-            int d = Values.decimals(c);
-            flow.place(table.row(c.id(), c.name(), c.unit(), Values.number(c.nominal(), d), Values.tolerance(c),
-                    c.gauge().map(g -> g.name()).orElse("not named"), Values.resolution(c)));
+            int d = SheetNumbers.decimals(c);
+            flow.place(table.row(c.id(), c.name(), c.unit(), SheetNumbers.number(c.nominal(), d), SheetNumbers.tolerance(c),
+                    c.gauge().map(g -> g.name()).orElse("not named"), SheetNumbers.resolution(c)));
         }
         flow.endTable();
 
@@ -73,8 +73,8 @@ final class IntroPage {
         String often = String.format(Locale.ROOT,
                 "Subgroup: %s at every slot. %s. %d slots, from %s %s %s to %s %s %s (times in %s).",
                 n == 1 ? "1 part" : n + " consecutive parts", capitalised(plan.summary()), slots.size(),
-                first.id(), Values.DAY.format(first.start()), Values.CLOCK.format(first.start()), last.id(),
-                Values.DAY.format(last.start()), Values.CLOCK.format(last.start()), plan.calendar().zone().getId());
+                first.id(), SheetNumbers.DAY.format(first.start()), SheetNumbers.CLOCK.format(first.start()), last.id(),
+                SheetNumbers.DAY.format(last.start()), SheetNumbers.CLOCK.format(last.start()), plan.calendar().zone().getId());
         section(flow, "How often", List.of(Paragraph.of(often, regular, BODY)));
         plan.stages().filter(st -> st.staged()).ifPresent(st -> {
             String ends = st.looks().subList(0, st.count() - 1).stream()
@@ -102,7 +102,7 @@ final class IntroPage {
             caution.add(Paragraph.of(line, regular, BODY));
             caution.add(Block.space(2));
         }
-        flow.place(new Framed(caution, 6f, Pen.RULE, 1f));
+        flow.place(new Framed(caution, 6f, LineStyle.RULE, 1f));
 
         flow.gap(8);
         TextTable sign = TextTable.of(List.of(Column.left("Who", 3), Column.left("Name", 3),

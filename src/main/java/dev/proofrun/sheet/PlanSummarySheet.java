@@ -29,16 +29,16 @@ final class PlanSummarySheet {
         w.row(null, "Subgroup size", Integer.toString(plan.design().subgroupSize()));
         w.row(null, "Subgroups (slots)", Integer.toString(slots.size()));
         w.row(null, "Frequency", plan.summary());
-        w.row(null, "First slot", slots.get(0).id() + " " + Values.planned(slots.get(0).start()));
-        w.row(null, "Last slot", slots.get(slots.size() - 1).id() + " " + Values.planned(slots.get(slots.size() - 1).start()));
+        w.row(null, "First slot", slots.get(0).id() + " " + SheetNumbers.planned(slots.get(0).start()));
+        w.row(null, "Last slot", slots.get(slots.size() - 1).id() + " " + SheetNumbers.planned(slots.get(slots.size() - 1).start()));
         w.row(null, "Time zone", plan.calendar().zone().getId());
         w.skip();
         w.row(header, "Id", "Characteristic", "Unit", "Nominal", "LSL", "USL", "Gauge", "Resolution", "Requirement", "Shape");
         for (Characteristic c : plan.characteristics()) {
-            int d = Values.decimals(c);
-            w.row(null, c.id(), c.name(), c.unit(), Values.number(c.nominal(), d), Values.number(c.limits().lower(), d),
-                    Values.number(c.limits().upper(), d), c.gauge().map(g -> g.name()).orElse("\u2014"),
-                    Values.resolution(c), Values.requirement(c), c.shape().token());
+            int d = SheetNumbers.decimals(c);
+            w.row(null, c.id(), c.name(), c.unit(), SheetNumbers.number(c.nominal(), d), SheetNumbers.number(c.limits().lower(), d),
+                    SheetNumbers.number(c.limits().upper(), d), c.gauge().map(g -> g.name()).orElse("\u2014"),
+                    SheetNumbers.resolution(c), SheetNumbers.requirement(c), c.shape().token());
         }
         w.skip();
         w.row(header, "Caution");

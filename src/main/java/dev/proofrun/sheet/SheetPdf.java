@@ -5,7 +5,7 @@ import dev.proofrun.schedule.Slot;
 import dev.proofrun.paper.Flow;
 import dev.proofrun.paper.Framed;
 import dev.proofrun.paper.Paragraph;
-import dev.proofrun.paper.Pen;
+import dev.proofrun.paper.LineStyle;
 import dev.proofrun.text.UserException;
 import dev.proofrun.paper.PageHeading;
 import dev.proofrun.paper.Pages;
@@ -69,7 +69,7 @@ public final class SheetPdf {
                     int next = plan.stages().orElseThrow().looks().get(stage[i]).subgroups();
                     flow.place(new Framed(List.of(Paragraph.of(SheetWording.stageEnds(stage[i], stage[slots.size() - 1],
                             slots.get(i).id(), slots.get(i + 1).id(), slots.get(next - 1).id()), pages.bold(), 9f)),
-                            4f, Pen.RULE, 1f));
+                            4f, LineStyle.RULE, 1f));
                 }
             }
             flow.endTable();

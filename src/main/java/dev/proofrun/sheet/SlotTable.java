@@ -3,9 +3,9 @@ package dev.proofrun.sheet;
 import dev.proofrun.plan.Characteristic;
 import dev.proofrun.schedule.Slot;
 import dev.proofrun.paper.Block;
-import dev.proofrun.paper.Canvas;
-import dev.proofrun.paper.Pen;
-import dev.proofrun.paper.Text;
+import dev.proofrun.paper.PageCanvas;
+import dev.proofrun.paper.LineStyle;
+import dev.proofrun.paper.LineBreaker;
 import dev.proofrun.paper.TextTable;
 import dev.proofrun.paper.Typeface;
 import java.util.List;
@@ -91,7 +91,7 @@ final class SlotTable {
         float w = CHAR_W;
         for (Characteristic ch : characteristics) {
             w = Math.max(w, bold.width(idLine(ch), TEXT) + 2 * PAD);
-            w = Math.max(w, regular.width(Values.range(ch), SMALL) + 2 * PAD);
+            w = Math.max(w, regular.width(SheetNumbers.range(ch), SMALL) + 2 * PAD);
         }
         return (float) Math.ceil(w);
     }
@@ -142,12 +142,12 @@ final class SlotTable {
             }
 
             @Override
-            public void draw(Canvas c, float left, float top, float w) {
+            public void draw(PageCanvas c, float left, float top, float w) {
                 drawReaction(c, left, top);
                 top -= REACTION_H;
                 float h = 27f;
                 c.fillRect(left, top - h, width, h, TextTable.HEADER_GRAY);
-                c.pen(Pen.HAIR);
+                c.pen(LineStyle.HAIR);
                 c.rect(left, top - h, width, h);
                 float b1 = top - 11;
                 float b2 = top - 22;
@@ -183,22 +183,22 @@ final class SlotTable {
      * The reaction lines above the column labels: what to do with a reading outside its limits, then whom to
      * call, on a ruled field to be filled in by hand.
      */
-    private void drawReaction(Canvas c, float left, float top) {
+    private void drawReaction(PageCanvas c, float left, float top) {
         float base = top - 9f;
         float x = left + c.text(bold, TEXT, left, base, SheetWording.REACTION_HEAD + " ");
         c.text(regular, TEXT, x, base, SheetWording.REACTION);
         base -= 11f;
         x = left + c.text(regular, TEXT, left, base, SheetWording.REACTION_CALL + " ");
-        c.pen(Pen.HAIR);
+        c.pen(LineStyle.HAIR);
         c.line(x, base - 1.5f, left + width * 0.75f, base - 1.5f);
         c.textRight(regular, SMALL, left + width, base, SheetWording.REACTION_FIELD);
     }
 
-    private void label(Canvas c, float x, float w, float b1, float b2, String head, String hint) {
+    private void label(PageCanvas c, float x, float w, float b1, float b2, String head, String hint) {
         c.line(x, b1 + 11, x, b2 - 5);
         c.text(bold, TEXT, x + PAD, b1, head);
         if (!hint.isEmpty()) {
-            c.text(regular, SMALL, x + PAD, b2, Text.fit(hint, regular, SMALL, w - 2 * PAD));
+            c.text(regular, SMALL, x + PAD, b2, LineBreaker.fit(hint, regular, SMALL, w - 2 * PAD));
         }
     }
 
@@ -211,27 +211,27 @@ final class SlotTable {
             }
 
             @Override
-            public void draw(Canvas c, float left, float top, float w) {
+            public void draw(PageCanvas c, float left, float top, float w) {
                 drawSlot(c, slot, left, top);
             }
         };
     }
 
-    private void drawSlot(Canvas c, Slot slot, float left, float top) {
+    private void drawSlot(PageCanvas c, Slot slot, float left, float top) {
         float h = blockHeight();
         float bottom = top - h;
-        c.pen(Pen.HAIR);
+        c.pen(LineStyle.HAIR);
         c.rect(left, bottom, width, h);
         // slot cell
         float base = top - PAD - bold.ascent(ID_SIZE);
         c.text(bold, ID_SIZE, left + PAD, base, slot.id());
-        c.textRight(regular, TEXT, left + SLOT_W - PAD, base, Text.fit(slot.shift(), regular, TEXT, SLOT_W - 40));
+        c.textRight(regular, TEXT, left + SLOT_W - PAD, base, LineBreaker.fit(slot.shift(), regular, TEXT, SLOT_W - 40));
         base -= 11;
-        c.text(regular, TEXT, left + PAD, base, Values.DAY.format(slot.start()));
+        c.text(regular, TEXT, left + PAD, base, SheetNumbers.DAY.format(slot.start()));
         base -= 10.5f;
-        String window = Values.CLOCK.format(slot.start().minusMinutes(slot.windowMinutes())) + "\u2013"
-                + Values.CLOCK.format(slot.start().plusMinutes(slot.windowMinutes()));
-        float tw = c.text(bold, TEXT + 1, left + PAD, base, Values.CLOCK.format(slot.start()));
+        String window = SheetNumbers.CLOCK.format(slot.start().minusMinutes(slot.windowMinutes())) + "\u2013"
+                + SheetNumbers.CLOCK.format(slot.start().plusMinutes(slot.windowMinutes()));
+        float tw = c.text(bold, TEXT + 1, left + PAD, base, SheetNumbers.CLOCK.format(slot.start()));
         c.text(regular, SMALL, left + PAD + tw + 3, base, window);
         float x = left + SLOT_W;
         c.line(x, top, x, bottom);
@@ -247,7 +247,7 @@ final class SlotTable {
             float b = bandTop - 8.5f;
             c.text(bold, TEXT, x + PAD, b, idLine(ch));
             // the column is wide enough for both (charWidth), and a band is at least LINE (19 pt) tall
-            c.text(regular, SMALL, x + PAD, b - 8f, Values.range(ch));
+            c.text(regular, SMALL, x + PAD, b - 8f, SheetNumbers.range(ch));
             float line = band / linesPerBand;
             for (int i = 0; i < n; i++) {
                 int row = i / perLine;
@@ -267,7 +267,7 @@ final class SlotTable {
             x += w;
         }
         c.line(x, top, x, bottom);
-        c.pen(Pen.RULE);
+        c.pen(LineStyle.RULE);
         c.line(left, top, left + width, top);
     }
 }

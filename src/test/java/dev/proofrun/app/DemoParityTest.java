@@ -12,7 +12,7 @@ import dev.proofrun.app.start.StartViewModel;
 import dev.proofrun.cli.DemoCommand;
 import dev.proofrun.cli.ProofrunCommand;
 import dev.proofrun.grade.DemoReturn;
-import dev.proofrun.grade.PlanAdapter;
+import dev.proofrun.grade.GradingPlans;
 import dev.proofrun.grade.Verdict;
 import dev.proofrun.plan.StudyPlan;
 import java.io.PrintWriter;
@@ -48,7 +48,7 @@ class DemoParityTest {
         assertTrue(start.loadedProperty().get(), start.messageProperty().get());
         StudyPlan opened = session.base().orElseThrow();
         Path mine = tmp.resolve("wizard-returned.csv");
-        DemoReturn.writeCsv(PlanAdapter.of(opened), mine);
+        DemoReturn.writeCsv(GradingPlans.of(opened), mine);
         assertArrayEquals(Files.readAllBytes(cli.resolve(DemoCommand.RETURNED)), Files.readAllBytes(mine));
 
         GradingViewModel grading = new GradingViewModel(session, Background.inline());

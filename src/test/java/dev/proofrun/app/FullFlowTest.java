@@ -10,7 +10,7 @@ import dev.proofrun.app.sizing.SizingRow;
 import dev.proofrun.design.DesignRow;
 import dev.proofrun.app.chart.CurvePlot;
 import dev.proofrun.grade.DemoReturn;
-import dev.proofrun.grade.PlanAdapter;
+import dev.proofrun.grade.GradingPlans;
 import dev.proofrun.grade.Verdict;
 import dev.proofrun.plan.StudyPlan;
 import java.nio.file.Files;
@@ -206,7 +206,7 @@ class FullFlowTest {
         // plan just issued (subgroups of 3 now, so not the demo command's own file)
         Path returned = out.resolve("returned.csv");
         StudyPlan issued = fx(() -> app.wizard().session().base().orElseThrow());
-        DemoReturn.writeCsv(PlanAdapter.of(issued), returned);
+        DemoReturn.writeCsv(GradingPlans.of(issued), returned);
         robot.clickOn("#next");
         Settle.onStep(app, 6); // the Grading step
         replaceText(robot, "#returned-file", returned.toString());

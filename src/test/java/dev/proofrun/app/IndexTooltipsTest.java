@@ -7,7 +7,7 @@ import dev.proofrun.app.session.AppHome;
 import dev.proofrun.app.shell.IndexTip;
 import dev.proofrun.app.shell.IndexTooltips;
 import dev.proofrun.grade.DemoReturn;
-import dev.proofrun.grade.PlanAdapter;
+import dev.proofrun.grade.GradingPlans;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -69,7 +69,7 @@ class IndexTooltipsTest {
             WaitForAsyncUtils.asyncFx(() -> app.wizard().shell().currentProperty().set(index)).get();
             if (index == steps - 1) {
                 Path returned = home.resolve("returned.csv");
-                DemoReturn.writeCsv(PlanAdapter.of(WaitForAsyncUtils.asyncFx(() ->
+                DemoReturn.writeCsv(GradingPlans.of(WaitForAsyncUtils.asyncFx(() ->
                         app.wizard().session().base().orElseThrow()).get()), returned);
                 WaitForAsyncUtils.asyncFx(() -> {
                     app.wizard().grading().returnedFile().set(returned.toString());

@@ -6,7 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.proofrun.app.session.AppHome;
 import dev.proofrun.grade.DemoReturn;
-import dev.proofrun.grade.PlanAdapter;
+import dev.proofrun.grade.GradingPlans;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
@@ -99,7 +99,7 @@ class KeyboardTest {
         assertEquals(6, step());
         assertEquals("returned-file", focused().getId());
         Path returned = home.resolve("returned.csv");
-        DemoReturn.writeCsv(PlanAdapter.of(WaitForAsyncUtils.asyncFx(() -> app.wizard().session().base().orElseThrow()).get()),
+        DemoReturn.writeCsv(GradingPlans.of(WaitForAsyncUtils.asyncFx(() -> app.wizard().session().base().orElseThrow()).get()),
                 returned);
         TextField file = robot.lookup("#returned-file").queryAs(TextField.class);
         robot.interact(() -> file.setText(returned.toString()));

@@ -7,7 +7,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.proofrun.app.session.AppHome;
 import dev.proofrun.grade.DemoReturn;
-import dev.proofrun.grade.PlanAdapter;
+import dev.proofrun.grade.GradingPlans;
 import dev.proofrun.plan.StudyPlan;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -97,7 +97,7 @@ class PlanStateTest {
         Settle.onStep(app, 1); // the demo plan, issued, on the Part step
         StudyPlan demo = fx(() -> app.wizard().session().base().orElseThrow());
         Path returned = home.resolve("returned.csv");
-        DemoReturn.writeCsv(PlanAdapter.of(demo), returned);
+        DemoReturn.writeCsv(GradingPlans.of(demo), returned);
         robot.interact(() -> app.wizard().shell().goTo(6));
         Settle.onStep(app, 6);
 

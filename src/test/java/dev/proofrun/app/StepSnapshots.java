@@ -52,7 +52,7 @@ public final class StepSnapshots {
             if (index == steps - 1) {
                 Path returned = work.resolve("returned.csv");
                 // the same returned file as `proofrun demo` writes (same processes, same seed)
-                dev.proofrun.grade.DemoReturn.writeCsv(dev.proofrun.grade.PlanAdapter.of(
+                dev.proofrun.grade.DemoReturn.writeCsv(dev.proofrun.grade.GradingPlans.of(
                         app.wizard().session().base().orElseThrow()), returned);
                 onFx(() -> {
                     app.wizard().grading().returnedFile().set(returned.toString());

@@ -14,7 +14,7 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 /**
- * A bad convention value gets the same one line from every command that reads it ({@link Conventions}):
+ * A bad convention value gets the same one line from every command that reads it ({@link OptionValues}):
  * exit 2, nothing on standard output, no file written, the reader's file untouched. The expected lines are
  * the {@link OptionMessage} templates filled in by hand, with the enums' own words after the option.
  */

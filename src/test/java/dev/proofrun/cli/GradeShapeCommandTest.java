@@ -5,7 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
-import dev.proofrun.grade.PlanAdapter;
+import dev.proofrun.grade.GradingPlans;
 import dev.proofrun.grade.SimulatedReturn;
 import dev.proofrun.plan.PlanFiles;
 import dev.proofrun.stats.PivotalBound;
@@ -51,7 +51,7 @@ class GradeShapeCommandTest {
         Path plan = issuedPlan();
         Path data = dir.resolve("returned.csv");
         // invented: median 0.02 mm, sigma of ln x 0.2 -> Ppu = (0.08 - 0.02)/(0.02 e^0.6 - 0.02) = 3.7
-        SimulatedReturn.writeCsv(PlanAdapter.of(PlanFiles.read(plan)), Map.of("C1", SimulatedReturn.Process.skewed(0.02, 0.2)),
+        SimulatedReturn.writeCsv(GradingPlans.of(PlanFiles.read(plan)), Map.of("C1", SimulatedReturn.Process.skewed(0.02, 0.2)),
                 11L, data);
         assertEquals(0, run("grade", plan.toString(), data.toString()), err);
         assertTrue(out.contains("C1 face flatness: Demonstrated"), out);
@@ -77,7 +77,7 @@ class GradeShapeCommandTest {
         assertEquals(0, run("plan", "issue", plan.toString()), err);
         Path data = dir.resolve("returned.csv");
         // invented: readings about 0.05 mm apart from zero, sd 0.01 (mean/sigma 5): Ppu about (0.2 - 0.05)/0.03 = 5
-        SimulatedReturn.writeCsv(PlanAdapter.of(PlanFiles.read(plan)), Map.of("C1", SimulatedReturn.Process.stable(0.05, 0.01)),
+        SimulatedReturn.writeCsv(GradingPlans.of(PlanFiles.read(plan)), Map.of("C1", SimulatedReturn.Process.stable(0.05, 0.01)),
                 13L, data);
         assertEquals(0, run("grade", plan.toString(), data.toString()), err);
         assertTrue(out.contains("C1 bore position: Demonstrated"), out);
@@ -93,7 +93,7 @@ class GradeShapeCommandTest {
     void aReadingAtZeroIsAFindingNotACrash() throws Exception {
         Path plan = issuedPlan();
         Path data = dir.resolve("returned.csv");
-        SimulatedReturn.writeCsv(PlanAdapter.of(PlanFiles.read(plan)), Map.of("C1", SimulatedReturn.Process.skewed(0.02, 0.2)),
+        SimulatedReturn.writeCsv(GradingPlans.of(PlanFiles.read(plan)), Map.of("C1", SimulatedReturn.Process.skewed(0.02, 0.2)),
                 12L, data);
         List<String> lines = Files.readAllLines(data);
         String[] cells = lines.get(3).split(",", -1);

@@ -17,7 +17,7 @@ import dev.proofrun.design.Look;
 import dev.proofrun.design.Spending;
 import dev.proofrun.design.Stages;
 import dev.proofrun.grade.GradingPlan;
-import dev.proofrun.grade.PlanAdapter;
+import dev.proofrun.grade.GradingPlans;
 import dev.proofrun.grade.SimulatedReturn;
 import dev.proofrun.plan.PlanFiles;
 import dev.proofrun.plan.StudyPlan;
@@ -132,7 +132,7 @@ class StagedCommandTest {
         assertEquals(0, newPlan(p, "--stages", "2"), err.toString());
         assertEquals(0, run("plan", "issue", p.toString()));
         StudyPlan plan = PlanFiles.read(p);
-        GradingPlan gp = PlanAdapter.of(plan);
+        GradingPlan gp = GradingPlans.of(plan);
         Path returned = dir.resolve("returned.csv");
         // an invented process at Cpk 1.5, centred: stage 1 alone settles nothing at its 99.4 % bound
         SimulatedReturn.writeCsv(gp, Map.of("C1", SimulatedReturn.Process.stable(25.0, 0.02 / 4.5)), 3L, returned);

@@ -101,7 +101,7 @@ class ControlChartsTest {
         System.arraycopy(RING, 0, a, 0, RING.length);
         a[RING.length] = new double[] {10.06, 10.11, 10.08, 10.07, 10.08};
         ChartPair p = ControlCharts.of(ChartKind.XBAR_R, rows(a), EnumSet.of(RunRule.BEYOND_LIMITS));
-        assertEquals(List.of(new Signal(RunRule.BEYOND_LIMITS, 8)), p.location().signals());
+        assertEquals(List.of(new RuleFiring(RunRule.BEYOND_LIMITS, 8)), p.location().signals());
     }
 
     @Test

@@ -20,7 +20,7 @@ import org.junit.jupiter.api.Test;
  */
 class RunRulesTest {
 
-    private static List<Signal> only(RunRule rule, double... z) {
+    private static List<RuleFiring> only(RunRule rule, double... z) {
         return RunRules.scan(z, EnumSet.of(rule));
     }
 
@@ -50,7 +50,7 @@ class RunRulesTest {
 
     @Test
     void beyondLimitsFiresOnlyStrictlyOutside() {
-        assertEquals(List.of(new Signal(RunRule.BEYOND_LIMITS, 2), new Signal(RunRule.BEYOND_LIMITS, 4)),
+        assertEquals(List.of(new RuleFiring(RunRule.BEYOND_LIMITS, 2), new RuleFiring(RunRule.BEYOND_LIMITS, 4)),
                 only(RunRule.BEYOND_LIMITS, 0, 3.0, 3.01, -3.0, -3.5));
     }
 
@@ -59,7 +59,7 @@ class RunRulesTest {
         // alternate sides first, then nine above: fires at index 2 + 8 = 10, and again at 11
         double[] z = concat(new double[] {-0.5, 0.5, -0.5}, repeat(0.3, 9), new double[] {0.3});
         assertEquals(11, first(RunRule.RUN_ONE_SIDE, z));
-        assertEquals(List.of(new Signal(RunRule.RUN_ONE_SIDE, 11), new Signal(RunRule.RUN_ONE_SIDE, 12)),
+        assertEquals(List.of(new RuleFiring(RunRule.RUN_ONE_SIDE, 11), new RuleFiring(RunRule.RUN_ONE_SIDE, 12)),
                 only(RunRule.RUN_ONE_SIDE, z));
         assertTrue(only(RunRule.RUN_ONE_SIDE, concat(new double[] {-0.5}, repeat(-0.3, 0), repeat(0.3, 8))).isEmpty());
         // a point on the centre line breaks the run
@@ -75,7 +75,7 @@ class RunRulesTest {
     void trendFiresAtTheSixthRisingPoint() {
         double[] rising = {0.5, 0.0, -1.0, -0.6, -0.2, 0.2, 0.6, 1.0, 0.9};
         // the rise starts at index 2 (-1.0); six points 2..7 rising: fires at 7 only
-        assertEquals(List.of(new Signal(RunRule.TREND, 7)), only(RunRule.TREND, rising));
+        assertEquals(List.of(new RuleFiring(RunRule.TREND, 7)), only(RunRule.TREND, rising));
         assertTrue(only(RunRule.TREND, -1.0, -0.6, -0.2, 0.2, 0.6).isEmpty());
         // equal neighbours are not a rise
         assertTrue(only(RunRule.TREND, -1.0, -0.6, -0.6, -0.2, 0.2, 0.6).isEmpty());
@@ -91,14 +91,14 @@ class RunRulesTest {
             z[i] = (i % 2 == 0) ? 0.5 : -0.5;
         }
         // alternation from index 1 (0.4) .. ; differences at 2..15 alternate: 14 points are 1..14 -> fires at 14
-        assertEquals(List.of(new Signal(RunRule.ALTERNATING, 14), new Signal(RunRule.ALTERNATING, 15)),
+        assertEquals(List.of(new RuleFiring(RunRule.ALTERNATING, 14), new RuleFiring(RunRule.ALTERNATING, 15)),
                 only(RunRule.ALTERNATING, z));
         assertTrue(only(RunRule.ALTERNATING, Arrays.copyOf(z, 14)).isEmpty());
     }
 
     @Test
     void twoOfThreeOuterFiresAtTheSecondOuterPointOnOneSide() {
-        assertEquals(List.of(new Signal(RunRule.TWO_OF_THREE_OUTER, 3)),
+        assertEquals(List.of(new RuleFiring(RunRule.TWO_OF_THREE_OUTER, 3)),
                 only(RunRule.TWO_OF_THREE_OUTER, 0, 2.5, 0.5, 2.1, 0.5, 0.5, 2.2));
         // opposite sides do not count together
         assertTrue(only(RunRule.TWO_OF_THREE_OUTER, 2.5, -2.5, 0, 2.5, 0, -2.5).isEmpty());
@@ -114,21 +114,21 @@ class RunRulesTest {
         // window ending at 3: {1.5,0.2,1.2,1.1} = three; ending at 5: {0.2,1.2,1.1,-1.5,1.3} = three -> none
         assertTrue(only(RunRule.FOUR_OF_FIVE_MIDDLE, z).isEmpty());
         double[] w = {1.5, 0.2, 1.2, 1.1, 1.3, 0.0};
-        assertEquals(List.of(new Signal(RunRule.FOUR_OF_FIVE_MIDDLE, 4)), only(RunRule.FOUR_OF_FIVE_MIDDLE, w));
+        assertEquals(List.of(new RuleFiring(RunRule.FOUR_OF_FIVE_MIDDLE, 4)), only(RunRule.FOUR_OF_FIVE_MIDDLE, w));
         assertEquals(3, first(RunRule.FOUR_OF_FIVE_MIDDLE, -1.1, -1.2, -1.9, -1.01));
     }
 
     @Test
     void huggingCentreFiresAtTheFifteenthPointInside() {
         double[] z = concat(new double[] {1.5}, repeat(0.5, 15), new double[] {-1.0});
-        assertEquals(List.of(new Signal(RunRule.HUGGING_CENTRE, 15)), only(RunRule.HUGGING_CENTRE, z));
+        assertEquals(List.of(new RuleFiring(RunRule.HUGGING_CENTRE, 15)), only(RunRule.HUGGING_CENTRE, z));
         assertTrue(only(RunRule.HUGGING_CENTRE, concat(repeat(0.5, 14), new double[] {1.0}, repeat(0.5, 14))).isEmpty());
     }
 
     @Test
     void avoidingCentreFiresAtTheEighthPointOutside() {
         double[] z = {0, 1.5, -1.5, 1.5, -1.5, 1.5, -1.5, 1.5, -1.5, 0.5};
-        assertEquals(List.of(new Signal(RunRule.AVOIDING_CENTRE, 8)), only(RunRule.AVOIDING_CENTRE, z));
+        assertEquals(List.of(new RuleFiring(RunRule.AVOIDING_CENTRE, 8)), only(RunRule.AVOIDING_CENTRE, z));
         assertTrue(only(RunRule.AVOIDING_CENTRE, 1.5, -1.5, 1.5, -1.5, 1.0, 1.5, -1.5, 1.5, -1.5).isEmpty());
     }
 

@@ -50,7 +50,7 @@ public final class StabilityRiskTableWriter {
         });
         try (Writer w = Files.newBufferedWriter(Path.of(args[0]), StandardCharsets.UTF_8)) {
             w.write("# The grader's stability risks for planning (control.StabilityRiskTable): n k falseUnstable detection\n");
-            w.write("# falseUnstable: leave-one-out share of the grader's chance reference (ChanceSignals, its seeds);\n");
+            w.write("# falseUnstable: leave-one-out share of the grader's chance reference (ChanceSignalCounts, its seeds);\n");
             w.write("# detection (for reference, not used: it steps with k): 500 studies, mean moved 1.5 sigma_within for the second half, StabilityRisk seeds.\n");
             w.write("# Default charts (individuals n = 1, X-bar/R n = 2..10), within requirements. Made by\n");
             w.write("# dev.proofrun.control.StabilityRiskTableWriter (src/test).\n");

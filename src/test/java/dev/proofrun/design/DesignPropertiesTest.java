@@ -17,7 +17,7 @@ class DesignPropertiesTest {
 
     private static int readings(int kind, double c0, double gap, double conf, double power, int n) {
         DesignRequest r = DesignRequest.of(SpecLimits.Sides.TWO_SIDED, Requirement.of(KINDS[kind], c0, conf),
-                Expectation.centred(c0 + gap)).withPower(power).withFloors(Floors.none())
+                Expectation.centred(c0 + gap)).withPower(power).withFloors(PracticeFloors.none())
                 .withSubgroupSizes(List.of(n));
         return StudyDesigner.design(r).rows().get(0).readings();
     }

@@ -32,7 +32,7 @@ class DesignReferenceTest {
     private static DesignRequest request(SpecLimits.Sides sides, IndexKind kind, double c0, double c1, double conf,
             double power) {
         return DesignRequest.of(sides, Requirement.of(kind, c0, conf), Expectation.centred(c1)).withPower(power)
-                .withFloors(Floors.none()).withSubgroupSizes(List.of(1));
+                .withFloors(PracticeFloors.none()).withSubgroupSizes(List.of(1));
     }
 
     @ParameterizedTest(name = "Pp {0} -> {1}, conf {2}, power {3}: N = {4}")
@@ -67,7 +67,7 @@ class DesignReferenceTest {
         "1.0, 1.33, 1.33, 60, 0.874592"})
     void exactTwoSidedPowerMatchesPlainQuadrature(double c0, double c1, double cp1, int n, double expected) {
         DesignRequest r = DesignRequest.of(SpecLimits.Sides.TWO_SIDED, Requirement.of(IndexKind.PPK, c0, 0.95),
-                Expectation.offCentre(c1, cp1)).withFloors(Floors.none()).withSubgroupSizes(List.of(1));
+                Expectation.offCentre(c1, cp1)).withFloors(PracticeFloors.none()).withSubgroupSizes(List.of(1));
         assertEquals(expected, new SizeSearch(r, 1).boundPower(n), POWER_TOLERANCE);
     }
 

@@ -76,7 +76,7 @@ class PowerSimulationTest {
         };
         Expectation e = Double.isNaN(cp1) ? Expectation.centred(c1) : Expectation.offCentre(c1, cp1);
         DesignRequest r = DesignRequest.of(SpecLimits.Sides.TWO_SIDED, Requirement.of(kind, c0, 0.95), e)
-                .withFloors(Floors.none()).withSubgroupSizes(List.of(n));
+                .withFloors(PracticeFloors.none()).withSubgroupSizes(List.of(n));
         DesignRow row = StudyDesigner.design(r).rows().get(0);
         double truthCp = Double.isNaN(cp1) ? c1 : cp1;
         long seed = Double.doubleToLongBits(c0 * 31 + c1 * 7 + truthCp) ^ n;

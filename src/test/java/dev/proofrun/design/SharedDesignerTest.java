@@ -14,9 +14,9 @@ class SharedDesignerTest {
     void theHardestCharacteristicDrivesTheSharedSize() {
         List<Integer> sizes = List.of(3, 5);
         DesignRequest easy = DesignRequest.of(SpecLimits.Sides.TWO_SIDED, Requirement.of(IndexKind.CPK, 1.33, 0.95),
-                Expectation.centred(2.0)).withSubgroupSizes(sizes).withFloors(Floors.none());
+                Expectation.centred(2.0)).withSubgroupSizes(sizes).withFloors(PracticeFloors.none());
         DesignRequest hard = DesignRequest.of(SpecLimits.Sides.TWO_SIDED, Requirement.of(IndexKind.CPK, 1.33, 0.95),
-                Expectation.centred(1.6)).withSubgroupSizes(sizes).withFloors(Floors.none());
+                Expectation.centred(1.6)).withSubgroupSizes(sizes).withFloors(PracticeFloors.none());
         List<SharedDesign> designs = SharedDesigner.design(List.of(easy, hard));
         assertEquals(2, designs.size());
         for (SharedDesign d : designs) {

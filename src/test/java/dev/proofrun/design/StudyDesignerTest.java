@@ -67,7 +67,7 @@ class StudyDesignerTest {
 
     @Test
     void powerLimitedRowsAreTheSmallestPassingK() {
-        DesignRequest r = cpk(1.33, 1.67).withFloors(Floors.none()).withSubgroupSizes(List.of(5));
+        DesignRequest r = cpk(1.33, 1.67).withFloors(PracticeFloors.none()).withSubgroupSizes(List.of(5));
         DesignTable t = StudyDesigner.design(r);
         DesignRow row = t.rows().get(0);
         assertEquals(LimitedBy.POWER, row.limitedBy());

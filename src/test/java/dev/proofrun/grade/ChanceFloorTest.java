@@ -1,6 +1,6 @@
 package dev.proofrun.grade;
 
-import dev.proofrun.control.ChanceSignals;
+import dev.proofrun.control.ChanceSignalCounts;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
@@ -50,7 +50,7 @@ class ChanceFloorTest {
         SimulatedReturn.writeCsv(plan, Map.of("D1", SimulatedReturn.Process.stepping(10.0, 0.012, 0.5, 0.036)), 4L, f);
         CharacteristicGrade g = Grader.grade(plan, f, "step.csv").characteristics().get(0);
         Stability st = g.stability();
-        double floor = 1.0 / (Math.min(ChanceSignals.MAX_STUDIES, ChanceSignals.READINGS_BUDGET / 125) + 1.0);
+        double floor = 1.0 / (Math.min(ChanceSignalCounts.MAX_STUDIES, ChanceSignalCounts.READINGS_BUDGET / 125) + 1.0);
         assertEquals(floor, st.chanceFloor(), 0.0);
         assertTrue(st.locationAtFloor(), () -> "P = " + st.locationChance());
         assertEquals(floor, st.locationChance(), 0.0); // numeric value kept (JSON)
@@ -64,9 +64,9 @@ class ChanceFloorTest {
     void aNormalApproximationHasNoFloor() {
         // 2000 subgroups of 5 = 10,000 readings per study: 100 studies fit the budget, fewer than
         // EMPIRICAL_STUDIES, so the chance comes from the normal approximation and has no floor
-        ChanceSignals c = ChanceSignals.simulate(dev.proofrun.control.ChartKind.XBAR_R, 5, 2000, StabilityJudge.rules());
+        ChanceSignalCounts c = ChanceSignalCounts.simulate(dev.proofrun.control.ChartKind.XBAR_R, 5, 2000, StabilityJudge.rules());
         assertEquals(0.0, c.floor(), 0.0);
-        ChanceSignals small = ChanceSignals.simulate(dev.proofrun.control.ChartKind.XBAR_R, 5, 25, StabilityJudge.rules());
+        ChanceSignalCounts small = ChanceSignalCounts.simulate(dev.proofrun.control.ChartKind.XBAR_R, 5, 25, StabilityJudge.rules());
         assertEquals(1.0 / 2001, small.floor(), 0.0);
     }
 
@@ -74,15 +74,15 @@ class ChanceFloorTest {
     void aRepeatedSimulationGivesTheSameFigures() {
         // characteristics of one plan share n and k: the second call is answered from the cache and must equal
         // what the first computed (the simulation is seeded by n and k)
-        ChanceSignals a = ChanceSignals.simulate(dev.proofrun.control.ChartKind.XBAR_R, 4, 30, StabilityJudge.rules());
-        ChanceSignals b = ChanceSignals.simulate(dev.proofrun.control.ChartKind.XBAR_R, 4, 30, StabilityJudge.rules());
-        ChanceSignals fresh = ChanceSignals.run(dev.proofrun.control.ChartKind.XBAR_R, 4, 30, StabilityJudge.rules());
+        ChanceSignalCounts a = ChanceSignalCounts.simulate(dev.proofrun.control.ChartKind.XBAR_R, 4, 30, StabilityJudge.rules());
+        ChanceSignalCounts b = ChanceSignalCounts.simulate(dev.proofrun.control.ChartKind.XBAR_R, 4, 30, StabilityJudge.rules());
+        ChanceSignalCounts fresh = ChanceSignalCounts.run(dev.proofrun.control.ChartKind.XBAR_R, 4, 30, StabilityJudge.rules());
         assertTrue(a == b, "answered from the cache");
         assertEquals(fresh.expectedLocation(), b.expectedLocation(), 0.0);
         assertEquals(fresh.expectedSpread(), b.expectedSpread(), 0.0);
         assertEquals(fresh.locationTail(3), b.locationTail(3), 0.0);
         assertEquals(fresh.spreadTail(1), b.spreadTail(1), 0.0);
-        ChanceSignals s = ChanceSignals.simulate(dev.proofrun.control.ChartKind.XBAR_S, 4, 30, StabilityJudge.rules());
+        ChanceSignalCounts s = ChanceSignalCounts.simulate(dev.proofrun.control.ChartKind.XBAR_S, 4, 30, StabilityJudge.rules());
         assertTrue(s != a, "another chart kind is another simulation");
     }
 
@@ -90,9 +90,9 @@ class ChanceFloorTest {
     void aSimulationPreparedInTheBackgroundIsTheOneUsed() {
         // prepared while a file would be read; the later call waits for it and gets the same figures as a run
         // on the calling thread
-        ChanceSignals.prepare(dev.proofrun.control.ChartKind.XBAR_R, 3, 40, StabilityJudge.rules());
-        ChanceSignals waited = ChanceSignals.simulate(dev.proofrun.control.ChartKind.XBAR_R, 3, 40, StabilityJudge.rules());
-        ChanceSignals fresh = ChanceSignals.run(dev.proofrun.control.ChartKind.XBAR_R, 3, 40, StabilityJudge.rules());
+        ChanceSignalCounts.prepare(dev.proofrun.control.ChartKind.XBAR_R, 3, 40, StabilityJudge.rules());
+        ChanceSignalCounts waited = ChanceSignalCounts.simulate(dev.proofrun.control.ChartKind.XBAR_R, 3, 40, StabilityJudge.rules());
+        ChanceSignalCounts fresh = ChanceSignalCounts.run(dev.proofrun.control.ChartKind.XBAR_R, 3, 40, StabilityJudge.rules());
         assertEquals(fresh.expectedLocation(), waited.expectedLocation(), 0.0);
         assertEquals(fresh.locationTail(2), waited.locationTail(2), 0.0);
         assertEquals(fresh.floor(), waited.floor(), 0.0);

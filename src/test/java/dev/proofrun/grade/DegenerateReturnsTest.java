@@ -23,7 +23,7 @@ class DegenerateReturnsTest {
     private static CharacteristicGrade grade(List<double[]> subgroups) {
         int n = subgroups.get(0).length;
         int k = subgroups.size();
-        GradingPlan plan = TestPlans.plan(n, k, new GradedCharacteristic("D1", "bore diameter", "mm",
+        GradingPlan plan = TestPlans.plan(n, k, new PlannedCharacteristic("D1", "bore diameter", "mm",
                 dev.proofrun.stats.SpecLimits.twoSided(9.9, 10.1), null, 0,
                 dev.proofrun.design.Requirement.of(dev.proofrun.stats.IndexKind.CPK, 1.33, 0.95)));
         List<String> slots = plan.slots().stream().map(PlannedSlot::id).toList();
@@ -78,11 +78,11 @@ class DegenerateReturnsTest {
 
     @Test
     void aRunIsOnePatternAndOnePointIsSingular() {
-        List<ChartSignal> s = new ArrayList<>();
+        List<SlotSignal> s = new ArrayList<>();
         for (int g = 9; g <= 16; g++) {
-            s.add(new ChartSignal(ChartStatistic.MEAN, RunRule.RUN_ONE_SIDE, g, String.format("S%02d", g)));
+            s.add(new SlotSignal(ChartStatistic.MEAN, RunRule.RUN_ONE_SIDE, g, String.format("S%02d", g)));
         }
-        s.add(new ChartSignal(ChartStatistic.MEAN, RunRule.BEYOND_LIMITS, 3, "S03"));
+        s.add(new SlotSignal(ChartStatistic.MEAN, RunRule.BEYOND_LIMITS, 3, "S03"));
         assertEquals("beyond-limits at S03; run-one-side at S09–S16 (8 points)", SignalPatterns.describe(s));
         assertEquals(2, SignalPatterns.count(s));
         assertEquals("1 signalled point", SignalPatterns.points(1));

@@ -45,7 +45,7 @@ class DesignStabilityRiskTest {
         DesignRequest r = DesignRequest.of(SpecLimits.Sides.TWO_SIDED, Requirement.of(IndexKind.CPK, 1.33, 0.95),
                 Expectation.centred(1.67)).withSubgroupSizes(List.of(n));
         // the row the designer would show for this (n, k): its stability figures depend on n and k only
-        DesignRow row = StudyDesigner.design(r.withFloors(new dev.proofrun.design.Floors(k, 2))).rows().get(0);
+        DesignRow row = StudyDesigner.design(r.withFloors(new dev.proofrun.design.PracticeFloors(k, 2))).rows().get(0);
         ChartKind kind = n == 1 ? ChartKind.INDIVIDUALS : ChartKind.XBAR_R;
         int k0 = row.subgroups();
         int stable = 1500;

@@ -56,7 +56,7 @@ class DesignedStagesThroughGraderTest {
         StagedDesign design = StagedDesigner.design(request, n, looks, spending);
         Stages stages = design.stages();
         int k = stages.last().subgroups();
-        GradingPlan plan = TestPlans.plan(n, k, new GradedCharacteristic("D1", "bore diameter", "mm",
+        GradingPlan plan = TestPlans.plan(n, k, new PlannedCharacteristic("D1", "bore diameter", "mm",
                 SpecLimits.twoSided(LSL, USL), null, 0, Requirement.of(IndexKind.CPK, C0, 1 - ALPHA))).withStages(stages);
         double mid = (LSL + USL) / 2;
         double sdCentred = (USL - LSL) / (6 * C0);
@@ -78,7 +78,7 @@ class DesignedStagesThroughGraderTest {
 
     /** The share of simulated studies the grader calls demonstrated at some look. */
     private static double share(GradingPlan plan, Stages stages, int n, double mean, double sd, int studies, long seed) {
-        GradedCharacteristic gc = plan.characteristics().get(0);
+        PlannedCharacteristic gc = plan.characteristics().get(0);
         int k = stages.last().subgroups();
         UniformRandomProvider rng = RandomSource.XO_RO_SHI_RO_128_PP.create(seed);
         ZigguratSampler.NormalizedGaussian g = ZigguratSampler.NormalizedGaussian.of(rng);

@@ -45,7 +45,7 @@ class GaugeStepTest {
         int n = 5;
         int k = 100;
         double sd = (USL - 61) / (3 * 1.79);
-        GradingPlan plan = TestPlans.plan(n, k, new GradedCharacteristic("H1", "hardness", "HRC",
+        GradingPlan plan = TestPlans.plan(n, k, new PlannedCharacteristic("H1", "hardness", "HRC",
                 SpecLimits.twoSided(LSL, USL), null, 0, Requirement.of(IndexKind.CPK, 1.33, 0.95)));
         List<String> slots = plan.slots().stream().map(PlannedSlot::id).toList();
         UniformRandomProvider rng = RandomSource.XO_RO_SHI_RO_128_PP.create(61L);
@@ -85,7 +85,7 @@ class GaugeStepTest {
     @Test
     void aStepCoarserThanTheSpreadIsItsOwnFinding() {
         // σ = 0.05 HRC read to 0.1 HRC: the readings take two or three values
-        GradingPlan plan = TestPlans.plan(5, 25, new GradedCharacteristic("H1", "hardness", "HRC",
+        GradingPlan plan = TestPlans.plan(5, 25, new PlannedCharacteristic("H1", "hardness", "HRC",
                 SpecLimits.twoSided(LSL, USL), null, 0, Requirement.of(IndexKind.CPK, 1.33, 0.95)));
         UniformRandomProvider rng = RandomSource.XO_RO_SHI_RO_128_PP.create(62L);
         ZigguratSampler.NormalizedGaussian g = ZigguratSampler.NormalizedGaussian.of(rng);

@@ -26,9 +26,9 @@ class MoreSubgroupsFigureTest {
         int n = 5;
         int k = 25;
         double sd = 0.2 / (6 * 1.33);
-        GradingPlan plan = TestPlans.plan(n, k, new GradedCharacteristic("D1", "bore diameter", "mm",
+        GradingPlan plan = TestPlans.plan(n, k, new PlannedCharacteristic("D1", "bore diameter", "mm",
                 SpecLimits.twoSided(9.9, 10.1), null, 0, Requirement.of(IndexKind.CPK, 1.33, 0.95)));
-        GradedCharacteristic gc = plan.characteristics().get(0);
+        PlannedCharacteristic gc = plan.characteristics().get(0);
         List<String> slots = plan.slots().stream().map(PlannedSlot::id).toList();
         UniformRandomProvider rng = RandomSource.XO_RO_SHI_RO_128_PP.create(1405L);
         ZigguratSampler.NormalizedGaussian g = ZigguratSampler.NormalizedGaussian.of(rng);

@@ -104,9 +104,9 @@ class ProcedurePowerSimulationTest {
         int k = row.subgroups();
         double sd = (USL - LSL) / (6 * cp);
         double mean = (LSL + USL) / 2 + 3 * sd * (cp - cpk);
-        GradingPlan plan = TestPlans.plan(n, k, new GradedCharacteristic("D1", "bore diameter", "mm",
+        GradingPlan plan = TestPlans.plan(n, k, new PlannedCharacteristic("D1", "bore diameter", "mm",
                 SpecLimits.twoSided(LSL, USL), null, 0, Requirement.of(IndexKind.CPK, 1.33, 0.95)));
-        GradedCharacteristic gc = plan.characteristics().get(0);
+        PlannedCharacteristic gc = plan.characteristics().get(0);
         List<String> planned = plan.slots().stream().map(PlannedSlot::id).toList();
         UniformRandomProvider rng = RandomSource.XO_RO_SHI_RO_128_PP.create(seed);
         ZigguratSampler.NormalizedGaussian g = ZigguratSampler.NormalizedGaussian.of(rng);

@@ -68,7 +68,7 @@ class RandomMeansPpkTest {
     }
 
     private static CharacteristicGrade grade(IndexKind kind, List<double[]> subgroups) {
-        GradingPlan plan = TestPlans.plan(5, 25, new GradedCharacteristic("D1", "bore diameter", "mm",
+        GradingPlan plan = TestPlans.plan(5, 25, new PlannedCharacteristic("D1", "bore diameter", "mm",
                 SpecLimits.twoSided(9.9, 10.1), null, 0, Requirement.of(kind, 1.33, 0.95)));
         List<String> slots = plan.slots().stream().map(PlannedSlot::id).toList();
         Completeness c = new Completeness(25, 5, 25, 0, 0, 125, 0, 0, plan.allowedShortfall());

@@ -152,14 +152,14 @@ class ReturnedFileTest {
 
     @Test
     void numbersAsPeopleTypeThem() {
-        assertEquals(10.5, Cells.number("10,5"), 0.0);
-        assertEquals(-0.25, Cells.number("-0.25"), 0.0);
-        assertEquals(1.5e-3, Cells.number("1.5E-3"), 0.0);
-        assertTrue(Double.isNaN(Cells.number("NaN")));
-        assertTrue(Double.isNaN(Cells.number("1.0f")));
-        assertTrue(Double.isNaN(Cells.number("10,0,2")));
-        assertTrue(Double.isNaN(Cells.number("ca. 10")));
-        assertTrue(Double.isNaN(Cells.number("1e")));
+        assertEquals(10.5, CellValues.number("10,5"), 0.0);
+        assertEquals(-0.25, CellValues.number("-0.25"), 0.0);
+        assertEquals(1.5e-3, CellValues.number("1.5E-3"), 0.0);
+        assertTrue(Double.isNaN(CellValues.number("NaN")));
+        assertTrue(Double.isNaN(CellValues.number("1.0f")));
+        assertTrue(Double.isNaN(CellValues.number("10,0,2")));
+        assertTrue(Double.isNaN(CellValues.number("ca. 10")));
+        assertTrue(Double.isNaN(CellValues.number("1e")));
     }
 
     @Test

@@ -138,7 +138,7 @@ class ShapeJudgeTest {
         for (int i = 0; i < x.length; i++) {
             x[i] = Math.exp(0.25 * g.sample());
         }
-        GradedCharacteristic gc = new GradedCharacteristic("R1", "runout", "mm", SpecLimits.twoSided(0, 4), null, 0,
+        PlannedCharacteristic gc = new PlannedCharacteristic("R1", "runout", "mm", SpecLimits.twoSided(0, 4), null, 0,
                 Requirement.of(IndexKind.PPK, 1.33, 0.95), ShapeFamily.LOGNORMAL);
         List<Reason> reasons = new ArrayList<>();
         Shape sh = ShapeJudge.judge(subgroups(x, 5), slots(25), 0, ShapeFamily.LOGNORMAL, gc.limits(), reasons);

@@ -83,7 +83,7 @@ final class ShapeStudies {
         }
 
         GradingPlan plan(double c0) {
-            GradedCharacteristic c = new GradedCharacteristic("X1", "simulated characteristic", "mm", limits(), null, 0,
+            PlannedCharacteristic c = new PlannedCharacteristic("X1", "simulated characteristic", "mm", limits(), null, 0,
                     Requirement.of(IndexKind.CPK, c0, 0.95), family);
             return TestPlans.plan(n, k, c);
         }

@@ -67,9 +67,9 @@ class StagedBoundarySimulationTest {
     private static void check(Spending spending, int looks, int n, int k, int studies, long seed) {
         Stages stages = split(spending, looks, k);
         double sd = (USL - LSL) / (6 * 1.33);
-        GradingPlan plan = TestPlans.plan(n, k, new GradedCharacteristic("D1", "bore diameter", "mm",
+        GradingPlan plan = TestPlans.plan(n, k, new PlannedCharacteristic("D1", "bore diameter", "mm",
                 SpecLimits.twoSided(LSL, USL), null, 0, Requirement.of(IndexKind.CPK, 1.33, 1 - ALPHA))).withStages(stages);
-        GradedCharacteristic gc = plan.characteristics().get(0);
+        PlannedCharacteristic gc = plan.characteristics().get(0);
         UniformRandomProvider rng = RandomSource.XO_RO_SHI_RO_128_PP.create(seed);
         ZigguratSampler.NormalizedGaussian g = ZigguratSampler.NormalizedGaussian.of(rng);
         int[] passedAt = new int[looks];

@@ -88,7 +88,7 @@ class StagedGradingSimulationTest {
         double mean = (LSL + USL) / 2 + 3 * sd * (cp - cpk);
         List<GradingPlan> plans = new ArrayList<>();
         for (Look look : looks) {
-            plans.add(TestPlans.plan(n, look.subgroups(), new GradedCharacteristic("D1", "bore diameter", "mm",
+            plans.add(TestPlans.plan(n, look.subgroups(), new PlannedCharacteristic("D1", "bore diameter", "mm",
                     SpecLimits.twoSided(LSL, USL), null, 0, Requirement.of(IndexKind.CPK, 1.33, look.confidence()))));
         }
         UniformRandomProvider rng = RandomSource.XO_RO_SHI_RO_128_PP.create(seed);
@@ -120,7 +120,7 @@ class StagedGradingSimulationTest {
     private static Verdict gradeAt(GradingPlan plan, List<double[]> readings, Look look) {
         int k = readings.size();
         int n = readings.get(0).length;
-        GradedCharacteristic gc = plan.characteristics().get(0);
+        PlannedCharacteristic gc = plan.characteristics().get(0);
         List<String> slots = plan.slots().stream().map(PlannedSlot::id).toList();
         Completeness c = new Completeness(k, n, k, 0, 0, (long) n * k, 0, 0, plan.allowedShortfall());
         CharacteristicGrade grade = CharacteristicGrader.grade(gc, plan.design(), plan.interval(),

@@ -18,12 +18,12 @@ final class TestPlans {
     private TestPlans() {
     }
 
-    static GradedCharacteristic bore() {
-        return new GradedCharacteristic("D1", "bore diameter", "mm", SpecLimits.twoSided(9.9, 10.1), 10.0, 0.001,
+    static PlannedCharacteristic bore() {
+        return new PlannedCharacteristic("D1", "bore diameter", "mm", SpecLimits.twoSided(9.9, 10.1), 10.0, 0.001,
                 Requirement.of(IndexKind.CPK, 1.33, 0.95));
     }
 
-    static GradingPlan plan(int n, int k, GradedCharacteristic... cs) {
+    static GradingPlan plan(int n, int k, PlannedCharacteristic... cs) {
         List<PlannedSlot> slots = new ArrayList<>();
         ZonedDateTime t = ZonedDateTime.of(2027, 3, 1, 6, 0, 0, 0, ZONE);
         for (int i = 0; i < k; i++) {

@@ -33,7 +33,7 @@ class VerdictBasisTest {
     void skewedReadingsNameTheModelThatCarriedTheVerdict() {
         // invented: a roughness-like characteristic planned lognormal, readings lognormal with a relative sd of 0.5,
         // upper limit only; 50 subgroups of 5
-        GradedCharacteristic rough = new GradedCharacteristic("R1", "roughness", "um", SpecLimits.upperOnly(3.0), null,
+        PlannedCharacteristic rough = new PlannedCharacteristic("R1", "roughness", "um", SpecLimits.upperOnly(3.0), null,
                 0, Requirement.of(IndexKind.PPK, 1.33, 0.95), ShapeFamily.LOGNORMAL);
         GradingPlan plan = TestPlans.plan(5, 50, rough);
         Path f = dir.resolve("rough.csv");

@@ -31,13 +31,13 @@ class LayoutTest {
             Typeface face = pages.regular();
             String text = "Take five consecutive parts at each slot and write the time they were taken. "
                     + "Averyveryveryverylongwordwithoutanyspacesthatmustbecut somewhere.";
-            List<String> lines = Text.wrap(text, face, 9, 120);
+            List<String> lines = LineBreaker.wrap(text, face, 9, 120);
             assertTrue(lines.size() > 3);
             for (String line : lines) {
                 assertTrue(face.width(line, 9) <= 120.001f, line);
             }
             assertEquals(text.replace(" ", ""), String.join("", lines).replace(" ", ""));
-            assertEquals(List.of("a", "", "b"), Text.wrap("a\n\nb", face, 9, 100));
+            assertEquals(List.of("a", "", "b"), LineBreaker.wrap("a\n\nb", face, 9, 100));
         }
     }
 

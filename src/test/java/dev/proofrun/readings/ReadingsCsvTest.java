@@ -35,7 +35,7 @@ class ReadingsCsvTest {
         Readings ind = ReadingsCsv.read(p, OptionalInt.empty());
         assertEquals(4, ind.count());
         assertEquals(4, ind.subgroups().size());
-        assertEquals(Layout.VALUES, ind.layout());
+        assertEquals(SubgroupLayout.VALUES, ind.layout());
         Readings pairs = ReadingsCsv.read(p, OptionalInt.of(2));
         assertArrayEquals(new double[] {1.5, 2}, pairs.subgroups().get(0));
         assertArrayEquals(new double[] {-0.25, 0.1}, pairs.subgroups().get(1));
@@ -44,7 +44,7 @@ class ReadingsCsvTest {
     @Test
     void subgroupColumnGroupsByLabelInFirstSeenOrder() throws IOException {
         Readings r = ReadingsCsv.read(write("\uFEFFsubgroup,value\nS2,1\nS1,2\nS2,3\nS1,4\nS1,5\n"), OptionalInt.empty());
-        assertEquals(Layout.LABELLED, r.layout());
+        assertEquals(SubgroupLayout.LABELLED, r.layout());
         assertArrayEquals(new double[] {1, 3}, r.subgroups().get(0));
         assertArrayEquals(new double[] {2, 4, 5}, r.subgroups().get(1));
     }
@@ -52,7 +52,7 @@ class ReadingsCsvTest {
     @Test
     void wideRowsAreSubgroups() throws IOException {
         Readings r = ReadingsCsv.read(write("slot,x1,x2,x3\nS01,1,2,3\nS02,4,,6\n"), OptionalInt.empty());
-        assertEquals(Layout.WIDE, r.layout());
+        assertEquals(SubgroupLayout.WIDE, r.layout());
         assertEquals(5, r.count());
         assertArrayEquals(new double[] {4, 6}, r.subgroups().get(1));
     }
@@ -64,7 +64,7 @@ class ReadingsCsvTest {
     @Test
     void semicolonFilesAndDecimalCommasReadAsReturnedFilesDo() throws IOException {
         Readings semi = ReadingsCsv.read(write("subgroup;value\nS1;22,001\nS1;21,999\nS2;22,0005\nS2;1,5e1\n"), OptionalInt.empty());
-        assertEquals(Layout.LABELLED, semi.layout());
+        assertEquals(SubgroupLayout.LABELLED, semi.layout());
         assertArrayEquals(new double[] {22.001, 21.999}, semi.subgroups().get(0));
         assertArrayEquals(new double[] {22.0005, 15.0}, semi.subgroups().get(1));
         Readings quoted = ReadingsCsv.read(write("x1,x2\n1,2\n3,\"1,5\"\n"), OptionalInt.empty());

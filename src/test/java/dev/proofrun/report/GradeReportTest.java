@@ -6,7 +6,7 @@ import dev.proofrun.grade.CharacteristicGrade;
 import dev.proofrun.grade.GradeResult;
 import dev.proofrun.grade.Grader;
 import dev.proofrun.grade.GradingPlan;
-import dev.proofrun.grade.PlanAdapter;
+import dev.proofrun.grade.GradingPlans;
 import dev.proofrun.grade.Reason;
 import dev.proofrun.grade.SimulatedReturn;
 import dev.proofrun.plan.DemoPlan;
@@ -38,7 +38,7 @@ class GradeReportTest {
     @Test
     void theReportStatesVerdictsAndReasonsAndDrawsItsCharts() throws IOException {
         StudyPlan plan = DemoPlan.create();
-        GradingPlan gp = PlanAdapter.of(plan);
+        GradingPlan gp = GradingPlans.of(plan);
         Path returned = dir.resolve("returned.csv");
         SimulatedReturn.writeCsv(gp, Map.of(
                 "D1", SimulatedReturn.Process.stable(22.0, 0.002),
@@ -91,7 +91,7 @@ class GradeReportTest {
     @Test
     void aReturnWithTooLittleDataStillGivesAReport() throws IOException {
         StudyPlan plan = DemoPlan.create();
-        GradingPlan gp = PlanAdapter.of(plan);
+        GradingPlan gp = GradingPlans.of(plan);
         Path full = dir.resolve("full.csv");
         SimulatedReturn.writeCsv(gp, Map.of(
                 "D1", SimulatedReturn.Process.stable(22.0, 0.002),

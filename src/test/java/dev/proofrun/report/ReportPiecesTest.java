@@ -8,7 +8,7 @@ import dev.proofrun.grade.CharacteristicGrade;
 import dev.proofrun.grade.GradeResult;
 import dev.proofrun.grade.Grader;
 import dev.proofrun.grade.GradingPlan;
-import dev.proofrun.grade.PlanAdapter;
+import dev.proofrun.grade.GradingPlans;
 import dev.proofrun.grade.SimulatedReturn;
 import dev.proofrun.grade.Verdict;
 import dev.proofrun.plan.DemoPlan;
@@ -36,7 +36,7 @@ class ReportPiecesTest {
     @Test
     void everyPageCarriesTheStampAndNoFolderOfTheGradingMachine() throws IOException {
         StudyPlan plan = DemoPlan.create();
-        GradingPlan gp = PlanAdapter.of(plan);
+        GradingPlan gp = GradingPlans.of(plan);
         Path returned = dir.resolve("returned.csv");
         SimulatedReturn.writeCsv(gp, Map.of(
                 "D1", SimulatedReturn.Process.stable(22.0, 0.002),
@@ -66,7 +66,7 @@ class ReportPiecesTest {
             }
             CharacteristicGrade d1 = result.characteristics().get(0);
             double bound = Nonconforming.upperPpm(d1.judged().index(), d1.limits(), d1.judged().lower()).getAsDouble();
-            assertTrue(all.contains("Nonconforming parts: at most " + Fmt.ppm(bound) + " ppm outside the tolerance at 95 % "
+            assertTrue(all.contains("Nonconforming parts: at most " + ReportNumbers.ppm(bound) + " ppm outside the tolerance at 95 % "
                     + "confidence (from the lower bound of Cpk under the normal model); counted 0 of 125 readings"), all);
             assertFalse(all.contains("expected overall"), "no observed/within/overall triple");
         }
@@ -74,9 +74,9 @@ class ReportPiecesTest {
 
     @Test
     void theReturnedFileIsNamedWithoutItsFolders() {
-        assertEquals("r.csv", Fmt.fileName("/home/someone/work/r.csv"));
-        assertEquals("r.csv", Fmt.fileName("C:\\Users\\someone\\r.csv"));
-        assertEquals("r.csv", Fmt.fileName("r.csv"));
+        assertEquals("r.csv", ReportNumbers.fileName("/home/someone/work/r.csv"));
+        assertEquals("r.csv", ReportNumbers.fileName("C:\\Users\\someone\\r.csv"));
+        assertEquals("r.csv", ReportNumbers.fileName("r.csv"));
     }
 
     /**

@@ -6,7 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import dev.proofrun.grade.CharacteristicGrade;
 import dev.proofrun.grade.GradeResult;
 import dev.proofrun.grade.Grader;
-import dev.proofrun.grade.PlanAdapter;
+import dev.proofrun.grade.GradingPlans;
 import dev.proofrun.plan.StudyPlan;
 import dev.proofrun.paper.Paper;
 import java.io.IOException;
@@ -74,7 +74,7 @@ class FillInGradeRoundTripTest {
         }
         Path returned = dir.resolve("returned.csv");
         Files.write(returned, filled, StandardCharsets.UTF_8);
-        assertAllUsable(Grader.grade(PlanAdapter.of(plan), returned, "returned.csv"), "returned.csv");
+        assertAllUsable(Grader.grade(GradingPlans.of(plan), returned, "returned.csv"), "returned.csv");
     }
 
     @Test
@@ -104,7 +104,7 @@ class FillInGradeRoundTripTest {
                 }
             }
             String name = returned.getFileName().toString();
-            assertAllUsable(Grader.grade(PlanAdapter.of(plan), returned, name), name);
+            assertAllUsable(Grader.grade(GradingPlans.of(plan), returned, name), name);
         }
     }
 
@@ -117,7 +117,7 @@ class FillInGradeRoundTripTest {
         String row = lines.get(1).replace(",'-7,", ",'7,");
         Path returned = dir.resolve("odd.csv");
         Files.write(returned, List.of(lines.get(0), row), StandardCharsets.UTF_8);
-        GradeResult r = Grader.grade(PlanAdapter.of(plan), returned, "odd.csv");
+        GradeResult r = Grader.grade(GradingPlans.of(plan), returned, "odd.csv");
         assertTrue(r.problems().stream().anyMatch(p -> p.toString().startsWith("odd.csv, row 2, column characteristic")
                 && p.toString().contains("'7")), r.problems().toString());
     }

@@ -49,7 +49,7 @@ class FillInXlsxTest {
             assertEquals(plan.reference(), first.getCell(0).getStringCellValue());
             assertEquals("S01", first.getCell(1).getStringCellValue());
             assertEquals("D1", first.getCell(2).getStringCellValue());
-            assertEquals(Values.planned(plan.schedule().slots().get(0).start()), first.getCell(3).getStringCellValue());
+            assertEquals(SheetNumbers.planned(plan.schedule().slots().get(0).start()), first.getCell(3).getStringCellValue());
             assertEquals("F7", sheet.getRow(75).getCell(2).getStringCellValue());
 
             PaneInformation pane = sheet.getPaneInformation();

@@ -97,7 +97,7 @@ class SheetPdfTest {
                 assertTrue(page.contains(SheetWording.REACTION_CALL), "call field on page " + p);
                 // each characteristic's limits once per slot block on the page
                 for (Characteristic c : plan.characteristics()) {
-                    assertEquals(slotsHere, count(page, Values.range(c)), Values.range(c) + " on page " + p);
+                    assertEquals(slotsHere, count(page, SheetNumbers.range(c)), SheetNumbers.range(c) + " on page " + p);
                 }
             }
             assertEquals(plan.schedule().slots().size(), slotsSeen, "every slot once");
@@ -107,7 +107,7 @@ class SheetPdfTest {
                     || opening.contains("Prepared by: " + plan.people().author() + "\r"), "author on a line of its own");
         }
         // the demo's limits as the bands print them (plans/demo-valve-body.json, gauges' resolution)
-        assertEquals("21.9870\u201322.0130", Values.range(plan.characteristics().get(0)));
+        assertEquals("21.9870\u201322.0130", SheetNumbers.range(plan.characteristics().get(0)));
     }
 
     @Test

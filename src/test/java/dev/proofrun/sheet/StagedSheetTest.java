@@ -9,7 +9,7 @@ import dev.proofrun.design.Spending;
 import dev.proofrun.design.Stages;
 import dev.proofrun.grade.GradeResult;
 import dev.proofrun.grade.Grader;
-import dev.proofrun.grade.PlanAdapter;
+import dev.proofrun.grade.GradingPlans;
 import dev.proofrun.grade.Verdict;
 import dev.proofrun.plan.PlanFiles;
 import dev.proofrun.plan.StudyPlan;
@@ -110,7 +110,7 @@ class StagedSheetTest {
         }
         Path returned = dir.resolve("stage-1.csv");
         Files.write(returned, filled, StandardCharsets.UTF_8);
-        GradeResult r = Grader.grade(PlanAdapter.of(plan), returned, "stage-1.csv");
+        GradeResult r = Grader.grade(GradingPlans.of(plan), returned, "stage-1.csv");
         assertTrue(r.problems().isEmpty(), r.problems().toString());
         assertEquals(1, r.look().orElseThrow().number());
         assertEquals(15, r.characteristics().get(0).completeness().completeSubgroups());

@@ -1,6 +1,6 @@
 package dev.proofrun.app.chart;
 
-import dev.proofrun.app.shell.Em;
+import dev.proofrun.app.shell.FontScale;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -103,10 +103,10 @@ public final class CurvePlot extends Region {
         setId(id);
         getStyleClass().add("pr-curve-plot");
         getChildren().add(canvas);
-        setPrefHeight(Em.of(19.5));
-        setMinHeight(Em.of(15));
-        setPrefWidth(Em.of(24));
-        setMinWidth(Em.of(14));
+        setPrefHeight(FontScale.of(19.5));
+        setMinHeight(FontScale.of(15));
+        setPrefWidth(FontScale.of(24));
+        setMinWidth(FontScale.of(14));
         setAccessibleRole(AccessibleRole.IMAGE_VIEW);
         setAccessibleText(title);
         Tooltip.install(this, tip);
@@ -200,7 +200,7 @@ public final class CurvePlot extends Region {
         if (w < 10 || h < 10) {
             return;
         }
-        double em = Em.of(1);
+        double em = FontScale.of(1);
         Font normal = Font.font(Font.getDefault().getFamily(), em * 0.85);
         Font heading = Font.font(Font.getDefault().getFamily(), FontWeight.BOLD, em);
         g.setFill(CARD);

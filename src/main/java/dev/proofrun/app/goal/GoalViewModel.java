@@ -6,14 +6,14 @@ import dev.proofrun.app.session.CharacteristicDraft;
 import dev.proofrun.app.session.CharacteristicField;
 import dev.proofrun.app.session.DraftField;
 import dev.proofrun.app.session.ExpectationSource;
-import dev.proofrun.app.session.Numbers;
+import dev.proofrun.app.session.FieldNumbers;
 import dev.proofrun.design.ProcessFacts;
 import dev.proofrun.plan.StudyPlan;
 import dev.proofrun.text.UserException;
 import java.util.ArrayList;
 import java.nio.file.Path;
 import java.util.OptionalInt;
-import dev.proofrun.app.session.PlanBridge;
+import dev.proofrun.app.session.PlanDrafts;
 import dev.proofrun.app.session.StudyDraft;
 import dev.proofrun.app.shell.IndexTip;
 import dev.proofrun.app.shell.StepViewModel;
@@ -91,7 +91,7 @@ public final class GoalViewModel extends StepViewModel {
         syncEnum(source, draft.field(DraftField.EXPECTATION_SOURCE), ExpectationSource::token, ExpectationSource::fromToken);
         ObservableList<CharacteristicDraft> rows = draft.characteristics();
         focus = Bindings.createObjectBinding(this::findFocus, rows, draft.field(DraftField.FOCUS));
-        Observable[] inputs = {rows, index, source, focus, base, pilot, Numbers.decimalMarkProperty(), draft.editsProperty(),
+        Observable[] inputs = {rows, index, source, focus, base, pilot, FieldNumbers.decimalMarkProperty(), draft.editsProperty(),
             draft.field(DraftField.MINIMUM), draft.field(DraftField.CONFIDENCE),
             draft.field(DraftField.EXPECTED_MEAN), draft.field(DraftField.EXPECTED_SIGMA)};
         requirement = Bindings.createObjectBinding(this::computeRequirement, inputs);
@@ -231,8 +231,8 @@ public final class GoalViewModel extends StepViewModel {
     }
 
     private Optional<Requirement> computeRequirement() {
-        OptionalDouble min = Numbers.parse(draft.text(DraftField.MINIMUM));
-        OptionalDouble conf = Numbers.parse(draft.text(DraftField.CONFIDENCE));
+        OptionalDouble min = FieldNumbers.parse(draft.text(DraftField.MINIMUM));
+        OptionalDouble conf = FieldNumbers.parse(draft.text(DraftField.CONFIDENCE));
         if (min.isEmpty() || !(min.getAsDouble() > 0) || conf.isEmpty()
                 || !Confidence.isStatable(conf.getAsDouble()) || index.get() == null) {
             return Optional.empty();
@@ -250,8 +250,8 @@ public final class GoalViewModel extends StepViewModel {
             case VALUE:
                 return typedExpectation(row.get());
             case MEAN_SIGMA: {
-                OptionalDouble mean = Numbers.parse(draft.text(DraftField.EXPECTED_MEAN));
-                OptionalDouble sigma = Numbers.parse(draft.text(DraftField.EXPECTED_SIGMA));
+                OptionalDouble mean = FieldNumbers.parse(draft.text(DraftField.EXPECTED_MEAN));
+                OptionalDouble sigma = FieldNumbers.parse(draft.text(DraftField.EXPECTED_SIGMA));
                 if (mean.isEmpty() || sigma.isEmpty() || !(sigma.getAsDouble() > 0)) {
                     return Optional.empty();
                 }
@@ -392,17 +392,17 @@ public final class GoalViewModel extends StepViewModel {
 
     private String computeMissing() {
         for (DraftField f : List.of(DraftField.MINIMUM, DraftField.CONFIDENCE, DraftField.EXPECTED_MEAN, DraftField.EXPECTED_SIGMA)) {
-            Optional<String> mark = Numbers.wrongMark(draft.text(f));
+            Optional<String> mark = FieldNumbers.wrongMark(draft.text(f));
             if (mark.isPresent()) {
                 return mark.get();
             }
         }
-        Optional<String> expectedMark = focus.get().flatMap(r -> Numbers.wrongMark(r.text(CharacteristicField.EXPECTED)));
+        Optional<String> expectedMark = focus.get().flatMap(r -> FieldNumbers.wrongMark(r.text(CharacteristicField.EXPECTED)));
         if (expectedMark.isPresent()) {
             return expectedMark.get();
         }
         if (computeRequirement().isEmpty()) {
-            OptionalDouble min = Numbers.parse(draft.text(DraftField.MINIMUM));
+            OptionalDouble min = FieldNumbers.parse(draft.text(DraftField.MINIMUM));
             return min.isEmpty() || !(min.getAsDouble() > 0) ? AppMessage.GOAL_MINIMUM_BAD.format() : AppMessage.GOAL_CONFIDENCE_BAD.format();
         }
         Optional<CharacteristicDraft> row = focus.get();

@@ -10,7 +10,7 @@ import dev.proofrun.app.grading.GradingDisplay.StepEvidence;
 import dev.proofrun.app.grading.GradingDisplay.Tone;
 import dev.proofrun.capability.CapabilityResult;
 import dev.proofrun.control.ControlChart;
-import dev.proofrun.control.Signal;
+import dev.proofrun.control.RuleFiring;
 import dev.proofrun.grade.CharacteristicGrade;
 import dev.proofrun.grade.Reason;
 import dev.proofrun.grade.Step;
@@ -171,7 +171,7 @@ final class EvidenceDisplay {
                 Line.horizontal("UCL " + num(cc.ucl(), span), Pen.LIMIT, cc.ucl(), x0, x1),
                 Line.horizontal("LCL " + num(cc.lcl(), span), Pen.LIMIT, cc.lcl(), x0, x1)));
         List<double[]> flagged = new ArrayList<>();
-        for (Signal sig : cc.signals()) {
+        for (RuleFiring sig : cc.signals()) {
             if (sig.index() < pts.size() && flagged.stream().noneMatch(p -> p == pts.get(sig.index()))) {
                 flagged.add(pts.get(sig.index()));
             }

@@ -7,7 +7,7 @@ import dev.proofrun.app.grading.GradingDisplay.IndexRow;
 import dev.proofrun.app.grading.GradingDisplay.ProblemRow;
 import dev.proofrun.app.grading.GradingDisplay.StepEvidence;
 import dev.proofrun.app.grading.GradingDisplay.Tone;
-import dev.proofrun.app.shell.Em;
+import dev.proofrun.app.shell.FontScale;
 import dev.proofrun.app.shell.IndexTip;
 import dev.proofrun.app.shell.IndexTooltips;
 import dev.proofrun.app.shell.StepView;
@@ -69,7 +69,7 @@ public final class GradingView implements StepView {
         grade.setOnAction(e -> vm.grade());
         grade.disableProperty().bind(vm.busyProperty());
         ProgressIndicator spinner = new ProgressIndicator();
-        spinner.setMaxSize(Em.of(1.8), Em.of(1.8));
+        spinner.setMaxSize(FontScale.of(1.8), FontScale.of(1.8));
         spinner.visibleProperty().bind(vm.busyProperty().or(vm.reportingProperty()));
         Label message = new Label();
         message.setId("grading-message");
@@ -107,7 +107,7 @@ public final class GradingView implements StepView {
 
         TableView<ProblemRow> problems = new TableView<>(vm.problemRows());
         problems.setId("problems");
-        double em = Em.of(1);
+        double em = FontScale.of(1);
         problems.prefHeightProperty().bind(Bindings.when(Bindings.isEmpty(vm.problemRows())).then(5 * em).otherwise(13 * em));
         problems.setPlaceholder(new Label("No problems in the file."));
         problems.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY_FLEX_LAST_COLUMN);
@@ -116,8 +116,8 @@ public final class GradingView implements StepView {
         problems.getColumns().add(col("Kind", ProblemRow::kind));
         problems.getColumns().add(col("Characteristic", ProblemRow::characteristic));
         problems.getColumns().add(col("Problem", ProblemRow::problem));
-        problems.getColumns().get(0).setPrefWidth(Em.of(4));
-        problems.getColumns().get(4).setPrefWidth(Em.of(40));
+        problems.getColumns().get(0).setPrefWidth(FontScale.of(4));
+        problems.getColumns().get(4).setPrefWidth(FontScale.of(40));
         Label problemsTitle = new Label("Problems in the file");
         problemsTitle.getStyleClass().add("pr-card-title");
         VBox problemsCard = new VBox(problemsTitle, problems);
@@ -126,12 +126,12 @@ public final class GradingView implements StepView {
 
         TableView<GradeRow> grades = new TableView<>(vm.gradeRows());
         grades.setId("grades");
-        grades.setPrefHeight(Em.of(10));
+        grades.setPrefHeight(FontScale.of(10));
         grades.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY_FLEX_LAST_COLUMN);
         grades.getColumns().add(col("Id", GradeRow::id));
         grades.getColumns().add(col("Name", GradeRow::name));
-        grades.getColumns().get(0).setPrefWidth(Em.of(4));
-        grades.getColumns().get(1).setPrefWidth(Em.of(14));
+        grades.getColumns().get(0).setPrefWidth(FontScale.of(4));
+        grades.getColumns().get(1).setPrefWidth(FontScale.of(14));
         grades.getColumns().add(col("Verdict", GradeRow::verdict));
         TableColumn<GradeRow, String> est = col("Estimate", GradeRow::estimate);
         est.setGraphic(tipped("Estimate", "The index computed from the returned readings; hover an index in the "
@@ -144,9 +144,9 @@ public final class GradingView implements StepView {
         low.setText(null);
         grades.getColumns().add(low);
         // widths of their own, so the last title is not cut short (the policy spreads what is left)
-        grades.getColumns().get(2).setPrefWidth(Em.of(9));
-        est.setPrefWidth(Em.of(9));
-        low.setPrefWidth(Em.of(15));
+        grades.getColumns().get(2).setPrefWidth(FontScale.of(9));
+        est.setPrefWidth(FontScale.of(9));
+        low.setPrefWidth(FontScale.of(15));
         grades.getSelectionModel().selectedItemProperty().addListener((o, a, b) -> {
             if (b != null) {
                 vm.selectedProperty().set(b.id());
@@ -259,7 +259,7 @@ public final class GradingView implements StepView {
         Label l = new Label(text);
         Tooltip t = new Tooltip(tip);
         t.setWrapText(true);
-        t.setMaxWidth(Em.of(32));
+        t.setMaxWidth(FontScale.of(32));
         l.setTooltip(t);
         return l;
     }
@@ -269,7 +269,7 @@ public final class GradingView implements StepView {
         c.setSortable(false);
         // a width of its own: the default width makes the skin measure every cell on the first showing
         // (hundreds of ms on a loaded machine); the constrained policy spreads the columns anyway
-        c.setPrefWidth(Em.of(7));
+        c.setPrefWidth(FontScale.of(7));
         c.setCellValueFactory(cd -> new ReadOnlyStringWrapper(text.apply(cd.getValue())));
         c.setCellFactory(tc -> new TableCell<>() {
             @Override

@@ -11,7 +11,7 @@ import dev.proofrun.app.shell.StepViewModel;
 import dev.proofrun.grade.CharacteristicGrade;
 import dev.proofrun.grade.GradeResult;
 import dev.proofrun.grade.Grader;
-import dev.proofrun.grade.PlanAdapter;
+import dev.proofrun.grade.GradingPlans;
 import dev.proofrun.grade.Problem;
 import dev.proofrun.grade.IndexEvidence;
 import dev.proofrun.plan.StudyPlan;
@@ -201,7 +201,7 @@ public final class GradingViewModel extends StepViewModel {
         clearResult();
         busy.set(true);
         message.set("");
-        running = background.submit(() -> Grader.grade(PlanAdapter.of(plan), file, display), r -> {
+        running = background.submit(() -> Grader.grade(GradingPlans.of(plan), file, display), r -> {
             if (mine == generation) {
                 gradedAgainst = plan;
                 gradedFile = text;

@@ -3,7 +3,7 @@ package dev.proofrun.app.handout;
 import dev.proofrun.app.AppMessage;
 import dev.proofrun.app.goal.GoalViewModel;
 import dev.proofrun.app.session.CharacteristicDraft;
-import dev.proofrun.app.session.PlanBridge;
+import dev.proofrun.app.session.PlanDrafts;
 import dev.proofrun.app.session.Session;
 import dev.proofrun.app.sizing.SizingViewModel;
 import dev.proofrun.app.timing.TimingViewModel;
@@ -122,7 +122,7 @@ final class ComposedPlan {
                     AppMessage.HANDOUT_NO_EXPECTATION.format(String.join(", ", lacking)));
         }
         try {
-            StudyPlan p = PlanBridge.compose(session.draft(), session.base(), req.get(),
+            StudyPlan p = PlanDrafts.compose(session.draft(), session.base(), req.get(),
                     row -> goal.expectationFor(row).orElseThrow(), timing.calendarBinding().get().get(),
                     timing.spanBinding().get().get(), design.get(), timing.spacing().get(), timing.seed().get(),
                     timing.schedule().get());

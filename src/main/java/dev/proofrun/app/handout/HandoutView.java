@@ -97,16 +97,16 @@ public final class HandoutView implements StepView {
                 v.setPreserveRatio(true);
                 // drawn scaled once into a cached bitmap, not scaled again on every frame
                 v.setCache(true);
-                v.setFitHeight(dev.proofrun.app.shell.Em.of(31.5));
+                v.setFitHeight(dev.proofrun.app.shell.FontScale.of(31.5));
                 v.getStyleClass().add("pr-page-image");
                 strip.getChildren().add(v);
             }
         });
         ScrollPane pages = new ScrollPane(strip);
-        pages.setPrefViewportHeight(dev.proofrun.app.shell.Em.of(32.3));
+        pages.setPrefViewportHeight(dev.proofrun.app.shell.FontScale.of(32.3));
         pages.setFitToHeight(true);
         ProgressIndicator spinner = new ProgressIndicator();
-        spinner.setMaxSize(dev.proofrun.app.shell.Em.of(1.8), dev.proofrun.app.shell.Em.of(1.8));
+        spinner.setMaxSize(dev.proofrun.app.shell.FontScale.of(1.8), dev.proofrun.app.shell.FontScale.of(1.8));
         spinner.visibleProperty().bind(vm.busyProperty());
         Label previewTitle = new Label("Preview of the printed sheet");
         previewTitle.getStyleClass().add("pr-card-title");

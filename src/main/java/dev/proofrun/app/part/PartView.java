@@ -46,7 +46,7 @@ public final class PartView implements StepView {
         by.textProperty().bindBidirectional(vm.preparedBy());
         for (TextField f : new TextField[] {planId, number, name, by}) {
             f.setPrefColumnCount(22);
-            f.setMinWidth(dev.proofrun.app.shell.Em.of(8)); // a narrow window narrows the fields, not the page
+            f.setMinWidth(dev.proofrun.app.shell.FontScale.of(8)); // a narrow window narrows the fields, not the page
         }
         form.addRow(0, label("_Plan id", planId), planId, label("Part n_umber", number), number);
         form.addRow(1, label("Part na_me", name), name, label("Prepared b_y", by), by);
@@ -58,8 +58,8 @@ public final class PartView implements StepView {
         dev.proofrun.app.shell.Tables.fitHeight(table, 2.2, 6, 12);
         table.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY_FLEX_LAST_COLUMN);
         // as wide as the card, not as the columns' widths added up: the columns share what there is
-        table.setPrefWidth(dev.proofrun.app.shell.Em.of(40));
-        table.setMinWidth(dev.proofrun.app.shell.Em.of(30));
+        table.setPrefWidth(dev.proofrun.app.shell.FontScale.of(40));
+        table.setMinWidth(dev.proofrun.app.shell.FontScale.of(30));
         Grid grid = new Grid(table, vm);
         table.addEventFilter(KeyEvent.KEY_PRESSED, grid::keyOnTable);
         for (CharacteristicField f : CharacteristicField.values()) {
@@ -76,7 +76,7 @@ public final class PartView implements StepView {
             c.setId("col-" + f.header());
             // a width of its own: the default width makes the skin measure every cell on the first showing
             // (hundreds of ms on a loaded machine); the constrained policy spreads the rest
-            c.setPrefWidth(dev.proofrun.app.shell.Em.of(switch (f) {
+            c.setPrefWidth(dev.proofrun.app.shell.FontScale.of(switch (f) {
                 case NAME, GAUGE -> 8;
                 case ID, UNIT, INDEX, TARGET, CONFIDENCE -> 4;
                 case EXPECTED, EXPECTED_CP, RESOLUTION -> 5.5;
@@ -85,7 +85,7 @@ public final class PartView implements StepView {
             // never narrower than its header's longest line (bold), so a narrow window does not cut a title
             int longest = java.util.Arrays.stream(title.split("\n")).mapToInt(String::length).max().orElse(1);
             boolean limit = f == CharacteristicField.LSL || f == CharacteristicField.USL || f == CharacteristicField.NOMINAL;
-            c.setMinWidth(dev.proofrun.app.shell.Em.of(Math.max(0.62 * longest + 1, limit ? 5 : 0))); // limits: "21.987"
+            c.setMinWidth(dev.proofrun.app.shell.FontScale.of(Math.max(0.62 * longest + 1, limit ? 5 : 0))); // limits: "21.987"
             c.setCellValueFactory(cd -> cd.getValue().cell(f));
             c.setCellFactory(col -> new CheckedCell(vm, f, grid));
             c.setOnEditCommit(e -> vm.setCell(e.getTablePosition().getRow(), f, e.getNewValue()));
@@ -152,7 +152,7 @@ public final class PartView implements StepView {
     private static Tooltip wrapping(String text) {
         Tooltip t = new Tooltip(text);
         t.setWrapText(true);
-        t.setMaxWidth(dev.proofrun.app.shell.Em.of(30));
+        t.setMaxWidth(dev.proofrun.app.shell.FontScale.of(30));
         return t;
     }
 

@@ -12,8 +12,8 @@ import dev.proofrun.app.session.CharacteristicDraft;
 import dev.proofrun.app.session.CharacteristicField;
 import dev.proofrun.app.session.CharacteristicListFile;
 import dev.proofrun.app.session.DraftField;
-import dev.proofrun.app.session.Numbers;
-import dev.proofrun.app.session.PlanBridge;
+import dev.proofrun.app.session.FieldNumbers;
+import dev.proofrun.app.session.PlanDrafts;
 import dev.proofrun.app.session.RowRequirement;
 import dev.proofrun.app.session.StudyDraft;
 import dev.proofrun.app.shell.StepViewModel;
@@ -279,12 +279,12 @@ public final class PartViewModel extends StepViewModel {
                     String gauge = row.text(CharacteristicField.GAUGE).trim();
                     return gauge.isEmpty() ? Optional.empty() : Optional.of(AppMessage.PART_RESOLUTION_MISSING.format(gauge));
                 }
-                OptionalDouble step = Numbers.parse(text);
+                OptionalDouble step = FieldNumbers.parse(text);
                 return step.isPresent() && step.getAsDouble() > 0 ? Optional.empty()
                         : Optional.of(AppMessage.PART_RESOLUTION_BAD.format(text));
             case SHAPE:
                 try {
-                    PlanBridge.shapeOf(row);
+                    PlanDrafts.shapeOf(row);
                     return Optional.empty();
                 } catch (IllegalArgumentException e) {
                     return Optional.of(e.getMessage());
@@ -300,12 +300,12 @@ public final class PartViewModel extends StepViewModel {
             default:
                 break;
         }
-        if (!Numbers.blankOrNumber(text)) {
+        if (!FieldNumbers.blankOrNumber(text)) {
             return Optional.of(AppMessage.PART_NOT_A_NUMBER.format(label(field), text));
         }
-        OptionalDouble lsl = Numbers.parse(row.text(LSL));
-        OptionalDouble usl = Numbers.parse(row.text(USL));
-        boolean limitsTyped = Numbers.blankOrNumber(row.text(LSL)) && Numbers.blankOrNumber(row.text(USL));
+        OptionalDouble lsl = FieldNumbers.parse(row.text(LSL));
+        OptionalDouble usl = FieldNumbers.parse(row.text(USL));
+        boolean limitsTyped = FieldNumbers.blankOrNumber(row.text(LSL)) && FieldNumbers.blankOrNumber(row.text(USL));
         if (field == LSL || field == USL) {
             if (limitsTyped && lsl.isEmpty() && usl.isEmpty()) {
                 return Optional.of(AppMessage.PART_NO_LIMIT.format());
@@ -316,7 +316,7 @@ public final class PartViewModel extends StepViewModel {
             return Optional.empty();
         }
         if (field == NOMINAL) {
-            OptionalDouble v = Numbers.parse(text);
+            OptionalDouble v = FieldNumbers.parse(text);
             if (v.isPresent() && ((lsl.isPresent() && v.getAsDouble() < lsl.getAsDouble())
                     || (usl.isPresent() && v.getAsDouble() > usl.getAsDouble()))) {
                 return Optional.of(AppMessage.PART_OUTSIDE.format(label(field), text));
@@ -324,7 +324,7 @@ public final class PartViewModel extends StepViewModel {
             return Optional.empty();
         }
         if (field == EXPECTED) {
-            OptionalDouble v = Numbers.parse(text);
+            OptionalDouble v = FieldNumbers.parse(text);
             return v.isPresent() && !(v.getAsDouble() > 0) ? Optional.of(AppMessage.PART_EXPECTED_BAD.format()) : Optional.empty();
         }
         return Optional.empty();

@@ -41,12 +41,12 @@ public final class CharacteristicDraft {
 
     /** The cell as a number, empty when blank or not a number. */
     public java.util.OptionalDouble number(CharacteristicField field) {
-        return Numbers.parse(text(field));
+        return FieldNumbers.parse(text(field));
     }
 
     /** The specification limits when they are typed correctly. */
     public java.util.Optional<dev.proofrun.stats.SpecLimits> limits() {
-        if (!Numbers.blankOrNumber(text(CharacteristicField.LSL)) || !Numbers.blankOrNumber(text(CharacteristicField.USL))) {
+        if (!FieldNumbers.blankOrNumber(text(CharacteristicField.LSL)) || !FieldNumbers.blankOrNumber(text(CharacteristicField.USL))) {
             return java.util.Optional.empty();
         }
         java.util.OptionalDouble lsl = number(CharacteristicField.LSL);

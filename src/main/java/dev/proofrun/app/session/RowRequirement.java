@@ -121,7 +121,7 @@ public final class RowRequirement {
     }
 
     private static Optional<IndexKind> index(String text) {
-        if (Numbers.isBlank(text)) {
+        if (FieldNumbers.isBlank(text)) {
             return Optional.empty();
         }
         try {
@@ -132,6 +132,6 @@ public final class RowRequirement {
     }
 
     private static boolean blank(CharacteristicDraft row, CharacteristicField field) {
-        return Numbers.isBlank(row.text(field));
+        return FieldNumbers.isBlank(row.text(field));
     }
 }

@@ -109,7 +109,7 @@ public final class Session {
         Path p = file.toAbsolutePath().normalize();
         StudyPlan plan = PlanFiles.read(p);
         Optional<DraftSnapshot> newer = drafts.newerDraft(p);
-        DraftSnapshot snapshot = newer.orElseGet(() -> PlanBridge.snapshotOf(plan, p));
+        DraftSnapshot snapshot = newer.orElseGet(() -> PlanDrafts.snapshotOf(plan, p));
         List<Path> now = recent.remember(p);
         return new Opening(p, plan, snapshot, newer.isPresent(), now);
     }

@@ -54,7 +54,7 @@ public final class IndexTooltips {
     public static Tooltip tooltip(String tipText) {
         Tooltip t = new Tooltip(tipText);
         t.setWrapText(true);
-        t.setMaxWidth(Em.of(34));
+        t.setMaxWidth(FontScale.of(34));
         t.setShowDelay(Duration.millis(300));
         t.setShowDuration(Duration.seconds(30));
         return t;

@@ -21,7 +21,7 @@ public final class Tables {
      * @param headerEm the height of the column headers, in em
      */
     public static void fitToRows(TableView<?> table, double headerEm, int minRows, int maxRows) {
-        table.setFixedCellSize(Em.of(ROW_EM));
+        table.setFixedCellSize(FontScale.of(ROW_EM));
         fitHeight(table, headerEm, minRows, maxRows);
     }
 
@@ -30,9 +30,9 @@ public final class Tables {
      * keeps its own height): only the height follows the rows.
      */
     public static void fitHeight(TableView<?> table, double headerEm, int minRows, int maxRows) {
-        double row = Em.of(ROW_EM);
+        double row = FontScale.of(ROW_EM);
         table.prefHeightProperty().bind(Bindings.createDoubleBinding(
-                () -> Em.of(headerEm) + row * Math.max(minRows, Math.min(maxRows, table.getItems().size())) + 2,
+                () -> FontScale.of(headerEm) + row * Math.max(minRows, Math.min(maxRows, table.getItems().size())) + 2,
                 Bindings.size(table.getItems())));
         table.setMinHeight(javafx.scene.layout.Region.USE_PREF_SIZE);
     }

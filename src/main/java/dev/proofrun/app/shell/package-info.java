@@ -10,7 +10,7 @@
  * is built ahead, hidden, so that its first showing only changes what is visible. Each step puts the focus in
  * its first field, asked again once the scroll pane has put the page in the scene.
  *
- * Shared by the steps: {@code Em} (sizes set in code, in em, following the system font), {@code Tables}
+ * Shared by the steps: {@code FontScale} (sizes set in code, in em, following the system font), {@code Tables}
  * (read-only tables with rows of one height, as tall as their rows), {@code IndexTip} (the one source of the
  * formula and meaning of Cp, Cpu, Cpl, Cpk, Pp, Ppu, Ppl, Ppk, Cpm and of a lower bound) and {@code
  * IndexTooltips} (keeps a label's tooltip in step with its text: every index named in it gets its tip).

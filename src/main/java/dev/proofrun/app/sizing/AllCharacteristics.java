@@ -4,7 +4,7 @@ import dev.proofrun.app.AppMessage;
 import dev.proofrun.app.session.Background;
 import dev.proofrun.design.Design;
 import dev.proofrun.app.session.CharacteristicDraft;
-import dev.proofrun.app.session.PlanBridge;
+import dev.proofrun.app.session.PlanDrafts;
 import dev.proofrun.app.session.RowRequirement;
 import dev.proofrun.design.DesignRequest;
 import dev.proofrun.design.Expectation;
@@ -173,7 +173,7 @@ final class AllCharacteristics {
 
     private static ShapeFamily shapeOrNormal(CharacteristicDraft row) {
         try {
-            return PlanBridge.shapeOf(row);
+            return PlanDrafts.shapeOf(row);
         } catch (IllegalArgumentException unknown) {
             return ShapeFamily.NORMAL; // the Part step marks the cell
         }

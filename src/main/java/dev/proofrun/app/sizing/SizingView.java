@@ -1,7 +1,7 @@
 package dev.proofrun.app.sizing;
 
 import dev.proofrun.app.chart.CurvePlot;
-import dev.proofrun.app.shell.Em;
+import dev.proofrun.app.shell.FontScale;
 import dev.proofrun.app.shell.StepView;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -44,7 +44,7 @@ public final class SizingView implements StepView {
         power.textProperty().bindBidirectional(vm.power());
         ProgressIndicator spinner = new ProgressIndicator();
         spinner.setId("design-busy");
-        spinner.setMaxSize(Em.of(1.8), Em.of(1.8));
+        spinner.setMaxSize(FontScale.of(1.8), FontScale.of(1.8));
         spinner.visibleProperty().bind(vm.busyProperty());
         Label refusal = note("design-refusal", "pr-problem");
         refusal.textProperty().bind(vm.refusalProperty());
@@ -195,13 +195,13 @@ public final class SizingView implements StepView {
         Label header = new Label(c.header());
         Tooltip tip = new Tooltip(c.tip());
         tip.setWrapText(true); // a long explanation wraps instead of running off the screen
-        tip.setMaxWidth(Em.of(28));
+        tip.setMaxWidth(FontScale.of(28));
         header.setTooltip(tip);
         column.setGraphic(header);
         column.setSortable(false);
         // a width of its own: the default width makes the skin measure every cell on the first showing; the
         // constrained policy spreads the columns anyway
-        column.setPrefWidth(Em.of(switch (c) {
+        column.setPrefWidth(FontScale.of(switch (c) {
             case N, K -> 3;
             case LIMITED_BY -> 8.5;
             default -> 4.5;

@@ -6,7 +6,7 @@ import dev.proofrun.app.goal.GoalViewModel;
 import dev.proofrun.app.session.Background;
 import dev.proofrun.app.session.CharacteristicDraft;
 import dev.proofrun.app.session.DraftField;
-import dev.proofrun.app.session.Numbers;
+import dev.proofrun.app.session.FieldNumbers;
 import dev.proofrun.app.session.RowRequirement;
 import dev.proofrun.app.session.StudyDraft;
 import dev.proofrun.app.shell.StepViewModel;
@@ -249,7 +249,7 @@ public final class SizingViewModel extends StepViewModel {
 
     /** The k kept from the plan file or the shared design, when there is one (at least 2). */
     public Optional<Integer> keptSubgroups() {
-        OptionalDouble k = Numbers.parse(draft.text(DraftField.CHOSEN_SUBGROUPS));
+        OptionalDouble k = FieldNumbers.parse(draft.text(DraftField.CHOSEN_SUBGROUPS));
         return k.isPresent() && k.getAsDouble() >= 2 ? Optional.of((int) k.getAsDouble()) : Optional.empty();
     }
 
@@ -296,7 +296,7 @@ public final class SizingViewModel extends StepViewModel {
                 || goal.focusBinding().get().get().limits().isEmpty()) {
             return Optional.empty();
         }
-        OptionalDouble p = Numbers.parse(draft.text(DraftField.POWER));
+        OptionalDouble p = FieldNumbers.parse(draft.text(DraftField.POWER));
         try {
             DesignRequest r = DesignRequest.of(goal.focusBinding().get().get().limits().get().sides(), req.get(), exp.get());
             return Optional.of(p.isPresent() ? r.withPower(p.getAsDouble()) : r);
@@ -320,7 +320,7 @@ public final class SizingViewModel extends StepViewModel {
         }
         refusal.set("");
         DesignRequest req = q.get();
-        OptionalDouble size = Numbers.parse(draft.text(DraftField.CHOSEN_SUBGROUP_SIZE));
+        OptionalDouble size = FieldNumbers.parse(draft.text(DraftField.CHOSEN_SUBGROUP_SIZE));
         int wanted = size.isPresent() ? (int) size.getAsDouble() : 0;
         Optional<Integer> kept = keptSubgroups();
         long mine = ++generation;
@@ -363,7 +363,7 @@ public final class SizingViewModel extends StepViewModel {
     }
 
     private void updateAll() {
-        OptionalDouble p = Numbers.parse(draft.text(DraftField.POWER));
+        OptionalDouble p = FieldNumbers.parse(draft.text(DraftField.POWER));
         all.update(draft.characteristics(), goal.requirementBinding().get(), goal::expectationFor,
                 p.isPresent() ? p.getAsDouble() : DesignRequest.DEFAULT_POWER, designBinding.get());
     }

@@ -25,7 +25,7 @@ public final class StartView implements StepView {
         title.getStyleClass().add("pr-card-title");
         recent.setId("recent");
         recent.setItems(vm.recent());
-        recent.setPrefHeight(dev.proofrun.app.shell.Em.of(16.5));
+        recent.setPrefHeight(dev.proofrun.app.shell.FontScale.of(16.5));
         recent.setPlaceholder(new Label("No plans opened yet."));
         recent.setCellFactory(l -> new ListCell<>() {
             @Override

@@ -3,7 +3,7 @@ package dev.proofrun.app.start;
 import dev.proofrun.app.AppMessage;
 import dev.proofrun.app.session.Background;
 import dev.proofrun.app.session.DecimalSetting;
-import dev.proofrun.app.session.Numbers;
+import dev.proofrun.app.session.FieldNumbers;
 import dev.proofrun.app.session.Session;
 import dev.proofrun.app.shell.StepViewModel;
 import dev.proofrun.text.DecimalMark;
@@ -39,12 +39,12 @@ public final class StartViewModel extends StepViewModel {
         this.files = files;
         bindMissing(Bindings.when(loaded).then("").otherwise(AppMessage.NO_PLAN.english()));
         refresh();
-        Numbers.decimalMarkProperty().set(DecimalSetting.load(session.home()));
-        markChoice.set(choiceOf(Numbers.decimalMarkProperty().get()));
+        FieldNumbers.decimalMarkProperty().set(DecimalSetting.load(session.home()));
+        markChoice.set(choiceOf(FieldNumbers.decimalMarkProperty().get()));
         markChoice.addListener((obs, was, now) -> {
             for (DecimalMark m : DecimalMark.values()) {
-                if (choiceOf(m).equals(now) && Numbers.decimalMarkProperty().get() != m) {
-                    Numbers.decimalMarkProperty().set(m);
+                if (choiceOf(m).equals(now) && FieldNumbers.decimalMarkProperty().get() != m) {
+                    FieldNumbers.decimalMarkProperty().set(m);
                     files.submit(() -> {
                         DecimalSetting.save(session.home(), m);
                         return m;

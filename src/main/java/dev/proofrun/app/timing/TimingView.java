@@ -113,7 +113,7 @@ public final class TimingView implements StepView {
         Label l = new Label();
         l.getStyleClass().add("pr-problem");
         l.setWrapText(true);
-        l.setMaxWidth(dev.proofrun.app.shell.Em.of(32));
+        l.setMaxWidth(dev.proofrun.app.shell.FontScale.of(32));
         l.textProperty().bind(vm.problem(f));
         return l;
     }

@@ -171,11 +171,11 @@ class GoalViewModelTest {
             assertEquals("'1,33' has a decimal comma, and the decimal mark is set to a point (1.33): retype it, "
                     + "or choose the comma on the Open step", vm.missingProperty().get());
             assertTrue(vm.requirementBinding().get().isEmpty());
-            dev.proofrun.app.session.Numbers.decimalMarkProperty().set(dev.proofrun.text.DecimalMark.COMMA);
+            dev.proofrun.app.session.FieldNumbers.decimalMarkProperty().set(dev.proofrun.text.DecimalMark.COMMA);
             assertEquals(1.33, vm.requirementBinding().get().orElseThrow().minimum(), 0, "checked again when the mark changes");
             assertEquals("", vm.missingProperty().get());
         } finally {
-            dev.proofrun.app.session.Numbers.decimalMarkProperty().set(dev.proofrun.text.DecimalMark.POINT);
+            dev.proofrun.app.session.FieldNumbers.decimalMarkProperty().set(dev.proofrun.text.DecimalMark.POINT);
         }
     }
 }

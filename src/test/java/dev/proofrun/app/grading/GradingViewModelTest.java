@@ -17,7 +17,7 @@ import dev.proofrun.app.start.StartViewModel;
 import dev.proofrun.grade.CharacteristicGrade;
 import dev.proofrun.grade.DemoReturn;
 import dev.proofrun.grade.GradeMessage;
-import dev.proofrun.grade.PlanAdapter;
+import dev.proofrun.grade.GradingPlans;
 import dev.proofrun.grade.Step;
 import dev.proofrun.grade.Verdict;
 import dev.proofrun.plan.StudyPlan;
@@ -53,7 +53,7 @@ class GradingViewModelTest {
         assertTrue(start.loadedProperty().get(), start.messageProperty().get());
         plan = session.base().orElseThrow();
         returned = tmp.resolve("returned.csv");
-        DemoReturn.writeCsv(PlanAdapter.of(plan), returned);
+        DemoReturn.writeCsv(GradingPlans.of(plan), returned);
         vm = new GradingViewModel(session, Background.inline());
     }
 

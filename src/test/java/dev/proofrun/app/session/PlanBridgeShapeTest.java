@@ -28,7 +28,7 @@ class PlanBridgeShapeTest {
         PlanFiles.write(file, demo);
         Session session = new Session(new AppHome(home, plans));
         session.open(file);
-        StudyPlan again = PlanBridge.compose(session.draft(), session.base(), demo.characteristics().get(0).requirement(),
+        StudyPlan again = PlanDrafts.compose(session.draft(), session.base(), demo.characteristics().get(0).requirement(),
                 row -> demo.characteristic(row.id()).orElseThrow().expectation(), demo.calendar(), demo.span(),
                 demo.design(), demo.spacing(), demo.seed(), demo.schedule());
         assertEquals(ShapeFamily.LOGNORMAL, again.characteristic("R4").orElseThrow().shape());
@@ -46,12 +46,12 @@ class PlanBridgeShapeTest {
         CharacteristicDraft d1 = session.draft().characteristics().get(0);
         assertEquals("normal", d1.text(CharacteristicField.SHAPE));
         d1.cell(CharacteristicField.SHAPE).set(" Weibull ");
-        StudyPlan again = PlanBridge.compose(session.draft(), session.base(), demo.characteristics().get(0).requirement(),
+        StudyPlan again = PlanDrafts.compose(session.draft(), session.base(), demo.characteristics().get(0).requirement(),
                 row -> demo.characteristic(row.id()).orElseThrow().expectation(), demo.calendar(), demo.span(),
                 demo.design(), demo.spacing(), demo.seed(), demo.schedule());
         assertEquals(ShapeFamily.WEIBULL, again.characteristic("D1").orElseThrow().shape());
         d1.cell(CharacteristicField.SHAPE).set("");
-        assertEquals(ShapeFamily.NORMAL, PlanBridge.shapeOf(d1), "blank is normal");
+        assertEquals(ShapeFamily.NORMAL, PlanDrafts.shapeOf(d1), "blank is normal");
         d1.cell(CharacteristicField.SHAPE).set("gamma");
         dev.proofrun.app.part.PartViewModel vm = new dev.proofrun.app.part.PartViewModel(session.draft());
         assertEquals(java.util.Optional.of("unknown shape 'gamma'; the shapes are " + ShapeFamily.names()),
@@ -72,7 +72,7 @@ class PlanBridgeShapeTest {
         assertEquals(was.resolution(), Double.parseDouble(d1.text(CharacteristicField.RESOLUTION)), 0.0, "exact");
 
         d1.cell(CharacteristicField.RESOLUTION).set("0.0005");
-        dev.proofrun.plan.Gauge now = PlanBridge.gaugeOf(d1, java.util.Optional.of(was)).orElseThrow();
+        dev.proofrun.plan.Gauge now = PlanDrafts.gaugeOf(d1, java.util.Optional.of(was)).orElseThrow();
         assertEquals(0.0005, now.resolution(), 0.0);
         assertEquals(was.sd(), now.sd(), "the repeatability the wizard does not edit is kept");
 
@@ -85,6 +85,6 @@ class PlanBridgeShapeTest {
                 vm.problem(d1, CharacteristicField.RESOLUTION));
         d1.cell(CharacteristicField.GAUGE).set("");
         d1.cell(CharacteristicField.RESOLUTION).set("");
-        assertEquals(java.util.Optional.empty(), PlanBridge.gaugeOf(d1, java.util.Optional.of(was)), "both blank: no gauge");
+        assertEquals(java.util.Optional.empty(), PlanDrafts.gaugeOf(d1, java.util.Optional.of(was)), "both blank: no gauge");
     }
 }

@@ -42,7 +42,7 @@ class RowRequirementTest {
 
     private static StudyPlan compose(Session s, Requirement plan) {
         StudyPlan demo = DemoPlan.create();
-        return PlanBridge.compose(s.draft(), s.base(), plan,
+        return PlanDrafts.compose(s.draft(), s.base(), plan,
                 r -> RowRequirement.expectation(r, r.number(CharacteristicField.EXPECTED).getAsDouble()),
                 demo.calendar(), demo.span(), demo.design(), demo.spacing(), demo.seed(), demo.schedule());
     }

@@ -114,13 +114,13 @@ class StartViewModelTest {
             StartViewModel vm = new StartViewModel(new Session(home), Background.inline());
             assertEquals("point  1.33", vm.markChoiceProperty().get(), "the command line's point to start with");
             vm.markChoiceProperty().set("comma  1,33");
-            assertEquals(dev.proofrun.text.DecimalMark.COMMA, dev.proofrun.app.session.Numbers.decimalMarkProperty().get());
-            assertEquals(1.33, dev.proofrun.app.session.Numbers.parse("1,33").getAsDouble(), 0);
-            dev.proofrun.app.session.Numbers.decimalMarkProperty().set(dev.proofrun.text.DecimalMark.POINT);
+            assertEquals(dev.proofrun.text.DecimalMark.COMMA, dev.proofrun.app.session.FieldNumbers.decimalMarkProperty().get());
+            assertEquals(1.33, dev.proofrun.app.session.FieldNumbers.parse("1,33").getAsDouble(), 0);
+            dev.proofrun.app.session.FieldNumbers.decimalMarkProperty().set(dev.proofrun.text.DecimalMark.POINT);
             StartViewModel next = new StartViewModel(new Session(home), Background.inline());
             assertEquals("comma  1,33", next.markChoiceProperty().get(), "kept in the user's folder");
         } finally {
-            dev.proofrun.app.session.Numbers.decimalMarkProperty().set(dev.proofrun.text.DecimalMark.POINT);
+            dev.proofrun.app.session.FieldNumbers.decimalMarkProperty().set(dev.proofrun.text.DecimalMark.POINT);
         }
     }
 }

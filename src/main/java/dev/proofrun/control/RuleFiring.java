@@ -9,10 +9,10 @@ import java.util.Objects;
  * @param rule  the rule
  * @param index the 0-based index of the point that completes the pattern
  */
-public record Signal(RunRule rule, int index) {
+public record RuleFiring(RunRule rule, int index) {
 
     /** @throws IllegalArgumentException if index &lt; 0 */
-    public Signal {
+    public RuleFiring {
         Objects.requireNonNull(rule, "rule");
         if (index < 0) {
             throw new IllegalArgumentException(String.format(Locale.ROOT, "index must not be negative: %d", index));

@@ -35,7 +35,7 @@ import java.util.stream.IntStream;
  * @param reason one sentence saying how it was chosen
  * @param solved the designer's shared design for the chosen n (empty when n and k were both given)
  */
-public record CommonDesign(Design design, String reason, Optional<SharedDesign> solved) {
+public record PlanDesign(Design design, String reason, Optional<SharedDesign> solved) {
 
     /** Refusals of the designer that are about one characteristic, so they are reported with its id. */
     private static final Set<DesignMessage> ABOUT_THE_CHARACTERISTIC = Set.of(DesignMessage.NOT_BETTER_THAN_REQUIRED,
@@ -48,11 +48,11 @@ public record CommonDesign(Design design, String reason, Optional<SharedDesign> 
      * @param subgroups       k, if fixed
      * @throws UserException when a characteristic cannot be sized (naming it), or no n suits all
      */
-    public static CommonDesign choose(List<Characteristic> characteristics, double power, OptionalInt subgroupSize,
+    public static PlanDesign choose(List<Characteristic> characteristics, double power, OptionalInt subgroupSize,
             OptionalInt subgroups) {
         if (subgroupSize.isPresent() && subgroups.isPresent()) {
             Design d = Design.of(subgroupSize.getAsInt(), subgroups.getAsInt());
-            return new CommonDesign(d, String.format(Locale.ROOT, "%d subgroups of %d as given; not solved.",
+            return new PlanDesign(d, String.format(Locale.ROOT, "%d subgroups of %d as given; not solved.",
                     d.subgroups(), d.subgroupSize()), Optional.empty());
         }
         List<Integer> sizes = subgroupSize.isPresent() ? List.of(subgroupSize.getAsInt())
@@ -68,7 +68,7 @@ public record CommonDesign(Design design, String reason, Optional<SharedDesign> 
                 : String.format(Locale.ROOT, "%d subgroups of %d (%d readings): the fewest readings that give every characteristic"
                         + " the wanted power of %.2f; %s needs the most subgroups.", k, n, n * k, power,
                         characteristics.get(best.driver()).id());
-        return new CommonDesign(Design.of(n, k), reason, Optional.of(best));
+        return new PlanDesign(Design.of(n, k), reason, Optional.of(best));
     }
 
     /**

@@ -12,11 +12,11 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
  * {@code integrity} (draft, intact, changed-after-issue) and {@code slots} at the top level:
  * {@code [{id, start, windowMinutes, shift, partsSinceStart}]}, start as ISO-8601 with offset.
  */
-public final class PlanView {
+public final class PlanDocument {
 
     private static final ObjectMapper MAPPER = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
 
-    private PlanView() {
+    private PlanDocument() {
     }
 
     public static ObjectNode tree(StudyPlan plan, PlanFiles.Integrity integrity) {

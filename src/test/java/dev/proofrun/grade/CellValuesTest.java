@@ -12,18 +12,18 @@ import java.util.SplittableRandom;
 import org.junit.jupiter.api.Test;
 
 /**
- * The fast paths of {@link Cells} give exactly what the general paths give: the same double as
- * {@link Double#parseDouble} (bit for bit) and the same instant as {@link Cells#taken}. The reference is the
+ * The fast paths of {@link CellValues} give exactly what the general paths give: the same double as
+ * {@link Double#parseDouble} (bit for bit) and the same instant as {@link CellValues#taken}. The reference is the
  * JDK's own parser, not a recalled value.
  */
-class CellsTest {
+class CellValuesTest {
 
     private static final ZoneId ZONE = ZoneId.of("Europe/Berlin");
     private static final LocalDate DAY = LocalDate.of(2027, 3, 1);
 
     private static void sameAsJdk(String text) {
         double expected = Double.parseDouble(text.replace(',', '.'));
-        double got = Cells.number(text);
+        double got = CellValues.number(text);
         assertEquals(Double.doubleToRawLongBits(expected), Double.doubleToRawLongBits(got), text);
     }
 
@@ -59,10 +59,10 @@ class CellsTest {
     }
 
     private static void sameInstant(String text) {
-        ZonedDateTime slow = Cells.taken(text, ZONE, DAY);
-        long fast = Cells.takenEpochSecond(text, ZONE, DAY);
+        ZonedDateTime slow = CellValues.taken(text, ZONE, DAY);
+        long fast = CellValues.takenEpochSecond(text, ZONE, DAY);
         if (slow == null) {
-            assertEquals(Cells.NOT_A_TIME, fast, text);
+            assertEquals(CellValues.NOT_A_TIME, fast, text);
         } else {
             assertEquals(slow.toEpochSecond(), fast, text);
         }
@@ -93,7 +93,7 @@ class CellsTest {
             "2027-03-01T06:00+1:000", "20a7-03-01T06:00+01:00"}) {
             sameInstant(s);
         }
-        assertEquals(Cells.NOT_A_TIME, Cells.takenEpochSecond("2027-02-30T06:00+01:00", ZONE, DAY));
-        assertTrue(Cells.takenEpochSecond("2028-02-29T06:00-05:30", ZONE, DAY) != Cells.NOT_A_TIME);
+        assertEquals(CellValues.NOT_A_TIME, CellValues.takenEpochSecond("2027-02-30T06:00+01:00", ZONE, DAY));
+        assertTrue(CellValues.takenEpochSecond("2028-02-29T06:00-05:30", ZONE, DAY) != CellValues.NOT_A_TIME);
     }
 }

@@ -19,7 +19,7 @@ import org.junit.jupiter.api.Test;
  * The common design is the shared designer's answer; checked here against the single-characteristic
  * designer ({@link StudyDesigner}, a separate path through the same search) combined by the documented rule.
  */
-class CommonDesignTest {
+class PlanDesignTest {
 
     private final List<Characteristic> chars = DemoPlan.draft().characteristics();
 
@@ -31,7 +31,7 @@ class CommonDesignTest {
 
     @Test
     void fixedDesignIsTakenAsGiven() {
-        CommonDesign d = CommonDesign.choose(chars, 0.9, OptionalInt.of(4), OptionalInt.of(30));
+        PlanDesign d = PlanDesign.choose(chars, 0.9, OptionalInt.of(4), OptionalInt.of(30));
         assertEquals(4, d.design().subgroupSize());
         assertEquals(30, d.design().subgroups());
         assertTrue(d.solved().isEmpty());
@@ -39,7 +39,7 @@ class CommonDesignTest {
 
     @Test
     void givenSubgroupSizeTakesTheLargestKAnyCharacteristicNeeds() {
-        CommonDesign d = CommonDesign.choose(chars, 0.9, OptionalInt.of(5), OptionalInt.empty());
+        PlanDesign d = PlanDesign.choose(chars, 0.9, OptionalInt.of(5), OptionalInt.empty());
         int k = chars.stream().mapToInt(c -> designerK(c, 5)).max().orElseThrow();
         assertEquals(5, d.design().subgroupSize());
         assertEquals(k, d.design().subgroups());
@@ -53,8 +53,8 @@ class CommonDesignTest {
 
     @Test
     void aGivenKReplacesTheSolvedOne() {
-        CommonDesign solved = CommonDesign.choose(chars, 0.9, OptionalInt.empty(), OptionalInt.empty());
-        CommonDesign d = CommonDesign.choose(chars, 0.9, OptionalInt.empty(), OptionalInt.of(40));
+        PlanDesign solved = PlanDesign.choose(chars, 0.9, OptionalInt.empty(), OptionalInt.empty());
+        PlanDesign d = PlanDesign.choose(chars, 0.9, OptionalInt.empty(), OptionalInt.of(40));
         int k = solved.design().subgroups();
         assertEquals(solved.design().subgroupSize(), d.design().subgroupSize());
         assertEquals(40, d.design().subgroups());
@@ -67,7 +67,7 @@ class CommonDesignTest {
         Characteristic c = chars.get(0);
         DesignRow rec = StudyDesigner.design(DesignRequest.of(c.limits().sides(), c.requirement(), c.expectation())
                 .withPower(0.9)).recommended();
-        CommonDesign d = CommonDesign.choose(List.of(c), 0.9, OptionalInt.empty(), OptionalInt.empty());
+        PlanDesign d = PlanDesign.choose(List.of(c), 0.9, OptionalInt.empty(), OptionalInt.empty());
         assertEquals(rec.subgroupSize(), d.design().subgroupSize());
         assertEquals(rec.subgroups(), d.design().subgroups());
     }
@@ -78,7 +78,7 @@ class CommonDesignTest {
         Characteristic r4 = chars.get(1);
         Characteristic atMinimum = new Characteristic(r4.id(), r4.name(), r4.unit(), r4.nominal(), r4.limits(),
                 r4.gauge(), r4.requirement(), Expectation.centred(r4.requirement().minimum()));
-        UserException e = assertThrows(UserException.class, () -> CommonDesign.choose(
+        UserException e = assertThrows(UserException.class, () -> PlanDesign.choose(
                 List.of(chars.get(0), atMinimum, chars.get(2)), 0.9, OptionalInt.empty(), OptionalInt.empty()));
         assertEquals(PlanMessage.CHARACTERISTIC_REFUSED, e.key());
         assertEquals("characteristic R4: expected Cpk 1.330 is not above the required 1.330: no study size can show"
@@ -92,7 +92,7 @@ class CommonDesignTest {
         Characteristic f7 = chars.get(2);
         Characteristic barely = new Characteristic(f7.id(), f7.name(), f7.unit(), f7.nominal(), f7.limits(),
                 f7.gauge(), f7.requirement(), Expectation.centred(1.34));
-        UserException e = assertThrows(UserException.class, () -> CommonDesign.choose(
+        UserException e = assertThrows(UserException.class, () -> PlanDesign.choose(
                 List.of(chars.get(0), chars.get(1), barely), 0.9, OptionalInt.empty(), OptionalInt.empty()));
         assertEquals(PlanMessage.CHARACTERISTIC_REFUSED, e.key());
         assertTrue(e.getMessage().startsWith("characteristic F7: a power of 0.900 is out of reach"), e.getMessage());

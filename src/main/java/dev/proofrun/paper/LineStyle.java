@@ -8,14 +8,14 @@ package dev.proofrun.paper;
  * @param gray  0 (black) to 1 (white)
  * @param dash  dash pattern, empty for a solid line
  */
-public record Pen(float width, float gray, float[] dash) {
+public record LineStyle(float width, float gray, float[] dash) {
 
     /** A thin black hairline for cell borders. */
-    public static final Pen HAIR = solid(0.4f);
+    public static final LineStyle HAIR = solid(0.4f);
     /** A firm black rule. */
-    public static final Pen RULE = solid(0.9f);
+    public static final LineStyle RULE = solid(0.9f);
 
-    public Pen {
+    public LineStyle {
         if (!(width > 0) || !(gray >= 0 && gray <= 1)) {
             throw new IllegalArgumentException("pen width must be > 0 and gray in [0, 1]");
         }
@@ -23,18 +23,18 @@ public record Pen(float width, float gray, float[] dash) {
     }
 
     /** A solid black line. */
-    public static Pen solid(float width) {
-        return new Pen(width, 0, new float[0]);
+    public static LineStyle solid(float width) {
+        return new LineStyle(width, 0, new float[0]);
     }
 
     /** A dashed black line. */
-    public static Pen dashed(float width, float on, float off) {
-        return new Pen(width, 0, new float[] {on, off});
+    public static LineStyle dashed(float width, float on, float off) {
+        return new LineStyle(width, 0, new float[] {on, off});
     }
 
     /** The same pen in a grey level. */
-    public Pen gray(float level) {
-        return new Pen(width, level, dash);
+    public LineStyle gray(float level) {
+        return new LineStyle(width, level, dash);
     }
 
     @Override

@@ -14,11 +14,11 @@ import javafx.beans.property.SimpleObjectProperty;
  * {@link #decimalMarkProperty()}, which bindings that parse numbers list among their dependencies so that
  * changing the mark checks every field again.
  */
-public final class Numbers {
+public final class FieldNumbers {
 
     private static final ObjectProperty<DecimalMark> MARK = new SimpleObjectProperty<>(DecimalMark.POINT);
 
-    private Numbers() {
+    private FieldNumbers() {
     }
 
     /** The decimal mark of the wizard's fields (the window's choice; {@link DecimalMark#POINT} to start). */

@@ -4,9 +4,9 @@ import java.util.ArrayList;
 import java.util.List;
 
 /** Line breaking for text set in one face and size. */
-public final class Text {
+public final class LineBreaker {
 
-    private Text() {
+    private LineBreaker() {
     }
 
     /**

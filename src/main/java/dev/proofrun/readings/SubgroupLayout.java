@@ -1,7 +1,7 @@
 package dev.proofrun.readings;
 
 /** How a readings file arranges its readings into subgroups. */
-public enum Layout {
+public enum SubgroupLayout {
     /** A {@code value} column, one reading per row, in time order. */
     VALUES("value"),
     /** A {@code value} column and a {@code subgroup} column naming each reading's subgroup. */
@@ -11,7 +11,7 @@ public enum Layout {
 
     private final String description;
 
-    Layout(String description) {
+    SubgroupLayout(String description) {
         this.description = description;
     }
 

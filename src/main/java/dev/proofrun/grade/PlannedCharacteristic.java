@@ -18,17 +18,17 @@ import java.util.Objects;
  * @param requirement what must be shown
  * @param shape       the distribution model the plan declares for the readings
  */
-public record GradedCharacteristic(String id, String name, String unit, SpecLimits limits, Double nominal,
+public record PlannedCharacteristic(String id, String name, String unit, SpecLimits limits, Double nominal,
         double resolution, Requirement requirement, ShapeFamily shape) {
 
     /** A characteristic planned with the normal model. */
-    public GradedCharacteristic(String id, String name, String unit, SpecLimits limits, Double nominal,
+    public PlannedCharacteristic(String id, String name, String unit, SpecLimits limits, Double nominal,
             double resolution, Requirement requirement) {
         this(id, name, unit, limits, nominal, resolution, requirement, ShapeFamily.NORMAL);
     }
 
     /** @throws IllegalArgumentException if the resolution is negative or not finite */
-    public GradedCharacteristic {
+    public PlannedCharacteristic {
         Objects.requireNonNull(id, "id");
         Objects.requireNonNull(limits, "limits");
         Objects.requireNonNull(requirement, "requirement");

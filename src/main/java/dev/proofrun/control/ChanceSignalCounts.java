@@ -30,7 +30,7 @@ import org.hipparchus.distribution.continuous.NormalDistribution;
  * and {@link #prepare} can start one on a background thread before it is asked for; both only move work,
  * the figures are those of a fresh run.
  */
-public final class ChanceSignals {
+public final class ChanceSignalCounts {
 
     public static final long READINGS_BUDGET = 1_000_000L;
     static final int BLOCKS = 64;
@@ -48,7 +48,7 @@ public final class ChanceSignals {
     /** k/kb when blocks were simulated, 1 otherwise. */
     private final double scale;
 
-    private ChanceSignals(double[] location, double[] spread, boolean[] between, double scale) {
+    private ChanceSignalCounts(double[] location, double[] spread, boolean[] between, double scale) {
         this.location = location;
         this.spread = spread;
         this.between = between;
@@ -63,7 +63,7 @@ public final class ChanceSignals {
      * @param k     number of subgroups
      * @param rules the rules on the location chart
      */
-    public static ChanceSignals simulate(ChartKind kind, int n, int k, Set<RunRule> rules) {
+    public static ChanceSignalCounts simulate(ChartKind kind, int n, int k, Set<RunRule> rules) {
         try {
             return future(kind, n, k, rules, false).join();
         } catch (java.util.concurrent.CompletionException e) {
@@ -85,18 +85,18 @@ public final class ChanceSignals {
         future(kind, n, k, rules, true);
     }
 
-    private static CompletableFuture<ChanceSignals> future(ChartKind kind, int n, int k, Set<RunRule> rules,
+    private static CompletableFuture<ChanceSignalCounts> future(ChartKind kind, int n, int k, Set<RunRule> rules,
             boolean background) {
         Key key = new Key(kind, n, k, Set.copyOf(rules));
-        CompletableFuture<ChanceSignals> known = CACHE.get(key);
+        CompletableFuture<ChanceSignalCounts> known = CACHE.get(key);
         if (known != null) {
             return known;
         }
         if (CACHE.size() >= CACHE_SIZE) {
             CACHE.clear();
         }
-        CompletableFuture<ChanceSignals> mine = new CompletableFuture<>();
-        CompletableFuture<ChanceSignals> raced = CACHE.putIfAbsent(key, mine);
+        CompletableFuture<ChanceSignalCounts> mine = new CompletableFuture<>();
+        CompletableFuture<ChanceSignalCounts> raced = CACHE.putIfAbsent(key, mine);
         if (raced != null) {
             return raced;
         }
@@ -126,10 +126,10 @@ public final class ChanceSignals {
      * Simulations already run in this JVM. A plan's characteristics share n and k, so a part with ten
      * characteristics runs one simulation, not ten; the figures are the same as a fresh run's (seeded).
      */
-    private static final Map<Key, CompletableFuture<ChanceSignals>> CACHE = new ConcurrentHashMap<>();
+    private static final Map<Key, CompletableFuture<ChanceSignalCounts>> CACHE = new ConcurrentHashMap<>();
     static final int CACHE_SIZE = 32;
 
-    public static ChanceSignals run(ChartKind kind, int n, int k, Set<RunRule> rules) {
+    public static ChanceSignalCounts run(ChartKind kind, int n, int k, Set<RunRule> rules) {
         long perStudy = (long) n * k;
         int studies = (int) Math.min(MAX_STUDIES, READINGS_BUDGET / Math.max(1, perStudy));
         int length = k;
@@ -163,7 +163,7 @@ public final class ChanceSignals {
                         && ratio >= StabilityRule.RATIO_LIMIT;
             }
         }
-        return new ChanceSignals(loc, spr, between, scale);
+        return new ChanceSignalCounts(loc, spr, between, scale);
     }
 
     /** The number of simulated studies (or blocks). */

@@ -28,9 +28,9 @@ import java.util.function.Function;
  * from, matched by characteristic id. Each row keeps its own requirement and expected centring
  * ({@link RowRequirement}); the Goal step shows the first characteristic's requirement as the plan's.
  */
-public final class PlanBridge {
+public final class PlanDrafts {
 
-    private PlanBridge() {
+    private PlanDrafts() {
     }
 
     /**
@@ -138,7 +138,7 @@ public final class PlanBridge {
         if (name.isEmpty() && step.isEmpty()) {
             return Optional.empty();
         }
-        OptionalDouble resolution = Numbers.parse(step);
+        OptionalDouble resolution = FieldNumbers.parse(step);
         if (resolution.isEmpty() && !step.isEmpty()) {
             throw new IllegalArgumentException(String.format(Locale.ROOT, "gauge resolution must be positive: %s", step));
         }

@@ -9,7 +9,7 @@ import java.util.Locale;
 import java.util.OptionalDouble;
 
 /** How the sheet and the fill-in files write numbers and times. */
-final class Values {
+final class SheetNumbers {
 
     /** ISO-8601 local date-time with the offset, minutes precision, never "Z": 2027-03-01T06:40+01:00. */
     static final DateTimeFormatter PLANNED = DateTimeFormatter.ofPattern("uuuu-MM-dd'T'HH:mmxxx", Locale.ROOT);
@@ -18,7 +18,7 @@ final class Values {
     /** Clock time: "06:40". */
     static final DateTimeFormatter CLOCK = DateTimeFormatter.ofPattern("HH:mm", Locale.ROOT);
 
-    private Values() {
+    private SheetNumbers() {
     }
 
     /** The planned time as the fill-in files carry it. */

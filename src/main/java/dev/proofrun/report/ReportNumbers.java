@@ -3,11 +3,11 @@ package dev.proofrun.report;
 import java.util.Locale;
 
 /** Number formats of the report: fixed decimals, Locale.ROOT, a dash for a value that does not exist. */
-final class Fmt {
+final class ReportNumbers {
 
     static final String NONE = "\u2014";
 
-    private Fmt() {
+    private ReportNumbers() {
     }
 
     /** Characters of a name from the plan (part, characteristic) printed in the report before it is cut. */

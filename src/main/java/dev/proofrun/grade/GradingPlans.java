@@ -9,9 +9,9 @@ import java.util.ArrayList;
 import java.util.List;
 
 /** Builds the {@link GradingPlan} from an issued {@link StudyPlan}. */
-public final class PlanAdapter {
+public final class GradingPlans {
 
-    private PlanAdapter() {
+    private GradingPlans() {
     }
 
     /**
@@ -20,10 +20,10 @@ public final class PlanAdapter {
      * looks come along.
      */
     public static GradingPlan of(StudyPlan plan) {
-        List<GradedCharacteristic> cs = new ArrayList<>();
+        List<PlannedCharacteristic> cs = new ArrayList<>();
         for (Characteristic c : plan.characteristics()) {
             double resolution = c.gauge().map(Gauge::resolution).orElse(0.0);
-            cs.add(new GradedCharacteristic(c.id(), c.name(), c.unit(), c.limits(),
+            cs.add(new PlannedCharacteristic(c.id(), c.name(), c.unit(), c.limits(),
                     c.nominal().isPresent() ? c.nominal().getAsDouble() : null, resolution, c.requirement(), c.shape()));
         }
         List<PlannedSlot> slots = new ArrayList<>();

@@ -11,9 +11,9 @@ import java.time.ZonedDateTime;
 import java.time.format.DateTimeParseException;
 
 /** Reading the cells of returned files: numbers in either decimal convention, and taken times. */
-final class Cells {
+final class CellValues {
 
-    private Cells() {
+    private CellValues() {
     }
 
     /**

@@ -11,5 +11,5 @@ import dev.proofrun.control.RunRule;
  * @param subgroup 1-based position of the subgroup among the graded subgroups
  * @param slot     the plan's slot id of that subgroup, e.g. "S07"
  */
-public record ChartSignal(ChartStatistic chart, RunRule rule, int subgroup, String slot) {
+public record SlotSignal(ChartStatistic chart, RunRule rule, int subgroup, String slot) {
 }

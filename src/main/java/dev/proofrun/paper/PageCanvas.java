@@ -11,7 +11,7 @@ import org.apache.pdfbox.util.Matrix;
  * lines, polylines, rectangles, dashed lines and point markers. I/O failures surface as
  * {@link UncheckedIOException}.
  */
-public final class Canvas implements AutoCloseable {
+public final class PageCanvas implements AutoCloseable {
 
     /** Shapes for plotted points; distinguishable in black and white. */
     public enum Marker {
@@ -29,9 +29,9 @@ public final class Canvas implements AutoCloseable {
     private static final float KAPPA = 0.5522848f;
 
     private final PDPageContentStream out;
-    private Pen pen;
+    private LineStyle pen;
 
-    Canvas(PDPageContentStream out) {
+    PageCanvas(PDPageContentStream out) {
         this.out = out;
     }
 
@@ -87,7 +87,7 @@ public final class Canvas implements AutoCloseable {
     }
 
     /** Sets the pen for the lines that follow. */
-    public void pen(Pen next) {
+    public void pen(LineStyle next) {
         if (next.equals(pen)) {
             return;
         }

@@ -21,9 +21,9 @@ import java.util.function.Supplier;
  * them here, so a bad value gets the same one line from each: the option, then what is wrong with the value
  * ({@link OptionMessage#BAD_VALUE}, e.g. {@code --sigma: unknown sigma method 'rbr' (rbar, sbar, pooled or mr)}).
  */
-final class Conventions {
+final class OptionValues {
 
-    private Conventions() {
+    private OptionValues() {
     }
 
     /** @throws UserException naming {@code --index} for an unknown index */
