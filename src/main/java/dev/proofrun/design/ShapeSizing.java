@@ -81,8 +81,13 @@ public final class ShapeSizing {
         if (needed.isEmpty()) {
             return rows;
         }
-        // the rows' own study sizes, on both cores (each is one simulation; the loop below then mostly reads them)
-        sizes.parallelStream().forEach(n -> power.applyAsDouble(n * firstK(n, needed.getAsInt(), floors)));
+        // the rows' own study sizes and gates, on both cores (each is one simulation, kept: the loop below then
+        // mostly reads them)
+        sizes.parallelStream().forEach(n -> {
+            int k = firstK(n, needed.getAsInt(), floors);
+            power.applyAsDouble(n * k);
+            gates(n, k);
+        });
         for (int n : sizes) {
             int k = firstK(n, needed.getAsInt(), floors);
             // the simulated power wobbles by its Monte-Carlo error from one N to the next: step k up until this

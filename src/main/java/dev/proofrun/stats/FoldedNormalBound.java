@@ -4,6 +4,7 @@ import java.util.Arrays;
 import java.util.Locale;
 import java.util.Map;
 import java.util.concurrent.ConcurrentHashMap;
+import java.util.stream.IntStream;
 import org.apache.commons.rng.sampling.distribution.ZigguratSampler;
 import org.apache.commons.rng.simple.RandomSource;
 
@@ -44,6 +45,8 @@ public final class FoldedNormalBound {
     public static final double GAMMA_SHARE = 0.2;
 
     private static final int CACHE_LIMIT = 16;
+    /** Standard studies drawn before they are refitted together. */
+    private static final int BLOCK = 100;
     private static final Map<String, Table> CACHE = new ConcurrentHashMap<>();
 
     private FoldedNormalBound() {
@@ -214,32 +217,59 @@ public final class FoldedNormalBound {
                 FoldedNormal.quantile(THETAS[g], 1, 0.5), FoldedNormal.quantile(THETAS[g], 1, PercentileIndex.HIGH)};
         }
         ZigguratSampler.NormalizedGaussian z = ZigguratSampler.NormalizedGaussian.of(RandomSource.XO_RO_SHI_RO_128_PP.create(seed));
-        // a study whose refit fails (mean/σ beyond the search) is drawn again from its own stream
+        // a study whose refit fails (mean/σ beyond the search) is drawn again from its own stream, in the order
+        // (draw, then value of mean/σ) of a one-by-one build
         ZigguratSampler.NormalizedGaussian again = ZigguratSampler.NormalizedGaussian.of(RandomSource.XO_RO_SHI_RO_128_PP.create(~seed));
-        double[] e = new double[n];
         double[] x = new double[n];
-        for (int j = 0; j < DRAWS; j++) {
-            for (int i = 0; i < n; i++) {
-                e[i] = z.sample();
-            }
-            for (int g = 0; g < grid; g++) {
-                double[] f = fit(e, THETAS[g], x);
-                while (f == null) {
-                    for (int i = 0; i < n; i++) {
-                        x[i] = again.sample();
-                    }
-                    f = fit(x.clone(), THETAS[g], x);
+        double[][] block = new double[BLOCK][n];
+        boolean[][] failed = new boolean[BLOCK][];
+        for (int j0 = 0; j0 < DRAWS; j0 += BLOCK) {
+            int first = j0;
+            int size = Math.min(BLOCK, DRAWS - j0);
+            for (int s = 0; s < size; s++) {
+                for (int i = 0; i < n; i++) {
+                    block[s][i] = z.sample();
                 }
-                low[g][j] = FoldedNormal.quantile(f[0], f[1], PercentileIndex.LOW);
-                median[g][j] = FoldedNormal.quantile(f[0], f[1], 0.5);
-                high[g][j] = FoldedNormal.quantile(f[0], f[1], PercentileIndex.HIGH);
-                ratio[g][j] = f[0] / f[1];
+            }
+            // the first refits of the block and their quantiles on all cores (no random numbers are used there)
+            IntStream.range(0, size).parallel().forEach(s -> {
+                double[] xs = new double[n];
+                failed[s] = new boolean[grid];
+                for (int g = 0; g < grid; g++) {
+                    double[] f = fit(block[s], THETAS[g], xs);
+                    failed[s][g] = f == null;
+                    if (f != null) {
+                        record(f, g, first + s, low, median, high, ratio);
+                    }
+                }
+            });
+            for (int s = 0; s < size; s++) {
+                for (int g = 0; g < grid; g++) {
+                    if (failed[s][g]) {
+                        double[] f = null;
+                        while (f == null) {
+                            for (int i = 0; i < n; i++) {
+                                x[i] = again.sample();
+                            }
+                            f = fit(x.clone(), THETAS[g], x);
+                        }
+                        record(f, g, j0 + s, low, median, high, ratio);
+                    }
+                }
             }
         }
         for (double[] r : ratio) {
             Arrays.sort(r);
         }
         return new Table(truth, low, median, high, ratio);
+    }
+
+    /** Stores the refitted unit quantiles and mean/σ of draw j at grid value g. */
+    private static void record(double[] f, int g, int j, double[][] low, double[][] median, double[][] high, double[][] ratio) {
+        low[g][j] = FoldedNormal.quantile(f[0], f[1], PercentileIndex.LOW);
+        median[g][j] = FoldedNormal.quantile(f[0], f[1], 0.5);
+        high[g][j] = FoldedNormal.quantile(f[0], f[1], PercentileIndex.HIGH);
+        ratio[g][j] = f[0] / f[1];
     }
 
     /** The fit of the readings |θ + eᵢ|, written into {@code x}. */

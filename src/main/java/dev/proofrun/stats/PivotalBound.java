@@ -4,6 +4,7 @@ import java.util.Arrays;
 import java.util.Locale;
 import java.util.Map;
 import java.util.concurrent.ConcurrentHashMap;
+import java.util.stream.IntStream;
 import org.apache.commons.rng.UniformRandomProvider;
 import org.apache.commons.rng.sampling.distribution.AhrensDieterMarsagliaTsangGammaSampler;
 import org.apache.commons.rng.sampling.distribution.ZigguratSampler;
@@ -38,6 +39,8 @@ public final class PivotalBound {
     public static final long DEFAULT_SEED = 0x5eed_2271L;
 
     private static final int CACHE_LIMIT = 64;
+    /** Weibull samples drawn before they are refitted together. */
+    private static final int BLOCK = 256;
     private static final Map<String, double[][]> CACHE = new ConcurrentHashMap<>();
 
     private PivotalBound() {
@@ -153,22 +156,33 @@ public final class PivotalBound {
         return new double[][] {u0, b0};
     }
 
+    /**
+     * The Weibull pivots: standard exponential samples drawn in order from one stream, {@value #BLOCK} samples at a
+     * time, refitted on all cores, then taken in order — the same draws, bit for bit, as refitting each sample as it
+     * is drawn (a sample with no fit, a tie of all N and vanishingly rare, is skipped as the next one is drawn).
+     */
     private static double[][] extremeValuePivots(int n, long seed, int draws) {
         UniformRandomProvider rng = RandomSource.XO_RO_SHI_RO_128_PP.create(seed);
         ZigguratSampler.Exponential e = ZigguratSampler.Exponential.of(rng);
         double[] u0 = new double[draws];
         double[] b0 = new double[draws];
-        double[] x = new double[n];
+        double[][] block = new double[BLOCK][n];
+        ShapeFitter.Outcome[] fits = new ShapeFitter.Outcome[BLOCK];
         int j = 0;
         while (j < draws) {
-            for (int i = 0; i < n; i++) {
-                x[i] = e.sample();
+            int size = Math.min(BLOCK, draws - j);
+            for (int s = 0; s < size; s++) {
+                for (int i = 0; i < n; i++) {
+                    block[s][i] = e.sample();
+                }
             }
-            ShapeFitter.Outcome o = ShapeFitter.fitUnbounded(ShapeFamily.WEIBULL, x);
-            if (o.fitted()) { // a sample with no fit (a tie of all N, vanishingly rare) is drawn again
-                u0[j] = o.fit().location();
-                b0[j] = o.fit().scale();
-                j++;
+            IntStream.range(0, size).parallel().forEach(s -> fits[s] = ShapeFitter.fitUnbounded(ShapeFamily.WEIBULL, block[s]));
+            for (int s = 0; s < size; s++) {
+                if (fits[s].fitted()) {
+                    u0[j] = fits[s].fit().location();
+                    b0[j] = fits[s].fit().scale();
+                    j++;
+                }
             }
         }
         return new double[][] {u0, b0};

@@ -11,7 +11,7 @@ package dev.proofrun.stats;
  * <li><b>Weibull</b>: on y = ln x the smallest-extreme-value MLE (Lawless 2003, <em>Statistical Models and
  *     Methods for Lifetime Data</em>, §5.2). With z = (y − ȳ)/s_y the shape k_z solves
  *     Σ zᵢ wᵢ / Σ wᵢ − 1/k_z − z̄ = 0, wᵢ = exp(k_z zᵢ), which rises in k_z from −∞ to max z − z̄; found by
- *     Newton's method kept inside a bisection bracket on [{@value #K_LOW}, {@value #K_HIGH}]. Then
+ *     Halley's method kept inside a bisection bracket on [{@value #K_LOW}, {@value #K_HIGH}]. Then
  *     u = ȳ + s_y·ln(mean wᵢ)/k_z, b = s_y/k_z, and the Weibull shape is k = 1/b, scale c = eᵘ.
  *     SciPy's {@code weibull_min.fit(x, floc=0)} maximises the same likelihood.</li>
  * <li><b>Folded normal</b>: μ ≥ 0 and σ of the unfolded normal by the profile likelihood of
@@ -29,6 +29,8 @@ public final class ShapeFitter {
     public static final double MAX_WEIBULL_SHAPE = 50;
     static final double K_LOW = 1e-3;
     static final double K_HIGH = 1e3;
+    /** A Halley step below this share of k is the last one (see {@link #solveShape}). */
+    static final double HALLEY_LAST = 1e-5;
 
     private ShapeFitter() {
     }
@@ -142,64 +144,81 @@ public final class ShapeFitter {
 
     private static Outcome extremeValue(double[] y, double mean, double sd, boolean capShape) {
         int n = y.length;
-        double[] z = new double[n];
+        double[] d = new double[n]; // z − max z ≤ 0, so that the weights exp(k·d) never overflow
         double zMax = Double.NEGATIVE_INFINITY;
         for (int i = 0; i < n; i++) {
-            z[i] = (y[i] - mean) / sd;
-            zMax = Math.max(zMax, z[i]);
+            d[i] = (y[i] - mean) / sd;
+            zMax = Math.max(zMax, d[i]);
         }
-        // on standardised readings the score is below zero at K_LOW (weighted mean of z ≤ √N − 1000 < 0 for any
-        // study below a million readings) and above zero at K_HIGH (it tends to max z > 0): the root is bracketed
-        double lo = K_LOW;
-        double hi = K_HIGH;
-        double k = 1.28; // the standard smallest-extreme-value's k_z (π/√6 ≈ 1.28)
-        for (int iter = 0; iter < 200 && hi - lo > 1e-12 * hi; iter++) {
-            double[] g = score(z, zMax, k);
-            if (g[0] == 0) {
-                break;
-            }
-            if (g[0] < 0) {
-                lo = k;
-            } else {
-                hi = k;
-            }
-            double next = k - g[0] / g[1];
-            if (!(next > lo && next < hi)) {
-                next = 0.5 * (lo + hi);
-            }
-            if (Math.abs(next - k) <= 1e-13 * k) {
-                k = next;
-                break;
-            }
-            k = next;
+        for (int i = 0; i < n; i++) {
+            d[i] -= zMax;
         }
-        if (k <= K_LOW * 1.000001 || k >= K_HIGH * 0.999999) {
+        double[] k = solveShape(d, zMax);
+        if (k[0] <= K_LOW * 1.000001 || k[0] >= K_HIGH * 0.999999) {
             return Outcome.failed(Failure.AT_SEARCH_LIMIT, -1);
         }
-        double s0 = 0;
-        for (double v : z) {
-            s0 += Math.exp(k * (v - zMax));
-        }
-        double uz = zMax + Math.log(s0 / n) / k;
-        double b = sd / k;
+        double uz = zMax + (k[1] - Math.log(n)) / k[0];
+        double b = sd / k[0];
         if (capShape && 1 / b > MAX_WEIBULL_SHAPE) {
             return Outcome.failed(Failure.SHAPE_TOO_LARGE, -1);
         }
         return Outcome.of(new ShapeFit(ShapeFamily.WEIBULL, mean + sd * uz, b));
     }
 
-    /** {g(k), g′(k)}: the profile score in k and its derivative (weighted variance of z plus 1/k²). */
-    private static double[] score(double[] z, double zMax, double k) {
-        double s0 = 0;
-        double s1 = 0;
-        double s2 = 0;
-        for (double v : z) {
-            double w = Math.exp(k * (v - zMax));
-            s0 += w;
-            s1 += w * v;
-            s2 += w * v * v;
+    /**
+     * {k_z, ln Σ exp(k_z·dᵢ)}: the root of the profile score g(k) = Σ zᵢwᵢ/Σ wᵢ − 1/k (z̄ = 0), with dᵢ = zᵢ − max z.
+     * Halley's method (g, g′, g″ from the weighted moments of d, one pass of N exponentials per step) kept inside a
+     * bisection bracket on [{@value #K_LOW}, {@value #K_HIGH}], from the standard smallest-extreme-value's k_z.
+     * Halley's error is cubic, so once a step is below {@value #HALLEY_LAST}·k the step itself leaves an error of
+     * order 1e-15 and is taken as the last; the log-sum at the root is then carried from the last pass by its
+     * Taylor series in the step (the weighted mean, variance and third moment of d are its derivatives), which
+     * saves the pass of N exponentials that evaluating it afresh would cost.
+     */
+    static double[] solveShape(double[] d, double zMax) {
+        double lo = K_LOW;
+        double hi = K_HIGH;
+        double k = 1.28; // the standard smallest-extreme-value's k_z (π/√6 ≈ 1.28)
+        for (int iter = 0; iter < 200 && hi - lo > 1e-12 * hi; iter++) {
+            double s0 = 0;
+            double s1 = 0;
+            double s2 = 0;
+            double s3 = 0;
+            for (double v : d) {
+                double w = Math.exp(k * v);
+                double wv = w * v;
+                s0 += w;
+                s1 += wv;
+                s2 += wv * v;
+                s3 += wv * v * v;
+            }
+            double m1 = s1 / s0; // weighted mean of d; that of z is m1 + zMax
+            double var = s2 / s0 - m1 * m1;
+            double mu3 = s3 / s0 - 3 * m1 * s2 / s0 + 2 * m1 * m1 * m1;
+            double g = m1 + zMax - 1 / k;
+            double g1 = var + 1 / (k * k);
+            double g2 = mu3 - 2 / (k * k * k);
+            double logSum = Math.log(s0);
+            if (g == 0) {
+                return new double[] {k, logSum};
+            }
+            if (g < 0) {
+                lo = k;
+            } else {
+                hi = k;
+            }
+            double next = k - 2 * g * g1 / (2 * g1 * g1 - g * g2);
+            if (!(next > lo && next < hi)) {
+                next = 0.5 * (lo + hi);
+            } else if (Math.abs(next - k) <= HALLEY_LAST * k) {
+                double h = next - k;
+                return new double[] {next, logSum + h * (m1 + h * (var / 2 + h * mu3 / 6))};
+            }
+            k = next;
         }
-        double m1 = s1 / s0;
-        return new double[] {m1 - 1 / k, s2 / s0 - m1 * m1 + 1 / (k * k)};
+        double s0 = 0; // the bracket closed on its own (a root at a search limit): the log-sum at the last k
+        for (double v : d) {
+            s0 += Math.exp(k * v);
+        }
+        return new double[] {k, Math.log(s0)};
     }
 }
