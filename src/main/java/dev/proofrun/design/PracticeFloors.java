@@ -3,7 +3,7 @@ package dev.proofrun.design;
 import java.util.Locale;
 
 /**
- * PracticeFloors from practice that a study must meet beside the statistics: at least {@code minSubgroups}
+ * Floors from practice that a study must meet beside the statistics: at least {@code minSubgroups}
  * subgroups and {@code minReadings} readings before control limits mean much. The defaults, 25 subgroups
  * and 100 readings, are common practice (Montgomery suggests 20–25 subgroups for preliminary control
  * limits — from memory).
