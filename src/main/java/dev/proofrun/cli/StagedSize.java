@@ -44,13 +44,7 @@ final class StagedSize {
 
     /** The sentence that says whether the staged design is recommended, and why. */
     static String reason(StagedDesign d) {
-        double saving = 100 * d.saving();
-        double extra = 100 * d.extra();
-        if (d.recommended()) {
-            return StagedMessage.STAGED_RECOMMENDED.format(d.looks().size(), saving, extra);
-        }
-        return StagedMessage.STAGED_NOT_RECOMMENDED.format(d.looks().size(), saving, extra,
-                100 * StagedDesign.LEAST_SAVING, 100 * StagedDesign.MOST_EXTRA);
+        return d.reason();
     }
 
     static void print(PrintWriter out, StagedDesign d, String symbol) {

@@ -51,4 +51,13 @@ public record StagedDesign(Stages stages, int subgroupSize, List<StagedLook> loo
     public boolean recommended() {
         return stages.staged() && saving() >= LEAST_SAVING - 1e-12 && extra() <= MOST_EXTRA + 1e-12;
     }
+
+    /** The sentence that says whether the staged design is recommended, and why ({@code size --stages}, the wizard). */
+    public String reason() {
+        if (recommended()) {
+            return StagedMessage.STAGED_RECOMMENDED.format(looks.size(), 100 * saving(), 100 * extra());
+        }
+        return StagedMessage.STAGED_NOT_RECOMMENDED.format(looks.size(), 100 * saving(), 100 * extra(),
+                100 * LEAST_SAVING, 100 * MOST_EXTRA);
+    }
 }

@@ -83,6 +83,36 @@ final class StagedEvaluation {
                 paths.paths());
     }
 
+    /**
+     * The mean readings a study of these planned looks collects when the true index is each of {@code trueIndices}
+     * at the expected centring (the expected Cp/Cpk ratio kept): the same simulated studies, bounds at the looks'
+     * confidences, futility stops honoured and every gate counted, as {@link #at} computes them at c₀ and c₁.
+     */
+    double[] expectedReadings(Stages contract, double[] trueIndices) {
+        int n = search.subgroupSize();
+        int[] looks = contract.looks().stream().mapToInt(Look::subgroups).toArray();
+        StagedPaths paths = StagedPaths.simulate(n, looks, request.sigmaFor(n), StagedDesigner.PATHS,
+                StagedDesigner.SEED);
+        StudyPower[] bounds = new StudyPower[stages];
+        double[] futility = new double[stages];
+        double[] gates = new double[stages];
+        for (int j = 0; j < stages; j++) {
+            Look l = contract.looks().get(j);
+            bounds[j] = new StudyPower(shape, request.boundMethod(), c0, l.confidence(), paths.readingsAt(j),
+                    paths.nuAt(j, usesWithin), usesWithin);
+            futility[j] = l.futility();
+            gates[j] = (1 - ProcedurePower.NORMAL_SHAPE_REJECTION) * (1 - search.falseUnstable(looks[j]));
+        }
+        Expectation exp = request.expectation();
+        double ratio = exp.potentialOrIndex() / exp.index();
+        double[] mean = new double[trueIndices.length];
+        for (int t = 0; t < trueIndices.length; t++) {
+            Estimates e = new Estimates(paths, trueIndices[t], trueIndices[t] * ratio);
+            mean[t] = outcome(paths, e, bounds, futility, gates).expectedReadings(paths);
+        }
+        return mean;
+    }
+
     /** The true Cp values tried at c₀: centred and off centre for a two-sided Cpk/Ppk, else the index itself. */
     private double[] targetCentrings() {
         if (shape == IndexShape.TWO_SIDED_MIN) {

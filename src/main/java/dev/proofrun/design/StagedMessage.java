@@ -19,7 +19,17 @@ public enum StagedMessage implements MessageKey {
     STAGED_HOW_TO_READ("At a look the study is demonstrated when the estimate reaches 'demonstrated if' (at the expected"
             + " centring; the grader's bound at the look's confidence decides) and stops, not demonstrated, below"
             + " 'stop if'; otherwise it goes on to the next look. The risk holds only when grading happens at the"
-            + " planned looks.");
+            + " planned looks."),
+    STAGES_ONE_CONFIDENCE("staged looks are planned for one confidence; give every characteristic the same"),
+    STAGED_LOOK("Look %d: %d subgroups (%d readings); demonstrated if %s ≥ %.3f (confidence %.3f %%); stop, not"
+            + " demonstrated, if %s < %s."),
+    STAGED_LAST_LOOK("Look %d: %d subgroups (%d readings); demonstrated if %s ≥ %.3f (confidence %.3f %%); otherwise"
+            + " not demonstrated."),
+    STAGED_FIGURES("Power %.3f. Readings expected: %.0f at the requirement, %.0f as expected; at most %d. Single stage:"
+            + " %d."),
+    STAGED_SHARED_LOOKS("The plan's looks take the strictest confidence any of the %d characteristics needs at %d"
+            + " subgroups, without futility stops; the power and readings shown are %s's own at its own looks."),
+    STAGED_BUSY("the staged design is being computed (a few seconds)");
 
     private final String english;
 
