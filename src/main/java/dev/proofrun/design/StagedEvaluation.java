@@ -86,9 +86,10 @@ final class StagedEvaluation {
     /**
      * The mean readings a study of these planned looks collects when the true index is each of {@code trueIndices}
      * at the expected centring (the expected Cp/Cpk ratio kept): the same simulated studies, bounds at the looks'
-     * confidences, futility stops honoured and every gate counted, as {@link #at} computes them at c₀ and c₁.
+     * confidences, futility stops honoured and every gate counted, as {@link #at} computes them at c₀ and c₁; and
+     * the chance of demonstrated at some look (the staged study's operating characteristic): [0] readings, [1] chance.
      */
-    double[] expectedReadings(Stages contract, double[] trueIndices) {
+    double[][] expectedReadings(Stages contract, double[] trueIndices) {
         int n = search.subgroupSize();
         int[] looks = contract.looks().stream().mapToInt(Look::subgroups).toArray();
         StagedPaths paths = StagedPaths.simulate(n, looks, request.sigmaFor(n), StagedDesigner.PATHS,
@@ -105,12 +106,14 @@ final class StagedEvaluation {
         }
         Expectation exp = request.expectation();
         double ratio = exp.potentialOrIndex() / exp.index();
-        double[] mean = new double[trueIndices.length];
+        double[][] out = new double[2][trueIndices.length];
         for (int t = 0; t < trueIndices.length; t++) {
             Estimates e = new Estimates(paths, trueIndices[t], trueIndices[t] * ratio);
-            mean[t] = outcome(paths, e, bounds, futility, gates).expectedReadings(paths);
+            Outcome o = outcome(paths, e, bounds, futility, gates);
+            out[0][t] = o.expectedReadings(paths);
+            out[1][t] = o.pass;
         }
-        return mean;
+        return out;
     }
 
     /** The true Cp values tried at c₀: centred and off centre for a two-sided Cpk/Ppk, else the index itself. */

@@ -11,12 +11,15 @@ import java.util.Map;
  * its readings whatever the process): the staged designer's simulated studies ({@value StagedDesigner#PATHS},
  * fixed seed) read at the planned looks, at a few true indices at the expected centring. Each curve takes about
  * as long as one evaluation of the designer, so the last few are kept ({@value #KEPT}); the same inputs give the
- * same curve.
+ * same curve. The same studies give the staged study's operating characteristic.
  */
 public final class StagedReadingsCurve {
 
-    /** One true index: the staged study's mean readings, and the single stage's. */
-    public record Point(double trueIndex, double staged, double singleStage) {
+    /**
+     * One true index: the staged study's mean readings, the single stage's, and the staged study's chance of
+     * demonstrated at some look (gates counted; NaN for a single stage, whose OC the designer's table gives).
+     */
+    public record Point(double trueIndex, double staged, double singleStage, double demonstrated) {
     }
 
     /** Curves kept. */
@@ -62,15 +65,15 @@ public final class StagedReadingsCurve {
         List<Point> points = new ArrayList<>();
         if (!looks.staged()) {
             for (double t : trueIndices) {
-                points.add(new Point(t, single, single));
+                points.add(new Point(t, single, single, Double.NaN));
             }
         } else {
             SizeSearch search = new SizeSearch(sized, n);
             StagedEvaluation eval = new StagedEvaluation(sized, search, design.singleStage(),
                     looks.count(), looks.spending());
-            double[] mean = eval.expectedReadings(looks, trueIndices);
+            double[][] figures = eval.expectedReadings(looks, trueIndices);
             for (int i = 0; i < trueIndices.length; i++) {
-                points.add(new Point(trueIndices[i], mean[i], single));
+                points.add(new Point(trueIndices[i], figures[0][i], single, figures[1][i]));
             }
         }
         List<Point> made = List.copyOf(points);

@@ -93,14 +93,14 @@ final class ComposedPlan {
     private static StudyPlan asDraftOf(StudyPlan p, StudyPlan base) {
         return new StudyPlan(p.id(), p.part(), p.people(), p.characteristics(), p.calendar(), p.span(), p.design(),
                 p.spacing(), p.seed(), p.schedule(), PlanState.DRAFT, Optional.empty(), base.supersedes(),
-                base.revisionNumber());
+                base.revisionNumber(), p.stages());
     }
 
     /** The plan as the draft of the revision after the base's. */
     private static StudyPlan successorOf(StudyPlan p, StudyPlan base) {
         return new StudyPlan(p.id(), p.part(), p.people(), p.characteristics(), p.calendar(), p.span(), p.design(),
                 p.spacing(), p.seed(), p.schedule(), PlanState.DRAFT, Optional.empty(), base.revision(),
-                base.revisionNumber() + 1);
+                base.revisionNumber() + 1, p.stages());
     }
 
     private HandoutViewModel.Composed compose() {
@@ -126,6 +126,14 @@ final class ComposedPlan {
                     row -> goal.expectationFor(row).orElseThrow(), timing.calendarBinding().get().get(),
                     timing.spanBinding().get().get(), design.get(), timing.spacing().get(), timing.seed().get(),
                     timing.schedule().get());
+            StudyPlan base = session.base().orElse(null);
+            if (base != null && base.isStaged()) {
+                // the looks were calibrated for these characteristics and this design: kept only while both stand
+                if (!base.characteristics().equals(p.characteristics()) || !base.design().equals(p.design())) {
+                    return new HandoutViewModel.Composed(Optional.empty(), AppMessage.HANDOUT_STAGES_KEPT.format());
+                }
+                p = p.withStages(base.stages());
+            }
             return new HandoutViewModel.Composed(Optional.of(p), "");
         } catch (UserException | IllegalArgumentException | java.util.NoSuchElementException e) {
             return new HandoutViewModel.Composed(Optional.empty(), e.getMessage());

@@ -166,4 +166,36 @@ class HandoutViewModelTest {
         assertFalse(vm.exportableBinding().get());
         assertFalse(vm.export(out));
     }
+
+    /**
+     * A staged plan (made by {@code plan new --stages}) opened in the wizard keeps its looks while the steps
+     * describe it as issued, and a change that its looks were not calibrated for is refused in words, never
+     * issued without the looks.
+     */
+    @Test
+    void aStagedPlanKeepsItsLooksAndAChangeToWhatTheyRestOnIsRefused() {
+        Path staged = home.resolve("staged.json");
+        java.io.StringWriter out = new java.io.StringWriter();
+        assertEquals(0, dev.proofrun.cli.ProofrunCommand.run(new java.io.PrintWriter(out, true),
+                new java.io.PrintWriter(out, true), "plan", "new", "--out", staged.toString(), "--id", "PR-2027-0078",
+                "--part", "pump housing", "--characteristic", "seal bore", "--unit", "mm", "--lsl", "31.98", "--usl",
+                "32.02", "--target", "1.33", "--expected", "1.67", "--stages", "2", "--start", "2027-04-05T06:00",
+                "--span-days", "5", "--rate", "60", "--zone", "Europe/Berlin"), out.toString());
+        assertEquals(0, dev.proofrun.cli.ProofrunCommand.run(new java.io.PrintWriter(out, true),
+                new java.io.PrintWriter(out, true), "plan", "issue", staged.toString()), out.toString());
+        StudyPlan issued = PlanFiles.read(staged);
+        session = new Session(new AppHome(home, home.resolve("plans")));
+        GoalViewModel goal = new GoalViewModel(session.draft(), session.baseProperty());
+        SizingViewModel sizing = new SizingViewModel(session.draft(), goal, Background.inline());
+        TimingViewModel timing = new TimingViewModel(session.draft(), sizing.designBinding(), Background.inline());
+        vm = new HandoutViewModel(session, goal, sizing, timing, new Held(), files);
+        session.open(staged);
+        StudyPlan composed = vm.composedBinding().get().plan().orElseThrow(() -> new AssertionError(vm.missingProperty().get()));
+        assertEquals(issued.stages(), composed.stages(), "the looks are carried over");
+        assertEquals(issued, vm.issuedNow().orElseThrow(), "the steps describe the issued plan, looks and all");
+
+        session.draft().field(DraftField.MINIMUM).set("1.50");
+        assertTrue(vm.composedBinding().get().plan().isEmpty(), "no plan without its looks");
+        assertTrue(vm.composedBinding().get().problem().contains("plan new --stages"), vm.composedBinding().get().problem());
+    }
 }
