@@ -13,7 +13,7 @@ import java.util.List;
  * (on a tie, the most subgroups). The candidate sizes are those of the first request.
  *
  * <p>{@code size --characteristics} shows its table; {@code plan new} takes its first design through
- * {@code plan.CommonDesign}, which adds only what a plan needs (a fixed n and k, a given k, refusals that
+ * {@code plan.PlanDesign}, which adds only what a plan needs (a fixed n and k, a given k, refusals that
  * name the characteristic).
  */
 public final class SharedDesigner {

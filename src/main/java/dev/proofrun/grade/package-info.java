@@ -12,7 +12,7 @@
  * limits ({@code Reach}) or not finite is set aside, located, and makes the characteristic not valid. Readings
  * with no spread ({@code NoSpread}) are a finding, not valid.</li>
  * <li><b>Stability</b> ({@code StabilityJudge} over {@code control.StabilityRule}, the rule the designer also
- * runs): the number of signalled points is compared with what {@code control.ChanceSignals} finds for stable
+ * runs): the number of signalled points is compared with what {@code control.ChanceSignalCounts} finds for stable
  * normal studies of the same n, k, chart and rules (seeded); unstable when either chart's count has chance
  * &lt; 0.005, or, for a within (Cpk-like) requirement, when the ANOVA p &lt; 0.001 and σ_overall/σ_within ≥ 1.2
  * (our rule); for an overall (Ppk-like) requirement the subgroup means are judged on their own chart instead.

@@ -18,7 +18,7 @@ import org.junit.jupiter.api.io.TempDir;
  * exit 2, nothing on standard output, no file written, the reader's file untouched. The expected lines are
  * the {@link OptionMessage} templates filled in by hand, with the enums' own words after the option.
  */
-class ConventionsCommandTest {
+class OptionValuesCommandTest {
 
     @TempDir
     Path dir;

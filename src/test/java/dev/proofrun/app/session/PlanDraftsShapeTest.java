@@ -15,7 +15,7 @@ import org.junit.jupiter.api.io.TempDir;
  * A characteristic's planned shape and gauge are columns of the Part table: opening a plan and composing it
  * again keeps them, an edit changes them.
  */
-class PlanBridgeShapeTest {
+class PlanDraftsShapeTest {
 
     @TempDir
     Path home;
