@@ -13,16 +13,9 @@ import java.util.List;
 import java.util.Locale;
 
 /**
- * The planned looks {@code plan new --stages S} writes into a plan ({@link PlannedStages}, which the wizard's
- * Sample-size step calls too), with what the command prints about them.
- *
- * <p>One characteristic: the designer chooses the most subgroups K (the smallest that gives the wanted power at
- * every look's gates), unless k is given, when the looks are calibrated at that k. Several characteristics: K is
- * the largest any of them needs (or the given k); each look takes the strictest (highest) confidence any
- * characteristic's own calibration asks for at that K, so none of them passes a false study more often than its
- * own staged design allows; and there are no futility stops, since one boundary cannot serve indices of
- * different targets. The power printed for several is each characteristic's own at K, an approximation the
- * command says.
+ * The planned looks {@code plan new --stages S} writes into a plan, as {@link PlannedStages} computes them (how
+ * K, the looks' confidences and futility boundaries are chosen, for one characteristic or several, is said
+ * there), with the lines the command prints about them.
  */
 final class StagedLooks {
 

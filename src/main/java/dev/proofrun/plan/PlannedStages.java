@@ -14,7 +14,7 @@ import java.util.List;
 
 /**
  * The planned looks a staged plan carries, from the staged designer ({@link StagedDesigner}), as both
- * {@code plan new --stages S} and the wizard's Sample-size step write them: the looks' confidences calibrated on
+ * {@code plan new --stages S} writes them (and a wizard step that plans looks would): the looks' confidences calibrated on
  * the joint distribution of the looks so that the whole study keeps its false-pass risk, and futility boundaries
  * from β-spending at the expected index.
  *
