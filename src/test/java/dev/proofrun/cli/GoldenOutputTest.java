@@ -25,9 +25,9 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 /**
- * The command line's outputs, byte for byte, against a stored transcript: what each command printed, its exit
+ * The command line's outputs, byte for byte, against the stored record of them: what each command printed, its exit
  * code, and every file it wrote (text files in full, a PDF by its text, a workbook by the SHA-256 of each part). It guards refactorings that must
- * not change what a user sees; a change that means to alter an output regenerates the transcript with
+ * not change what a user sees; a change that means to alter an output regenerates that record with
  * {@code mvn -B -q test -Dtest=GoldenOutputTest -Dgolden.update=true} and says why in its commit.
  *
  * <p>The scenario is the demo plan (invented valve body) and an invented shaft's readings; the temporary
@@ -35,12 +35,12 @@ import org.junit.jupiter.api.io.TempDir;
  */
 class GoldenOutputTest {
 
-    private static final Path TRANSCRIPT = Paths.get("src/test/resources/dev/proofrun/cli/golden-output.txt");
+    private static final Path STORED = Paths.get("src/test/resources/dev/proofrun/cli/golden-output.txt");
 
     @TempDir
     Path dir;
 
-    private final StringBuilder transcript = new StringBuilder();
+    private final StringBuilder seen = new StringBuilder();
 
     @Test
     void commandLineOutputsAreUnchanged() throws IOException {
@@ -77,20 +77,20 @@ class GoldenOutputTest {
         run("estimate", dir.resolve("missing.csv").toString(), "--usl", "1");
         files();
 
-        String got = transcript.toString();
+        String got = seen.toString();
         if (Boolean.getBoolean("golden.update")) {
-            Files.createDirectories(TRANSCRIPT.getParent());
-            Files.writeString(TRANSCRIPT, got, StandardCharsets.UTF_8);
+            Files.createDirectories(STORED.getParent());
+            Files.writeString(STORED, got, StandardCharsets.UTF_8);
         }
         Files.writeString(Paths.get("target/golden-output.actual.txt"), got, StandardCharsets.UTF_8); // for diff(1)
-        assertEquals(Files.readString(TRANSCRIPT, StandardCharsets.UTF_8), got);
+        assertEquals(Files.readString(STORED, StandardCharsets.UTF_8), got);
     }
 
     private void run(String... args) {
         StringWriter out = new StringWriter();
         StringWriter err = new StringWriter();
         int code = ProofrunCommand.run(new PrintWriter(out, true), new PrintWriter(err, true), args);
-        transcript.append("$ proofrun ").append(hide(String.join(" ", args))).append('\n')
+        seen.append("$ proofrun ").append(hide(String.join(" ", args))).append('\n')
                 .append("exit ").append(code).append('\n')
                 .append("--out--\n").append(hide(out.toString()))
                 .append("--err--\n").append(hide(err.toString())).append('\n');
@@ -106,11 +106,11 @@ class GoldenOutputTest {
             String name = dir.relativize(p).toString().replace('\\', '/');
             byte[] bytes = Files.readAllBytes(p);
             if (name.endsWith(".pdf")) {
-                transcript.append("== ").append(name).append(" text\n").append(pdfText(bytes)).append('\n');
+                seen.append("== ").append(name).append(" text\n").append(pdfText(bytes)).append('\n');
             } else if (name.endsWith(".xlsx")) {
-                transcript.append("== ").append(name).append(" parts\n").append(zipParts(p)).append('\n');
+                seen.append("== ").append(name).append(" parts\n").append(zipParts(p)).append('\n');
             } else {
-                transcript.append("== ").append(name).append('\n').append(hide(new String(bytes, StandardCharsets.UTF_8))).append('\n');
+                seen.append("== ").append(name).append('\n').append(hide(new String(bytes, StandardCharsets.UTF_8))).append('\n');
             }
         }
     }

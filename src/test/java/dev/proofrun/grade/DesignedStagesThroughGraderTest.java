@@ -11,13 +11,8 @@ import dev.proofrun.design.StagedDesigner;
 import dev.proofrun.design.Stages;
 import dev.proofrun.stats.IndexKind;
 import dev.proofrun.stats.SpecLimits;
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
-import java.util.Optional;
-import org.apache.commons.rng.UniformRandomProvider;
-import org.apache.commons.rng.sampling.distribution.ZigguratSampler;
-import org.apache.commons.rng.simple.RandomSource;
 import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
@@ -76,38 +71,7 @@ class DesignedStagesThroughGraderTest {
         assertTrue(power >= floor, "power " + power + " below the promise " + design.power());
     }
 
-    /** The share of simulated studies the grader calls demonstrated at some look. */
     private static double share(GradingPlan plan, Stages stages, int n, double mean, double sd, int studies, long seed) {
-        PlannedCharacteristic gc = plan.characteristics().get(0);
-        int k = stages.last().subgroups();
-        UniformRandomProvider rng = RandomSource.XO_RO_SHI_RO_128_PP.create(seed);
-        ZigguratSampler.NormalizedGaussian g = ZigguratSampler.NormalizedGaussian.of(rng);
-        int passed = 0;
-        for (int s = 0; s < studies; s++) {
-            List<double[]> all = new ArrayList<>(k);
-            for (int i = 0; i < k; i++) {
-                double[] x = new double[n];
-                for (int j = 0; j < n; j++) {
-                    x[j] = mean + sd * g.sample();
-                }
-                all.add(x);
-            }
-            for (int j = 0; j < stages.count(); j++) {
-                int m = stages.looks().get(j).subgroups();
-                GradedLook look = Grader.look(plan, m);
-                List<String> slots = plan.slots().subList(0, m).stream().map(PlannedSlot::id).toList();
-                Completeness c = new Completeness(m, n, m, 0, 0, (long) n * m, 0, 0,
-                        GradingPlan.defaultAllowedShortfall(m));
-                Verdict v = CharacteristicGrader.grade(gc, plan.design(), plan.interval(),
-                        new ReturnedData.Collection(c, all.subList(0, m), slots), Optional.of(look)).verdict();
-                if (v == Verdict.DEMONSTRATED) {
-                    passed++;
-                }
-                if (v != Verdict.CONTINUE) {
-                    break;
-                }
-            }
-        }
-        return passed / (double) studies;
+        return StagedStudies.run(plan, mean, sd, studies, seed).passed();
     }
 }

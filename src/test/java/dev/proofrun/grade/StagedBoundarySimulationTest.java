@@ -11,10 +11,6 @@ import dev.proofrun.stats.SpecLimits;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
-import java.util.Optional;
-import org.apache.commons.rng.UniformRandomProvider;
-import org.apache.commons.rng.sampling.distribution.ZigguratSampler;
-import org.apache.commons.rng.simple.RandomSource;
 import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
@@ -69,36 +65,9 @@ class StagedBoundarySimulationTest {
         double sd = (USL - LSL) / (6 * 1.33);
         GradingPlan plan = TestPlans.plan(n, k, new PlannedCharacteristic("D1", "bore diameter", "mm",
                 SpecLimits.twoSided(LSL, USL), null, 0, Requirement.of(IndexKind.CPK, 1.33, 1 - ALPHA))).withStages(stages);
-        PlannedCharacteristic gc = plan.characteristics().get(0);
-        UniformRandomProvider rng = RandomSource.XO_RO_SHI_RO_128_PP.create(seed);
-        ZigguratSampler.NormalizedGaussian g = ZigguratSampler.NormalizedGaussian.of(rng);
-        int[] passedAt = new int[looks];
-        int[] stoppedAt = new int[looks];
-        for (int s = 0; s < studies; s++) {
-            List<double[]> all = new ArrayList<>(k);
-            for (int i = 0; i < k; i++) {
-                double[] x = new double[n];
-                for (int j = 0; j < n; j++) {
-                    x[j] = 10.0 + sd * g.sample();
-                }
-                all.add(x);
-            }
-            for (int j = 0; j < looks; j++) {
-                int m = stages.looks().get(j).subgroups();
-                GradedLook look = Grader.look(plan, m);
-                List<String> slots = plan.slots().subList(0, m).stream().map(PlannedSlot::id).toList();
-                Completeness c = new Completeness(m, n, m, 0, 0, (long) n * m, 0, 0, GradingPlan.defaultAllowedShortfall(m));
-                Verdict v = CharacteristicGrader.grade(gc, plan.design(), plan.interval(),
-                        new ReturnedData.Collection(c, all.subList(0, m), slots), Optional.of(look)).verdict();
-                if (v == Verdict.DEMONSTRATED) {
-                    passedAt[j]++;
-                }
-                if (v != Verdict.CONTINUE) {
-                    stoppedAt[j]++;
-                    break;
-                }
-            }
-        }
+        StagedStudies.Outcome o = StagedStudies.run(plan, 10.0, sd, studies, seed);
+        int[] passedAt = o.passedAt();
+        int[] stoppedAt = o.stoppedAt();
         int passed = java.util.Arrays.stream(passedAt).sum();
         double share = passed / (double) studies;
         double se = Math.sqrt(ALPHA * (1 - ALPHA) / studies);
