@@ -160,6 +160,15 @@ class ThresholdShapeCommandTest {
         assertEquals("lognormal3", j.get("model").asText());
         assertEquals(9.95, j.get("threshold").asDouble(), 0);
         assertEquals("iso-22514-2-percentile", j.get("method").asText());
+
+        Path pdf = dir.resolve("report.pdf");
+        assertEquals(0, run("grade", plan.toString(), data.toString(), "--report", pdf.toString()), err);
+        try (org.apache.pdfbox.pdmodel.PDDocument doc = org.apache.pdfbox.Loader.loadPDF(Files.readAllBytes(pdf))) {
+            String text = new org.apache.pdfbox.text.PDFTextStripper().getText(doc).replaceAll("\\s+", " ");
+            assertTrue(text.contains("lognormal3"), text);
+            assertTrue(text.contains("threshold 9.95"), text);
+            assertTrue(text.contains("ln(reading \u2212 threshold)"), text);
+        }
     }
 
     @Test

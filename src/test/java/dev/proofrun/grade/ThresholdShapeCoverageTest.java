@@ -63,6 +63,14 @@ class ThresholdShapeCoverageTest {
     @Tag("long")
     void atTheBoundaryThousandStudies() {
         System.out.print(atMostAlpha(boundary(), 1_000, 50_000L));
+        // at the expected index 1.67 (figures for the decision record; the promise is the two-parameter shape's,
+        // held by PromisedShapePowerTest, and the verdicts equal the two-parameter ones draw for draw)
+        for (ShapeStudies.Case c : List.of(
+                ShapeStudies.Case.threshold(ShapeFamily.LOGNORMAL3, 0.25, THETA, 1.67, 5, 25),
+                ShapeStudies.Case.threshold(ShapeFamily.LOGNORMAL3, 0.5, THETA, 1.67, 5, 25),
+                ShapeStudies.Case.threshold(ShapeFamily.WEIBULL3, 1.5, THETA, 1.67, 5, 25))) {
+            System.out.println(c.label() + ": " + ShapeStudies.run(c, C0, 1_000, 50_000L, dir));
+        }
     }
 
     @Test
