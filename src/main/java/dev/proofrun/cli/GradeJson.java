@@ -18,7 +18,7 @@ import java.util.Map;
  * Undefined values are {@code null}.
  *
  * <p>Each characteristic leads with what its verdict rests on: {@code index} (the required index), {@code method}
- * ({@link dev.proofrun.grade.IndexMethod}), {@code model} (the distribution model), {@code estimate},
+ * ({@link dev.proofrun.grade.IndexMethod}), {@code model} (the distribution model; for lognormal3/weibull3 followed by {@code threshold}, the declared θ), {@code estimate},
  * {@code lower} and {@code upper} (its confidence bounds, numbers; {@code upper} only when the estimate is below
  * the requirement), {@code required}, {@code confidence}, then {@code verdict}. The normal-theory capability
  * figures of the raw readings — the keys and meanings of {@code proofrun estimate --json}, from
@@ -75,6 +75,9 @@ final class GradeJson {
         m.put("index", g.requirement().index().symbol());
         m.put("method", e == null ? null : e.method().id());
         m.put("model", e == null ? null : e.model().id());
+        if (g.shape() != null && g.shape().family().hasThreshold() && g.shape().fit() != null) {
+            m.put("threshold", g.shape().fit().threshold()); // only for lognormal3/weibull3: other outputs keep their bytes
+        }
         m.put("estimate", e == null ? null : finite(e.estimate()));
         m.put("lower", e == null ? null : finite(e.lower()));
         m.put("upper", e == null ? null : finite(e.upper()));

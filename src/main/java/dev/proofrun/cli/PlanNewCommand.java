@@ -90,8 +90,12 @@ public final class PlanNewCommand implements Callable<Integer> {
     @Option(names = "--nominal", paramLabel = "X", description = "Nominal value.")
     Double nominal;
     @Option(names = "--shape", paramLabel = "NAME",
-            description = "The distribution the readings are planned to follow: normal (default), lognormal, weibull or folded-normal.")
+            description = "The distribution the readings are planned to follow: normal (default), lognormal, weibull,"
+                    + " folded-normal, lognormal3 or weibull3 (the last two with --threshold).")
     String shape;
+    @Option(names = "--threshold", paramLabel = "X", description = "The declared threshold of a lognormal3 or weibull3 shape:"
+            + " the stop or datum the readings cannot go below (a plan value, not estimated from the readings).")
+    Double threshold;
     @Option(names = "--gauge", paramLabel = "NAME", description = "Gauge name (with --resolution; a resolution alone"
             + " is kept for an unnamed gauge).")
     String gauge;
@@ -272,7 +276,8 @@ public final class PlanNewCommand implements Callable<Integer> {
         IndexKind kind = OptionValues.index(index);
         OptionValues.confidence(confidence);
         if (characteristicsCsv != null) {
-            if (characteristic != null || target != null || expected != null || shape != null || limits.given()) {
+            if (characteristic != null || target != null || expected != null || shape != null || threshold != null
+                    || limits.given()) {
                 throw new UserException(PlanOptionMessage.BOTH_CHARACTERISTIC_FORMS);
             }
             return CharacteristicsCsv.read(characteristicsCsv, kind, confidence);
@@ -290,9 +295,15 @@ public final class PlanNewCommand implements Callable<Integer> {
                         gauge != null ? gauge : UNNAMED_GAUGE, resolution == null ? Double.NaN : resolution,
                         gaugeSd == null ? OptionalDouble.empty() : OptionalDouble.of(gaugeSd))));
         ShapeFamily family = shape == null ? ShapeFamily.NORMAL : OptionValues.shape(shape);
-        return List.of(option("--characteristic", () -> new Characteristic(characteristicId == null ? "C1" : characteristicId,
+        String id = characteristicId == null ? "C1" : characteristicId;
+        OptionalDouble theta = threshold == null ? OptionalDouble.empty() : OptionalDouble.of(threshold);
+        option(threshold != null ? "--threshold" : "--shape", () -> {
+            Characteristic.requireThreshold(id, family, theta, specLimits);
+            return theta;
+        });
+        return List.of(option("--characteristic", () -> new Characteristic(id,
                 characteristic, unit, nominal == null ? OptionalDouble.empty() : OptionalDouble.of(nominal), specLimits, g, req, exp,
-                family)));
+                family, theta)));
     }
 
     private ProductionCalendar calendar() {

@@ -61,7 +61,7 @@ public final class PlanShowCommand implements Callable<Integer> {
             out.printf(Locale.ROOT, "%-6s %-18s %-8s  %-10s %-10s %-10s %s >= %s at %.0f %%   %-8s  %s%n", c.id(), cut(c.name(), 18),
                     c.unit(), num(c.limits().lower()), num(c.nominal()), num(c.limits().upper()),
                     c.requirement().index().symbol(), c.requirement().minimum(), 100 * c.requirement().confidence(),
-                    c.expectation().index(), c.shape().token());
+                    c.expectation().index(), c.shapeWords());
         }
         out.println();
         String what = p.design().subgroupSize() == 1 ? String.format(Locale.ROOT, "%d single parts", p.design().subgroups())

@@ -82,6 +82,23 @@ final class ShapeSize {
     }
 
     private String pilotNote;
+    /** The declared threshold shape planned as its two-parameter {@link ShapeFamily#base()}, or null. */
+    private ShapeFamily declared;
+
+    /**
+     * A {@code lognormal3}/{@code weibull3} plan: the threshold shifts the readings but not the pivot, so the plan
+     * is the two-parameter shape's (same N, same power) and the output says so.
+     */
+    ShapeSize asThresholdShape(ShapeFamily threshold) {
+        this.declared = threshold;
+        return this;
+    }
+
+    private String thresholdNote() {
+        return String.format(Locale.ROOT, "%s is planned exactly as %s: with the threshold declared in the plan, x - threshold"
+                + " follows the %s model, so the study size and power are the same (the threshold shifts the readings, not"
+                + " the bound)", declared.token(), family.token(), family.token());
+    }
 
     /** @throws UserException for a skewness the shape cannot have, two-sided limits, or c₁ ≤ c₀ */
     static ShapeSize design(ShapeFamily family, Double skewness, SpecLimits.Sides sides, double c0, Double c1,
@@ -135,6 +152,9 @@ final class ShapeSize {
         if (pilotNote != null) {
             out.println("note: " + pilotNote);
         }
+        if (declared != null) {
+            out.println("note: " + thresholdNote());
+        }
         out.println();
         out.printf(Locale.ROOT, "Power: the chance that grading says demonstrated: the grader's lower bound (generalized pivotal,"
                 + " seed %d) reaches the requirement — simulated with seed %d (%d studies, standard error at most %.3f; only N"
@@ -159,7 +179,11 @@ final class ShapeSize {
 
     Map<String, Object> json() {
         Map<String, Object> m = new LinkedHashMap<>();
-        m.put("shape", family.token());
+        m.put("shape", declared != null ? declared.token() : family.token());
+        if (declared != null) {
+            m.put("plannedAs", family.token());
+            m.put("thresholdNote", thresholdNote());
+        }
         m.put("skewness", skewness);
         m.put(family == ShapeFamily.WEIBULL ? "weibullShape" : "sigmaOfLog", parameter);
         m.put("side", side == IndexKind.Side.UPPER ? "upper" : "lower");

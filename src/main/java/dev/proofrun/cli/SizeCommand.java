@@ -183,6 +183,10 @@ public final class SizeCommand implements Callable<Integer> {
                     ? IntStream.rangeClosed(1, 10).boxed().toList() : subgroupSizes;
             PracticeFloors floors = wrap(() -> new PracticeFloors(minSubgroups, minReadings));
             ShapeSize sized;
+            if (pilot != null && skewness == null && family.hasThreshold()) {
+                throw new UserException(OptionMessage.BAD_VALUE, "--pilot", "a " + family.token()
+                        + " shape is planned from --skewness G (the pilot's fit would need the plan's threshold)");
+            }
             if (pilot != null && skewness == null) {
                 if (lsl == null && usl == null) {
                     throw new UserException(DesignMessage.BAD_EXPECTATION, "--pilot needs the specification limits --lsl/--usl");
@@ -191,8 +195,11 @@ public final class SizeCommand implements Callable<Integer> {
                         ? OptionalInt.empty() : OptionalInt.of(pilotSubgroupSize)), OptionValues.limits(lsl, usl),
                         OptionValues.index(index), target, expected, confidence, power, sizes, floors);
             } else {
-                sized = ShapeSize.design(family, skewness, OptionValues.sides(sides, lsl, usl), target, expected,
+                sized = ShapeSize.design(family.base(), skewness, OptionValues.sides(sides, lsl, usl), target, expected,
                         confidence, power, sizes, floors);
+                if (family.hasThreshold()) {
+                    sized.asThresholdShape(family);
+                }
             }
             if (json) {
                 out.println(new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT).writeValueAsString(sized.json()));

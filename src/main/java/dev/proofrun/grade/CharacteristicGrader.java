@@ -99,7 +99,8 @@ final class CharacteristicGrader {
             shapeReasons.add(step.reason());
         }
         FutureTask<Shape> shapeTask = new FutureTask<>(() -> step.tooCoarse() ? GaugeStep.unjudged(gc.shape())
-                : ShapeJudge.judge(subgroups, data.slots(), step.step(), gc.shape(), gc.limits(), shapeReasons));
+                : ShapeJudge.judge(subgroups, data.slots(), step.step(), gc.shape(), gc.threshold(),
+                        gc.limits(), shapeReasons));
         boolean declaredSkew = !gc.shape().isNormal();
         if (!declaredSkew && (long) subgroups.size() * subgroups.get(0).length >= PARALLEL_READINGS) {
             Thread worker = new Thread(shapeTask, "proofrun-shape-" + gc.id());

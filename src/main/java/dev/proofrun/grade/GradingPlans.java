@@ -24,7 +24,8 @@ public final class GradingPlans {
         for (Characteristic c : plan.characteristics()) {
             double resolution = c.gauge().map(Gauge::resolution).orElse(0.0);
             cs.add(new PlannedCharacteristic(c.id(), c.name(), c.unit(), c.limits(),
-                    c.nominal().isPresent() ? c.nominal().getAsDouble() : null, resolution, c.requirement(), c.shape()));
+                    c.nominal().isPresent() ? c.nominal().getAsDouble() : null, resolution, c.requirement(), c.shape(),
+                    c.threshold().orElse(Double.NaN)));
         }
         List<PlannedSlot> slots = new ArrayList<>();
         for (Slot s : plan.schedule().slots()) {

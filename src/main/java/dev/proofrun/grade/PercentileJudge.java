@@ -50,9 +50,13 @@ final class PercentileJudge {
         Requirement req = gc.requirement();
         IndexKind kind = req.index();
         SpecLimits limits = gc.limits();
-        if (limits.lower().isPresent() && limits.lower().getAsDouble() <= family.lowerBound()) {
-            reasons.add(new Reason(Step.SHAPE, false, GradeMessage.REASON_LOWER_LIMIT_DROPPED.format(
-                    String.format(java.util.Locale.ROOT, "%s", limits.lower().getAsDouble()), family.token())));
+        ShapeFamily declared = gc.shape();
+        if (limits.lower().isPresent() && limits.lower().getAsDouble() <= fit.lowerBound()) {
+            String lsl = String.format(java.util.Locale.ROOT, "%s", limits.lower().getAsDouble());
+            reasons.add(new Reason(Step.SHAPE, false, declared.hasThreshold()
+                    ? GradeMessage.REASON_LOWER_LIMIT_AT_THRESHOLD.format(lsl,
+                            String.format(java.util.Locale.ROOT, "%s", fit.threshold()), declared.token())
+                    : GradeMessage.REASON_LOWER_LIMIT_DROPPED.format(lsl, family.token())));
             if (limits.upper().isEmpty()) {
                 return null;
             }
@@ -69,20 +73,30 @@ final class PercentileJudge {
         double f = shape.tailFactor();
         double ppm = PercentileIndex.expectedPpm(limits, fit);
         if (kind.usesWithinSigma()) {
-            reasons.add(new Reason(Step.CAPABILITY, false, GradeMessage.REASON_OVERALL_ONLY.format(family.token(),
+            reasons.add(new Reason(Step.CAPABILITY, false, GradeMessage.REASON_OVERALL_ONLY.format(declared.token(),
                     kind.symbol(), overall(kind).symbol())));
         }
         double q0 = fit.quantile(PercentileIndex.LOW);
         double q50 = fit.quantile(0.5);
         double q1 = fit.quantile(PercentileIndex.HIGH);
         String method = pivotal
-                ? GradeMessage.REASON_PERCENTILE_METHOD.format(kind.symbol(), family.token(), q0, q50, q1, ppm, PivotalBound.DRAWS, seed)
+                ? GradeMessage.REASON_PERCENTILE_METHOD.format(kind.symbol(), modelWords(declared, fit), q0, q50, q1, ppm, PivotalBound.DRAWS, seed)
                 : GradeMessage.REASON_PERCENTILE_INVERTED.format(kind.symbol(), family.token(), q0, q50, q1, ppm,
                         FoldedNormalBound.GRID_SIZE, FoldedNormalBound.DRAWS, seed);
         reasons.add(new Reason(Step.CAPABILITY, false, method));
+        if (declared.hasThreshold()) {
+            reasons.add(new Reason(Step.CAPABILITY, false, GradeMessage.REASON_THRESHOLD_CAUTION.format(declared.token(),
+                    String.format(java.util.Locale.ROOT, "%s", fit.threshold()))));
+        }
         double upper = estimate < req.minimum() ? bound.upper(confidence) * f : Double.NaN;
         return new IndexEvidence(kind, req.minimum(), confidence, estimate * f, bound.lower(confidence) * f, upper,
-                ShapeModel.of(family), pivotal ? IndexMethod.PERCENTILE : IndexMethod.PERCENTILE_INVERTED, ppm, seed);
+                ShapeModel.of(declared), pivotal ? IndexMethod.PERCENTILE : IndexMethod.PERCENTILE_INVERTED, ppm, seed);
+    }
+
+    /** "lognormal", or "lognormal3 (threshold 9.95)" for a threshold shape. */
+    static String modelWords(ShapeFamily declared, ShapeFit fit) {
+        return declared.hasThreshold()
+                ? String.format(java.util.Locale.ROOT, "%s (threshold %s)", declared.token(), fit.threshold()) : declared.token();
     }
 
     /** The overall-family index with the same side: Cpk → Ppk. */

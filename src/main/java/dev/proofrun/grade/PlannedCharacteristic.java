@@ -17,9 +17,16 @@ import java.util.Objects;
  * @param resolution  the gauge's resolution (smallest step it shows), or 0 when not stated
  * @param requirement what must be shown
  * @param shape       the distribution model the plan declares for the readings
+ * @param threshold   the declared threshold θ of a {@link ShapeFamily#hasThreshold() threshold shape}; NaN otherwise
  */
 public record PlannedCharacteristic(String id, String name, String unit, SpecLimits limits, Double nominal,
-        double resolution, Requirement requirement, ShapeFamily shape) {
+        double resolution, Requirement requirement, ShapeFamily shape, double threshold) {
+
+    /** A characteristic planned with a shape that has no threshold. */
+    public PlannedCharacteristic(String id, String name, String unit, SpecLimits limits, Double nominal,
+            double resolution, Requirement requirement, ShapeFamily shape) {
+        this(id, name, unit, limits, nominal, resolution, requirement, shape, Double.NaN);
+    }
 
     /** A characteristic planned with the normal model. */
     public PlannedCharacteristic(String id, String name, String unit, SpecLimits limits, Double nominal,
@@ -27,7 +34,10 @@ public record PlannedCharacteristic(String id, String name, String unit, SpecLim
         this(id, name, unit, limits, nominal, resolution, requirement, ShapeFamily.NORMAL);
     }
 
-    /** @throws IllegalArgumentException if the resolution is negative or not finite */
+    /**
+     * @throws IllegalArgumentException if the resolution is negative or not finite
+     * @throws IllegalArgumentException if a threshold shape has no finite threshold, or another shape has one
+     */
     public PlannedCharacteristic {
         Objects.requireNonNull(id, "id");
         Objects.requireNonNull(limits, "limits");
@@ -35,6 +45,10 @@ public record PlannedCharacteristic(String id, String name, String unit, SpecLim
         shape = shape == null ? ShapeFamily.NORMAL : shape;
         if (!(resolution >= 0) || !Double.isFinite(resolution)) {
             throw new IllegalArgumentException(String.format(Locale.ROOT, "resolution must be zero or positive: %s", resolution));
+        }
+        if (shape.hasThreshold() != Double.isFinite(threshold)) {
+            throw new IllegalArgumentException(String.format(Locale.ROOT, "the %s shape %s a threshold: %s", shape.token(),
+                    shape.hasThreshold() ? "needs" : "takes no", threshold));
         }
     }
 }

@@ -99,23 +99,34 @@ final class ShapeJudge {
      */
     static Shape judge(List<double[]> subgroups, List<String> slots, double resolution, ShapeFamily family,
             SpecLimits limits, List<Reason> reasons) {
+        return judge(subgroups, slots, resolution, family, 0, limits, reasons);
+    }
+
+    /**
+     * As above with the declared threshold θ of a threshold shape ({@code lognormal3}, {@code weibull3}): the
+     * two-parameter model is fitted and checked on x − θ (θ is the plan's, never estimated); a reading at or
+     * below θ is a finding naming its subgroup and position. θ is ignored for the other shapes (the overload
+     * without θ takes θ = 0).
+     */
+    static Shape judge(List<double[]> subgroups, List<String> slots, double resolution, ShapeFamily family,
+            double threshold, SpecLimits limits, List<Reason> reasons) {
         double[] x = flatten(subgroups);
         ShapeModel model = ShapeModel.of(family);
-        ShapeFitter.Outcome o = ShapeFitter.fit(family, x);
+        ShapeFitter.Outcome o = ShapeFitter.fit(family, threshold, x);
         if (!o.fitted()) {
-            reasons.add(new Reason(Step.SHAPE, true, noFit(o, subgroups, slots, family, x.length)));
+            reasons.add(new Reason(Step.SHAPE, true, noFit(o, subgroups, slots, family, threshold, x.length)));
             return new Shape(Double.NaN, Double.NaN, false, model, List.of(), false, family, null, 1);
         }
         ShapeFit fit = o.fit();
         if (x.length < MIN_READINGS) {
             reasons.add(new Reason(Step.SHAPE, false, GradeMessage.REASON_TOO_FEW_FOR_SHAPE.format(x.length)));
-            return new Shape(Double.NaN, Double.NaN, family.isNormal(), model, List.of(modelFit(fit, x, Double.NaN, true)),
+            return new Shape(Double.NaN, Double.NaN, family.isNormal(), model, List.of(modelFit(model, fit, x, Double.NaN, true)),
                     true, family, fit, 1);
         }
-        double[] checked = spread(x, resolution, family.lowerBound());
-        double[] test = test(family, fit, checked);
+        double[] checked = spread(x, resolution, fit.lowerBound());
+        double[] test = test(fit.family(), fit, checked);
         boolean rejected = test[2] > 0;
-        String evidence = family == ShapeFamily.WEIBULL
+        String evidence = fit.family() == ShapeFamily.WEIBULL
                 ? String.format(Locale.ROOT, "1 %% critical value %.3f", WEIBULL_CRITICAL_1)
                 : family == ShapeFamily.FOLDED_NORMAL
                 ? String.format(Locale.ROOT, "bootstrap p = %.2g of %d refitted studies, seed %d", test[1],
@@ -124,19 +135,19 @@ final class ShapeJudge {
         if (!rejected) {
             reasons.add(new Reason(Step.SHAPE, false,
                     GradeMessage.REASON_SHAPE_FITS.format(family.token(), fit.describe(), test[0], evidence)));
-            return new Shape(test[0], test[1], family.isNormal(), model, List.of(modelFit(fit, x, test[0], true)), true,
+            return new Shape(test[0], test[1], family.isNormal(), model, List.of(modelFit(model, fit, x, test[0], true)), true,
                     family, fit, 1);
         }
         double[] tail = x.length >= TAIL_RULE_READINGS ? tailDeparture(fit, x, limits) : null;
         if (tail != null && tail[0] <= TAIL_TOLERANCE) {
             reasons.add(new Reason(Step.SHAPE, false, GradeMessage.REASON_TAIL_RULE.format(family.token(), test[0], evidence,
                     x.length, 100 * tail[0], 100 * TAIL_TOLERANCE, tail[1])));
-            return new Shape(test[0], test[1], family.isNormal(), model, List.of(modelFit(fit, x, test[0], true)), true,
+            return new Shape(test[0], test[1], family.isNormal(), model, List.of(modelFit(model, fit, x, test[0], true)), true,
                     family, fit, tail[1]);
         }
         reasons.add(new Reason(Step.SHAPE, true,
                 GradeMessage.REASON_SHAPE_REJECTED.format(family.token(), fit.describe(), test[0], evidence)));
-        return new Shape(test[0], test[1], false, model, List.of(modelFit(fit, x, test[0], false)), false, family, fit, 1);
+        return new Shape(test[0], test[1], false, model, List.of(modelFit(model, fit, x, test[0], false)), false, family, fit, 1);
     }
 
     /** {A*², p (NaN for Weibull), 1 if rejected at 1 % else 0}. */
@@ -152,7 +163,7 @@ final class ShapeJudge {
         }
         double[] y = new double[n];
         for (int i = 0; i < n; i++) {
-            y[i] = ShapeFit.toScale(family, x[i]);
+            y[i] = ShapeFit.toScale(family, x[i] - fit.threshold());
         }
         AndersonDarling.Result r = AndersonDarling.test(y);
         return new double[] {r.adjusted(), r.pValue(), r.pValue() < LEVEL ? 1 : 0};
@@ -169,7 +180,7 @@ final class ShapeJudge {
         double worst = 0;
         double factor = 1;
         double[] ps = {PercentileIndex.LOW, PercentileIndex.HIGH};
-        boolean[] has = {limits.lower().isPresent() && limits.lower().getAsDouble() > fit.family().lowerBound(),
+        boolean[] has = {limits.lower().isPresent() && limits.lower().getAsDouble() > fit.lowerBound(),
             limits.upper().isPresent()};
         double[] limit = {limits.lower().orElse(Double.NaN), limits.upper().orElse(Double.NaN)};
         for (int s = 0; s < 2; s++) {
@@ -194,22 +205,27 @@ final class ShapeJudge {
         return sorted[i] + (h - i) * (sorted[i + 1] - sorted[i]);
     }
 
-    private static ModelFit modelFit(ShapeFit fit, double[] x, double a2, boolean fits) {
+    private static ModelFit modelFit(ShapeModel model, ShapeFit fit, double[] x, double a2, boolean fits) {
         double logL = 0;
         for (double v : x) {
             logL += fit.logDensity(v);
         }
-        return new ModelFit(ShapeModel.of(fit.family()), fit.first(), fit.second(), logL, 4 - 2 * logL, a2, fits);
+        return new ModelFit(model, fit.first(), fit.second(), logL, 4 - 2 * logL, a2, fits, fit.threshold());
     }
 
-    private static String noFit(ShapeFitter.Outcome o, List<double[]> subgroups, List<String> slots, ShapeFamily family, int n) {
+    private static String noFit(ShapeFitter.Outcome o, List<double[]> subgroups, List<String> slots, ShapeFamily family,
+            double threshold, int n) {
         switch (o.failure()) {
             case AT_OR_BELOW_BOUND: {
                 int i = o.index();
                 for (int g = 0; g < subgroups.size(); g++) {
                     if (i < subgroups.get(g).length) {
-                        return GradeMessage.REASON_AT_OR_BELOW_ZERO.format(family.token(),
-                                String.format(Locale.ROOT, "%s", subgroups.get(g)[i]), g < slots.size() ? slots.get(g) : "#" + (g + 1), i + 1);
+                        String value = String.format(Locale.ROOT, "%s", subgroups.get(g)[i]);
+                        String slot = g < slots.size() ? slots.get(g) : "#" + (g + 1);
+                        return family.hasThreshold()
+                                ? GradeMessage.REASON_AT_OR_BELOW_THRESHOLD.format(family.token(),
+                                        String.format(Locale.ROOT, "%s", threshold), value, slot, i + 1)
+                                : GradeMessage.REASON_AT_OR_BELOW_ZERO.format(family.token(), value, slot, i + 1);
                     }
                     i -= subgroups.get(g).length;
                 }

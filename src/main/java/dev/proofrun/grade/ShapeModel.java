@@ -9,6 +9,8 @@ package dev.proofrun.grade;
  * <li>{@link #LOGNORMAL}: ln x normal, fitted by maximum likelihood.</li>
  * <li>{@link #WEIBULL}: two-parameter Weibull fitted by maximum likelihood.</li>
  * <li>{@link #FOLDED_NORMAL}: |Y| with Y normal(μ, σ), fitted by maximum likelihood.</li>
+ * <li>{@link #LOGNORMAL3}, {@link #WEIBULL3}: the lognormal or Weibull of x − θ with the plan's declared threshold
+ *     θ ({@link #base()}), fitted by maximum likelihood with θ held at that value.</li>
  * </ul>
  * Under the lognormal, Weibull and folded-normal models the index is the percentile index of ISO 22514-2 (Clements 1989,
  * Quality Progress 22(9):95–100): Ppu = (USL − X₅₀)/(X₉₉.₈₆₅ − X₅₀), Ppl = (X₅₀ − LSL)/(X₅₀ − X₀.₁₃₅),
@@ -18,7 +20,9 @@ public enum ShapeModel {
     NORMAL("normal"),
     LOGNORMAL("lognormal"),
     WEIBULL("weibull"),
-    FOLDED_NORMAL("folded-normal");
+    FOLDED_NORMAL("folded-normal"),
+    LOGNORMAL3("lognormal3"),
+    WEIBULL3("weibull3");
 
     private final String id;
 
@@ -30,6 +34,11 @@ public enum ShapeModel {
         return id;
     }
 
+    /** The two-parameter model x − θ follows for a threshold model; itself otherwise. */
+    public ShapeModel base() {
+        return this == LOGNORMAL3 ? LOGNORMAL : this == WEIBULL3 ? WEIBULL : this;
+    }
+
     /** The model of a declared shape. */
     public static ShapeModel of(dev.proofrun.stats.ShapeFamily family) {
         switch (family) {
@@ -39,6 +48,10 @@ public enum ShapeModel {
                 return WEIBULL;
             case FOLDED_NORMAL:
                 return FOLDED_NORMAL;
+            case LOGNORMAL3:
+                return LOGNORMAL3;
+            case WEIBULL3:
+                return WEIBULL3;
             default:
                 return NORMAL;
         }

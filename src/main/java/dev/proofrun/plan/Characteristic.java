@@ -22,9 +22,19 @@ import java.util.OptionalDouble;
  * @param expectation what the engineer believes of the process
  * @param shape       the distribution model the readings are planned to follow ({@link ShapeFamily#NORMAL}
  *                    unless declared); the grader fits only this model
+ * @param threshold   the declared threshold θ of a threshold shape ({@code lognormal3}, {@code weibull3}): the
+ *                    physical stop or datum the readings cannot go below, a plan value never estimated from the
+ *                    readings; empty for every other shape
  */
 public record Characteristic(String id, String name, String unit, OptionalDouble nominal, SpecLimits limits,
-        Optional<Gauge> gauge, Requirement requirement, Expectation expectation, ShapeFamily shape) {
+        Optional<Gauge> gauge, Requirement requirement, Expectation expectation, ShapeFamily shape,
+        OptionalDouble threshold) {
+
+    /** A characteristic planned with a shape that takes no threshold. */
+    public Characteristic(String id, String name, String unit, OptionalDouble nominal, SpecLimits limits,
+            Optional<Gauge> gauge, Requirement requirement, Expectation expectation, ShapeFamily shape) {
+        this(id, name, unit, nominal, limits, gauge, requirement, expectation, shape, OptionalDouble.empty());
+    }
 
     /** A characteristic planned with the normal model. */
     public Characteristic(String id, String name, String unit, OptionalDouble nominal, SpecLimits limits,
@@ -32,14 +42,27 @@ public record Characteristic(String id, String name, String unit, OptionalDouble
         this(id, name, unit, nominal, limits, gauge, requirement, expectation, ShapeFamily.NORMAL);
     }
 
-    /** The same characteristic planned with another shape. */
+    /** The shape as plans and sheets show it: "lognormal", or "lognormal3, threshold 9.95" for a threshold shape. */
+    public String shapeWords() {
+        return threshold.isPresent() ? String.format(Locale.ROOT, "%s, threshold %s", shape.token(), threshold.getAsDouble())
+                : shape.token();
+    }
+
+    /** The same characteristic planned with another shape that takes no threshold. */
     public Characteristic withShape(ShapeFamily newShape) {
         return new Characteristic(id, name, unit, nominal, limits, gauge, requirement, expectation, newShape);
+    }
+
+    /** The same characteristic planned with another shape and threshold (empty unless the shape takes one). */
+    public Characteristic withShape(ShapeFamily newShape, OptionalDouble newThreshold) {
+        return new Characteristic(id, name, unit, nominal, limits, gauge, requirement, expectation, newShape, newThreshold);
     }
 
     /**
      * @throws IllegalArgumentException if id or name are missing or the id has other characters
      * @throws IllegalArgumentException if the required index needs a limit the specification lacks
+     * @throws IllegalArgumentException if a threshold shape lacks its threshold, another shape has one, or the
+     *                                  threshold is not a finite number below the upper limit
      */
     public Characteristic {
         if (id == null || !id.matches("[A-Za-z0-9._-]{1,24}")) {
@@ -56,7 +79,34 @@ public record Characteristic(String id, String name, String unit, OptionalDouble
         nominal = nominal == null ? OptionalDouble.empty() : nominal;
         gauge = gauge == null ? Optional.empty() : gauge;
         shape = shape == null ? ShapeFamily.NORMAL : shape;
+        threshold = threshold == null ? OptionalDouble.empty() : threshold;
         requireLimitsFor(requirement.index(), limits);
+        requireThreshold(id, shape, threshold, limits);
+    }
+
+    /**
+     * The threshold rules alone, for a reader that names the threshold's cell or option.
+     *
+     * @throws IllegalArgumentException as the constructor does for the threshold
+     */
+    public static void requireThreshold(String id, ShapeFamily shape, OptionalDouble threshold, SpecLimits limits) {
+        if (shape.hasThreshold() && threshold.isEmpty()) {
+            throw new IllegalArgumentException(String.format(Locale.ROOT,
+                    "%s: the %s shape needs a threshold (the stop or datum the readings cannot go below)", id, shape.token()));
+        }
+        if (!shape.hasThreshold() && threshold.isPresent()) {
+            throw new IllegalArgumentException(String.format(Locale.ROOT,
+                    "%s: a threshold is only taken by the shapes lognormal3 and weibull3, not %s", id, shape.token()));
+        }
+        if (threshold.isPresent() && !Double.isFinite(threshold.getAsDouble())) {
+            throw new IllegalArgumentException(String.format(Locale.ROOT, "%s: the threshold must be a number: %s",
+                    id, threshold.getAsDouble()));
+        }
+        if (threshold.isPresent() && limits.upper().isPresent() && threshold.getAsDouble() >= limits.upper().getAsDouble()) {
+            throw new IllegalArgumentException(String.format(Locale.ROOT,
+                    "%s: the threshold %s must lie below the upper limit %s", id, threshold.getAsDouble(),
+                    limits.upper().getAsDouble()));
+        }
     }
 
     private static void requireLimitsFor(IndexKind index, SpecLimits limits) {

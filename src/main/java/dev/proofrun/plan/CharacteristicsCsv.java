@@ -29,7 +29,9 @@ import org.apache.commons.csv.CSVRecord;
 /**
  * Many characteristics at once from a CSV file with a header row. Columns (names case-insensitive, any
  * order): {@code id, name, unit, nominal, lsl, usl, target, expected}, and optionally {@code index},
- * {@code confidence}, {@code expected_cp}, {@code shape}. Empty cells mean "none" for nominal/lsl/usl/expected_cp,
+ * {@code confidence}, {@code expected_cp}, {@code shape}, {@code threshold} (the declared threshold of a
+ * {@code lognormal3} or {@code weibull3} shape, required there and refused elsewhere). Empty cells mean "none" for
+ * nominal/lsl/usl/expected_cp/threshold,
  * "the command's default" for index and confidence, and "normal" for shape (the names are those of
  * {@link ShapeFamily}; an unknown name is refused with the list). Numbers use a decimal point; a row with more cells than
  * the header (a decimal comma splits a number) is refused.
@@ -82,8 +84,9 @@ public final class CharacteristicsCsv {
                 SpecLimits limits = c.build("lsl", () -> SpecLimits.of(boxed(c.number("lsl")), boxed(c.number("usl"))));
                 Requirement req = c.build("target", () -> Requirement.of(index, c.required("target"), confidence));
                 Expectation exp = c.build("expected", () -> new Expectation(c.required("expected"), expectedCp));
+                OptionalDouble threshold = thresholdCell(c, id, shape, limits);
                 out.add(c.build("id", () -> new Characteristic(id, c.text("name", true), c.text("unit", false),
-                        c.number("nominal"), limits, Optional.empty(), req, exp, shape)));
+                        c.number("nominal"), limits, Optional.empty(), req, exp, shape, threshold)));
             }
             if (out.isEmpty()) {
                 throw new UserException(Location.file(name), PlanMessage.CSV_NO_ROWS);
@@ -101,6 +104,16 @@ public final class CharacteristicsCsv {
     }
 
     /** One row's cells with their location. */
+    /** The threshold cell, checked against the shape and the upper limit (the message names the threshold cell, or shape when it is missing). */
+    private static OptionalDouble thresholdCell(Cells c, String id, ShapeFamily shape, SpecLimits limits) {
+        OptionalDouble threshold = c.number("threshold");
+        c.build(threshold.isPresent() ? "threshold" : "shape", () -> {
+            Characteristic.requireThreshold(id, shape, threshold, limits);
+            return threshold;
+        });
+        return threshold;
+    }
+
     private static final class Cells {
         private final String file;
         private final long row;

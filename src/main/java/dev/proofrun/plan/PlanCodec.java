@@ -58,7 +58,7 @@ final class PlanCodec {
                     .orElse(null);
             chars.add(new PlanJson.CharacteristicJ(c.id(), c.name(), c.unit(), boxed(c.nominal()),
                     boxed(c.limits().lower()), boxed(c.limits().upper()),
-                    c.shape().isNormal() ? null : c.shape().token(), gauge,
+                    c.shape().isNormal() ? null : c.shape().token(), boxed(c.threshold()), gauge,
                     new PlanJson.RequirementJ(c.requirement().index().token(), c.requirement().minimum(),
                             c.requirement().confidence()),
                     new PlanJson.ExpectationJ(c.expectation().index(), boxed(c.expectation().potential()))));
@@ -177,7 +177,8 @@ final class PlanCodec {
                 : value(path + ".shape", () -> ShapeFamily.fromToken(c.shape()));
         return value(path, () -> new Characteristic(req(c.id(), path + ".id"), req(c.name(), path + ".name"), c.unit(),
                 c.nominal() == null ? OptionalDouble.empty() : OptionalDouble.of(c.nominal()), limits, gauge,
-                requirement, expectation, shape));
+                requirement, expectation, shape,
+                c.threshold() == null ? OptionalDouble.empty() : OptionalDouble.of(c.threshold())));
     }
 
     private ProductionCalendar calendar(PlanJson.CalendarJ c) {

@@ -15,6 +15,7 @@ import org.apache.commons.statistics.distribution.NormalDistribution;
  *     on which the model is the line ln η + q/k.</li>
  * <li>folded normal (μ, σ of the unfolded normal): f(x) = [φ((x−μ)/σ) + φ((x+μ)/σ)]/σ for x ≥ 0; plot x
  *     against the fitted model's own p-quantile, on which the model is the line y = q.</li>
+ * <li>lognormal3, weibull3: the same for x − θ with the declared threshold θ (plot ln(x − θ)).</li>
  * </ul>
  * Plotting positions p_i = (i − 3/8)/(N + 1/4) (Blom 1958, <i>Statistical Estimates and Transformed
  * Beta-Variables</i>).
@@ -22,14 +23,19 @@ import org.apache.commons.statistics.distribution.NormalDistribution;
  * @param model  which model
  * @param first  μ (normal, lognormal, folded normal), k (Weibull)
  * @param second σ (normal, lognormal, folded normal), η (Weibull)
+ * @param threshold θ of a threshold model, 0 otherwise
  */
-record ModelCurve(ShapeModel model, double first, double second) {
+record ModelCurve(ShapeModel model, double first, double second, double threshold) {
+
+    ModelCurve(ShapeModel model, double first, double second) {
+        this(model, first, second, 0);
+    }
 
     private static final NormalDistribution STANDARD = NormalDistribution.of(0, 1);
 
     /** The curve for a model fit. */
     static ModelCurve of(ModelFit fit) {
-        return new ModelCurve(fit.model(), fit.first(), fit.second());
+        return new ModelCurve(fit.model(), fit.first(), fit.second(), fit.threshold());
     }
 
     /** The normal model with the readings' mean and standard deviation. */
@@ -38,8 +44,9 @@ record ModelCurve(ShapeModel model, double first, double second) {
     }
 
     /** Density at x on the readings' scale (0 outside the support). */
-    double density(double x) {
-        switch (model) {
+    double density(double at) {
+        double x = at - threshold;
+        switch (model.base()) {
             case NORMAL:
                 return phi((x - first) / second) / second;
             case LOGNORMAL:
@@ -58,8 +65,9 @@ record ModelCurve(ShapeModel model, double first, double second) {
     }
 
     /** The probability plot's vertical value for a reading (NaN outside the support). */
-    double straighten(double x) {
-        switch (model) {
+    double straighten(double at) {
+        double x = at - threshold;
+        switch (model.base()) {
             case NORMAL:
             case FOLDED_NORMAL:
                 return x;
@@ -73,12 +81,12 @@ record ModelCurve(ShapeModel model, double first, double second) {
         if (model == ShapeModel.FOLDED_NORMAL) {
             return dev.proofrun.stats.FoldedNormal.quantile(first, second, p);
         }
-        return model == ShapeModel.WEIBULL ? Math.log(-Math.log(1 - p)) : STANDARD.inverseCumulativeProbability(p);
+        return model.base() == ShapeModel.WEIBULL ? Math.log(-Math.log(1 - p)) : STANDARD.inverseCumulativeProbability(p);
     }
 
     /** The model's line on the probability plot at horizontal value q. */
     double line(double q) {
-        switch (model) {
+        switch (model.base()) {
             case NORMAL:
             case LOGNORMAL:
                 return first + second * q;
@@ -93,7 +101,10 @@ record ModelCurve(ShapeModel model, double first, double second) {
 
     /** Axis words for the probability plot: {horizontal, vertical}. */
     String[] axisNames() {
-        switch (model) {
+        if (threshold != 0) {
+            return new String[] {model.base() == ShapeModel.WEIBULL ? "ln(\u2212ln(1\u2212p))" : "normal quantile", "ln(reading \u2212 threshold)"};
+        }
+        switch (model.base()) {
             case NORMAL:
                 return new String[] {"normal quantile", "reading"};
             case LOGNORMAL:

@@ -38,7 +38,7 @@ final class PlanSummarySheet {
             int d = SheetNumbers.decimals(c);
             w.row(null, c.id(), c.name(), c.unit(), SheetNumbers.number(c.nominal(), d), SheetNumbers.number(c.limits().lower(), d),
                     SheetNumbers.number(c.limits().upper(), d), c.gauge().map(g -> g.name()).orElse("\u2014"),
-                    SheetNumbers.resolution(c), SheetNumbers.requirement(c), c.shape().token());
+                    SheetNumbers.resolution(c), SheetNumbers.requirement(c), c.shapeWords());
         }
         w.skip();
         w.row(header, "Caution");

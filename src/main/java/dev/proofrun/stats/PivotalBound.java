@@ -70,13 +70,14 @@ public final class PivotalBound {
         double zHigh = ShapeFit.standardQuantile(family, PercentileIndex.HIGH);
         double u = fit.location();
         double b = fit.scale();
+        double theta = fit.threshold(); // a declared threshold shifts the quantiles; the pivots are those of x − θ
         int m = piv[0].length;
         double[] c = new double[m];
         for (int j = 0; j < m; j++) {
             double bStar = b / piv[1][j];
             double uStar = u - piv[0][j] / piv[1][j] * b;
-            c[j] = PercentileIndex.of(kind, limits, ShapeFit.fromScale(family, uStar + bStar * zLow),
-                    ShapeFit.fromScale(family, uStar + bStar * zMed), ShapeFit.fromScale(family, uStar + bStar * zHigh));
+            c[j] = PercentileIndex.of(kind, limits, theta + ShapeFit.fromScale(family, uStar + bStar * zLow),
+                    theta + ShapeFit.fromScale(family, uStar + bStar * zMed), theta + ShapeFit.fromScale(family, uStar + bStar * zHigh));
         }
         Arrays.sort(c);
         double alpha = 1 - confidence;

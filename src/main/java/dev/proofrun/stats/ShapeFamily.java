@@ -20,6 +20,10 @@ import java.util.stream.Collectors;
  * <li>{@link #FOLDED_NORMAL}: x = |Y| with Y normal(μ, σ) ({@link FoldedNormal}) — for characteristics bounded
  *     at zero whose signed deviation is normal (position, runout; common practice). It is not a location–scale
  *     family: its bound is a test inversion at the least favourable mean/σ ({@link FoldedNormalBound}), not a pivotal one.</li>
+ * <li>{@link #LOGNORMAL3}, {@link #WEIBULL3}: the same two models for x − θ, with the threshold θ a
+ *     <em>declared plan value</em> (the physical stop or datum the readings cannot go below), never estimated
+ *     from the readings: with θ known, x − θ follows the two-parameter family and its pivotal bound holds as it
+ *     is (docs/decisions/declared-shape-grading.md, "Threshold shapes"). {@link #base()} names that family.</li>
  * </ul>
  * The location–scale form is what makes the lower bound of a percentile index a pivotal computation
  * ({@code grade.PercentileBound}). Tokens are the words in plan files, the characteristics CSV and
@@ -33,7 +37,11 @@ public enum ShapeFamily {
     /** Two-parameter Weibull: ln x is smallest-extreme-value; readings must be positive. */
     WEIBULL("weibull", 0),
     /** Folded normal |Y|, Y normal(μ, σ): readings must not be negative ({@link FoldedNormal}). Not location–scale. */
-    FOLDED_NORMAL("folded-normal", 0);
+    FOLDED_NORMAL("folded-normal", 0),
+    /** Lognormal of x − θ with a declared threshold θ: readings must lie above θ. */
+    LOGNORMAL3("lognormal3", 0),
+    /** Two-parameter Weibull of x − θ with a declared threshold θ: readings must lie above θ. */
+    WEIBULL3("weibull3", 0);
 
     private final String token;
     private final double lowerBound;
@@ -43,14 +51,34 @@ public enum ShapeFamily {
         this.lowerBound = lowerBound;
     }
 
-    /** The word in files and options: "normal", "lognormal", "weibull", "folded-normal". */
+    /** The word in files and options: "normal", "lognormal", "weibull", "folded-normal", "lognormal3", "weibull3". */
     public String token() {
         return token;
     }
 
-    /** The smallest value the model allows: −∞ for the normal, 0 otherwise (readings must lie above it; the folded normal also allows 0 itself). */
+    /**
+     * The smallest value the model allows: −∞ for the normal, 0 otherwise (readings must lie above it; the folded
+     * normal also allows 0 itself). For the threshold shapes it is the bound of x − θ, so θ on the readings' scale.
+     */
     public double lowerBound() {
         return lowerBound;
+    }
+
+    /** True for the shapes that need a declared threshold θ: {@link #LOGNORMAL3}, {@link #WEIBULL3}. */
+    public boolean hasThreshold() {
+        return this == LOGNORMAL3 || this == WEIBULL3;
+    }
+
+    /** The two-parameter family x − θ follows for a threshold shape ({@link #LOGNORMAL} or {@link #WEIBULL}); itself otherwise. */
+    public ShapeFamily base() {
+        switch (this) {
+            case LOGNORMAL3:
+                return LOGNORMAL;
+            case WEIBULL3:
+                return WEIBULL;
+            default:
+                return this;
+        }
     }
 
     /** True when the model is the normal one (today's exact normal-theory bounds apply). */
@@ -63,7 +91,7 @@ public enum ShapeFamily {
         return this != FOLDED_NORMAL;
     }
 
-    /** The tokens, comma separated, for messages: "normal, lognormal, weibull, folded-normal". */
+    /** The tokens, comma separated, for messages: "normal, lognormal, weibull, folded-normal, lognormal3, weibull3". */
     public static String names() {
         return Arrays.stream(values()).map(ShapeFamily::token).collect(Collectors.joining(", "));
     }

@@ -11,11 +11,17 @@ import org.apache.commons.statistics.distribution.NormalDistribution;
  * The folded normal is not of that form: location and scale are the μ ≥ 0 and σ of the normal Y whose
  * absolute value is read ({@link FoldedNormal} does its arithmetic).
  *
- * @param family   the model
- * @param location u: μ (normal), μ of ln x (lognormal), ln c (Weibull), μ of Y (folded normal)
- * @param scale    b &gt; 0: σ (normal), σ of ln x (lognormal), 1/k (Weibull), σ of Y (folded normal)
+ * <p>A threshold θ (the declared one of a {@link ShapeFamily#LOGNORMAL3} or {@link ShapeFamily#WEIBULL3} shape)
+ * shifts the lognormal or Weibull: F(x) = G((ln(x − θ) − u)/b), quantiles θ + e^(u + b·zₚ). The location, scale
+ * and {@link #family()} are those of x − θ; θ = 0 is the two-parameter model.
+ *
+ * @param family    the model (of x − θ: lognormal or Weibull when there is a threshold)
+ * @param location  u: μ (normal), μ of ln x (lognormal), ln c (Weibull), μ of Y (folded normal)
+ * @param scale     b &gt; 0: σ (normal), σ of ln x (lognormal), 1/k (Weibull), σ of Y (folded normal)
+ * @param threshold θ, the declared threshold; 0 for the two-parameter models and always 0 for the normal and
+ *                  folded normal
  */
-public record ShapeFit(ShapeFamily family, double location, double scale) {
+public record ShapeFit(ShapeFamily family, double location, double scale, double threshold) {
 
     private static final NormalDistribution STANDARD = NormalDistribution.of(0, 1);
     private static final double MAX_SCORE = 40;
@@ -25,6 +31,24 @@ public record ShapeFit(ShapeFamily family, double location, double scale) {
         if (!Double.isFinite(location) || !(scale > 0) || !Double.isFinite(scale)) {
             throw new IllegalArgumentException(String.format(Locale.ROOT, "no such fit: location %s, scale %s", location, scale));
         }
+        if (!Double.isFinite(threshold) || (threshold != 0 && family != ShapeFamily.LOGNORMAL && family != ShapeFamily.WEIBULL)) {
+            throw new IllegalArgumentException(String.format(Locale.ROOT, "no threshold %s for the %s model", threshold, family.token()));
+        }
+    }
+
+    /** A fit without a threshold (θ = 0). */
+    public ShapeFit(ShapeFamily family, double location, double scale) {
+        this(family, location, scale, 0);
+    }
+
+    /** The same fit of x − θ with the threshold θ: the three-parameter model. */
+    public ShapeFit withThreshold(double theta) {
+        return new ShapeFit(family, location, scale, theta);
+    }
+
+    /** The smallest value the model allows on the readings' scale: θ plus the family's bound. */
+    public double lowerBound() {
+        return family.lowerBound() + threshold;
     }
 
     /** Quantile of the standard member: Φ⁻¹(p), or ln(−ln(1 − p)) for the smallest extreme value. */
@@ -60,7 +84,7 @@ public record ShapeFit(ShapeFamily family, double location, double scale) {
         if (family == ShapeFamily.FOLDED_NORMAL) {
             return FoldedNormal.quantile(location, scale, p);
         }
-        return fromScale(family, location + scale * standardQuantile(family, p));
+        return threshold + fromScale(family, location + scale * standardQuantile(family, p));
     }
 
     /** F(x); 0 at or below the model's lower bound. */
@@ -68,10 +92,10 @@ public record ShapeFit(ShapeFamily family, double location, double scale) {
         if (family == ShapeFamily.FOLDED_NORMAL) {
             return FoldedNormal.cdf(location, scale, x);
         }
-        if (x <= family.lowerBound()) {
+        if (x <= lowerBound()) {
             return 0;
         }
-        return standardCdf(family, (toScale(family, x) - location) / scale);
+        return standardCdf(family, (toScale(family, x - threshold) - location) / scale);
     }
 
     /** 1 − F(x), accurate far in the upper tail. */
@@ -79,10 +103,10 @@ public record ShapeFit(ShapeFamily family, double location, double scale) {
         if (family == ShapeFamily.FOLDED_NORMAL) {
             return FoldedNormal.survival(location, scale, x);
         }
-        if (x <= family.lowerBound()) {
+        if (x <= lowerBound()) {
             return 1;
         }
-        return standardSurvival(family, (toScale(family, x) - location) / scale);
+        return standardSurvival(family, (toScale(family, x - threshold) - location) / scale);
     }
 
     /** ln f(x), the log-density on the readings' scale (Jacobian of y = ln x included); −∞ outside the support. */
@@ -90,12 +114,12 @@ public record ShapeFit(ShapeFamily family, double location, double scale) {
         if (family == ShapeFamily.FOLDED_NORMAL) {
             return FoldedNormal.logDensity(location, scale, x);
         }
-        if (x <= family.lowerBound()) {
+        if (x <= lowerBound()) {
             return Double.NEGATIVE_INFINITY;
         }
-        double z = (toScale(family, x) - location) / scale;
+        double z = (toScale(family, x - threshold) - location) / scale;
         double logG = family == ShapeFamily.WEIBULL ? z - Math.exp(z) : -0.5 * z * z - 0.5 * Math.log(2 * Math.PI);
-        return logG - Math.log(scale) - (family.isNormal() ? 0 : Math.log(x));
+        return logG - Math.log(scale) - (family.isNormal() ? 0 : Math.log(x - threshold));
     }
 
     /** Φ⁻¹(F(x)): the reading on the normal scale under this model (ln x standardised for the lognormal). */
@@ -107,9 +131,9 @@ public record ShapeFit(ShapeFamily family, double location, double scale) {
             return Math.max(-MAX_SCORE, Math.min(MAX_SCORE, score));
         }
         if (family != ShapeFamily.WEIBULL) {
-            return (toScale(family, x) - location) / scale;
+            return (toScale(family, x - threshold) - location) / scale;
         }
-        double z = (toScale(family, x) - location) / scale;
+        double z = (toScale(family, x - threshold) - location) / scale;
         // Φ⁻¹ of a lower tail that may underflow: use the upper tail where it is the smaller one
         double lowerTail = -Math.expm1(-Math.exp(z));
         double score = lowerTail < 0.5 ? STANDARD.inverseCumulativeProbability(lowerTail)
@@ -128,11 +152,15 @@ public record ShapeFit(ShapeFamily family, double location, double scale) {
         return family == ShapeFamily.WEIBULL ? Math.exp(location) : scale;
     }
 
-    /** "mu = …, sigma = …" in the words of the family. */
+    /** "mu = …, sigma = …" in the words of the family, with ", threshold = θ" for a three-parameter fit. */
     public String describe() {
+        return threshold == 0 ? describeTwo() : describeTwo() + String.format(Locale.ROOT, ", threshold = %s", threshold);
+    }
+
+    private String describeTwo() {
         switch (family) {
             case LOGNORMAL:
-                return String.format(Locale.ROOT, "mu = %.4g, sigma = %.4g of ln x", location, scale);
+                return String.format(Locale.ROOT, threshold == 0 ? "mu = %.4g, sigma = %.4g of ln x" : "mu = %.4g, sigma = %.4g of ln(x - threshold)", location, scale);
             case WEIBULL:
                 return String.format(Locale.ROOT, "shape = %.4g, scale = %.4g", first(), second());
             case FOLDED_NORMAL:

@@ -74,9 +74,28 @@ public final class ShapeFitter {
         }
     }
 
-    /** Fits {@code family} to the readings {@code x} (not changed). */
+    /** Fits {@code family} to the readings {@code x} (not changed); a threshold shape with θ = 0. */
     public static Outcome fit(ShapeFamily family, double[] x) {
-        return fit(family, x, true);
+        return family.hasThreshold() ? fit(family, 0, x) : fit(family, x, true);
+    }
+
+    /**
+     * Fits {@code family} with the declared threshold θ: for {@link ShapeFamily#LOGNORMAL3} and
+     * {@link ShapeFamily#WEIBULL3} the two-parameter {@link ShapeFamily#base()} fitted to x − θ (the maximum
+     * likelihood with θ held at its declared value, as SciPy's {@code lognorm.fit(x, floc=θ)} and
+     * {@code weibull_min.fit(x, floc=θ)}), returned with θ in the fit; a reading at or below θ is
+     * {@link Failure#AT_OR_BELOW_BOUND}. θ is ignored for the other shapes.
+     */
+    public static Outcome fit(ShapeFamily family, double threshold, double[] x) {
+        if (!family.hasThreshold()) {
+            return fit(family, x, true);
+        }
+        double[] shifted = new double[x.length];
+        for (int i = 0; i < x.length; i++) {
+            shifted[i] = x[i] - threshold;
+        }
+        Outcome o = fit(family.base(), shifted, true);
+        return o.fitted() ? Outcome.of(o.fit().withThreshold(threshold)) : o;
     }
 
     /** As {@link #fit} without the Weibull shape cap: for the pivot draws, whose standard samples have k = 1. */

@@ -67,7 +67,7 @@ class PlanShapeCommandTest {
         Path file = dir.resolve("p.json");
         assertEquals(2, run(single(file, "--shape", "gamma")));
         String e = err.toString().trim();
-        assertTrue(e.contains("--shape") && e.contains("normal, lognormal, weibull, folded-normal"), e);
+        assertTrue(e.contains("--shape") && e.contains("normal, lognormal, weibull, folded-normal, lognormal3, weibull3"), e);
         assertEquals(1, e.lines().count(), e);
         assertFalse(Files.exists(file));
     }
@@ -93,7 +93,7 @@ class PlanShapeCommandTest {
         assertEquals(2, run("size", "--characteristics", csv.toString()));
         String e = err.toString().trim();
         assertTrue(e.contains("chars.csv") && e.contains("row 2") && e.contains("shape")
-                && e.contains("normal, lognormal, weibull, folded-normal"), e);
+                && e.contains("normal, lognormal, weibull, folded-normal, lognormal3, weibull3"), e);
     }
 
     @Test
@@ -101,7 +101,7 @@ class PlanShapeCommandTest {
         Path file = dir.resolve("p.json");
         assertEquals(0, run(single(file, "--shape", "folded-normal")), err.toString());
         assertTrue(out.toString().contains("C1 is planned folded-normal, but its power here is the normal model's, and"
-                + " size --shape cannot plan that shape yet (it plans lognormal, weibull)"), out.toString());
+                + " size --shape cannot plan that shape yet (it plans lognormal, weibull, lognormal3, weibull3)"), out.toString());
         assertTrue(Files.readString(file).contains("\"shape\": \"folded-normal\""), Files.readString(file));
         assertEquals(ShapeFamily.FOLDED_NORMAL, PlanFiles.read(file).characteristics().get(0).shape());
         assertEquals(0, run("plan", "show", file.toString()));

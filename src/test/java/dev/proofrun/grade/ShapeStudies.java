@@ -37,18 +37,41 @@ final class ShapeStudies {
      * @param n         subgroup size
      * @param k         subgroups
      * @param twoSided  a centred two-sided tolerance (normal only), else an upper limit only
+     * @param trueThreshold     for {@code lognormal3}/{@code weibull3}: the process's real threshold θ′; readings are
+     *                          θ′ + {@value #THRESHOLD_SCALE}·(the two-parameter draw); 0 otherwise
+     * @param declaredThreshold the threshold the plan declares (θ; NaN for the shapes without one)
      */
-    record Case(ShapeFamily family, double parameter, double index, int n, int k, boolean twoSided) {
+    record Case(ShapeFamily family, double parameter, double index, int n, int k, boolean twoSided, double trueThreshold,
+            double declaredThreshold) {
+
+        /** A process of a shape without a threshold. */
+        Case(ShapeFamily family, double parameter, double index, int n, int k, boolean twoSided) {
+            this(family, parameter, index, n, k, twoSided, 0, Double.NaN);
+        }
+
+        /** A threshold-shape process whose real threshold is the declared one. */
+        static Case threshold(ShapeFamily family, double parameter, double theta, double index, int n, int k) {
+            return new Case(family, parameter, index, n, k, false, theta, theta);
+        }
+
+        private double scale() {
+            return family.hasThreshold() ? THRESHOLD_SCALE : 1;
+        }
 
         String label() {
-            String p = family == ShapeFamily.NORMAL ? "" : String.format(Locale.ROOT, " %.2f", parameter);
+            String p = family == ShapeFamily.NORMAL ? "" : String.format(Locale.ROOT, " %.2f", parameter)
+                    + (family.hasThreshold() ? String.format(Locale.ROOT, " from %s declared %s", trueThreshold, declaredThreshold) : "");
             return String.format(Locale.ROOT, "%s%s, index %.2f, %d x %d%s", family.token(), p, index, k, n,
                     twoSided ? ", two-sided" : "");
         }
 
         /** The true quantile: normal(10, 1), lognormal(median 1, σ), Weibull(k, scale 1), |normal(μ/σ, 1)|. */
         double quantile(double p) {
-            switch (family) {
+            return trueThreshold + scale() * baseQuantile(p);
+        }
+
+        private double baseQuantile(double p) {
+            switch (family.base()) {
                 case FOLDED_NORMAL:
                     return dev.proofrun.stats.FoldedNormal.quantile(parameter, 1, p);
                 case LOGNORMAL:
@@ -61,7 +84,11 @@ final class ShapeStudies {
         }
 
         double draw(ZigguratSampler.NormalizedGaussian g, ZigguratSampler.Exponential e) {
-            switch (family) {
+            return trueThreshold + scale() * baseDraw(g, e);
+        }
+
+        private double baseDraw(ZigguratSampler.NormalizedGaussian g, ZigguratSampler.Exponential e) {
+            switch (family.base()) {
                 case FOLDED_NORMAL:
                     return Math.abs(parameter + g.sample());
                 case LOGNORMAL:
@@ -84,10 +111,13 @@ final class ShapeStudies {
 
         GradingPlan plan(double c0) {
             PlannedCharacteristic c = new PlannedCharacteristic("X1", "simulated characteristic", "mm", limits(), null, 0,
-                    Requirement.of(IndexKind.CPK, c0, 0.95), family);
+                    Requirement.of(IndexKind.CPK, c0, 0.95), family, declaredThreshold);
             return TestPlans.plan(n, k, c);
         }
     }
+
+    /** The spread of a threshold-shape process: readings θ′ + 0.05·(lognormal of median 1, or Weibull of scale 1). */
+    static final double THRESHOLD_SCALE = 0.05;
 
     private ShapeStudies() {
     }

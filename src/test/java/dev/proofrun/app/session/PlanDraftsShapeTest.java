@@ -87,4 +87,34 @@ class PlanDraftsShapeTest {
         d1.cell(CharacteristicField.RESOLUTION).set("");
         assertEquals(java.util.Optional.empty(), PlanDrafts.gaugeOf(d1, java.util.Optional.of(was)), "both blank: no gauge");
     }
+
+    @Test
+    void aThresholdShapeKeepsItsDeclaredThresholdThroughTheWizard() throws Exception {
+        // the Part table has no Threshold column: the threshold comes from the opened plan
+        StudyPlan demo = DemoPlan.create();
+        java.util.List<dev.proofrun.plan.Characteristic> chars = new java.util.ArrayList<>(demo.characteristics());
+        int r4 = chars.indexOf(demo.characteristic("R4").orElseThrow());
+        chars.set(r4, chars.get(r4).withShape(ShapeFamily.WEIBULL3, java.util.OptionalDouble.of(0.05)));
+        StudyPlan plan = new StudyPlan(demo.id(), demo.part(), demo.people(), chars, demo.calendar(), demo.span(),
+                demo.design(), demo.spacing(), demo.seed(), demo.schedule(), dev.proofrun.plan.PlanState.DRAFT,
+                java.util.Optional.empty(), java.util.Optional.empty(), 1, demo.stages());
+        Path plans = Files.createDirectories(home.resolve("plans"));
+        Path file = plans.resolve(DemoPlan.FILE_NAME);
+        PlanFiles.write(file, plan);
+        Session session = new Session(new AppHome(home, plans));
+        session.open(file);
+        StudyPlan again = PlanDrafts.compose(session.draft(), session.base(), demo.characteristics().get(0).requirement(),
+                row -> demo.characteristic(row.id()).orElseThrow().expectation(), demo.calendar(), demo.span(),
+                demo.design(), demo.spacing(), demo.seed(), demo.schedule());
+        assertEquals(ShapeFamily.WEIBULL3, again.characteristic("R4").orElseThrow().shape());
+        assertEquals(java.util.OptionalDouble.of(0.05), again.characteristic("R4").orElseThrow().threshold());
+        // typed on a row whose plan had none: refused in words by the plan model
+        CharacteristicDraft d1 = session.draft().characteristics().get(0);
+        d1.cell(CharacteristicField.SHAPE).set("lognormal3");
+        IllegalArgumentException e = org.junit.jupiter.api.Assertions.assertThrows(IllegalArgumentException.class,
+                () -> PlanDrafts.compose(session.draft(), session.base(), demo.characteristics().get(0).requirement(),
+                        row -> demo.characteristic(row.id()).orElseThrow().expectation(), demo.calendar(), demo.span(),
+                        demo.design(), demo.spacing(), demo.seed(), demo.schedule()));
+        org.junit.jupiter.api.Assertions.assertTrue(e.getMessage().contains("needs a threshold"), e.getMessage());
+    }
 }

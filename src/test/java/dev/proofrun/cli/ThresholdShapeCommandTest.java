@@ -1,0 +1,199 @@
+package dev.proofrun.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import dev.proofrun.plan.PlanFiles;
+import dev.proofrun.stats.ShapeFamily;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.OptionalDouble;
+import org.apache.commons.rng.UniformRandomProvider;
+import org.apache.commons.rng.sampling.distribution.ZigguratSampler;
+import org.apache.commons.rng.simple.RandomSource;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * The threshold shapes on the command line: {@code plan new --shape lognormal3 --threshold 9.95}, the CSV column,
+ * the plan file, {@code plan show}, {@code grade} (text and JSON name the model and threshold; a reading at or below
+ * it is a finding), bad input refused in one line with exit 2 and nothing written, and {@code size --shape lognormal3}.
+ * Invented part: a pin that seats against a stop at 9.95 mm, upper limit 10.10 mm.
+ */
+class ThresholdShapeCommandTest {
+
+    @TempDir
+    Path dir;
+
+    private String out;
+    private String err;
+
+    private int run(String... args) {
+        StringWriter o = new StringWriter();
+        StringWriter e = new StringWriter();
+        int code = ProofrunCommand.run(new PrintWriter(o, true), new PrintWriter(e, true), args);
+        out = o.toString();
+        err = e.toString();
+        return code;
+    }
+
+    private String[] single(Path file, String... extra) {
+        List<String> a = new ArrayList<>(List.of("plan", "new", "--out", file.toString(), "--id", "PR-2027-0091",
+                "--part", "locating pin", "--characteristic", "seat height", "--unit", "mm",
+                "--usl", "10.10", "--target", "1.33", "--expected", "1.8",
+                "--subgroup-size", "5", "--subgroups", "25", "--zone", "Europe/Berlin",
+                "--start", "2027-03-01T06:00"));
+        a.addAll(List.of(extra));
+        return a.toArray(new String[0]);
+    }
+
+    @Test
+    void aThresholdShapeIsWrittenShownAndRead() throws Exception {
+        Path file = dir.resolve("p.json");
+        assertEquals(0, run(single(file, "--shape", "lognormal3", "--threshold", "9.95")), err);
+        String json = Files.readString(file);
+        assertTrue(json.contains("\"shape\" : \"lognormal3\",\n      \"threshold\" : 9.95,")
+                || json.contains("\"shape\": \"lognormal3\",\n      \"threshold\": 9.95,"), json);
+        assertEquals(ShapeFamily.LOGNORMAL3, PlanFiles.read(file).characteristics().get(0).shape());
+        assertEquals(OptionalDouble.of(9.95), PlanFiles.read(file).characteristics().get(0).threshold());
+        assertEquals(0, run("plan", "show", file.toString()), err);
+        assertTrue(out.contains("lognormal3, threshold 9.95"), out);
+    }
+
+    @Test
+    void otherShapesHaveNoThresholdInTheFile() throws Exception {
+        Path file = dir.resolve("p.json");
+        assertEquals(0, run(single(file, "--shape", "lognormal")), err);
+        assertFalse(Files.readString(file).contains("threshold"));
+    }
+
+    @Test
+    void badThresholdsAreRefusedInOneLineAndNothingIsWritten() {
+        String[][] cases = {
+            {"--shape", "lognormal3"},
+            {"--shape", "weibull", "--threshold", "9.95"},
+            {"--threshold", "9.95"},
+            {"--shape", "weibull3", "--threshold", "10.10"},
+            {"--shape", "weibull3", "--threshold", "NaN"},
+        };
+        String[] words = {"needs a threshold", "only taken by the shapes lognormal3 and weibull3, not weibull",
+            "not normal", "must lie below the upper limit 10.1", "must be a number"};
+        for (int i = 0; i < cases.length; i++) {
+            Path file = dir.resolve("bad" + i + ".json");
+            assertEquals(2, run(single(file, cases[i])), String.join(" ", cases[i]) + ": " + out + err);
+            String e = err.trim();
+            assertEquals(1, e.lines().count(), e);
+            assertTrue(e.contains(words[i].replace("not normal", "not normal")) && e.contains(i == 0 ? "--shape" : "--threshold"), e);
+            assertFalse(e.contains("Exception"), e);
+            assertFalse(Files.exists(file), e);
+        }
+    }
+
+    @Test
+    void theCharacteristicsCsvHasAThresholdColumn() throws Exception {
+        Path csv = dir.resolve("chars.csv");
+        Files.writeString(csv, "id,name,unit,nominal,lsl,usl,target,expected,shape,threshold\n"
+                + "D1,bore,mm,10,9.98,10.02,1.33,1.8,,\n"
+                + "H2,seat height,mm,,9.90,10.10,1.33,1.8,weibull3,9.95\n", StandardCharsets.UTF_8);
+        Path file = dir.resolve("p.json");
+        assertEquals(0, run("plan", "new", "--out", file.toString(), "--part", "pin", "--characteristics", csv.toString(),
+                "--subgroup-size", "5", "--subgroups", "25", "--zone", "Europe/Berlin", "--start", "2027-03-01T06:00"), err);
+        assertEquals(List.of(OptionalDouble.empty(), OptionalDouble.of(9.95)),
+                PlanFiles.read(file).characteristics().stream().map(c -> c.threshold()).toList());
+
+        Files.writeString(csv, "id,name,unit,nominal,lsl,usl,target,expected,shape,threshold\n"
+                + "H2,seat height,mm,,,10.10,1.33,1.8,lognormal,9.95\n", StandardCharsets.UTF_8);
+        Path bad = dir.resolve("q.json");
+        assertEquals(2, run("plan", "new", "--out", bad.toString(), "--part", "pin", "--characteristics", csv.toString(),
+                "--subgroup-size", "5", "--subgroups", "25", "--zone", "Europe/Berlin", "--start", "2027-03-01T06:00"));
+        String e = err.trim();
+        assertTrue(e.contains("chars.csv") && e.contains("row 2") && e.contains("threshold") && e.contains("not lognormal"), e);
+        assertEquals(1, e.lines().count(), e);
+        assertFalse(Files.exists(bad));
+    }
+
+    /** Readings 9.95 + 0.02·exp(0.4·Z) in the fill-in layout (invented seat heights; Ppu about 3). */
+    private Path returned(Path plan, long seed, String replaceFirst) throws Exception {
+        assertEquals(0, run("plan", "issue", plan.toString()), err);
+        var gp = dev.proofrun.grade.GradingPlans.of(PlanFiles.read(plan));
+        UniformRandomProvider rng = RandomSource.XO_RO_SHI_RO_128_PP.create(seed);
+        ZigguratSampler.NormalizedGaussian g = ZigguratSampler.NormalizedGaussian.of(rng);
+        StringBuilder sb = new StringBuilder("plan,slot,characteristic,planned,taken,lot,operator,x1,x2,x3,x4,x5,remark\n");
+        boolean first = true;
+        for (var slot : gp.slots()) {
+            String t = slot.start().toOffsetDateTime().toString();
+            sb.append(gp.reference()).append(',').append(slot.id()).append(",C1,").append(t).append(',').append(t).append(",L1,MK");
+            for (int j = 0; j < 5; j++) {
+                String x = String.format(Locale.ROOT, "%.5f", 9.95 + 0.02 * Math.exp(0.4 * g.sample()));
+                sb.append(',').append(first && j == 1 && replaceFirst != null ? replaceFirst : x);
+            }
+            first = false;
+            sb.append(",\n");
+        }
+        Path data = dir.resolve("returned.csv");
+        Files.writeString(data, sb.toString(), StandardCharsets.UTF_8);
+        return data;
+    }
+
+    @Test
+    void gradeNamesTheModelAndThreshold() throws Exception {
+        Path plan = dir.resolve("p.json");
+        assertEquals(0, run(single(plan, "--shape", "lognormal3", "--threshold", "9.95", "--lsl", "9.90")), err);
+        Path data = returned(plan, 21L, null);
+        assertEquals(0, run("grade", plan.toString(), data.toString()), err);
+        assertTrue(out.contains("C1 seat height: Demonstrated"), out);
+        assertTrue(out.contains("under the lognormal3 model"), out);
+        assertTrue(out.contains("fitted lognormal3 (threshold 9.95) model"), out);
+        assertTrue(out.contains("lower limit 9.9 lies at or below the declared threshold 9.95"), out);
+        assertTrue(out.contains("threshold 9.95 as the real stop"), out);
+        assertEquals(0, run("grade", plan.toString(), data.toString(), "--json"), err);
+        JsonNode j = new ObjectMapper().readTree(out).get("characteristics").get(0);
+        assertEquals("lognormal3", j.get("model").asText());
+        assertEquals(9.95, j.get("threshold").asDouble(), 0);
+        assertEquals("iso-22514-2-percentile", j.get("method").asText());
+
+        Path pdf = dir.resolve("report.pdf");
+        assertEquals(0, run("grade", plan.toString(), data.toString(), "--report", pdf.toString()), err);
+        try (org.apache.pdfbox.pdmodel.PDDocument doc = org.apache.pdfbox.Loader.loadPDF(Files.readAllBytes(pdf))) {
+            String text = new org.apache.pdfbox.text.PDFTextStripper().getText(doc).replaceAll("\\s+", " ");
+            assertTrue(text.contains("lognormal3"), text);
+            assertTrue(text.contains("threshold 9.95"), text);
+            assertTrue(text.contains("ln(reading \u2212 threshold)"), text);
+        }
+    }
+
+    @Test
+    void aReadingAtTheThresholdIsAFinding() throws Exception {
+        Path plan = dir.resolve("p.json");
+        assertEquals(0, run(single(plan, "--shape", "weibull3", "--threshold", "9.95")), err);
+        Path data = returned(plan, 22L, "9.95");
+        byte[] before = Files.readAllBytes(data);
+        assertEquals(0, run("grade", plan.toString(), data.toString()), err);
+        assertTrue(out.contains("C1 seat height: Not valid"), out);
+        assertTrue(out.contains("a reading at or below the declared threshold cannot come from the planned shape (weibull3,"
+                + " threshold 9.95): 9.95 in subgroup"), out);
+        assertTrue(out.contains(", reading 2."), out);
+        assertTrue(java.util.Arrays.equals(before, Files.readAllBytes(data)));
+    }
+
+    @Test
+    void sizeAcceptsTheThresholdShapesAndPlansThemAsTheTwoParameterOnes() {
+        assertEquals(0, run("size", "--shape", "lognormal", "--skewness", "1", "--spec", "upper", "--target", "1.33",
+                "--expected", "1.67", "--subgroup-size", "5"), err);
+        String two = out;
+        assertEquals(0, run("size", "--shape", "lognormal3", "--skewness", "1", "--spec", "upper", "--target", "1.33",
+                "--expected", "1.67", "--subgroup-size", "5"), err);
+        assertTrue(out.contains("note: lognormal3 is planned exactly as lognormal"), out);
+        // the same table: only the note differs
+        assertEquals(two, out.replaceAll("note: lognormal3 is planned exactly as lognormal[^\n]*\n", ""));
+    }
+}
