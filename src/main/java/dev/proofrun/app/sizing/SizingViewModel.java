@@ -17,6 +17,7 @@ import dev.proofrun.design.DesignTable;
 import dev.proofrun.design.OcPoint;
 import dev.proofrun.design.Requirement;
 import dev.proofrun.design.SharedDesign;
+import dev.proofrun.design.Stages;
 import dev.proofrun.stats.SigmaMethod;
 import dev.proofrun.text.UserException;
 import java.util.List;
@@ -24,6 +25,8 @@ import java.util.Locale;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import javafx.beans.binding.Bindings;
+import javafx.beans.binding.BooleanBinding;
+import javafx.beans.binding.IntegerBinding;
 import javafx.beans.binding.ObjectBinding;
 import javafx.beans.binding.StringBinding;
 import javafx.beans.property.BooleanProperty;
@@ -45,6 +48,10 @@ import javafx.collections.ObservableList;
  *
  * <p>The view gets display rows ({@link SizingRow}), column definitions ({@link SizingColumn}) and the charts'
  * lines ({@link SizingCurves}) from here, all naming one design: the plan's k × n.
+ *
+ * <p>With more than one look chosen, the plan's design is the looks' ({@link SizingStages}, a worker of its own):
+ * the single-stage row chosen gives n (and k, when kept), the looks give the most subgroups K; until they are
+ * computed there is no design.
  */
 public final class SizingViewModel extends StepViewModel {
 
@@ -68,14 +75,28 @@ public final class SizingViewModel extends StepViewModel {
     private final StringBinding cost;
     private final ObjectBinding<Optional<Design>> designBinding;
     private final Background background;
+    private final SizingStages staged;
+    private final LooksChoice looksChoice;
+    private final IntegerBinding chosenSize;
+    private final ObjectBinding<SizingStages.Asking> stagedAsking;
+    private final StringBinding stagedText;
+    private final ObjectProperty<List<Line>> readingsLines = new SimpleObjectProperty<>(this, "readingsLines", List.of());
     private Background.Job running;
     private long generation;
     private SizingCost.KeptPower keptPower;
     private SizingCurves.PlanCurve planCurve;
 
     public SizingViewModel(StudyDraft draft, GoalViewModel goal, Background background) {
+        this(draft, goal, background, background);
+    }
+
+    /** @param looks the worker of the planned looks (they cost seconds; the design table should not wait) */
+    public SizingViewModel(StudyDraft draft, GoalViewModel goal, Background background, Background looks) {
         this.draft = draft;
         this.background = background;
+        this.staged = new SizingStages(looks);
+        this.looksChoice = new LooksChoice(draft);
+        chosenSize = Bindings.createIntegerBinding(() -> chosen.get() == null ? 0 : chosen.get().subgroupSize(), chosen);
         this.goal = goal;
         this.all = new AllCharacteristics(background);
         request = Bindings.createObjectBinding(this::buildRequest, goal.requirementBinding(), goal.expectationBinding(),
@@ -85,7 +106,15 @@ public final class SizingViewModel extends StepViewModel {
         cost = Bindings.createStringBinding(() -> SizingCost.describe(chosen.get(), table.get(), chosenTable.get(),
                 keptSubgroups(), keptPower, all.shared().get(), all.driver(), focusName()), chosen, table, chosenTable,
                 draft.field(DraftField.CHOSEN_SUBGROUPS), all.shared());
-        designBinding = Bindings.createObjectBinding(this::design, chosen, draft.field(DraftField.CHOSEN_SUBGROUPS));
+        stagedAsking = Bindings.createObjectBinding(this::buildStagedAsking, request, chosen,
+                draft.field(DraftField.CHOSEN_SUBGROUPS), draft.field(DraftField.STAGES), draft.field(DraftField.SPENDING),
+                draft.characteristics(), goal.requirementBinding(), goal.expectationBinding(), goal.focusBinding());
+        // identical requests are dropped before anything is cancelled (SizingStages.ask)
+        stagedAsking.addListener((obs, was, now) -> staged.ask(now));
+        stagedText = Bindings.createStringBinding(() -> staged.answerFor(stagedAsking.get().request())
+                .map(a -> StagedLines.text(a, focusName())).orElse(""), staged.answer(), stagedAsking);
+        designBinding = Bindings.createObjectBinding(this::design, chosen, draft.field(DraftField.CHOSEN_SUBGROUPS),
+                draft.field(DraftField.STAGES), staged.answer(), stagedAsking);
         designBinding.addListener((obs, was, now) -> {
             updateAll();
             drawCurves();
@@ -107,8 +136,11 @@ public final class SizingViewModel extends StepViewModel {
             if (busy.get() || chosen.get() == null) {
                 return AppMessage.SIZING_BUSY.format();
             }
-            return "";
-        }, goal.requirementBinding(), goal.expectationBinding(), refusal, busy, chosen));
+            if (looks() > 1 && !staged.refusal().get().isEmpty()) {
+                return staged.refusal().get();
+            }
+            return looks() > 1 && design().isEmpty() ? dev.proofrun.design.StagedMessage.STAGED_BUSY.format() : "";
+        }, goal.requirementBinding(), goal.expectationBinding(), refusal, busy, chosen, staged.refusal(), designBinding));
     }
 
     @Override
@@ -126,6 +158,7 @@ public final class SizingViewModel extends StepViewModel {
         if (table.get() == null && !busy.get()) {
             recompute();
         }
+        staged.ask(stagedAsking.get());
     }
 
     public StringProperty power() {
@@ -211,6 +244,47 @@ public final class SizingViewModel extends StepViewModel {
         return ocLines;
     }
 
+    /** The choice of looks and spending. */
+    public LooksChoice looksChoice() {
+        return looksChoice;
+    }
+
+    /** The looks and figures of the staged design, one a line; empty with one look or before they are computed. */
+    public StringBinding stagedTextBinding() {
+        return stagedText;
+    }
+
+    /** The expected-readings chart's lines; none with one look. */
+    public ObjectProperty<List<Line>> readingsLinesProperty() {
+        return readingsLines;
+    }
+
+    /** True while the planned looks are computed. */
+    public BooleanProperty stagedBusyProperty() {
+        return staged.busy();
+    }
+
+    /** The looks the plan carries: with more than one look chosen and computed for the inputs as they are now. */
+    public Optional<Stages> plannedStages() {
+        return looks() < 2 ? Optional.empty()
+                : staged.answerFor(stagedAsking.get().request()).map(a -> a.planned().stages());
+    }
+
+    /** The looks chosen, 1 to 4. */
+    public int looks() {
+        return looksChoice.looks();
+    }
+
+    /** The subgroup size of the chosen row, 0 without one (the table's selection follows it). */
+    public IntegerBinding chosenSizeBinding() {
+        return chosenSize;
+    }
+
+    /** True when the one design for all characteristics is worked out (its button is enabled). */
+    public BooleanBinding sharedReadyBinding() {
+        return all.shared().isNotNull();
+    }
+
     /** The ids of the characteristics, for the chooser of the one the table sizes. */
     public ObservableList<String> characteristicIds() {
         return ids;
@@ -230,8 +304,20 @@ public final class SizingViewModel extends StepViewModel {
         return request.get();
     }
 
-    /** The chosen design as the plan keeps it: the chosen row, or its size with the k kept (plan file, shared design). */
+    /**
+     * The plan's design: with one look, the chosen row, or its size with the k kept (plan file, shared design);
+     * with more, the looks' n and K once computed, empty until then.
+     */
     public Optional<Design> design() {
+        Optional<Design> single = singleStageDesign();
+        if (looks() < 2 || single.isEmpty()) {
+            return single;
+        }
+        return staged.answerFor(stagedAsking.get().request()).map(a -> a.planned().design());
+    }
+
+    /** The chosen single-stage design: the chosen row, or its size with the k kept (plan file, shared design). */
+    public Optional<Design> singleStageDesign() {
         DesignRow r = chosen.get();
         Optional<DesignRequest> q = request.get();
         if (r == null || q.isEmpty()) {
@@ -362,17 +448,34 @@ public final class SizingViewModel extends StepViewModel {
         drawCurves();
     }
 
-    private void updateAll() {
+    private double wantedPower() {
         OptionalDouble p = FieldNumbers.parse(draft.text(DraftField.POWER));
-        all.update(draft.characteristics(), goal.requirementBinding().get(), goal::expectationFor,
-                p.isPresent() ? p.getAsDouble() : DesignRequest.DEFAULT_POWER, designBinding.get());
+        return p.isPresent() ? p.getAsDouble() : DesignRequest.DEFAULT_POWER;
+    }
+
+    private void updateAll() {
+        all.update(draft.characteristics(), goal.requirementBinding().get(), goal::expectationFor, wantedPower(),
+                singleStageDesign());
+    }
+
+    private SizingStages.Asking buildStagedAsking() {
+        if (looks() < 2) {
+            return SizingStages.Asking.NONE;
+        }
+        return SizingStages.asking(looks(), looksChoice.spending(), singleStageDesign(), keptSubgroups().isPresent(),
+                AllCharacteristics.ask(draft.characteristics(), goal.requirementBinding().get(), goal::expectationFor,
+                        wantedPower()), focusName());
     }
 
     private void drawCurves() {
-        Optional<Design> d = design();
+        Optional<Design> d = singleStageDesign();
         List<OcPoint> oc = SizingCurves.ocOf(d, chosenTable.get(), planCurve);
         powerLines.set(SizingCurves.power(chosenTable.get(), d, request.get()));
-        ocLines.set(SizingCurves.oc(oc, d, request.get()));
+        List<Line> lines = new java.util.ArrayList<>(SizingCurves.oc(oc, d, request.get()));
+        Optional<SizingStages.Answer> a = looks() > 1 ? staged.answerFor(stagedAsking.get().request()) : Optional.empty();
+        a.ifPresent(answer -> lines.add(lines.isEmpty() ? 0 : 1, StagedLines.oc(answer)));
+        ocLines.set(lines);
+        readingsLines.set(a.map(StagedLines::readings).orElse(List.of()));
     }
 
     private void refreshIds() {
