@@ -110,7 +110,7 @@ public final class Wizard {
     /** True while a step computes in the background, a plan file is read or written, or a report is made. */
     public boolean busy() {
         return start.openingProperty().get() || goal.pilotLoadingProperty().get()
-                || sizing.busyProperty().get() || sizing.stagedBusyProperty().get() || timing.busyProperty().get() || handout.busyProperty().get()
+                || sizing.busyProperty().get() || sizing.staged().busy().get() || timing.busyProperty().get() || handout.busyProperty().get()
                 || handout.exportingProperty().get()
                 || handout.issuingProperty().get() || grading.busyProperty().get() || grading.reportingProperty().get();
     }

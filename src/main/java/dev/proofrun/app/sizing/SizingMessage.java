@@ -6,6 +6,8 @@ import dev.proofrun.text.MessageKey;
 public enum SizingMessage implements MessageKey {
     /** The design the plan will use, as both charts label it. */
     PLAN_DESIGN("plan: %d × %d"),
+    /** The single-stage design the planned looks are compared with, as the charts label it. */
+    SINGLE_DESIGN("single stage: %d × %d"),
     /** The chooser's label. */
     SIZED_FOR("Sized for"),
     /** The table is for one characteristic of several. */

@@ -1,6 +1,7 @@
 package dev.proofrun.app.sizing;
 
 import dev.proofrun.app.AppMessage;
+import dev.proofrun.app.chart.CurvePlot.Line;
 import dev.proofrun.app.session.Background;
 import dev.proofrun.design.Design;
 import dev.proofrun.design.DesignRequest;
@@ -11,6 +12,11 @@ import dev.proofrun.plan.PlannedStages;
 import java.util.List;
 import java.util.Objects;
 import java.util.Optional;
+import java.util.function.Supplier;
+import javafx.beans.Observable;
+import javafx.beans.binding.Bindings;
+import javafx.beans.binding.ObjectBinding;
+import javafx.beans.binding.StringBinding;
 import javafx.beans.property.BooleanProperty;
 import javafx.beans.property.ObjectProperty;
 import javafx.beans.property.SimpleBooleanProperty;
@@ -29,19 +35,20 @@ import javafx.beans.property.StringProperty;
  * dropped <em>before</em> anything is cancelled: applying an answer that changes nothing the request rests on
  * cannot start the work again.
  */
-final class SizingStages {
+public final class SizingStages {
 
     /**
      * Everything one computation rests on; equal requests give equal answers.
      *
      * @param each     each characteristic's design request (its power included), in the plan's order
      * @param focus    the index in {@code each} of the characteristic the step shows
+     * @param focusId  its id
      * @param single   the single-stage design chosen on the step (its n; its k when given)
      * @param kGiven   whether k is the plan's own (kept from a plan file), as {@code plan new --subgroups}
      * @param stages   S, 2 to 4
      * @param spending how α is spent across the looks
      */
-    record Request(List<DesignRequest> each, int focus, Design single, boolean kGiven, int stages, Spending spending) {
+    record Request(List<DesignRequest> each, int focus, String focusId, Design single, boolean kGiven, int stages, Spending spending) {
 
         Request {
             each = List.copyOf(each);
@@ -97,13 +104,18 @@ final class SizingStages {
         if (all.requests().isEmpty()) {
             return Asking.NONE;
         }
-        return new Asking(Optional.of(new Request(all.requests(), focus, single.get(), kGiven, stages, spending)), "");
+        return new Asking(Optional.of(new Request(all.requests(), focus, all.ids().get(focus), single.get(), kGiven,
+                stages, spending)), "");
     }
 
     /** True indices at which the expected readings are drawn. */
     static final int CURVE_POINTS = 9;
 
     private final Background background;
+    private final LooksChoice choice;
+    private final ObjectBinding<Asking> asking;
+    private final StringBinding text;
+    private final ObjectBinding<List<Line>> readings;
     private final ObjectProperty<Answer> answer = new SimpleObjectProperty<>(this, "answer");
     private final BooleanProperty busy = new SimpleBooleanProperty(this, "busy", false);
     private final StringProperty refusal = new SimpleStringProperty(this, "refusal", "");
@@ -111,8 +123,41 @@ final class SizingStages {
     private Background.Job running;
     private long generation;
 
-    SizingStages(Background background) {
+    /**
+     * @param choice       the looks chosen
+     * @param build        the request for the step's inputs as they are now ({@link #asking(int, Spending, Optional,
+     *                     boolean, AllCharacteristics.Asked, String)})
+     * @param dependencies what the request rests on
+     */
+    SizingStages(Background background, LooksChoice choice, Supplier<Asking> build, Observable... dependencies) {
         this.background = background;
+        this.choice = choice;
+        asking = Bindings.createObjectBinding(build::get, dependencies);
+        // a request equal to the last is dropped before anything is cancelled (ask)
+        asking.addListener((obs, was, now) -> ask(now));
+        text = Bindings.createStringBinding(() -> current().map(StagedLines::text).orElse(""), answer, asking);
+        readings = Bindings.createObjectBinding(() -> current().map(StagedLines::readings).orElse(List.of()), answer,
+                asking);
+    }
+
+    /** The choice of looks and spending. */
+    public LooksChoice choice() {
+        return choice;
+    }
+
+    /** The looks and figures of the characteristic in focus, one a line; empty with one look or before they are computed. */
+    public StringBinding text() {
+        return text;
+    }
+
+    /** The expected-readings chart's lines; none with one look or before the looks are computed. */
+    public ObjectBinding<List<Line>> readings() {
+        return readings;
+    }
+
+    /** True while the looks are computed. */
+    public BooleanProperty busy() {
+        return busy;
     }
 
     /** The answer for the request last asked; null while it is computed, or without a request. */
@@ -120,8 +165,19 @@ final class SizingStages {
         return answer;
     }
 
-    BooleanProperty busy() {
-        return busy;
+    /** The request for the inputs as they are now. */
+    ObjectBinding<Asking> asking() {
+        return asking;
+    }
+
+    /** The looks computed for the inputs as they are now, if any. */
+    Optional<Answer> current() {
+        return answerFor(asking.get().request());
+    }
+
+    /** Asks for the looks of the inputs as they are now (nothing new when they are already asked). */
+    void askAgain() {
+        ask(asking.get());
     }
 
     /** Why no looks could be planned for the request last asked; empty otherwise. */
@@ -139,7 +195,7 @@ final class SizingStages {
      * Asks for the looks of this request (empty: none wanted). The same request again changes nothing: the job
      * under way, or its answer, stands. A new one cancels the older job and drops its answer.
      */
-    void ask(Asking asking) {
+    private void ask(Asking asking) {
         Request now = asking.request().orElse(null);
         String refused = asking.refused();
         if (Objects.equals(now, asked) && refused.equals(refusal.get())) {

@@ -70,7 +70,7 @@ public final class SizingView implements StepView {
         focusLabel.setLabelFor(focus);
         form.addRow(0, focusLabel, focus);
         form.addRow(1, powerLabel, power, spinner);
-        LooksChoice choice = vm.looksChoice();
+        LooksChoice choice = vm.staged().choice();
         ComboBox<String> looks = chooser("looks", choice.looksChoices(), choice.looksIndex().get(), choice::chooseLooks);
         choice.looksIndex().addListener((obs, was, now) -> looks.getSelectionModel().select(now.intValue()));
         ComboBox<String> spending = chooser("spending", choice.spendingChoices(), choice.spendingIndex().get(),
@@ -80,7 +80,7 @@ public final class SizingView implements StepView {
         ProgressIndicator looksBusy = new ProgressIndicator();
         looksBusy.setId("looks-busy");
         looksBusy.setMaxSize(FontScale.of(1.8), FontScale.of(1.8));
-        looksBusy.visibleProperty().bind(vm.stagedBusyProperty());
+        looksBusy.visibleProperty().bind(vm.staged().busy());
         Label looksLabel = new Label(SizingMessage.LOOKS_LABEL.format());
         looksLabel.setLabelFor(looks);
         Label spendingLabel = new Label(SizingMessage.SPENDING_LABEL.format());
@@ -155,17 +155,17 @@ public final class SizingView implements StepView {
         Label warnings = note("design-warnings", "pr-note");
         warnings.textProperty().bind(vm.warningsBinding());
         Label stagedText = note("looks-text", null);
-        stagedText.textProperty().bind(vm.stagedTextBinding());
+        stagedText.textProperty().bind(vm.staged().text());
         showWhenSet(stagedText);
 
         powerChart.show(vm.powerLinesProperty().get());
         ocChart.show(vm.ocLinesProperty().get());
         vm.powerLinesProperty().addListener((obs, was, now) -> powerChart.show(now));
         vm.ocLinesProperty().addListener((obs, was, now) -> ocChart.show(now));
-        readingsChart.show(vm.readingsLinesProperty().get());
-        vm.readingsLinesProperty().addListener((obs, was, now) -> readingsChart.show(now));
+        readingsChart.show(vm.staged().readings().get());
+        vm.staged().readings().addListener((obs, was, now) -> readingsChart.show(now));
         // the expected readings beside the operating characteristic, only when looks are planned
-        readingsChart.visibleProperty().bind(vm.readingsLinesProperty().isNotEqualTo(List.of()));
+        readingsChart.visibleProperty().bind(vm.staged().readings().isNotEqualTo(List.of()));
         readingsChart.managedProperty().bind(readingsChart.visibleProperty());
         HBox charts = new HBox(12, powerChart, ocChart, readingsChart);
         HBox.setHgrow(powerChart, Priority.ALWAYS);

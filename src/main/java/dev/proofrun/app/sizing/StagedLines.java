@@ -22,7 +22,7 @@ final class StagedLines {
     }
 
     /** The looks and figures of the characteristic in focus, one a line. */
-    static String text(SizingStages.Answer a, String focusId) {
+    static String text(SizingStages.Answer a) {
         StagedDesign d = a.focusDesign();
         DesignRequest r = a.request().each().get(a.request().focus());
         String index = r.requirement().index().symbol();
@@ -47,7 +47,7 @@ final class StagedLines {
         lines.add(d.reason());
         if (a.request().each().size() > 1) {
             lines.add(StagedMessage.STAGED_SHARED_LOOKS.format(a.request().each().size(),
-                    a.planned().design().subgroups(), focusId));
+                    a.planned().design().subgroups(), a.request().focusId()));
         }
         return String.join("\n", lines);
     }

@@ -79,8 +79,8 @@ class SizingStagedTest {
     @Test
     void theLooksAreThoseOfPlanNewStagesForTheSameInputs() {
         draft.characteristics().add(bore());
-        vm.looksChoice().chooseLooks(1); // two looks
-        vm.looksChoice().chooseSpending(1); // evenly: Pocock
+        vm.staged().choice().chooseLooks(1); // two looks
+        vm.staged().choice().chooseSpending(1); // evenly: Pocock
         assertTrue(vm.design().isEmpty(), "no design until the looks are computed");
         assertFalse(vm.completeBinding().get());
         looks.runAll();
@@ -97,15 +97,15 @@ class SizingStagedTest {
         StudyPlan plan = PlanFiles.read(file);
         assertEquals(plan.design(), vm.design().orElseThrow(), "K and n as plan new chooses them");
         assertEquals(plan.stages(), vm.plannedStages(), "the same looks, confidences and futility boundaries");
-        assertTrue(vm.stagedTextBinding().get().startsWith("Look 1: "), vm.stagedTextBinding().get());
-        assertTrue(vm.stagedTextBinding().get().contains("Single stage"), vm.stagedTextBinding().get());
-        assertEquals(4, vm.readingsLinesProperty().get().size(), "staged, single stage, c0, c1");
+        assertTrue(vm.staged().text().get().startsWith("Look 1: "), vm.staged().text().get());
+        assertTrue(vm.staged().text().get().contains("Single stage"), vm.staged().text().get());
+        assertEquals(4, vm.staged().readings().get().size(), "staged, single stage, c0, c1");
     }
 
     @Test
     void anIdenticalRequestIsDroppedBeforeAnythingIsCancelledAndAnAnswerStartsNoNewWork() {
         draft.characteristics().add(bore());
-        vm.looksChoice().chooseLooks(1);
+        vm.staged().choice().chooseLooks(1);
         assertEquals(1, looks.submitted);
         // the same request again: other text for the same power, an edit the looks do not rest on
         draft.field(DraftField.POWER).set("0.9");
@@ -122,9 +122,9 @@ class SizingStagedTest {
         assertEquals(1, looks.submitted, "an answer starts no new work");
         assertEquals(0, looks.cancelled);
 
-        vm.looksChoice().chooseLooks(2); // three looks: a new request, the finished job needs no cancelling
+        vm.staged().choice().chooseLooks(2); // three looks: a new request, the finished job needs no cancelling
         assertEquals(2, looks.submitted);
-        vm.looksChoice().chooseSpending(1); // and another before it finishes: that one is cancelled
+        vm.staged().choice().chooseSpending(1); // and another before it finishes: that one is cancelled
         assertEquals(3, looks.submitted);
         assertEquals(1, looks.cancelled);
         looks.runAll();
@@ -138,13 +138,13 @@ class SizingStagedTest {
         assertEquals(0, looks.submitted);
         assertEquals(Optional.empty(), vm.plannedStages());
         assertEquals(vm.singleStageDesign(), vm.design());
-        assertEquals("", vm.stagedTextBinding().get());
+        assertEquals("", vm.staged().text().get());
     }
 
     @Test
     void aReopenedDraftRestoresTheChoiceAndItsLooks() {
         draft.characteristics().add(bore());
-        vm.looksChoice().chooseLooks(1);
+        vm.staged().choice().chooseLooks(1);
         looks.runAll();
         Optional<Stages> planned = vm.plannedStages();
         assertTrue(planned.isPresent());
@@ -155,8 +155,8 @@ class SizingStagedTest {
         SizingViewModel reopened = new SizingViewModel(again, goalAgain, Background.inline());
         again.restore(saved, false);
         assertEquals("2", again.text(DraftField.STAGES));
-        assertEquals(1, reopened.looksChoice().looksIndex().get());
-        assertEquals(0, reopened.looksChoice().spendingIndex().get());
+        assertEquals(1, reopened.staged().choice().looksIndex().get());
+        assertEquals(0, reopened.staged().choice().spendingIndex().get());
         assertEquals(planned, reopened.plannedStages());
         assertEquals(vm.design(), reopened.design());
     }
@@ -166,7 +166,7 @@ class SizingStagedTest {
         CharacteristicDraft row = bore();
         row.cell(dev.proofrun.app.session.CharacteristicField.SHAPE).set("lognormal");
         draft.characteristics().add(row);
-        vm.looksChoice().chooseLooks(1);
+        vm.staged().choice().chooseLooks(1);
         assertEquals(0, looks.submitted);
         assertTrue(vm.missingProperty().get().contains("D1 is planned lognormal"), vm.missingProperty().get());
     }
