@@ -32,9 +32,11 @@ public enum SizingMessage implements MessageKey {
     SPEND_EVEN("about evenly across the looks (Pocock)"),
     LOOK_GOES_ON("Look %d: %d subgroups (%d readings); demonstrated if %s ≥ %.3f (confidence %.3f %%); otherwise on to"
             + " the next look."),
+    LOOK_SHARED("Look %d: %d subgroups (%d readings); each characteristic's bound at %.3f %% confidence decides;"
+            + " otherwise on to the next look."),
     STAGES_NORMAL_ONLY("Planned looks use normal-theory bounds: %s is planned %s; plan a single stage."),
     STAGES_COMPLETE_FIRST("Planned looks need every characteristic complete: %s."),
-    READINGS_TITLE("Readings expected against the true index"),
+    READINGS_TITLE("Readings expected"),
     STAGED_CURVE("staged, %d looks"),
     SINGLE_CURVE("single stage, %d readings"),
     STAGED_OC("staged: %d looks, up to %d × %d"),

@@ -135,7 +135,8 @@ public final class SizingStages {
         asking = Bindings.createObjectBinding(build::get, dependencies);
         // a request equal to the last is dropped before anything is cancelled (ask)
         asking.addListener((obs, was, now) -> ask(now));
-        text = Bindings.createStringBinding(() -> current().map(StagedLines::text).orElse(""), answer, asking);
+        text = Bindings.createStringBinding(() -> current().map(StagedLines::text).orElse(refusal.get()), answer,
+                asking, refusal);
         readings = Bindings.createObjectBinding(() -> current().map(StagedLines::readings).orElse(List.of()), answer,
                 asking);
     }

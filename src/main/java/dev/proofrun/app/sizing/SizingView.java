@@ -33,9 +33,9 @@ public final class SizingView implements StepView {
     private final VBox root = new VBox(12);
     private final TableView<SizingRow> table = new TableView<>();
     private final CurvePlot powerChart =
-            new CurvePlot("power-chart", "Power against the number of subgroups", "subgroups k", "power");
+            new CurvePlot("power-chart", "Power against subgroups", "subgroups k", "power");
     private final CurvePlot ocChart =
-            new CurvePlot("oc-chart", "Chance to demonstrate against the true index", "true index", "probability");
+            new CurvePlot("oc-chart", "Chance to demonstrate", "true index", "probability");
     private final CurvePlot readingsChart =
             CurvePlot.spanning("readings-chart", SizingMessage.READINGS_TITLE.format(), "true index", "readings");
 

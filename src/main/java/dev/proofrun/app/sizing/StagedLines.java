@@ -3,6 +3,7 @@ package dev.proofrun.app.sizing;
 import dev.proofrun.app.chart.CurvePlot.Line;
 import dev.proofrun.app.chart.CurvePlot.Pen;
 import dev.proofrun.design.DesignRequest;
+import dev.proofrun.design.Look;
 import dev.proofrun.design.StagedDesign;
 import dev.proofrun.design.StagedLook;
 import dev.proofrun.design.StagedMessage;
@@ -28,10 +29,17 @@ final class StagedLines {
         String index = r.requirement().index().symbol();
         List<String> lines = new ArrayList<>();
         List<StagedLook> looks = d.looks();
+        boolean several = a.request().each().size() > 1;
         for (int j = 0; j < looks.size(); j++) {
             StagedLook l = looks.get(j);
             double percent = 100 * l.confidence();
-            if (j == looks.size() - 1) {
+            if (several) {
+                // the plan's looks: the strictest confidence of all, no futility stop; the focus's own boundary
+                // on the index scale belongs to its own confidence, so none is shown
+                Look planned = a.planned().stages().looks().get(j);
+                lines.add(SizingMessage.LOOK_SHARED.format(j + 1, planned.subgroups(), planned.subgroups() * d.subgroupSize(),
+                        100 * planned.confidence()));
+            } else if (j == looks.size() - 1) {
                 lines.add(StagedMessage.STAGED_LAST_LOOK.format(j + 1, l.subgroups(), l.readings(), index, l.efficacy(),
                         percent));
             } else if (Double.isNaN(l.futility())) {
@@ -45,7 +53,7 @@ final class StagedLines {
         lines.add(StagedMessage.STAGED_FIGURES.format(d.power(), d.expectedReadingsAtTarget(),
                 d.expectedReadingsAtExpected(), d.maxReadings(), d.singleStage().readings()));
         lines.add(d.reason());
-        if (a.request().each().size() > 1) {
+        if (several) {
             lines.add(StagedMessage.STAGED_SHARED_LOOKS.format(a.request().each().size(),
                     a.planned().design().subgroups(), a.request().focusId()));
         }
