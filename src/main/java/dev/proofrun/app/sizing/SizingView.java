@@ -37,7 +37,7 @@ public final class SizingView implements StepView {
     private final CurvePlot ocChart =
             new CurvePlot("oc-chart", "Chance to demonstrate", "true index", "probability");
     private final CurvePlot readingsChart =
-            CurvePlot.spanning("readings-chart", SizingMessage.READINGS_TITLE.format(), "true index", "readings");
+            CurvePlot.spanning("expected-readings-chart", SizingMessage.READINGS_TITLE.format(), "true index", "readings");
 
     public SizingView(SizingViewModel vm) {
         TextField power = new TextField();

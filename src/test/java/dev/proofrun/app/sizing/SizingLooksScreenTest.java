@@ -68,7 +68,7 @@ class SizingLooksScreenTest {
         settleOn(SIZING, 90);
         ComboBox<?> looks = robot.lookup("#looks").queryAs(ComboBox.class);
         Label text = robot.lookup("#looks-text").queryAs(Label.class);
-        CurvePlot readings = robot.lookup("#readings-chart").queryAs(CurvePlot.class);
+        CurvePlot readings = robot.lookup("#expected-readings-chart").queryAs(CurvePlot.class);
         assertFalse(readings.isVisible(), "no readings chart for a single stage");
         robot.interact(() -> looks.getSelectionModel().select(1));
         settleOn(SIZING, 90);
