@@ -121,7 +121,7 @@ public final class PlanNewCommand implements Callable<Integer> {
             description = "Planned looks: 1 (default, one grade at the end) to 4; the study may stop at a look when the"
                     + " answer is clear.")
     int stages;
-    @Option(names = "--spending", paramLabel = "obrien-fleming|pocock",
+    @Option(names = "--spending", paramLabel = "obrien-fleming|pocock|kim-demets-2",
             description = "How a staged plan spends its false-pass risk across the looks (default obrien-fleming).")
     String spending;
 

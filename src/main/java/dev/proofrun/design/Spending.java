@@ -8,17 +8,20 @@ import org.apache.commons.statistics.distribution.NormalDistribution;
 
 /**
  * How a staged study spends its false-pass risk α across its planned looks: the cumulative α allowed by the
- * information fraction t (readings so far over the most the plan collects). Both are the Lan–DeMets spending
- * functions (Lan &amp; DeMets 1983, Biometrika 70:659–663), one-sided:
+ * information fraction t (readings so far over the most the plan collects), one-sided:
  * <ul>
- * <li>{@link #OBRIEN_FLEMING}: α(t) = 2 − 2Φ(z<sub>1−α/2</sub>/√t), which spends almost nothing early;</li>
- * <li>{@link #POCOCK}: α(t) = α·ln(1 + (e − 1)t), which spends evenly.</li>
+ * <li>{@link #OBRIEN_FLEMING}: α(t) = 2 − 2Φ(z<sub>1−α/2</sub>/√t), which spends almost nothing early (Lan &amp;
+ * DeMets 1983, Biometrika 70:659–663);</li>
+ * <li>{@link #POCOCK}: α(t) = α·ln(1 + (e − 1)t), which spends evenly (Lan &amp; DeMets 1983);</li>
+ * <li>{@link #KIM_DEMETS_2}: α(t) = α·t², the power family α·t<sup>ρ</sup> of Kim &amp; DeMets (1987, Biometrika
+ * 74:149–154) at ρ = 2, half-way between ρ = 1 (close to Pocock) and ρ = 3 (close to O'Brien–Fleming).</li>
  * </ul>
- * Both give α(1) = α.
+ * All give α(1) = α.
  */
 public enum Spending {
     OBRIEN_FLEMING("obrien-fleming"),
-    POCOCK("pocock");
+    POCOCK("pocock"),
+    KIM_DEMETS_2("kim-demets-2");
 
     private static final NormalDistribution STANDARD = NormalDistribution.of(0, 1);
 
@@ -57,6 +60,7 @@ public enum Spending {
             case OBRIEN_FLEMING -> 2 - 2 * STANDARD.cumulativeProbability(
                     STANDARD.inverseCumulativeProbability(1 - alpha / 2) / Math.sqrt(t));
             case POCOCK -> alpha * Math.log(1 + (Math.E - 1) * t);
+            case KIM_DEMETS_2 -> alpha * t * t;
         };
     }
 }

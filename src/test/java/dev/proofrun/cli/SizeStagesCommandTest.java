@@ -55,6 +55,32 @@ class SizeStagesCommandTest {
         assertTrue(staged.get("power").asDouble() >= 0.9);
     }
 
+    /**
+     * Issue 14's goal on the demo's first characteristic (D1: Cpk ≥ 1.33 at 95 %, expected Cpk 1.67 with Cp 1.8,
+     * n = 5): three looks with Kim–DeMets ρ = 2 spending are recommended and save at least 20 % of the single stage's
+     * expected readings at c₁ for at most 20 % more at most (figures in docs/decisions/staged-studies-design.md).
+     */
+    @Test
+    void kimDemetsLooksSaveAFifthOnTheDemosFirstCharacteristic() throws Exception {
+        Run r = run("size", "--target", "1.33", "--expected", "1.67", "--expected-cp", "1.8", "--subgroup-size", "5",
+                "--stages", "3", "--spending", "kim-demets-2", "--json");
+        assertEquals(0, r.code(), r.err());
+        JsonNode staged = new ObjectMapper().readTree(r.out()).get("staged");
+        assertEquals("kim-demets-2", staged.get("spending").asText());
+        assertTrue(staged.get("saving").asDouble() >= 0.20, staged.toString());
+        assertTrue(staged.get("extra").asDouble() <= 0.20, staged.toString());
+        assertTrue(staged.get("recommended").asBoolean(), staged.toString());
+        assertTrue(staged.get("power").asDouble() >= 0.9, staged.toString());
+    }
+
+    @Test
+    void anUnknownSpendingNamesTheKnownOnes() {
+        Run r = run("size", "--target", "1.33", "--expected", "1.67", "--stages", "2", "--spending", "kim-demets-3");
+        assertEquals(2, r.code());
+        assertTrue(r.err().contains("'kim-demets-3'") && r.err().contains("obrien-fleming, pocock, kim-demets-2"),
+                r.err());
+    }
+
     @Test
     void badStagesAreOneLineAndExitTwo() {
         String[][] cases = {

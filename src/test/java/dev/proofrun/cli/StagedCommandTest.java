@@ -88,6 +88,16 @@ class StagedCommandTest {
     }
 
     @Test
+    void planNewKeepsTheKimDemetsToken() throws Exception {
+        Path p = dir.resolve("kim-demets.json");
+        assertEquals(0, newPlan(p, "--stages", "2", "--spending", "kim-demets-2"), err.toString());
+        assertTrue(Files.readString(p).contains("\"spending\": \"kim-demets-2\""));
+        assertEquals(Spending.KIM_DEMETS_2, PlanFiles.read(p).stages().orElseThrow().spending());
+        assertEquals(0, run("plan", "show", p.toString()));
+        assertTrue(out.toString().contains("stages   2 looks, kim-demets-2 spending"), out.toString());
+    }
+
+    @Test
     void oneStageWritesTheSamePlanAsBefore() throws Exception {
         Path a = dir.resolve("a.json");
         Path b = dir.resolve("b.json");

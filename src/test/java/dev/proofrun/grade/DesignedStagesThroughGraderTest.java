@@ -37,6 +37,20 @@ class DesignedStagesThroughGraderTest {
     }
 
     @Test
+    void threeKimDemetsLooksOfFiveKeepTheRiskAndThePower() {
+        check(Spending.KIM_DEMETS_2, 3, 5, 600, 300, 71L);
+    }
+
+    @Test
+    @Tag("long")
+    void kimDemetsLooksKeepTheRiskAndThePower() {
+        check(Spending.KIM_DEMETS_2, 2, 5, 2000, 800, 72L);
+        check(Spending.KIM_DEMETS_2, 3, 5, 2000, 800, 73L);
+        check(Spending.KIM_DEMETS_2, 2, 1, 2000, 800, 74L);
+        check(Spending.KIM_DEMETS_2, 3, 1, 2000, 800, 75L);
+    }
+
+    @Test
     @Tag("long")
     void everyDesignKeepsTheRiskAndThePower() {
         check(Spending.POCOCK, 2, 5, 2000, 800, 62L);
