@@ -47,6 +47,7 @@ public final class LooksChoice {
             choices.add(switch (f) {
                 case OBRIEN_FLEMING -> SizingMessage.SPEND_LATE.format();
                 case POCOCK -> SizingMessage.SPEND_EVEN.format();
+                case KIM_DEMETS_2 -> SizingMessage.SPEND_GROWING.format();
             });
         }
         return choices;

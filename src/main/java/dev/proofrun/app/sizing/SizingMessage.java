@@ -30,6 +30,7 @@ public enum SizingMessage implements MessageKey {
     SPENDING_LABEL("How the false-pass risk is shared across the looks"),
     SPEND_LATE("little at the early looks, most at the last (O'Brien–Fleming)"),
     SPEND_EVEN("about evenly across the looks (Pocock)"),
+    SPEND_GROWING("growing with the square of the share of readings collected (Kim–DeMets, ρ = 2)"),
     LOOK_GOES_ON("Look %d: %d subgroups (%d readings); demonstrated if %s ≥ %.3f (confidence %.3f %%); otherwise on to"
             + " the next look."),
     LOOK_SHARED("Look %d: %d subgroups (%d readings); each characteristic's bound at %.3f %% confidence decides;"

@@ -133,6 +133,21 @@ class SizingStagedTest {
     }
 
     @Test
+    void everySpendingIsOfferedInWordsAndKeptAsItsToken() {
+        LooksChoice choice = vm.staged().choice();
+        assertEquals(dev.proofrun.design.Spending.values().length, choice.spendingChoices().size());
+        assertEquals(dev.proofrun.design.Stages.MOST, choice.looksChoices().size(), "1 to 4 looks");
+        for (dev.proofrun.design.Spending f : dev.proofrun.design.Spending.values()) {
+            choice.chooseSpending(f.ordinal());
+            assertEquals(f.token(), draft.text(DraftField.SPENDING));
+            assertEquals(f.ordinal(), choice.spendingIndex().get());
+        }
+        draft.field(DraftField.STAGES).set("7"); // typed into a saved draft by hand: one look
+        assertEquals(0, choice.looksIndex().get());
+        assertEquals(0, looks.submitted);
+    }
+
+    @Test
     void oneLookIsTheSingleStageDesignWithoutWork() {
         draft.characteristics().add(bore());
         assertEquals(0, looks.submitted);
