@@ -28,9 +28,9 @@ public enum SizingMessage implements MessageKey {
     LOOKS_MANY("%d: grade at %d planned points"),
     /** The spending chooser's label and choices (the plan file keeps the spending function's token). */
     SPENDING_LABEL("How the false-pass risk is shared across the looks"),
-    SPEND_LATE("little at the early looks, most at the last (O'Brien–Fleming)"),
-    SPEND_EVEN("about evenly across the looks (Pocock)"),
-    SPEND_GROWING("growing with the square of the share of readings collected (Kim–DeMets, ρ = 2)"),
+    SPEND_LATE("most at the last look (O'Brien–Fleming)"),
+    SPEND_EVEN("evenly across the looks (Pocock)"),
+    SPEND_GROWING("a quarter by half-way (Kim–DeMets, ρ = 2)"),
     LOOK_GOES_ON("Look %d: %d subgroups (%d readings); demonstrated if %s ≥ %.3f (confidence %.3f %%); otherwise on to"
             + " the next look."),
     LOOK_SHARED("Look %d: %d subgroups (%d readings); each characteristic's bound at %.3f %% confidence decides;"

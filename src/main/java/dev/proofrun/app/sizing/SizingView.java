@@ -209,6 +209,8 @@ public final class SizingView implements StepView {
             java.util.function.IntConsumer chosen) {
         ComboBox<String> box = new ComboBox<>(javafx.collections.FXCollections.observableArrayList(items));
         box.setId(id);
+        // its words whole: the labels beside it wrap instead
+        box.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
         box.getSelectionModel().select(selected);
         box.getSelectionModel().selectedIndexProperty().addListener((obs, was, now) -> {
             if (now.intValue() >= 0) {
