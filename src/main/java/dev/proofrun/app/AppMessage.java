@@ -99,9 +99,6 @@ public enum AppMessage implements MessageKey {
     TIMING_CALENDAR_BAD("the calendar does not hold together: check the shifts and breaks"),
     HANDOUT_EARLIER("complete the earlier steps first"),
     HANDOUT_ISSUE("issue the plan"),
-    HANDOUT_STAGES_KEPT("This plan has planned looks, calibrated for its characteristics and design as issued; the"
-            + " wizard keeps them but does not plan looks again. Undo the change, or plan the study again with"
-            + " 'proofrun plan new --stages'."),
     HANDOUT_NO_EXPECTATION("give the expected index for %s on the Part step"),
     HANDOUT_ISSUED("Issued as %s"),
     HANDOUT_CHANGED("Changed since %s was issued: issue it again to make revision %d"),

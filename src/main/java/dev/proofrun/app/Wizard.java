@@ -47,7 +47,8 @@ public final class Wizard {
         start = new StartViewModel(session, Background.fx("proofrun-open"));
         part = new PartViewModel(session.draft());
         goal = new GoalViewModel(session.draft(), session.baseProperty(), Background.fx("proofrun-pilot"));
-        sizing = new SizingViewModel(session.draft(), goal, Background.fx("proofrun-design"));
+        sizing = new SizingViewModel(session.draft(), goal, Background.fx("proofrun-design"),
+                Background.fx("proofrun-looks"));
         timing = new TimingViewModel(session.draft(), sizing.designBinding(), Background.fx("proofrun-schedule"));
         handout = new HandoutViewModel(session, goal, sizing, timing, Background.fx("proofrun-preview"),
                 Background.fxFinishing("proofrun-plan-file"));
@@ -109,7 +110,7 @@ public final class Wizard {
     /** True while a step computes in the background, a plan file is read or written, or a report is made. */
     public boolean busy() {
         return start.openingProperty().get() || goal.pilotLoadingProperty().get()
-                || sizing.busyProperty().get() || timing.busyProperty().get() || handout.busyProperty().get()
+                || sizing.busyProperty().get() || sizing.staged().busy().get() || timing.busyProperty().get() || handout.busyProperty().get()
                 || handout.exportingProperty().get()
                 || handout.issuingProperty().get() || grading.busyProperty().get() || grading.reportingProperty().get();
     }

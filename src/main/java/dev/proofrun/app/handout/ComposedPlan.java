@@ -3,12 +3,15 @@ package dev.proofrun.app.handout;
 import dev.proofrun.app.AppMessage;
 import dev.proofrun.app.goal.GoalViewModel;
 import dev.proofrun.app.session.CharacteristicDraft;
+import dev.proofrun.app.session.DraftField;
 import dev.proofrun.app.session.PlanDrafts;
 import dev.proofrun.app.session.Session;
 import dev.proofrun.app.sizing.SizingViewModel;
 import dev.proofrun.app.timing.TimingViewModel;
 import dev.proofrun.design.Design;
 import dev.proofrun.design.Requirement;
+import dev.proofrun.design.StagedMessage;
+import dev.proofrun.design.Stages;
 import dev.proofrun.plan.PlanFiles;
 import dev.proofrun.plan.PlanState;
 import dev.proofrun.plan.StudyPlan;
@@ -103,6 +106,14 @@ final class ComposedPlan {
                 base.revisionNumber() + 1, p.stages());
     }
 
+    /** The base's looks stand: the same number and spending chosen, the same characteristics and design. */
+    private boolean keepsLooksOf(StudyPlan base, StudyPlan p) {
+        Stages was = base.stages().orElseThrow();
+        return was.count() == sizing.looks()
+                && was.spending().token().equals(session.draft().text(DraftField.SPENDING))
+                && base.characteristics().equals(p.characteristics()) && base.design().equals(p.design());
+    }
+
     private HandoutViewModel.Composed compose() {
         Optional<Design> design = sizing.designBinding().get();
         Optional<Requirement> req = goal.requirementBinding().get();
@@ -127,12 +138,16 @@ final class ComposedPlan {
                     timing.spanBinding().get().get(), design.get(), timing.spacing().get(), timing.seed().get(),
                     timing.schedule().get());
             StudyPlan base = session.base().orElse(null);
-            if (base != null && base.isStaged()) {
-                // the looks were calibrated for these characteristics and this design: kept only while both stand
-                if (!base.characteristics().equals(p.characteristics()) || !base.design().equals(p.design())) {
-                    return new HandoutViewModel.Composed(Optional.empty(), AppMessage.HANDOUT_STAGES_KEPT.format());
-                }
+            if (base != null && base.isStaged() && keepsLooksOf(base, p)) {
+                // the looks as issued, while what they were calibrated for stands
                 p = p.withStages(base.stages());
+            } else if (sizing.looks() > 1) {
+                // the Sample-size step's looks, computed for exactly this design (PlannedStages, as plan new --stages)
+                Optional<Stages> looks = sizing.plannedStages();
+                if (looks.isEmpty()) {
+                    return new HandoutViewModel.Composed(Optional.empty(), StagedMessage.STAGED_BUSY.format());
+                }
+                p = p.withStages(looks);
             }
             return new HandoutViewModel.Composed(Optional.of(p), "");
         } catch (UserException | IllegalArgumentException | java.util.NoSuchElementException e) {

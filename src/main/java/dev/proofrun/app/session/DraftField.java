@@ -31,6 +31,10 @@ public enum DraftField {
     CHOSEN_SUBGROUP_SIZE(""),
     /** The number of subgroups kept from a plan file; empty = the table's k for the chosen size. */
     CHOSEN_SUBGROUPS(""),
+    /** Planned looks at the data, 1 (a single stage, graded once at the end) to 4, as {@code plan new --stages}. */
+    STAGES("1"),
+    /** Token of {@link dev.proofrun.design.Spending}: how a staged plan spends its false-pass risk. */
+    SPENDING("obrien-fleming"),
     /** The study's first minute, "yyyy-MM-dd HH:mm" in the plant's zone. */
     START(""),
     /** "days" or "shifts". */

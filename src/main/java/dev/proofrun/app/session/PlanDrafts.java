@@ -55,6 +55,10 @@ public final class PlanDrafts {
         f.put(DraftField.FOCUS.name(), first.id());
         f.put(DraftField.CHOSEN_SUBGROUP_SIZE.name(), Integer.toString(plan.design().subgroupSize()));
         f.put(DraftField.CHOSEN_SUBGROUPS.name(), Integer.toString(plan.design().subgroups()));
+        plan.stages().filter(dev.proofrun.design.Stages::staged).ifPresent(st -> {
+            f.put(DraftField.STAGES.name(), Integer.toString(st.count()));
+            f.put(DraftField.SPENDING.name(), st.spending().token());
+        });
         StudySpan span = plan.span();
         f.put(DraftField.START.name(), CalendarText.start(span.start()));
         f.put(DraftField.SPAN_KIND.name(), span.kind().name().toLowerCase(Locale.ROOT));

@@ -62,6 +62,19 @@ final class SizingCurves {
         return lines;
     }
 
+    /**
+     * The lines as named for a plan with looks: the single-stage design is then not the plan's design but the one
+     * the looks are compared with ("single stage: k × n" for "plan: k × n").
+     */
+    static List<Line> named(List<Line> lines, Optional<Design> single, boolean staged) {
+        if (!staged || single.isEmpty()) {
+            return lines;
+        }
+        String plan = SizingMessage.PLAN_DESIGN.format(single.get().subgroups(), single.get().subgroupSize());
+        String instead = SizingMessage.SINGLE_DESIGN.format(single.get().subgroups(), single.get().subgroupSize());
+        return lines.stream().map(l -> l.name().equals(plan) ? new Line(instead, l.pen(), l.xs(), l.ys()) : l).toList();
+    }
+
     /** The operating characteristic of the plan's design with the required and expected index marked. */
     static List<Line> oc(List<OcPoint> oc, Optional<Design> design, Optional<DesignRequest> request) {
         List<Line> lines = new ArrayList<>();

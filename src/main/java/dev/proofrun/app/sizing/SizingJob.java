@@ -1,10 +1,17 @@
 package dev.proofrun.app.sizing;
 
+import dev.proofrun.app.goal.GoalViewModel;
+import dev.proofrun.app.session.FieldNumbers;
+import dev.proofrun.app.session.RowRequirement;
 import dev.proofrun.design.DesignRequest;
+import dev.proofrun.design.Expectation;
+import dev.proofrun.design.Requirement;
+import dev.proofrun.text.UserException;
 import dev.proofrun.design.DesignTable;
 import dev.proofrun.design.StudyDesigner;
 import java.util.List;
 import java.util.Optional;
+import java.util.OptionalDouble;
 
 /** One computation of the Sample-size step, run on the worker: everything the step shows for one request. */
 final class SizingJob {
@@ -19,6 +26,26 @@ final class SizingJob {
      * @param curve the OC curve at the plan's own k, likewise
      */
     record Answer(DesignTable all, DesignTable own, SizingCost.KeptPower kept, SizingCurves.PlanCurve curve) {
+    }
+
+    /**
+     * The request for the characteristic in focus, with its own requirement ({@link RowRequirement}) and the wanted
+     * power; empty while the goal is incomplete.
+     *
+     * @throws UserException            when the designer refuses the request (c₁ ≤ c₀)
+     * @throws IllegalArgumentException when the power is out of range
+     */
+    static Optional<DesignRequest> request(GoalViewModel goal, String power) {
+        Optional<Requirement> req = goal.focusBinding().get()
+                .flatMap(row -> RowRequirement.of(row, goal.requirementBinding().get()));
+        Optional<Expectation> exp = goal.expectationBinding().get();
+        if (goal.requirementBinding().get().isEmpty() || req.isEmpty() || exp.isEmpty()
+                || goal.focusBinding().get().get().limits().isEmpty()) {
+            return Optional.empty();
+        }
+        OptionalDouble p = FieldNumbers.parse(power);
+        DesignRequest r = DesignRequest.of(goal.focusBinding().get().get().limits().get().sides(), req.get(), exp.get());
+        return Optional.of(p.isPresent() ? r.withPower(p.getAsDouble()) : r);
     }
 
     /**

@@ -6,6 +6,8 @@ import dev.proofrun.text.MessageKey;
 public enum SizingMessage implements MessageKey {
     /** The design the plan will use, as both charts label it. */
     PLAN_DESIGN("plan: %d × %d"),
+    /** The single-stage design the planned looks are compared with, as the charts label it. */
+    SINGLE_DESIGN("single stage: %d × %d"),
     /** The chooser's label. */
     SIZED_FOR("Sized for"),
     /** The table is for one characteristic of several. */
@@ -20,6 +22,25 @@ public enum SizingMessage implements MessageKey {
     SHAPE_NORMAL_MODEL(" %s is planned %s: its power here is the normal model's, as plan new sizes it; the percentile"
             + " bound of a skewed shape needs its expected skewness, which the plan does not keep (size it with"
             + " size --shape %s --skewness G)."),
+    /** The looks chooser's label and choices. */
+    LOOKS_LABEL("Looks at the data (the study may stop early at a look when the answer is clear)"),
+    LOOKS_ONE("1: grade once, at the end"),
+    LOOKS_MANY("%d: grade at %d planned points"),
+    /** The spending chooser's label and choices (the plan file keeps the spending function's token). */
+    SPENDING_LABEL("How the false-pass risk is shared across the looks"),
+    SPEND_LATE("most at the last look (O'Brien–Fleming)"),
+    SPEND_EVEN("evenly across the looks (Pocock)"),
+    SPEND_GROWING("a quarter by half-way (Kim–DeMets, ρ = 2)"),
+    LOOK_GOES_ON("Look %d: %d subgroups (%d readings); demonstrated if %s ≥ %.3f (confidence %.3f %%); otherwise on to"
+            + " the next look."),
+    LOOK_SHARED("Look %d: %d subgroups (%d readings); each characteristic's bound at %.3f %% confidence decides;"
+            + " otherwise on to the next look."),
+    STAGES_NORMAL_ONLY("Planned looks use normal-theory bounds: %s is planned %s; plan a single stage."),
+    STAGES_COMPLETE_FIRST("Planned looks need every characteristic complete: %s."),
+    READINGS_TITLE("Readings expected"),
+    STAGED_CURVE("staged, %d looks"),
+    SINGLE_CURVE("single stage, %d readings"),
+    STAGED_OC("staged: %d looks, up to %d × %d"),
     HINT("Pick a row to use another subgroup size; the line below says what it costs.");
 
     private final String english;

@@ -33,9 +33,11 @@ public final class SizingView implements StepView {
     private final VBox root = new VBox(12);
     private final TableView<SizingRow> table = new TableView<>();
     private final CurvePlot powerChart =
-            new CurvePlot("power-chart", "Power against the number of subgroups", "subgroups k", "power");
+            new CurvePlot("power-chart", "Power against subgroups", "subgroups k", "power");
     private final CurvePlot ocChart =
-            new CurvePlot("oc-chart", "Chance to demonstrate against the true index", "true index", "probability");
+            new CurvePlot("oc-chart", "Chance to demonstrate", "true index", "probability");
+    private final CurvePlot readingsChart =
+            CurvePlot.spanning("expected-readings-chart", SizingMessage.READINGS_TITLE.format(), "true index", "readings");
 
     public SizingView(SizingViewModel vm) {
         TextField power = new TextField();
@@ -68,6 +70,26 @@ public final class SizingView implements StepView {
         focusLabel.setLabelFor(focus);
         form.addRow(0, focusLabel, focus);
         form.addRow(1, powerLabel, power, spinner);
+        LooksChoice choice = vm.staged().choice();
+        ComboBox<String> looks = chooser("looks", choice.looksChoices(), choice.looksIndex().get(), choice::chooseLooks);
+        choice.looksIndex().addListener((obs, was, now) -> looks.getSelectionModel().select(now.intValue()));
+        ComboBox<String> spending = chooser("spending", choice.spendingChoices(), choice.spendingIndex().get(),
+                choice::chooseSpending);
+        choice.spendingIndex().addListener((obs, was, now) -> spending.getSelectionModel().select(now.intValue()));
+        spending.disableProperty().bind(choice.staged().not());
+        ProgressIndicator looksBusy = new ProgressIndicator();
+        looksBusy.setId("looks-busy");
+        looksBusy.setMaxSize(FontScale.of(1.8), FontScale.of(1.8));
+        looksBusy.visibleProperty().bind(vm.staged().busy());
+        Label looksLabel = new Label(SizingMessage.LOOKS_LABEL.format());
+        looksLabel.setLabelFor(looks);
+        Label spendingLabel = new Label(SizingMessage.SPENDING_LABEL.format());
+        spendingLabel.setLabelFor(spending);
+        form.addRow(2, looksLabel, looks, looksBusy);
+        form.addRow(3, spendingLabel, spending);
+        for (Label l : List.of(focusLabel, powerLabel, looksLabel, spendingLabel)) {
+            l.setWrapText(true);
+        }
         Label sizedFor = dev.proofrun.app.shell.IndexTooltips.follow(note("sizing-for", "pr-note"));
         sizedFor.textProperty().bind(vm.sizedForBinding());
 
@@ -109,7 +131,7 @@ public final class SizingView implements StepView {
                 vm.choose(now.subgroupSize());
             }
         });
-        vm.chosenProperty().addListener((obs, was, now) -> selectChosen(vm));
+        vm.chosenSizeBinding().addListener((obs, was, now) -> selectChosen(vm));
         vm.shownRows().addListener((javafx.collections.ListChangeListener<SizingRow>) c -> selectChosen(vm));
 
         Label reason = note("design-reason", "pr-fine");
@@ -124,7 +146,7 @@ public final class SizingView implements StepView {
         Button useShared = new Button(SizingMessage.USE_SHARED.format());
         useShared.setId("use-shared");
         useShared.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
-        useShared.disableProperty().bind(vm.sharedProperty().isNull());
+        useShared.disableProperty().bind(vm.sharedReadyBinding().not());
         useShared.setOnAction(e -> vm.useShared());
         HBox sharedRow = new HBox(8, shared, useShared);
         HBox.setHgrow(shared, Priority.ALWAYS);
@@ -132,19 +154,28 @@ public final class SizingView implements StepView {
         sharedRow.managedProperty().bind(sharedRow.visibleProperty());
         Label warnings = note("design-warnings", "pr-note");
         warnings.textProperty().bind(vm.warningsBinding());
+        Label stagedText = note("looks-text", null);
+        stagedText.textProperty().bind(vm.staged().text());
+        showWhenSet(stagedText);
 
         powerChart.show(vm.powerLinesProperty().get());
         ocChart.show(vm.ocLinesProperty().get());
         vm.powerLinesProperty().addListener((obs, was, now) -> powerChart.show(now));
         vm.ocLinesProperty().addListener((obs, was, now) -> ocChart.show(now));
-        HBox charts = new HBox(12, powerChart, ocChart);
+        readingsChart.show(vm.staged().readings().get());
+        vm.staged().readings().addListener((obs, was, now) -> readingsChart.show(now));
+        // the expected readings beside the operating characteristic, only when looks are planned
+        readingsChart.visibleProperty().bind(vm.staged().readings().isNotEqualTo(List.of()));
+        readingsChart.managedProperty().bind(readingsChart.visibleProperty());
+        HBox charts = new HBox(12, powerChart, ocChart, readingsChart);
         HBox.setHgrow(powerChart, Priority.ALWAYS);
         HBox.setHgrow(ocChart, Priority.ALWAYS);
+        HBox.setHgrow(readingsChart, Priority.ALWAYS);
 
         Label hint = new Label(SizingMessage.HINT.format());
         hint.getStyleClass().add("pr-note");
         hint.setWrapText(true);
-        VBox card = new VBox(form, sizedFor, refusal, table, hint, reason, cost, sharedRow, together, warnings);
+        VBox card = new VBox(form, sizedFor, refusal, table, hint, reason, cost, sharedRow, together, stagedText, warnings);
         card.getStyleClass().add("pr-card");
         root.getChildren().addAll(card, charts);
     }
@@ -174,11 +205,26 @@ public final class SizingView implements StepView {
         l.managedProperty().bind(l.visibleProperty());
     }
 
+    private static ComboBox<String> chooser(String id, List<String> items, int selected,
+            java.util.function.IntConsumer chosen) {
+        ComboBox<String> box = new ComboBox<>(javafx.collections.FXCollections.observableArrayList(items));
+        box.setId(id);
+        // its words whole: the labels beside it wrap instead
+        box.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
+        box.getSelectionModel().select(selected);
+        box.getSelectionModel().selectedIndexProperty().addListener((obs, was, now) -> {
+            if (now.intValue() >= 0) {
+                chosen.accept(now.intValue());
+            }
+        });
+        return box;
+    }
+
     private void selectChosen(SizingViewModel vm) {
-        if (vm.chosenProperty().get() == null) {
+        int n = vm.chosenSizeBinding().get();
+        if (n == 0) {
             return;
         }
-        int n = vm.chosenProperty().get().subgroupSize();
         List<SizingRow> items = table.getItems();
         for (int i = 0; i < items.size(); i++) {
             if (items.get(i).subgroupSize() == n) {

@@ -7,7 +7,6 @@ import dev.proofrun.app.session.Background;
 import dev.proofrun.app.session.CharacteristicDraft;
 import dev.proofrun.app.session.DraftField;
 import dev.proofrun.app.session.FieldNumbers;
-import dev.proofrun.app.session.RowRequirement;
 import dev.proofrun.app.session.StudyDraft;
 import dev.proofrun.app.shell.StepViewModel;
 import dev.proofrun.design.Design;
@@ -15,8 +14,8 @@ import dev.proofrun.design.DesignRequest;
 import dev.proofrun.design.DesignRow;
 import dev.proofrun.design.DesignTable;
 import dev.proofrun.design.OcPoint;
-import dev.proofrun.design.Requirement;
 import dev.proofrun.design.SharedDesign;
+import dev.proofrun.design.Stages;
 import dev.proofrun.stats.SigmaMethod;
 import dev.proofrun.text.UserException;
 import java.util.List;
@@ -24,13 +23,13 @@ import java.util.Locale;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import javafx.beans.binding.Bindings;
+import javafx.beans.binding.BooleanBinding;
+import javafx.beans.binding.IntegerBinding;
 import javafx.beans.binding.ObjectBinding;
 import javafx.beans.binding.StringBinding;
 import javafx.beans.property.BooleanProperty;
 import javafx.beans.property.ObjectProperty;
-import javafx.beans.property.SimpleBooleanProperty;
 import javafx.beans.property.SimpleObjectProperty;
-import javafx.beans.property.SimpleStringProperty;
 import javafx.beans.property.StringProperty;
 import javafx.collections.FXCollections;
 import javafx.collections.ObservableList;
@@ -38,26 +37,29 @@ import javafx.collections.ObservableList;
 /**
  * The design table of one characteristic (the one in focus, which the step names and lets the user change),
  * recomputed whenever an input changes: the request is built on the FX thread, the designer runs in a JavaFX
- * Task on a worker thread ({@link Background}), and only the latest request's answer is applied (an older task
+ * Task on a worker thread ({@link SizingTable}), and only the latest request's answer is applied (an older task
  * is cancelled and its answer dropped). The user may pick a row other than the recommended one; its cost against
  * the recommendation is spelled out ({@link SizingCost}). With several characteristics the powers of all at the
  * chosen design and the one design for all are worked out beside it ({@link AllCharacteristics}).
  *
  * <p>The view gets display rows ({@link SizingRow}), column definitions ({@link SizingColumn}) and the charts'
  * lines ({@link SizingCurves}) from here, all naming one design: the plan's k × n.
+ *
+ * <p>With more than one look chosen, the plan's design is the looks' ({@link SizingStages}, a worker of its own):
+ * the single-stage row chosen gives n (and k, when kept), the looks give the most subgroups K; until they are
+ * computed there is no design.
  */
 public final class SizingViewModel extends StepViewModel {
 
     private final StudyDraft draft;
     private final GoalViewModel goal;
     private final ObjectBinding<Optional<DesignRequest>> request;
-    private final ObjectProperty<DesignTable> table = new SimpleObjectProperty<>(this, "table");
-    private final ObjectProperty<DesignTable> chosenTable = new SimpleObjectProperty<>(this, "chosenTable");
-    private final ObservableList<DesignRow> rows = FXCollections.observableArrayList();
-    private final ObservableList<SizingRow> shownRows = FXCollections.observableArrayList();
-    private final ObjectProperty<DesignRow> chosen = new SimpleObjectProperty<>(this, "chosen");
-    private final BooleanProperty busy = new SimpleBooleanProperty(this, "busy", false);
-    private final StringProperty refusal = new SimpleStringProperty(this, "refusal", "");
+    private final SizingTable sized;
+    private final ObjectProperty<DesignTable> table;
+    private final ObjectProperty<DesignTable> chosenTable;
+    private final ObjectProperty<DesignRow> chosen;
+    private final BooleanProperty busy;
+    private final StringProperty refusal;
     private final ObjectProperty<List<Line>> powerLines = new SimpleObjectProperty<>(this, "powerLines", List.of());
     private final ObjectProperty<List<Line>> ocLines = new SimpleObjectProperty<>(this, "ocLines", List.of());
     private final ObservableList<String> ids = FXCollections.observableArrayList();
@@ -67,15 +69,23 @@ public final class SizingViewModel extends StepViewModel {
     private final AllCharacteristics all;
     private final StringBinding cost;
     private final ObjectBinding<Optional<Design>> designBinding;
-    private final Background background;
-    private Background.Job running;
-    private long generation;
-    private SizingCost.KeptPower keptPower;
-    private SizingCurves.PlanCurve planCurve;
+    private final SizingStages staged;
+    private final IntegerBinding chosenSize;
 
     public SizingViewModel(StudyDraft draft, GoalViewModel goal, Background background) {
+        this(draft, goal, background, background);
+    }
+
+    /** @param looks the worker of the planned looks (they cost seconds; the design table should not wait) */
+    public SizingViewModel(StudyDraft draft, GoalViewModel goal, Background background, Background looks) {
         this.draft = draft;
-        this.background = background;
+        sized = new SizingTable(background, this::drawCurves);
+        table = sized.table();
+        chosenTable = sized.chosenTable();
+        chosen = sized.chosen();
+        busy = sized.busy();
+        refusal = sized.refusal();
+        chosenSize = Bindings.createIntegerBinding(() -> chosen.get() == null ? 0 : chosen.get().subgroupSize(), chosen);
         this.goal = goal;
         this.all = new AllCharacteristics(background);
         request = Bindings.createObjectBinding(this::buildRequest, goal.requirementBinding(), goal.expectationBinding(),
@@ -83,9 +93,14 @@ public final class SizingViewModel extends StepViewModel {
         request.addListener((obs, was, now) -> recompute());
         draft.field(DraftField.CHOSEN_SUBGROUP_SIZE).addListener((obs, was, now) -> recompute());
         cost = Bindings.createStringBinding(() -> SizingCost.describe(chosen.get(), table.get(), chosenTable.get(),
-                keptSubgroups(), keptPower, all.shared().get(), all.driver(), focusName()), chosen, table, chosenTable,
+                keptSubgroups(), sized.keptPower(), all.shared().get(), all.driver(), focusName()), chosen, table, chosenTable,
                 draft.field(DraftField.CHOSEN_SUBGROUPS), all.shared());
-        designBinding = Bindings.createObjectBinding(this::design, chosen, draft.field(DraftField.CHOSEN_SUBGROUPS));
+        LooksChoice choice = new LooksChoice(draft);
+        staged = new SizingStages(looks, choice, () -> buildStagedAsking(choice), request, chosen,
+                draft.field(DraftField.CHOSEN_SUBGROUPS), draft.field(DraftField.STAGES), draft.field(DraftField.SPENDING),
+                draft.characteristics(), goal.requirementBinding(), goal.expectationBinding(), goal.focusBinding());
+        designBinding = Bindings.createObjectBinding(this::design, chosen, draft.field(DraftField.CHOSEN_SUBGROUPS),
+                draft.field(DraftField.STAGES), staged.answer(), staged.asking());
         designBinding.addListener((obs, was, now) -> {
             updateAll();
             drawCurves();
@@ -107,8 +122,11 @@ public final class SizingViewModel extends StepViewModel {
             if (busy.get() || chosen.get() == null) {
                 return AppMessage.SIZING_BUSY.format();
             }
-            return "";
-        }, goal.requirementBinding(), goal.expectationBinding(), refusal, busy, chosen));
+            if (looks() > 1 && !staged.refusal().get().isEmpty()) {
+                return staged.refusal().get();
+            }
+            return looks() > 1 && design().isEmpty() ? dev.proofrun.design.StagedMessage.STAGED_BUSY.format() : "";
+        }, goal.requirementBinding(), goal.expectationBinding(), refusal, busy, chosen, staged.refusal(), designBinding));
     }
 
     @Override
@@ -126,6 +144,7 @@ public final class SizingViewModel extends StepViewModel {
         if (table.get() == null && !busy.get()) {
             recompute();
         }
+        staged.askAgain();
     }
 
     public StringProperty power() {
@@ -134,12 +153,12 @@ public final class SizingViewModel extends StepViewModel {
 
     /** The core's rows of the table. */
     public ObservableList<DesignRow> rows() {
-        return rows;
+        return sized.rows();
     }
 
     /** The rows as the table shows them. */
     public ObservableList<SizingRow> shownRows() {
-        return shownRows;
+        return sized.shownRows();
     }
 
     /** The table's columns, in order. */
@@ -211,6 +230,31 @@ public final class SizingViewModel extends StepViewModel {
         return ocLines;
     }
 
+    /** The planned looks: their choice, words, chart and busy state. */
+    public SizingStages staged() {
+        return staged;
+    }
+
+    /** The looks the plan carries: with more than one look chosen and computed for the inputs as they are now. */
+    public Optional<Stages> plannedStages() {
+        return staged.current().map(a -> a.planned().stages());
+    }
+
+    /** The looks chosen, 1 to 4. */
+    public int looks() {
+        return staged.choice().looks();
+    }
+
+    /** The subgroup size of the chosen row, 0 without one (the table's selection follows it). */
+    public IntegerBinding chosenSizeBinding() {
+        return chosenSize;
+    }
+
+    /** True when the one design for all characteristics is worked out (its button is enabled). */
+    public BooleanBinding sharedReadyBinding() {
+        return all.shared().isNotNull();
+    }
+
     /** The ids of the characteristics, for the chooser of the one the table sizes. */
     public ObservableList<String> characteristicIds() {
         return ids;
@@ -230,8 +274,20 @@ public final class SizingViewModel extends StepViewModel {
         return request.get();
     }
 
-    /** The chosen design as the plan keeps it: the chosen row, or its size with the k kept (plan file, shared design). */
+    /**
+     * The plan's design: with one look, the chosen row, or its size with the k kept (plan file, shared design);
+     * with more, the looks' n and K once computed, empty until then.
+     */
     public Optional<Design> design() {
+        Optional<Design> single = singleStageDesign();
+        if (looks() < 2 || single.isEmpty()) {
+            return single;
+        }
+        return staged.current().map(a -> a.planned().design());
+    }
+
+    /** The chosen single-stage design: the chosen row, or its size with the k kept (plan file, shared design). */
+    public Optional<Design> singleStageDesign() {
         DesignRow r = chosen.get();
         Optional<DesignRequest> q = request.get();
         if (r == null || q.isEmpty()) {
@@ -285,21 +341,9 @@ public final class SizingViewModel extends StepViewModel {
         recompute();
     }
 
-    private Optional<Requirement> focusRequirement() {
-        return goal.focusBinding().get().flatMap(row -> RowRequirement.of(row, goal.requirementBinding().get()));
-    }
-
     private Optional<DesignRequest> buildRequest() {
-        Optional<Requirement> req = focusRequirement();
-        Optional<dev.proofrun.design.Expectation> exp = goal.expectationBinding().get();
-        if (goal.requirementBinding().get().isEmpty() || req.isEmpty() || exp.isEmpty()
-                || goal.focusBinding().get().get().limits().isEmpty()) {
-            return Optional.empty();
-        }
-        OptionalDouble p = FieldNumbers.parse(draft.text(DraftField.POWER));
         try {
-            DesignRequest r = DesignRequest.of(goal.focusBinding().get().get().limits().get().sides(), req.get(), exp.get());
-            return Optional.of(p.isPresent() ? r.withPower(p.getAsDouble()) : r);
+            return SizingJob.request(goal, draft.text(DraftField.POWER));
         } catch (UserException | IllegalArgumentException e) {
             refusal.set(e.getMessage());
             return Optional.empty();
@@ -308,71 +352,39 @@ public final class SizingViewModel extends StepViewModel {
 
     /** Starts a new computation for the current inputs; any older one is cancelled and its answer dropped. */
     public void recompute() {
-        if (running != null) {
-            running.cancel();
-            running = null;
-        }
-        Optional<DesignRequest> q = request.get();
-        if (q.isEmpty()) {
-            busy.set(false);
-            clear();
-            return;
-        }
-        refusal.set("");
-        DesignRequest req = q.get();
         OptionalDouble size = FieldNumbers.parse(draft.text(DraftField.CHOSEN_SUBGROUP_SIZE));
-        int wanted = size.isPresent() ? (int) size.getAsDouble() : 0;
-        Optional<Integer> kept = keptSubgroups();
-        long mine = ++generation;
-        busy.set(true);
-        running = background.submit(() -> SizingJob.compute(req, wanted, kept), answer -> {
-            if (mine == generation) {
-                apply(answer);
-            }
-        }, ex -> {
-            if (mine == generation) {
-                busy.set(false);
-                refusal.set(AppMessage.SIZING_FAILED.failure(ex));
-                clear();
-            }
-        });
+        sized.recompute(request.get(), size.isPresent() ? (int) size.getAsDouble() : 0, keptSubgroups());
     }
 
-    private void clear() {
-        table.set(null);
-        chosenTable.set(null);
-        rows.clear();
-        shownRows.clear();
-        chosen.set(null);
-        drawCurves();
-    }
-
-    private void apply(SizingJob.Answer answer) {
-        DesignTable every = answer.all();
-        keptPower = answer.kept();
-        planCurve = answer.curve();
-        table.set(every);
-        rows.setAll(every.rows());
-        shownRows.setAll(every.rows().stream()
-                .map(r -> SizingRow.of(r, r.subgroupSize() == every.recommended().subgroupSize())).toList());
-        DesignTable own = answer.own() != null ? answer.own() : every;
-        chosenTable.set(own);
-        chosen.set(own.recommended());
-        busy.set(false);
-        drawCurves();
+    private double wantedPower() {
+        OptionalDouble p = FieldNumbers.parse(draft.text(DraftField.POWER));
+        return p.isPresent() ? p.getAsDouble() : DesignRequest.DEFAULT_POWER;
     }
 
     private void updateAll() {
-        OptionalDouble p = FieldNumbers.parse(draft.text(DraftField.POWER));
-        all.update(draft.characteristics(), goal.requirementBinding().get(), goal::expectationFor,
-                p.isPresent() ? p.getAsDouble() : DesignRequest.DEFAULT_POWER, designBinding.get());
+        all.update(draft.characteristics(), goal.requirementBinding().get(), goal::expectationFor, wantedPower(),
+                singleStageDesign());
+    }
+
+    private SizingStages.Asking buildStagedAsking(LooksChoice choice) {
+        if (choice.looks() < 2) {
+            return SizingStages.Asking.NONE;
+        }
+        return SizingStages.asking(choice.looks(), choice.spending(), singleStageDesign(), keptSubgroups().isPresent(),
+                AllCharacteristics.ask(draft.characteristics(), goal.requirementBinding().get(), goal::expectationFor,
+                        wantedPower()), focusName());
     }
 
     private void drawCurves() {
-        Optional<Design> d = design();
-        List<OcPoint> oc = SizingCurves.ocOf(d, chosenTable.get(), planCurve);
-        powerLines.set(SizingCurves.power(chosenTable.get(), d, request.get()));
-        ocLines.set(SizingCurves.oc(oc, d, request.get()));
+        Optional<Design> d = singleStageDesign();
+        List<OcPoint> oc = SizingCurves.ocOf(d, chosenTable.get(), sized.planCurve());
+        Optional<SizingStages.Answer> looks = staged.current();
+        powerLines.set(SizingCurves.named(SizingCurves.power(chosenTable.get(), d, request.get()), d, looks.isPresent()));
+        List<Line> lines = new java.util.ArrayList<>(SizingCurves.named(SizingCurves.oc(oc, d, request.get()), d,
+                looks.isPresent()));
+        // the staged study's chance beside the single stage's
+        looks.ifPresent(answer -> lines.add(lines.isEmpty() ? 0 : 1, StagedLines.oc(answer)));
+        ocLines.set(lines);
     }
 
     private void refreshIds() {

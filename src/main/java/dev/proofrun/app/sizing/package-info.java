@@ -16,5 +16,18 @@
  * {@code plan new} chooses ({@code design.SharedDesigner}: one n, k the largest any needs, the driver named) can be
  * taken with one button. A characteristic planned with a skewed shape is sized with the normal model there, and the
  * line says so (docs/decisions/sizing-step-per-characteristic.md).
+ *
+ * <p>Planned looks ({@link dev.proofrun.app.sizing.LooksChoice}, {@link dev.proofrun.app.sizing.SizingStages}): 1 to 4
+ * looks and how the false-pass risk is spent (in words on screen; the draft keeps {@code STAGES} and the spending
+ * token as {@code plan new --stages S --spending F} takes them). With more than one, {@code plan.PlannedStages} is
+ * called on a worker of its own for every characteristic and the single-stage design chosen in the table, exactly
+ * as {@code plan new --stages} calls it (a k kept from a plan file is given, as {@code --subgroups}); its K is the
+ * plan's design, and the design is empty until it is computed. The request rests on the single-stage design only,
+ * never on K, and an identical request is dropped before anything is cancelled, so an answer cannot start the work
+ * again. The step shows the looks of the characteristic in focus ({@link dev.proofrun.app.sizing.StagedLines}: the
+ * boundaries on the index scale, the power, the readings expected at c₀ and c₁ against the single stage, the
+ * designer's recommendation), the staged study's chance to demonstrate on the OC chart, and its expected readings
+ * against the true index ({@code design.StagedReadingsCurve}) beside it. A skewed shape or an incomplete
+ * characteristic is refused in words (docs/decisions/staged-studies-design.md, "The wizard").
  */
 package dev.proofrun.app.sizing;

@@ -169,11 +169,11 @@ class HandoutViewModelTest {
 
     /**
      * A staged plan (made by {@code plan new --stages}) opened in the wizard keeps its looks while the steps
-     * describe it as issued, and a change that its looks were not calibrated for is refused in words, never
-     * issued without the looks.
+     * describe it as issued; a change that its looks were not calibrated for has the looks planned again by the
+     * Sample-size step, never issued without them.
      */
     @Test
-    void aStagedPlanKeepsItsLooksAndAChangeToWhatTheyRestOnIsRefused() {
+    void aStagedPlanKeepsItsLooksAndAChangeToWhatTheyRestOnPlansThemAgain() {
         Path staged = home.resolve("staged.json");
         java.io.StringWriter out = new java.io.StringWriter();
         assertEquals(0, dev.proofrun.cli.ProofrunCommand.run(new java.io.PrintWriter(out, true),
@@ -194,8 +194,18 @@ class HandoutViewModelTest {
         assertEquals(issued.stages(), composed.stages(), "the looks are carried over");
         assertEquals(issued, vm.issuedNow().orElseThrow(), "the steps describe the issued plan, looks and all");
 
+        assertEquals("2", session.draft().text(DraftField.STAGES), "reopening restores the looks chosen");
+        assertEquals("obrien-fleming", session.draft().text(DraftField.SPENDING));
+
+        // a change the looks were calibrated for: the Sample-size step plans them again, as plan new --stages
+        // --subgroups K would for the changed characteristic (K kept from the plan file)
         session.draft().field(DraftField.MINIMUM).set("1.50");
-        assertTrue(vm.composedBinding().get().plan().isEmpty(), "no plan without its looks");
-        assertTrue(vm.composedBinding().get().problem().contains("plan new --stages"), vm.composedBinding().get().problem());
+        StudyPlan changed = vm.composedBinding().get().plan().orElseThrow(
+                () -> new AssertionError(vm.composedBinding().get().problem()));
+        assertEquals(issued.design(), changed.design());
+        dev.proofrun.design.Stages expected = dev.proofrun.plan.PlannedStages.of(changed.characteristics(),
+                changed.design(), true, 0.90, 2, dev.proofrun.design.Spending.OBRIEN_FLEMING).stages();
+        assertEquals(java.util.Optional.of(expected), changed.stages(), "never issued without its looks");
+        assertNotEquals(issued.stages(), changed.stages(), "calibrated for the new requirement");
     }
 }
