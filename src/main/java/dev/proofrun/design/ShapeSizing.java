@@ -26,9 +26,9 @@ import java.util.OptionalInt;
  * <p>The row's power is the whole procedure's, as for the normal model ({@link ProcedurePower}): the bound's power
  * times the chance that the shape check lets a process of the planned shape through (its level,
  * {@link ProcedurePower#NORMAL_SHAPE_REJECTION}: the lognormal check is the normal one on ln x, the Weibull check
- * is held to the same level) and the chance that the stability step, which charts the readings' normal scores under
- * the fitted model, does not call the stable process unstable — the grader's own rule at (n, k) for an overall
- * index ({@code control.StabilityRisk}). The bound's own power stays beside it ({@link Row#boundPower()}).
+ * and the folded normal's bootstrap check are held to the same level) and the chance that the stability step, which
+ * charts the readings' normal scores under the fitted model, does not call the stable process unstable — the
+ * grader's own rule at (n, k) for an overall index ({@code control.StabilityRisk}). The bound's own power stays beside it ({@link Row#boundPower()}).
  */
 public final class ShapeSizing {
 
