@@ -58,6 +58,23 @@ class PromisedShapePowerTest {
         check(ShapeFamily.FOLDED_NORMAL, 3);
     }
 
+    /**
+     * The promise of the planner's own row: {@code size --shape folded-normal} at mean/σ 1, c₁ 2.0, n = 5 (the row's
+     * whole-procedure power, about 0.9) against 1,000 graded studies at that row's k (SE about 0.01).
+     */
+    @Test
+    @Tag("long")
+    void foldedNormalAtThePlannersRow() {
+        ShapeSizing.Row row = ShapeSizing.design(ShapeFamily.FOLDED_NORMAL, 1, IndexKind.Side.UPPER, 1.33, 2.0, 0.95, 0.9,
+                java.util.List.of(5), dev.proofrun.design.PracticeFloors.defaults()).get(0);
+        ShapeStudies.Case c = new ShapeStudies.Case(ShapeFamily.FOLDED_NORMAL, 1, 2.0, 5, row.subgroups(), false);
+        Map<Verdict, Integer> v = ShapeStudies.run(c, 1.33, 1000, 70_000L, dir);
+        double realised = v.getOrDefault(Verdict.DEMONSTRATED, 0) / 1000.0;
+        System.out.printf(java.util.Locale.ROOT, "%s: promised %.4f (bound alone %.4f), realised %.4f %s%n", c.label(),
+                row.power(), row.boundPower(), realised, v);
+        assertEquals(row.power(), realised, 0.03, c.label() + " " + v);
+    }
+
     @Test
     @Tag("long")
     void weibullShapes() {
