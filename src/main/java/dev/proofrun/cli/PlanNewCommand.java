@@ -214,7 +214,7 @@ public final class PlanNewCommand implements Callable<Integer> {
         staged.ifPresent(st -> st.lines().forEach(w::println));
         for (Characteristic c : chars) {
             if (!c.shape().isNormal()) {
-                w.println("warning: " + (c.shape().isLocationScale() ? SizeMessage.SHAPE_SIZED_AS_NORMAL.format(c.id(), c.shape().token(), c.shape().token())
+                w.println("warning: " + (ShapeSize.plans(c.shape()) ? SizeMessage.SHAPE_SIZED_AS_NORMAL.format(c.id(), c.shape().token(), c.shape().token())
                         : SizeMessage.SHAPE_NOT_SIZED_AS_NORMAL.format(c.id(), c.shape().token(), ShapeSize.plannable())));
             }
         }

@@ -3,6 +3,8 @@ package dev.proofrun.cli;
 import dev.proofrun.design.DesignMessage;
 import dev.proofrun.design.PracticeFloors;
 import dev.proofrun.design.ShapeSizing;
+import dev.proofrun.stats.FoldedNormalBound;
+import dev.proofrun.stats.FoldedNormalPower;
 import dev.proofrun.stats.IndexKind;
 import dev.proofrun.stats.PercentileIndex;
 import dev.proofrun.stats.PercentilePower;
@@ -20,7 +22,7 @@ import java.util.Locale;
 import java.util.Map;
 
 /**
- * {@code size --shape lognormal|weibull --skewness G}: study sizes for a one-sided characteristic planned with a
+ * {@code size --shape lognormal|weibull|folded-normal --skewness G}: study sizes for a one-sided characteristic planned with a
  * skewed shape, by {@link ShapeSizing}. The expected and required indices are percentile indices (ISO 22514-2).
  */
 final class ShapeSize {
@@ -48,10 +50,19 @@ final class ShapeSize {
         this.rows = rows;
     }
 
-    /** The skewed shapes {@code size --shape} can plan, comma separated (the location–scale ones). */
+    /** The skewed shapes {@code size --shape} can plan, comma separated. */
     static String plannable() {
-        return java.util.Arrays.stream(ShapeFamily.values()).filter(f -> !f.isNormal() && f.isLocationScale())
+        return java.util.Arrays.stream(ShapeFamily.values()).filter(ShapeSize::plans)
                 .map(ShapeFamily::token).collect(java.util.stream.Collectors.joining(", "));
+    }
+
+    /** Whether {@code size --shape} plans this skewed shape: the location–scale ones and the folded normal. */
+    static boolean plans(ShapeFamily family) {
+        return !family.isNormal() && (family.isLocationScale() || family == ShapeFamily.FOLDED_NORMAL);
+    }
+
+    private static boolean folded(ShapeFamily family) {
+        return family == ShapeFamily.FOLDED_NORMAL;
     }
 
     /**
@@ -71,11 +82,12 @@ final class ShapeSize {
                     + o.failure().name().toLowerCase(Locale.ROOT).replace('_', ' ') + ")");
         }
         ShapeFit fit = o.fit();
-        double parameter = family == ShapeFamily.WEIBULL ? fit.first() : fit.scale();
+        double parameter = folded(family) ? fit.location() / fit.scale() : family == ShapeFamily.WEIBULL ? fit.first() : fit.scale();
         double expected = c1 != null ? c1 : PercentileIndex.of(kind, limits, fit);
-        ShapeSize s = design(family, ShapeSkewness.of(family, parameter), limits.sides(), c0, expected, confidence, power,
-                sizes, floors);
-        double[] b = PivotalBound.bounds(fit, kind, limits, x.length, confidence, PivotalBound.DEFAULT_SEED);
+        ShapeSize s = design(family, folded(family) ? FoldedNormalPower.skewness(parameter) : ShapeSkewness.of(family, parameter),
+                limits.sides(), c0, expected, confidence, power, sizes, floors);
+        double[] b = folded(family) ? FoldedNormalBound.bounds(fit, kind, limits, x.length, confidence, PivotalBound.DEFAULT_SEED)
+                : PivotalBound.bounds(fit, kind, limits, x.length, confidence, PivotalBound.DEFAULT_SEED);
         s.pilotNote = DesignMessage.PILOT_UNCERTAINTY.format(x.length, kind.symbol(), PercentileIndex.of(kind, limits, fit),
                 100 * confidence, b[0]) + "; the pilot's fit to the " + family.token() + " shape is not checked here";
         return s;
@@ -116,7 +128,7 @@ final class ShapeSize {
         }
         double parameter;
         try {
-            parameter = ShapeSkewness.parameter(family, skewness);
+            parameter = folded(family) ? FoldedNormalPower.meanRatio(skewness) : ShapeSkewness.parameter(family, skewness);
         } catch (IllegalArgumentException e) {
             throw new UserException(OptionMessage.BAD_VALUE, "--skewness", e.getMessage());
         }
@@ -131,6 +143,9 @@ final class ShapeSize {
     }
 
     private String parameterWords() {
+        if (folded(family)) {
+            return String.format(Locale.ROOT, "mean/sigma of the unfolded normal = %.4g", parameter);
+        }
         return family == ShapeFamily.WEIBULL ? String.format(Locale.ROOT, "Weibull shape k = %.4g", parameter)
                 : String.format(Locale.ROOT, "sigma of ln x = %.4g", parameter);
     }
@@ -156,6 +171,18 @@ final class ShapeSize {
             out.println("note: " + thresholdNote());
         }
         out.println();
+        if (folded(family)) {
+            out.printf(Locale.ROOT, "Power: the chance that grading says demonstrated: the grader's lower bound (test inversion at"
+                    + " the least favourable mean/sigma of a confidence set, seed %d) reaches the requirement — simulated with"
+                    + " seed %d (%d studies of readings of this shape, each fitted and bounded as the grader does; standard"
+                    + " error at most %.3f; only N matters, the index uses the overall spread) and shown alone as 'bound"
+                    + " alone' — times the chances that the shape check (1 %%) and the stability step let a stable process of"
+                    + " this shape through.%n", PivotalBound.DEFAULT_SEED, FoldedNormalPower.STUDY_SEED,
+                    FoldedNormalPower.STUDIES, 0.5 / Math.sqrt(FoldedNormalPower.STUDIES));
+            out.println();
+            out.println(SizeMessage.SHAPE_CAUTION.english());
+            return;
+        }
         out.printf(Locale.ROOT, "Power: the chance that grading says demonstrated: the grader's lower bound (generalized pivotal,"
                 + " seed %d) reaches the requirement — simulated with seed %d (%d studies, standard error at most %.3f; only N"
                 + " matters, the index uses the overall spread) and shown alone as 'bound alone' — times the chances that"
@@ -185,7 +212,7 @@ final class ShapeSize {
             m.put("thresholdNote", thresholdNote());
         }
         m.put("skewness", skewness);
-        m.put(family == ShapeFamily.WEIBULL ? "weibullShape" : "sigmaOfLog", parameter);
+        m.put(folded(family) ? "meanRatio" : family == ShapeFamily.WEIBULL ? "weibullShape" : "sigmaOfLog", parameter);
         m.put("side", side == IndexKind.Side.UPPER ? "upper" : "lower");
         m.put("method", "iso-22514-2-percentile");
         m.put("required", c0);
@@ -194,7 +221,7 @@ final class ShapeSize {
         m.put("wantedPower", power);
         m.put("pilot", pilotNote);
         m.put("boundSeed", PivotalBound.DEFAULT_SEED);
-        m.put("studySeed", PercentilePower.STUDY_SEED);
+        m.put("studySeed", folded(family) ? FoldedNormalPower.STUDY_SEED : PercentilePower.STUDY_SEED);
         m.put("rows", rows.stream().map(r -> {
             Map<String, Object> row = new LinkedHashMap<>();
             row.put("subgroupSize", r.subgroupSize());

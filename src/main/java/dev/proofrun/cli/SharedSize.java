@@ -69,7 +69,7 @@ final class SharedSize {
         List<String> warnings = new ArrayList<>();
         for (Characteristic c : chars) {
             if (!c.shape().isNormal()) {
-                warnings.add((c.shape().isLocationScale() ? SizeMessage.SHAPE_SIZED_AS_NORMAL.format(c.id(), c.shape().token(), c.shape().token())
+                warnings.add((ShapeSize.plans(c.shape()) ? SizeMessage.SHAPE_SIZED_AS_NORMAL.format(c.id(), c.shape().token(), c.shape().token())
                         : SizeMessage.SHAPE_NOT_SIZED_AS_NORMAL.format(c.id(), c.shape().token(), ShapeSize.plannable())));
             }
         }

@@ -128,8 +128,8 @@ public final class SizeCommand implements Callable<Integer> {
                     + " reads: one shared design (--index and --confidence are the defaults for empty cells).")
     java.nio.file.Path characteristics;
 
-    @Option(names = "--shape", paramLabel = "normal|lognormal|weibull",
-            description = "The shape the readings are planned to follow (default normal); lognormal and weibull need --skewness; folded-normal cannot be planned here yet.")
+    @Option(names = "--shape", paramLabel = "normal|lognormal|weibull|folded-normal",
+            description = "The shape the readings are planned to follow (default normal); lognormal, weibull and folded-normal need --skewness.")
     String shape;
 
     @Option(names = "--skewness", paramLabel = "G", description = "The expected skewness of the readings (with --shape).")
@@ -175,7 +175,7 @@ public final class SizeCommand implements Callable<Integer> {
             throw new UserException(SizeMessage.TARGET_NEEDED);
         }
         ShapeFamily family = shape == null ? ShapeFamily.NORMAL : OptionValues.shape(shape);
-        if (!family.isLocationScale()) {
+        if (!family.isNormal() && !ShapeSize.plans(family)) {
             throw new UserException(SizeMessage.SHAPE_NOT_SIZED, family.token(), ShapeSize.plannable());
         }
         if (!family.isNormal()) {
@@ -210,7 +210,7 @@ public final class SizeCommand implements Callable<Integer> {
             return 0;
         }
         if (skewness != null) {
-            throw new UserException(OptionMessage.BAD_VALUE, "--skewness", "only with --shape lognormal or weibull");
+            throw new UserException(OptionMessage.BAD_VALUE, "--skewness", "only with --shape lognormal, weibull or folded-normal");
         }
         DesignRequest request = request();
         if (looks > 1 && request.lossRate() > 0) {

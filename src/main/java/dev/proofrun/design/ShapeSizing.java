@@ -2,6 +2,7 @@ package dev.proofrun.design;
 
 import dev.proofrun.control.ChartKind;
 import dev.proofrun.control.StabilityRisk;
+import dev.proofrun.stats.FoldedNormalPower;
 import dev.proofrun.stats.IndexKind;
 import dev.proofrun.stats.PercentilePower;
 import dev.proofrun.stats.ShapeFamily;
@@ -13,9 +14,10 @@ import java.util.Map;
 import java.util.OptionalInt;
 
 /**
- * Study sizes for a one-sided characteristic planned with a lognormal or Weibull shape: for each subgroup size
- * n the fewest subgroups k (at or above the floors) whose power — the chance that the grader's percentile index
- * bound reaches c₀ when the true index is c₁ ({@link PercentilePower}) — reaches the wanted power. The index is
+ * Study sizes for a one-sided characteristic planned with a lognormal, Weibull or folded-normal shape: for each
+ * subgroup size n the fewest subgroups k (at or above the floors) whose power — the chance that the grader's
+ * percentile index bound reaches c₀ when the true index is c₁ ({@link PercentilePower}; the folded normal's
+ * test-inversion bound, {@link FoldedNormalPower}) — reaches the wanted power. The index is
  * an overall one, so the power depends on N = n·k only: the smallest N is found once (doubling, then bisection
  * on N up to {@value #MAX_READINGS}), then each n gets k = ⌈N/n⌉ raised to the floors (and stepped up while the
  * simulated power at its own N, which wobbles by its Monte-Carlo error, is below the wanted one), and its power
@@ -24,9 +26,9 @@ import java.util.OptionalInt;
  * <p>The row's power is the whole procedure's, as for the normal model ({@link ProcedurePower}): the bound's power
  * times the chance that the shape check lets a process of the planned shape through (its level,
  * {@link ProcedurePower#NORMAL_SHAPE_REJECTION}: the lognormal check is the normal one on ln x, the Weibull check
- * is held to the same level) and the chance that the stability step, which charts the readings' normal scores under
- * the fitted model, does not call the stable process unstable — the grader's own rule at (n, k) for an overall
- * index ({@code control.StabilityRisk}). The bound's own power stays beside it ({@link Row#boundPower()}).
+ * and the folded normal's bootstrap check are held to the same level) and the chance that the stability step, which
+ * charts the readings' normal scores under the fitted model, does not call the stable process unstable — the
+ * grader's own rule at (n, k) for an overall index ({@code control.StabilityRisk}). The bound's own power stays beside it ({@link Row#boundPower()}).
  */
 public final class ShapeSizing {
 
@@ -47,7 +49,7 @@ public final class ShapeSizing {
      * @param readings     N
      * @param power        the whole procedure's power at (n, k): the bound's, the shape check and the stability step
      * @param boundPower     the bound's power at N alone (Monte-Carlo standard error at most 0.004 lognormal, 0.008
-     *                       Weibull)
+     *                       Weibull and folded normal)
      */
     public record Row(int subgroupSize, int subgroups, int readings, double power, double boundPower) {
     }
@@ -61,7 +63,7 @@ public final class ShapeSizing {
     /**
      * The table, or empty rows when no N up to {@value #MAX_READINGS} reaches the power.
      *
-     * @param parameter σ of ln x (lognormal) or Weibull shape k
+     * @param parameter σ of ln x (lognormal), Weibull shape k, or mean/σ (folded normal)
      * @param side      UPPER or LOWER
      * @throws IllegalArgumentException if c₁ ≤ c₀ or the family or side cannot be planned here
      */
@@ -73,7 +75,8 @@ public final class ShapeSizing {
         }
         Map<Integer, Double> cache = new java.util.concurrent.ConcurrentHashMap<>();
         java.util.function.IntToDoubleFunction power = n -> cache.computeIfAbsent(n,
-                x -> PercentilePower.power(family, parameter, side, c0, c1, confidence, x));
+                x -> family == ShapeFamily.FOLDED_NORMAL ? FoldedNormalPower.power(parameter, side, c0, c1, confidence, x)
+                        : PercentilePower.power(family, parameter, side, c0, c1, confidence, x));
         // the gates take about 1-2 % off the bound's power: start each row where the bound alone reaches that much more
         double start = Math.min(wanted / (1 - ProcedurePower.NORMAL_SHAPE_REJECTION) / (1 - TYPICAL_UNSTABLE), 0.999);
         OptionalInt needed = smallestReadings(power, start, Math.max(3, floors.minReadings()));

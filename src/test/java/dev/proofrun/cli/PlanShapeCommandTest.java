@@ -100,8 +100,8 @@ class PlanShapeCommandTest {
     void aFoldedNormalShapeIsWrittenShownReadAndWarnedAbout() throws Exception {
         Path file = dir.resolve("p.json");
         assertEquals(0, run(single(file, "--shape", "folded-normal")), err.toString());
-        assertTrue(out.toString().contains("C1 is planned folded-normal, but its power here is the normal model's, and"
-                + " size --shape cannot plan that shape yet (it plans lognormal, weibull, lognormal3, weibull3)"), out.toString());
+        assertTrue(out.toString().contains("C1 is planned folded-normal, but its power here is the normal model's; size it"
+                + " alone with 'size --shape folded-normal --skewness G --spec upper|lower'"), out.toString());
         assertTrue(Files.readString(file).contains("\"shape\": \"folded-normal\""), Files.readString(file));
         assertEquals(ShapeFamily.FOLDED_NORMAL, PlanFiles.read(file).characteristics().get(0).shape());
         assertEquals(0, run("plan", "show", file.toString()));

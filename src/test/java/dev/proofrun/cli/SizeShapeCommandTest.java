@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
+import dev.proofrun.stats.FoldedNormalPower;
 import dev.proofrun.stats.IndexKind;
 import dev.proofrun.stats.PercentilePower;
 import dev.proofrun.stats.ShapeFamily;
@@ -63,6 +64,25 @@ class SizeShapeCommandTest {
         assertTrue(out.contains("Planned shape lognormal") && out.contains("the shape check (1 %) and the stability step"), out);
     }
 
+    @Test
+    void aFoldedNormalTableIsPlannedThroughItsOwnBound() throws Exception {
+        // skewness 0.7017499382606746 is a folded normal with mean/sigma 1 (SciPy 1.17.1:
+        // scipy.stats.foldnorm.stats(1, moments='s'))
+        assertEquals(0, run("size", "--shape", "folded-normal", "--skewness", "0.7017499382606746", "--spec", "upper",
+                "--target", "1.33", "--expected", "2.0", "--subgroup-size", "5", "--json"), err);
+        JsonNode j = new ObjectMapper().readTree(out);
+        assertEquals("folded-normal", j.get("shape").asText());
+        assertEquals(1.0, j.get("meanRatio").asDouble(), 1e-7);
+        assertEquals(FoldedNormalPower.STUDY_SEED, j.get("studySeed").asLong());
+        JsonNode r = j.get("rows").get(0);
+        assertTrue(r.get("power").asDouble() >= 0.9, r.toString());
+        double bound = FoldedNormalPower.power(j.get("meanRatio").asDouble(), IndexKind.Side.UPPER, 1.33, 2.0, 0.95,
+                r.get("readings").asInt());
+        assertEquals(bound, r.get("boundPower").asDouble(), 1e-12);
+        double gates = r.get("power").asDouble() / bound;
+        assertTrue(gates < 0.99 + 1e-12 && gates > 0.95, r.toString());
+    }
+
     @TempDir
     Path dir;
 
@@ -96,10 +116,15 @@ class SizeShapeCommandTest {
     void refusalsAreOneLineWithExitTwo() {
         assertEquals(2, run("size", "--shape", "gamma", "--skewness", "1", "--spec", "upper", "--target", "1.33", "--expected", "1.67"));
         assertTrue(err.contains("normal, lognormal, weibull, folded-normal"), err);
-        // the folded normal is graded but not yet planned for: refused, naming the shapes size --shape can plan
-        assertEquals(2, run("size", "--shape", "folded-normal", "--skewness", "1", "--spec", "upper", "--target", "1.33",
+        assertEquals(1, err.trim().lines().count(), err);
+        // the folded normal: a skewness above the half-normal's, and a lower limit that the index puts below zero
+        assertEquals(2, run("size", "--shape", "folded-normal", "--skewness", "1.2", "--spec", "upper", "--target", "1.33",
                 "--expected", "1.67"));
-        assertTrue(err.contains("size --shape cannot plan the folded-normal shape") && err.contains("plans lognormal, weibull"), err);
+        assertTrue(err.contains("a folded-normal shape has a skewness between"), err);
+        assertEquals(1, err.trim().lines().count(), err);
+        assertEquals(2, run("size", "--shape", "folded-normal", "--skewness", "0.99", "--spec", "lower", "--target", "1.33",
+                "--expected", "1.67"));
+        assertTrue(err.contains("at or below zero"), err);
         assertEquals(1, err.trim().lines().count(), err);
         assertEquals(2, run("size", "--shape", "weibull", "--spec", "upper", "--target", "1.33", "--expected", "1.67"));
         assertTrue(err.contains("--skewness"), err);

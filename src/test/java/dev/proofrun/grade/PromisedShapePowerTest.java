@@ -3,6 +3,7 @@ package dev.proofrun.grade;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import dev.proofrun.design.ShapeSizing;
+import dev.proofrun.stats.FoldedNormalPower;
 import dev.proofrun.stats.IndexKind;
 import dev.proofrun.stats.PercentilePower;
 import dev.proofrun.stats.ShapeFamily;
@@ -25,17 +26,53 @@ class PromisedShapePowerTest {
     Path dir;
 
     private void check(ShapeFamily family, double parameter) {
-        double promised = PercentilePower.power(family, parameter, IndexKind.Side.UPPER, 1.33, 1.67, 0.95, 125)
-                * ShapeSizing.gates(5, 25);
+        double bound = family == ShapeFamily.FOLDED_NORMAL
+                ? FoldedNormalPower.power(parameter, IndexKind.Side.UPPER, 1.33, 1.67, 0.95, 125)
+                : PercentilePower.power(family, parameter, IndexKind.Side.UPPER, 1.33, 1.67, 0.95, 125);
+        double promised = bound * ShapeSizing.gates(5, 25);
         ShapeStudies.Case c = new ShapeStudies.Case(family, parameter, 1.67, 5, 25, false);
         Map<Verdict, Integer> v = ShapeStudies.run(c, 1.33, 1000, 60_000L, dir);
         double realised = v.getOrDefault(Verdict.DEMONSTRATED, 0) / 1000.0;
+        System.out.printf(java.util.Locale.ROOT, "%s: promised %.4f (bound alone %.4f), realised %.4f %s%n", c.label(),
+                promised, bound, realised, v);
         assertEquals(promised, realised, 0.03, c.label() + " " + v);
     }
 
     @Test
     void lognormalQuarter() {
         check(ShapeFamily.LOGNORMAL, 0.25);
+    }
+
+    /** The folded normal at mean/σ 1 (skewness 0.70), where its bound keeps the least power. */
+    @Test
+    void foldedNormalAtMeanRatioOne() {
+        check(ShapeFamily.FOLDED_NORMAL, 1);
+    }
+
+    @Test
+    @Tag("long")
+    void foldedNormalGrid() {
+        check(ShapeFamily.FOLDED_NORMAL, 0);
+        check(ShapeFamily.FOLDED_NORMAL, 0.5);
+        check(ShapeFamily.FOLDED_NORMAL, 2);
+        check(ShapeFamily.FOLDED_NORMAL, 3);
+    }
+
+    /**
+     * The promise of the planner's own row: {@code size --shape folded-normal} at mean/σ 1, c₁ 2.0, n = 5 (the row's
+     * whole-procedure power, about 0.9) against 1,000 graded studies at that row's k (SE about 0.01).
+     */
+    @Test
+    @Tag("long")
+    void foldedNormalAtThePlannersRow() {
+        ShapeSizing.Row row = ShapeSizing.design(ShapeFamily.FOLDED_NORMAL, 1, IndexKind.Side.UPPER, 1.33, 2.0, 0.95, 0.9,
+                java.util.List.of(5), dev.proofrun.design.PracticeFloors.defaults()).get(0);
+        ShapeStudies.Case c = new ShapeStudies.Case(ShapeFamily.FOLDED_NORMAL, 1, 2.0, 5, row.subgroups(), false);
+        Map<Verdict, Integer> v = ShapeStudies.run(c, 1.33, 1000, 70_000L, dir);
+        double realised = v.getOrDefault(Verdict.DEMONSTRATED, 0) / 1000.0;
+        System.out.printf(java.util.Locale.ROOT, "%s: promised %.4f (bound alone %.4f), realised %.4f %s%n", c.label(),
+                row.power(), row.boundPower(), realised, v);
+        assertEquals(row.power(), realised, 0.03, c.label() + " " + v);
     }
 
     @Test

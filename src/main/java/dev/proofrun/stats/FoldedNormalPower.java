@@ -1,0 +1,205 @@
+package dev.proofrun.stats;
+
+import java.util.Arrays;
+import java.util.Locale;
+import java.util.stream.IntStream;
+import org.apache.commons.rng.sampling.distribution.ZigguratSampler;
+import org.apache.commons.rng.simple.RandomSource;
+import org.apache.commons.statistics.distribution.NormalDistribution;
+
+/**
+ * The power of the grader's capability step under a declared folded normal: the chance that the lower bound of
+ * {@link FoldedNormalBound} (test inversion at the least favourable mean/σ of a confidence set, the grader's seed)
+ * reaches c₀ when the readings are |θ + Z|·σ with true percentile index c₁, for one specification limit and N
+ * readings (the index is an overall one, so only N matters). The shape check and the stability step are not counted
+ * here.
+ *
+ * <p>Method (seeded simulation of the grader's own procedure). Each of {@value #STUDIES} studies draws N readings
+ * |θ + Zᵢ|, fits them as the grader does ({@link ShapeFitter#fit}), and asks whether the grader's bound reaches c₀.
+ * That bound is the smallest, over the values of mean/σ in the study's confidence set
+ * ({@link FoldedNormalBound#confidenceSet}), of c_L(g; ĉ), and each c_L(g; ĉ) rises with the study's estimated index ĉ
+ * (every refitted vⱼ = Q₅₀ + ĉ(Q₉₉.₈₆₅ − Q₅₀) rises with ĉ, so does their interpolated α-quantile). So the bound reaches
+ * c₀ exactly when ĉ is at least every threshold c*(g) of the set, c*(g) solving c_L(g; c) = c₀; the thresholds are
+ * found once per N by bisection, on the grader's own table (same draws, same seed), and a study within the
+ * bisection's last bracket is decided by computing c_L(g; ĉ) itself. The result is the grader's decision for each
+ * study (checked against {@link FoldedNormalBound#bounds} in the tests). {@value #STUDIES} studies give a Monte-Carlo
+ * standard error of at most 0.5/√{@value #STUDIES} = 0.0079 on the power.
+ *
+ * <p>Skewness: for |Y|, Y normal(θ, 1), with E|Y| = √(2/π)e^{−θ²/2} + θ(1 − 2Φ(−θ)), E Y² = θ² + 1 and
+ * E|Y|³ = (θ³ + 3θ)(1 − 2Φ(−θ)) + √(2/π)(θ² + 2)e^{−θ²/2}; it falls from 0.995 at the half-normal (θ = 0) towards 0.
+ */
+public final class FoldedNormalPower {
+
+    /** Simulated studies per N. */
+    public static final int STUDIES = 4000;
+    /** The seed of the simulated studies (the grader's table keeps {@link PivotalBound#DEFAULT_SEED}). */
+    public static final long STUDY_SEED = 0x5f01d3L;
+    /** The largest mean/σ that a skewness is turned into (skewness about 1e-7 there). */
+    static final double THETA_HIGH = 6;
+
+    private static final NormalDistribution STANDARD = NormalDistribution.of(0, 1);
+    private static final double ROOT_2_OVER_PI = Math.sqrt(2 / Math.PI);
+
+    private FoldedNormalPower() {
+    }
+
+    /** The skewness of |Y|, Y normal(θ, 1). */
+    public static double skewness(double theta) {
+        double t = 1 - 2 * STANDARD.cumulativeProbability(-theta);
+        double e = ROOT_2_OVER_PI * Math.exp(-0.5 * theta * theta);
+        double m1 = e + theta * t;
+        double m2 = theta * theta + 1;
+        double m3 = (theta * theta * theta + 3 * theta) * t + e * (theta * theta + 2);
+        double var = m2 - m1 * m1;
+        return (m3 - 3 * m1 * m2 + 2 * m1 * m1 * m1) / Math.pow(var, 1.5);
+    }
+
+    /**
+     * The mean/σ θ giving skewness {@code g} (bisection on [0, {@value #THETA_HIGH}]).
+     *
+     * @throws IllegalArgumentException for a skewness a folded normal cannot have (the message gives the range)
+     */
+    public static double meanRatio(double g) {
+        double max = skewness(0);
+        double min = skewness(THETA_HIGH);
+        if (g >= max && g <= max + 5e-4) {
+            return 0;
+        }
+        if (!(g > min && g < max)) {
+            throw new IllegalArgumentException(String.format(Locale.ROOT,
+                    "a folded-normal shape has a skewness between %.3g and %.4g (the half-normal): %s", min, max, g));
+        }
+        double lo = 0;
+        double hi = THETA_HIGH;
+        for (int i = 0; i < 200 && hi - lo > 1e-13; i++) {
+            double mid = 0.5 * (lo + hi);
+            if (skewness(mid) > g) {
+                lo = mid;
+            } else {
+                hi = mid;
+            }
+        }
+        return 0.5 * (lo + hi);
+    }
+
+    /**
+     * @param theta mean/σ of the true model (0: the half-normal)
+     * @param side  {@link IndexKind.Side#UPPER} or {@link IndexKind.Side#LOWER}
+     * @throws IllegalArgumentException for a two-sided side, or a lower limit that c₁ would put at or below zero
+     */
+    public static double power(double theta, IndexKind.Side side, double c0, double c1, double confidence, int readings) {
+        Decision d = new Decision(theta, side, c0, c1, confidence, readings);
+        long pass = IntStream.range(0, STUDIES).parallel().filter(s -> d.demonstrates(study(theta, readings, s))).count();
+        return pass / (double) STUDIES;
+    }
+
+    /**
+     * The readings of simulated study s at N (σ = 1): its own stream, seed {@link #STUDY_SEED} + 1,000,003·N + s (a
+     * long seed, which the generator mixes), so the result does not depend on threads.
+     */
+    static double[] study(double theta, int readings, int s) {
+        ZigguratSampler.NormalizedGaussian z = ZigguratSampler.NormalizedGaussian.of(
+                RandomSource.XO_RO_SHI_RO_128_PP.create(STUDY_SEED + 1_000_003L * readings + s));
+        double[] x = new double[readings];
+        for (int i = 0; i < readings; i++) {
+            x[i] = Math.abs(theta + z.sample());
+        }
+        return x;
+    }
+
+    /** The grader's decision at N for one limit placed at true index c₁, with its thresholds per value of mean/σ. */
+    static final class Decision {
+        private final boolean upper;
+        private final double c0;
+        private final double limit;
+        private final double gamma;
+        private final double alpha;
+        private final FoldedNormalBound.Table table;
+        private final double[] below;
+        private final double[] atOrAbove;
+
+        Decision(double theta, IndexKind.Side side, double c0, double c1, double confidence, int readings) {
+            if (side != IndexKind.Side.UPPER && side != IndexKind.Side.LOWER) {
+                throw new IllegalArgumentException("folded-normal power is for one limit: " + side);
+            }
+            this.upper = side == IndexKind.Side.UPPER;
+            this.c0 = c0;
+            double qL = FoldedNormal.quantile(theta, 1, PercentileIndex.LOW);
+            double q50 = FoldedNormal.quantile(theta, 1, 0.5);
+            double qH = FoldedNormal.quantile(theta, 1, PercentileIndex.HIGH);
+            this.limit = upper ? q50 + c1 * (qH - q50) : q50 - c1 * (q50 - qL);
+            if (!(limit > 0)) {
+                throw new IllegalArgumentException(String.format(Locale.ROOT, "with this shape an index of %.3f puts the"
+                        + " lower limit at or below zero, where the folded-normal model has no readings; such a limit cannot"
+                        + " be missed", c1));
+            }
+            this.gamma = FoldedNormalBound.GAMMA_SHARE * (1 - confidence);
+            this.alpha = 1 - confidence - gamma;
+            this.table = FoldedNormalBound.table(readings, PivotalBound.DEFAULT_SEED);
+            int grid = FoldedNormalBound.THETAS.length;
+            below = new double[grid];
+            atOrAbove = new double[grid];
+            for (int g = 0; g < grid; g++) {
+                bracket(g);
+            }
+        }
+
+        /** Whether the grader's lower bound from these readings reaches c₀ (a failed fit does not). */
+        boolean demonstrates(double[] x) {
+            ShapeFitter.Outcome o = ShapeFitter.fit(ShapeFamily.FOLDED_NORMAL, x);
+            if (!o.fitted()) {
+                return false;
+            }
+            ShapeFit fit = o.fit();
+            double lo = fit.quantile(PercentileIndex.LOW);
+            double med = fit.quantile(0.5);
+            double hi = fit.quantile(PercentileIndex.HIGH);
+            double c = upper ? (limit - med) / (hi - med) : (med - limit) / (med - lo);
+            if (!Double.isFinite(c)) {
+                return false;
+            }
+            boolean[] set = FoldedNormalBound.confidenceSet(table, fit.location() / fit.scale(), gamma);
+            for (int g = 0; g < set.length; g++) {
+                if (set[g] && !(c >= atOrAbove[g] || (c > below[g] && lowerAt(g, c) >= c0))) {
+                    return false;
+                }
+            }
+            return true;
+        }
+
+        /** c_L(g; c) as {@link FoldedNormalBound} computes it for one value of mean/σ. */
+        double lowerAt(int g, double c) {
+            double[] v = new double[table.low()[g].length];
+            for (int j = 0; j < v.length; j++) {
+                double med = table.median()[g][j];
+                v[j] = upper ? med + c * (table.high()[g][j] - med) : med - c * (med - table.low()[g][j]);
+            }
+            Arrays.sort(v);
+            double[] q = table.truth()[g];
+            return upper ? (PivotalBound.orderStatistic(v, alpha) - q[1]) / (q[2] - q[1])
+                    : (q[1] - PivotalBound.orderStatistic(v, 1 - alpha)) / (q[1] - q[0]);
+        }
+
+        /** below[g] &lt; c*(g) ≤ atOrAbove[g], within 1e-12 relative, by bisection on the rising c_L(g; c). */
+        private void bracket(int g) {
+            double lo = 0;
+            double hi = 1;
+            while (lowerAt(g, lo) >= c0 && lo > -1e6) {
+                lo = 2 * lo - 1;
+            }
+            while (lowerAt(g, hi) < c0 && hi < 1e6) {
+                hi = 2 * hi;
+            }
+            for (int i = 0; i < 200 && hi - lo > 1e-12 * Math.max(1, Math.abs(hi)); i++) {
+                double mid = 0.5 * (lo + hi);
+                if (lowerAt(g, mid) >= c0) {
+                    hi = mid;
+                } else {
+                    lo = mid;
+                }
+            }
+            below[g] = lo;
+            atOrAbove[g] = lowerAt(g, hi) >= c0 ? hi : Double.POSITIVE_INFINITY;
+        }
+    }
+}
