@@ -1,6 +1,7 @@
 package dev.proofrun.grade;
 
 import dev.proofrun.plan.OffsetTimes;
+import dev.proofrun.text.CsvDialect;
 import dev.proofrun.text.Decimals;
 import dev.proofrun.text.FormulaGuard;
 import dev.proofrun.text.Location;
@@ -248,7 +249,7 @@ final class ReturnedData implements RowHandler {
     }
 
     private void reading(SlotReadings col, int ci, int si, long row, String text, int column, String id) {
-        double v = CellValues.number(text);
+        double v = CsvDialect.number(text);
         if (Double.isInfinite(v) || Decimals.namesNonFinite(text)) { // 1e309 overflows; a gauge may write "Infinity"
             col.spoiled[si] = true;
             col.outOfReach++;

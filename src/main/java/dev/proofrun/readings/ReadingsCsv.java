@@ -29,7 +29,7 @@ import java.util.OptionalInt;
  * </ul>
  * Rows are numbered as a spreadsheet shows them (the header is row 1); blank lines are skipped. The file is in
  * the one dialect of {@link CsvDialect}: {@code ,} or {@code ;} as the header uses more, a point or a single
- * comma as the decimal mark ({@link DecimalCell}); {@code NaN}, {@code Infinity} and numbers that overflow ({@code 1e309})
+ * comma as the decimal mark ({@link CsvDialect#number}); {@code NaN}, {@code Infinity} and numbers that overflow ({@code 1e309})
  * are refused as not finite, and readings beyond ±{@value #MAGNITUDE} as too large to compute with. Every problem is a {@link UserException} naming file, row and
  * column.
  */
@@ -210,7 +210,7 @@ public final class ReadingsCsv {
             }
             return Double.NaN;
         }
-        double x = DecimalCell.parse(text);
+        double x = CsvDialect.number(text);
         Location where = Location.cell(name, r.number(), column);
         if (Double.isInfinite(x) || Decimals.namesNonFinite(text)) {
             throw new UserException(where, ReadingsMessage.NOT_FINITE, Shown.cell(text));
