@@ -15,8 +15,8 @@ import java.nio.file.Path;
  * that; such a file is refused at the row where the quote opens). Rows are the file's line numbers, as a
  * spreadsheet shows them; the first non-blank row is the header. Streams: one line in memory at a time.
  *
- * <p>Hand-made rather than commons-csv because it reads a returned file of 1,000,000 readings about twice as
- * fast (JMH, {@code src/bench/.../CsvReaderBenchmark}; {@code docs/decisions/one-csv-reader.md}).
+ * <p>Hand-made rather than commons-csv because it splits a returned file of 1,000,000 readings about three times
+ * as fast (JMH, {@code src/bench/.../CsvReaderBenchmark}; {@code docs/decisions/one-csv-reader.md}).
  *
  * <pre>
  * try (CsvReader csv = CsvReader.open(file, display, MyMessage.UNREADABLE, MyMessage.BAD_CSV)) {
