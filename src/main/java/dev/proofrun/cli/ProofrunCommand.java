@@ -1,5 +1,8 @@
 package dev.proofrun.cli;
 
+import dev.proofrun.text.DecimalMark;
+import dev.proofrun.text.Decimals;
+import dev.proofrun.text.Shown;
 import dev.proofrun.text.UserException;
 import java.io.PrintWriter;
 import java.util.List;
@@ -109,11 +112,34 @@ public final class ProofrunCommand implements Runnable {
         return EXIT_INPUT;
     }
 
+    /**
+     * A number in an option value, by the one number rule with a decimal point ({@link DecimalMark#POINT}): no
+     * {@code 0x1p3} or {@code 1.5d}, which Java's own parser would take. A number that overflows, and a name of a
+     * value that is not finite ({@code Infinity}, {@code NaN}, {@link Decimals#namesNonFinite}), come back as that
+     * value, so the option's own check says "must be a finite number".
+     */
+    static Double optionNumber(String text) {
+        String t = text.trim();
+        if (Decimals.namesNonFinite(t)) {
+            boolean nan = t.replace("+", "").replace("-", "").equalsIgnoreCase("nan");
+            return nan ? Double.NaN : t.startsWith("-") ? Double.NEGATIVE_INFINITY : Double.POSITIVE_INFINITY;
+        }
+        double v = DecimalMark.POINT.parse(t);
+        if (Double.isNaN(v)) {
+            throw new CommandLine.TypeConversionException("'" + Shown.cell(text) + "' is not a number"
+                    + (DecimalMark.POINT.otherMarkIn(t) ? " (use a decimal point: " + t.replace(',', '.') + ")" : ""));
+        }
+        return v;
+    }
+
     private static CommandLine configured(List<Class<?>> subcommands) {
         CommandLine cl = new CommandLine(new ProofrunCommand());
         for (Class<?> c : subcommands) {
             cl.addSubcommand(c);
         }
+        // after the subcommands: picocli hands a converter to the commands present when it is registered
+        cl.registerConverter(Double.class, ProofrunCommand::optionNumber);
+        cl.registerConverter(Double.TYPE, ProofrunCommand::optionNumber);
         cl.setParameterExceptionHandler(ProofrunCommand::refuseArguments);
         cl.setExecutionExceptionHandler((ex, line, parseResult) -> {
             Throwable cause = ex;

@@ -1,7 +1,6 @@
 package dev.proofrun.grade;
 
 import dev.proofrun.plan.OffsetTimes;
-import dev.proofrun.text.CsvDialect;
 import java.time.LocalDate;
 import java.time.LocalDateTime;
 import java.time.LocalTime;
@@ -10,20 +9,10 @@ import java.time.ZoneId;
 import java.time.ZonedDateTime;
 import java.time.format.DateTimeParseException;
 
-/** Reading the cells of returned files: numbers in either decimal convention, and taken times. */
+/** Reading the taken times of returned files (numbers are read by the one rule, {@code text.CsvDialect#number}). */
 final class CellValues {
 
     private CellValues() {
-    }
-
-    /**
-     * A number in a returned file (CSV or XLSX): the dialect's rule ({@link CsvDialect#number}), a point or a
-     * single comma as the decimal mark, as spreadsheets in decimal-comma locales write it.
-     *
-     * @return the value, or NaN when the text is not a number
-     */
-    static double number(String text) {
-        return CsvDialect.number(text);
     }
 
     /**

@@ -1,12 +1,12 @@
 package dev.proofrun.grade;
 
 import dev.proofrun.plan.OffsetTimes;
+import dev.proofrun.text.CsvDialect;
 import dev.proofrun.text.Decimals;
 import dev.proofrun.text.FormulaGuard;
 import dev.proofrun.text.Location;
 import dev.proofrun.text.Shown;
 import dev.proofrun.text.UserException;
-import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Locale;
@@ -249,7 +249,7 @@ final class ReturnedData implements RowHandler {
     }
 
     private void reading(SlotReadings col, int ci, int si, long row, String text, int column, String id) {
-        double v = CellValues.number(text);
+        double v = CsvDialect.number(text);
         if (Double.isInfinite(v) || Decimals.namesNonFinite(text)) { // 1e309 overflows; a gauge may write "Infinity"
             col.spoiled[si] = true;
             col.outOfReach++;
@@ -360,60 +360,8 @@ final class ReturnedData implements RowHandler {
     }
 
     private Collection finish(int ci, int slotsSoFar, int allowedShortfall, ProblemLog log) {
-        SlotReadings col = collected[ci];
-        String id = plan.characteristics().get(ci).id();
-        int k = slotsSoFar;
-        List<double[]> subgroups = new ArrayList<>();
-        List<String> slots = new ArrayList<>();
-        int missing = 0;
-        int incomplete = 0;
-        int lateCount = 0;
-        int previous = -1;
-        for (int s = 0; s < k; s++) {
-            String slotId = plan.slots().get(s).id();
-            if (col.row[s] == 0) {
-                missing++;
-                log.add(Location.file(display), Severity.ERROR, id, GradeMessage.MISSING_SLOT, slotId, id);
-                continue;
-            }
-            if (col.count[s] == 0 && !col.spoiled[s]) {
-                // the prefilled row came back with every box empty: the slot was not taken, not taken short
-                missing++;
-                log.add(Location.cell(display, col.row[s], null), Severity.ERROR, id, GradeMessage.BLANK_SLOT, slotId, id);
-                continue;
-            }
-            boolean late = col.late[s];
-            if (col.taken[s] != Long.MIN_VALUE) {
-                if (previous >= 0 && col.taken[s] < col.taken[previous]) {
-                    late = true;
-                    log.add(Location.cell(display, col.row[s], takenCol >= 0 ? name(takenCol) : null), Severity.WARNING, id,
-                            GradeMessage.OUT_OF_ORDER, slotId, java.time.Instant.ofEpochSecond(col.taken[s]).atZone(plan.zone()).toOffsetDateTime(),
-                            plan.slots().get(previous).id(),
-                            java.time.Instant.ofEpochSecond(col.taken[previous]).atZone(plan.zone()).toOffsetDateTime());
-                }
-                previous = s;
-            }
-            if (late) {
-                lateCount++;
-            }
-            int c = col.count[s];
-            if (c < n || col.spoiled[s]) {
-                incomplete++;
-                log.add(Location.cell(display, col.row[s], null), Severity.ERROR, id, GradeMessage.MISSING_READINGS,
-                        slotId, id, c, n);
-            } else if (c > n) {
-                incomplete++;
-                log.add(Location.cell(display, col.row[s], null), Severity.ERROR, id, GradeMessage.EXTRA_READINGS, slotId, id, c, n);
-            } else {
-                double[] g = new double[n];
-                System.arraycopy(col.values, s * n, g, 0, n);
-                subgroups.add(g);
-                slots.add(slotId);
-            }
-        }
-        Completeness completeness = new Completeness(k, n, subgroups.size(), incomplete, missing,
-                (long) subgroups.size() * n, col.flagged, lateCount, allowedShortfall);
-        return new Collection(completeness, subgroups, slots, col.outOfReach);
+        return collected[ci].finish(plan, slotsSoFar, allowedShortfall, plan.characteristics().get(ci).id(),
+                display, takenCol >= 0 ? name(takenCol) : null, log);
     }
 
     /** All problems so far, in the order found, then the counts of those not listed. */

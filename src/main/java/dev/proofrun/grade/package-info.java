@@ -40,10 +40,11 @@
  * demonstrated (futility, or the last look short) or {@code Verdict.CONTINUE} with the next stage's slots.
  * See docs/decisions/staged-studies-grading.md.
  *
- * <p>Reading streams one row at a time: {@code CsvLines}/{@code CsvTable} (UTF-8, {@code ,} or {@code ;} —
- * whichever the header has more of) and {@code XlsxTable} (POI's SAX reader) feed {@code ReturnedData}, which
- * keeps primitive arrays. {@code CellValues} reads numbers ({@code .} or a single {@code ,} as the decimal mark,
- * the same double as {@code Double.parseDouble}) and taken times. {@code DemoReturn} and
+ * <p>Reading streams one row at a time: {@code CsvTable} (the one CSV reader, {@code text.CsvReader}: UTF-8,
+ * {@code ,} or {@code ;} — whichever the header has more of) and {@code XlsxTable} (POI's SAX reader) feed
+ * {@code ReturnedData}, which keeps primitive arrays. Numbers follow the one rule ({@code text.CsvDialect#number}:
+ * {@code .} or a single {@code ,} as the decimal mark, the same double as {@code Double.parseDouble});
+ * {@code CellValues} reads taken times. {@code DemoReturn} and
  * {@code SimulatedReturn} make the demo's seeded returned file, shared by {@code proofrun demo}, the wizard
  * and the tests.
  */

@@ -125,7 +125,7 @@ public final class PlotArea {
 
     /**
      * Round tick values inside [lo, hi]: steps of 1, 2 or 5 times a power of ten, about {@code count} of
-     * them (the usual "nice numbers" choice).
+     * them (the usual "nice numbers" choice, {@link #step}).
      */
     public static List<Double> ticks(double lo, double hi, int count) {
         List<Double> out = new ArrayList<>();
@@ -133,14 +133,28 @@ public final class PlotArea {
         if (!(span > 0) || !Double.isFinite(span)) {
             return out;
         }
-        double raw = span / Math.max(1, count);
-        double mag = Math.pow(10, Math.floor(Math.log10(raw)));
-        double norm = raw / mag;
-        double step = (norm < 1.5 ? 1 : norm < 3 ? 2 : norm < 7 ? 5 : 10) * mag;
+        double step = step(span, count);
         for (double t = Math.ceil(lo / step) * step; t <= hi + step * 1e-9; t += step) {
             out.add(Math.abs(t) < step * 1e-9 ? 0.0 : t);
         }
         return out;
+    }
+
+    /**
+     * The one tick rule of proofrun's charts, on paper and on screen: the step of 1, 2 or 5 × 10<sup>m</sup>
+     * nearest to {@code span / count} (the raw step's mantissa below 1.5 → 1, below 3 → 2, below 7 → 5, else
+     * 10). The density, {@code count}, is each chart's own choice: the report's blocks ask for 5 on the y axis and
+     * 8 on the x axis, the screen for as many as its size holds with room for their labels. 1 for a span that
+     * is not positive and finite.
+     */
+    public static double step(double span, int count) {
+        double raw = span / Math.max(1, count);
+        if (!(raw > 0) || !Double.isFinite(raw)) {
+            return 1;
+        }
+        double mag = Math.pow(10, Math.floor(Math.log10(raw)));
+        double norm = raw / mag;
+        return (norm < 1.5 ? 1 : norm < 3 ? 2 : norm < 7 ? 5 : 10) * mag;
     }
 
     /** A tick label with as many decimals as the tick step needs (step 5 → 0, 0.002 → 3, 0.0005 → 4). */

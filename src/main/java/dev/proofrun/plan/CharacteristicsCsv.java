@@ -5,13 +5,12 @@ import dev.proofrun.design.Requirement;
 import dev.proofrun.stats.IndexKind;
 import dev.proofrun.stats.ShapeFamily;
 import dev.proofrun.stats.SpecLimits;
+import dev.proofrun.text.CsvDialect;
+import dev.proofrun.text.CsvReader;
+import dev.proofrun.text.Decimals;
 import dev.proofrun.text.Location;
-import dev.proofrun.text.TextFile;
 import dev.proofrun.text.UserException;
-import java.io.IOException;
-import java.io.Reader;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.HashSet;
@@ -22,9 +21,6 @@ import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.Set;
 import java.util.TreeMap;
-import org.apache.commons.csv.CSVFormat;
-import org.apache.commons.csv.CSVParser;
-import org.apache.commons.csv.CSVRecord;
 
 /**
  * Many characteristics at once from a CSV file with a header row. Columns (names case-insensitive, any
@@ -33,8 +29,10 @@ import org.apache.commons.csv.CSVRecord;
  * {@code lognormal3} or {@code weibull3} shape, required there and refused elsewhere). Empty cells mean "none" for
  * nominal/lsl/usl/expected_cp/threshold,
  * "the command's default" for index and confidence, and "normal" for shape (the names are those of
- * {@link ShapeFamily}; an unknown name is refused with the list). Numbers use a decimal point; a row with more cells than
- * the header (a decimal comma splits a number) is refused.
+ * {@link ShapeFamily}; an unknown name is refused with the list). The file is read by the one reader in the one
+ * dialect ({@link CsvReader}, {@link CsvDialect}: {@code ,} or {@code ;} as the header uses more, a point or a
+ * single comma as the decimal mark); a row with more cells than the header (an unquoted decimal comma in a
+ * {@code ,} file splits a number) is refused.
  */
 public final class CharacteristicsCsv {
 
@@ -48,31 +46,32 @@ public final class CharacteristicsCsv {
      */
     public static List<Characteristic> read(Path file, IndexKind defaultIndex, double defaultConfidence) {
         String name = file.toString();
-        TextFile.requireText(file, name);
-        try (Reader in = Files.newBufferedReader(file, StandardCharsets.UTF_8);
-             CSVParser parser = CSVFormat.DEFAULT.builder().setHeader().setSkipHeaderRecord(true)
-                     .setIgnoreSurroundingSpaces(true).setIgnoreEmptyLines(true).build().parse(in)) {
-            Map<String, String> header = new TreeMap<>();
-            for (String h : parser.getHeaderNames()) {
-                header.put(h.trim().replace('\uFEFF', ' ').trim().toLowerCase(Locale.ROOT), h);
+        try (CsvReader csv = CsvReader.open(file, name, PlanMessage.CANNOT_READ, PlanMessage.CSV_BAD_CELL)) {
+            if (!csv.next()) {
+                throw new UserException(Location.file(name), PlanMessage.CSV_NO_ROWS);
+            }
+            String[] names = csv.copy();
+            Map<String, Integer> header = new TreeMap<>();
+            for (int i = 0; i < names.length; i++) {
+                header.put(names[i].toLowerCase(Locale.ROOT), i);
             }
             for (String col : REQUIRED) {
                 if (!header.containsKey(col)) {
-                    throw new UserException(Location.cell(name, 1, col), PlanMessage.CSV_MISSING_COLUMN, col,
+                    throw new UserException(Location.cell(name, csv.row(), col), PlanMessage.CSV_MISSING_COLUMN, col,
                             String.join(",", REQUIRED));
                 }
             }
             List<Characteristic> out = new ArrayList<>();
             Set<String> ids = new HashSet<>();
-            for (CSVRecord r : parser) {
-                long row = r.getRecordNumber() + 1;
-                for (int i = parser.getHeaderNames().size(); i < r.size(); i++) {
-                    if (!r.get(i).isBlank()) {
-                        throw new UserException(Location.cell(name, row, null), PlanMessage.CSV_EXTRA_CELLS, r.size(),
-                                parser.getHeaderNames().size());
+            while (csv.next()) {
+                long row = csv.row();
+                for (int i = names.length; i < csv.count(); i++) {
+                    if (!csv.cell(i).isEmpty()) {
+                        throw new UserException(Location.cell(name, row, null), PlanMessage.CSV_EXTRA_CELLS, csv.count(),
+                                names.length);
                     }
                 }
-                Cells c = new Cells(name, row, r, header);
+                Cells c = new Cells(name, row, csv.copy(), header);
                 String id = c.text("id", true);
                 if (!ids.add(id)) {
                     throw new UserException(Location.cell(name, row, "id"), PlanMessage.CSV_BAD_CELL, "the id " + id + " is used twice");
@@ -92,7 +91,7 @@ public final class CharacteristicsCsv {
                 throw new UserException(Location.file(name), PlanMessage.CSV_NO_ROWS);
             }
             return out;
-        } catch (IOException | java.io.UncheckedIOException e) {
+        } catch (NoSuchFileException e) {
             throw new UserException(Location.file(name), PlanMessage.CANNOT_READ, e.getMessage());
         } catch (IllegalArgumentException e) {
             throw new UserException(Location.file(name), PlanMessage.CSV_BAD_CELL, e.getMessage());
@@ -117,13 +116,13 @@ public final class CharacteristicsCsv {
     private static final class Cells {
         private final String file;
         private final long row;
-        private final CSVRecord record;
-        private final Map<String, String> header;
+        private final String[] cells;
+        private final Map<String, Integer> header;
 
-        Cells(String file, long row, CSVRecord record, Map<String, String> header) {
+        Cells(String file, long row, String[] cells, Map<String, Integer> header) {
             this.file = file;
             this.row = row;
-            this.record = record;
+            this.cells = cells;
             this.header = header;
         }
 
@@ -132,11 +131,8 @@ public final class CharacteristicsCsv {
         }
 
         String raw(String col) {
-            String h = header.get(col);
-            if (h == null || !record.isSet(h)) {
-                return "";
-            }
-            return record.get(h).trim();
+            Integer at = header.get(col);
+            return at == null || at >= cells.length ? "" : cells[at];
         }
 
         String text(String col, boolean required) {
@@ -152,15 +148,11 @@ public final class CharacteristicsCsv {
             if (v.isEmpty()) {
                 return OptionalDouble.empty();
             }
-            try {
-                double x = Double.parseDouble(v);
-                if (!Double.isFinite(x)) {
-                    throw new NumberFormatException();
-                }
-                return OptionalDouble.of(x);
-            } catch (NumberFormatException e) {
+            double x = CsvDialect.number(v);
+            if (!Double.isFinite(x) || Decimals.namesNonFinite(v)) {
                 throw new UserException(Location.cell(file, row, col), PlanMessage.CSV_BAD_CELL, "not a number: '" + v + "'");
             }
+            return OptionalDouble.of(x);
         }
 
         double required(String col) {

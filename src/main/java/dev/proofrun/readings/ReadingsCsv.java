@@ -1,33 +1,24 @@
 package dev.proofrun.readings;
 
 import dev.proofrun.text.CsvDialect;
+import dev.proofrun.text.CsvReader;
 import dev.proofrun.text.Decimals;
 import dev.proofrun.text.Location;
 import dev.proofrun.text.Shown;
-import dev.proofrun.text.TextFile;
 import dev.proofrun.text.UserException;
-import java.io.BufferedReader;
-import java.io.IOException;
-import java.io.UncheckedIOException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.HashMap;
-import java.util.Iterator;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.OptionalInt;
-import org.apache.commons.csv.CSVFormat;
-import org.apache.commons.csv.CSVParser;
-import org.apache.commons.csv.CSVRecord;
 
 /**
- * Reads a CSV file of readings for a capability estimate, one record at a time (commons-csv), in one of
+ * Reads a CSV file of readings for a capability estimate, one row at a time ({@link CsvReader}), in one of
  * three layouts chosen by the header (names case-insensitive, other columns ignored):
  * <ul>
  * <li>{@code value}: one reading per row, in time order; with {@code subgroupSize} consecutive
@@ -38,7 +29,7 @@ import org.apache.commons.csv.CSVRecord;
  * </ul>
  * Rows are numbered as a spreadsheet shows them (the header is row 1); blank lines are skipped. The file is in
  * the one dialect of {@link CsvDialect}: {@code ,} or {@code ;} as the header uses more, a point or a single
- * comma as the decimal mark ({@link DecimalCell}); {@code NaN}, {@code Infinity} and numbers that overflow ({@code 1e309})
+ * comma as the decimal mark ({@link CsvDialect#number}); {@code NaN}, {@code Infinity} and numbers that overflow ({@code 1e309})
  * are refused as not finite, and readings beyond ±{@value #MAGNITUDE} as too large to compute with. Every problem is a {@link UserException} naming file, row and
  * column.
  */
@@ -50,9 +41,6 @@ public final class ReadingsCsv {
      * error such as 1e300. The grader uses the same bound.
      */
     static final double MAGNITUDE = 1e100;
-
-    private static final CSVFormat FORMAT = CSVFormat.DEFAULT.builder()
-            .setIgnoreEmptyLines(false).setTrim(true).get();
 
     private ReadingsCsv() {
     }
@@ -70,35 +58,15 @@ public final class ReadingsCsv {
         if (subgroupSize.isPresent() && subgroupSize.getAsInt() < 1) {
             throw new UserException(Location.file(name), ReadingsMessage.BAD_SUBGROUP_SIZE, subgroupSize.getAsInt());
         }
-        TextFile.requireText(file, name);
-        try (BufferedReader in = Files.newBufferedReader(file, StandardCharsets.UTF_8);
-                CSVParser parser = CSVParser.builder().setReader(in)
-                        .setFormat(FORMAT.builder().setDelimiter(separator(file)).get()).get()) {
-            return parse(name, parser.iterator(), subgroupSize);
+        try (CsvReader csv = CsvReader.open(file, name, ReadingsMessage.NOT_READABLE, ReadingsMessage.BAD_CSV)) {
+            return parse(name, csv, subgroupSize);
         } catch (NoSuchFileException e) {
             throw new UserException(Location.file(name), ReadingsMessage.NOT_FOUND);
-        } catch (IOException e) {
-            throw new UserException(Location.file(name), ReadingsMessage.NOT_READABLE, e.getMessage());
         }
     }
 
-    /** The dialect's separator, from the file's first non-blank line (read on its own: a header is short). */
-    private static char separator(Path file) throws IOException {
-        try (BufferedReader in = Files.newBufferedReader(file, StandardCharsets.UTF_8)) {
-            for (String line = in.readLine(); line != null; line = in.readLine()) {
-                if (!line.isBlank()) {
-                    return CsvDialect.separator(line);
-                }
-            }
-        }
-        return ',';
-    }
-
-    private static Readings parse(String name, Iterator<CSVRecord> records, OptionalInt subgroupSize) {
-        CSVRecord header = next(name, records, 1);
-        while (header != null && blank(header)) {
-            header = next(name, records, header.getRecordNumber() + 1);
-        }
+    private static Readings parse(String name, CsvReader records, OptionalInt subgroupSize) {
+        Row header = next(records);
         if (header == null) {
             throw new UserException(Location.file(name), ReadingsMessage.EMPTY_FILE);
         }
@@ -116,21 +84,18 @@ public final class ReadingsCsv {
             requireNoSize(name, subgroupSize, SubgroupLayout.WIDE);
             return wide(name, records, header, columns);
         }
-        throw new UserException(Location.cell(name, header.getRecordNumber(), null), ReadingsMessage.NO_HEADER);
+        throw new UserException(Location.cell(name, header.number(), null), ReadingsMessage.NO_HEADER);
     }
 
-    private static Readings values(String name, Iterator<CSVRecord> records, CSVRecord header, int value,
+    private static Readings values(String name, CsvReader records, Row header, int value,
             OptionalInt subgroupSize) {
         double[] xs = new double[1024];
         long[] rows = new long[1024];
         int count = 0;
-        long row = header.getRecordNumber();
+        long row = header.number();
         String column = header.get(value);
-        for (CSVRecord r = next(name, records, row + 1); r != null; r = next(name, records, row + 1)) {
-            row = r.getRecordNumber();
-            if (blank(r)) {
-                continue;
-            }
+        for (Row r = next(records); r != null; r = next(records)) {
+            row = r.number();
             checkWidth(name, r, header);
             if (count == xs.length) {
                 xs = Arrays.copyOf(xs, 2 * count);
@@ -154,17 +119,14 @@ public final class ReadingsCsv {
         return new Readings(name, SubgroupLayout.VALUES, groups, count);
     }
 
-    private static Readings labelled(String name, Iterator<CSVRecord> records, CSVRecord header, int value, int label) {
+    private static Readings labelled(String name, CsvReader records, Row header, int value, int label) {
         Map<String, double[]> groups = new LinkedHashMap<>();
         Map<String, Integer> sizes = new HashMap<>();
         long count = 0;
-        long row = header.getRecordNumber();
+        long row = header.number();
         String valueColumn = header.get(value);
-        for (CSVRecord r = next(name, records, row + 1); r != null; r = next(name, records, row + 1)) {
-            row = r.getRecordNumber();
-            if (blank(r)) {
-                continue;
-            }
+        for (Row r = next(records); r != null; r = next(records)) {
+            row = r.number();
             checkWidth(name, r, header);
             String key = cell(r, label);
             if (key.isEmpty()) {
@@ -187,7 +149,7 @@ public final class ReadingsCsv {
         return new Readings(name, SubgroupLayout.LABELLED, list, count);
     }
 
-    private static Readings wide(String name, Iterator<CSVRecord> records, CSVRecord header, Map<String, Integer> columns) {
+    private static Readings wide(String name, CsvReader records, Row header, Map<String, Integer> columns) {
         int width = 0;
         for (String c : columns.keySet()) {
             if (c.matches("x[1-9][0-9]{0,3}")) {
@@ -198,19 +160,16 @@ public final class ReadingsCsv {
         for (int j = 1; j <= width; j++) {
             Integer at = columns.get("x" + j);
             if (at == null) {
-                throw new UserException(Location.cell(name, header.getRecordNumber(), null), ReadingsMessage.MISSING_COLUMN, j);
+                throw new UserException(Location.cell(name, header.number(), null), ReadingsMessage.MISSING_COLUMN, j);
             }
             index[j - 1] = at;
         }
         List<double[]> groups = new ArrayList<>();
         long count = 0;
-        long row = header.getRecordNumber();
+        long row = header.number();
         double[] buffer = new double[width];
-        for (CSVRecord r = next(name, records, row + 1); r != null; r = next(name, records, row + 1)) {
-            row = r.getRecordNumber();
-            if (blank(r)) {
-                continue;
-            }
+        for (Row r = next(records); r != null; r = next(records)) {
+            row = r.number();
             checkWidth(name, r, header);
             int n = 0;
             for (int j = 0; j < width; j++) {
@@ -228,7 +187,7 @@ public final class ReadingsCsv {
         return new Readings(name, SubgroupLayout.WIDE, groups, count);
     }
 
-    private static Map<String, Integer> columns(String name, CSVRecord header) {
+    private static Map<String, Integer> columns(String name, Row header) {
         Map<String, Integer> columns = new HashMap<>();
         for (int i = 0; i < header.size(); i++) {
             String c = header.get(i).replace("\uFEFF", "").trim().toLowerCase(Locale.ROOT);
@@ -236,23 +195,23 @@ public final class ReadingsCsv {
                 continue;
             }
             if (columns.put(c, i) != null && (c.equals("value") || c.equals("subgroup") || c.matches("x[0-9]+"))) {
-                throw new UserException(Location.cell(name, header.getRecordNumber(), header.get(i)),
+                throw new UserException(Location.cell(name, header.number(), header.get(i)),
                         ReadingsMessage.DUPLICATE_COLUMN, Shown.cell(header.get(i)));
             }
         }
         return columns;
     }
 
-    private static double number(String name, CSVRecord r, int index, String column, boolean required) {
+    private static double number(String name, Row r, int index, String column, boolean required) {
         String text = cell(r, index);
         if (text.isEmpty()) {
             if (required) {
-                throw new UserException(Location.cell(name, r.getRecordNumber(), column), ReadingsMessage.MISSING_VALUE);
+                throw new UserException(Location.cell(name, r.number(), column), ReadingsMessage.MISSING_VALUE);
             }
             return Double.NaN;
         }
-        double x = DecimalCell.parse(text);
-        Location where = Location.cell(name, r.getRecordNumber(), column);
+        double x = CsvDialect.number(text);
+        Location where = Location.cell(name, r.number(), column);
         if (Double.isInfinite(x) || Decimals.namesNonFinite(text)) {
             throw new UserException(where, ReadingsMessage.NOT_FINITE, Shown.cell(text));
         }
@@ -265,26 +224,17 @@ public final class ReadingsCsv {
         return x;
     }
 
-    private static void checkWidth(String name, CSVRecord r, CSVRecord header) {
+    private static void checkWidth(String name, Row r, Row header) {
         for (int i = header.size(); i < r.size(); i++) {
             if (!r.get(i).isEmpty()) {
-                throw new UserException(Location.cell(name, r.getRecordNumber(), null), ReadingsMessage.EXTRA_CELLS,
+                throw new UserException(Location.cell(name, r.number(), null), ReadingsMessage.EXTRA_CELLS,
                         r.size(), header.size());
             }
         }
     }
 
-    private static String cell(CSVRecord r, int index) {
+    private static String cell(Row r, int index) {
         return index < r.size() ? r.get(index) : "";
-    }
-
-    private static boolean blank(CSVRecord r) {
-        for (String v : r) {
-            if (!v.isEmpty()) {
-                return false;
-            }
-        }
-        return true;
     }
 
     private static void requireTwo(String name, long count) {
@@ -299,18 +249,20 @@ public final class ReadingsCsv {
         }
     }
 
-    /** The next record, or null at the end; a CSV syntax error becomes a UserException near row. */
-    private static CSVRecord next(String name, Iterator<CSVRecord> records, long row) {
-        try {
-            return records.hasNext() ? records.next() : null;
-        } catch (UncheckedIOException | IllegalStateException e) {
-            // the CSV library's words stay here: say what is wrong in ours
-            String said = String.valueOf(e.getCause() != null ? e.getCause().getMessage() : e.getMessage()).toLowerCase(Locale.ROOT);
-            String why = said.contains("eof") ? "a quoted value is not closed before the end of the file"
-                    : said.contains("invalid char between encapsulated token and delimiter")
-                            ? "text follows a closing quote before the next comma (a quote inside a value is written twice: \"\")"
-                            : "the quotes do not pair up";
-            throw new UserException(Location.cell(name, row, null), ReadingsMessage.BAD_CSV, why);
+    /** The next row that is not blank, or null at the end. */
+    private static Row next(CsvReader records) {
+        return records.next() ? new Row(records.row(), records.copy()) : null;
+    }
+
+    /** One row of the file: its line number and its cells, trimmed. */
+    private record Row(long number, String[] cells) {
+
+        int size() {
+            return cells.length;
+        }
+
+        String get(int i) {
+            return cells[i];
         }
     }
 }

@@ -13,6 +13,9 @@
  * again. The sheet writer and the grade reader both use it, so the two cannot drift.</li>
  * <li>{@code AtomicFile}: the one way a file is written — temporary file beside it, forced, moved in one step; new
  * files as the umask says, replaced ones keep their permissions.</li>
+ * <li>{@code CsvReader} (over {@code CsvLines}) in the dialect of {@code CsvDialect}: the one CSV reader — returned
+ * files, files of readings, characteristic lists; {@code Decimals} (and {@code DecimalMark} for fields people
+ * type): the one number rule.</li>
  * </ul>
  */
 package dev.proofrun.text;

@@ -1,5 +1,6 @@
 package dev.proofrun.cli;
 
+import static dev.proofrun.cli.CommandRun.run;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotEquals;
@@ -7,8 +8,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -25,19 +24,9 @@ class GradeCommandTest {
     static Path plan;
     static Path data;
 
-    record Run(int code, String out, String err) {
-    }
-
-    static Run run(String... args) {
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        int code = ProofrunCommand.run(new PrintWriter(out, true), new PrintWriter(err, true), args);
-        return new Run(code, out.toString(), err.toString());
-    }
-
     @BeforeAll
     static void demo() {
-        Run r = run("demo", "--out", dir.toString());
+        CommandRun r = run("demo", "--out", dir.toString());
         assertEquals(0, r.code(), r.err());
         plan = dir.resolve("demo-valve-body.json");
         data = dir.resolve(DemoCommand.RETURNED);
@@ -45,7 +34,7 @@ class GradeCommandTest {
 
     @Test
     void demoGradesToAMixOfVerdictsWithTheCaution() {
-        Run r = run("grade", plan.toString(), data.toString());
+        CommandRun r = run("grade", plan.toString(), data.toString());
         assertEquals(0, r.code(), r.err());
         assertTrue(r.out().contains("D1 bore diameter: Demonstrated"), r.out());
         assertTrue(r.out().contains("R4 surface roughness Ra: Inconclusive"), r.out());
@@ -61,7 +50,7 @@ class GradeCommandTest {
 
     @Test
     void jsonHasTheIssuesKeys() throws Exception {
-        Run r = run("grade", plan.toString(), data.toString(), "--json");
+        CommandRun r = run("grade", plan.toString(), data.toString(), "--json");
         assertEquals(0, r.code(), r.err());
         JsonNode root = new ObjectMapper().readTree(r.out());
         assertEquals("PR-2027-0311", root.at("/plan/id").asText());
@@ -121,11 +110,11 @@ class GradeCommandTest {
         Path other = dir.resolve("other.csv");
         String text = Files.readString(data, StandardCharsets.UTF_8).replaceFirst("@[0-9a-f]{12}", "@000000000000");
         Files.writeString(other, text, StandardCharsets.UTF_8);
-        Run r = run("grade", plan.toString(), other.toString());
+        CommandRun r = run("grade", plan.toString(), other.toString());
         assertEquals(2, r.code());
         assertEquals(1, r.err().strip().lines().count(), r.err());
         assertTrue(r.err().contains("row 2, column plan"), r.err());
-        Run missing = run("grade", plan.toString(), dir.resolve("nope.csv").toString());
+        CommandRun missing = run("grade", plan.toString(), dir.resolve("nope.csv").toString());
         assertEquals(2, missing.code());
         assertEquals(2, run("demo", "--out", dir.toString()).code());
     }
@@ -134,7 +123,7 @@ class GradeCommandTest {
     void aDraftPlanIsRefusedWithOneLineAndNothingPrinted() throws Exception {
         Path draft = dir.resolve("draft-plan.json");
         dev.proofrun.plan.PlanFiles.write(draft, dev.proofrun.plan.DemoPlan.draft());
-        Run r = run("grade", draft.toString(), data.toString());
+        CommandRun r = run("grade", draft.toString(), data.toString());
         assertEquals(2, r.code());
         assertEquals("", r.out());
         assertEquals(1, r.err().strip().lines().count(), r.err());
@@ -153,7 +142,7 @@ class GradeCommandTest {
         assertTrue(!changed.equals(text));
         Files.writeString(edited, changed, StandardCharsets.UTF_8);
         for (Path returned : new Path[] {data, dir.resolve("nope.csv"), dir.resolve("wrong.ods")}) {
-            Run r = run("grade", edited.toString(), returned.toString());
+            CommandRun r = run("grade", edited.toString(), returned.toString());
             assertEquals(2, r.code(), r.err());
             assertEquals("", r.out());
             assertEquals(1, r.err().strip().lines().count(), r.err());
@@ -178,11 +167,11 @@ class GradeCommandTest {
         }
         Path constant = dir.resolve("constant.csv");
         Files.writeString(constant, sb.toString(), StandardCharsets.UTF_8);
-        Run text = run("grade", plan.toString(), constant.toString());
+        CommandRun text = run("grade", plan.toString(), constant.toString());
         assertEquals(0, text.code(), text.err());
         assertTrue(text.out().contains("No spread in the readings: all 125 readings are 22.001."), text.out());
         assertFalse(text.out().contains("Infinity") || text.err().contains("Exception"), text.out() + text.err());
-        Run json = run("grade", plan.toString(), constant.toString(), "--json", "--report",
+        CommandRun json = run("grade", plan.toString(), constant.toString(), "--json", "--report",
                 dir.resolve("constant.pdf").toString());
         assertEquals(0, json.code(), json.err());
         JsonNode d1 = new ObjectMapper().readTree(json.out()).get("characteristics").get(0);

@@ -110,4 +110,21 @@ class OptionValuesCommandTest {
         refusedAlike("--spec: unknown specification sides 'both' (two-sided, upper or lower)", join(List.of(size), "both"));
         refusedAlike("--spec does not match the limits given", join(List.of(size), "upper", "--lsl", "1"));
     }
+
+    /** Option values follow the one number rule (text.Decimals with a point), not Java's parser. */
+    @Test
+    void numbersInOptionsFollowTheOneRule() {
+        for (String[] bad : new String[][] {{"0x1p-1", "'0x1p-1' is not a number"}, {"0.95d", "'0.95d' is not a number"},
+            {"0,95", "'0,95' is not a number (use a decimal point: 0.95)"}}) {
+            StringWriter out = new StringWriter();
+            StringWriter err = new StringWriter();
+            int code = ProofrunCommand.run(new PrintWriter(out, true), new PrintWriter(err, true),
+                    "size", "--target", "1.33", "--expected", "1.8", "--confidence", bad[0]);
+            assertEquals(2, code, bad[0]);
+            assertEquals("proofrun size: Invalid value for option '--confidence': " + bad[1], err.toString().lines().findFirst().orElse(""));
+            assertEquals("", out.toString(), bad[0]);
+        }
+        assertEquals(0.95, ProofrunCommand.optionNumber(" 0.95 "), 0.0);
+        assertEquals(1.5e-3, ProofrunCommand.optionNumber("1.5e-3"), 0.0);
+    }
 }

@@ -1,13 +1,12 @@
 package dev.proofrun.cli;
 
+import static dev.proofrun.cli.CommandRun.run;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import java.io.IOException;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -29,16 +28,6 @@ class SizeCharacteristicsCommandTest {
     @TempDir
     Path dir;
 
-    private record Run(int code, String out, String err) {
-    }
-
-    private static Run run(String... args) {
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        int code = ProofrunCommand.run(new PrintWriter(out), new PrintWriter(err), args);
-        return new Run(code, out.toString(), err.toString());
-    }
-
     private Path csv(String text) throws IOException {
         Path f = dir.resolve("chars.csv");
         Files.writeString(f, text, StandardCharsets.UTF_8);
@@ -48,7 +37,7 @@ class SizeCharacteristicsCommandTest {
     @Test
     void jsonGivesOneSharedDesignWithTheDriverNamed() throws Exception {
         Path f = csv(THREE);
-        Run r = run("size", "--characteristics", f.toString(), "--subgroup-size", "4", "--subgroup-size", "5", "--json");
+        CommandRun r = run("size", "--characteristics", f.toString(), "--subgroup-size", "4", "--subgroup-size", "5", "--json");
         assertEquals(0, r.code(), r.err());
         JsonNode root = new ObjectMapper().readTree(r.out());
         assertEquals(List.of("characteristics", "designs", "recommended", "warnings"), names(root));
@@ -74,7 +63,7 @@ class SizeCharacteristicsCommandTest {
             assertEquals(largest, k, "k is the largest any characteristic needs");
             assertEquals("seat-h", d.get("driver").asText());
             // the driver's k is what `size` gives for it alone at this n
-            Run alone = run("size", "--target", "1.33", "--expected", "1.55", "--expected-cp", "1.70",
+            CommandRun alone = run("size", "--target", "1.33", "--expected", "1.55", "--expected-cp", "1.70",
                     "--subgroup-size", d.get("subgroupSize").asText(), "--json");
             assertEquals(k, new ObjectMapper().readTree(alone.out()).get("recommended").get("subgroups").asInt());
             assertEquals(d.get("subgroupSize").asInt() * k, d.get("readings").asInt());
@@ -91,7 +80,7 @@ class SizeCharacteristicsCommandTest {
     @Test
     void textNamesEveryCharacteristicAndTheDriver() throws Exception {
         Path f = csv(THREE);
-        Run r = run("size", "--characteristics", f.toString(), "--subgroup-size", "5");
+        CommandRun r = run("size", "--characteristics", f.toString(), "--subgroup-size", "5");
         assertEquals(0, r.code(), r.err());
         assertTrue(r.out().contains("One design for 3 characteristics"), r.out());
         assertTrue(r.out().lines().anyMatch(l -> l.contains("seat-h") && l.endsWith("drives k")), r.out());
@@ -106,7 +95,7 @@ class SizeCharacteristicsCommandTest {
         Path f = csv(HEADER + "bore-a,Bore A,mm,12,11.98,12.02,1.33,1.67,,,\n"
                 + "seat-h,Seat height,mm,4.50,4.40,4.6O,1.33,1.55,cpk,,1.70\n");
         String before = Files.readString(f);
-        Run r = run("size", "--characteristics", f.toString());
+        CommandRun r = run("size", "--characteristics", f.toString());
         assertEquals(2, r.code());
         assertEquals("", r.out());
         assertEquals(1, r.err().strip().lines().count(), r.err());
@@ -115,7 +104,7 @@ class SizeCharacteristicsCommandTest {
         assertEquals(before, Files.readString(f), "the user's file is untouched");
         // a decimal comma splits a number and shifts the cells: the row is refused as too wide
         Files.writeString(f, HEADER + "seat-h,Seat height,mm,4.50,4.40,4,60,1.33,1.55,cpk,,1.70\n");
-        Run comma = run("size", "--characteristics", f.toString());
+        CommandRun comma = run("size", "--characteristics", f.toString());
         assertEquals(2, comma.code());
         assertTrue(comma.err().contains(f + ", row 2: 12 cells but the header has 11 (a decimal comma?"), comma.err());
     }
@@ -123,7 +112,7 @@ class SizeCharacteristicsCommandTest {
     @Test
     void aMissingColumnIsNamedOnRowOne() throws Exception {
         Path f = csv("id,name,unit,nominal,lsl,usl,target\nbore-a,Bore A,mm,12,11.98,12.02,1.33\n");
-        Run r = run("size", "--characteristics", f.toString());
+        CommandRun r = run("size", "--characteristics", f.toString());
         assertEquals(2, r.code());
         assertTrue(r.err().contains(f + ", row 1, column expected"), r.err());
     }
@@ -132,13 +121,13 @@ class SizeCharacteristicsCommandTest {
     void refusalsAboutOneCharacteristicNameIt() throws Exception {
         Path f = csv(HEADER + "bore-a,Bore A,mm,12,11.98,12.02,1.33,1.67,,,\n"
                 + "seat-h,Seat height,mm,4.50,4.40,4.60,1.33,1.25,,,\n");
-        Run r = run("size", "--characteristics", f.toString());
+        CommandRun r = run("size", "--characteristics", f.toString());
         assertEquals(2, r.code());
         assertTrue(r.err().contains(f + ": characteristic seat-h: expected Cpk 1.250 is not above the required 1.330"),
                 r.err());
         Path g = dir.resolve("upper.csv");
         Files.writeString(g, HEADER + "burr,Burr height,mm,,,0.05,1.33,1.8,cp,,\n");
-        Run u = run("size", "--characteristics", g.toString());
+        CommandRun u = run("size", "--characteristics", g.toString());
         assertEquals(2, u.code());
         // an index the limits cannot give is refused where the file is read, at its row
         assertTrue(u.err().contains(g + ", row 2, column id: Cp needs the limit(s) this specification lacks"), u.err());
@@ -147,10 +136,10 @@ class SizeCharacteristicsCommandTest {
     @Test
     void singleCharacteristicOptionsAreRefusedBesideTheFile() throws Exception {
         Path f = csv(THREE);
-        Run r = run("size", "--characteristics", f.toString(), "--target", "1.33", "--expected", "1.67");
+        CommandRun r = run("size", "--characteristics", f.toString(), "--target", "1.33", "--expected", "1.67");
         assertEquals(2, r.code());
         assertTrue(r.err().contains("leave out --target, --expected"), r.err());
-        Run none = run("size", "--expected", "1.67");
+        CommandRun none = run("size", "--expected", "1.67");
         assertEquals(2, none.code());
         assertTrue(none.err().contains("give --target"), none.err());
     }

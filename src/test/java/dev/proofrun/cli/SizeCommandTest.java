@@ -1,30 +1,19 @@
 package dev.proofrun.cli;
 
+import static dev.proofrun.cli.CommandRun.run;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.util.List;
 import org.junit.jupiter.api.Test;
 
 class SizeCommandTest {
 
-    private record Run(int code, String out, String err) {
-    }
-
-    private static Run run(String... args) {
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        int code = ProofrunCommand.run(new PrintWriter(out), new PrintWriter(err), args);
-        return new Run(code, out.toString(), err.toString());
-    }
-
     @Test
     void jsonHasTheListedShape() throws Exception {
-        Run r = run("size", "--target", "1.33", "--expected", "1.67", "--expected-cp", "2.0", "--json",
+        CommandRun r = run("size", "--target", "1.33", "--expected", "1.67", "--expected-cp", "2.0", "--json",
                 "--subgroup-size", "4", "--subgroup-size", "5");
         assertEquals(0, r.code(), r.err());
         JsonNode root = new ObjectMapper().readTree(r.out());
@@ -47,7 +36,7 @@ class SizeCommandTest {
 
     @Test
     void theTextNamesTheRisksAtTheRequirementAndTheExpectation() {
-        Run r = run("size", "--target", "1.33", "--expected", "1.67", "--expected-cp", "2.0", "--subgroup-size", "5");
+        CommandRun r = run("size", "--target", "1.33", "--expected", "1.67", "--expected-cp", "2.0", "--subgroup-size", "5");
         assertEquals(0, r.code(), r.err());
         assertTrue(r.out().contains("true Cpk  probability"), r.out());
         // the probability printed at the expectation is the recommended row's power (captured as group 1)
@@ -58,7 +47,7 @@ class SizeCommandTest {
 
     @Test
     void limitsMeanAndSdWork() {
-        Run r = run("size", "--target", "1.33", "--lsl", "9.90", "--usl", "10.10", "--mean", "10.01", "--sd", "0.018",
+        CommandRun r = run("size", "--target", "1.33", "--lsl", "9.90", "--usl", "10.10", "--mean", "10.01", "--sd", "0.018",
                 "--subgroup-size", "5");
         assertEquals(0, r.code(), r.err());
         assertTrue(r.out().contains("Recommended"), r.out());
@@ -66,12 +55,12 @@ class SizeCommandTest {
 
     @Test
     void refusalsExitTwoWithOneLine() {
-        Run r = run("size", "--target", "1.33", "--expected", "1.2");
+        CommandRun r = run("size", "--target", "1.33", "--expected", "1.2");
         assertEquals(2, r.code());
         assertTrue(r.err().contains("the process must improve first"), r.err());
         assertEquals(1, r.err().strip().lines().count(), r.err());
         assertEquals("", r.out());
-        Run c = run("size", "--target", "1.33", "--expected", "1.67", "--confidence", "0.9999");
+        CommandRun c = run("size", "--target", "1.33", "--expected", "1.67", "--confidence", "0.9999");
         assertEquals(2, c.code());
         assertTrue(c.err().contains("confidence"), c.err());
     }
@@ -88,13 +77,13 @@ class SizeCommandTest {
         java.nio.file.Path file = dir.resolve("pilot.csv");
         java.nio.file.Files.writeString(file, csv);
         byte[] before = java.nio.file.Files.readAllBytes(file);
-        Run r = run("size", "--target", "1.0", "--lsl", "9.90", "--usl", "10.10", "--pilot", file.toString(),
+        CommandRun r = run("size", "--target", "1.0", "--lsl", "9.90", "--usl", "10.10", "--pilot", file.toString(),
                 "--subgroup-size", "5", "--json");
         assertEquals(0, r.code(), r.err());
         JsonNode warnings = new ObjectMapper().readTree(r.out()).get("warnings");
         assertTrue(warnings.get(0).asText().contains("pilot's own uncertainty is not in the power"), warnings.toString());
         assertTrue(java.util.Arrays.equals(before, java.nio.file.Files.readAllBytes(file)));
-        Run missing = run("size", "--target", "1.33", "--lsl", "9.90", "--usl", "10.10", "--pilot",
+        CommandRun missing = run("size", "--target", "1.33", "--lsl", "9.90", "--usl", "10.10", "--pilot",
                 dir.resolve("none.csv").toString());
         assertEquals(2, missing.code());
         assertTrue(missing.err().contains("none.csv"), missing.err());

@@ -1,13 +1,12 @@
 package dev.proofrun.cli;
 
+import static dev.proofrun.cli.CommandRun.run;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.util.ArrayList;
 import java.util.List;
 import org.junit.jupiter.api.Test;
@@ -15,30 +14,20 @@ import org.junit.jupiter.api.Test;
 /** {@code size --stages S --spending F}: one stage is today's output, staged JSON's shape, bad input in one line. */
 class SizeStagesCommandTest {
 
-    private record Run(int code, String out, String err) {
-    }
-
-    private static Run run(String... args) {
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        int code = ProofrunCommand.run(new PrintWriter(out), new PrintWriter(err), args);
-        return new Run(code, out.toString(), err.toString());
-    }
-
     @Test
     void oneStageIsTodaysOutputByteForByte() {
         String[] base = {"size", "--target", "1.33", "--expected", "1.67", "--subgroup-size", "5"};
-        Run plain = run(base);
+        CommandRun plain = run(base);
         List<String> args = new ArrayList<>(List.of(base));
         args.addAll(List.of("--stages", "1", "--spending", "pocock"));
-        Run one = run(args.toArray(String[]::new));
+        CommandRun one = run(args.toArray(String[]::new));
         assertEquals(0, plain.code(), plain.err());
         assertEquals(plain.out(), one.out());
     }
 
     @Test
     void stagedJsonCarriesTheLooksAndTheirFigures() throws Exception {
-        Run r = run("size", "--target", "1.33", "--expected", "1.67", "--expected-cp", "1.8", "--subgroup-size", "5",
+        CommandRun r = run("size", "--target", "1.33", "--expected", "1.67", "--expected-cp", "1.8", "--subgroup-size", "5",
                 "--stages", "2", "--json");
         assertEquals(0, r.code(), r.err());
         JsonNode staged = new ObjectMapper().readTree(r.out()).get("staged");
@@ -94,7 +83,7 @@ class SizeStagesCommandTest {
                 "--skewness", "1", "--spec", "upper"},
         };
         for (String[] c : cases) {
-            Run r = run(c);
+            CommandRun r = run(c);
             assertEquals(2, r.code(), String.join(" ", c) + "\n" + r.out() + r.err());
             assertEquals("", r.out(), String.join(" ", c));
             assertEquals(1, r.err().strip().lines().count(), r.err());

@@ -3,6 +3,7 @@ package dev.proofrun.grade;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import dev.proofrun.text.CsvDialect;
 import java.time.LocalDate;
 import java.time.OffsetDateTime;
 import java.time.ZoneId;
@@ -23,7 +24,7 @@ class CellValuesTest {
 
     private static void sameAsJdk(String text) {
         double expected = Double.parseDouble(text.replace(',', '.'));
-        double got = CellValues.number(text);
+        double got = CsvDialect.number(text);
         assertEquals(Double.doubleToRawLongBits(expected), Double.doubleToRawLongBits(got), text);
     }
 

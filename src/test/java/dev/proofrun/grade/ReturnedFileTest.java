@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import dev.proofrun.text.CsvDialect;
 import dev.proofrun.text.UserException;
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
@@ -152,14 +153,14 @@ class ReturnedFileTest {
 
     @Test
     void numbersAsPeopleTypeThem() {
-        assertEquals(10.5, CellValues.number("10,5"), 0.0);
-        assertEquals(-0.25, CellValues.number("-0.25"), 0.0);
-        assertEquals(1.5e-3, CellValues.number("1.5E-3"), 0.0);
-        assertTrue(Double.isNaN(CellValues.number("NaN")));
-        assertTrue(Double.isNaN(CellValues.number("1.0f")));
-        assertTrue(Double.isNaN(CellValues.number("10,0,2")));
-        assertTrue(Double.isNaN(CellValues.number("ca. 10")));
-        assertTrue(Double.isNaN(CellValues.number("1e")));
+        assertEquals(10.5, CsvDialect.number("10,5"), 0.0);
+        assertEquals(-0.25, CsvDialect.number("-0.25"), 0.0);
+        assertEquals(1.5e-3, CsvDialect.number("1.5E-3"), 0.0);
+        assertTrue(Double.isNaN(CsvDialect.number("NaN")));
+        assertTrue(Double.isNaN(CsvDialect.number("1.0f")));
+        assertTrue(Double.isNaN(CsvDialect.number("10,0,2")));
+        assertTrue(Double.isNaN(CsvDialect.number("ca. 10")));
+        assertTrue(Double.isNaN(CsvDialect.number("1e")));
     }
 
     @Test

@@ -50,4 +50,15 @@ class CharacteristicsCsvTest {
                 IndexKind.CPK, 0.95));
         assertTrue(twice.getMessage().contains("row 3, column id"), twice.getMessage());
     }
+
+    /** The one dialect and the one number rule (text.CsvDialect): a ';' file takes decimal commas; Java-only forms are refused. */
+    @Test
+    void oneDialectAndOneNumberRule() throws Exception {
+        List<Characteristic> cs = CharacteristicsCsv.read(csv("\uFEFFid;name;unit;nominal;lsl;usl;target;expected\n\n"
+                + "D1;bore;mm;12;11,98;12,02;1,33;1,67\n"), IndexKind.CPK, 0.95);
+        assertEquals(11.98, cs.get(0).limits().lower().getAsDouble(), 0.0);
+        UserException javaForm = assertThrows(UserException.class, () -> CharacteristicsCsv.read(
+                csv("id,name,unit,nominal,lsl,usl,target,expected\n\nD1,bore,mm,12,11.98,12.02d,1.33,1.67\n"), IndexKind.CPK, 0.95));
+        assertTrue(javaForm.getMessage().contains("chars.csv, row 3, column usl"), javaForm.getMessage());
+    }
 }

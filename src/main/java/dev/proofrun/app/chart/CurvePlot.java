@@ -1,6 +1,7 @@
 package dev.proofrun.app.chart;
 
 import dev.proofrun.app.shell.FontScale;
+import dev.proofrun.paper.PlotArea;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -258,7 +259,8 @@ public final class CurvePlot extends Region {
                 }
             }
         } else {
-            double ystep = niceStep((y1 - y0) / Math.max(2, Math.floor((bottom - top) / (2.5 * em))));
+            // the one tick rule (PlotArea.step), as many steps as 3.75 em each: labels at least 2.5 em apart
+            double ystep = PlotArea.step(y1 - y0, Math.max(2, (int) Math.floor((bottom - top) / (3.75 * em))));
             int yd = Math.max(0, (int) Math.ceil(-Math.log10(ystep) - 1e-9));
             for (double t = Math.ceil(y0 / ystep - 1e-9) * ystep; t <= y1 + ystep * 1e-9; t += ystep) {
                 double y = py(t);
@@ -271,8 +273,9 @@ public final class CurvePlot extends Region {
                 g.fillText(String.format(Locale.ROOT, "%." + yd + "f", shown), left - 0.4 * em, y);
             }
         }
-        // x ticks and numbers on a 1-2-5 step giving about one number per 5 em
-        double step = niceStep((x1 - x0) / Math.max(2, Math.floor((right - left) / (5 * em))));
+        // x ticks on the same rule, as many steps as 7.5 em each: numbers at least 5 em apart (the nearest
+        // 1-2-5 step is at least two thirds of the raw one)
+        double step = PlotArea.step(x1 - x0, Math.max(2, (int) Math.floor((right - left) / (7.5 * em))));
         g.setTextAlign(TextAlignment.CENTER);
         g.setTextBaseline(VPos.TOP);
         int decimals = Math.max(0, (int) Math.ceil(-Math.log10(step) - 1e-9));
@@ -358,20 +361,6 @@ public final class CurvePlot extends Region {
         javafx.scene.text.Text t = new javafx.scene.text.Text(s);
         t.setFont(f);
         return t.getLayoutBounds().getWidth();
-    }
-
-    /** The smallest of 1, 2, 5 × 10^m not below {@code raw}. */
-    static double niceStep(double raw) {
-        if (!(raw > 0) || !Double.isFinite(raw)) {
-            return 1;
-        }
-        double p = Math.pow(10, Math.floor(Math.log10(raw)));
-        for (double m : new double[] {1, 2, 5, 10}) {
-            if (m * p >= raw * (1 - 1e-9)) {
-                return m * p;
-            }
-        }
-        return 10 * p;
     }
 
     /** The text under the pointer: the x there and each curve's value (reference lines by their names). */

@@ -6,30 +6,21 @@ import dev.proofrun.app.session.CharacteristicDraft;
 import dev.proofrun.app.session.CharacteristicField;
 import dev.proofrun.app.session.DraftField;
 import dev.proofrun.app.session.ExpectationSource;
+import dev.proofrun.app.session.ExpectedProcess;
 import dev.proofrun.app.session.FieldNumbers;
-import dev.proofrun.design.ProcessFacts;
-import dev.proofrun.plan.StudyPlan;
-import dev.proofrun.text.UserException;
-import java.util.ArrayList;
-import java.nio.file.Path;
-import java.util.OptionalInt;
-import dev.proofrun.app.session.PlanDrafts;
 import dev.proofrun.app.session.StudyDraft;
 import dev.proofrun.app.shell.IndexTip;
 import dev.proofrun.app.shell.StepViewModel;
-import dev.proofrun.capability.CapabilityAnalysis;
 import dev.proofrun.capability.CapabilityResult;
 import dev.proofrun.design.Expectation;
 import dev.proofrun.design.Requirement;
-import dev.proofrun.readings.ReadingsCsv;
-import dev.proofrun.stats.BoundMethod;
+import dev.proofrun.plan.StudyPlan;
 import dev.proofrun.stats.Confidence;
-import javafx.beans.property.SimpleStringProperty;
-import javafx.beans.value.ObservableValue;
 import dev.proofrun.stats.IndexKind;
 import dev.proofrun.stats.SpecLimits;
+import dev.proofrun.text.UserException;
+import java.nio.file.Path;
 import java.util.List;
-import java.util.Locale;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import javafx.beans.Observable;
@@ -40,7 +31,9 @@ import javafx.beans.property.BooleanProperty;
 import javafx.beans.property.ObjectProperty;
 import javafx.beans.property.SimpleBooleanProperty;
 import javafx.beans.property.SimpleObjectProperty;
+import javafx.beans.property.SimpleStringProperty;
 import javafx.beans.property.StringProperty;
+import javafx.beans.value.ObservableValue;
 import javafx.collections.ObservableList;
 
 /**
@@ -246,40 +239,12 @@ public final class GoalViewModel extends StepViewModel {
             return Optional.empty();
         }
         SpecLimits limits = row.get().limits().get();
-        switch (source.get()) {
-            case VALUE:
-                return typedExpectation(row.get());
-            case MEAN_SIGMA: {
-                OptionalDouble mean = FieldNumbers.parse(draft.text(DraftField.EXPECTED_MEAN));
-                OptionalDouble sigma = FieldNumbers.parse(draft.text(DraftField.EXPECTED_SIGMA));
-                if (mean.isEmpty() || sigma.isEmpty() || !(sigma.getAsDouble() > 0)) {
-                    return Optional.empty();
-                }
-                try {
-                    return Optional.of(ProcessFacts.of(limits, mean.getAsDouble(), sigma.getAsDouble())
-                            .expectationFor(index.get(), new ArrayList<>()));
-                } catch (UserException | IllegalArgumentException e) {
-                    return Optional.empty();
-                }
-            }
-            case PILOT: {
-                CapabilityResult r = pilot.get();
-                if (r == null) {
-                    return Optional.empty();
-                }
-                OptionalDouble est = r.indices().of(index.get());
-                if (est.isEmpty() || !(est.getAsDouble() > 0)) {
-                    return Optional.empty();
-                }
-                OptionalDouble cp = r.indices().cp();
-                boolean offCentre = index.get().side() == IndexKind.Side.NEAREST && cp.isPresent()
-                        && cp.getAsDouble() >= est.getAsDouble();
-                return Optional.of(offCentre ? Expectation.offCentre(est.getAsDouble(), cp.getAsDouble())
-                        : Expectation.centred(est.getAsDouble()));
-            }
-            default:
-                return Optional.empty();
-        }
+        return switch (source.get()) {
+            case VALUE -> ExpectedProcess.typed(row.get());
+            case MEAN_SIGMA -> ExpectedProcess.fromMeanSigma(limits, draft.text(DraftField.EXPECTED_MEAN),
+                    draft.text(DraftField.EXPECTED_SIGMA), index.get());
+            case PILOT -> ExpectedProcess.fromPilot(pilot.get(), index.get());
+        };
     }
 
     public ObjectProperty<CapabilityResult> pilotProperty() {
@@ -323,20 +288,14 @@ public final class GoalViewModel extends StepViewModel {
         IndexKind k = index.get();
         pilotLoading.set(true);
         pilotMessage.set(AppMessage.GOAL_PILOT_READING.format(file.getFileName()));
-        pilotJob = background.submit(() -> CapabilityAnalysis.of(ReadingsCsv.read(file, OptionalInt.empty()).subgroups(), limits,
-                nominal.isPresent() ? nominal.getAsDouble() : null, null, confidence, BoundMethod.EXACT), r -> {
+        pilotJob = background.submit(() -> ExpectedProcess.readPilot(file, limits, nominal, confidence), r -> {
                     if (mine != pilotGeneration) {
                         return;
                     }
                     pilotLoading.set(false);
                     draft.field(DraftField.PILOT_FILE).set(file.toString());
                     pilot.set(r);
-                    OptionalDouble est = r.indices().of(k);
-                    OptionalDouble low = lowerOf(r, k);
-                    pilotMessage.set(AppMessage.GOAL_PILOT_SHOWN.format(r.readings(), r.subgroups(), k.symbol(),
-                            est.isPresent() ? String.format(Locale.ROOT, "%.3f", est.getAsDouble()) : "—",
-                            Math.round(100 * confidence),
-                            low.isPresent() ? String.format(Locale.ROOT, "%.3f", low.getAsDouble()) : "—"));
+                    pilotMessage.set(ExpectedProcess.pilotShown(r, k, confidence));
                 }, ex -> {
                     if (mine == pilotGeneration) {
                         pilotLoading.set(false);
@@ -347,16 +306,6 @@ public final class GoalViewModel extends StepViewModel {
         return true;
     }
 
-    private static OptionalDouble lowerOf(CapabilityResult r, IndexKind k) {
-        return switch (k) {
-            case CP -> r.lower().cp();
-            case CPK -> r.lower().cpk();
-            case PP -> r.lower().pp();
-            case PPK -> r.lower().ppk();
-            default -> OptionalDouble.empty();
-        };
-    }
-
     /**
      * The expectation for any characteristic of the plan: the one worked out on this step for the
      * characteristic in focus, the typed expected index (with the plan's centring) for the others.
@@ -365,19 +314,7 @@ public final class GoalViewModel extends StepViewModel {
         if (focus.get().isPresent() && focus.get().get() == row) {
             return expectation.get();
         }
-        return typedExpectation(row);
-    }
-
-    private Optional<Expectation> typedExpectation(CharacteristicDraft row) {
-        OptionalDouble v = row.number(CharacteristicField.EXPECTED);
-        if (v.isEmpty() || !(v.getAsDouble() > 0)) {
-            return Optional.empty();
-        }
-        try {
-            return Optional.of(dev.proofrun.app.session.RowRequirement.expectation(row, v.getAsDouble()));
-        } catch (IllegalArgumentException belowTheIndex) {
-            return Optional.empty(); // the Part table marks the Expected Cp cell
-        }
+        return ExpectedProcess.typed(row);
     }
 
     /** Whether the index exists for these limits (Cp/Pp need both, Cpu an upper, Cpl a lower limit). */

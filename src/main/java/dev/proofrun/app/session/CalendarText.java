@@ -6,6 +6,7 @@ import java.time.LocalDateTime;
 import java.time.format.DateTimeFormatter;
 import java.time.format.DateTimeParseException;
 import java.util.Locale;
+import java.util.OptionalDouble;
 
 /**
  * The short text forms in which the Timing step shows and takes the plant calendar, and their conversion
@@ -33,20 +34,19 @@ public final class CalendarText {
         return t.format(START);
     }
 
-    /** "40 s" seconds per part, or "90/h" parts per hour. */
+    /** "40 s" seconds per part, or "90/h" parts per hour; the number by the fields' one rule ({@link FieldNumbers}). */
     public static ProductionRate rate(String text) {
         String t = text.trim().toLowerCase(Locale.ROOT).replace(" ", "");
-        try {
-            if (t.endsWith("/h")) {
-                return ProductionRate.perHour(Double.parseDouble(t.substring(0, t.length() - 2)));
+        boolean perHour = t.endsWith("/h");
+        if (perHour || t.endsWith("s")) {
+            OptionalDouble v = FieldNumbers.parse(t.substring(0, t.length() - (perHour ? 2 : 1)));
+            if (v.isPresent()) {
+                try {
+                    return perHour ? ProductionRate.perHour(v.getAsDouble()) : ProductionRate.cycleSeconds(v.getAsDouble());
+                } catch (RuntimeException e) {
+                    throw new IllegalArgumentException(e.getMessage());
+                }
             }
-            if (t.endsWith("s")) {
-                return ProductionRate.cycleSeconds(Double.parseDouble(t.substring(0, t.length() - 1)));
-            }
-        } catch (NumberFormatException e) {
-            // falls through to the message below
-        } catch (RuntimeException e) {
-            throw new IllegalArgumentException(e.getMessage());
         }
         throw new IllegalArgumentException(String.format(Locale.ROOT,
                 "'%s' is not a rate such as 40 s (per part) or 90/h (parts per hour)", text.trim()));

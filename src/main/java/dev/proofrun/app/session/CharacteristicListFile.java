@@ -1,25 +1,21 @@
 package dev.proofrun.app.session;
 
+import dev.proofrun.text.CsvReader;
 import dev.proofrun.text.Location;
 import dev.proofrun.text.UserException;
-import java.io.IOException;
-import java.io.Reader;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
-import org.apache.commons.csv.CSVFormat;
-import org.apache.commons.csv.CSVParser;
-import org.apache.commons.csv.CSVRecord;
 
 /**
  * Reads a list of characteristics from CSV with the header {@link CharacteristicField#headers()}
  * (any order, case ignored; {@code id} and {@code unit} and at least one of {@code lsl}/{@code usl} must be
- * present as columns; the other columns may be left out). The text is taken as written; the Part step
+ * present as columns; the other columns may be left out), read by the one reader in the one dialect
+ * ({@link CsvReader}: {@code ,} or {@code ;} as the header uses more). The text is taken as written; the Part step
  * validates it as it does typed input, so an imported list shows its problems in the table.
  */
 public final class CharacteristicListFile {
@@ -33,47 +29,49 @@ public final class CharacteristicListFile {
      */
     public static List<CharacteristicDraft> read(Path file) {
         String name = file.getFileName().toString();
-        CSVFormat format = CSVFormat.DEFAULT.builder().setHeader().setSkipHeaderRecord(true)
-                .setIgnoreSurroundingSpaces(true).setIgnoreEmptyLines(true).get();
-        try (Reader in = Files.newBufferedReader(file, StandardCharsets.UTF_8);
-             CSVParser csv = CSVParser.parse(in, format)) {
-            Map<String, String> columns = new HashMap<>();
-            for (String h : csv.getHeaderNames()) {
-                String key = h.replace("\uFEFF", "").trim().toLowerCase(Locale.ROOT);
+        try (CsvReader csv = CsvReader.open(file, name, ImportMessage.UNREADABLE, ImportMessage.UNREADABLE)) {
+            if (!csv.next()) {
+                throw new UserException(Location.file(name), ImportMessage.NO_ROWS);
+            }
+            String[] headers = csv.copy();
+            Map<String, Integer> columns = new HashMap<>();
+            for (int i = 0; i < headers.length; i++) {
+                String h = headers[i];
+                String key = h.toLowerCase(Locale.ROOT);
                 boolean known = false;
                 for (CharacteristicField f : CharacteristicField.values()) {
                     known |= f.header().equals(key);
                 }
                 if (!known) {
-                    throw new UserException(Location.cell(name, 1, h), ImportMessage.UNKNOWN_COLUMN, h, CharacteristicField.headers());
+                    throw new UserException(Location.cell(name, csv.row(), h), ImportMessage.UNKNOWN_COLUMN, h, CharacteristicField.headers());
                 }
-                columns.put(key, h);
+                if (columns.put(key, i) != null) {
+                    throw new UserException(Location.cell(name, csv.row(), h), ImportMessage.UNREADABLE,
+                            "the header names '" + h + "' twice");
+                }
             }
             for (String required : List.of("id", "unit")) {
                 if (!columns.containsKey(required)) {
-                    throw new UserException(Location.cell(name, 1, required), ImportMessage.MISSING_COLUMN, required);
+                    throw new UserException(Location.cell(name, csv.row(), required), ImportMessage.MISSING_COLUMN, required);
                 }
             }
             if (!columns.containsKey("lsl") && !columns.containsKey("usl")) {
-                throw new UserException(Location.cell(name, 1, "lsl"), ImportMessage.NO_LIMIT_COLUMN);
+                throw new UserException(Location.cell(name, csv.row(), "lsl"), ImportMessage.NO_LIMIT_COLUMN);
             }
             List<CharacteristicDraft> rows = new ArrayList<>();
-            for (CSVRecord r : csv) {
-                if (!r.isConsistent()) {
-                    throw new UserException(Location.cell(name, r.getRecordNumber() + 1, null),
-                            ImportMessage.ROW_LENGTH, r.size(), columns.size());
+            while (csv.next()) {
+                if (csv.count() != headers.length) {
+                    throw new UserException(Location.cell(name, csv.row(), null), ImportMessage.ROW_LENGTH, csv.count(), headers.length);
                 }
                 Map<String, String> values = new HashMap<>();
-                columns.forEach((key, header) -> values.put(key, r.get(header)));
+                columns.forEach((key, at) -> values.put(key, csv.cell(at)));
                 rows.add(CharacteristicDraft.of(values));
             }
             if (rows.isEmpty()) {
                 throw new UserException(Location.file(name), ImportMessage.NO_ROWS);
             }
             return rows;
-        } catch (IOException | java.io.UncheckedIOException e) {
-            throw new UserException(Location.file(name), ImportMessage.UNREADABLE, e.getMessage());
-        } catch (IllegalArgumentException | IllegalStateException e) {
+        } catch (NoSuchFileException e) {
             throw new UserException(Location.file(name), ImportMessage.UNREADABLE, e.getMessage());
         }
     }

@@ -6,7 +6,8 @@
  * untitled.draft.json} in the wizard home; opening a plan restores a draft newer than the file), {@code
  * RecentPlans}, {@code AppHome} ({@code ~/.proofrun}, moved by the system property {@code proofrun.home};
  * plans default to {@code ./plans}), {@code PlanDrafts} between the draft and a {@code plan.StudyPlan}, and
- * the wizard's parsers ({@code FieldNumbers}, {@code CalendarText}).
+ * the wizard's parsers ({@code FieldNumbers}, {@code CalendarText}), and {@code ExpectedProcess}, the Goal step's
+ * expectation from a typed index, a mean and σ, or pilot readings.
  *
  * {@code Background} runs long work as a JavaFX {@code Task} on a daemon worker; the view-model cancels the
  * older job and drops its answer (latest wins). {@code Background.fxFinishing} is the plan-file writer: not a

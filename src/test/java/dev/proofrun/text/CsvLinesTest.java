@@ -1,4 +1,4 @@
-package dev.proofrun.grade;
+package dev.proofrun.text;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 

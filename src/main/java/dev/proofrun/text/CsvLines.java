@@ -1,4 +1,4 @@
-package dev.proofrun.grade;
+package dev.proofrun.text;
 
 import java.io.IOException;
 import java.io.InputStream;
