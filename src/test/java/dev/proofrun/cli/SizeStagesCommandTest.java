@@ -51,7 +51,7 @@ class SizeStagesCommandTest {
      */
     @Test
     void kimDemetsLooksSaveAFifthOnTheDemosFirstCharacteristic() throws Exception {
-        Run r = run("size", "--target", "1.33", "--expected", "1.67", "--expected-cp", "1.8", "--subgroup-size", "5",
+        CommandRun r = run("size", "--target", "1.33", "--expected", "1.67", "--expected-cp", "1.8", "--subgroup-size", "5",
                 "--stages", "3", "--spending", "kim-demets-2", "--json");
         assertEquals(0, r.code(), r.err());
         JsonNode staged = new ObjectMapper().readTree(r.out()).get("staged");
@@ -64,7 +64,7 @@ class SizeStagesCommandTest {
 
     @Test
     void anUnknownSpendingNamesTheKnownOnes() {
-        Run r = run("size", "--target", "1.33", "--expected", "1.67", "--stages", "2", "--spending", "kim-demets-3");
+        CommandRun r = run("size", "--target", "1.33", "--expected", "1.67", "--stages", "2", "--spending", "kim-demets-3");
         assertEquals(2, r.code());
         assertTrue(r.err().contains("'kim-demets-3'") && r.err().contains("obrien-fleming, pocock, kim-demets-2"),
                 r.err());
