@@ -125,8 +125,8 @@ public final class PlanNewCommand implements Callable<Integer> {
             description = "Planned looks: 1 (default, one grade at the end) to 4; the study may stop at a look when the"
                     + " answer is clear.")
     int stages;
-    @Option(names = "--spending", paramLabel = "obrien-fleming|pocock|kim-demets-2",
-            description = "How a staged plan spends its false-pass risk across the looks (default obrien-fleming).")
+    @Option(names = "--spending", paramLabel = "kim-demets-2|obrien-fleming|pocock",
+            description = "How a staged plan spends its false-pass risk across the looks (default " + Spending.DEFAULT_TOKEN + ").")
     String spending;
 
     @Option(names = "--zone", paramLabel = "ZONE", description = "Time zone of the plant (default: this computer's).")
@@ -234,7 +234,7 @@ public final class PlanNewCommand implements Callable<Integer> {
             }
             return Optional.empty();
         }
-        Spending how = spending == null ? Spending.OBRIEN_FLEMING : Spending.fromToken(spending).orElseThrow(
+        Spending how = spending == null ? Spending.byDefault() : Spending.fromToken(spending).orElseThrow(
                 () -> new UserException(PlanOptionMessage.UNKNOWN_SPENDING, spending, Spending.tokens()));
         for (Characteristic c : chars) {
             if (c.requirement().confidence() != chars.get(0).requirement().confidence()) {

@@ -140,7 +140,7 @@ public final class SizeCommand implements Callable<Integer> {
                     + " recommended subgroup size, which may stop early at a look (simulated; takes some seconds).")
     int stages;
 
-    @Option(names = "--spending", defaultValue = "obrien-fleming", paramLabel = "obrien-fleming|pocock|kim-demets-2",
+    @Option(names = "--spending", defaultValue = Spending.DEFAULT_TOKEN, paramLabel = "kim-demets-2|obrien-fleming|pocock",
             description = "How a staged study spends its false-pass risk across the looks (default ${DEFAULT-VALUE}).")
     String spending;
 

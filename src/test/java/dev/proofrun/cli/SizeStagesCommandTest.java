@@ -34,7 +34,7 @@ class SizeStagesCommandTest {
         assertEquals(List.of("spending", "subgroupSize", "stages", "power", "boundPower", "passAtTarget",
                 "expectedReadings", "maxReadings", "singleStageReadings", "saving", "extra", "recommended", "reason",
                 "simulatedStudies"), iterate(staged.fieldNames()));
-        assertEquals("obrien-fleming", staged.get("spending").asText());
+        assertEquals(dev.proofrun.design.Spending.DEFAULT_TOKEN, staged.get("spending").asText(), "the default spending");
         JsonNode first = staged.get("stages").get(0);
         assertEquals(List.of("subgroups", "readings", "confidence", "efficacy", "futility", "stopAtTarget",
                 "stopAtExpected"), iterate(first.fieldNames()));

@@ -139,7 +139,7 @@ class StagedCommandTest {
     @Test
     void gradeNamesTheLookAndContinueExitsOneWithRequireDemonstrated() throws Exception {
         Path p = dir.resolve("staged.json");
-        assertEquals(0, newPlan(p, "--stages", "2"), err.toString());
+        assertEquals(0, newPlan(p, "--stages", "2", "--spending", "obrien-fleming"), err.toString());
         assertEquals(0, run("plan", "issue", p.toString()));
         StudyPlan plan = PlanFiles.read(p);
         GradingPlan gp = GradingPlans.of(plan);

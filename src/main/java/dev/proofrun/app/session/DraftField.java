@@ -1,5 +1,6 @@
 package dev.proofrun.app.session;
 
+import dev.proofrun.design.Spending;
 import dev.proofrun.schedule.CalendarDefaults;
 
 /**
@@ -34,7 +35,7 @@ public enum DraftField {
     /** Planned looks at the data, 1 (a single stage, graded once at the end) to 4, as {@code plan new --stages}. */
     STAGES("1"),
     /** Token of {@link dev.proofrun.design.Spending}: how a staged plan spends its false-pass risk. */
-    SPENDING("obrien-fleming"),
+    SPENDING(Spending.DEFAULT_TOKEN),
     /** The study's first minute, "yyyy-MM-dd HH:mm" in the plant's zone. */
     START(""),
     /** "days" or "shifts". */

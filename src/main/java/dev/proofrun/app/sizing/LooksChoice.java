@@ -101,6 +101,6 @@ public final class LooksChoice {
 
     /** The spending the draft holds. */
     Spending spending() {
-        return Spending.fromToken(draft.text(DraftField.SPENDING)).orElse(Spending.OBRIEN_FLEMING);
+        return Spending.fromToken(draft.text(DraftField.SPENDING)).orElse(Spending.byDefault());
     }
 }

@@ -171,7 +171,7 @@ class SizingStagedTest {
         again.restore(saved, false);
         assertEquals("2", again.text(DraftField.STAGES));
         assertEquals(1, reopened.staged().choice().looksIndex().get());
-        assertEquals(0, reopened.staged().choice().spendingIndex().get());
+        assertEquals(dev.proofrun.design.Spending.byDefault().ordinal(), reopened.staged().choice().spendingIndex().get());
         assertEquals(planned, reopened.plannedStages());
         assertEquals(vm.design(), reopened.design());
     }
