@@ -1,9 +1,10 @@
 package dev.proofrun.stats;
 
 import java.util.Arrays;
+import java.util.Collections;
+import java.util.LinkedHashMap;
 import java.util.Locale;
 import java.util.Map;
-import java.util.concurrent.ConcurrentHashMap;
 import java.util.stream.IntStream;
 import org.apache.commons.rng.sampling.distribution.ZigguratSampler;
 import org.apache.commons.rng.simple.RandomSource;
@@ -47,7 +48,14 @@ public final class FoldedNormalBound {
     private static final int CACHE_LIMIT = 16;
     /** Standard studies drawn before they are refitted together. */
     private static final int BLOCK = 100;
-    private static final Map<String, Table> CACHE = new ConcurrentHashMap<>();
+    /** The least recently used table goes first, so a run of edits keeps the study sizes it returns to. */
+    private static final Map<String, Table> CACHE = Collections.synchronizedMap(
+            new LinkedHashMap<>(CACHE_LIMIT, 0.75f, true) {
+                @Override
+                protected boolean removeEldestEntry(Map.Entry<String, Table> eldest) {
+                    return size() > CACHE_LIMIT;
+                }
+            });
 
     private FoldedNormalBound() {
     }
@@ -197,9 +205,6 @@ public final class FoldedNormalBound {
         Table t = CACHE.get(id);
         if (t == null) {
             t = draw(readings, seed);
-            if (CACHE.size() >= CACHE_LIMIT) {
-                CACHE.clear();
-            }
             CACHE.put(id, t);
         }
         return t;
