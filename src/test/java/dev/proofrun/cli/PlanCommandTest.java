@@ -8,8 +8,6 @@ import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import dev.proofrun.plan.PlanFiles;
 import dev.proofrun.plan.StudyPlan;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.OffsetDateTime;
@@ -24,13 +22,12 @@ class PlanCommandTest {
     @TempDir
     Path dir;
 
-    private StringWriter out;
-    private StringWriter err;
+    /** The last run of the command line: its exit code and what it printed. */
+    private CommandRun last;
 
     private int run(String... args) {
-        out = new StringWriter();
-        err = new StringWriter();
-        return ProofrunCommand.run(new PrintWriter(out, true), new PrintWriter(err, true), args);
+        last = CommandRun.run(args);
+        return last.code();
     }
 
     private String[] newPlan(Path file, String... extra) {
@@ -59,20 +56,20 @@ class PlanCommandTest {
     @Test
     void newShowIssue() throws Exception {
         Path file = dir.resolve("p.json");
-        assertEquals(0, run(newPlan(file, "--span-days", "2")), err.toString());
+        assertEquals(0, run(newPlan(file, "--span-days", "2")), last.err());
         // 2 days x 3 shifts, 1440 - 45 minutes of breaks a day = 2790 minutes; 2790/25 = 111.6 -> "about every 2 hours"
-        assertTrue(out.toString().contains("one subgroup of 5 consecutive parts about every 2 hours over 6 shifts on 2 days"), out.toString());
+        assertTrue(last.out().contains("one subgroup of 5 consecutive parts about every 2 hours over 6 shifts on 2 days"), last.out());
         assertEquals(0, run("plan", "show", file.toString()));
-        assertTrue(out.toString().contains("S25"), out.toString());
+        assertTrue(last.out().contains("S25"), last.out());
 
         assertEquals(0, run("plan", "issue", file.toString()));
         StudyPlan issued = PlanFiles.read(file);
-        assertTrue(out.toString().contains(issued.revision().orElseThrow()));
+        assertTrue(last.out().contains(issued.revision().orElseThrow()));
         assertEquals(0, run("plan", "issue", file.toString()));
-        assertTrue(out.toString().contains("already issued"), out.toString());
+        assertTrue(last.out().contains("already issued"), last.out());
 
         assertEquals(0, run("plan", "show", "--json", file.toString()));
-        JsonNode j = new ObjectMapper().readTree(out.toString());
+        JsonNode j = new ObjectMapper().readTree(last.out());
         assertEquals("issued", j.get("state").asText());
         assertEquals(issued.revision().orElseThrow(), j.get("revision").asText());
         assertTrue(j.get("summary").asText().startsWith("one subgroup of 5"));
@@ -93,7 +90,7 @@ class PlanCommandTest {
         Path file = dir.resolve("c.json");
         assertEquals(0, run("plan", "new", "--out", file.toString(), "--part", "hub", "--characteristics", csv.toString(),
                 "--subgroup-size", "5", "--subgroups", "30", "--zone", "UTC", "--start", "2027-03-01T06:00",
-                "--span-shifts", "4"), err.toString());
+                "--span-shifts", "4"), last.err());
         StudyPlan p = PlanFiles.read(file);
         assertEquals(2, p.characteristics().size());
         assertTrue(p.characteristic("R2").orElseThrow().limits().lower().isEmpty());
@@ -102,7 +99,7 @@ class PlanCommandTest {
         Path bad = dir.resolve("bad.json");
         assertEquals(2, run("plan", "new", "--out", bad.toString(), "--part", "hub", "--characteristics", csv.toString(),
                 "--subgroup-size", "5", "--subgroups", "30", "--zone", "UTC", "--start", "2027-03-01T06:00"));
-        assertTrue(err.toString().contains("chars.csv, row 2, column usl"), err.toString());
+        assertTrue(last.err().contains("chars.csv, row 2, column usl"), last.err());
         assertFalse(Files.exists(bad));
     }
 
@@ -120,7 +117,7 @@ class PlanCommandTest {
         };
         for (String[] args : cases) {
             assertEquals(2, run(args), String.join(" ", args));
-            String e = err.toString().trim();
+            String e = last.err().trim();
             assertTrue(e.startsWith("proofrun: ") && !e.contains("\n") && !e.contains("Exception"), e);
             assertFalse(Files.exists(file), "no file for " + e);
         }
@@ -137,8 +134,8 @@ class PlanCommandTest {
         assertEquals(2, run("plan", "new", "--out", file.toString(), "--part", "hub", "--characteristics", csv.toString(),
                 "--subgroup-size", "5", "--zone", "UTC", "--start", "2027-03-01T06:00"));
         assertEquals("proofrun: " + csv + ": characteristic R2: expected Cpk 1.200 is not above the required 1.330:"
-                + " no study size can show this; the process must improve first", err.toString().strip());
-        assertEquals("", out.toString());
+                + " no study size can show this; the process must improve first", last.err().strip());
+        assertEquals("", last.out());
         assertFalse(Files.exists(file));
         assertEquals(before, Files.readString(csv), "the user's file is untouched");
 
@@ -147,8 +144,8 @@ class PlanCommandTest {
                 "journal diameter", "--characteristic-id", "J1", "--unit", "mm", "--lsl", "24.98", "--usl", "25.02",
                 "--target", "1.33", "--expected", "1.33", "--subgroup-size", "5", "--zone", "UTC",
                 "--start", "2027-03-01T06:00"));
-        assertTrue(err.toString().strip().startsWith("proofrun: characteristic J1: expected Cpk 1.330 is not above"),
-                err.toString());
+        assertTrue(last.err().strip().startsWith("proofrun: characteristic J1: expected Cpk 1.330 is not above"),
+                last.err());
         assertFalse(Files.exists(file));
     }
 
@@ -161,21 +158,21 @@ class PlanCommandTest {
         assertTrue(Files.readAllBytes(file).length == before.length && Arrays.equals(before, Files.readAllBytes(file)));
         assertEquals(0, run("plan", "issue", file.toString()));
         assertEquals(2, run(newPlan(file, "--force")));
-        assertTrue(err.toString().contains("issued revision"), err.toString());
+        assertTrue(last.err().contains("issued revision"), last.err());
     }
 
     @Test
     void aResolutionWithoutAGaugeNameIsKeptAndACoarseOneIsWarned() throws Exception {
         // tolerance 0.04: a step of 0.005 is coarser than a tenth (0.004), the rule of ten (common practice)
         Path f = dir.resolve("res.json");
-        assertEquals(0, run(newPlan(f, "--resolution", "0.005")), err.toString());
-        assertTrue(out.toString().contains("warning: C1: gauge resolution 0.005 is coarser than a tenth of the tolerance"),
-                out.toString());
+        assertEquals(0, run(newPlan(f, "--resolution", "0.005")), last.err());
+        assertTrue(last.out().contains("warning: C1: gauge resolution 0.005 is coarser than a tenth of the tolerance"),
+                last.out());
         StudyPlan plan = PlanFiles.read(f);
         assertEquals(0.005, plan.characteristics().get(0).gauge().orElseThrow().resolution(), 0);
         Path fine = dir.resolve("fine.json");
-        assertEquals(0, run(newPlan(fine, "--resolution", "0.001")), err.toString());
-        assertFalse(out.toString().contains("warning"), out.toString());
+        assertEquals(0, run(newPlan(fine, "--resolution", "0.001")), last.err());
+        assertFalse(last.out().contains("warning"), last.out());
         assertEquals(0.001, PlanFiles.read(fine).characteristics().get(0).gauge().orElseThrow().resolution(), 0);
     }
 }

@@ -6,8 +6,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.proofrun.plan.PlanFiles;
 import dev.proofrun.stats.ShapeFamily;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -22,13 +20,12 @@ class PlanShapeCommandTest {
     @TempDir
     Path dir;
 
-    private StringWriter out;
-    private StringWriter err;
+    /** The last run of the command line: its exit code and what it printed. */
+    private CommandRun last;
 
     private int run(String... args) {
-        out = new StringWriter();
-        err = new StringWriter();
-        return ProofrunCommand.run(new PrintWriter(out, true), new PrintWriter(err, true), args);
+        last = CommandRun.run(args);
+        return last.code();
     }
 
     private String[] single(Path file, String... extra) {
@@ -44,20 +41,20 @@ class PlanShapeCommandTest {
     @Test
     void aDeclaredShapeIsWrittenShownAndRead() throws Exception {
         Path file = dir.resolve("p.json");
-        assertEquals(0, run(single(file, "--shape", "lognormal")), err.toString());
+        assertEquals(0, run(single(file, "--shape", "lognormal")), last.err());
         // plan new sizes with the normal model; it says so for a skewed shape
-        assertTrue(out.toString().contains("C1 is planned lognormal, but its power here is the normal model's"), out.toString());
+        assertTrue(last.out().contains("C1 is planned lognormal, but its power here is the normal model's"), last.out());
         assertTrue(Files.readString(file).contains("\"shape\": \"lognormal\""), Files.readString(file));
         assertEquals(ShapeFamily.LOGNORMAL, PlanFiles.read(file).characteristics().get(0).shape());
         assertEquals(0, run("plan", "show", file.toString()));
-        assertTrue(out.toString().contains("lognormal"), out.toString());
+        assertTrue(last.out().contains("lognormal"), last.out());
     }
 
     @Test
     void theNormalShapeIsLeftOutOfTheFile() throws Exception {
         // plans written before shapes existed must keep their bytes and revision
         Path file = dir.resolve("p.json");
-        assertEquals(0, run(single(file)), err.toString());
+        assertEquals(0, run(single(file)), last.err());
         assertFalse(Files.readString(file).contains("\"shape\""));
         assertEquals(ShapeFamily.NORMAL, PlanFiles.read(file).characteristics().get(0).shape());
     }
@@ -66,7 +63,7 @@ class PlanShapeCommandTest {
     void anUnknownShapeIsRefusedWithTheNames() {
         Path file = dir.resolve("p.json");
         assertEquals(2, run(single(file, "--shape", "gamma")));
-        String e = err.toString().trim();
+        String e = last.err().trim();
         assertTrue(e.contains("--shape") && e.contains("normal, lognormal, weibull, folded-normal, lognormal3, weibull3"), e);
         assertEquals(1, e.lines().count(), e);
         assertFalse(Files.exists(file));
@@ -81,17 +78,17 @@ class PlanShapeCommandTest {
         Path file = dir.resolve("p.json");
         assertEquals(0, run("plan", "new", "--out", file.toString(), "--part", "lid", "--characteristics", csv.toString(),
                 "--subgroup-size", "5", "--subgroups", "25", "--zone", "Europe/Berlin", "--start", "2027-03-01T06:00"),
-                err.toString());
+                last.err());
         assertEquals(List.of(ShapeFamily.NORMAL, ShapeFamily.WEIBULL),
                 PlanFiles.read(file).characteristics().stream().map(c -> c.shape()).toList());
-        assertEquals(0, run("size", "--characteristics", csv.toString()), err.toString());
-        assertTrue(out.toString().contains("warning: R4 is planned weibull, but its power here is the normal model's"),
-                out.toString());
+        assertEquals(0, run("size", "--characteristics", csv.toString()), last.err());
+        assertTrue(last.out().contains("warning: R4 is planned weibull, but its power here is the normal model's"),
+                last.out());
 
         Files.writeString(csv, "id,name,unit,nominal,lsl,usl,target,expected,shape\n"
                 + "R4,roughness,um,,,0.8,1.33,1.8,skewed\n", StandardCharsets.UTF_8);
         assertEquals(2, run("size", "--characteristics", csv.toString()));
-        String e = err.toString().trim();
+        String e = last.err().trim();
         assertTrue(e.contains("chars.csv") && e.contains("row 2") && e.contains("shape")
                 && e.contains("normal, lognormal, weibull, folded-normal, lognormal3, weibull3"), e);
     }
@@ -99,13 +96,13 @@ class PlanShapeCommandTest {
     @Test
     void aFoldedNormalShapeIsWrittenShownReadAndWarnedAbout() throws Exception {
         Path file = dir.resolve("p.json");
-        assertEquals(0, run(single(file, "--shape", "folded-normal")), err.toString());
-        assertTrue(out.toString().contains("C1 is planned folded-normal, but its power here is the normal model's; size it"
-                + " alone with 'size --shape folded-normal --skewness G --spec upper|lower'"), out.toString());
+        assertEquals(0, run(single(file, "--shape", "folded-normal")), last.err());
+        assertTrue(last.out().contains("C1 is planned folded-normal, but its power here is the normal model's; size it"
+                + " alone with 'size --shape folded-normal --skewness G --spec upper|lower'"), last.out());
         assertTrue(Files.readString(file).contains("\"shape\": \"folded-normal\""), Files.readString(file));
         assertEquals(ShapeFamily.FOLDED_NORMAL, PlanFiles.read(file).characteristics().get(0).shape());
         assertEquals(0, run("plan", "show", file.toString()));
-        assertTrue(out.toString().contains("folded-normal"), out.toString());
+        assertTrue(last.out().contains("folded-normal"), last.out());
 
         Path csv = dir.resolve("chars.csv");
         Files.writeString(csv, "id,name,unit,nominal,lsl,usl,target,expected,shape\n"
@@ -113,7 +110,7 @@ class PlanShapeCommandTest {
         Path fromCsv = dir.resolve("q.json");
         assertEquals(0, run("plan", "new", "--out", fromCsv.toString(), "--part", "lid", "--characteristics", csv.toString(),
                 "--subgroup-size", "5", "--subgroups", "25", "--zone", "Europe/Berlin", "--start", "2027-03-01T06:00"),
-                err.toString());
+                last.err());
         assertEquals(ShapeFamily.FOLDED_NORMAL, PlanFiles.read(fromCsv).characteristics().get(0).shape());
     }
 }

@@ -21,8 +21,6 @@ import dev.proofrun.grade.GradingPlans;
 import dev.proofrun.grade.SimulatedReturn;
 import dev.proofrun.plan.PlanFiles;
 import dev.proofrun.plan.StudyPlan;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -41,13 +39,12 @@ class StagedCommandTest {
     @TempDir
     Path dir;
 
-    private StringWriter out;
-    private StringWriter err;
+    /** The last run of the command line: its exit code and what it printed. */
+    private CommandRun last;
 
     private int run(String... args) {
-        out = new StringWriter();
-        err = new StringWriter();
-        return ProofrunCommand.run(new PrintWriter(out, true), new PrintWriter(err, true), args);
+        last = CommandRun.run(args);
+        return last.code();
     }
 
     private int newPlan(Path file, String... extra) {
@@ -63,10 +60,10 @@ class StagedCommandTest {
     @Test
     void planNewWritesTheStagedDesignersLooksAtTheGivenK() throws Exception {
         Path p = dir.resolve("staged.json");
-        assertEquals(0, newPlan(p, "--stages", "3", "--spending", "pocock"), err.toString());
-        assertTrue(out.toString().contains("stages: 3 looks at 10, 20, 30 subgroups"), out.toString());
-        assertTrue(out.toString().contains("calibrated on the looks' joint distribution"), out.toString());
-        assertTrue(out.toString().contains("stages: C1 power"), out.toString());
+        assertEquals(0, newPlan(p, "--stages", "3", "--spending", "pocock"), last.err());
+        assertTrue(last.out().contains("stages: 3 looks at 10, 20, 30 subgroups"), last.out());
+        assertTrue(last.out().contains("calibrated on the looks' joint distribution"), last.out());
+        assertTrue(last.out().contains("stages: C1 power"), last.out());
         Stages st = PlanFiles.read(p).stages().orElseThrow();
         assertEquals(Spending.POCOCK, st.spending());
         // the plan holds the staged designer's looks for this characteristic at the given k, nothing else
@@ -80,21 +77,21 @@ class StagedCommandTest {
         assertTrue(st.looks().get(0).stopsForFutility());
         assertFalse(st.last().stopsForFutility());
         assertEquals(0, run("plan", "show", p.toString()));
-        assertTrue(out.toString().contains("stages   3 looks, pocock spending"), out.toString());
-        assertTrue(out.toString().contains("look 1 after slot S10 (stage 1: slots S01 to S10"), out.toString());
+        assertTrue(last.out().contains("stages   3 looks, pocock spending"), last.out());
+        assertTrue(last.out().contains("look 1 after slot S10 (stage 1: slots S01 to S10"), last.out());
         assertEquals(0, run("plan", "show", p.toString(), "--json"));
-        JsonNode json = new ObjectMapper().readTree(out.toString());
+        JsonNode json = new ObjectMapper().readTree(last.out());
         assertEquals(3, json.path("stages").path("looks").size());
     }
 
     @Test
     void planNewKeepsTheKimDemetsToken() throws Exception {
         Path p = dir.resolve("kim-demets.json");
-        assertEquals(0, newPlan(p, "--stages", "2", "--spending", "kim-demets-2"), err.toString());
+        assertEquals(0, newPlan(p, "--stages", "2", "--spending", "kim-demets-2"), last.err());
         assertTrue(Files.readString(p).contains("\"spending\": \"kim-demets-2\""));
         assertEquals(Spending.KIM_DEMETS_2, PlanFiles.read(p).stages().orElseThrow().spending());
         assertEquals(0, run("plan", "show", p.toString()));
-        assertTrue(out.toString().contains("stages   2 looks, kim-demets-2 spending"), out.toString());
+        assertTrue(last.out().contains("stages   2 looks, kim-demets-2 spending"), last.out());
     }
 
     @Test
@@ -129,7 +126,7 @@ class StagedCommandTest {
             } else {
                 assertEquals(2, newPlan(p, cases[i]), String.join(" ", cases[i]));
             }
-            String e = err.toString().trim();
+            String e = last.err().trim();
             assertTrue(e.contains(words[i]), e);
             assertFalse(e.contains("\n") || e.contains("Exception"), e);
             assertFalse(Files.exists(p), "nothing written");
@@ -139,7 +136,7 @@ class StagedCommandTest {
     @Test
     void gradeNamesTheLookAndContinueExitsOneWithRequireDemonstrated() throws Exception {
         Path p = dir.resolve("staged.json");
-        assertEquals(0, newPlan(p, "--stages", "2"), err.toString());
+        assertEquals(0, newPlan(p, "--stages", "2"), last.err());
         assertEquals(0, run("plan", "issue", p.toString()));
         StudyPlan plan = PlanFiles.read(p);
         GradingPlan gp = GradingPlans.of(plan);
@@ -156,14 +153,14 @@ class StagedCommandTest {
             stageOne.add(String.join(",", c));
         }
         Files.write(returned, stageOne);
-        assertEquals(1, run("grade", p.toString(), returned.toString(), "--require-demonstrated"), err.toString());
-        String text = out.toString();
+        assertEquals(1, run("grade", p.toString(), returned.toString(), "--require-demonstrated"), last.err());
+        String text = last.out();
         assertTrue(text.contains("Part verdict: Continue"), text);
         assertTrue(text.contains("Graded at look 1 of 2 (after slot S15, 15 subgroups planned so far): continue,"
                 + " collect stage 2, slots S16 to S30"), text);
         assertFalse(text.contains("did not come back"), "stage 2's blank rows are not missing");
         assertEquals(0, run("grade", p.toString(), returned.toString(), "--json"));
-        JsonNode json = new ObjectMapper().readTree(out.toString());
+        JsonNode json = new ObjectMapper().readTree(last.out());
         assertEquals("continue", json.path("verdict").asText());
         JsonNode look = json.path("characteristics").get(0).path("look");
         assertEquals(1, look.path("number").asInt());

@@ -8,8 +8,6 @@ import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import dev.proofrun.plan.PlanFiles;
 import dev.proofrun.stats.ShapeFamily;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -34,16 +32,12 @@ class ThresholdShapeCommandTest {
     @TempDir
     Path dir;
 
-    private String out;
-    private String err;
+    /** The last run of the command line: its exit code and what it printed. */
+    private CommandRun last;
 
     private int run(String... args) {
-        StringWriter o = new StringWriter();
-        StringWriter e = new StringWriter();
-        int code = ProofrunCommand.run(new PrintWriter(o, true), new PrintWriter(e, true), args);
-        out = o.toString();
-        err = e.toString();
-        return code;
+        last = CommandRun.run(args);
+        return last.code();
     }
 
     private String[] single(Path file, String... extra) {
@@ -59,20 +53,20 @@ class ThresholdShapeCommandTest {
     @Test
     void aThresholdShapeIsWrittenShownAndRead() throws Exception {
         Path file = dir.resolve("p.json");
-        assertEquals(0, run(single(file, "--shape", "lognormal3", "--threshold", "9.95")), err);
+        assertEquals(0, run(single(file, "--shape", "lognormal3", "--threshold", "9.95")), last.err());
         String json = Files.readString(file);
         assertTrue(json.contains("\"shape\" : \"lognormal3\",\n      \"threshold\" : 9.95,")
                 || json.contains("\"shape\": \"lognormal3\",\n      \"threshold\": 9.95,"), json);
         assertEquals(ShapeFamily.LOGNORMAL3, PlanFiles.read(file).characteristics().get(0).shape());
         assertEquals(OptionalDouble.of(9.95), PlanFiles.read(file).characteristics().get(0).threshold());
-        assertEquals(0, run("plan", "show", file.toString()), err);
-        assertTrue(out.contains("lognormal3, threshold 9.95"), out);
+        assertEquals(0, run("plan", "show", file.toString()), last.err());
+        assertTrue(last.out().contains("lognormal3, threshold 9.95"), last.out());
     }
 
     @Test
     void otherShapesHaveNoThresholdInTheFile() throws Exception {
         Path file = dir.resolve("p.json");
-        assertEquals(0, run(single(file, "--shape", "lognormal")), err);
+        assertEquals(0, run(single(file, "--shape", "lognormal")), last.err());
         assertFalse(Files.readString(file).contains("threshold"));
     }
 
@@ -89,8 +83,8 @@ class ThresholdShapeCommandTest {
             "not normal", "must lie below the upper limit 10.1", "must be a number"};
         for (int i = 0; i < cases.length; i++) {
             Path file = dir.resolve("bad" + i + ".json");
-            assertEquals(2, run(single(file, cases[i])), String.join(" ", cases[i]) + ": " + out + err);
-            String e = err.trim();
+            assertEquals(2, run(single(file, cases[i])), String.join(" ", cases[i]) + ": " + last.out() + last.err());
+            String e = last.err().trim();
             assertEquals(1, e.lines().count(), e);
             assertTrue(e.contains(words[i].replace("not normal", "not normal")) && e.contains(i == 0 ? "--shape" : "--threshold"), e);
             assertFalse(e.contains("Exception"), e);
@@ -106,7 +100,7 @@ class ThresholdShapeCommandTest {
                 + "H2,seat height,mm,,9.90,10.10,1.33,1.8,weibull3,9.95\n", StandardCharsets.UTF_8);
         Path file = dir.resolve("p.json");
         assertEquals(0, run("plan", "new", "--out", file.toString(), "--part", "pin", "--characteristics", csv.toString(),
-                "--subgroup-size", "5", "--subgroups", "25", "--zone", "Europe/Berlin", "--start", "2027-03-01T06:00"), err);
+                "--subgroup-size", "5", "--subgroups", "25", "--zone", "Europe/Berlin", "--start", "2027-03-01T06:00"), last.err());
         assertEquals(List.of(OptionalDouble.empty(), OptionalDouble.of(9.95)),
                 PlanFiles.read(file).characteristics().stream().map(c -> c.threshold()).toList());
 
@@ -115,7 +109,7 @@ class ThresholdShapeCommandTest {
         Path bad = dir.resolve("q.json");
         assertEquals(2, run("plan", "new", "--out", bad.toString(), "--part", "pin", "--characteristics", csv.toString(),
                 "--subgroup-size", "5", "--subgroups", "25", "--zone", "Europe/Berlin", "--start", "2027-03-01T06:00"));
-        String e = err.trim();
+        String e = last.err().trim();
         assertTrue(e.contains("chars.csv") && e.contains("row 2") && e.contains("threshold") && e.contains("not lognormal"), e);
         assertEquals(1, e.lines().count(), e);
         assertFalse(Files.exists(bad));
@@ -123,7 +117,7 @@ class ThresholdShapeCommandTest {
 
     /** Readings 9.95 + 0.02·exp(0.4·Z) in the fill-in layout (invented seat heights; Ppu about 3). */
     private Path returned(Path plan, long seed, String replaceFirst) throws Exception {
-        assertEquals(0, run("plan", "issue", plan.toString()), err);
+        assertEquals(0, run("plan", "issue", plan.toString()), last.err());
         var gp = dev.proofrun.grade.GradingPlans.of(PlanFiles.read(plan));
         UniformRandomProvider rng = RandomSource.XO_RO_SHI_RO_128_PP.create(seed);
         ZigguratSampler.NormalizedGaussian g = ZigguratSampler.NormalizedGaussian.of(rng);
@@ -147,22 +141,22 @@ class ThresholdShapeCommandTest {
     @Test
     void gradeNamesTheModelAndThreshold() throws Exception {
         Path plan = dir.resolve("p.json");
-        assertEquals(0, run(single(plan, "--shape", "lognormal3", "--threshold", "9.95", "--lsl", "9.90")), err);
+        assertEquals(0, run(single(plan, "--shape", "lognormal3", "--threshold", "9.95", "--lsl", "9.90")), last.err());
         Path data = returned(plan, 21L, null);
-        assertEquals(0, run("grade", plan.toString(), data.toString()), err);
-        assertTrue(out.contains("C1 seat height: Demonstrated"), out);
-        assertTrue(out.contains("under the lognormal3 model"), out);
-        assertTrue(out.contains("fitted lognormal3 (threshold 9.95) model"), out);
-        assertTrue(out.contains("lower limit 9.9 lies at or below the declared threshold 9.95"), out);
-        assertTrue(out.contains("threshold 9.95 as the real stop"), out);
-        assertEquals(0, run("grade", plan.toString(), data.toString(), "--json"), err);
-        JsonNode j = new ObjectMapper().readTree(out).get("characteristics").get(0);
+        assertEquals(0, run("grade", plan.toString(), data.toString()), last.err());
+        assertTrue(last.out().contains("C1 seat height: Demonstrated"), last.out());
+        assertTrue(last.out().contains("under the lognormal3 model"), last.out());
+        assertTrue(last.out().contains("fitted lognormal3 (threshold 9.95) model"), last.out());
+        assertTrue(last.out().contains("lower limit 9.9 lies at or below the declared threshold 9.95"), last.out());
+        assertTrue(last.out().contains("threshold 9.95 as the real stop"), last.out());
+        assertEquals(0, run("grade", plan.toString(), data.toString(), "--json"), last.err());
+        JsonNode j = new ObjectMapper().readTree(last.out()).get("characteristics").get(0);
         assertEquals("lognormal3", j.get("model").asText());
         assertEquals(9.95, j.get("threshold").asDouble(), 0);
         assertEquals("iso-22514-2-percentile", j.get("method").asText());
 
         Path pdf = dir.resolve("report.pdf");
-        assertEquals(0, run("grade", plan.toString(), data.toString(), "--report", pdf.toString()), err);
+        assertEquals(0, run("grade", plan.toString(), data.toString(), "--report", pdf.toString()), last.err());
         try (org.apache.pdfbox.pdmodel.PDDocument doc = org.apache.pdfbox.Loader.loadPDF(Files.readAllBytes(pdf))) {
             String text = new org.apache.pdfbox.text.PDFTextStripper().getText(doc).replaceAll("\\s+", " ");
             assertTrue(text.contains("lognormal3"), text);
@@ -174,26 +168,26 @@ class ThresholdShapeCommandTest {
     @Test
     void aReadingAtTheThresholdIsAFinding() throws Exception {
         Path plan = dir.resolve("p.json");
-        assertEquals(0, run(single(plan, "--shape", "weibull3", "--threshold", "9.95")), err);
+        assertEquals(0, run(single(plan, "--shape", "weibull3", "--threshold", "9.95")), last.err());
         Path data = returned(plan, 22L, "9.95");
         byte[] before = Files.readAllBytes(data);
-        assertEquals(0, run("grade", plan.toString(), data.toString()), err);
-        assertTrue(out.contains("C1 seat height: Not valid"), out);
-        assertTrue(out.contains("a reading at or below the declared threshold cannot come from the planned shape (weibull3,"
-                + " threshold 9.95): 9.95 in subgroup"), out);
-        assertTrue(out.contains(", reading 2."), out);
+        assertEquals(0, run("grade", plan.toString(), data.toString()), last.err());
+        assertTrue(last.out().contains("C1 seat height: Not valid"), last.out());
+        assertTrue(last.out().contains("a reading at or below the declared threshold cannot come from the planned shape (weibull3,"
+                + " threshold 9.95): 9.95 in subgroup"), last.out());
+        assertTrue(last.out().contains(", reading 2."), last.out());
         assertTrue(java.util.Arrays.equals(before, Files.readAllBytes(data)));
     }
 
     @Test
     void sizeAcceptsTheThresholdShapesAndPlansThemAsTheTwoParameterOnes() {
         assertEquals(0, run("size", "--shape", "lognormal", "--skewness", "1", "--spec", "upper", "--target", "1.33",
-                "--expected", "1.67", "--subgroup-size", "5"), err);
-        String two = out;
+                "--expected", "1.67", "--subgroup-size", "5"), last.err());
+        String two = last.out();
         assertEquals(0, run("size", "--shape", "lognormal3", "--skewness", "1", "--spec", "upper", "--target", "1.33",
-                "--expected", "1.67", "--subgroup-size", "5"), err);
-        assertTrue(out.contains("note: lognormal3 is planned exactly as lognormal"), out);
+                "--expected", "1.67", "--subgroup-size", "5"), last.err());
+        assertTrue(last.out().contains("note: lognormal3 is planned exactly as lognormal"), last.out());
         // the same table: only the note differs
-        assertEquals(two, out.replaceAll("note: lognormal3 is planned exactly as lognormal[^\n]*\n", ""));
+        assertEquals(two, last.out().replaceAll("note: lognormal3 is planned exactly as lognormal[^\n]*\n", ""));
     }
 }
