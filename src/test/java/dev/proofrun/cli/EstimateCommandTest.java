@@ -19,13 +19,7 @@ class EstimateCommandTest {
     @TempDir
     Path dir;
 
-    /** The last run of the command line: its exit code and what it printed. */
-    private CommandRun last;
-
-    private int run(String... args) {
-        last = CommandRun.run(args);
-        return last.code();
-    }
+    private final LastRun cli = new LastRun();
 
     /** The shaft demo data of CapabilityAnalysisTest in the x1..x4 layout. */
     private Path shaft() throws IOException {
@@ -50,19 +44,19 @@ class EstimateCommandTest {
 
     @Test
     void textReportShowsIndicesBoundsAndTheCaution() throws IOException {
-        assertEquals(0, run("estimate", shaft().toString(), "--lsl", "11.97", "--usl", "12.03"), last.err());
-        String text = last.out();
+        assertEquals(0, cli.run("estimate", shaft().toString(), "--lsl", "11.97", "--usl", "12.03"), cli.err());
+        String text = cli.out();
         assertTrue(text.contains("40 readings in 10 subgroups of 4"), text);
         assertTrue(text.contains("Cpk"), text);
         assertTrue(text.contains("1.596"), text); // Cpk, see CapabilityAnalysisTest
         assertTrue(text.contains("Caution:"), text);
-        assertEquals("", last.err());
+        assertEquals("", cli.err());
     }
 
     @Test
     void jsonHasTheAgreedKeysAndNulls() throws IOException {
-        assertEquals(0, run("estimate", shaft().toString(), "--usl", "12.03", "--json", "--bound", "bissell"));
-        JsonNode j = new ObjectMapper().readTree(last.out());
+        assertEquals(0, cli.run("estimate", shaft().toString(), "--usl", "12.03", "--json", "--bound", "bissell"));
+        JsonNode j = new ObjectMapper().readTree(cli.out());
         List<String> keys = new ArrayList<>();
         j.fieldNames().forEachRemaining(keys::add);
         assertEquals(List.of("readings", "subgroups", "subgroupSize", "mean", "sigmaWithin", "sigmaOverall",
@@ -78,9 +72,9 @@ class EstimateCommandTest {
 
     @Test
     void nominalSetsTheCpmTarget() throws IOException {
-        assertEquals(0, run("estimate", shaft().toString(), "--lsl", "11.97", "--usl", "12.03", "--nominal", "12.004",
+        assertEquals(0, cli.run("estimate", shaft().toString(), "--lsl", "11.97", "--usl", "12.03", "--nominal", "12.004",
                 "--json", "--sigma", "pooled", "--confidence", "0.9"));
-        JsonNode j = new ObjectMapper().readTree(last.out());
+        JsonNode j = new ObjectMapper().readTree(cli.out());
         assertEquals("pooled", j.get("sigmaMethod").asText());
         assertEquals(30, j.get("degreesOfFreedom").get("within").asDouble(), 0);
         assertEquals(0.9, j.get("confidence").asDouble(), 0);
@@ -88,12 +82,12 @@ class EstimateCommandTest {
     }
 
     private void refused(String expected, String... args) {
-        assertEquals(2, run(args), last.out());
-        String e = last.err();
+        assertEquals(2, cli.run(args), cli.out());
+        String e = cli.err();
         assertTrue(e.contains(expected), e);
         assertEquals(1, e.strip().lines().count(), "one line: " + e);
         assertFalse(e.contains("Exception") || e.contains("\tat "), e);
-        assertEquals("", last.out(), "no partial output");
+        assertEquals("", cli.out(), "no partial output");
     }
 
     @Test
@@ -170,12 +164,12 @@ class EstimateCommandTest {
             raw.append(x).append('\n');
         }
         Path p = Files.writeString(dir.resolve("hrc.csv"), rounded);
-        assertEquals(0, run("estimate", p.toString(), "--lsl", "58", "--usl", "64"), last.err());
-        assertTrue(last.out().contains("The readings do not look normal"), last.out());
-        assertTrue(last.out().contains("The readings lie on a grid of 0.1"), last.out());
-        assertTrue(last.out().contains("rounding by the gauge is the likely cause"), last.out());
+        assertEquals(0, cli.run("estimate", p.toString(), "--lsl", "58", "--usl", "64"), cli.err());
+        assertTrue(cli.out().contains("The readings do not look normal"), cli.out());
+        assertTrue(cli.out().contains("The readings lie on a grid of 0.1"), cli.out());
+        assertTrue(cli.out().contains("rounding by the gauge is the likely cause"), cli.out());
         Path q = Files.writeString(dir.resolve("raw.csv"), raw);
-        assertEquals(0, run("estimate", q.toString(), "--lsl", "58", "--usl", "64"), last.err());
-        assertTrue(!last.out().contains("rounding by the gauge"), last.out());
+        assertEquals(0, cli.run("estimate", q.toString(), "--lsl", "58", "--usl", "64"), cli.err());
+        assertTrue(!cli.out().contains("rounding by the gauge"), cli.out());
     }
 }
