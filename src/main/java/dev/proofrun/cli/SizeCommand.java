@@ -179,9 +179,8 @@ public final class SizeCommand implements Callable<Integer> {
             throw new UserException(SizeMessage.SHAPE_NOT_SIZED, family.token(), ShapeSize.plannable());
         }
         if (!family.isNormal()) {
-            List<Integer> sizes = subgroupSizes == null || subgroupSizes.isEmpty()
-                    ? IntStream.rangeClosed(1, 10).boxed().toList() : subgroupSizes;
-            PracticeFloors floors = wrap(() -> new PracticeFloors(minSubgroups, minReadings));
+            List<Integer> sizes = candidateSizes();
+            PracticeFloors floors = floors();
             ShapeSize sized;
             if (pilot != null && skewness == null && family.hasThreshold()) {
                 throw new UserException(OptionMessage.BAD_VALUE, "--pilot", "a " + family.token()
@@ -255,11 +254,18 @@ public final class SizeCommand implements Callable<Integer> {
     /** The design options of this command (power, sizes, estimator, bound, floors, shift) around one characteristic. */
     private DesignRequest designOptions(SpecLimits.Sides specSides, Requirement requirement, Expectation expectation,
             List<String> notes) {
-        List<Integer> sizes = subgroupSizes == null || subgroupSizes.isEmpty()
-                ? IntStream.rangeClosed(1, 10).boxed().toList() : subgroupSizes;
-        PracticeFloors floors = wrap(() -> new PracticeFloors(minSubgroups, minReadings));
-        return new DesignRequest(specSides, requirement, expectation, power, sizes, OptionValues.sigma(sigma),
-                OptionValues.bound(bound), floors, shift, lossRate, notes);
+        return new DesignRequest(specSides, requirement, expectation, power, candidateSizes(), OptionValues.sigma(sigma),
+                OptionValues.bound(bound), floors(), shift, lossRate, notes);
+    }
+
+    /** The subgroup sizes given with --subgroup-size, or 1 to 10. */
+    private List<Integer> candidateSizes() {
+        return subgroupSizes == null || subgroupSizes.isEmpty() ? IntStream.rangeClosed(1, 10).boxed().toList() : subgroupSizes;
+    }
+
+    /** The floors of --min-subgroups and --min-readings. */
+    private PracticeFloors floors() {
+        return wrap(() -> new PracticeFloors(minSubgroups, minReadings));
     }
 
     DesignRequest request() {

@@ -1,13 +1,9 @@
 package dev.proofrun.control;
 
-import java.io.BufferedReader;
-import java.io.IOException;
-import java.io.InputStream;
-import java.io.InputStreamReader;
-import java.io.UncheckedIOException;
-import java.nio.charset.StandardCharsets;
 import java.util.HashMap;
+import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.OptionalDouble;
 
 /**
@@ -56,26 +52,18 @@ final class DetectionTable {
     }
 
     private static DetectionTable load() {
+        Optional<List<String[]>> rows = StoredTable.rows(RESOURCE);
+        if (rows.isEmpty()) {
+            return new DetectionTable(Map.of());
+        }
         Map<Integer, int[]> byN = new HashMap<>();
-        try (InputStream in = DetectionTable.class.getResourceAsStream(RESOURCE)) {
-            if (in == null) {
-                return new DetectionTable(Map.of());
+        for (String[] f : rows.get()) {
+            int n = Integer.parseInt(f[0]);
+            int first = Integer.parseInt(f[1]);
+            int[] counts = byN.computeIfAbsent(n, x -> filled(MAX_READINGS / x + 1));
+            for (int i = 2; i < f.length; i++) {
+                counts[first + i - 2] = Integer.parseInt(f[i]);
             }
-            BufferedReader r = new BufferedReader(new InputStreamReader(in, StandardCharsets.UTF_8));
-            for (String line = r.readLine(); line != null; line = r.readLine()) {
-                if (line.isBlank() || line.startsWith("#")) {
-                    continue;
-                }
-                String[] f = line.trim().split("\\s+");
-                int n = Integer.parseInt(f[0]);
-                int first = Integer.parseInt(f[1]);
-                int[] counts = byN.computeIfAbsent(n, x -> filled(MAX_READINGS / x + 1));
-                for (int i = 2; i < f.length; i++) {
-                    counts[first + i - 2] = Integer.parseInt(f[i]);
-                }
-            }
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);
         }
         return new DetectionTable(byN);
     }

@@ -1,15 +1,10 @@
 package dev.proofrun.control;
 
-import java.io.BufferedReader;
-import java.io.IOException;
-import java.io.InputStream;
-import java.io.InputStreamReader;
-import java.io.UncheckedIOException;
-import java.nio.charset.StandardCharsets;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.OptionalDouble;
 
 /**
@@ -86,23 +81,15 @@ final class StabilityRiskTable {
     }
 
     private static StabilityRiskTable load() {
+        Optional<List<String[]>> stored = StoredTable.rows(RESOURCE);
+        if (stored.isEmpty()) {
+            return new StabilityRiskTable(Map.of());
+        }
         Map<Integer, List<double[]>> rows = new HashMap<>();
-        try (InputStream in = StabilityRiskTable.class.getResourceAsStream(RESOURCE)) {
-            if (in == null) {
-                return new StabilityRiskTable(Map.of());
-            }
-            BufferedReader r = new BufferedReader(new InputStreamReader(in, StandardCharsets.UTF_8));
-            for (String line = r.readLine(); line != null; line = r.readLine()) {
-                if (line.isBlank() || line.startsWith("#")) {
-                    continue;
-                }
-                String[] f = line.trim().split("\\s+");
-                int n = Integer.parseInt(f[0]);
-                rows.computeIfAbsent(n, x -> new ArrayList<>()).add(new double[] {Integer.parseInt(f[1]),
-                    Double.parseDouble(f[2]), Double.parseDouble(f[3])});
-            }
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);
+        for (String[] f : stored.get()) {
+            int n = Integer.parseInt(f[0]);
+            rows.computeIfAbsent(n, x -> new ArrayList<>()).add(new double[] {Integer.parseInt(f[1]),
+                Double.parseDouble(f[2]), Double.parseDouble(f[3])});
         }
         Map<Integer, double[][]> byN = new HashMap<>();
         rows.forEach((n, list) -> {

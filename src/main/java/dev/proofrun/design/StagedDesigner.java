@@ -62,18 +62,8 @@ public final class StagedDesigner {
      *                       reaches the power within {@value StudyDesigner#MAX_READINGS} readings
      */
     public static StagedDesign design(DesignRequest request, int n, int stages, Spending spending) {
-        if (stages < 1 || stages > Stages.MOST) {
-            throw new UserException(StagedMessage.BAD_STAGES, Stages.MOST, stages);
-        }
-        if (request.lossRate() > 0) {
-            throw new UserException(StagedMessage.STAGES_WITHOUT_LOSSES);
-        }
-        request.requireAttainable();
-        SizeSearch search = new SizeSearch(request, n);
-        DesignRow single = search.row();
-        if (single == null) {
-            throw new UserException(DesignMessage.UNREACHABLE_FOR_SIZE, n, request.power(), StudyDesigner.MAX_READINGS);
-        }
+        SizeSearch search = checkedSearch(request, n, stages);
+        DesignRow single = singleStageRow(request, search, n);
         if (stages == 1) {
             return singleStage(request, search, single, spending);
         }
@@ -110,6 +100,14 @@ public final class StagedDesigner {
      *                       subgroups apart
      */
     public static StagedDesign at(DesignRequest request, int n, int subgroups, int stages, Spending spending) {
+        SizeSearch search = checkedSearch(request, n, stages);
+        DesignRow single = singleStageRow(request, search, n);
+        looks(subgroups, stages);
+        return new StagedEvaluation(request, search, single, stages, spending).at(subgroups);
+    }
+
+    /** The checks both entries make before searching: stages in range, no losses, an attainable request. */
+    private static SizeSearch checkedSearch(DesignRequest request, int n, int stages) {
         if (stages < 1 || stages > Stages.MOST) {
             throw new UserException(StagedMessage.BAD_STAGES, Stages.MOST, stages);
         }
@@ -117,13 +115,16 @@ public final class StagedDesigner {
             throw new UserException(StagedMessage.STAGES_WITHOUT_LOSSES);
         }
         request.requireAttainable();
-        SizeSearch search = new SizeSearch(request, n);
+        return new SizeSearch(request, n);
+    }
+
+    /** The one-look design for subgroups of {@code n}, which every staged design starts from. */
+    private static DesignRow singleStageRow(DesignRequest request, SizeSearch search, int n) {
         DesignRow single = search.row();
         if (single == null) {
             throw new UserException(DesignMessage.UNREACHABLE_FOR_SIZE, n, request.power(), StudyDesigner.MAX_READINGS);
         }
-        looks(subgroups, stages);
-        return new StagedEvaluation(request, search, single, stages, spending).at(subgroups);
+        return single;
     }
 
     /**

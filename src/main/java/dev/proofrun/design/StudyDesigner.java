@@ -117,6 +117,12 @@ public final class StudyDesigner {
      *         freedom, if n·k exceeds {@value #MAX_READINGS}
      */
     public static double power(DesignRequest request, int n, int k) {
+        SizeSearch search = searchFor(request, n, k);
+        return search.power(k);
+    }
+
+    /** The search for subgroups of {@code n}, refusing an n below 1 or a k it cannot evaluate. */
+    private static SizeSearch searchFor(DesignRequest request, int n, int k) {
         if (n < 1) {
             throw new IllegalArgumentException(String.format(Locale.ROOT, "subgroup size %d is below 1", n));
         }
@@ -126,7 +132,7 @@ public final class StudyDesigner {
                     "%d subgroups of %d is outside %d..%d, the studies the designer can evaluate", k, n,
                     search.smallestK(), search.largestK()));
         }
-        return search.power(k);
+        return search;
     }
 
     /**
@@ -137,15 +143,7 @@ public final class StudyDesigner {
      * @throws IllegalArgumentException as {@link #power(DesignRequest, int, int)}
      */
     public static List<OcPoint> operatingCharacteristic(DesignRequest request, int n, int k) {
-        if (n < 1) {
-            throw new IllegalArgumentException(String.format(Locale.ROOT, "subgroup size %d is below 1", n));
-        }
-        SizeSearch search = new SizeSearch(request, n);
-        if (k < search.smallestK() || k > search.largestK()) {
-            throw new IllegalArgumentException(String.format(Locale.ROOT,
-                    "%d subgroups of %d is outside %d..%d, the studies the designer can evaluate", k, n,
-                    search.smallestK(), search.largestK()));
-        }
+        SizeSearch search = searchFor(request, n, k);
         return operatingCharacteristic(request, search, k);
     }
 

@@ -3,9 +3,6 @@ package dev.proofrun.arch;
 import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.noClasses;
 
 import com.tngtech.archunit.core.domain.JavaClasses;
-import com.tngtech.archunit.core.importer.ClassFileImporter;
-import com.tngtech.archunit.core.importer.ImportOption;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -14,20 +11,13 @@ import org.junit.jupiter.api.Test;
  */
 class LayeringTest {
 
-    private static JavaClasses classes;
-
-    @BeforeAll
-    static void load() {
-        classes = new ClassFileImporter()
-                .withImportOption(ImportOption.Predefined.DO_NOT_INCLUDE_TESTS)
-                .importPackages("dev.proofrun");
-    }
+    private static final JavaClasses CLASSES = ProductClasses.get();
 
     @Test
     void onlyTheWizardUsesJavaFx() {
         noClasses().that().resideOutsideOfPackage("dev.proofrun.app..")
                 .should().dependOnClassesThat().resideInAnyPackage("javafx..")
-                .check(classes);
+                .check(CLASSES);
     }
 
     @Test
@@ -38,7 +28,7 @@ class LayeringTest {
                         "dev.proofrun.plan..", "dev.proofrun.grade..", "dev.proofrun.sheet..", "dev.proofrun.paper..",
                         "dev.proofrun.report..", "dev.proofrun.cli..", "dev.proofrun.app..",
                         "dev.proofrun.readings..", "dev.proofrun.capability..")
-                .check(classes);
+                .check(CLASSES);
     }
 
     @Test
@@ -49,7 +39,7 @@ class LayeringTest {
                 .should().dependOnClassesThat().resideInAnyPackage(
                         "dev.proofrun.sheet..", "dev.proofrun.paper..", "dev.proofrun.report..", "dev.proofrun.cli..",
                         "dev.proofrun.app..")
-                .check(classes);
+                .check(CLASSES);
     }
 
     @Test
@@ -58,7 +48,7 @@ class LayeringTest {
                 .should().dependOnClassesThat().resideInAnyPackage("dev.proofrun.sheet..", "dev.proofrun.report..",
                         "dev.proofrun.cli..", "dev.proofrun.app..", "dev.proofrun.plan..", "dev.proofrun.grade..",
                         "dev.proofrun.design..")
-                .check(classes);
+                .check(CLASSES);
     }
 
     @Test
@@ -66,23 +56,23 @@ class LayeringTest {
         // grade imports design (the plan's requirement, the stages); the designer simulates through control
         noClasses().that().resideInAPackage("dev.proofrun.design..")
                 .should().dependOnClassesThat().resideInAPackage("dev.proofrun.grade..")
-                .check(classes);
+                .check(CLASSES);
     }
 
     @Test
     void filesOutDoNotReachForPeopleIn() {
         noClasses().that().resideInAnyPackage("dev.proofrun.sheet..", "dev.proofrun.report..")
                 .should().dependOnClassesThat().resideInAnyPackage("dev.proofrun.cli..", "dev.proofrun.app..")
-                .check(classes);
+                .check(CLASSES);
     }
 
     @Test
     void commandLineAndWizardAreIndependent() {
         noClasses().that().resideInAPackage("dev.proofrun.cli..")
                 .should().dependOnClassesThat().resideInAPackage("dev.proofrun.app..")
-                .check(classes);
+                .check(CLASSES);
         noClasses().that().resideInAPackage("dev.proofrun.app..")
                 .should().dependOnClassesThat().resideInAPackage("dev.proofrun.cli..")
-                .check(classes);
+                .check(CLASSES);
     }
 }

@@ -7,11 +7,8 @@ import static com.tngtech.archunit.core.domain.JavaClass.Predicates.type;
 import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.noClasses;
 
 import com.tngtech.archunit.core.domain.JavaClasses;
-import com.tngtech.archunit.core.importer.ClassFileImporter;
-import com.tngtech.archunit.core.importer.ImportOption;
 import dev.proofrun.text.MessageKey;
 import java.util.List;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -34,14 +31,7 @@ class ViewsTest {
         "dev.proofrun.readings..", "dev.proofrun.design..", "dev.proofrun.schedule..", "dev.proofrun.plan..",
         "dev.proofrun.grade..", "dev.proofrun.sheet..", "dev.proofrun.report.."};
 
-    private static JavaClasses classes;
-
-    @BeforeAll
-    static void load() {
-        classes = new ClassFileImporter()
-                .withImportOption(ImportOption.Predefined.DO_NOT_INCLUDE_TESTS)
-                .importPackages("dev.proofrun");
-    }
+    private static final JavaClasses CLASSES = ProductClasses.get();
 
     private static String view(String name) {
         return name.replace(".", "\\.") + "(\\$.*)?";
@@ -55,13 +45,13 @@ class ViewsTest {
                 .should().dependOnClassesThat(resideInAnyPackage(CORE)
                         .or(resideInAPackage("dev.proofrun.text..").and(not(type(MessageKey.class)))))
                 .because("a view binds to its view-model's display values; the view-model is the core's one caller")
-                .check(classes);
+                .check(CLASSES);
     }
 
     @Test
     void theExceptionsAreStillNeeded() {
         for (String name : NOT_YET) {
-            boolean reaches = classes.stream().filter(c -> c.getName().matches(view(name)))
+            boolean reaches = CLASSES.stream().filter(c -> c.getName().matches(view(name)))
                     .flatMap(c -> c.getDirectDependenciesFromSelf().stream())
                     .anyMatch(d -> resideInAnyPackage(CORE).test(d.getTargetClass()));
             if (!reaches) {

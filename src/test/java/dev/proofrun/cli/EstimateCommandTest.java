@@ -7,8 +7,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import java.io.IOException;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -21,12 +19,7 @@ class EstimateCommandTest {
     @TempDir
     Path dir;
 
-    private final StringWriter out = new StringWriter();
-    private final StringWriter err = new StringWriter();
-
-    private int run(String... args) {
-        return ProofrunCommand.run(new PrintWriter(out, true), new PrintWriter(err, true), args);
-    }
+    private final LastRun cli = new LastRun();
 
     /** The shaft demo data of CapabilityAnalysisTest in the x1..x4 layout. */
     private Path shaft() throws IOException {
@@ -51,19 +44,19 @@ class EstimateCommandTest {
 
     @Test
     void textReportShowsIndicesBoundsAndTheCaution() throws IOException {
-        assertEquals(0, run("estimate", shaft().toString(), "--lsl", "11.97", "--usl", "12.03"), err.toString());
-        String text = out.toString();
+        assertEquals(0, cli.run("estimate", shaft().toString(), "--lsl", "11.97", "--usl", "12.03"), cli.err());
+        String text = cli.out();
         assertTrue(text.contains("40 readings in 10 subgroups of 4"), text);
         assertTrue(text.contains("Cpk"), text);
         assertTrue(text.contains("1.596"), text); // Cpk, see CapabilityAnalysisTest
         assertTrue(text.contains("Caution:"), text);
-        assertEquals("", err.toString());
+        assertEquals("", cli.err());
     }
 
     @Test
     void jsonHasTheAgreedKeysAndNulls() throws IOException {
-        assertEquals(0, run("estimate", shaft().toString(), "--usl", "12.03", "--json", "--bound", "bissell"));
-        JsonNode j = new ObjectMapper().readTree(out.toString());
+        assertEquals(0, cli.run("estimate", shaft().toString(), "--usl", "12.03", "--json", "--bound", "bissell"));
+        JsonNode j = new ObjectMapper().readTree(cli.out());
         List<String> keys = new ArrayList<>();
         j.fieldNames().forEachRemaining(keys::add);
         assertEquals(List.of("readings", "subgroups", "subgroupSize", "mean", "sigmaWithin", "sigmaOverall",
@@ -79,9 +72,9 @@ class EstimateCommandTest {
 
     @Test
     void nominalSetsTheCpmTarget() throws IOException {
-        assertEquals(0, run("estimate", shaft().toString(), "--lsl", "11.97", "--usl", "12.03", "--nominal", "12.004",
+        assertEquals(0, cli.run("estimate", shaft().toString(), "--lsl", "11.97", "--usl", "12.03", "--nominal", "12.004",
                 "--json", "--sigma", "pooled", "--confidence", "0.9"));
-        JsonNode j = new ObjectMapper().readTree(out.toString());
+        JsonNode j = new ObjectMapper().readTree(cli.out());
         assertEquals("pooled", j.get("sigmaMethod").asText());
         assertEquals(30, j.get("degreesOfFreedom").get("within").asDouble(), 0);
         assertEquals(0.9, j.get("confidence").asDouble(), 0);
@@ -89,12 +82,12 @@ class EstimateCommandTest {
     }
 
     private void refused(String expected, String... args) {
-        assertEquals(2, run(args), out.toString());
-        String e = err.toString();
+        assertEquals(2, cli.run(args), cli.out());
+        String e = cli.err();
         assertTrue(e.contains(expected), e);
         assertEquals(1, e.strip().lines().count(), "one line: " + e);
         assertFalse(e.contains("Exception") || e.contains("\tat "), e);
-        assertEquals("", out.toString(), "no partial output");
+        assertEquals("", cli.out(), "no partial output");
     }
 
     @Test
@@ -113,8 +106,6 @@ class EstimateCommandTest {
         Path p = Files.writeString(dir.resolve("n.csv"), "value\n1.0\n2,0\n");
         refused("n.csv, row 3: 2 cells but the header has 1", "estimate", p.toString(), "--usl", "3");
         Path q = Files.writeString(dir.resolve("m.csv"), "value\n1.0\n2.0 mm\n");
-        out.getBuffer().setLength(0);
-        err.getBuffer().setLength(0);
         refused("m.csv, row 3, column value: not a number: '2.0 mm'", "estimate", q.toString(), "--usl", "3");
     }
 
@@ -173,13 +164,12 @@ class EstimateCommandTest {
             raw.append(x).append('\n');
         }
         Path p = Files.writeString(dir.resolve("hrc.csv"), rounded);
-        assertEquals(0, run("estimate", p.toString(), "--lsl", "58", "--usl", "64"), err.toString());
-        assertTrue(out.toString().contains("The readings do not look normal"), out.toString());
-        assertTrue(out.toString().contains("The readings lie on a grid of 0.1"), out.toString());
-        assertTrue(out.toString().contains("rounding by the gauge is the likely cause"), out.toString());
-        out.getBuffer().setLength(0);
+        assertEquals(0, cli.run("estimate", p.toString(), "--lsl", "58", "--usl", "64"), cli.err());
+        assertTrue(cli.out().contains("The readings do not look normal"), cli.out());
+        assertTrue(cli.out().contains("The readings lie on a grid of 0.1"), cli.out());
+        assertTrue(cli.out().contains("rounding by the gauge is the likely cause"), cli.out());
         Path q = Files.writeString(dir.resolve("raw.csv"), raw);
-        assertEquals(0, run("estimate", q.toString(), "--lsl", "58", "--usl", "64"), err.toString());
-        assertTrue(!out.toString().contains("rounding by the gauge"), out.toString());
+        assertEquals(0, cli.run("estimate", q.toString(), "--lsl", "58", "--usl", "64"), cli.err());
+        assertTrue(!cli.out().contains("rounding by the gauge"), cli.out());
     }
 }

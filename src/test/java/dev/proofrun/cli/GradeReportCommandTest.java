@@ -1,13 +1,12 @@
 package dev.proofrun.cli;
 
+import static dev.proofrun.cli.CommandRun.run;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.proofrun.plan.DemoPlan;
 import java.io.IOException;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import org.apache.pdfbox.Loader;
@@ -22,21 +21,21 @@ class GradeReportCommandTest {
     @TempDir
     Path tmp;
 
-    private final StringWriter out = new StringWriter();
-    private final StringWriter err = new StringWriter();
-
-    private int run(String... args) {
-        return ProofrunCommand.run(new PrintWriter(out, true), new PrintWriter(err, true), args);
+    /** Runs a command that must succeed and keeps what it printed. */
+    private static CommandRun ok(String... args) {
+        CommandRun r = run(args);
+        assertEquals(0, r.code(), r.err());
+        return r;
     }
 
     @Test
     void theDemoGradesIntoAReport() throws IOException {
-        assertEquals(0, run("demo", "--out", tmp.toString()), err.toString());
+        ok("demo", "--out", tmp.toString());
         Path plan = tmp.resolve(DemoPlan.FILE_NAME);
         Path data = tmp.resolve(DemoCommand.RETURNED);
         Path pdf = tmp.resolve("grade.pdf");
-        assertEquals(0, run("grade", plan.toString(), data.toString(), "--report", pdf.toString()), err.toString());
-        assertFalse(err.toString().contains("not available"), err.toString());
+        CommandRun graded = ok("grade", plan.toString(), data.toString(), "--report", pdf.toString());
+        assertFalse(graded.err().contains("not available"), graded.err());
         try (PDDocument doc = Loader.loadPDF(Files.readAllBytes(pdf))) {
             String text = new PDFTextStripper().getText(doc);
             assertTrue(text.contains("Not valid for the part"), text);
@@ -57,33 +56,33 @@ class GradeReportCommandTest {
             assertTrue(text.contains("proofrun " + dev.proofrun.text.ProductVersion.get()), text);
             assertTrue(text.contains("revision 1 (" + DemoPlan.create().revision().orElseThrow() + ")"), text);
             assertTrue(text.contains("Prepared by") && text.contains("Reviewed by"), "the block to sign");
-            assertTrue(out.toString().contains("Wrote the grade report " + pdf), out.toString());
+            assertTrue(graded.out().contains("Wrote the grade report " + pdf), graded.out());
             assertTrue(doc.getNumberOfPages() >= 1 + DemoPlan.create().characteristics().size());
         }
     }
 
     @Test
     void aReportThatCannotBeWrittenIsOneLineAndExitTwo() throws IOException {
-        assertEquals(0, run("demo", "--out", tmp.toString()), err.toString());
+        ok("demo", "--out", tmp.toString());
         Path plan = tmp.resolve(DemoPlan.FILE_NAME);
         Path data = tmp.resolve(DemoCommand.RETURNED);
         Path pdf = tmp.resolve("no-such-dir").resolve("grade.pdf");
-        assertEquals(2, run("grade", plan.toString(), data.toString(), "--report", pdf.toString()));
-        assertTrue(err.toString().contains("the folder " + tmp.resolve("no-such-dir") + " does not exist"), err.toString());
-        assertFalse(err.toString().contains(".tmp"), "no temporary file's name");
-        assertFalse(err.toString().contains("Exception"), err.toString());
+        CommandRun r = run("grade", plan.toString(), data.toString(), "--report", pdf.toString());
+        assertEquals(2, r.code());
+        assertTrue(r.err().contains("the folder " + tmp.resolve("no-such-dir") + " does not exist"), r.err());
+        assertFalse(r.err().contains(".tmp"), "no temporary file's name");
+        assertFalse(r.err().contains("Exception"), r.err());
     }
 
     @Test
     void paperLetterGivesLetterPagesAndAnUnknownPaperWritesNothing() throws IOException {
-        assertEquals(0, run("demo", "--out", tmp.toString()), err.toString());
+        ok("demo", "--out", tmp.toString());
         Path plan = tmp.resolve(DemoPlan.FILE_NAME);
         Path data = tmp.resolve(DemoCommand.RETURNED);
         Path letter = tmp.resolve("letter.pdf");
         Path a4 = tmp.resolve("a4.pdf");
-        assertEquals(0, run("grade", plan.toString(), data.toString(), "--report", letter.toString(), "--paper", "letter"),
-                err.toString());
-        assertEquals(0, run("grade", plan.toString(), data.toString(), "--report", a4.toString()), err.toString());
+        ok("grade", plan.toString(), data.toString(), "--report", letter.toString(), "--paper", "letter");
+        ok("grade", plan.toString(), data.toString(), "--report", a4.toString());
         try (PDDocument doc = Loader.loadPDF(Files.readAllBytes(letter))) {
             for (var page : doc.getPages()) {
                 // US Letter 8.5 in x 11 in = 612 pt x 792 pt
@@ -97,12 +96,11 @@ class GradeReportCommandTest {
             assertEquals(841.89f, doc.getPage(0).getMediaBox().getHeight(), 0.01f);
         }
         Path a3 = tmp.resolve("a3.pdf");
-        out.getBuffer().setLength(0);
-        err.getBuffer().setLength(0);
-        assertEquals(2, run("grade", plan.toString(), data.toString(), "--report", a3.toString(), "--paper", "a3"));
-        assertEquals(1, err.toString().strip().lines().count(), err.toString());
-        assertTrue(err.toString().contains("a3"), err.toString());
-        assertEquals("", out.toString(), "no partial output");
+        CommandRun r = run("grade", plan.toString(), data.toString(), "--report", a3.toString(), "--paper", "a3");
+        assertEquals(2, r.code());
+        assertEquals(1, r.err().strip().lines().count(), r.err());
+        assertTrue(r.err().contains("a3"), r.err());
+        assertEquals("", r.out(), "no partial output");
         assertFalse(Files.exists(a3));
     }
 }

@@ -9,8 +9,6 @@ import dev.proofrun.grade.GradingPlans;
 import dev.proofrun.grade.SimulatedReturn;
 import dev.proofrun.plan.PlanFiles;
 import dev.proofrun.stats.PivotalBound;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
@@ -24,25 +22,15 @@ class GradeShapeCommandTest {
     @TempDir
     Path dir;
 
-    private String out;
-    private String err;
-
-    private int run(String... args) {
-        StringWriter o = new StringWriter();
-        StringWriter e = new StringWriter();
-        int code = ProofrunCommand.run(new PrintWriter(o, true), new PrintWriter(e, true), args);
-        out = o.toString();
-        err = e.toString();
-        return code;
-    }
+    private final LastRun cli = new LastRun();
 
     private Path issuedPlan() {
         Path plan = dir.resolve("plan.json");
-        assertEquals(0, run("plan", "new", "--out", plan.toString(), "--id", "PR-2027-0078", "--part", "pump lid",
+        assertEquals(0, cli.run("plan", "new", "--out", plan.toString(), "--id", "PR-2027-0078", "--part", "pump lid",
                 "--characteristic", "face flatness", "--unit", "mm", "--usl", "0.08", "--target", "1.33", "--expected", "1.8",
                 "--shape", "lognormal", "--subgroup-size", "5", "--subgroups", "25", "--zone", "Europe/Berlin",
-                "--start", "2027-03-01T06:00"), err);
-        assertEquals(0, run("plan", "issue", plan.toString()), err);
+                "--start", "2027-03-01T06:00"), cli.err());
+        assertEquals(0, cli.run("plan", "issue", plan.toString()), cli.err());
         return plan;
     }
 
@@ -53,13 +41,13 @@ class GradeShapeCommandTest {
         // invented: median 0.02 mm, sigma of ln x 0.2 -> Ppu = (0.08 - 0.02)/(0.02 e^0.6 - 0.02) = 3.7
         SimulatedReturn.writeCsv(GradingPlans.of(PlanFiles.read(plan)), Map.of("C1", SimulatedReturn.Process.skewed(0.02, 0.2)),
                 11L, data);
-        assertEquals(0, run("grade", plan.toString(), data.toString()), err);
-        assertTrue(out.contains("C1 face flatness: Demonstrated"), out);
-        assertTrue(out.contains("Cpk under the lognormal model by the ISO 22514-2 percentile method, generalized pivotal bounds"), out);
-        assertTrue(out.contains("seed " + PivotalBound.DEFAULT_SEED), out);
+        assertEquals(0, cli.run("grade", plan.toString(), data.toString()), cli.err());
+        assertTrue(cli.out().contains("C1 face flatness: Demonstrated"), cli.out());
+        assertTrue(cli.out().contains("Cpk under the lognormal model by the ISO 22514-2 percentile method, generalized pivotal bounds"), cli.out());
+        assertTrue(cli.out().contains("seed " + PivotalBound.DEFAULT_SEED), cli.out());
 
-        assertEquals(0, run("grade", plan.toString(), data.toString(), "--json"), err);
-        JsonNode j = new ObjectMapper().readTree(out).get("characteristics").get(0);
+        assertEquals(0, cli.run("grade", plan.toString(), data.toString(), "--json"), cli.err());
+        JsonNode j = new ObjectMapper().readTree(cli.out()).get("characteristics").get(0);
         assertEquals("iso-22514-2-percentile", j.get("method").asText());
         assertEquals("lognormal", j.get("model").asText());
         assertEquals(PivotalBound.DEFAULT_SEED, j.get("seed").asLong());
@@ -70,20 +58,20 @@ class GradeShapeCommandTest {
     @Test
     void aFoldedNormalCharacteristicNamesItsBound() throws Exception {
         Path plan = dir.resolve("folded.json");
-        assertEquals(0, run("plan", "new", "--out", plan.toString(), "--id", "PR-2027-0079", "--part", "pump lid",
+        assertEquals(0, cli.run("plan", "new", "--out", plan.toString(), "--id", "PR-2027-0079", "--part", "pump lid",
                 "--characteristic", "bore position", "--unit", "mm", "--usl", "0.2", "--target", "1.33", "--expected", "1.8",
                 "--shape", "folded-normal", "--subgroup-size", "5", "--subgroups", "25", "--zone", "Europe/Berlin",
-                "--start", "2027-03-01T06:00"), err);
-        assertEquals(0, run("plan", "issue", plan.toString()), err);
+                "--start", "2027-03-01T06:00"), cli.err());
+        assertEquals(0, cli.run("plan", "issue", plan.toString()), cli.err());
         Path data = dir.resolve("returned.csv");
         // invented: readings about 0.05 mm apart from zero, sd 0.01 (mean/sigma 5): Ppu about (0.2 - 0.05)/0.03 = 5
         SimulatedReturn.writeCsv(GradingPlans.of(PlanFiles.read(plan)), Map.of("C1", SimulatedReturn.Process.stable(0.05, 0.01)),
                 13L, data);
-        assertEquals(0, run("grade", plan.toString(), data.toString()), err);
-        assertTrue(out.contains("C1 bore position: Demonstrated"), out);
-        assertTrue(out.contains("under the folded-normal model by the ISO 22514-2 percentile method, bounds at the least favourable mean/sigma"), out);
-        assertEquals(0, run("grade", plan.toString(), data.toString(), "--json"), err);
-        JsonNode j = new ObjectMapper().readTree(out).get("characteristics").get(0);
+        assertEquals(0, cli.run("grade", plan.toString(), data.toString()), cli.err());
+        assertTrue(cli.out().contains("C1 bore position: Demonstrated"), cli.out());
+        assertTrue(cli.out().contains("under the folded-normal model by the ISO 22514-2 percentile method, bounds at the least favourable mean/sigma"), cli.out());
+        assertEquals(0, cli.run("grade", plan.toString(), data.toString(), "--json"), cli.err());
+        JsonNode j = new ObjectMapper().readTree(cli.out()).get("characteristics").get(0);
         assertEquals("iso-22514-2-percentile", j.get("method").asText());
         assertEquals("folded-normal", j.get("model").asText());
         assertTrue(j.get("lower").asDouble() < j.get("estimate").asDouble());
@@ -101,10 +89,10 @@ class GradeShapeCommandTest {
         lines.set(3, String.join(",", cells));
         Files.write(data, lines);
         byte[] before = Files.readAllBytes(data);
-        assertEquals(0, run("grade", plan.toString(), data.toString()), err);
-        assertTrue(out.contains("C1 face flatness: Not valid"), out);
-        assertTrue(out.contains("a reading at or below zero cannot come from the planned shape (lognormal): 0.0 in subgroup "
-                + cells[1] + ", reading 2"), out);
+        assertEquals(0, cli.run("grade", plan.toString(), data.toString()), cli.err());
+        assertTrue(cli.out().contains("C1 face flatness: Not valid"), cli.out());
+        assertTrue(cli.out().contains("a reading at or below zero cannot come from the planned shape (lognormal): 0.0 in subgroup "
+                + cells[1] + ", reading 2"), cli.out());
         assertTrue(java.util.Arrays.equals(before, Files.readAllBytes(data)));
     }
 }

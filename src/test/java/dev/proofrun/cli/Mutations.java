@@ -146,15 +146,10 @@ final class Mutations {
 
     /** In JSON: a {@code "key": value,} line said twice, the second time with another value or the same. */
     private static String duplicateKey(String text, Random rnd) {
-        Matcher m = KEY_LINE.matcher(text);
-        List<int[]> spans = new ArrayList<>();
-        while (m.find()) {
-            spans.add(new int[] {m.start(), m.end()});
-        }
-        if (spans.isEmpty()) {
+        int[] s = keyLine(text, rnd);
+        if (s == null) {
             return text;
         }
-        int[] s = spans.get(rnd.nextInt(spans.size()));
         String line = text.substring(s[0], s[1]);
         String again = rnd.nextBoolean() ? line : line.replaceFirst(": .*,$", ": \"DUP\",");
         return text.substring(0, s[1]) + "\n" + again + text.substring(s[1]);
@@ -162,17 +157,22 @@ final class Mutations {
 
     /** In JSON: a value of another type (a number as text, text as a number, a list, null). */
     private static String retypeValue(String text, Random rnd) {
+        int[] s = keyLine(text, rnd);
+        if (s == null) {
+            return text;
+        }
+        String by = List.of("\"5\"", "5", "null", "[]", "{}", "true", "-1", "1e309", "\"\"").get(rnd.nextInt(9));
+        String line = text.substring(s[0], s[1]).replaceFirst(": .*,$", ": " + by + ",");
+        return text.substring(0, s[0]) + line + text.substring(s[1]);
+    }
+
+    /** The start and end of one {@code "key": value,} line of the JSON text, chosen at random; null when there is none. */
+    private static int[] keyLine(String text, Random rnd) {
         Matcher m = KEY_LINE.matcher(text);
         List<int[]> spans = new ArrayList<>();
         while (m.find()) {
             spans.add(new int[] {m.start(), m.end()});
         }
-        if (spans.isEmpty()) {
-            return text;
-        }
-        int[] s = spans.get(rnd.nextInt(spans.size()));
-        String by = List.of("\"5\"", "5", "null", "[]", "{}", "true", "-1", "1e309", "\"\"").get(rnd.nextInt(9));
-        String line = text.substring(s[0], s[1]).replaceFirst(": .*,$", ": " + by + ",");
-        return text.substring(0, s[0]) + line + text.substring(s[1]);
+        return spans.isEmpty() ? null : spans.get(rnd.nextInt(spans.size()));
     }
 }

@@ -3,8 +3,6 @@ package dev.proofrun.cli;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -54,13 +52,11 @@ class OptionValuesCommandTest {
 
     private void refusedAlike(String line, String[]... commands) throws Exception {
         for (String[] args : commands) {
-            StringWriter out = new StringWriter();
-            StringWriter err = new StringWriter();
-            int code = ProofrunCommand.run(new PrintWriter(out, true), new PrintWriter(err, true), args);
+            CommandRun r = CommandRun.run(args);
             String what = String.join(" ", args);
-            assertEquals(2, code, what);
-            assertEquals("proofrun: " + line, err.toString().strip(), what);
-            assertEquals("", out.toString(), what);
+            assertEquals(2, r.code(), what);
+            assertEquals("proofrun: " + line, r.err().strip(), what);
+            assertEquals("", r.out(), what);
             assertFalse(Files.exists(plan), what);
             assertEquals(readingsBefore, Files.readString(readings), what);
         }
@@ -116,13 +112,10 @@ class OptionValuesCommandTest {
     void numbersInOptionsFollowTheOneRule() {
         for (String[] bad : new String[][] {{"0x1p-1", "'0x1p-1' is not a number"}, {"0.95d", "'0.95d' is not a number"},
             {"0,95", "'0,95' is not a number (use a decimal point: 0.95)"}}) {
-            StringWriter out = new StringWriter();
-            StringWriter err = new StringWriter();
-            int code = ProofrunCommand.run(new PrintWriter(out, true), new PrintWriter(err, true),
-                    "size", "--target", "1.33", "--expected", "1.8", "--confidence", bad[0]);
-            assertEquals(2, code, bad[0]);
-            assertEquals("proofrun size: Invalid value for option '--confidence': " + bad[1], err.toString().lines().findFirst().orElse(""));
-            assertEquals("", out.toString(), bad[0]);
+            CommandRun r = CommandRun.run("size", "--target", "1.33", "--expected", "1.8", "--confidence", bad[0]);
+            assertEquals(2, r.code(), bad[0]);
+            assertEquals("proofrun size: Invalid value for option '--confidence': " + bad[1], r.err().lines().findFirst().orElse(""));
+            assertEquals("", r.out(), bad[0]);
         }
         assertEquals(0.95, ProofrunCommand.optionNumber(" 0.95 "), 0.0);
         assertEquals(1.5e-3, ProofrunCommand.optionNumber("1.5e-3"), 0.0);

@@ -8,8 +8,6 @@ import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import dev.proofrun.plan.PlanFiles;
 import dev.proofrun.plan.StudyPlan;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.OffsetDateTime;
@@ -24,14 +22,7 @@ class PlanCommandTest {
     @TempDir
     Path dir;
 
-    private StringWriter out;
-    private StringWriter err;
-
-    private int run(String... args) {
-        out = new StringWriter();
-        err = new StringWriter();
-        return ProofrunCommand.run(new PrintWriter(out, true), new PrintWriter(err, true), args);
-    }
+    private final LastRun cli = new LastRun();
 
     private String[] newPlan(Path file, String... extra) {
         List<String> a = new ArrayList<>(List.of("plan", "new", "--out", file.toString(), "--id", "PR-2027-0042",
@@ -59,20 +50,20 @@ class PlanCommandTest {
     @Test
     void newShowIssue() throws Exception {
         Path file = dir.resolve("p.json");
-        assertEquals(0, run(newPlan(file, "--span-days", "2")), err.toString());
+        assertEquals(0, cli.run(newPlan(file, "--span-days", "2")), cli.err());
         // 2 days x 3 shifts, 1440 - 45 minutes of breaks a day = 2790 minutes; 2790/25 = 111.6 -> "about every 2 hours"
-        assertTrue(out.toString().contains("one subgroup of 5 consecutive parts about every 2 hours over 6 shifts on 2 days"), out.toString());
-        assertEquals(0, run("plan", "show", file.toString()));
-        assertTrue(out.toString().contains("S25"), out.toString());
+        assertTrue(cli.out().contains("one subgroup of 5 consecutive parts about every 2 hours over 6 shifts on 2 days"), cli.out());
+        assertEquals(0, cli.run("plan", "show", file.toString()));
+        assertTrue(cli.out().contains("S25"), cli.out());
 
-        assertEquals(0, run("plan", "issue", file.toString()));
+        assertEquals(0, cli.run("plan", "issue", file.toString()));
         StudyPlan issued = PlanFiles.read(file);
-        assertTrue(out.toString().contains(issued.revision().orElseThrow()));
-        assertEquals(0, run("plan", "issue", file.toString()));
-        assertTrue(out.toString().contains("already issued"), out.toString());
+        assertTrue(cli.out().contains(issued.revision().orElseThrow()));
+        assertEquals(0, cli.run("plan", "issue", file.toString()));
+        assertTrue(cli.out().contains("already issued"), cli.out());
 
-        assertEquals(0, run("plan", "show", "--json", file.toString()));
-        JsonNode j = new ObjectMapper().readTree(out.toString());
+        assertEquals(0, cli.run("plan", "show", "--json", file.toString()));
+        JsonNode j = new ObjectMapper().readTree(cli.out());
         assertEquals("issued", j.get("state").asText());
         assertEquals(issued.revision().orElseThrow(), j.get("revision").asText());
         assertTrue(j.get("summary").asText().startsWith("one subgroup of 5"));
@@ -91,18 +82,18 @@ class PlanCommandTest {
         Files.writeString(csv, "id,name,unit,nominal,lsl,usl,target,expected\n"
                 + "D1,bore,mm,12.0,11.98,12.02,1.33,1.8\nR2,runout,mm,,,0.05,1.33,2.0\n");
         Path file = dir.resolve("c.json");
-        assertEquals(0, run("plan", "new", "--out", file.toString(), "--part", "hub", "--characteristics", csv.toString(),
+        assertEquals(0, cli.run("plan", "new", "--out", file.toString(), "--part", "hub", "--characteristics", csv.toString(),
                 "--subgroup-size", "5", "--subgroups", "30", "--zone", "UTC", "--start", "2027-03-01T06:00",
-                "--span-shifts", "4"), err.toString());
+                "--span-shifts", "4"), cli.err());
         StudyPlan p = PlanFiles.read(file);
         assertEquals(2, p.characteristics().size());
         assertTrue(p.characteristic("R2").orElseThrow().limits().lower().isEmpty());
 
         Files.writeString(csv, "id,name,unit,nominal,lsl,usl,target,expected\nD1,bore,mm,12.0,11.98,twelve,1.33,1.8\n");
         Path bad = dir.resolve("bad.json");
-        assertEquals(2, run("plan", "new", "--out", bad.toString(), "--part", "hub", "--characteristics", csv.toString(),
+        assertEquals(2, cli.run("plan", "new", "--out", bad.toString(), "--part", "hub", "--characteristics", csv.toString(),
                 "--subgroup-size", "5", "--subgroups", "30", "--zone", "UTC", "--start", "2027-03-01T06:00"));
-        assertTrue(err.toString().contains("chars.csv, row 2, column usl"), err.toString());
+        assertTrue(cli.err().contains("chars.csv, row 2, column usl"), cli.err());
         assertFalse(Files.exists(bad));
     }
 
@@ -119,8 +110,8 @@ class PlanCommandTest {
             newPlan(file, "--spacing", "sometimes"),
         };
         for (String[] args : cases) {
-            assertEquals(2, run(args), String.join(" ", args));
-            String e = err.toString().trim();
+            assertEquals(2, cli.run(args), String.join(" ", args));
+            String e = cli.err().trim();
             assertTrue(e.startsWith("proofrun: ") && !e.contains("\n") && !e.contains("Exception"), e);
             assertFalse(Files.exists(file), "no file for " + e);
         }
@@ -134,48 +125,48 @@ class PlanCommandTest {
                 + "D1,bore,mm,12.0,11.98,12.02,1.33,1.8\nR2,runout,mm,,,0.05,1.33,1.2\n");
         String before = Files.readString(csv);
         Path file = dir.resolve("weak.json");
-        assertEquals(2, run("plan", "new", "--out", file.toString(), "--part", "hub", "--characteristics", csv.toString(),
+        assertEquals(2, cli.run("plan", "new", "--out", file.toString(), "--part", "hub", "--characteristics", csv.toString(),
                 "--subgroup-size", "5", "--zone", "UTC", "--start", "2027-03-01T06:00"));
         assertEquals("proofrun: " + csv + ": characteristic R2: expected Cpk 1.200 is not above the required 1.330:"
-                + " no study size can show this; the process must improve first", err.toString().strip());
-        assertEquals("", out.toString());
+                + " no study size can show this; the process must improve first", cli.err().strip());
+        assertEquals("", cli.out());
         assertFalse(Files.exists(file));
         assertEquals(before, Files.readString(csv), "the user's file is untouched");
 
         // one characteristic from the options: its id, no file
-        assertEquals(2, run("plan", "new", "--out", file.toString(), "--part", "gear shaft", "--characteristic",
+        assertEquals(2, cli.run("plan", "new", "--out", file.toString(), "--part", "gear shaft", "--characteristic",
                 "journal diameter", "--characteristic-id", "J1", "--unit", "mm", "--lsl", "24.98", "--usl", "25.02",
                 "--target", "1.33", "--expected", "1.33", "--subgroup-size", "5", "--zone", "UTC",
                 "--start", "2027-03-01T06:00"));
-        assertTrue(err.toString().strip().startsWith("proofrun: characteristic J1: expected Cpk 1.330 is not above"),
-                err.toString());
+        assertTrue(cli.err().strip().startsWith("proofrun: characteristic J1: expected Cpk 1.330 is not above"),
+                cli.err());
         assertFalse(Files.exists(file));
     }
 
     @Test
     void anExistingFileIsNotReplacedWithoutForce() throws Exception {
         Path file = dir.resolve("p.json");
-        assertEquals(0, run(newPlan(file)));
+        assertEquals(0, cli.run(newPlan(file)));
         byte[] before = Files.readAllBytes(file);
-        assertEquals(2, run(newPlan(file, "--rate", "70")));
+        assertEquals(2, cli.run(newPlan(file, "--rate", "70")));
         assertTrue(Files.readAllBytes(file).length == before.length && Arrays.equals(before, Files.readAllBytes(file)));
-        assertEquals(0, run("plan", "issue", file.toString()));
-        assertEquals(2, run(newPlan(file, "--force")));
-        assertTrue(err.toString().contains("issued revision"), err.toString());
+        assertEquals(0, cli.run("plan", "issue", file.toString()));
+        assertEquals(2, cli.run(newPlan(file, "--force")));
+        assertTrue(cli.err().contains("issued revision"), cli.err());
     }
 
     @Test
     void aResolutionWithoutAGaugeNameIsKeptAndACoarseOneIsWarned() throws Exception {
         // tolerance 0.04: a step of 0.005 is coarser than a tenth (0.004), the rule of ten (common practice)
         Path f = dir.resolve("res.json");
-        assertEquals(0, run(newPlan(f, "--resolution", "0.005")), err.toString());
-        assertTrue(out.toString().contains("warning: C1: gauge resolution 0.005 is coarser than a tenth of the tolerance"),
-                out.toString());
+        assertEquals(0, cli.run(newPlan(f, "--resolution", "0.005")), cli.err());
+        assertTrue(cli.out().contains("warning: C1: gauge resolution 0.005 is coarser than a tenth of the tolerance"),
+                cli.out());
         StudyPlan plan = PlanFiles.read(f);
         assertEquals(0.005, plan.characteristics().get(0).gauge().orElseThrow().resolution(), 0);
         Path fine = dir.resolve("fine.json");
-        assertEquals(0, run(newPlan(fine, "--resolution", "0.001")), err.toString());
-        assertFalse(out.toString().contains("warning"), out.toString());
+        assertEquals(0, cli.run(newPlan(fine, "--resolution", "0.001")), cli.err());
+        assertFalse(cli.out().contains("warning"), cli.out());
         assertEquals(0.001, PlanFiles.read(fine).characteristics().get(0).gauge().orElseThrow().resolution(), 0);
     }
 }

@@ -1,5 +1,6 @@
 package dev.proofrun.cli;
 
+import static dev.proofrun.cli.CommandRun.run;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -9,24 +10,19 @@ import org.junit.jupiter.api.Test;
 
 class ProofrunCommandTest {
 
-    private final StringWriter out = new StringWriter();
-    private final StringWriter err = new StringWriter();
-
-    private int run(String... args) {
-        return ProofrunCommand.run(new PrintWriter(out, true), new PrintWriter(err, true), args);
-    }
-
     @Test
     void versionNamesTheProduct() {
-        assertEquals(0, run("--version"));
-        assertTrue(out.toString().startsWith("proofrun "), out.toString());
-        assertTrue(!out.toString().contains("${"), "version not filtered: " + out);
+        CommandRun r = run("--version");
+        assertEquals(0, r.code());
+        assertTrue(r.out().startsWith("proofrun "), r.out());
+        assertTrue(!r.out().contains("${"), "version not filtered: " + r.out());
     }
 
     @Test
     void unknownOptionIsAUsageErrorWithExitTwo() {
-        assertEquals(2, run("--no-such-option"));
-        assertTrue(err.toString().contains("no-such-option"), err.toString());
+        CommandRun r = run("--no-such-option");
+        assertEquals(2, r.code());
+        assertTrue(r.err().contains("no-such-option"), r.err());
     }
 
     /** A run that names one job registers only it; what it prints and returns is what the full command line gives. */

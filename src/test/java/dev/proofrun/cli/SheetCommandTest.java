@@ -1,5 +1,6 @@
 package dev.proofrun.cli;
 
+import static dev.proofrun.cli.CommandRun.run;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -7,8 +8,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import dev.proofrun.plan.DemoPlan;
 import dev.proofrun.plan.PlanFiles;
 import java.io.IOException;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
@@ -22,20 +21,14 @@ class SheetCommandTest {
     @TempDir
     Path tmp;
 
-    private final StringWriter out = new StringWriter();
-    private final StringWriter err = new StringWriter();
-
-    private int run(String... args) {
-        return ProofrunCommand.run(new PrintWriter(out, true), new PrintWriter(err, true), args);
-    }
-
     @Test
     void writesTheThreeFilesAndPrintsTheirPaths() throws IOException {
         Path plan = tmp.resolve("plan.json");
         PlanFiles.write(plan, DemoPlan.create());
         Path dir = tmp.resolve("out");
-        assertEquals(0, run("sheet", plan.toString(), "--out", dir.toString(), "--paper", "letter"), err.toString());
-        List<String> lines = out.toString().lines().toList();
+        CommandRun r = run("sheet", plan.toString(), "--out", dir.toString(), "--paper", "letter");
+        assertEquals(0, r.code(), r.err());
+        List<String> lines = r.out().lines().toList();
         assertEquals(List.of(dir.resolve("PR-2027-0311-sheet.pdf").toString(),
                 dir.resolve("PR-2027-0311-fill-in.csv").toString(),
                 dir.resolve("PR-2027-0311-fill-in.xlsx").toString()), lines);
@@ -50,13 +43,15 @@ class SheetCommandTest {
         Path plan = tmp.resolve("draft.json");
         PlanFiles.write(plan, DemoPlan.draft());
         Path dir = tmp.resolve("out");
-        assertEquals(2, run("sheet", plan.toString(), "--out", dir.toString()));
-        assertTrue(err.toString().contains("is a draft"), err.toString());
-        assertEquals(1, err.toString().lines().count(), "one line");
-        assertFalse(err.toString().contains("Exception"));
+        CommandRun refused = run("sheet", plan.toString(), "--out", dir.toString());
+        assertEquals(2, refused.code());
+        assertTrue(refused.err().contains("is a draft"), refused.err());
+        assertEquals(1, refused.err().lines().count(), "one line");
+        assertFalse(refused.err().contains("Exception"));
         assertFalse(Files.exists(dir) && !listing(dir).isEmpty(), "nothing written");
 
-        assertEquals(0, run("sheet", plan.toString(), "--out", dir.toString(), "--draft"), err.toString());
+        CommandRun marked = run("sheet", plan.toString(), "--out", dir.toString(), "--draft");
+        assertEquals(0, marked.code(), marked.err());
         assertEquals(3, listing(dir).size());
     }
 
@@ -65,19 +60,26 @@ class SheetCommandTest {
         Path plan = tmp.resolve("plan.json");
         PlanFiles.write(plan, DemoPlan.create());
         Path dir = tmp.resolve("out");
-        assertEquals(2, run("sheet", plan.toString(), "--out", dir.toString(), "--paper", "a3"));
-        assertTrue(err.toString().contains("a3"), err.toString());
-        assertEquals(2, run("sheet", tmp.resolve("missing.json").toString(), "--out", dir.toString()));
         Path broken = tmp.resolve("broken.json");
         Files.writeString(broken, "{\"format\": \"proofrun-plan\", ");
-        assertEquals(2, run("sheet", broken.toString(), "--out", dir.toString()));
         Path file = tmp.resolve("a-file");
         Files.writeString(file, "x");
-        assertEquals(2, run("sheet", plan.toString(), "--out", file.toString()));
-        assertTrue(err.toString().contains("is not a directory"), err.toString());
-        assertFalse(err.toString().contains("Exception"), err.toString());
+        CommandRun paper = refused("sheet", plan.toString(), "--out", dir.toString(), "--paper", "a3");
+        assertTrue(paper.err().contains("a3"), paper.err());
+        refused("sheet", tmp.resolve("missing.json").toString(), "--out", dir.toString());
+        refused("sheet", broken.toString(), "--out", dir.toString());
+        CommandRun notDir = refused("sheet", plan.toString(), "--out", file.toString());
+        assertTrue(notDir.err().contains("is not a directory"), notDir.err());
         assertFalse(Files.exists(dir), "nothing written");
         assertEquals("x", Files.readString(file), "the user's file untouched");
+    }
+
+    /** A run that must be refused with exit 2 and no stack trace. */
+    private static CommandRun refused(String... args) {
+        CommandRun r = run(args);
+        assertEquals(2, r.code(), r.out());
+        assertFalse(r.err().contains("Exception"), r.err());
+        return r;
     }
 
     private static List<Path> listing(Path dir) throws IOException {

@@ -21,8 +21,6 @@ import dev.proofrun.grade.GradingPlans;
 import dev.proofrun.grade.SimulatedReturn;
 import dev.proofrun.plan.PlanFiles;
 import dev.proofrun.plan.StudyPlan;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -41,14 +39,7 @@ class StagedCommandTest {
     @TempDir
     Path dir;
 
-    private StringWriter out;
-    private StringWriter err;
-
-    private int run(String... args) {
-        out = new StringWriter();
-        err = new StringWriter();
-        return ProofrunCommand.run(new PrintWriter(out, true), new PrintWriter(err, true), args);
-    }
+    private final LastRun cli = new LastRun();
 
     private int newPlan(Path file, String... extra) {
         List<String> a = new ArrayList<>(List.of("plan", "new", "--out", file.toString(), "--id", "PR-2027-0077",
@@ -57,16 +48,16 @@ class StagedCommandTest {
                 "--subgroup-size", "5", "--subgroups", "30", "--zone", "Europe/Berlin", "--rate", "80",
                 "--span-days", "5", "--start", "2027-03-01T06:00"));
         a.addAll(List.of(extra));
-        return run(a.toArray(new String[0]));
+        return cli.run(a.toArray(new String[0]));
     }
 
     @Test
     void planNewWritesTheStagedDesignersLooksAtTheGivenK() throws Exception {
         Path p = dir.resolve("staged.json");
-        assertEquals(0, newPlan(p, "--stages", "3", "--spending", "pocock"), err.toString());
-        assertTrue(out.toString().contains("stages: 3 looks at 10, 20, 30 subgroups"), out.toString());
-        assertTrue(out.toString().contains("calibrated on the looks' joint distribution"), out.toString());
-        assertTrue(out.toString().contains("stages: C1 power"), out.toString());
+        assertEquals(0, newPlan(p, "--stages", "3", "--spending", "pocock"), cli.err());
+        assertTrue(cli.out().contains("stages: 3 looks at 10, 20, 30 subgroups"), cli.out());
+        assertTrue(cli.out().contains("calibrated on the looks' joint distribution"), cli.out());
+        assertTrue(cli.out().contains("stages: C1 power"), cli.out());
         Stages st = PlanFiles.read(p).stages().orElseThrow();
         assertEquals(Spending.POCOCK, st.spending());
         // the plan holds the staged designer's looks for this characteristic at the given k, nothing else
@@ -79,22 +70,22 @@ class StagedCommandTest {
         }
         assertTrue(st.looks().get(0).stopsForFutility());
         assertFalse(st.last().stopsForFutility());
-        assertEquals(0, run("plan", "show", p.toString()));
-        assertTrue(out.toString().contains("stages   3 looks, pocock spending"), out.toString());
-        assertTrue(out.toString().contains("look 1 after slot S10 (stage 1: slots S01 to S10"), out.toString());
-        assertEquals(0, run("plan", "show", p.toString(), "--json"));
-        JsonNode json = new ObjectMapper().readTree(out.toString());
+        assertEquals(0, cli.run("plan", "show", p.toString()));
+        assertTrue(cli.out().contains("stages   3 looks, pocock spending"), cli.out());
+        assertTrue(cli.out().contains("look 1 after slot S10 (stage 1: slots S01 to S10"), cli.out());
+        assertEquals(0, cli.run("plan", "show", p.toString(), "--json"));
+        JsonNode json = new ObjectMapper().readTree(cli.out());
         assertEquals(3, json.path("stages").path("looks").size());
     }
 
     @Test
     void planNewKeepsTheKimDemetsToken() throws Exception {
         Path p = dir.resolve("kim-demets.json");
-        assertEquals(0, newPlan(p, "--stages", "2", "--spending", "kim-demets-2"), err.toString());
+        assertEquals(0, newPlan(p, "--stages", "2", "--spending", "kim-demets-2"), cli.err());
         assertTrue(Files.readString(p).contains("\"spending\": \"kim-demets-2\""));
         assertEquals(Spending.KIM_DEMETS_2, PlanFiles.read(p).stages().orElseThrow().spending());
-        assertEquals(0, run("plan", "show", p.toString()));
-        assertTrue(out.toString().contains("stages   2 looks, kim-demets-2 spending"), out.toString());
+        assertEquals(0, cli.run("plan", "show", p.toString()));
+        assertTrue(cli.out().contains("stages   2 looks, kim-demets-2 spending"), cli.out());
     }
 
     @Test
@@ -125,11 +116,11 @@ class StagedCommandTest {
                         "--lsl", "24.98", "--usl", "25.02", "--target", "1.33", "--expected", "1.8",
                         "--subgroup-size", "5", "--subgroups", "18", "--start", "2027-03-01T06:00"));
                 a.addAll(extra);
-                assertEquals(2, run(a.toArray(new String[0])), String.join(" ", cases[i]));
+                assertEquals(2, cli.run(a.toArray(new String[0])), String.join(" ", cases[i]));
             } else {
                 assertEquals(2, newPlan(p, cases[i]), String.join(" ", cases[i]));
             }
-            String e = err.toString().trim();
+            String e = cli.err().trim();
             assertTrue(e.contains(words[i]), e);
             assertFalse(e.contains("\n") || e.contains("Exception"), e);
             assertFalse(Files.exists(p), "nothing written");
@@ -139,8 +130,8 @@ class StagedCommandTest {
     @Test
     void gradeNamesTheLookAndContinueExitsOneWithRequireDemonstrated() throws Exception {
         Path p = dir.resolve("staged.json");
-        assertEquals(0, newPlan(p, "--stages", "2", "--spending", "obrien-fleming"), err.toString());
-        assertEquals(0, run("plan", "issue", p.toString()));
+        assertEquals(0, newPlan(p, "--stages", "2", "--spending", "obrien-fleming"), cli.err());
+        assertEquals(0, cli.run("plan", "issue", p.toString()));
         StudyPlan plan = PlanFiles.read(p);
         GradingPlan gp = GradingPlans.of(plan);
         Path returned = dir.resolve("returned.csv");
@@ -156,14 +147,14 @@ class StagedCommandTest {
             stageOne.add(String.join(",", c));
         }
         Files.write(returned, stageOne);
-        assertEquals(1, run("grade", p.toString(), returned.toString(), "--require-demonstrated"), err.toString());
-        String text = out.toString();
+        assertEquals(1, cli.run("grade", p.toString(), returned.toString(), "--require-demonstrated"), cli.err());
+        String text = cli.out();
         assertTrue(text.contains("Part verdict: Continue"), text);
         assertTrue(text.contains("Graded at look 1 of 2 (after slot S15, 15 subgroups planned so far): continue,"
                 + " collect stage 2, slots S16 to S30"), text);
         assertFalse(text.contains("did not come back"), "stage 2's blank rows are not missing");
-        assertEquals(0, run("grade", p.toString(), returned.toString(), "--json"));
-        JsonNode json = new ObjectMapper().readTree(out.toString());
+        assertEquals(0, cli.run("grade", p.toString(), returned.toString(), "--json"));
+        JsonNode json = new ObjectMapper().readTree(cli.out());
         assertEquals("continue", json.path("verdict").asText());
         JsonNode look = json.path("characteristics").get(0).path("look");
         assertEquals(1, look.path("number").asInt());
@@ -175,7 +166,7 @@ class StagedCommandTest {
         assertTrue(look.path("confidence").asDouble() > 0.95);
         assertEquals("S16", look.path("next").path("from").asText());
         Path report = dir.resolve("grade.pdf");
-        assertEquals(0, run("grade", p.toString(), returned.toString(), "--report", report.toString()));
+        assertEquals(0, cli.run("grade", p.toString(), returned.toString(), "--report", report.toString()));
         try (org.apache.pdfbox.pdmodel.PDDocument doc = org.apache.pdfbox.Loader.loadPDF(report.toFile())) {
             String pdf = new org.apache.pdfbox.text.PDFTextStripper().getText(doc).replaceAll("\\s+", " ");
             assertTrue(pdf.contains("Graded at look 1 of 2 (after slot S15, 15 subgroups planned so far): continue,"), pdf);

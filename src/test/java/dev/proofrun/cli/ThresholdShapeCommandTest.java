@@ -8,8 +8,6 @@ import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import dev.proofrun.plan.PlanFiles;
 import dev.proofrun.stats.ShapeFamily;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -34,17 +32,7 @@ class ThresholdShapeCommandTest {
     @TempDir
     Path dir;
 
-    private String out;
-    private String err;
-
-    private int run(String... args) {
-        StringWriter o = new StringWriter();
-        StringWriter e = new StringWriter();
-        int code = ProofrunCommand.run(new PrintWriter(o, true), new PrintWriter(e, true), args);
-        out = o.toString();
-        err = e.toString();
-        return code;
-    }
+    private final LastRun cli = new LastRun();
 
     private String[] single(Path file, String... extra) {
         List<String> a = new ArrayList<>(List.of("plan", "new", "--out", file.toString(), "--id", "PR-2027-0091",
@@ -59,20 +47,20 @@ class ThresholdShapeCommandTest {
     @Test
     void aThresholdShapeIsWrittenShownAndRead() throws Exception {
         Path file = dir.resolve("p.json");
-        assertEquals(0, run(single(file, "--shape", "lognormal3", "--threshold", "9.95")), err);
+        assertEquals(0, cli.run(single(file, "--shape", "lognormal3", "--threshold", "9.95")), cli.err());
         String json = Files.readString(file);
         assertTrue(json.contains("\"shape\" : \"lognormal3\",\n      \"threshold\" : 9.95,")
                 || json.contains("\"shape\": \"lognormal3\",\n      \"threshold\": 9.95,"), json);
         assertEquals(ShapeFamily.LOGNORMAL3, PlanFiles.read(file).characteristics().get(0).shape());
         assertEquals(OptionalDouble.of(9.95), PlanFiles.read(file).characteristics().get(0).threshold());
-        assertEquals(0, run("plan", "show", file.toString()), err);
-        assertTrue(out.contains("lognormal3, threshold 9.95"), out);
+        assertEquals(0, cli.run("plan", "show", file.toString()), cli.err());
+        assertTrue(cli.out().contains("lognormal3, threshold 9.95"), cli.out());
     }
 
     @Test
     void otherShapesHaveNoThresholdInTheFile() throws Exception {
         Path file = dir.resolve("p.json");
-        assertEquals(0, run(single(file, "--shape", "lognormal")), err);
+        assertEquals(0, cli.run(single(file, "--shape", "lognormal")), cli.err());
         assertFalse(Files.readString(file).contains("threshold"));
     }
 
@@ -89,8 +77,8 @@ class ThresholdShapeCommandTest {
             "not normal", "must lie below the upper limit 10.1", "must be a number"};
         for (int i = 0; i < cases.length; i++) {
             Path file = dir.resolve("bad" + i + ".json");
-            assertEquals(2, run(single(file, cases[i])), String.join(" ", cases[i]) + ": " + out + err);
-            String e = err.trim();
+            assertEquals(2, cli.run(single(file, cases[i])), String.join(" ", cases[i]) + ": " + cli.out() + cli.err());
+            String e = cli.err().trim();
             assertEquals(1, e.lines().count(), e);
             assertTrue(e.contains(words[i].replace("not normal", "not normal")) && e.contains(i == 0 ? "--shape" : "--threshold"), e);
             assertFalse(e.contains("Exception"), e);
@@ -105,17 +93,17 @@ class ThresholdShapeCommandTest {
                 + "D1,bore,mm,10,9.98,10.02,1.33,1.8,,\n"
                 + "H2,seat height,mm,,9.90,10.10,1.33,1.8,weibull3,9.95\n", StandardCharsets.UTF_8);
         Path file = dir.resolve("p.json");
-        assertEquals(0, run("plan", "new", "--out", file.toString(), "--part", "pin", "--characteristics", csv.toString(),
-                "--subgroup-size", "5", "--subgroups", "25", "--zone", "Europe/Berlin", "--start", "2027-03-01T06:00"), err);
+        assertEquals(0, cli.run("plan", "new", "--out", file.toString(), "--part", "pin", "--characteristics", csv.toString(),
+                "--subgroup-size", "5", "--subgroups", "25", "--zone", "Europe/Berlin", "--start", "2027-03-01T06:00"), cli.err());
         assertEquals(List.of(OptionalDouble.empty(), OptionalDouble.of(9.95)),
                 PlanFiles.read(file).characteristics().stream().map(c -> c.threshold()).toList());
 
         Files.writeString(csv, "id,name,unit,nominal,lsl,usl,target,expected,shape,threshold\n"
                 + "H2,seat height,mm,,,10.10,1.33,1.8,lognormal,9.95\n", StandardCharsets.UTF_8);
         Path bad = dir.resolve("q.json");
-        assertEquals(2, run("plan", "new", "--out", bad.toString(), "--part", "pin", "--characteristics", csv.toString(),
+        assertEquals(2, cli.run("plan", "new", "--out", bad.toString(), "--part", "pin", "--characteristics", csv.toString(),
                 "--subgroup-size", "5", "--subgroups", "25", "--zone", "Europe/Berlin", "--start", "2027-03-01T06:00"));
-        String e = err.trim();
+        String e = cli.err().trim();
         assertTrue(e.contains("chars.csv") && e.contains("row 2") && e.contains("threshold") && e.contains("not lognormal"), e);
         assertEquals(1, e.lines().count(), e);
         assertFalse(Files.exists(bad));
@@ -123,7 +111,7 @@ class ThresholdShapeCommandTest {
 
     /** Readings 9.95 + 0.02·exp(0.4·Z) in the fill-in layout (invented seat heights; Ppu about 3). */
     private Path returned(Path plan, long seed, String replaceFirst) throws Exception {
-        assertEquals(0, run("plan", "issue", plan.toString()), err);
+        assertEquals(0, cli.run("plan", "issue", plan.toString()), cli.err());
         var gp = dev.proofrun.grade.GradingPlans.of(PlanFiles.read(plan));
         UniformRandomProvider rng = RandomSource.XO_RO_SHI_RO_128_PP.create(seed);
         ZigguratSampler.NormalizedGaussian g = ZigguratSampler.NormalizedGaussian.of(rng);
@@ -147,22 +135,22 @@ class ThresholdShapeCommandTest {
     @Test
     void gradeNamesTheModelAndThreshold() throws Exception {
         Path plan = dir.resolve("p.json");
-        assertEquals(0, run(single(plan, "--shape", "lognormal3", "--threshold", "9.95", "--lsl", "9.90")), err);
+        assertEquals(0, cli.run(single(plan, "--shape", "lognormal3", "--threshold", "9.95", "--lsl", "9.90")), cli.err());
         Path data = returned(plan, 21L, null);
-        assertEquals(0, run("grade", plan.toString(), data.toString()), err);
-        assertTrue(out.contains("C1 seat height: Demonstrated"), out);
-        assertTrue(out.contains("under the lognormal3 model"), out);
-        assertTrue(out.contains("fitted lognormal3 (threshold 9.95) model"), out);
-        assertTrue(out.contains("lower limit 9.9 lies at or below the declared threshold 9.95"), out);
-        assertTrue(out.contains("threshold 9.95 as the real stop"), out);
-        assertEquals(0, run("grade", plan.toString(), data.toString(), "--json"), err);
-        JsonNode j = new ObjectMapper().readTree(out).get("characteristics").get(0);
+        assertEquals(0, cli.run("grade", plan.toString(), data.toString()), cli.err());
+        assertTrue(cli.out().contains("C1 seat height: Demonstrated"), cli.out());
+        assertTrue(cli.out().contains("under the lognormal3 model"), cli.out());
+        assertTrue(cli.out().contains("fitted lognormal3 (threshold 9.95) model"), cli.out());
+        assertTrue(cli.out().contains("lower limit 9.9 lies at or below the declared threshold 9.95"), cli.out());
+        assertTrue(cli.out().contains("threshold 9.95 as the real stop"), cli.out());
+        assertEquals(0, cli.run("grade", plan.toString(), data.toString(), "--json"), cli.err());
+        JsonNode j = new ObjectMapper().readTree(cli.out()).get("characteristics").get(0);
         assertEquals("lognormal3", j.get("model").asText());
         assertEquals(9.95, j.get("threshold").asDouble(), 0);
         assertEquals("iso-22514-2-percentile", j.get("method").asText());
 
         Path pdf = dir.resolve("report.pdf");
-        assertEquals(0, run("grade", plan.toString(), data.toString(), "--report", pdf.toString()), err);
+        assertEquals(0, cli.run("grade", plan.toString(), data.toString(), "--report", pdf.toString()), cli.err());
         try (org.apache.pdfbox.pdmodel.PDDocument doc = org.apache.pdfbox.Loader.loadPDF(Files.readAllBytes(pdf))) {
             String text = new org.apache.pdfbox.text.PDFTextStripper().getText(doc).replaceAll("\\s+", " ");
             assertTrue(text.contains("lognormal3"), text);
@@ -174,26 +162,26 @@ class ThresholdShapeCommandTest {
     @Test
     void aReadingAtTheThresholdIsAFinding() throws Exception {
         Path plan = dir.resolve("p.json");
-        assertEquals(0, run(single(plan, "--shape", "weibull3", "--threshold", "9.95")), err);
+        assertEquals(0, cli.run(single(plan, "--shape", "weibull3", "--threshold", "9.95")), cli.err());
         Path data = returned(plan, 22L, "9.95");
         byte[] before = Files.readAllBytes(data);
-        assertEquals(0, run("grade", plan.toString(), data.toString()), err);
-        assertTrue(out.contains("C1 seat height: Not valid"), out);
-        assertTrue(out.contains("a reading at or below the declared threshold cannot come from the planned shape (weibull3,"
-                + " threshold 9.95): 9.95 in subgroup"), out);
-        assertTrue(out.contains(", reading 2."), out);
+        assertEquals(0, cli.run("grade", plan.toString(), data.toString()), cli.err());
+        assertTrue(cli.out().contains("C1 seat height: Not valid"), cli.out());
+        assertTrue(cli.out().contains("a reading at or below the declared threshold cannot come from the planned shape (weibull3,"
+                + " threshold 9.95): 9.95 in subgroup"), cli.out());
+        assertTrue(cli.out().contains(", reading 2."), cli.out());
         assertTrue(java.util.Arrays.equals(before, Files.readAllBytes(data)));
     }
 
     @Test
     void sizeAcceptsTheThresholdShapesAndPlansThemAsTheTwoParameterOnes() {
-        assertEquals(0, run("size", "--shape", "lognormal", "--skewness", "1", "--spec", "upper", "--target", "1.33",
-                "--expected", "1.67", "--subgroup-size", "5"), err);
-        String two = out;
-        assertEquals(0, run("size", "--shape", "lognormal3", "--skewness", "1", "--spec", "upper", "--target", "1.33",
-                "--expected", "1.67", "--subgroup-size", "5"), err);
-        assertTrue(out.contains("note: lognormal3 is planned exactly as lognormal"), out);
+        assertEquals(0, cli.run("size", "--shape", "lognormal", "--skewness", "1", "--spec", "upper", "--target", "1.33",
+                "--expected", "1.67", "--subgroup-size", "5"), cli.err());
+        String two = cli.out();
+        assertEquals(0, cli.run("size", "--shape", "lognormal3", "--skewness", "1", "--spec", "upper", "--target", "1.33",
+                "--expected", "1.67", "--subgroup-size", "5"), cli.err());
+        assertTrue(cli.out().contains("note: lognormal3 is planned exactly as lognormal"), cli.out());
         // the same table: only the note differs
-        assertEquals(two, out.replaceAll("note: lognormal3 is planned exactly as lognormal[^\n]*\n", ""));
+        assertEquals(two, cli.out().replaceAll("note: lognormal3 is planned exactly as lognormal[^\n]*\n", ""));
     }
 }

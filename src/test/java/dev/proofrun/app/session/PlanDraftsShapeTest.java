@@ -23,14 +23,8 @@ class PlanDraftsShapeTest {
     @Test
     void aPlanOpenedAndComposedAgainKeepsItsShapes() throws Exception {
         StudyPlan demo = DemoPlan.create();
-        Path plans = Files.createDirectories(home.resolve("plans"));
-        Path file = plans.resolve(DemoPlan.FILE_NAME);
-        PlanFiles.write(file, demo);
-        Session session = new Session(new AppHome(home, plans));
-        session.open(file);
-        StudyPlan again = PlanDrafts.compose(session.draft(), session.base(), demo.characteristics().get(0).requirement(),
-                row -> demo.characteristic(row.id()).orElseThrow().expectation(), demo.calendar(), demo.span(),
-                demo.design(), demo.spacing(), demo.seed(), demo.schedule());
+        Session session = opened(demo);
+        StudyPlan again = composed(session, demo);
         assertEquals(ShapeFamily.LOGNORMAL, again.characteristic("R4").orElseThrow().shape());
         assertEquals(ShapeFamily.NORMAL, again.characteristic("D1").orElseThrow().shape());
     }
@@ -38,17 +32,11 @@ class PlanDraftsShapeTest {
     @Test
     void theShapeColumnSetsThePlannedShapeAndABadNameIsMarked() throws Exception {
         StudyPlan demo = DemoPlan.create();
-        Path plans = Files.createDirectories(home.resolve("plans"));
-        Path file = plans.resolve(DemoPlan.FILE_NAME);
-        PlanFiles.write(file, demo);
-        Session session = new Session(new AppHome(home, plans));
-        session.open(file);
+        Session session = opened(demo);
         CharacteristicDraft d1 = session.draft().characteristics().get(0);
         assertEquals("normal", d1.text(CharacteristicField.SHAPE));
         d1.cell(CharacteristicField.SHAPE).set(" Weibull ");
-        StudyPlan again = PlanDrafts.compose(session.draft(), session.base(), demo.characteristics().get(0).requirement(),
-                row -> demo.characteristic(row.id()).orElseThrow().expectation(), demo.calendar(), demo.span(),
-                demo.design(), demo.spacing(), demo.seed(), demo.schedule());
+        StudyPlan again = composed(session, demo);
         assertEquals(ShapeFamily.WEIBULL, again.characteristic("D1").orElseThrow().shape());
         d1.cell(CharacteristicField.SHAPE).set("");
         assertEquals(ShapeFamily.NORMAL, PlanDrafts.shapeOf(d1), "blank is normal");
@@ -61,11 +49,7 @@ class PlanDraftsShapeTest {
     @Test
     void theGaugeColumnsSetTheGaugeAndKeepItsRepeatability() throws Exception {
         StudyPlan demo = DemoPlan.create();
-        Path plans = Files.createDirectories(home.resolve("plans"));
-        Path file = plans.resolve(DemoPlan.FILE_NAME);
-        PlanFiles.write(file, demo);
-        Session session = new Session(new AppHome(home, plans));
-        session.open(file);
+        Session session = opened(demo);
         CharacteristicDraft d1 = session.draft().characteristics().get(0);
         dev.proofrun.plan.Gauge was = demo.characteristic("D1").orElseThrow().gauge().orElseThrow();
         assertEquals(was.name(), d1.text(CharacteristicField.GAUGE));
@@ -98,23 +82,32 @@ class PlanDraftsShapeTest {
         StudyPlan plan = new StudyPlan(demo.id(), demo.part(), demo.people(), chars, demo.calendar(), demo.span(),
                 demo.design(), demo.spacing(), demo.seed(), demo.schedule(), dev.proofrun.plan.PlanState.DRAFT,
                 java.util.Optional.empty(), java.util.Optional.empty(), 1, demo.stages());
-        Path plans = Files.createDirectories(home.resolve("plans"));
-        Path file = plans.resolve(DemoPlan.FILE_NAME);
-        PlanFiles.write(file, plan);
-        Session session = new Session(new AppHome(home, plans));
-        session.open(file);
-        StudyPlan again = PlanDrafts.compose(session.draft(), session.base(), demo.characteristics().get(0).requirement(),
-                row -> demo.characteristic(row.id()).orElseThrow().expectation(), demo.calendar(), demo.span(),
-                demo.design(), demo.spacing(), demo.seed(), demo.schedule());
+        Session session = opened(plan);
+        StudyPlan again = composed(session, demo);
         assertEquals(ShapeFamily.WEIBULL3, again.characteristic("R4").orElseThrow().shape());
         assertEquals(java.util.OptionalDouble.of(0.05), again.characteristic("R4").orElseThrow().threshold());
         // typed on a row whose plan had none: refused in words by the plan model
         CharacteristicDraft d1 = session.draft().characteristics().get(0);
         d1.cell(CharacteristicField.SHAPE).set("lognormal3");
         IllegalArgumentException e = org.junit.jupiter.api.Assertions.assertThrows(IllegalArgumentException.class,
-                () -> PlanDrafts.compose(session.draft(), session.base(), demo.characteristics().get(0).requirement(),
-                        row -> demo.characteristic(row.id()).orElseThrow().expectation(), demo.calendar(), demo.span(),
-                        demo.design(), demo.spacing(), demo.seed(), demo.schedule()));
+                () -> composed(session, demo));
         org.junit.jupiter.api.Assertions.assertTrue(e.getMessage().contains("needs a threshold"), e.getMessage());
+    }
+
+    /** A session with {@code plan} written to the plans folder and opened. */
+    private Session opened(StudyPlan plan) throws Exception {
+        Path plans = Files.createDirectories(home.resolve("plans"));
+        Path file = plans.resolve(DemoPlan.FILE_NAME);
+        PlanFiles.write(file, plan);
+        Session session = new Session(new AppHome(home, plans));
+        session.open(file);
+        return session;
+    }
+
+    /** The session's draft composed into a plan, with the demo's requirement, expectations, calendar and design. */
+    private static StudyPlan composed(Session session, StudyPlan demo) {
+        return PlanDrafts.compose(session.draft(), session.base(), demo.characteristics().get(0).requirement(),
+                row -> demo.characteristic(row.id()).orElseThrow().expectation(), demo.calendar(), demo.span(),
+                demo.design(), demo.spacing(), demo.seed(), demo.schedule());
     }
 }

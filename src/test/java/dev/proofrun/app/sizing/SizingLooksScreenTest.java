@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import dev.proofrun.app.Settle;
 import dev.proofrun.app.WizardApp;
 import dev.proofrun.app.chart.CurvePlot;
 import dev.proofrun.app.session.AppHome;
@@ -11,7 +12,6 @@ import dev.proofrun.app.session.DraftField;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
-import java.util.concurrent.TimeUnit;
 import javafx.geometry.Bounds;
 import javafx.scene.Node;
 import javafx.scene.control.ComboBox;
@@ -45,33 +45,17 @@ class SizingLooksScreenTest {
         app.start(stage, new AppHome(home, home.resolve("plans")));
     }
 
-    private void settleOn(int step, int seconds) throws Exception {
-        WaitForAsyncUtils.waitFor(seconds, TimeUnit.SECONDS, () -> WaitForAsyncUtils.asyncFx(() ->
-                app.wizard().shell().currentProperty().get() == step && !app.wizard().busy()).get());
-        WaitForAsyncUtils.waitForFxEvents();
-    }
-
-    private void resize(FxRobot robot, int w, int h) {
-        robot.interact(() -> {
-            stage.setMinWidth(0);
-            stage.setMinHeight(0);
-            stage.setWidth(w);
-            stage.setHeight(h);
-        });
-        WaitForAsyncUtils.waitForFxEvents();
-    }
-
     @Test
     void twoLooksShowTheirFiguresAndTheReadingsChartBesideTheOc(FxRobot robot) throws Exception {
-        settleOn(1, 90);
+        Settle.onStep(app, 1);
         robot.interact(() -> app.wizard().shell().goTo(SIZING));
-        settleOn(SIZING, 90);
+        Settle.onStep(app, SIZING);
         ComboBox<?> looks = robot.lookup("#looks").queryAs(ComboBox.class);
         Label text = robot.lookup("#looks-text").queryAs(Label.class);
         CurvePlot readings = robot.lookup("#expected-readings-chart").queryAs(CurvePlot.class);
         assertFalse(readings.isVisible(), "no readings chart for a single stage");
         robot.interact(() -> looks.getSelectionModel().select(1));
-        settleOn(SIZING, 90);
+        Settle.onStep(app, SIZING);
         assertEquals("2", app.wizard().session().draft().text(DraftField.STAGES));
         // the demo's R4 is planned lognormal: the looks are refused in words, and the step is not complete
         assertTrue(text.getText().contains("R4 is planned lognormal"), text.getText());
@@ -79,7 +63,7 @@ class SizingLooksScreenTest {
 
         // one normal characteristic (D1): the looks are computed on their worker
         robot.interact(() -> app.wizard().session().draft().characteristics().removeIf(c -> !c.id().equals("D1")));
-        settleOn(SIZING, 300);
+        Settle.onStep(app, SIZING, 300);
         assertTrue(app.wizard().sizing().completeBinding().get(), app.wizard().sizing().missingProperty().get());
         assertTrue(text.getText().startsWith("Look 1: "), text.getText());
         assertTrue(text.getText().contains("Look 2: "), text.getText());
@@ -92,7 +76,7 @@ class SizingLooksScreenTest {
         CurvePlot power = robot.lookup("#power-chart").queryAs(CurvePlot.class);
         // larger size first: the headless screen's pixel buffer is only ever made smaller
         for (int[] size : new int[][] {{1280, 800}, {1024, 640}}) {
-            resize(robot, size[0], size[1]);
+            Settle.resize(robot, stage, size[0], size[1]);
             Bounds p = bounds(power);
             Bounds o = bounds(oc);
             Bounds r = bounds(readings);

@@ -4,13 +4,13 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import dev.proofrun.app.Settle;
 import dev.proofrun.app.WizardApp;
 import dev.proofrun.app.session.AppHome;
 import dev.proofrun.app.session.DraftField;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
-import java.util.concurrent.TimeUnit;
 import javafx.geometry.BoundingBox;
 import javafx.scene.Node;
 import javafx.scene.control.Label;
@@ -42,25 +42,9 @@ class TimingScreenTest {
         app.start(stage, new AppHome(home, home.resolve("plans")));
     }
 
-    private void settleOn(int step) throws Exception {
-        WaitForAsyncUtils.waitFor(90, TimeUnit.SECONDS, () -> WaitForAsyncUtils.asyncFx(() ->
-                app.wizard().shell().currentProperty().get() == step && !app.wizard().busy()).get());
-        WaitForAsyncUtils.waitForFxEvents();
-    }
-
     private void goTo(FxRobot robot, int step) throws Exception {
         robot.interact(() -> app.wizard().shell().goTo(step));
-        settleOn(step);
-    }
-
-    private void resize(FxRobot robot, int w, int h) {
-        robot.interact(() -> {
-            stage.setMinWidth(0);
-            stage.setMinHeight(0);
-            stage.setWidth(w);
-            stage.setHeight(h);
-        });
-        WaitForAsyncUtils.waitForFxEvents();
+        Settle.onStep(app, step);
     }
 
     private static boolean overlap(BoundingBox a, BoundingBox b) {
@@ -69,7 +53,7 @@ class TimingScreenTest {
 
     @Test
     void slotIdsNeverOverlapAt1280And1024(FxRobot robot) throws Exception {
-        settleOn(1);
+        Settle.onStep(app, 1);
         goTo(robot, TIMING);
         String demoDays = app.wizard().session().draft().text(DraftField.SPAN_COUNT);
         // larger size first: the headless screen's pixel buffer is only ever made smaller
@@ -81,7 +65,7 @@ class TimingScreenTest {
                     app.wizard().session().draft().field(DraftField.SPAN_KIND).set(days.endsWith("shift") ? "shifts" : "days");
                     app.wizard().session().draft().field(DraftField.SPAN_COUNT).set(days.substring(0, 1));
                 });
-                settleOn(TIMING);
+                Settle.onStep(app, TIMING);
                 checkAt(robot, size, days);
             }
         }
@@ -89,7 +73,7 @@ class TimingScreenTest {
 
     private void checkAt(FxRobot robot, int[] size, String days) throws Exception {
         {
-            resize(robot, size[0], size[1]);
+            Settle.resize(robot, stage, size[0], size[1]);
             Timeline t = robot.lookup("#timeline").queryAs(Timeline.class);
             List<BoundingBox> boxes = WaitForAsyncUtils.asyncFx(t::labelBoxes).get();
             int leftOut = WaitForAsyncUtils.asyncFx(t::labelsLeftOut).get();
@@ -108,9 +92,9 @@ class TimingScreenTest {
 
     @Test
     void aStepComesBackAtItsTop(FxRobot robot) throws Exception {
-        settleOn(1);
+        Settle.onStep(app, 1);
         goTo(robot, TIMING);
-        resize(robot, 1024, 640);
+        Settle.resize(robot, stage, 1024, 640);
         Node page = robot.lookup("#page-" + TIMING).query();
         ScrollPane scroll = (ScrollPane) page.getParent().getParent().getParent();
         robot.interact(() -> scroll.setVvalue(scroll.getVmax()));
@@ -122,7 +106,7 @@ class TimingScreenTest {
 
     @Test
     void anEmptyStartSaysWhatToEnter(FxRobot robot) throws Exception {
-        settleOn(1);
+        Settle.onStep(app, 1);
         goTo(robot, TIMING);
         robot.interact(() -> app.wizard().session().draft().field(DraftField.START).set(""));
         WaitForAsyncUtils.waitForFxEvents();
