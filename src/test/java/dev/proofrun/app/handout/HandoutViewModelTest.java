@@ -179,7 +179,8 @@ class HandoutViewModelTest {
         assertEquals(0, dev.proofrun.cli.ProofrunCommand.run(new java.io.PrintWriter(out, true),
                 new java.io.PrintWriter(out, true), "plan", "new", "--out", staged.toString(), "--id", "PR-2027-0078",
                 "--part", "pump housing", "--characteristic", "seal bore", "--unit", "mm", "--lsl", "31.98", "--usl",
-                "32.02", "--target", "1.33", "--expected", "1.67", "--stages", "2", "--start", "2027-04-05T06:00",
+                "32.02", "--target", "1.33", "--expected", "1.67", "--stages", "2", "--spending", "obrien-fleming",
+                "--start", "2027-04-05T06:00",
                 "--span-days", "5", "--rate", "60", "--zone", "Europe/Berlin"), out.toString());
         assertEquals(0, dev.proofrun.cli.ProofrunCommand.run(new java.io.PrintWriter(out, true),
                 new java.io.PrintWriter(out, true), "plan", "issue", staged.toString()), out.toString());
