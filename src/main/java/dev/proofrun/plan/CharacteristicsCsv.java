@@ -46,7 +46,7 @@ public final class CharacteristicsCsv {
      */
     public static List<Characteristic> read(Path file, IndexKind defaultIndex, double defaultConfidence) {
         String name = file.toString();
-        try (CsvReader csv = CsvReader.open(file, name, PlanMessage.CANNOT_READ, PlanMessage.CSV_BAD_CELL)) {
+        try (CsvReader csv = CsvReader.open(file, name, PlanMessage.CSV_CANNOT_READ, PlanMessage.CSV_BAD_CELL)) {
             if (!csv.next()) {
                 throw new UserException(Location.file(name), PlanMessage.CSV_NO_ROWS);
             }
@@ -92,7 +92,7 @@ public final class CharacteristicsCsv {
             }
             return out;
         } catch (NoSuchFileException e) {
-            throw new UserException(Location.file(name), PlanMessage.CANNOT_READ, e.getMessage());
+            throw new UserException(Location.file(name), PlanMessage.CSV_CANNOT_READ, e.getMessage());
         } catch (IllegalArgumentException e) {
             throw new UserException(Location.file(name), PlanMessage.CSV_BAD_CELL, e.getMessage());
         }

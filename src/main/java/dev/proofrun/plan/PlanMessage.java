@@ -25,6 +25,7 @@ public enum PlanMessage implements MessageKey {
     ISSUED_FILE_PROTECTED("%s holds issued revision %s; an issued plan is not overwritten: issue the change"
             + " as a new revision or save it under another name"),
     NOT_A_PLAN_FILE_TO_REPLACE("%s exists and is not a proofrun plan; it is left untouched"),
+    CSV_CANNOT_READ("cannot read the characteristics file: %s"),
     CSV_MISSING_COLUMN("the column '%s' is missing; the header needs %s"),
     CSV_BAD_CELL("%s"),
     CSV_EXTRA_CELLS("%d cells but the header has %d (a decimal comma? use a decimal point)"),

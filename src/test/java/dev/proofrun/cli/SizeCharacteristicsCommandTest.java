@@ -149,4 +149,14 @@ class SizeCharacteristicsCommandTest {
         node.fieldNames().forEachRemaining(out::add);
         return out;
     }
+
+    @Test
+    void aMissingCharacteristicsFileIsNamedAsSuch() {
+        Path missing = dir.resolve("no-such.csv");
+        CommandRun r = run("size", "--characteristics", missing.toString());
+        assertEquals(2, r.code(), r.err());
+        assertTrue(r.err().contains("cannot read the characteristics file") && r.err().contains("no-such.csv")
+                && !r.err().contains("plan file"), r.err());
+        assertEquals("", r.out());
+    }
 }
