@@ -191,8 +191,11 @@ public final class PartView implements StepView {
         /** Checks each keystroke (the view-model's rules on the text as typed); commits on Enter or leaving the cell. */
         @Override
         public void startEdit() {
-            super.startEdit();
             CharacteristicDraft row = getTableRow() == null ? null : getTableRow().getItem();
+            if (row != null && !vm.cellOpen(row, field)) {
+                return; // nothing to hold here (a threshold on a shape that takes none)
+            }
+            super.startEdit();
             if (isEditing() && row != null && getGraphic() instanceof TextField tf) {
                 tf.setId("editing-" + field.header());
                 tf.textProperty().addListener((obs, was, now) -> {
@@ -248,10 +251,22 @@ public final class PartView implements StepView {
         }
 
         private String shown = "";
+        private boolean closed;
 
-        /** Marks the cell when its problem changed (cheap when nothing changed: no new tooltip, no restyle). */
+        /**
+         * Marks the cell when its problem changed (cheap when nothing changed: no new tooltip, no restyle), and
+         * greys it while it has nothing to hold.
+         */
         private void mark() {
             CharacteristicDraft row = getTableRow() == null ? null : getTableRow().getItem();
+            boolean shut = row != null && !isEmpty() && !vm.cellOpen(row, field);
+            if (shut != closed) {
+                closed = shut;
+                getStyleClass().remove("pr-unused");
+                if (shut) {
+                    getStyleClass().add("pr-unused");
+                }
+            }
             String now = row == null || isEmpty() ? "" : vm.problem(row, field).orElse("");
             if (now.equals(shown)) {
                 return;
@@ -281,18 +296,24 @@ public final class PartView implements StepView {
             this.vm = vm;
         }
 
-        /** Moves one cell forward or back from (row, col), wrapping rows; past the last cell adds a row. */
+        /**
+         * Moves one cell forward or back from (row, col), wrapping rows, past cells that hold nothing; past the last
+         * cell adds a row.
+         */
         void step(int row, int col, int direction, boolean edit) {
             int last = table.getColumns().size() - 1;
             int r = Math.max(row, 0);
-            int c = col + direction;
-            if (c > last) {
-                c = 0;
-                r++;
-            } else if (c < 0) {
-                c = r == 0 ? 0 : last;
-                r = Math.max(r - 1, 0);
-            }
+            int c = col;
+            do { // past the cells that hold nothing (a threshold on a shape that takes none)
+                c += direction;
+                if (c > last) {
+                    c = 0;
+                    r++;
+                } else if (c < 0) {
+                    c = r == 0 ? 0 : last;
+                    r = Math.max(r - 1, 0);
+                }
+            } while (r < vm.rows().size() && !vm.cellOpen(vm.rows().get(r), CharacteristicField.values()[c]));
             if (r >= vm.rows().size()) {
                 vm.addRow();
             }
