@@ -83,9 +83,9 @@ class PlanDraftsShapeTest {
                 demo.design(), demo.spacing(), demo.seed(), demo.schedule(), dev.proofrun.plan.PlanState.DRAFT,
                 java.util.Optional.empty(), java.util.Optional.empty(), 1, demo.stages());
         Session session = opened(plan);
-        CharacteristicDraft r4 = session.draft().characteristics().stream().filter(r -> r.id().equals("R4")).findFirst()
+        CharacteristicDraft row4 = session.draft().characteristics().stream().filter(r -> r.id().equals("R4")).findFirst()
                 .orElseThrow();
-        assertEquals("0.05", r4.text(CharacteristicField.THRESHOLD), "the plan's threshold is in the cell");
+        assertEquals("0.05", row4.text(CharacteristicField.THRESHOLD), "the plan's threshold is in the cell");
         StudyPlan again = composed(session, demo);
         assertEquals(ShapeFamily.WEIBULL3, again.characteristic("R4").orElseThrow().shape());
         assertEquals(java.util.OptionalDouble.of(0.05), again.characteristic("R4").orElseThrow().threshold());
