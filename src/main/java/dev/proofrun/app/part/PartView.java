@@ -59,7 +59,6 @@ public final class PartView implements StepView {
         table.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY_FLEX_LAST_COLUMN);
         // as wide as the card, not as the columns' widths added up: the columns share what there is
         table.setPrefWidth(dev.proofrun.app.shell.FontScale.of(40));
-        table.setMinWidth(dev.proofrun.app.shell.FontScale.of(30));
         Grid grid = new Grid(table, vm);
         table.addEventFilter(KeyEvent.KEY_PRESSED, grid::keyOnTable);
         for (CharacteristicField f : CharacteristicField.values()) {
@@ -77,7 +76,8 @@ public final class PartView implements StepView {
             // a width of its own: the default width makes the skin measure every cell on the first showing
             // (hundreds of ms on a loaded machine); the constrained policy spreads the rest
             c.setPrefWidth(dev.proofrun.app.shell.FontScale.of(switch (f) {
-                case NAME, GAUGE -> 8;
+                case NAME -> 8;
+                case GAUGE, SHAPE -> 6.5;
                 case ID, UNIT, INDEX, TARGET, CONFIDENCE -> 4;
                 case EXPECTED, EXPECTED_CP, RESOLUTION -> 5.5;
                 default -> 5.5;
@@ -85,12 +85,18 @@ public final class PartView implements StepView {
             // never narrower than its header's longest line (bold), so a narrow window does not cut a title
             int longest = java.util.Arrays.stream(title.split("\n")).mapToInt(String::length).max().orElse(1);
             boolean limit = f == CharacteristicField.LSL || f == CharacteristicField.USL || f == CharacteristicField.NOMINAL;
-            c.setMinWidth(dev.proofrun.app.shell.FontScale.of(Math.max(0.62 * longest + 1, limit ? 5 : 0))); // limits: "21.987"
+            // limits: "21.987"; shape: "lognormal3"; a name stays readable ("Bore diameter")
+            double least = limit ? 5 : f == CharacteristicField.SHAPE ? 6.5 : f == CharacteristicField.NAME ? 7 : 0;
+            c.setMinWidth(dev.proofrun.app.shell.FontScale.of(Math.max(0.62 * longest + 1, least)));
             c.setCellValueFactory(cd -> cd.getValue().cell(f));
             c.setCellFactory(col -> new CheckedCell(vm, f, grid));
             c.setOnEditCommit(e -> vm.setCell(e.getTablePosition().getRow(), f, e.getNewValue()));
             table.getColumns().add(c);
         }
+        // never narrower than its columns' least widths: a narrow window scrolls the page sideways instead of
+        // hiding the last columns
+        table.setMinWidth(table.getColumns().stream().mapToDouble(TableColumn::getMinWidth).sum()
+                + dev.proofrun.app.shell.FontScale.of(0.5));
         table.getSelectionModel().selectedIndexProperty().addListener((obs, was, now) -> vm.selectedProperty().set(now.intValue()));
         vm.selectedProperty().addListener((obs, was, now) -> {
             if (table.getSelectionModel().getSelectedIndex() != now.intValue()) {
