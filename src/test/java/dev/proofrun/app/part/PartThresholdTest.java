@@ -137,6 +137,24 @@ class PartThresholdTest {
     }
 
     @Test
+    void anImportedListBringsItsThresholdColumnAndItsProblems(@org.junit.jupiter.api.io.TempDir java.nio.file.Path dir)
+            throws Exception {
+        runout();
+        java.nio.file.Path csv = dir.resolve("shaft.csv");
+        // the command line's characteristics CSV columns; the second row gives a threshold to a normal shape
+        java.nio.file.Files.writeString(csv, "id,name,unit,usl,index,shape,threshold\n"
+                + "R2,Runout,mm,0.080,ppu,weibull3,0\nL4,Length,mm,40.1,cpu,normal,39\n");
+        assertTrue(vm.importList(csv), vm.importMessageProperty().get());
+        CharacteristicDraft r2 = draft.characteristics().get(0);
+        CharacteristicDraft l4 = draft.characteristics().get(1);
+        assertEquals("0", r2.text(THRESHOLD));
+        assertEquals(Optional.empty(), vm.problem(r2, THRESHOLD));
+        assertEquals("a threshold is only taken by the shapes lognormal3 and weibull3, not normal",
+                vm.problem(l4, THRESHOLD).orElseThrow(), "marked as the command line refuses it");
+        assertTrue(vm.cellOpen(l4, THRESHOLD), "open, to clear it");
+    }
+
+    @Test
     void aPastedBlockFillsShapeAndThreshold() {
         CharacteristicDraft row = runout();
         assertEquals(2, vm.paste(0, SHAPE.ordinal(), "lognormal3\t0.001\n"));
