@@ -15,6 +15,7 @@ public final class PartHeaders {
             case INDEX, TARGET, CONFIDENCE -> Optional.of(PartMessage.REQUIREMENT_TIP.format(PartViewModel.label(f)));
             case EXPECTED_CP -> Optional.of(PartMessage.EXPECTED_CP_TIP.format());
             case EXPECTED -> Optional.of(PartMessage.EXPECTED_TIP.format());
+            case THRESHOLD -> Optional.of(PartMessage.THRESHOLD_TIP.format());
             default -> Optional.empty();
         };
     }
@@ -27,6 +28,7 @@ public final class PartHeaders {
             case EXPECTED -> "Expected\nindex";
             case EXPECTED_CP -> "Expected\nCp";
             case RESOLUTION -> "Reso-\nlution";
+            case THRESHOLD -> "Thres-\nhold";
             default -> PartViewModel.label(f);
         };
     }

@@ -9,7 +9,10 @@ public enum PartMessage implements MessageKey {
     EXPECTED_CP_TIP("The expected Cp (Pp) of a process that is not centred, for a two-sided Cpk or Ppk requirement:"
             + " at least the expected index; blank is centred (Cp = Cpk)"),
     EXPECTED_TIP("The expected value c₁ of the required index (the value the study is sized for). For a two-sided"
-            + " Cpk or Ppk, the Expected Cp column says how far off centre: blank is centred (Cp = Cpk)");
+            + " Cpk or Ppk, the Expected Cp column says how far off centre: blank is centred (Cp = Cpk)"),
+    THRESHOLD_TIP("The declared threshold θ of a lognormal3 or weibull3 shape: the stop or datum the readings cannot go"
+            + " below, a plan value never estimated from the readings (the command line's --threshold). Greyed for the"
+            + " shapes that take none");
 
     private final String english;
 

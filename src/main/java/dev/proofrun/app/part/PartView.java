@@ -59,7 +59,6 @@ public final class PartView implements StepView {
         table.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY_FLEX_LAST_COLUMN);
         // as wide as the card, not as the columns' widths added up: the columns share what there is
         table.setPrefWidth(dev.proofrun.app.shell.FontScale.of(40));
-        table.setMinWidth(dev.proofrun.app.shell.FontScale.of(30));
         Grid grid = new Grid(table, vm);
         table.addEventFilter(KeyEvent.KEY_PRESSED, grid::keyOnTable);
         for (CharacteristicField f : CharacteristicField.values()) {
@@ -77,7 +76,8 @@ public final class PartView implements StepView {
             // a width of its own: the default width makes the skin measure every cell on the first showing
             // (hundreds of ms on a loaded machine); the constrained policy spreads the rest
             c.setPrefWidth(dev.proofrun.app.shell.FontScale.of(switch (f) {
-                case NAME, GAUGE -> 8;
+                case NAME -> 8;
+                case GAUGE, SHAPE -> 6.5;
                 case ID, UNIT, INDEX, TARGET, CONFIDENCE -> 4;
                 case EXPECTED, EXPECTED_CP, RESOLUTION -> 5.5;
                 default -> 5.5;
@@ -85,12 +85,18 @@ public final class PartView implements StepView {
             // never narrower than its header's longest line (bold), so a narrow window does not cut a title
             int longest = java.util.Arrays.stream(title.split("\n")).mapToInt(String::length).max().orElse(1);
             boolean limit = f == CharacteristicField.LSL || f == CharacteristicField.USL || f == CharacteristicField.NOMINAL;
-            c.setMinWidth(dev.proofrun.app.shell.FontScale.of(Math.max(0.62 * longest + 1, limit ? 5 : 0))); // limits: "21.987"
+            // limits: "21.987"; shape: "lognormal3"; a name stays readable ("Bore diameter")
+            double least = limit ? 5 : f == CharacteristicField.SHAPE ? 6.5 : f == CharacteristicField.NAME ? 7 : 0;
+            c.setMinWidth(dev.proofrun.app.shell.FontScale.of(Math.max(0.62 * longest + 1, least)));
             c.setCellValueFactory(cd -> cd.getValue().cell(f));
             c.setCellFactory(col -> new CheckedCell(vm, f, grid));
             c.setOnEditCommit(e -> vm.setCell(e.getTablePosition().getRow(), f, e.getNewValue()));
             table.getColumns().add(c);
         }
+        // never narrower than its columns' least widths: a narrow window scrolls the page sideways instead of
+        // hiding the last columns
+        table.setMinWidth(table.getColumns().stream().mapToDouble(TableColumn::getMinWidth).sum()
+                + dev.proofrun.app.shell.FontScale.of(0.5));
         table.getSelectionModel().selectedIndexProperty().addListener((obs, was, now) -> vm.selectedProperty().set(now.intValue()));
         vm.selectedProperty().addListener((obs, was, now) -> {
             if (table.getSelectionModel().getSelectedIndex() != now.intValue()) {
@@ -191,8 +197,11 @@ public final class PartView implements StepView {
         /** Checks each keystroke (the view-model's rules on the text as typed); commits on Enter or leaving the cell. */
         @Override
         public void startEdit() {
-            super.startEdit();
             CharacteristicDraft row = getTableRow() == null ? null : getTableRow().getItem();
+            if (row != null && !vm.cellOpen(row, field)) {
+                return; // nothing to hold here (a threshold on a shape that takes none)
+            }
+            super.startEdit();
             if (isEditing() && row != null && getGraphic() instanceof TextField tf) {
                 tf.setId("editing-" + field.header());
                 tf.textProperty().addListener((obs, was, now) -> {
@@ -248,10 +257,22 @@ public final class PartView implements StepView {
         }
 
         private String shown = "";
+        private boolean closed;
 
-        /** Marks the cell when its problem changed (cheap when nothing changed: no new tooltip, no restyle). */
+        /**
+         * Marks the cell when its problem changed (cheap when nothing changed: no new tooltip, no restyle), and
+         * greys it while it has nothing to hold.
+         */
         private void mark() {
             CharacteristicDraft row = getTableRow() == null ? null : getTableRow().getItem();
+            boolean shut = row != null && !isEmpty() && !vm.cellOpen(row, field);
+            if (shut != closed) {
+                closed = shut;
+                getStyleClass().remove("pr-unused");
+                if (shut) {
+                    getStyleClass().add("pr-unused");
+                }
+            }
             String now = row == null || isEmpty() ? "" : vm.problem(row, field).orElse("");
             if (now.equals(shown)) {
                 return;
@@ -281,18 +302,24 @@ public final class PartView implements StepView {
             this.vm = vm;
         }
 
-        /** Moves one cell forward or back from (row, col), wrapping rows; past the last cell adds a row. */
+        /**
+         * Moves one cell forward or back from (row, col), wrapping rows, past cells that hold nothing; past the last
+         * cell adds a row.
+         */
         void step(int row, int col, int direction, boolean edit) {
             int last = table.getColumns().size() - 1;
             int r = Math.max(row, 0);
-            int c = col + direction;
-            if (c > last) {
-                c = 0;
-                r++;
-            } else if (c < 0) {
-                c = r == 0 ? 0 : last;
-                r = Math.max(r - 1, 0);
-            }
+            int c = col;
+            do { // past the cells that hold nothing (a threshold on a shape that takes none)
+                c += direction;
+                if (c > last) {
+                    c = 0;
+                    r++;
+                } else if (c < 0) {
+                    c = r == 0 ? 0 : last;
+                    r = Math.max(r - 1, 0);
+                }
+            } while (r < vm.rows().size() && !vm.cellOpen(vm.rows().get(r), CharacteristicField.values()[c]));
             if (r >= vm.rows().size()) {
                 vm.addRow();
             }

@@ -4,6 +4,7 @@ import static dev.proofrun.app.session.CharacteristicField.EXPECTED;
 import static dev.proofrun.app.session.CharacteristicField.ID;
 import static dev.proofrun.app.session.CharacteristicField.LSL;
 import static dev.proofrun.app.session.CharacteristicField.NOMINAL;
+import static dev.proofrun.app.session.CharacteristicField.THRESHOLD;
 import static dev.proofrun.app.session.CharacteristicField.UNIT;
 import static dev.proofrun.app.session.CharacteristicField.USL;
 
@@ -15,6 +16,7 @@ import dev.proofrun.app.session.DraftField;
 import dev.proofrun.app.session.FieldNumbers;
 import dev.proofrun.app.session.PlanDrafts;
 import dev.proofrun.app.session.RowRequirement;
+import dev.proofrun.app.session.RowThreshold;
 import dev.proofrun.app.session.StudyDraft;
 import dev.proofrun.app.shell.StepViewModel;
 import dev.proofrun.text.UserException;
@@ -161,8 +163,14 @@ public final class PartViewModel extends StepViewModel {
         String now = text == null ? "" : text;
         String before = r.cell(field).get();
         if (!now.equals(before)) {
-            undo.push(new Edit(List.of(new Change(r, field, before)), List.of()));
+            List<Change> changes = new ArrayList<>(List.of(new Change(r, field, before)));
             r.cell(field).set(now);
+            if (field == CharacteristicField.SHAPE && !RowThreshold.takes(r) && !r.text(THRESHOLD).isEmpty()) {
+                // a shape that takes no threshold empties the threshold's cell, in the same undoable edit
+                changes.add(new Change(r, THRESHOLD, r.text(THRESHOLD)));
+                r.cell(THRESHOLD).set("");
+            }
+            undo.push(new Edit(List.copyOf(changes), List.of()));
         }
     }
 
@@ -259,6 +267,11 @@ public final class PartViewModel extends StepViewModel {
         return clash ? Optional.of(AppMessage.PART_ID_REPEATED.format(text)) : Optional.empty();
     }
 
+    /** False for a cell with nothing to hold (a threshold on a shape that takes none): empty, greyed, not edited. */
+    public boolean cellOpen(CharacteristicDraft row, CharacteristicField field) {
+        return field != THRESHOLD || RowThreshold.open(row);
+    }
+
     /** The problem of one cell, or empty when the cell is fine. */
     public Optional<String> problem(CharacteristicDraft row, CharacteristicField field) {
         String text = row.text(field).trim();
@@ -289,6 +302,8 @@ public final class PartViewModel extends StepViewModel {
                 } catch (IllegalArgumentException e) {
                     return Optional.of(e.getMessage());
                 }
+            case THRESHOLD:
+                return RowThreshold.problem(row);
             case INDEX, TARGET, CONFIDENCE, EXPECTED_CP:
                 return RowRequirement.problem(row, field);
             case UNIT:
@@ -377,6 +392,7 @@ public final class PartViewModel extends StepViewModel {
             case EXPECTED -> "Expected index";
             case EXPECTED_CP -> "Expected Cp";
             case SHAPE -> "Shape";
+            case THRESHOLD -> "Threshold";
             case GAUGE -> "Gauge";
             case RESOLUTION -> "Resolution";
         };

@@ -2,17 +2,20 @@ package dev.proofrun.app.session;
 
 /**
  * The columns of one characteristic as the wizard edits it, in the order of the import list
- * {@code id,name,unit,nominal,lsl,usl,index,target,confidence,expected,expected_cp,shape,gauge,resolution} (the header
+ * {@code id,name,unit,nominal,lsl,usl,index,target,confidence,expected,expected_cp,shape,threshold,gauge,resolution} (the header
  * names are the lower-case names, the same as the command line's characteristics CSV). {@link #INDEX}, {@link #TARGET}
  * (the required minimum c₀) and {@link #CONFIDENCE} are the row's own requirement, blank for the plan's (the Goal
  * step's); {@link #EXPECTED} is the expected index c₁ and {@link #EXPECTED_CP} the expected Cp (Pp) of an off-centre
  * process, blank for a centred one ({@link RowRequirement}).
- * {@link #SHAPE} is the planned shape ({@code normal}, {@code lognormal}, {@code weibull}; blank is normal);
+ * {@link #SHAPE} is the planned shape ({@code normal}, {@code lognormal}, {@code weibull}, {@code folded-normal},
+ * {@code lognormal3}, {@code weibull3}; blank is normal) and {@link #THRESHOLD} the declared threshold θ of the two
+ * threshold shapes ({@code lognormal3}, {@code weibull3}), blank for every other shape (the rules are the plan model's,
+ * {@code plan.Characteristic.requireThreshold});
  * {@link #GAUGE} and {@link #RESOLUTION} name the measuring instrument and the smallest step it reads (both
  * blank: no gauge in the plan).
  */
 public enum CharacteristicField {
-    ID, NAME, UNIT, NOMINAL, LSL, USL, INDEX, TARGET, CONFIDENCE, EXPECTED, EXPECTED_CP, SHAPE, GAUGE, RESOLUTION;
+    ID, NAME, UNIT, NOMINAL, LSL, USL, INDEX, TARGET, CONFIDENCE, EXPECTED, EXPECTED_CP, SHAPE, THRESHOLD, GAUGE, RESOLUTION;
 
     /** All headers in column order, comma-separated, as the import list's header row has them. */
     public static String headers() {

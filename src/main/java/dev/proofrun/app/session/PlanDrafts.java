@@ -90,6 +90,7 @@ public final class PlanDrafts {
             r.put("expected", num(ch.expectation().index()));
             r.put("expected_cp", ch.expectation().potential().isPresent() ? num(ch.expectation().potential().getAsDouble()) : "");
             r.put("shape", ch.shape().token());
+            r.put("threshold", ch.threshold().isPresent() ? num(ch.threshold().getAsDouble()) : "");
             r.put("gauge", ch.gauge().map(Gauge::name).orElse(""));
             r.put("resolution", ch.gauge().map(g -> num(g.resolution())).orElse(""));
             rows.add(r);
@@ -121,7 +122,7 @@ public final class PlanDrafts {
                     row.text(CharacteristicField.UNIT).trim(), nominal, row.limits().orElseThrow(), gauge,
                     RowRequirement.of(row, Optional.of(requirement)).orElseThrow(() -> new IllegalArgumentException(
                             "the requirement of " + row.id() + " is not complete")), e,
-                    shape, thresholdOf(shape, was)));
+                    shape, RowThreshold.of(row)));
         }
         Part part = new Part(d.text(DraftField.PART_NAME), d.text(DraftField.PART_NUMBER), d.text(DraftField.PART_REVISION));
         People people = new People(d.text(DraftField.PREPARED_BY), d.text(DraftField.COLLECTOR));
@@ -149,18 +150,6 @@ public final class PlanDrafts {
         }
         OptionalDouble sd = was.map(Gauge::sd).orElse(OptionalDouble.empty());
         return Optional.of(new Gauge(name, resolution.orElse(Double.NaN), sd));
-    }
-
-    /**
-     * The threshold of a lognormal3/weibull3 row: the one the opened plan declared for it (the Part table has no
-     * Threshold column yet, so a threshold shape typed on a new row is refused by the plan model in words: "needs a
-     * threshold" — declare it with plan new --threshold or the CSV's threshold column). Empty for other shapes.
-     */
-    static OptionalDouble thresholdOf(dev.proofrun.stats.ShapeFamily shape, Optional<Characteristic> was) {
-        if (!shape.hasThreshold()) {
-            return OptionalDouble.empty();
-        }
-        return was.filter(c -> c.shape().hasThreshold()).map(Characteristic::threshold).orElse(OptionalDouble.empty());
     }
 
     /** The planned shape typed in the row; blank is normal. */

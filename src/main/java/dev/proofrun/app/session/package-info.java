@@ -5,7 +5,8 @@
  * two seconds after the last edit, beside the plan file as {@code <name>.draft.json}, or {@code
  * untitled.draft.json} in the wizard home; opening a plan restores a draft newer than the file), {@code
  * RecentPlans}, {@code AppHome} ({@code ~/.proofrun}, moved by the system property {@code proofrun.home};
- * plans default to {@code ./plans}), {@code PlanDrafts} between the draft and a {@code plan.StudyPlan}, and
+ * plans default to {@code ./plans}), {@code PlanDrafts} between the draft and a {@code plan.StudyPlan} (a row's requirement and threshold read by
+ * {@code RowRequirement} and {@code RowThreshold}), and
  * the wizard's parsers ({@code FieldNumbers}, {@code CalendarText}), and {@code ExpectedProcess}, the Goal step's
  * expectation from a typed index, a mean and σ, or pilot readings.
  *

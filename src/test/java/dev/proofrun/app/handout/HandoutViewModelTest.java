@@ -102,6 +102,25 @@ class HandoutViewModelTest {
     }
 
     @Test
+    void aThresholdTypedInThePartTableIsInTheIssuedPlanFile() {
+        openDemo();
+        var d1 = session.draft().characteristics().get(0);
+        String id = d1.id();
+        d1.cell(dev.proofrun.app.session.CharacteristicField.SHAPE).set("lognormal3");
+        assertTrue(vm.composedBinding().get().plan().isEmpty(), "a threshold shape without its threshold is not composed");
+        assertTrue(vm.missingProperty().get().contains("the lognormal3 shape needs a threshold"), vm.missingProperty().get());
+        // an invented stop 0.25 below the lower limit
+        double theta = session.base().orElseThrow().characteristic(id).orElseThrow().limits().lower().getAsDouble() - 0.25;
+        d1.cell(dev.proofrun.app.session.CharacteristicField.THRESHOLD).set(Double.toString(theta));
+        assertTrue(vm.composedBinding().get().plan().isPresent(), vm.missingProperty().get());
+        assertTrue(vm.issue());
+        files.runAll();
+        var written = PlanFiles.read(planFile).characteristic(id).orElseThrow();
+        assertEquals(dev.proofrun.stats.ShapeFamily.LOGNORMAL3, written.shape());
+        assertEquals(java.util.OptionalDouble.of(theta), written.threshold());
+    }
+
+    @Test
     void anEditMadeWhileTheFileIsWrittenIsKept() {
         openDemo();
         assertTrue(vm.issue());

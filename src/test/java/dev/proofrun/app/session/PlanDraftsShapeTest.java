@@ -83,15 +83,64 @@ class PlanDraftsShapeTest {
                 demo.design(), demo.spacing(), demo.seed(), demo.schedule(), dev.proofrun.plan.PlanState.DRAFT,
                 java.util.Optional.empty(), java.util.Optional.empty(), 1, demo.stages());
         Session session = opened(plan);
+        CharacteristicDraft row4 = session.draft().characteristics().stream().filter(r -> r.id().equals("R4")).findFirst()
+                .orElseThrow();
+        assertEquals("0.05", row4.text(CharacteristicField.THRESHOLD), "the plan's threshold is in the cell");
         StudyPlan again = composed(session, demo);
         assertEquals(ShapeFamily.WEIBULL3, again.characteristic("R4").orElseThrow().shape());
         assertEquals(java.util.OptionalDouble.of(0.05), again.characteristic("R4").orElseThrow().threshold());
-        // typed on a row whose plan had none: refused in words by the plan model
+        // a threshold shape typed with the cell left blank: refused in words by the plan model
         CharacteristicDraft d1 = session.draft().characteristics().get(0);
         d1.cell(CharacteristicField.SHAPE).set("lognormal3");
         IllegalArgumentException e = org.junit.jupiter.api.Assertions.assertThrows(IllegalArgumentException.class,
                 () -> composed(session, demo));
         org.junit.jupiter.api.Assertions.assertTrue(e.getMessage().contains("needs a threshold"), e.getMessage());
+    }
+
+    @Test
+    void aThresholdTypedInTheGridReachesThePlanTheDraftAndTheReopenedPlan() throws Exception {
+        StudyPlan demo = DemoPlan.create();
+        Session session = opened(demo);
+        CharacteristicDraft d1 = session.draft().characteristics().get(0);
+        assertEquals("", d1.text(CharacteristicField.THRESHOLD), "a normal row holds none");
+        // an invented stop 0.5 below the lower limit (the plan model asks only that it lie below the upper one)
+        double theta = demo.characteristics().get(0).limits().lower().getAsDouble() - 0.5;
+        String typed = java.math.BigDecimal.valueOf(theta).toPlainString();
+        d1.cell(CharacteristicField.SHAPE).set("lognormal3");
+        d1.cell(CharacteristicField.THRESHOLD).set(typed);
+        StudyPlan composed = composed(session, demo);
+        String id = d1.id();
+        assertEquals(ShapeFamily.LOGNORMAL3, composed.characteristic(id).orElseThrow().shape());
+        assertEquals(java.util.OptionalDouble.of(theta), composed.characteristic(id).orElseThrow().threshold());
+
+        // the autosaved draft brings the typed threshold back when the plan is opened again
+        session.autosave();
+        Session later = new Session(new AppHome(home, home.resolve("plans")));
+        assertEquals(true, later.open(home.resolve("plans").resolve(DemoPlan.FILE_NAME)), "the newer draft is restored");
+        CharacteristicDraft back = later.draft().characteristics().get(0);
+        assertEquals("lognormal3", back.text(CharacteristicField.SHAPE));
+        assertEquals(typed, back.text(CharacteristicField.THRESHOLD));
+
+        // the plan written with it (as the hand-out writes it) opens with the same threshold in the cell
+        Path issued = Files.createDirectories(home.resolve("issued")).resolve("threshold.json");
+        PlanFiles.write(issued, composed);
+        Session reader = new Session(new AppHome(home.resolve("other"), home.resolve("issued")));
+        reader.open(issued);
+        CharacteristicDraft reopened = reader.draft().characteristics().get(0);
+        assertEquals(theta, Double.parseDouble(reopened.text(CharacteristicField.THRESHOLD)), 0.0, "exact");
+        assertEquals(composed.characteristics(), composed(reader, demo).characteristics());
+    }
+
+    @Test
+    void aThresholdThatIsNotANumberIsRefusedInWordsWhenComposed() throws Exception {
+        StudyPlan demo = DemoPlan.create();
+        Session session = opened(demo);
+        CharacteristicDraft d1 = session.draft().characteristics().get(0);
+        d1.cell(CharacteristicField.SHAPE).set("weibull3");
+        d1.cell(CharacteristicField.THRESHOLD).set("stop");
+        IllegalArgumentException e = org.junit.jupiter.api.Assertions.assertThrows(IllegalArgumentException.class,
+                () -> composed(session, demo));
+        assertEquals(d1.id() + ": the threshold is not a number: 'stop'", e.getMessage());
     }
 
     /** A session with {@code plan} written to the plans folder and opened. */
