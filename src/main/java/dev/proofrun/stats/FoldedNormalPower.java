@@ -1,7 +1,10 @@
 package dev.proofrun.stats;
 
 import java.util.Arrays;
+import java.util.Collections;
+import java.util.LinkedHashMap;
 import java.util.Locale;
+import java.util.Map;
 import java.util.stream.IntStream;
 import org.apache.commons.rng.sampling.distribution.ZigguratSampler;
 import org.apache.commons.rng.simple.RandomSource;
@@ -38,6 +41,15 @@ public final class FoldedNormalPower {
     static final double THETA_HIGH = 6;
 
     private static final NormalDistribution STANDARD = NormalDistribution.of(0, 1);
+    private static final int CACHE_LIMIT = 64;
+    /** The studies' fits per (θ, N), about 130 kB each; the least recently used goes first. */
+    private static final Map<String, double[][]> FITS = Collections.synchronizedMap(
+            new LinkedHashMap<>(CACHE_LIMIT, 0.75f, true) {
+                @Override
+                protected boolean removeEldestEntry(Map.Entry<String, double[][]> eldest) {
+                    return size() > CACHE_LIMIT;
+                }
+            });
     private static final double ROOT_2_OVER_PI = Math.sqrt(2 / Math.PI);
 
     private FoldedNormalPower() {
@@ -95,8 +107,37 @@ public final class FoldedNormalPower {
     static double power(double theta, IndexKind.Side side, double c0, double c1, double confidence, int readings,
             boolean stored) {
         Decision d = new Decision(theta, side, c0, c1, confidence, readings, stored);
-        long pass = IntStream.range(0, STUDIES).parallel().filter(s -> d.demonstrates(study(theta, readings, s))).count();
+        double[][] fits = fits(theta, readings);
+        long pass = Arrays.stream(fits).filter(d::fitted).count();
         return pass / (double) STUDIES;
+    }
+
+    /**
+     * Per simulated study at (θ, N): {mean/σ, low, median, high quantile} of the grader's fit, or null when the fit
+     * fails. They depend on θ and N only (not on c₀, c₁ or the confidence), so they are kept in a small cache: an edit
+     * of the requirement or the expected index refits nothing at a study size met before.
+     */
+    static double[][] fits(double theta, int readings) {
+        String id = Double.doubleToLongBits(theta) + "/" + readings;
+        double[][] f = FITS.get(id);
+        if (f == null) {
+            f = new double[STUDIES][];
+            double[][] out = f;
+            IntStream.range(0, STUDIES).parallel().forEach(s -> out[s] = fit(study(theta, readings, s)));
+            FITS.put(id, f);
+        }
+        return f;
+    }
+
+    /** {mean/σ, low, median, high quantile} of the grader's fit of the readings, or null when it fails. */
+    static double[] fit(double[] x) {
+        ShapeFitter.Outcome o = ShapeFitter.fit(ShapeFamily.FOLDED_NORMAL, x);
+        if (!o.fitted()) {
+            return null;
+        }
+        ShapeFit fit = o.fit();
+        return new double[] {fit.location() / fit.scale(), fit.quantile(PercentileIndex.LOW), fit.quantile(0.5),
+            fit.quantile(PercentileIndex.HIGH)};
     }
 
     /**
@@ -178,20 +219,23 @@ public final class FoldedNormalPower {
 
         /** Whether the grader's lower bound from these readings reaches c₀ (a failed fit does not). */
         boolean demonstrates(double[] x) {
-            ShapeFitter.Outcome o = ShapeFitter.fit(ShapeFamily.FOLDED_NORMAL, x);
-            if (!o.fitted()) {
+            return fitted(fit(x));
+        }
+
+        /** The same from the study's {@link FoldedNormalPower#fit} (null: the fit failed). */
+        boolean fitted(double[] f) {
+            if (f == null) {
                 return false;
             }
-            ShapeFit fit = o.fit();
-            double lo = fit.quantile(PercentileIndex.LOW);
-            double med = fit.quantile(0.5);
-            double hi = fit.quantile(PercentileIndex.HIGH);
+            double lo = f[1];
+            double med = f[2];
+            double hi = f[3];
             double c = upper ? (limit - med) / (hi - med) : (med - limit) / (med - lo);
             if (!Double.isFinite(c)) {
                 return false;
             }
             // the confidence set as FoldedNormalBound.confidenceSet counts it: all values when none holds the observed
-            double observed = fit.location() / fit.scale();
+            double observed = f[0];
             boolean none = true;
             for (int g = 0; g < setLow.length && none; g++) {
                 none = !(observed >= setLow[g] && observed <= setHigh[g]);
