@@ -28,6 +28,13 @@ import org.apache.commons.statistics.distribution.NormalDistribution;
  * study (checked against {@link FoldedNormalBound#bounds} in the tests). {@value #STUDIES} studies give a Monte-Carlo
  * standard error of at most 0.5/√{@value #STUDIES} = 0.0079 on the power.
  *
+ * <p>Speed. Building the grader's table (39,000 refits) at every N the planner visits is what made the table slow; for
+ * N from 25 to 1,000 and the usual c₀ and confidences the thresholds and the confidence sets' ranges are read from
+ * {@link FoldedNormalCutoffs} instead: at a stored N they are the table's own figures, between stored sizes they are
+ * interpolated (a smoothed grader: the power then differs from the one on the grader's table at that N by the
+ * table's Monte-Carlo error, measured in {@code docs/decisions/declared-shape-grading.md}). The studies' fits depend
+ * on θ and N only and are kept per (θ, N) ({@link #fits}).
+ *
  * <p>Skewness: for |Y|, Y normal(θ, 1), with E|Y| = √(2/π)e^{−θ²/2} + θ(1 − 2Φ(−θ)), E Y² = θ² + 1 and
  * E|Y|³ = (θ³ + 3θ)(1 − 2Φ(−θ)) + √(2/π)(θ² + 2)e^{−θ²/2}; it falls from 0.995 at the half-normal (θ = 0) towards 0.
  */
