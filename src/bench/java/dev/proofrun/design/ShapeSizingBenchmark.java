@@ -47,6 +47,8 @@ public class ShapeSizingBenchmark {
 
     static final double FIRST = 1.60;
     static final double STEP = 0.01;
+    /** The skewness added at each shot of {@link #tableAfterShapeEdit}. */
+    static final double SKEW_STEP = 0.001;
 
     /**
      * The planned shape: Weibull and lognormal at skewness 1 (Weibull k 1.564, lognormal σ of ln x 0.314), the folded
@@ -58,6 +60,7 @@ public class ShapeSizingBenchmark {
     private ShapeFamily family;
     private double parameter;
     private int edits;
+    private int shapeEdits;
     private final List<Integer> sizes = IntStream.rangeClosed(1, 10).boxed().toList();
 
     @Setup
@@ -66,6 +69,7 @@ public class ShapeSizingBenchmark {
         parameter = family == ShapeFamily.FOLDED_NORMAL ? FoldedNormalPower.meanRatio(0.7017499382606746)
                 : ShapeSkewness.parameter(family, 1.0);
         edits = 0;
+        shapeEdits = 0;
     }
 
     /** One table at the next expected index. */
@@ -73,6 +77,20 @@ public class ShapeSizingBenchmark {
     public List<ShapeSizing.Row> table() {
         double c1 = FIRST + STEP * edits++;
         return ShapeSizing.design(family, parameter, IndexKind.Side.UPPER, 1.33, c1, 0.95, 0.9, sizes,
+                PracticeFloors.defaults());
+    }
+
+    /**
+     * One table at expected index 1.67 after an edit of the skewness ({@value #SKEW_STEP} more each shot): the
+     * simulated studies of every study size are new (the folded normal keeps its studies' fits per mean/σ and N, and
+     * the lognormal and Weibull their pivot draws per N only, so for those two this is {@link #table} again).
+     */
+    @Benchmark
+    public List<ShapeSizing.Row> tableAfterShapeEdit() {
+        double skewness = (family == ShapeFamily.FOLDED_NORMAL ? 0.7017499382606746 : 1.0) + SKEW_STEP * shapeEdits++;
+        double p = family == ShapeFamily.FOLDED_NORMAL ? FoldedNormalPower.meanRatio(skewness)
+                : ShapeSkewness.parameter(family, skewness);
+        return ShapeSizing.design(family, p, IndexKind.Side.UPPER, 1.33, 1.67, 0.95, 0.9, sizes,
                 PracticeFloors.defaults());
     }
 }

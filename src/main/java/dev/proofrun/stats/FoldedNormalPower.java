@@ -1,7 +1,10 @@
 package dev.proofrun.stats;
 
 import java.util.Arrays;
+import java.util.Collections;
+import java.util.LinkedHashMap;
 import java.util.Locale;
+import java.util.Map;
 import java.util.stream.IntStream;
 import org.apache.commons.rng.sampling.distribution.ZigguratSampler;
 import org.apache.commons.rng.simple.RandomSource;
@@ -25,6 +28,13 @@ import org.apache.commons.statistics.distribution.NormalDistribution;
  * study (checked against {@link FoldedNormalBound#bounds} in the tests). {@value #STUDIES} studies give a Monte-Carlo
  * standard error of at most 0.5/√{@value #STUDIES} = 0.0079 on the power.
  *
+ * <p>Speed. Building the grader's table (39,000 refits) at every N the planner visits is what made the table slow; for
+ * N from 25 to 1,000 and the usual c₀ and confidences the thresholds and the confidence sets' ranges are read from
+ * {@link FoldedNormalCutoffs} instead: at a stored N they are the table's own figures, between stored sizes they are
+ * interpolated (a smoothed grader: the power then differs from the one on the grader's table at that N by the
+ * table's Monte-Carlo error, measured in {@code docs/decisions/declared-shape-grading.md}). The studies' fits depend
+ * on θ and N only and are kept per (θ, N) ({@link #fits}).
+ *
  * <p>Skewness: for |Y|, Y normal(θ, 1), with E|Y| = √(2/π)e^{−θ²/2} + θ(1 − 2Φ(−θ)), E Y² = θ² + 1 and
  * E|Y|³ = (θ³ + 3θ)(1 − 2Φ(−θ)) + √(2/π)(θ² + 2)e^{−θ²/2}; it falls from 0.995 at the half-normal (θ = 0) towards 0.
  */
@@ -38,6 +48,15 @@ public final class FoldedNormalPower {
     static final double THETA_HIGH = 6;
 
     private static final NormalDistribution STANDARD = NormalDistribution.of(0, 1);
+    private static final int CACHE_LIMIT = 64;
+    /** The studies' fits per (θ, N), about 130 kB each; the least recently used goes first. */
+    private static final Map<String, double[][]> FITS = Collections.synchronizedMap(
+            new LinkedHashMap<>(CACHE_LIMIT, 0.75f, true) {
+                @Override
+                protected boolean removeEldestEntry(Map.Entry<String, double[][]> eldest) {
+                    return size() > CACHE_LIMIT;
+                }
+            });
     private static final double ROOT_2_OVER_PI = Math.sqrt(2 / Math.PI);
 
     private FoldedNormalPower() {
@@ -88,9 +107,44 @@ public final class FoldedNormalPower {
      * @throws IllegalArgumentException for a two-sided side, or a lower limit that c₁ would put at or below zero
      */
     public static double power(double theta, IndexKind.Side side, double c0, double c1, double confidence, int readings) {
-        Decision d = new Decision(theta, side, c0, c1, confidence, readings);
-        long pass = IntStream.range(0, STUDIES).parallel().filter(s -> d.demonstrates(study(theta, readings, s))).count();
+        return power(theta, side, c0, c1, confidence, readings, true);
+    }
+
+    /** @param stored whether the stored thresholds may be used (false: always the grader's table at N) */
+    static double power(double theta, IndexKind.Side side, double c0, double c1, double confidence, int readings,
+            boolean stored) {
+        Decision d = new Decision(theta, side, c0, c1, confidence, readings, stored);
+        double[][] fits = fits(theta, readings);
+        long pass = Arrays.stream(fits).filter(d::fitted).count();
         return pass / (double) STUDIES;
+    }
+
+    /**
+     * Per simulated study at (θ, N): {mean/σ, low, median, high quantile} of the grader's fit, or null when the fit
+     * fails. They depend on θ and N only (not on c₀, c₁ or the confidence), so they are kept in a small cache: an edit
+     * of the requirement or the expected index refits nothing at a study size met before.
+     */
+    static double[][] fits(double theta, int readings) {
+        String id = Double.doubleToLongBits(theta) + "/" + readings;
+        double[][] f = FITS.get(id);
+        if (f == null) {
+            f = new double[STUDIES][];
+            double[][] out = f;
+            IntStream.range(0, STUDIES).parallel().forEach(s -> out[s] = fit(study(theta, readings, s)));
+            FITS.put(id, f);
+        }
+        return f;
+    }
+
+    /** {mean/σ, low, median, high quantile} of the grader's fit of the readings, or null when it fails. */
+    static double[] fit(double[] x) {
+        ShapeFitter.Outcome o = ShapeFitter.fit(ShapeFamily.FOLDED_NORMAL, x);
+        if (!o.fitted()) {
+            return null;
+        }
+        ShapeFit fit = o.fit();
+        return new double[] {fit.location() / fit.scale(), fit.quantile(PercentileIndex.LOW), fit.quantile(0.5),
+            fit.quantile(PercentileIndex.HIGH)};
     }
 
     /**
@@ -107,18 +161,30 @@ public final class FoldedNormalPower {
         return x;
     }
 
-    /** The grader's decision at N for one limit placed at true index c₁, with its thresholds per value of mean/σ. */
+    /**
+     * The grader's decision at N for one limit placed at true index c₁: per value of mean/σ g, the range of the
+     * study's mean/σ that puts g in its confidence set, and the threshold c*(g) that the study's index must reach.
+     * From the stored table ({@link FoldedNormalCutoffs}) when it holds (N, side, c₀, confidence), else from the
+     * grader's own table at N.
+     */
     static final class Decision {
         private final boolean upper;
         private final double c0;
         private final double limit;
-        private final double gamma;
         private final double alpha;
+        /** The grader's table at N, or null when the thresholds are stored ones. */
         private final FoldedNormalBound.Table table;
+        private final double[] setLow;
+        private final double[] setHigh;
         private final double[] below;
         private final double[] atOrAbove;
 
         Decision(double theta, IndexKind.Side side, double c0, double c1, double confidence, int readings) {
+            this(theta, side, c0, c1, confidence, readings, true);
+        }
+
+        /** @param stored whether the stored thresholds may be used (false: always the grader's table) */
+        Decision(double theta, IndexKind.Side side, double c0, double c1, double confidence, int readings, boolean stored) {
             if (side != IndexKind.Side.UPPER && side != IndexKind.Side.LOWER) {
                 throw new IllegalArgumentException("folded-normal power is for one limit: " + side);
             }
@@ -133,73 +199,121 @@ public final class FoldedNormalPower {
                         + " lower limit at or below zero, where the folded-normal model has no readings; such a limit cannot"
                         + " be missed", c1));
             }
-            this.gamma = FoldedNormalBound.GAMMA_SHARE * (1 - confidence);
+            double gamma = FoldedNormalBound.GAMMA_SHARE * (1 - confidence);
             this.alpha = 1 - confidence - gamma;
-            this.table = FoldedNormalBound.table(readings, PivotalBound.DEFAULT_SEED);
-            int grid = FoldedNormalBound.THETAS.length;
-            below = new double[grid];
-            atOrAbove = new double[grid];
-            for (int g = 0; g < grid; g++) {
-                bracket(g);
+            FoldedNormalCutoffs.Cut cut = stored ? FoldedNormalCutoffs.at(readings, upper, c0, confidence).orElse(null) : null;
+            if (cut != null) {
+                table = null;
+                setLow = cut.setLow();
+                setHigh = cut.setHigh();
+                below = cut.cutoff();
+                atOrAbove = cut.cutoff();
+                return;
             }
+            table = FoldedNormalBound.table(readings, PivotalBound.DEFAULT_SEED);
+            double[][] set = setRanges(table, gamma);
+            setLow = set[0];
+            setHigh = set[1];
+            double[][] b = brackets(table, upper, c0, alpha);
+            below = b[0];
+            atOrAbove = b[1];
+        }
+
+        /** Whether the thresholds came from the stored table. */
+        boolean stored() {
+            return table == null;
         }
 
         /** Whether the grader's lower bound from these readings reaches c₀ (a failed fit does not). */
         boolean demonstrates(double[] x) {
-            ShapeFitter.Outcome o = ShapeFitter.fit(ShapeFamily.FOLDED_NORMAL, x);
-            if (!o.fitted()) {
+            return fitted(fit(x));
+        }
+
+        /** The same from the study's {@link FoldedNormalPower#fit} (null: the fit failed). */
+        boolean fitted(double[] f) {
+            if (f == null) {
                 return false;
             }
-            ShapeFit fit = o.fit();
-            double lo = fit.quantile(PercentileIndex.LOW);
-            double med = fit.quantile(0.5);
-            double hi = fit.quantile(PercentileIndex.HIGH);
+            double lo = f[1];
+            double med = f[2];
+            double hi = f[3];
             double c = upper ? (limit - med) / (hi - med) : (med - limit) / (med - lo);
             if (!Double.isFinite(c)) {
                 return false;
             }
-            boolean[] set = FoldedNormalBound.confidenceSet(table, fit.location() / fit.scale(), gamma);
-            for (int g = 0; g < set.length; g++) {
-                if (set[g] && !(c >= atOrAbove[g] || (c > below[g] && lowerAt(g, c) >= c0))) {
+            // the confidence set as FoldedNormalBound.confidenceSet counts it: all values when none holds the observed
+            double observed = f[0];
+            boolean none = true;
+            for (int g = 0; g < setLow.length && none; g++) {
+                none = !(observed >= setLow[g] && observed <= setHigh[g]);
+            }
+            for (int g = 0; g < setLow.length; g++) {
+                boolean in = none || (observed >= setLow[g] && observed <= setHigh[g]);
+                if (in && !(c >= atOrAbove[g] || (table != null && c > below[g] && lowerAt(table, upper, alpha, g, c) >= c0))) {
                     return false;
                 }
             }
             return true;
         }
+    }
 
-        /** c_L(g; c) as {@link FoldedNormalBound} computes it for one value of mean/σ. */
-        double lowerAt(int g, double c) {
-            double[] v = new double[table.low()[g].length];
-            for (int j = 0; j < v.length; j++) {
-                double med = table.median()[g][j];
-                v[j] = upper ? med + c * (table.high()[g][j] - med) : med - c * (med - table.low()[g][j]);
-            }
-            Arrays.sort(v);
-            double[] q = table.truth()[g];
-            return upper ? (PivotalBound.orderStatistic(v, alpha) - q[1]) / (q[2] - q[1])
-                    : (q[1] - PivotalBound.orderStatistic(v, 1 - alpha)) / (q[1] - q[0]);
+    /**
+     * Per value of mean/σ g, {lowest, highest} observed mean/σ that {@link FoldedNormalBound#confidenceSet} counts in
+     * g's set: at least γ/2 of the sorted refits at or below it is the refit of rank ⌈γ/2·M⌉ at or below it, and the
+     * same from above.
+     */
+    static double[][] setRanges(FoldedNormalBound.Table table, double gamma) {
+        int grid = FoldedNormalBound.THETAS.length;
+        double[][] range = new double[2][grid];
+        for (int g = 0; g < grid; g++) {
+            double[] r = table.ratio()[g];
+            int k = (int) Math.ceil(gamma / 2 * r.length);
+            range[0][g] = k <= 0 ? Double.NEGATIVE_INFINITY : r[k - 1];
+            range[1][g] = k <= 0 ? Double.POSITIVE_INFINITY : r[r.length - k];
         }
+        return range;
+    }
 
-        /** below[g] &lt; c*(g) ≤ atOrAbove[g], within 1e-12 relative, by bisection on the rising c_L(g; c). */
-        private void bracket(int g) {
+    /** c_L(g; c) as {@link FoldedNormalBound} computes it for one value of mean/σ at level α. */
+    static double lowerAt(FoldedNormalBound.Table table, boolean upper, double alpha, int g, double c) {
+        double[] v = new double[table.low()[g].length];
+        for (int j = 0; j < v.length; j++) {
+            double med = table.median()[g][j];
+            v[j] = upper ? med + c * (table.high()[g][j] - med) : med - c * (med - table.low()[g][j]);
+        }
+        Arrays.sort(v);
+        double[] q = table.truth()[g];
+        return upper ? (PivotalBound.orderStatistic(v, alpha) - q[1]) / (q[2] - q[1])
+                : (q[1] - PivotalBound.orderStatistic(v, 1 - alpha)) / (q[1] - q[0]);
+    }
+
+    /**
+     * {below[], atOrAbove[]}: per value of mean/σ g, below[g] &lt; c*(g) ≤ atOrAbove[g] within 1e-12 relative, by
+     * bisection on the rising c_L(g; c); atOrAbove[g] is infinite when no index up to 10⁶ reaches c₀.
+     */
+    static double[][] brackets(FoldedNormalBound.Table table, boolean upper, double c0, double alpha) {
+        int grid = FoldedNormalBound.THETAS.length;
+        double[][] b = new double[2][grid];
+        for (int g = 0; g < grid; g++) {
             double lo = 0;
             double hi = 1;
-            while (lowerAt(g, lo) >= c0 && lo > -1e6) {
+            while (lowerAt(table, upper, alpha, g, lo) >= c0 && lo > -1e6) {
                 lo = 2 * lo - 1;
             }
-            while (lowerAt(g, hi) < c0 && hi < 1e6) {
+            while (lowerAt(table, upper, alpha, g, hi) < c0 && hi < 1e6) {
                 hi = 2 * hi;
             }
             for (int i = 0; i < 200 && hi - lo > 1e-12 * Math.max(1, Math.abs(hi)); i++) {
                 double mid = 0.5 * (lo + hi);
-                if (lowerAt(g, mid) >= c0) {
+                if (lowerAt(table, upper, alpha, g, mid) >= c0) {
                     hi = mid;
                 } else {
                     lo = mid;
                 }
             }
-            below[g] = lo;
-            atOrAbove[g] = lowerAt(g, hi) >= c0 ? hi : Double.POSITIVE_INFINITY;
+            b[0][g] = lo;
+            b[1][g] = lowerAt(table, upper, alpha, g, hi) >= c0 ? hi : Double.POSITIVE_INFINITY;
         }
+        return b;
     }
 }

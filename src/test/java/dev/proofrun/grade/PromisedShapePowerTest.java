@@ -75,6 +75,25 @@ class PromisedShapePowerTest {
         assertEquals(row.power(), realised, 0.03, c.label() + " " + v);
     }
 
+    /**
+     * A planner's row between two stored study sizes ({@code FoldedNormalCutoffs}: 300 and 400 readings, or 400 and
+     * 500), where the promise rests on thresholds interpolated in N, not on the grader's own table at that N: mean/σ 1,
+     * c₁ 1.67, n = 7 (about 58 × 7), 1,000 graded studies (seeds 80,000 + i, SE about 0.01), within 0.03.
+     */
+    @Test
+    @Tag("long")
+    void foldedNormalRowBetweenStoredSizes() {
+        ShapeSizing.Row row = ShapeSizing.design(ShapeFamily.FOLDED_NORMAL, 1, IndexKind.Side.UPPER, 1.33, 1.67, 0.95, 0.9,
+                java.util.List.of(7), dev.proofrun.design.PracticeFloors.defaults()).get(0);
+        assertEquals(false, java.util.Set.of(300, 400, 500).contains(row.readings()), "a size between stored ones");
+        ShapeStudies.Case c = new ShapeStudies.Case(ShapeFamily.FOLDED_NORMAL, 1, 1.67, 7, row.subgroups(), false);
+        Map<Verdict, Integer> v = ShapeStudies.run(c, 1.33, 1000, 80_000L, dir);
+        double realised = v.getOrDefault(Verdict.DEMONSTRATED, 0) / 1000.0;
+        System.out.printf(java.util.Locale.ROOT, "%s: promised %.4f (bound alone %.4f), realised %.4f %s%n", c.label(),
+                row.power(), row.boundPower(), realised, v);
+        assertEquals(row.power(), realised, 0.03, c.label() + " " + v);
+    }
+
     @Test
     @Tag("long")
     void weibullShapes() {

@@ -41,6 +41,8 @@ class FoldedNormalPowerTest {
 
     private static void check(double theta, IndexKind.Side side, double c1, int readings) {
         FoldedNormalPower.Decision d = new FoldedNormalPower.Decision(theta, side, 1.33, c1, 0.95, readings);
+        // the decision from the stored thresholds (FoldedNormalCutoffs) is the one checked here
+        assertTrue(d.stored(), "N = " + readings + " is stored");
         double q50 = FoldedNormal.quantile(theta, 1, 0.5);
         SpecLimits limits = side == IndexKind.Side.UPPER
                 ? SpecLimits.upperOnly(q50 + c1 * (FoldedNormal.quantile(theta, 1, PercentileIndex.HIGH) - q50))
