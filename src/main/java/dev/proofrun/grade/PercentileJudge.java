@@ -2,6 +2,7 @@ package dev.proofrun.grade;
 
 import dev.proofrun.design.Requirement;
 import dev.proofrun.stats.BoundEngine;
+import dev.proofrun.stats.FloorBound;
 import dev.proofrun.stats.IndexKind;
 import dev.proofrun.stats.PercentileIndex;
 import dev.proofrun.stats.FoldedNormalBound;
@@ -64,7 +65,10 @@ final class PercentileJudge {
         }
         long seed = PivotalBound.DEFAULT_SEED;
         boolean pivotal = family.isLocationScale();
-        BoundEngine bound = pivotal ? PivotalBound.Estimate.of(fit, kind, limits, readings, seed)
+        FloorBound.ThresholdSet floorSet = shape.thresholds();
+        BoundEngine bound = floorSet != null
+                ? new FloorBound.Estimate(floorSet, kind, limits, seed, PercentileIndex.of(kind, limits, fit))
+                : pivotal ? PivotalBound.Estimate.of(fit, kind, limits, readings, seed)
                 : FoldedNormalBound.Estimate.of(fit, kind, limits, readings, seed);
         double estimate = bound.estimate();
         if (Double.isNaN(estimate)) {
@@ -84,13 +88,37 @@ final class PercentileJudge {
                 : GradeMessage.REASON_PERCENTILE_INVERTED.format(kind.symbol(), family.token(), q0, q50, q1, ppm,
                         FoldedNormalBound.GRID_SIZE, FoldedNormalBound.DRAWS, seed);
         reasons.add(new Reason(Step.CAPABILITY, false, method));
-        if (declared.hasThreshold()) {
-            reasons.add(new Reason(Step.CAPABILITY, false, GradeMessage.REASON_THRESHOLD_CAUTION.format(declared.token(),
-                    String.format(java.util.Locale.ROOT, "%s", fit.threshold()))));
+        double lower;
+        double upper;
+        if (floorSet != null) {
+            FloorBound.Estimate floorBound = (FloorBound.Estimate) bound;
+            FloorBound.ThresholdSet used = floorBound.setAt(confidence);
+            double[] at = FloorBound.bounds(used, kind, limits, confidence, seed);
+            double gamma = used.gamma();
+            if (!used.empty()) {
+                reasons.add(new Reason(Step.CAPABILITY, false, GradeMessage.REASON_FLOOR_BOUND.format(
+                        number(used.thetas()[0]), number(used.highest()), number(at[2]),
+                        100 * (confidence + gamma), 100 * gamma, 100 * confidence)));
+            }
+            reasons.add(new Reason(Step.CAPABILITY, false, GradeMessage.REASON_FLOOR_CAUTION.format(declared.token(),
+                    String.format(java.util.Locale.ROOT, "%s", floorSet.floor()))));
+            lower = at[0];
+            upper = at[1];
+        } else {
+            if (declared.hasThreshold()) {
+                reasons.add(new Reason(Step.CAPABILITY, false, GradeMessage.REASON_THRESHOLD_CAUTION.format(declared.token(),
+                        String.format(java.util.Locale.ROOT, "%s", fit.threshold()))));
+            }
+            lower = bound.lower(confidence);
+            upper = estimate < req.minimum() ? bound.upper(confidence) : Double.NaN;
         }
-        double upper = estimate < req.minimum() ? bound.upper(confidence) * f : Double.NaN;
-        return new IndexEvidence(kind, req.minimum(), confidence, estimate * f, bound.lower(confidence) * f, upper,
+        upper = estimate < req.minimum() ? upper * f : Double.NaN;
+        return new IndexEvidence(kind, req.minimum(), confidence, estimate * f, lower * f, upper,
                 ShapeModel.of(declared), pivotal ? IndexMethod.PERCENTILE : IndexMethod.PERCENTILE_INVERTED, ppm, seed);
+    }
+
+    private static String number(double v) {
+        return String.format(java.util.Locale.ROOT, "%.6g", v);
     }
 
     /** "lognormal", or "lognormal3 (threshold 9.95)" for a threshold shape. */

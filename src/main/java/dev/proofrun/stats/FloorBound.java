@@ -67,7 +67,9 @@ public final class FloorBound {
     /**
      * The thresholds a study leaves possible.
      *
+     * @param family   lognormal3 or weibull3
      * @param floor    the plan's floor
+     * @param readings the readings the set was found from (not copied; not to be changed)
      * @param thetas   the θ kept, in rising order (the grid's and the refined edges), empty when none fits
      * @param skews    g₁ of ln(x − θ) at each kept θ
      * @param critical the γ-quantile of g₁ under the model: a θ whose g₁ is below it is left out
@@ -75,7 +77,7 @@ public final class FloorBound {
      * @param gamma    γ
      * @param tried    how many thresholds were tried (grid and bisection)
      */
-    public record ThresholdSet(double floor, double[] thetas, double[] skews, double critical, double median, double gamma,
+    public record ThresholdSet(ShapeFamily family, double floor, double[] readings, double[] thetas, double[] skews, double critical, double median, double gamma,
             int tried) {
 
         /** True when no threshold at or above the floor fits: the planned shape does not fit the readings. */
@@ -226,7 +228,7 @@ public final class FloorBound {
             thetas[i] = kept.get(i)[0];
             skews[i] = kept.get(i)[1];
         }
-        return new ThresholdSet(floor, thetas, skews, critical, median, gamma, tried);
+        return new ThresholdSet(family, floor, x, thetas, skews, critical, median, gamma, tried);
     }
 
     /** {θ, g₁}: the kept end of a bisection in ln d between a kept distance and a left-out one. */
@@ -247,8 +249,8 @@ public final class FloorBound {
         return new double[] {min - Math.exp(in), g};
     }
 
-    /** g₁ of ln(x − θ). */
-    static double skewAt(double[] x, double theta) {
+    /** g₁ of ln(x − θ); the readings must lie above θ. */
+    public static double skewAt(double[] x, double theta) {
         double[] y = new double[x.length];
         for (int i = 0; i < x.length; i++) {
             y[i] = Math.log(x[i] - theta);
@@ -260,11 +262,12 @@ public final class FloorBound {
      * The bounds over a set of thresholds: {lower, upper, θ that gave the lower, θ that gave the upper}; the lower
      * −∞ and the upper +∞ when no θ in the set has a fit (an empty set included).
      *
-     * @param family     lognormal3 or weibull3
      * @param confidence 1 − α; each pivotal bound is taken at 1 − (α − γ)
+     * @throws IllegalArgumentException if the confidence is not computable or α ≤ γ
      */
-    public static double[] bounds(ShapeFamily family, ThresholdSet set, double[] x, IndexKind kind, SpecLimits limits,
-            double confidence, long seed) {
+    public static double[] bounds(ThresholdSet set, IndexKind kind, SpecLimits limits, double confidence, long seed) {
+        ShapeFamily family = set.family();
+        double[] x = set.readings();
         Confidence.requireComputable(confidence);
         double inner = 1 - ((1 - confidence) - set.gamma());
         if (!(inner < 1)) {
@@ -298,15 +301,14 @@ public final class FloorBound {
 
     /**
      * The floor bounds of one study as a {@link BoundEngine}: the estimate is the index of the fit at the set's
-     * {@link ThresholdSet#central() central} θ; each confidence asked for takes its own set (γ = {@value #GAMMA_SHARE}·α).
+     * {@link ThresholdSet#central() central} θ; a confidence whose γ = {@value #GAMMA_SHARE}·α differs from the set's
+     * (a staged study's look) takes its own set.
      *
-     * @param family   lognormal3 or weibull3
-     * @param floor    the plan's floor
-     * @param readings the readings
-     * @param estimate the index at the central θ of the set at the requirement's confidence
+     * @param set      the thresholds of the study at the requirement's confidence
+     * @param estimate the index at the set's central θ
      */
-    public record Estimate(ShapeFamily family, double floor, double[] readings, IndexKind kind, SpecLimits limits, long seed,
-            double estimate) implements BoundEngine {
+    public record Estimate(ThresholdSet set, IndexKind kind, SpecLimits limits, long seed, double estimate)
+            implements BoundEngine {
 
         @Override
         public double lower(double confidence) {
@@ -318,10 +320,15 @@ public final class FloorBound {
             return at(confidence)[1];
         }
 
+        /** The set of thresholds at {@code confidence}: this one, or one found afresh with that confidence's γ. */
+        public ThresholdSet setAt(double confidence) {
+            double gamma = GAMMA_SHARE * (1 - confidence);
+            return gamma == set.gamma() ? set : thresholds(set.family(), set.floor(), set.readings(), gamma);
+        }
+
         /** {lower, upper, θ of the lower, θ of the upper} at {@code confidence}. */
         public double[] at(double confidence) {
-            ThresholdSet set = thresholds(family, floor, readings, GAMMA_SHARE * (1 - confidence));
-            return bounds(family, set, readings, kind, limits, confidence, seed);
+            return bounds(setAt(confidence), kind, limits, confidence, seed);
         }
     }
 }

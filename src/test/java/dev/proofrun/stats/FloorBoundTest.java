@@ -93,7 +93,7 @@ class FloorBoundTest {
             double central = set.central();
             assertTrue(central >= 9.90 && central <= set.highest());
             SpecLimits usl = SpecLimits.upperOnly(10.3);
-            double[] b = FloorBound.bounds(ShapeFamily.LOGNORMAL3, set, x, IndexKind.PPU, usl, 0.95, PivotalBound.DEFAULT_SEED);
+            double[] b = FloorBound.bounds(set, IndexKind.PPU, usl, 0.95, PivotalBound.DEFAULT_SEED);
             assertTrue(b[0] < b[1]);
             // the bound at the set's edge is the smallest one (the Javadoc's claim; a grid point below it could be
             // lower only if the bound did not fall as θ rises): here it is, in every study
