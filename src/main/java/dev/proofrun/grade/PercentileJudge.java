@@ -84,12 +84,13 @@ final class PercentileJudge {
         double q50 = fit.quantile(0.5);
         double q1 = fit.quantile(PercentileIndex.HIGH);
         String method = pivotal
-                ? GradeMessage.REASON_PERCENTILE_METHOD.format(kind.symbol(), modelWords(declared, fit), q0, q50, q1, ppm, PivotalBound.DRAWS, seed)
+                ? GradeMessage.REASON_PERCENTILE_METHOD.format(kind.symbol(), modelWords(declared, fit, floorSet), q0, q50, q1, ppm, PivotalBound.DRAWS, seed)
                 : GradeMessage.REASON_PERCENTILE_INVERTED.format(kind.symbol(), family.token(), q0, q50, q1, ppm,
                         FoldedNormalBound.GRID_SIZE, FoldedNormalBound.DRAWS, seed);
         reasons.add(new Reason(Step.CAPABILITY, false, method));
         double lower;
         double upper;
+        double limitedAt = Double.NaN;
         if (floorSet != null) {
             FloorBound.Estimate floorBound = (FloorBound.Estimate) bound;
             FloorBound.ThresholdSet used = floorBound.setAt(confidence);
@@ -104,6 +105,7 @@ final class PercentileJudge {
                     String.format(java.util.Locale.ROOT, "%s", floorSet.floor()))));
             lower = at[0];
             upper = at[1];
+            limitedAt = at[2];
         } else {
             if (declared.hasThreshold()) {
                 reasons.add(new Reason(Step.CAPABILITY, false, GradeMessage.REASON_THRESHOLD_CAUTION.format(declared.token(),
@@ -114,15 +116,22 @@ final class PercentileJudge {
         }
         upper = estimate < req.minimum() ? upper * f : Double.NaN;
         return new IndexEvidence(kind, req.minimum(), confidence, estimate * f, lower * f, upper,
-                ShapeModel.of(declared), pivotal ? IndexMethod.PERCENTILE : IndexMethod.PERCENTILE_INVERTED, ppm, seed);
+                ShapeModel.of(declared), pivotal ? IndexMethod.PERCENTILE : IndexMethod.PERCENTILE_INVERTED, ppm, seed, limitedAt);
     }
 
     private static String number(double v) {
         return String.format(java.util.Locale.ROOT, "%.6g", v);
     }
 
-    /** "lognormal", or "lognormal3 (threshold 9.95)" for a threshold shape. */
-    static String modelWords(ShapeFamily declared, ShapeFit fit) {
+    /**
+     * "lognormal", "lognormal3 (threshold 9.95)" for a declared threshold, or "lognormal3 (floor 9.95; fitted at the
+     * threshold 9.9512)" for a floor.
+     */
+    static String modelWords(ShapeFamily declared, ShapeFit fit, FloorBound.ThresholdSet floorSet) {
+        if (floorSet != null) {
+            return String.format(java.util.Locale.ROOT, "%s (floor %s; fitted at the threshold %s)", declared.token(),
+                    floorSet.floor(), number(fit.threshold()));
+        }
         return declared.hasThreshold()
                 ? String.format(java.util.Locale.ROOT, "%s (threshold %s)", declared.token(), fit.threshold()) : declared.token();
     }
