@@ -150,6 +150,15 @@ class FloorCommandTest {
                 .mapToDouble(Double::parseDouble).min().getAsDouble();
         assertTrue(from <= at && at <= to && to < smallest, smallest + " " + j);
         assertTrue(j.get("lower").asDouble() < j.get("estimate").asDouble(), j.toString());
+
+        Path pdf = dir.resolve("report.pdf");
+        assertEquals(0, cli.run("grade", plan.toString(), data.toString(), "--report", pdf.toString()), cli.err());
+        try (org.apache.pdfbox.pdmodel.PDDocument doc = org.apache.pdfbox.Loader.loadPDF(Files.readAllBytes(pdf))) {
+            String text = new org.apache.pdfbox.text.PDFTextStripper().getText(doc).replaceAll("\\s+", " ");
+            assertTrue(text.contains("lognormal3 (floor 9.95; fitted at the threshold"), text);
+            assertTrue(text.contains("the lower bound is the least over the thresholds"), text);
+            assertTrue(text.contains("as a floor of the process's threshold"), text);
+        }
     }
 
     @Test

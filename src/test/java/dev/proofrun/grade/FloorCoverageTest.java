@@ -75,4 +75,38 @@ class FloorCoverageTest {
             }
         }
     }
+
+    @Test
+    void readingsNoThresholdAboveTheFloorFitsAreNotValidAndTheReasonSaysWhy() {
+        // left-skewed readings 10.2 − 0.05·exp(0.5·Z) (invented): ln(x − θ) is left-skewed at the floor and more so above
+        org.apache.commons.rng.UniformRandomProvider rng = org.apache.commons.rng.simple.RandomSource.XO_RO_SHI_RO_128_PP.create(11L);
+        var z = org.apache.commons.rng.sampling.distribution.ZigguratSampler.NormalizedGaussian.of(rng);
+        List<double[]> subgroups = new java.util.ArrayList<>();
+        List<String> slots = new java.util.ArrayList<>();
+        for (int g = 0; g < 25; g++) {
+            double[] x = new double[5];
+            for (int j = 0; j < 5; j++) {
+                x[j] = 10.2 - 0.05 * Math.exp(0.5 * z.sample());
+            }
+            subgroups.add(x);
+            slots.add("S" + (g + 1));
+        }
+        List<Reason> reasons = new java.util.ArrayList<>();
+        Shape s = ShapeJudge.judgeFloor(subgroups, slots, 0, ShapeFamily.LOGNORMAL3, 9.95, 0.01,
+                dev.proofrun.stats.SpecLimits.upperOnly(10.3), reasons);
+        assertTrue(!s.modelFits() && s.thresholds().empty(), reasons.toString());
+        assertTrue(reasons.stream().anyMatch(r -> r.text().contains("no threshold from the floor 9.95 up to the smallest reading")
+                && r.text().contains("Re-plan the characteristic")), reasons.toString());
+    }
+
+    @Test
+    void theExactThresholdsCautionPointsToTheFloor() {
+        ShapeStudies.Case c = ShapeStudies.Case.threshold(ShapeFamily.LOGNORMAL3, 0.5, THETA, C0, 5, 25);
+        GradingPlan plan = c.plan(C0);
+        Path f = dir.resolve("one.csv");
+        ShapeStudies.write(plan, c, 5_000L, f);
+        CharacteristicGrade g = Grader.grade(plan, f, "one.csv").characteristics().get(0);
+        assertTrue(g.reasons().stream().anyMatch(r -> r.text().contains("declare the stop as a floor instead (plan new --floor)")),
+                g.reasons().toString());
+    }
 }
