@@ -77,6 +77,13 @@ class FloorCoverageTest {
     }
 
     @Test
+    void aFloorAboveTheRealStartErrsOnTheSafeSide() {
+        // the floor 0.005 and 0.01 above the real start 9.95 (scale 0.05): every threshold kept is above the real one,
+        // which reads the readings as more skewed and lowers the bound; readings at or below the floor are findings
+        System.out.print(atMostAlpha(cases(C0, new double[] {9.955, 9.96}), 100, 2_000L));
+    }
+
+    @Test
     void readingsNoThresholdAboveTheFloorFitsAreNotValidAndTheReasonSaysWhy() {
         // left-skewed readings 10.2 − 0.05·exp(0.5·Z) (invented): ln(x − θ) is left-skewed at the floor and more so above
         org.apache.commons.rng.UniformRandomProvider rng = org.apache.commons.rng.simple.RandomSource.XO_RO_SHI_RO_128_PP.create(11L);
