@@ -169,8 +169,13 @@ final class ShapeJudge {
             reasons.add(new Reason(Step.SHAPE, true, noFit(atFloor, subgroups, slots, family, floor, true, x.length)));
             return new Shape(Double.NaN, Double.NaN, false, model, List.of(), false, family, null, 1);
         }
-        FloorBound.ThresholdSet set = FloorBound.thresholds(family, floor, x, gamma);
         String f = String.format(Locale.ROOT, "%s", floor);
+        if (x.length > FloorBound.MAX_READINGS) {
+            reasons.add(new Reason(Step.SHAPE, true, GradeMessage.REASON_FLOOR_TOO_MANY.format(family.token(), f, x.length,
+                    FloorBound.MAX_READINGS)));
+            return new Shape(Double.NaN, Double.NaN, false, model, List.of(), false, family, atFloor.fit(), 1);
+        }
+        FloorBound.ThresholdSet set = FloorBound.thresholds(family, floor, x, gamma);
         if (set.empty()) {
             double min = Arrays.stream(x).min().getAsDouble();
             reasons.add(new Reason(Step.SHAPE, true, GradeMessage.REASON_FLOOR_NO_THRESHOLD.format(f,

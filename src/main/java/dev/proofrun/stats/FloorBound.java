@@ -49,6 +49,11 @@ public final class FloorBound {
     static final double GRID_RATIO = 1.25;
     /** The smallest grid distance x₍₁₎ − θ as a share of the readings' range. */
     static final double GRID_DEPTH = 1e-6;
+    /**
+     * The most readings graded with a floor: the null of g₁ is simulated at the study's N ({@value #SKEW_DRAWS} samples
+     * of N), which costs about a second at this N and grows with it.
+     */
+    public static final int MAX_READINGS = 5_000;
     /** Bisection steps in ln d at an edge of the set. */
     static final int EDGE_STEPS = 20;
 
@@ -124,7 +129,8 @@ public final class FloorBound {
     /**
      * The p-quantile of g₁ of N readings under the model (normal for lognormal3, smallest-extreme-value for weibull3).
      *
-     * @throws IllegalArgumentException if the family is not a threshold shape, N &lt; 3 or p is not in (0, 1)
+     * @throws IllegalArgumentException if the family is not a threshold shape, N &lt; 3 or N &gt; {@value #MAX_READINGS},
+     *                                  or p is not in (0, 1)
      */
     public static double nullQuantile(ShapeFamily family, int readings, double p) {
         if (!(p > 0 && p < 1)) {
@@ -146,8 +152,9 @@ public final class FloorBound {
         if (!family.hasThreshold()) {
             throw new IllegalArgumentException("a floor is only taken by the shapes lognormal3 and weibull3, not " + family.token());
         }
-        if (readings < ShapeFitter.MIN_READINGS) {
-            throw new IllegalArgumentException(String.format(Locale.ROOT, "at least 3 readings are needed: %d", readings));
+        if (readings < ShapeFitter.MIN_READINGS || readings > MAX_READINGS) {
+            throw new IllegalArgumentException(String.format(Locale.ROOT, "a floor is graded for 3 to %d readings: %d",
+                    MAX_READINGS, readings));
         }
         String key = family.base() + "/" + readings;
         double[] s = NULLS.get(key);

@@ -107,6 +107,26 @@ class FloorCoverageTest {
     }
 
     @Test
+    void moreReadingsThanTheFloorIsSimulatedForAreNotValidWithTheReason() {
+        List<double[]> subgroups = new java.util.ArrayList<>();
+        List<String> slots = new java.util.ArrayList<>();
+        for (int g = 0; g < 1001; g++) { // 5,005 readings (invented, evenly spread above 10)
+            double[] x = new double[5];
+            for (int j = 0; j < 5; j++) {
+                x[j] = 10 + 0.001 * ((g * 5 + j) % 97) + 0.0001 * j;
+            }
+            subgroups.add(x);
+            slots.add("S" + (g + 1));
+        }
+        List<Reason> reasons = new java.util.ArrayList<>();
+        Shape s = ShapeJudge.judgeFloor(subgroups, slots, 0, ShapeFamily.WEIBULL3, 9.95, 0.01,
+                dev.proofrun.stats.SpecLimits.upperOnly(10.3), reasons);
+        assertTrue(!s.modelFits(), reasons.toString());
+        assertTrue(reasons.stream().anyMatch(r -> r.decisive() && r.text().contains("not graded for 5005 readings")
+                && r.text().contains("at most 5000 readings")), reasons.toString());
+    }
+
+    @Test
     void theExactThresholdsCautionPointsToTheFloor() {
         ShapeStudies.Case c = ShapeStudies.Case.threshold(ShapeFamily.LOGNORMAL3, 0.5, THETA, C0, 5, 25);
         GradingPlan plan = c.plan(C0);
