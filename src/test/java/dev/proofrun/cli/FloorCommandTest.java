@@ -90,6 +90,10 @@ class FloorCommandTest {
         assertEquals(List.of(OptionalDouble.empty(), OptionalDouble.of(9.95)),
                 PlanFiles.read(file).characteristics().stream().map(c -> c.floor()).toList());
 
+        assertEquals(0, cli.run("size", "--characteristics", csv.toString(), "--subgroup-size", "5"), cli.err());
+        assertTrue(cli.out().contains("H2 is planned weibull3, floor 9.95, but its power here is the normal model's, and no"
+                + " power is promised for a floor"), cli.out());
+
         Files.writeString(csv, "id,name,unit,nominal,lsl,usl,target,expected,shape,threshold,floor\n"
                 + "H2,seated height,mm,,,10.10,1.33,1.8,weibull3,9.95,9.95\n", StandardCharsets.UTF_8);
         Path bad = dir.resolve("q.json");
