@@ -330,7 +330,7 @@ public final class FloorBound {
         /** The set of thresholds at {@code confidence}: this one, or one found afresh with that confidence's γ. */
         public ThresholdSet setAt(double confidence) {
             double gamma = GAMMA_SHARE * (1 - confidence);
-            return gamma == set.gamma() ? set : thresholds(set.family(), set.floor(), set.readings(), gamma);
+            return Math.abs(gamma - set.gamma()) <= 1e-12 * gamma ? set : thresholds(set.family(), set.floor(), set.readings(), gamma);
         }
 
         /** {lower, upper, θ of the lower, θ of the upper} at {@code confidence}. */

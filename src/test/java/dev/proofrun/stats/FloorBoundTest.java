@@ -103,6 +103,21 @@ class FloorBoundTest {
     }
 
     @Test
+    void aLooksSmallerErrorRateTakesItsOwnWiderSetAndALowerBound() {
+        // a staged study's early look asks for 1 − α with a small α: γ = 0.2·α leaves more thresholds and the bound falls
+        double[] x = lognormal3(RandomSource.XO_RO_SHI_RO_128_PP.create(8_100L), 9.95, 0.25);
+        FloorBound.ThresholdSet set = FloorBound.thresholds(ShapeFamily.LOGNORMAL3, 9.90, x, FloorBound.GAMMA_SHARE * 0.05);
+        FloorBound.Estimate e = new FloorBound.Estimate(set, IndexKind.PPU, SpecLimits.upperOnly(10.3),
+                PivotalBound.DEFAULT_SEED, 2.0);
+        assertTrue(e.setAt(0.95) == set);
+        FloorBound.ThresholdSet early = e.setAt(0.9995);
+        assertTrue(early.highest() >= set.highest(), early.highest() + " " + set.highest());
+        double late = e.lower(0.95);
+        double first = e.lower(0.9995);
+        assertTrue(Double.isFinite(first) && first < late, first + " " + late);
+    }
+
+    @Test
     void aThresholdOnTheFirstReadingIsNeverKept() {
         // a study whose readings are normal (no skew at all) leaves most thresholds; ones close to x(1) stretch the
         // logs' lower tail and go
