@@ -18,7 +18,7 @@ import java.util.Map;
  * Undefined values are {@code null}.
  *
  * <p>Each characteristic leads with what its verdict rests on: {@code index} (the required index), {@code method}
- * ({@link dev.proofrun.grade.IndexMethod}), {@code model} (the distribution model; for lognormal3/weibull3 followed by {@code threshold}, the declared θ), {@code estimate},
+ * ({@link dev.proofrun.grade.IndexMethod}), {@code model} (the distribution model; for lognormal3/weibull3 followed by {@code threshold}, the declared θ or, with a floor, the fitted one, then {@code floor}, {@code thresholdsFrom}, {@code thresholdsTo} and {@code boundLimitedAt}), {@code estimate},
  * {@code lower} and {@code upper} (its confidence bounds, numbers; {@code upper} only when the estimate is below
  * the requirement), {@code required}, {@code confidence}, then {@code verdict}. The normal-theory capability
  * figures of the raw readings — the keys and meanings of {@code proofrun estimate --json}, from
@@ -77,6 +77,13 @@ final class GradeJson {
         m.put("model", e == null ? null : e.model().id());
         if (g.shape() != null && g.shape().family().hasThreshold() && g.shape().fit() != null) {
             m.put("threshold", g.shape().fit().threshold()); // only for lognormal3/weibull3: other outputs keep their bytes
+        }
+        if (g.shape() != null && g.shape().thresholds() != null) { // only with a floor
+            var set = g.shape().thresholds();
+            m.put("floor", set.floor());
+            m.put("thresholdsFrom", set.empty() ? null : set.thetas()[0]);
+            m.put("thresholdsTo", set.empty() ? null : set.highest());
+            m.put("boundLimitedAt", e == null ? null : finite(e.limitedAt()));
         }
         m.put("estimate", e == null ? null : finite(e.estimate()));
         m.put("lower", e == null ? null : finite(e.lower()));

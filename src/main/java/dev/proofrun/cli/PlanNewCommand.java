@@ -91,11 +91,15 @@ public final class PlanNewCommand implements Callable<Integer> {
     Double nominal;
     @Option(names = "--shape", paramLabel = "NAME",
             description = "The distribution the readings are planned to follow: normal (default), lognormal, weibull,"
-                    + " folded-normal, lognormal3 or weibull3 (the last two with --threshold).")
+                    + " folded-normal, lognormal3 or weibull3 (the last two with --threshold or --floor).")
     String shape;
     @Option(names = "--threshold", paramLabel = "X", description = "The declared threshold of a lognormal3 or weibull3 shape:"
             + " the stop or datum the readings cannot go below (a plan value, not estimated from the readings).")
     Double threshold;
+    @Option(names = "--floor", paramLabel = "X", description = "In place of --threshold when the real start of the readings"
+            + " is not known exactly: a stop the threshold cannot lie below; the grade lets the readings say where above"
+            + " it the threshold may lie, at a price in power.")
+    Double floor;
     @Option(names = "--gauge", paramLabel = "NAME", description = "Gauge name (with --resolution; a resolution alone"
             + " is kept for an unnamed gauge).")
     String gauge;
@@ -213,7 +217,9 @@ public final class PlanNewCommand implements Callable<Integer> {
         w.println(design.reason());
         staged.ifPresent(st -> st.lines().forEach(w::println));
         for (Characteristic c : chars) {
-            if (!c.shape().isNormal()) {
+            if (c.floor().isPresent()) {
+                w.println("warning: " + SizeMessage.FLOOR_NOT_SIZED.format(c.id(), c.shapeWords()));
+            } else if (!c.shape().isNormal()) {
                 w.println("warning: " + (ShapeSize.plans(c.shape()) ? SizeMessage.SHAPE_SIZED_AS_NORMAL.format(c.id(), c.shape().token(), c.shape().token())
                         : SizeMessage.SHAPE_NOT_SIZED_AS_NORMAL.format(c.id(), c.shape().token(), ShapeSize.plannable())));
             }
@@ -277,7 +283,7 @@ public final class PlanNewCommand implements Callable<Integer> {
         OptionValues.confidence(confidence);
         if (characteristicsCsv != null) {
             if (characteristic != null || target != null || expected != null || shape != null || threshold != null
-                    || limits.given()) {
+                    || floor != null || limits.given()) {
                 throw new UserException(PlanOptionMessage.BOTH_CHARACTERISTIC_FORMS);
             }
             return CharacteristicsCsv.read(characteristicsCsv, kind, confidence);
@@ -297,13 +303,14 @@ public final class PlanNewCommand implements Callable<Integer> {
         ShapeFamily family = shape == null ? ShapeFamily.NORMAL : OptionValues.shape(shape);
         String id = characteristicId == null ? "C1" : characteristicId;
         OptionalDouble theta = threshold == null ? OptionalDouble.empty() : OptionalDouble.of(threshold);
-        option(threshold != null ? "--threshold" : "--shape", () -> {
-            Characteristic.requireThreshold(id, family, theta, specLimits);
+        OptionalDouble stop = floor == null ? OptionalDouble.empty() : OptionalDouble.of(floor);
+        option(floor != null ? "--floor" : threshold != null ? "--threshold" : "--shape", () -> {
+            Characteristic.requireThreshold(id, family, theta, stop, specLimits);
             return theta;
         });
         return List.of(option("--characteristic", () -> new Characteristic(id,
                 characteristic, unit, nominal == null ? OptionalDouble.empty() : OptionalDouble.of(nominal), specLimits, g, req, exp,
-                family, theta)));
+                family, theta, stop)));
     }
 
     private ProductionCalendar calendar() {

@@ -6,7 +6,7 @@ import dev.proofrun.text.MessageKey;
 public enum PlanOptionMessage implements MessageKey {
     NEED_CHARACTERISTIC("give either --characteristics FILE.csv or --characteristic with --unit, --target and --expected"),
     BOTH_CHARACTERISTIC_FORMS("give either --characteristics FILE.csv or one characteristic's options (--characteristic, --target,"
-            + " --expected, --lsl, --usl, --shape, --threshold), not both: the file holds each characteristic's own values"),
+            + " --expected, --lsl, --usl, --shape, --threshold, --floor), not both: the file holds each characteristic's own values"),
     OUT_EXISTS("%s exists; add --force to replace it (the old file is kept as .bak)"),
     RATE_ASSUMED("no --rate or --cycle-seconds given: assumed %s parts per hour"),
     WROTE("wrote %s: %s, draft"),

@@ -68,7 +68,9 @@ final class SharedSize {
         DesignRequest first = request.apply(chars.get(0));
         List<String> warnings = new ArrayList<>();
         for (Characteristic c : chars) {
-            if (!c.shape().isNormal()) {
+            if (c.floor().isPresent()) {
+                warnings.add(SizeMessage.FLOOR_NOT_SIZED.format(c.id(), c.shapeWords()));
+            } else if (!c.shape().isNormal()) {
                 warnings.add((ShapeSize.plans(c.shape()) ? SizeMessage.SHAPE_SIZED_AS_NORMAL.format(c.id(), c.shape().token(), c.shape().token())
                         : SizeMessage.SHAPE_NOT_SIZED_AS_NORMAL.format(c.id(), c.shape().token(), ShapeSize.plannable())));
             }

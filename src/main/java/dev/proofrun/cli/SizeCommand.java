@@ -135,6 +135,10 @@ public final class SizeCommand implements Callable<Integer> {
     @Option(names = "--skewness", paramLabel = "G", description = "The expected skewness of the readings (with --shape).")
     Double skewness;
 
+    @Option(names = "--floor", paramLabel = "X", description = "Refused, with the reason: a threshold shape planned with a"
+            + " floor has no computed power (see plan new --floor).")
+    Double floor;
+
     @Option(names = "--stages", defaultValue = "1", paramLabel = "S",
             description = "Planned looks, 1 to 4 (default ${DEFAULT-VALUE}): with 2 or more, the staged design of the"
                     + " recommended subgroup size, which may stop early at a look (simulated; takes some seconds).")
@@ -150,6 +154,9 @@ public final class SizeCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         PrintWriter out = spec.commandLine().getOut();
+        if (floor != null) {
+            throw new UserException(SizeMessage.FLOOR_REFUSED);
+        }
         OptionValues.confidence(confidence);
         int looks = StagedSize.stages(stages);
         Spending spendingFunction = StagedSize.spending(spending);

@@ -24,6 +24,14 @@ public enum SizeMessage implements MessageKey {
             + " 'size --shape %s --skewness G --spec upper|lower' and use the larger study"),
     SHAPE_NOT_SIZED("size --shape cannot plan the %s shape: its power is not computed yet; size --shape plans %s."
             + " Characteristics of that shape can still be planned (plan new --shape) and graded"),
+    FLOOR_NOT_SIZED("%s is planned %s, but its power here is the normal model's, and no power is promised for a floor:"
+            + " not knowing the threshold costs much of it (lognormal3, 125 readings, index 1.67 against 1.33: about"
+            + " 0.04 with a floor against 0.7 with the threshold known; docs/decisions/declared-shape-grading.md, \"Floor\")."
+            + " Plan a much larger study, or declare the threshold where it is known exactly"),
+    FLOOR_REFUSED("size does not plan a threshold shape with a floor: its power depends on the grade's search for the"
+            + " threshold and is far below the threshold-known power (lognormal3, 125 readings, index 1.67 against 1.33:"
+            + " about 0.04 against 0.7), and no table of it is computed. Size without --floor (the power with the"
+            + " threshold known is an upper limit), plan a much larger study and check it with simulated studies"),
     SHAPE_NOT_SIZED_AS_NORMAL("%s is planned %s, but its power here is the normal model's, and size --shape cannot"
             + " plan that shape yet (it plans %s): treat the promised power as approximate"),
     SHAPE_CAUTION("A demonstrated index is a statistical statement under assumptions (stability, independence, readings"

@@ -6,6 +6,7 @@ import dev.proofrun.control.ChartKind;
 import dev.proofrun.text.UserException;
 import dev.proofrun.design.Design;
 import dev.proofrun.design.Requirement;
+import dev.proofrun.stats.FloorBound;
 import dev.proofrun.stats.PercentileIndex;
 import java.time.Duration;
 import java.util.ArrayList;
@@ -99,6 +100,9 @@ final class CharacteristicGrader {
             shapeReasons.add(step.reason());
         }
         FutureTask<Shape> shapeTask = new FutureTask<>(() -> step.tooCoarse() ? GaugeStep.unjudged(gc.shape())
+                : gc.hasFloor()
+                ? ShapeJudge.judgeFloor(subgroups, data.slots(), step.step(), gc.shape(), gc.floor(),
+                        FloorBound.GAMMA_SHARE * (1 - req.confidence()), gc.limits(), shapeReasons)
                 : ShapeJudge.judge(subgroups, data.slots(), step.step(), gc.shape(), gc.threshold(),
                         gc.limits(), shapeReasons));
         boolean declaredSkew = !gc.shape().isNormal();

@@ -25,7 +25,7 @@ public final class GradingPlans {
             double resolution = c.gauge().map(Gauge::resolution).orElse(0.0);
             cs.add(new PlannedCharacteristic(c.id(), c.name(), c.unit(), c.limits(),
                     c.nominal().isPresent() ? c.nominal().getAsDouble() : null, resolution, c.requirement(), c.shape(),
-                    c.threshold().orElse(Double.NaN)));
+                    c.threshold().orElse(Double.NaN), c.floor().orElse(Double.NaN)));
         }
         List<PlannedSlot> slots = new ArrayList<>();
         for (Slot s : plan.schedule().slots()) {

@@ -16,9 +16,17 @@ import dev.proofrun.stats.IndexKind;
  * @param method      how the index and its bounds were computed
  * @param expectedPpm parts per million expected outside the limits under the fitted model (NaN when unknown)
  * @param seed        the seed of the pivotal draws behind the bounds ({@link IndexMethod#PERCENTILE}), or null
+ * @param limitedAt   under a threshold shape planned with a floor: the threshold, among those the readings leave
+ *                    possible, at which the lower bound was reached; NaN otherwise
  */
 public record IndexEvidence(IndexKind index, double required, double confidence, double estimate, double lower,
-        double upper, ShapeModel model, IndexMethod method, double expectedPpm, Long seed) {
+        double upper, ShapeModel model, IndexMethod method, double expectedPpm, Long seed, double limitedAt) {
+
+    /** Evidence without a floor. */
+    public IndexEvidence(IndexKind index, double required, double confidence, double estimate, double lower,
+            double upper, ShapeModel model, IndexMethod method, double expectedPpm, Long seed) {
+        this(index, required, confidence, estimate, lower, upper, model, method, expectedPpm, seed, Double.NaN);
+    }
 
     /** Normal theory, no pivotal draws. */
     public IndexEvidence(IndexKind index, double required, double confidence, double estimate, double lower,
@@ -29,7 +37,7 @@ public record IndexEvidence(IndexKind index, double required, double confidence,
     /** The same evidence with estimate and bounds multiplied by {@code factor} and the expected ppm set. */
     IndexEvidence scaled(double factor, double ppm) {
         return new IndexEvidence(index, required, confidence, estimate * factor, lower * factor, upper * factor, model,
-                method, ppm, seed);
+                method, ppm, seed, limitedAt);
     }
 
     /** "Cpk under the normal model by normal theory, exact bounds: estimate 1.473, lower 95 % bound 1.285, required 1.33". */

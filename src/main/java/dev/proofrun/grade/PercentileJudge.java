@@ -2,6 +2,7 @@ package dev.proofrun.grade;
 
 import dev.proofrun.design.Requirement;
 import dev.proofrun.stats.BoundEngine;
+import dev.proofrun.stats.FloorBound;
 import dev.proofrun.stats.IndexKind;
 import dev.proofrun.stats.PercentileIndex;
 import dev.proofrun.stats.FoldedNormalBound;
@@ -64,7 +65,10 @@ final class PercentileJudge {
         }
         long seed = PivotalBound.DEFAULT_SEED;
         boolean pivotal = family.isLocationScale();
-        BoundEngine bound = pivotal ? PivotalBound.Estimate.of(fit, kind, limits, readings, seed)
+        FloorBound.ThresholdSet floorSet = shape.thresholds();
+        BoundEngine bound = floorSet != null
+                ? new FloorBound.Estimate(floorSet, kind, limits, seed, PercentileIndex.of(kind, limits, fit))
+                : pivotal ? PivotalBound.Estimate.of(fit, kind, limits, readings, seed)
                 : FoldedNormalBound.Estimate.of(fit, kind, limits, readings, seed);
         double estimate = bound.estimate();
         if (Double.isNaN(estimate)) {
@@ -80,21 +84,54 @@ final class PercentileJudge {
         double q50 = fit.quantile(0.5);
         double q1 = fit.quantile(PercentileIndex.HIGH);
         String method = pivotal
-                ? GradeMessage.REASON_PERCENTILE_METHOD.format(kind.symbol(), modelWords(declared, fit), q0, q50, q1, ppm, PivotalBound.DRAWS, seed)
+                ? GradeMessage.REASON_PERCENTILE_METHOD.format(kind.symbol(), modelWords(declared, fit, floorSet), q0, q50, q1, ppm, PivotalBound.DRAWS, seed)
                 : GradeMessage.REASON_PERCENTILE_INVERTED.format(kind.symbol(), family.token(), q0, q50, q1, ppm,
                         FoldedNormalBound.GRID_SIZE, FoldedNormalBound.DRAWS, seed);
         reasons.add(new Reason(Step.CAPABILITY, false, method));
-        if (declared.hasThreshold()) {
-            reasons.add(new Reason(Step.CAPABILITY, false, GradeMessage.REASON_THRESHOLD_CAUTION.format(declared.token(),
-                    String.format(java.util.Locale.ROOT, "%s", fit.threshold()))));
+        double lower;
+        double upper;
+        double limitedAt = Double.NaN;
+        if (floorSet != null) {
+            FloorBound.Estimate floorBound = (FloorBound.Estimate) bound;
+            FloorBound.ThresholdSet used = floorBound.setAt(confidence);
+            double[] at = FloorBound.bounds(used, kind, limits, confidence, seed);
+            double gamma = used.gamma();
+            if (!used.empty()) {
+                reasons.add(new Reason(Step.CAPABILITY, false, GradeMessage.REASON_FLOOR_BOUND.format(
+                        number(used.thetas()[0]), number(used.highest()), number(at[2]),
+                        100 * (confidence + gamma), 100 * gamma, 100 * confidence)));
+            }
+            reasons.add(new Reason(Step.CAPABILITY, false, GradeMessage.REASON_FLOOR_CAUTION.format(declared.token(),
+                    String.format(java.util.Locale.ROOT, "%s", floorSet.floor()))));
+            lower = at[0];
+            upper = at[1];
+            limitedAt = at[2];
+        } else {
+            if (declared.hasThreshold()) {
+                reasons.add(new Reason(Step.CAPABILITY, false, GradeMessage.REASON_THRESHOLD_CAUTION.format(declared.token(),
+                        String.format(java.util.Locale.ROOT, "%s", fit.threshold()))));
+            }
+            lower = bound.lower(confidence);
+            upper = estimate < req.minimum() ? bound.upper(confidence) : Double.NaN;
         }
-        double upper = estimate < req.minimum() ? bound.upper(confidence) * f : Double.NaN;
-        return new IndexEvidence(kind, req.minimum(), confidence, estimate * f, bound.lower(confidence) * f, upper,
-                ShapeModel.of(declared), pivotal ? IndexMethod.PERCENTILE : IndexMethod.PERCENTILE_INVERTED, ppm, seed);
+        upper = estimate < req.minimum() ? upper * f : Double.NaN;
+        return new IndexEvidence(kind, req.minimum(), confidence, estimate * f, lower * f, upper,
+                ShapeModel.of(declared), pivotal ? IndexMethod.PERCENTILE : IndexMethod.PERCENTILE_INVERTED, ppm, seed, limitedAt);
     }
 
-    /** "lognormal", or "lognormal3 (threshold 9.95)" for a threshold shape. */
-    static String modelWords(ShapeFamily declared, ShapeFit fit) {
+    private static String number(double v) {
+        return String.format(java.util.Locale.ROOT, "%.6g", v);
+    }
+
+    /**
+     * "lognormal", "lognormal3 (threshold 9.95)" for a declared threshold, or "lognormal3 (floor 9.95; fitted at the
+     * threshold 9.9512)" for a floor.
+     */
+    static String modelWords(ShapeFamily declared, ShapeFit fit, FloorBound.ThresholdSet floorSet) {
+        if (floorSet != null) {
+            return String.format(java.util.Locale.ROOT, "%s (floor %s; fitted at the threshold %s)", declared.token(),
+                    floorSet.floor(), number(fit.threshold()));
+        }
         return declared.hasThreshold()
                 ? String.format(java.util.Locale.ROOT, "%s (threshold %s)", declared.token(), fit.threshold()) : declared.token();
     }

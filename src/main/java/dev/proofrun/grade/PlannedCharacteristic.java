@@ -18,9 +18,18 @@ import java.util.Objects;
  * @param requirement what must be shown
  * @param shape       the distribution model the plan declares for the readings
  * @param threshold   the declared threshold θ of a {@link ShapeFamily#hasThreshold() threshold shape}; NaN otherwise
+ *                    (and NaN when the plan gives a floor instead)
+ * @param floor       the declared floor of a threshold shape: θ is unknown, only known to lie at or above it
+ *                    ({@link dev.proofrun.stats.FloorBound}); NaN otherwise
  */
 public record PlannedCharacteristic(String id, String name, String unit, SpecLimits limits, Double nominal,
-        double resolution, Requirement requirement, ShapeFamily shape, double threshold) {
+        double resolution, Requirement requirement, ShapeFamily shape, double threshold, double floor) {
+
+    /** A characteristic planned with a declared threshold (or none), no floor. */
+    public PlannedCharacteristic(String id, String name, String unit, SpecLimits limits, Double nominal,
+            double resolution, Requirement requirement, ShapeFamily shape, double threshold) {
+        this(id, name, unit, limits, nominal, resolution, requirement, shape, threshold, Double.NaN);
+    }
 
     /** A characteristic planned with a shape that has no threshold. */
     public PlannedCharacteristic(String id, String name, String unit, SpecLimits limits, Double nominal,
@@ -36,7 +45,8 @@ public record PlannedCharacteristic(String id, String name, String unit, SpecLim
 
     /**
      * @throws IllegalArgumentException if the resolution is negative or not finite
-     * @throws IllegalArgumentException if a threshold shape has no finite threshold, or another shape has one
+     * @throws IllegalArgumentException if a threshold shape has not exactly one of a finite threshold and a finite
+     *                                  floor, or another shape has either
      */
     public PlannedCharacteristic {
         Objects.requireNonNull(id, "id");
@@ -46,9 +56,15 @@ public record PlannedCharacteristic(String id, String name, String unit, SpecLim
         if (!(resolution >= 0) || !Double.isFinite(resolution)) {
             throw new IllegalArgumentException(String.format(Locale.ROOT, "resolution must be zero or positive: %s", resolution));
         }
-        if (shape.hasThreshold() != Double.isFinite(threshold)) {
-            throw new IllegalArgumentException(String.format(Locale.ROOT, "the %s shape %s a threshold: %s", shape.token(),
-                    shape.hasThreshold() ? "needs" : "takes no", threshold));
+        boolean declared = Double.isFinite(threshold) != Double.isFinite(floor);
+        if (shape.hasThreshold() != declared || (!shape.hasThreshold() && Double.isFinite(threshold))) {
+            throw new IllegalArgumentException(String.format(Locale.ROOT, "the %s shape %s a threshold or a floor: %s, %s",
+                    shape.token(), shape.hasThreshold() ? "needs exactly one of" : "takes neither", threshold, floor));
         }
+    }
+
+    /** True when the plan gives a floor for the threshold, not the threshold itself. */
+    public boolean hasFloor() {
+        return Double.isFinite(floor);
     }
 }

@@ -1,5 +1,6 @@
 package dev.proofrun.grade;
 
+import dev.proofrun.stats.FloorBound;
 import dev.proofrun.stats.ShapeFamily;
 import dev.proofrun.stats.ShapeFit;
 import java.util.List;
@@ -19,11 +20,19 @@ import java.util.List;
  * @param fit             the fitted model, or null when there is no fit
  * @param tailFactor      ≤ 1: the factor on the index when the readings' tails are wider than the model's
  *                        (the large-N rule of {@link ShapeJudge}); 1 otherwise
+ * @param thresholds      for a plan that gives a floor: the thresholds the readings leave possible (the fit is the
+ *                        one at the set's central threshold); null otherwise
  */
 public record Shape(double andersonDarling, double pValue, boolean normal, ShapeModel model, List<ModelFit> fits,
-        boolean modelFits, ShapeFamily family, ShapeFit fit, double tailFactor) {
+        boolean modelFits, ShapeFamily family, ShapeFit fit, double tailFactor, FloorBound.ThresholdSet thresholds) {
 
     public Shape {
         fits = List.copyOf(fits);
+    }
+
+    /** Shape evidence without a floor. */
+    public Shape(double andersonDarling, double pValue, boolean normal, ShapeModel model, List<ModelFit> fits,
+            boolean modelFits, ShapeFamily family, ShapeFit fit, double tailFactor) {
+        this(andersonDarling, pValue, normal, model, fits, modelFits, family, fit, tailFactor, null);
     }
 }

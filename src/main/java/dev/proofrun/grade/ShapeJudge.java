@@ -1,6 +1,7 @@
 package dev.proofrun.grade;
 
 import dev.proofrun.stats.AndersonDarling;
+import dev.proofrun.stats.FloorBound;
 import dev.proofrun.stats.FoldedNormalBootstrap;
 import dev.proofrun.stats.PercentileIndex;
 import dev.proofrun.stats.ShapeFamily;
@@ -114,7 +115,7 @@ final class ShapeJudge {
         ShapeModel model = ShapeModel.of(family);
         ShapeFitter.Outcome o = ShapeFitter.fit(family, threshold, x);
         if (!o.fitted()) {
-            reasons.add(new Reason(Step.SHAPE, true, noFit(o, subgroups, slots, family, threshold, x.length)));
+            reasons.add(new Reason(Step.SHAPE, true, noFit(o, subgroups, slots, family, threshold, false, x.length)));
             return new Shape(Double.NaN, Double.NaN, false, model, List.of(), false, family, null, 1);
         }
         ShapeFit fit = o.fit();
@@ -148,6 +149,48 @@ final class ShapeJudge {
         reasons.add(new Reason(Step.SHAPE, true,
                 GradeMessage.REASON_SHAPE_REJECTED.format(family.token(), fit.describe(), test[0], evidence)));
         return new Shape(test[0], test[1], false, model, List.of(modelFit(model, fit, x, test[0], false)), false, family, fit, 1);
+    }
+
+    /**
+     * As above for a threshold shape whose plan gives a floor, not the threshold: the thresholds the readings leave
+     * possible ({@link FloorBound#thresholds}, at 1 − γ); none left is a finding (the planned shape does not fit);
+     * otherwise the declared shape is fitted and checked as above at the set's central threshold, and the set comes
+     * along in the {@link Shape} for the capability step. A reading at or below the floor is a finding naming its
+     * subgroup and position.
+     *
+     * @param gamma the error rate spent on the set of thresholds (γ = {@value FloorBound#GAMMA_SHARE}·α)
+     */
+    static Shape judgeFloor(List<double[]> subgroups, List<String> slots, double resolution, ShapeFamily family,
+            double floor, double gamma, SpecLimits limits, List<Reason> reasons) {
+        double[] x = flatten(subgroups);
+        ShapeModel model = ShapeModel.of(family);
+        ShapeFitter.Outcome atFloor = ShapeFitter.fit(family, floor, x);
+        if (!atFloor.fitted()) {
+            reasons.add(new Reason(Step.SHAPE, true, noFit(atFloor, subgroups, slots, family, floor, true, x.length)));
+            return new Shape(Double.NaN, Double.NaN, false, model, List.of(), false, family, null, 1);
+        }
+        String f = String.format(Locale.ROOT, "%s", floor);
+        if (x.length > FloorBound.MAX_READINGS) {
+            reasons.add(new Reason(Step.SHAPE, true, GradeMessage.REASON_FLOOR_TOO_MANY.format(family.token(), f, x.length,
+                    FloorBound.MAX_READINGS)));
+            return new Shape(Double.NaN, Double.NaN, false, model, List.of(), false, family, atFloor.fit(), 1);
+        }
+        FloorBound.ThresholdSet set = FloorBound.thresholds(family, floor, x, gamma);
+        if (set.empty()) {
+            double min = Arrays.stream(x).min().getAsDouble();
+            reasons.add(new Reason(Step.SHAPE, true, GradeMessage.REASON_FLOOR_NO_THRESHOLD.format(f,
+                    String.format(Locale.ROOT, "%s", min), family.token(), FloorBound.skewAt(x, floor), 100 * gamma,
+                    set.critical(), FloorBound.SKEW_DRAWS, x.length, FloorBound.SKEW_SEED)));
+            return new Shape(Double.NaN, Double.NaN, false, model, List.of(), false, family, atFloor.fit(), 1, set);
+        }
+        double central = set.central();
+        reasons.add(new Reason(Step.SHAPE, false, GradeMessage.REASON_FLOOR_SET.format(family.token(), f,
+                String.format(Locale.ROOT, "%.6g", set.thetas()[0]), String.format(Locale.ROOT, "%.6g", set.highest()),
+                set.tried(), 100 * gamma, set.critical(), FloorBound.SKEW_DRAWS, FloorBound.SKEW_SEED,
+                String.format(Locale.ROOT, "%.6g", central))));
+        Shape s = judge(subgroups, slots, resolution, family, central, limits, reasons);
+        return new Shape(s.andersonDarling(), s.pValue(), s.normal(), s.model(), s.fits(), s.modelFits(), s.family(), s.fit(),
+                s.tailFactor(), set);
     }
 
     /** {A*², p (NaN for Weibull), 1 if rejected at 1 % else 0}. */
@@ -214,7 +257,7 @@ final class ShapeJudge {
     }
 
     private static String noFit(ShapeFitter.Outcome o, List<double[]> subgroups, List<String> slots, ShapeFamily family,
-            double threshold, int n) {
+            double threshold, boolean floor, int n) {
         switch (o.failure()) {
             case AT_OR_BELOW_BOUND: {
                 int i = o.index();
@@ -222,6 +265,10 @@ final class ShapeJudge {
                     if (i < subgroups.get(g).length) {
                         String value = String.format(Locale.ROOT, "%s", subgroups.get(g)[i]);
                         String slot = g < slots.size() ? slots.get(g) : "#" + (g + 1);
+                        if (floor) {
+                            return GradeMessage.REASON_AT_OR_BELOW_FLOOR.format(family.token(),
+                                    String.format(Locale.ROOT, "%s", threshold), value, slot, i + 1);
+                        }
                         return family.hasThreshold()
                                 ? GradeMessage.REASON_AT_OR_BELOW_THRESHOLD.format(family.token(),
                                         String.format(Locale.ROOT, "%s", threshold), value, slot, i + 1)

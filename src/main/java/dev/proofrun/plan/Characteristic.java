@@ -24,11 +24,22 @@ import java.util.OptionalDouble;
  *                    unless declared); the grader fits only this model
  * @param threshold   the declared threshold θ of a threshold shape ({@code lognormal3}, {@code weibull3}): the
  *                    physical stop or datum the readings cannot go below, a plan value never estimated from the
- *                    readings; empty for every other shape
+ *                    readings; empty for every other shape, and empty when the plan gives a floor instead
+ * @param floor       the declared floor of a threshold shape: the stop the readings cannot go below when the real
+ *                    start of the readings (the threshold) is not known exactly; the grader lets the readings say
+ *                    where above the floor the threshold may lie ({@code stats.FloorBound}). Exactly one of threshold
+ *                    and floor for a threshold shape; empty for every other shape
  */
 public record Characteristic(String id, String name, String unit, OptionalDouble nominal, SpecLimits limits,
         Optional<Gauge> gauge, Requirement requirement, Expectation expectation, ShapeFamily shape,
-        OptionalDouble threshold) {
+        OptionalDouble threshold, OptionalDouble floor) {
+
+    /** A characteristic planned with a declared threshold (or a shape that takes none), no floor. */
+    public Characteristic(String id, String name, String unit, OptionalDouble nominal, SpecLimits limits,
+            Optional<Gauge> gauge, Requirement requirement, Expectation expectation, ShapeFamily shape,
+            OptionalDouble threshold) {
+        this(id, name, unit, nominal, limits, gauge, requirement, expectation, shape, threshold, OptionalDouble.empty());
+    }
 
     /** A characteristic planned with a shape that takes no threshold. */
     public Characteristic(String id, String name, String unit, OptionalDouble nominal, SpecLimits limits,
@@ -42,9 +53,13 @@ public record Characteristic(String id, String name, String unit, OptionalDouble
         this(id, name, unit, nominal, limits, gauge, requirement, expectation, ShapeFamily.NORMAL);
     }
 
-    /** The shape as plans and sheets show it: "lognormal", or "lognormal3, threshold 9.95" for a threshold shape. */
+    /**
+     * The shape as plans and sheets show it: "lognormal", "lognormal3, threshold 9.95" for a declared threshold or
+     * "lognormal3, floor 9.95" for a floor.
+     */
     public String shapeWords() {
         return threshold.isPresent() ? String.format(Locale.ROOT, "%s, threshold %s", shape.token(), threshold.getAsDouble())
+                : floor.isPresent() ? String.format(Locale.ROOT, "%s, floor %s", shape.token(), floor.getAsDouble())
                 : shape.token();
     }
 
@@ -58,11 +73,17 @@ public record Characteristic(String id, String name, String unit, OptionalDouble
         return new Characteristic(id, name, unit, nominal, limits, gauge, requirement, expectation, newShape, newThreshold);
     }
 
+    /** The same characteristic planned with a threshold shape and a floor (or neither for another shape). */
+    public Characteristic withShape(ShapeFamily newShape, OptionalDouble newThreshold, OptionalDouble newFloor) {
+        return new Characteristic(id, name, unit, nominal, limits, gauge, requirement, expectation, newShape, newThreshold,
+                newFloor);
+    }
+
     /**
      * @throws IllegalArgumentException if id or name are missing or the id has other characters
      * @throws IllegalArgumentException if the required index needs a limit the specification lacks
-     * @throws IllegalArgumentException if a threshold shape lacks its threshold, another shape has one, or the
-     *                                  threshold is not a finite number below the upper limit
+     * @throws IllegalArgumentException if a threshold shape has neither a threshold nor a floor or has both, another
+     *                                  shape has either, or they are not a finite number below the upper limit
      */
     public Characteristic {
         if (id == null || !id.matches("[A-Za-z0-9._-]{1,24}")) {
@@ -80,8 +101,40 @@ public record Characteristic(String id, String name, String unit, OptionalDouble
         gauge = gauge == null ? Optional.empty() : gauge;
         shape = shape == null ? ShapeFamily.NORMAL : shape;
         threshold = threshold == null ? OptionalDouble.empty() : threshold;
+        floor = floor == null ? OptionalDouble.empty() : floor;
         requireLimitsFor(requirement.index(), limits);
-        requireThreshold(id, shape, threshold, limits);
+        requireThreshold(id, shape, threshold, floor, limits);
+    }
+
+    /**
+     * The threshold and floor rules alone, for a reader that names the cell or option: a threshold shape takes
+     * exactly one of them, other shapes neither; each must be a finite number below the upper limit.
+     *
+     * @throws IllegalArgumentException as the constructor does for the threshold and the floor
+     */
+    public static void requireThreshold(String id, ShapeFamily shape, OptionalDouble threshold, OptionalDouble floor,
+            SpecLimits limits) {
+        if (floor.isPresent() && threshold.isPresent()) {
+            throw new IllegalArgumentException(String.format(Locale.ROOT,
+                    "%s: give a threshold or a floor, not both (a threshold when the real start of the readings is known"
+                            + " exactly, a floor when only the stop below it is)", id));
+        }
+        if (floor.isEmpty()) {
+            requireThreshold(id, shape, threshold, limits);
+            return;
+        }
+        if (!shape.hasThreshold()) {
+            throw new IllegalArgumentException(String.format(Locale.ROOT,
+                    "%s: a floor is only taken by the shapes lognormal3 and weibull3, not %s", id, shape.token()));
+        }
+        if (!Double.isFinite(floor.getAsDouble())) {
+            throw new IllegalArgumentException(String.format(Locale.ROOT, "%s: the floor must be a number: %s",
+                    id, floor.getAsDouble()));
+        }
+        if (limits.upper().isPresent() && floor.getAsDouble() >= limits.upper().getAsDouble()) {
+            throw new IllegalArgumentException(String.format(Locale.ROOT,
+                    "%s: the floor %s must lie below the upper limit %s", id, floor.getAsDouble(), limits.upper().getAsDouble()));
+        }
     }
 
     /**
@@ -92,7 +145,8 @@ public record Characteristic(String id, String name, String unit, OptionalDouble
     public static void requireThreshold(String id, ShapeFamily shape, OptionalDouble threshold, SpecLimits limits) {
         if (shape.hasThreshold() && threshold.isEmpty()) {
             throw new IllegalArgumentException(String.format(Locale.ROOT,
-                    "%s: the %s shape needs a threshold (the stop or datum the readings cannot go below)", id, shape.token()));
+                    "%s: the %s shape needs a threshold (the stop or datum the readings cannot go below) or a floor"
+                            + " (when only a stop below the real start is known)", id, shape.token()));
         }
         if (!shape.hasThreshold() && threshold.isPresent()) {
             throw new IllegalArgumentException(String.format(Locale.ROOT,

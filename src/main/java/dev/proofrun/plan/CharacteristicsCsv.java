@@ -26,8 +26,9 @@ import java.util.TreeMap;
  * Many characteristics at once from a CSV file with a header row. Columns (names case-insensitive, any
  * order): {@code id, name, unit, nominal, lsl, usl, target, expected}, and optionally {@code index},
  * {@code confidence}, {@code expected_cp}, {@code shape}, {@code threshold} (the declared threshold of a
- * {@code lognormal3} or {@code weibull3} shape, required there and refused elsewhere). Empty cells mean "none" for
- * nominal/lsl/usl/expected_cp/threshold,
+ * {@code lognormal3} or {@code weibull3} shape) and {@code floor} (the stop below an unknown threshold): exactly one
+ * of the two for those shapes, refused elsewhere. Empty cells mean "none" for
+ * nominal/lsl/usl/expected_cp/threshold/floor,
  * "the command's default" for index and confidence, and "normal" for shape (the names are those of
  * {@link ShapeFamily}; an unknown name is refused with the list). The file is read by the one reader in the one
  * dialect ({@link CsvReader}, {@link CsvDialect}: {@code ,} or {@code ;} as the header uses more, a point or a
@@ -83,9 +84,14 @@ public final class CharacteristicsCsv {
                 SpecLimits limits = c.build("lsl", () -> SpecLimits.of(boxed(c.number("lsl")), boxed(c.number("usl"))));
                 Requirement req = c.build("target", () -> Requirement.of(index, c.required("target"), confidence));
                 Expectation exp = c.build("expected", () -> new Expectation(c.required("expected"), expectedCp));
-                OptionalDouble threshold = thresholdCell(c, id, shape, limits);
+                OptionalDouble threshold = c.number("threshold");
+                OptionalDouble floor = c.number("floor");
+                c.build(floor.isPresent() ? "floor" : threshold.isPresent() ? "threshold" : "shape", () -> {
+                    Characteristic.requireThreshold(id, shape, threshold, floor, limits);
+                    return threshold;
+                });
                 out.add(c.build("id", () -> new Characteristic(id, c.text("name", true), c.text("unit", false),
-                        c.number("nominal"), limits, Optional.empty(), req, exp, shape, threshold)));
+                        c.number("nominal"), limits, Optional.empty(), req, exp, shape, threshold, floor)));
             }
             if (out.isEmpty()) {
                 throw new UserException(Location.file(name), PlanMessage.CSV_NO_ROWS);
@@ -103,15 +109,6 @@ public final class CharacteristicsCsv {
     }
 
     /** One row's cells with their location. */
-    /** The threshold cell, checked against the shape and the upper limit (the message names the threshold cell, or shape when it is missing). */
-    private static OptionalDouble thresholdCell(Cells c, String id, ShapeFamily shape, SpecLimits limits) {
-        OptionalDouble threshold = c.number("threshold");
-        c.build(threshold.isPresent() ? "threshold" : "shape", () -> {
-            Characteristic.requireThreshold(id, shape, threshold, limits);
-            return threshold;
-        });
-        return threshold;
-    }
 
     private static final class Cells {
         private final String file;

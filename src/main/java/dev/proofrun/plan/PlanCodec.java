@@ -58,7 +58,7 @@ final class PlanCodec {
                     .orElse(null);
             chars.add(new PlanJson.CharacteristicJ(c.id(), c.name(), c.unit(), boxed(c.nominal()),
                     boxed(c.limits().lower()), boxed(c.limits().upper()),
-                    c.shape().isNormal() ? null : c.shape().token(), boxed(c.threshold()), gauge,
+                    c.shape().isNormal() ? null : c.shape().token(), boxed(c.threshold()), boxed(c.floor()), gauge,
                     new PlanJson.RequirementJ(c.requirement().index().token(), c.requirement().minimum(),
                             c.requirement().confidence()),
                     new PlanJson.ExpectationJ(c.expectation().index(), boxed(c.expectation().potential()))));
@@ -178,7 +178,8 @@ final class PlanCodec {
         return value(path, () -> new Characteristic(req(c.id(), path + ".id"), req(c.name(), path + ".name"), c.unit(),
                 c.nominal() == null ? OptionalDouble.empty() : OptionalDouble.of(c.nominal()), limits, gauge,
                 requirement, expectation, shape,
-                c.threshold() == null ? OptionalDouble.empty() : OptionalDouble.of(c.threshold())));
+                c.threshold() == null ? OptionalDouble.empty() : OptionalDouble.of(c.threshold()),
+                c.floor() == null ? OptionalDouble.empty() : OptionalDouble.of(c.floor())));
     }
 
     private ProductionCalendar calendar(PlanJson.CalendarJ c) {

@@ -52,11 +52,15 @@ final class PlanJson {
     record LookJ(Integer subgroups, Double confidence, Double futility) {
     }
 
-    /** {@code threshold} is written only for the threshold shapes, so other plans keep their bytes and revision. */
+    /**
+     * {@code threshold} or {@code floor} is written only for the threshold shapes, so other plans keep their bytes and
+     * revision.
+     */
     @JsonInclude(JsonInclude.Include.NON_NULL)
-    @JsonPropertyOrder({"id", "name", "unit", "nominal", "lsl", "usl", "shape", "threshold", "gauge", "requirement", "expectation"})
+    @JsonPropertyOrder({"id", "name", "unit", "nominal", "lsl", "usl", "shape", "threshold", "floor", "gauge", "requirement",
+        "expectation"})
     record CharacteristicJ(String id, String name, String unit, Double nominal, Double lsl, Double usl, String shape,
-            Double threshold, GaugeJ gauge, RequirementJ requirement, ExpectationJ expectation) {
+            Double threshold, Double floor, GaugeJ gauge, RequirementJ requirement, ExpectationJ expectation) {
     }
 
     @JsonInclude(JsonInclude.Include.NON_NULL)

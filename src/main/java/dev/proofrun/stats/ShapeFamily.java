@@ -23,7 +23,9 @@ import java.util.stream.Collectors;
  * <li>{@link #LOGNORMAL3}, {@link #WEIBULL3}: the same two models for x − θ, with the threshold θ a
  *     <em>declared plan value</em> (the physical stop or datum the readings cannot go below), never estimated
  *     from the readings: with θ known, x − θ follows the two-parameter family and its pivotal bound holds as it
- *     is (docs/decisions/declared-shape-grading.md, "Threshold shapes"). {@link #base()} names that family.</li>
+ *     is (docs/decisions/declared-shape-grading.md, "Threshold shapes"). {@link #base()} names that family. Where
+ *     only a stop below the real start is known, the plan gives it as a <em>floor</em> instead and the grade takes
+ *     the least bound over the thresholds the readings leave possible ({@link FloorBound}; same record, "Floor").</li>
  * </ul>
  * The location–scale form is what makes the lower bound of a percentile index a pivotal computation
  * ({@code grade.PercentileBound}). Tokens are the words in plan files, the characteristics CSV and

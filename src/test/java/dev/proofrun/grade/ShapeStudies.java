@@ -40,9 +40,21 @@ final class ShapeStudies {
      * @param trueThreshold     for {@code lognormal3}/{@code weibull3}: the process's real threshold θ′; readings are
      *                          θ′ + {@value #THRESHOLD_SCALE}·(the two-parameter draw); 0 otherwise
      * @param declaredThreshold the threshold the plan declares (θ; NaN for the shapes without one)
+     * @param floor             true when the plan gives {@code declaredThreshold} as a floor, not as the threshold
      */
     record Case(ShapeFamily family, double parameter, double index, int n, int k, boolean twoSided, double trueThreshold,
-            double declaredThreshold) {
+            double declaredThreshold, boolean floor) {
+
+        /** A process whose plan declares the threshold itself (no floor). */
+        Case(ShapeFamily family, double parameter, double index, int n, int k, boolean twoSided, double trueThreshold,
+                double declaredThreshold) {
+            this(family, parameter, index, n, k, twoSided, trueThreshold, declaredThreshold, false);
+        }
+
+        /** A threshold-shape process from {@code theta} whose plan gives the floor {@code floor}. */
+        static Case floor(ShapeFamily family, double parameter, double theta, double floor, double index, int n, int k) {
+            return new Case(family, parameter, index, n, k, false, theta, floor, true);
+        }
 
         /** A process of a shape without a threshold. */
         Case(ShapeFamily family, double parameter, double index, int n, int k, boolean twoSided) {
@@ -60,7 +72,8 @@ final class ShapeStudies {
 
         String label() {
             String p = family == ShapeFamily.NORMAL ? "" : String.format(Locale.ROOT, " %.2f", parameter)
-                    + (family.hasThreshold() ? String.format(Locale.ROOT, " from %s declared %s", trueThreshold, declaredThreshold) : "");
+                    + (family.hasThreshold() ? String.format(Locale.ROOT, " from %s %s %s", trueThreshold,
+                            floor ? "floor" : "declared", declaredThreshold) : "");
             return String.format(Locale.ROOT, "%s%s, index %.2f, %d x %d%s", family.token(), p, index, k, n,
                     twoSided ? ", two-sided" : "");
         }
@@ -111,7 +124,8 @@ final class ShapeStudies {
 
         GradingPlan plan(double c0) {
             PlannedCharacteristic c = new PlannedCharacteristic("X1", "simulated characteristic", "mm", limits(), null, 0,
-                    Requirement.of(IndexKind.CPK, c0, 0.95), family, declaredThreshold);
+                    Requirement.of(IndexKind.CPK, c0, 0.95), family, floor ? Double.NaN : declaredThreshold,
+                    floor ? declaredThreshold : Double.NaN);
             return TestPlans.plan(n, k, c);
         }
     }
