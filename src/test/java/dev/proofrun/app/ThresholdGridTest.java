@@ -85,6 +85,8 @@ class ThresholdGridTest {
         assertEquals(CharacteristicField.THRESHOLD.ordinal(), editingColumn(table),
                 "Tab from lognormal3 edits the threshold");
         typeAndTab(robot, "0.005");
+        assertEquals(CharacteristicField.FLOOR.ordinal(), editingColumn(table), "the floor, the other way to give it, is next");
+        typeAndTab(robot, "");
         assertEquals(CharacteristicField.GAUGE.ordinal(), editingColumn(table));
         CharacteristicDraft row = fx(() -> rows().get(0));
         assertEquals("lognormal3", fx(() -> row.text(CharacteristicField.SHAPE)));
@@ -102,7 +104,7 @@ class ThresholdGridTest {
         }
         assertEquals(CharacteristicField.SHAPE.ordinal(), editingColumn(table));
         robot.type(KeyCode.TAB);
-        assertEquals(CharacteristicField.GAUGE.ordinal(), editingColumn(table), "the shut threshold is passed over");
+        assertEquals(CharacteristicField.GAUGE.ordinal(), editingColumn(table), "the shut threshold and floor are passed over");
         robot.type(KeyCode.ESCAPE);
         assertTrue(fx(() -> robot.lookup(".pr-unused").queryAll().size()) >= 1, "the shut cell is greyed");
         assertEquals("", fx(() -> rows().get(1).text(CharacteristicField.THRESHOLD)));

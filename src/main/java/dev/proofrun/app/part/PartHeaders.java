@@ -16,6 +16,7 @@ public final class PartHeaders {
             case EXPECTED_CP -> Optional.of(PartMessage.EXPECTED_CP_TIP.format());
             case EXPECTED -> Optional.of(PartMessage.EXPECTED_TIP.format());
             case THRESHOLD -> Optional.of(PartMessage.THRESHOLD_TIP.format());
+            case FLOOR -> Optional.of(PartMessage.FLOOR_TIP.format());
             default -> Optional.empty();
         };
     }

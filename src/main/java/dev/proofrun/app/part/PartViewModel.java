@@ -165,10 +165,14 @@ public final class PartViewModel extends StepViewModel {
         if (!now.equals(before)) {
             List<Change> changes = new ArrayList<>(List.of(new Change(r, field, before)));
             r.cell(field).set(now);
-            if (field == CharacteristicField.SHAPE && !RowThreshold.takes(r) && !r.text(THRESHOLD).isEmpty()) {
-                // a shape that takes no threshold empties the threshold's cell, in the same undoable edit
-                changes.add(new Change(r, THRESHOLD, r.text(THRESHOLD)));
-                r.cell(THRESHOLD).set("");
+            if (field == CharacteristicField.SHAPE && !RowThreshold.takes(r)) {
+                // a shape that takes no threshold empties the threshold's and the floor's cells, in the same undoable edit
+                for (CharacteristicField cell : List.of(THRESHOLD, CharacteristicField.FLOOR)) {
+                    if (!r.text(cell).isEmpty()) {
+                        changes.add(new Change(r, cell, r.text(cell)));
+                        r.cell(cell).set("");
+                    }
+                }
             }
             undo.push(new Edit(List.copyOf(changes), List.of()));
         }
@@ -267,9 +271,9 @@ public final class PartViewModel extends StepViewModel {
         return clash ? Optional.of(AppMessage.PART_ID_REPEATED.format(text)) : Optional.empty();
     }
 
-    /** False for a cell with nothing to hold (a threshold on a shape that takes none): empty, greyed, not edited. */
+    /** False for a cell with nothing to hold (a threshold or floor on a shape that takes none): empty, greyed, not edited. */
     public boolean cellOpen(CharacteristicDraft row, CharacteristicField field) {
-        return field != THRESHOLD || RowThreshold.open(row);
+        return !RowThreshold.isThresholdCell(field) || RowThreshold.open(row, field);
     }
 
     /** The problem of one cell, or empty when the cell is fine. */
@@ -302,8 +306,8 @@ public final class PartViewModel extends StepViewModel {
                 } catch (IllegalArgumentException e) {
                     return Optional.of(e.getMessage());
                 }
-            case THRESHOLD:
-                return RowThreshold.problem(row);
+            case THRESHOLD, FLOOR:
+                return RowThreshold.problem(row, field);
             case INDEX, TARGET, CONFIDENCE, EXPECTED_CP:
                 return RowRequirement.problem(row, field);
             case UNIT:
@@ -393,6 +397,7 @@ public final class PartViewModel extends StepViewModel {
             case EXPECTED_CP -> "Expected Cp";
             case SHAPE -> "Shape";
             case THRESHOLD -> "Threshold";
+            case FLOOR -> "Floor";
             case GAUGE -> "Gauge";
             case RESOLUTION -> "Resolution";
         };

@@ -91,6 +91,7 @@ public final class PlanDrafts {
             r.put("expected_cp", ch.expectation().potential().isPresent() ? num(ch.expectation().potential().getAsDouble()) : "");
             r.put("shape", ch.shape().token());
             r.put("threshold", ch.threshold().isPresent() ? num(ch.threshold().getAsDouble()) : "");
+            r.put("floor", ch.floor().isPresent() ? num(ch.floor().getAsDouble()) : "");
             r.put("gauge", ch.gauge().map(Gauge::name).orElse(""));
             r.put("resolution", ch.gauge().map(g -> num(g.resolution())).orElse(""));
             rows.add(r);
@@ -122,7 +123,7 @@ public final class PlanDrafts {
                     row.text(CharacteristicField.UNIT).trim(), nominal, row.limits().orElseThrow(), gauge,
                     RowRequirement.of(row, Optional.of(requirement)).orElseThrow(() -> new IllegalArgumentException(
                             "the requirement of " + row.id() + " is not complete")), e,
-                    shape, RowThreshold.of(row)));
+                    shape, RowThreshold.of(row), RowThreshold.floorOf(row)));
         }
         Part part = new Part(d.text(DraftField.PART_NAME), d.text(DraftField.PART_NUMBER), d.text(DraftField.PART_REVISION));
         People people = new People(d.text(DraftField.PREPARED_BY), d.text(DraftField.COLLECTOR));

@@ -7,14 +7,12 @@ import java.util.Optional;
 import java.util.OptionalDouble;
 
 /**
- * The declared threshold θ of one characteristic row ({@link CharacteristicField#THRESHOLD}), as the command line's
- * characteristics CSV gives it in its {@code threshold} column: a number for the threshold shapes ({@code lognormal3},
- * {@code weibull3}), blank for every other shape. The rules and their words are the plan model's
- * ({@link Characteristic#requireThreshold}), so the grid refuses what {@code plan new --threshold} and the CSV refuse.
- *
- * <p>The cell holds the number only. A later choice of how the number is meant (the exact threshold, or only a floor
- * below which θ lies) would be a cell of its own beside it, read here, so that the Part table, the draft and
- * {@link PlanDrafts#compose} keep asking this one class.
+ * The threshold θ of one characteristic row, given one of two ways as the command line's characteristics CSV gives
+ * it: the exact threshold ({@link CharacteristicField#THRESHOLD}, the {@code threshold} column) or a floor below
+ * which θ lies ({@link CharacteristicField#FLOOR}, the {@code floor} column) — exactly one of the two for the threshold
+ * shapes ({@code lognormal3}, {@code weibull3}), neither for every other shape. The rules and their words are the
+ * plan model's ({@link Characteristic#requireThreshold}), so the grid refuses what {@code plan new --threshold} /
+ * {@code --floor} and the CSV refuse; the Part table, the draft and {@link PlanDrafts#compose} all ask this one class.
  */
 public final class RowThreshold {
 
@@ -28,11 +26,17 @@ public final class RowThreshold {
     }
 
     /**
-     * True when the row's shape takes a threshold, or a threshold is typed that must be cleared (the cell stays
-     * open to clear it); false when the cell has nothing to hold (shown empty and greyed).
+     * True when the row's shape takes a threshold, or the cell ({@link CharacteristicField#THRESHOLD} or
+     * {@link CharacteristicField#FLOOR}) holds a number that must be cleared (it stays open to clear it); false when
+     * the cell has nothing to hold (shown empty and greyed).
      */
-    public static boolean open(CharacteristicDraft row) {
-        return takes(row) || !FieldNumbers.isBlank(row.text(CharacteristicField.THRESHOLD));
+    public static boolean open(CharacteristicDraft row, CharacteristicField cell) {
+        return takes(row) || !FieldNumbers.isBlank(row.text(cell));
+    }
+
+    /** True for the two cells this class reads. */
+    public static boolean isThresholdCell(CharacteristicField field) {
+        return field == CharacteristicField.THRESHOLD || field == CharacteristicField.FLOOR;
     }
 
     /** True when the row's shape (as typed; an unknown shape takes none) is a threshold shape. */
@@ -41,23 +45,26 @@ public final class RowThreshold {
     }
 
     /**
-     * The problem of the threshold cell in the plan model's words (without the row's id, which the table's message
-     * already names), or empty when it is fine or the shape itself is not understood (the shape cell says so).
+     * The problem of the threshold or floor cell in the plan model's words (without the row's id, which the table's
+     * message already names), or empty when it is fine or the shape itself is not understood (the shape cell says so).
+     * A rule on the pair (neither given, both given) is the problem of both cells.
      */
-    public static Optional<String> problem(CharacteristicDraft row) {
+    public static Optional<String> problem(CharacteristicDraft row, CharacteristicField cell) {
         Optional<ShapeFamily> shape = shape(row);
         if (shape.isEmpty()) {
             return Optional.empty();
         }
-        String text = row.text(CharacteristicField.THRESHOLD).trim();
-        OptionalDouble theta = FieldNumbers.parse(text);
-        if (!text.isEmpty() && theta.isEmpty()) {
+        String text = row.text(cell).trim();
+        if (!text.isEmpty() && FieldNumbers.parse(text).isEmpty()) {
+            String label = cell == CharacteristicField.FLOOR ? "Floor" : "Threshold";
             return Optional.of(FieldNumbers.wrongMark(text)
-                    .orElseGet(() -> dev.proofrun.app.AppMessage.PART_NOT_A_NUMBER.format("Threshold", text)));
+                    .orElseGet(() -> dev.proofrun.app.AppMessage.PART_NOT_A_NUMBER.format(label, text)));
         }
+        OptionalDouble theta = FieldNumbers.parse(row.text(CharacteristicField.THRESHOLD).trim());
+        OptionalDouble floor = FieldNumbers.parse(row.text(CharacteristicField.FLOOR).trim());
         String id = row.id().isEmpty() ? "?" : row.id();
         try {
-            Characteristic.requireThreshold(id, shape.get(), theta, row.limits().orElse(NO_UPPER));
+            Characteristic.requireThreshold(id, shape.get(), theta, floor, row.limits().orElse(NO_UPPER));
             return Optional.empty();
         } catch (IllegalArgumentException refused) {
             String words = refused.getMessage();
@@ -73,12 +80,25 @@ public final class RowThreshold {
      * @throws IllegalArgumentException when the cell holds text that is not a number
      */
     public static OptionalDouble of(CharacteristicDraft row) {
-        String text = row.text(CharacteristicField.THRESHOLD).trim();
-        OptionalDouble theta = FieldNumbers.parse(text);
-        if (!text.isEmpty() && theta.isEmpty()) {
-            throw new IllegalArgumentException(row.id() + ": the threshold is not a number: '" + dev.proofrun.text.Shown.cell(text) + "'");
+        return number(row, CharacteristicField.THRESHOLD, "threshold");
+    }
+
+    /**
+     * The floor the row declares: the typed number, empty when the cell is blank.
+     *
+     * @throws IllegalArgumentException when the cell holds text that is not a number
+     */
+    public static OptionalDouble floorOf(CharacteristicDraft row) {
+        return number(row, CharacteristicField.FLOOR, "floor");
+    }
+
+    private static OptionalDouble number(CharacteristicDraft row, CharacteristicField cell, String words) {
+        String text = row.text(cell).trim();
+        OptionalDouble value = FieldNumbers.parse(text);
+        if (!text.isEmpty() && value.isEmpty()) {
+            throw new IllegalArgumentException(row.id() + ": the " + words + " is not a number: '" + dev.proofrun.text.Shown.cell(text) + "'");
         }
-        return theta;
+        return value;
     }
 
     private static Optional<ShapeFamily> shape(CharacteristicDraft row) {

@@ -55,9 +55,10 @@ class PartThresholdTest {
         CharacteristicDraft row = runout();
         row.cell(SHAPE).set("lognormal3");
         assertTrue(vm.cellOpen(row, THRESHOLD));
-        assertEquals("the lognormal3 shape needs a threshold (the stop or datum the readings cannot go below)",
+        assertEquals("the lognormal3 shape needs a threshold (the stop or datum the readings cannot go below) or a floor (when only a stop below the real start is known)",
                 vm.problem(row, THRESHOLD).orElseThrow());
-        assertEquals("row 1 (R2): the lognormal3 shape needs a threshold (the stop or datum the readings cannot go below)",
+        assertEquals("row 1 (R2): the lognormal3 shape needs a threshold (the stop or datum the readings cannot go below)"
+                + " or a floor (when only a stop below the real start is known)",
                 vm.missingProperty().get(), "the step misses it, naming row and id once");
         row.cell(THRESHOLD).set("0");
         assertEquals(Optional.empty(), vm.problem(row, THRESHOLD));
@@ -160,5 +161,42 @@ class PartThresholdTest {
         assertEquals(2, vm.paste(0, SHAPE.ordinal(), "lognormal3\t0.001\n"));
         assertEquals("0.001", row.text(THRESHOLD));
         assertEquals(Optional.empty(), vm.problem(row, THRESHOLD));
+    }
+
+    private static final CharacteristicField FLOOR = CharacteristicField.FLOOR;
+
+    @Test
+    void aFloorInsteadOfAThresholdCompletesTheRowAndBothAreRefusedInThePlanModelsWords() {
+        CharacteristicDraft row = runout();
+        assertFalse(vm.cellOpen(row, FLOOR), "normal takes no floor either");
+        row.cell(SHAPE).set("lognormal3");
+        assertTrue(vm.cellOpen(row, FLOOR));
+        row.cell(FLOOR).set("0");
+        assertEquals(Optional.empty(), vm.problem(row, FLOOR));
+        assertEquals(Optional.empty(), vm.problem(row, THRESHOLD), "a floor stands for the threshold");
+        assertEquals("", vm.missingProperty().get());
+        row.cell(THRESHOLD).set("0");
+        String both = "give a threshold or a floor, not both (a threshold when the real start of the readings is known"
+                + " exactly, a floor when only the stop below it is)";
+        assertEquals(both, vm.problem(row, FLOOR).orElseThrow());
+        assertEquals(both, vm.problem(row, THRESHOLD).orElseThrow(), "a rule on the pair marks both cells");
+        row.cell(THRESHOLD).set("");
+        row.cell(FLOOR).set("stop");
+        assertEquals("Floor 'stop' is not a number", vm.problem(row, FLOOR).orElseThrow());
+        row.cell(FLOOR).set("0.080");
+        assertEquals("the floor 0.08 must lie below the upper limit 0.08", vm.problem(row, FLOOR).orElseThrow());
+    }
+
+    @Test
+    void aShapeThatTakesNoThresholdEmptiesTheFloorInTheSameUndoableEdit() {
+        CharacteristicDraft row = runout();
+        vm.setCell(0, SHAPE, "weibull3");
+        vm.setCell(0, FLOOR, "0");
+        vm.setCell(0, SHAPE, "normal");
+        assertEquals("", row.text(FLOOR));
+        assertFalse(vm.cellOpen(row, FLOOR));
+        vm.undo();
+        assertEquals("weibull3", row.text(SHAPE));
+        assertEquals("0", row.text(FLOOR), "one undo brings shape and floor back");
     }
 }

@@ -110,7 +110,7 @@ class PartViewModelTest {
         Files.writeString(csv, "id,name,unit,tolerance\nA1,x,mm,3\n");
         assertFalse(vm.importList(csv));
         assertEquals("bad.csv, row 1, column tolerance: unknown column 'tolerance' "
-                + "(expected id,name,unit,nominal,lsl,usl,index,target,confidence,expected,expected_cp,shape,threshold,gauge,resolution)", vm.importMessageProperty().get());
+                + "(expected id,name,unit,nominal,lsl,usl,index,target,confidence,expected,expected_cp,shape,threshold,floor,gauge,resolution)", vm.importMessageProperty().get());
         assertEquals(1, vm.rows().size());
     }
 

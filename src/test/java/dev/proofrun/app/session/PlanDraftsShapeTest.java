@@ -159,4 +159,31 @@ class PlanDraftsShapeTest {
                 row -> demo.characteristic(row.id()).orElseThrow().expectation(), demo.calendar(), demo.span(),
                 demo.design(), demo.spacing(), demo.seed(), demo.schedule());
     }
+
+    @Test
+    void aFloorTypedInTheGridReachesThePlanAndAReopenedPlanKeepsIt() throws Exception {
+        StudyPlan demo = DemoPlan.create();
+        Session session = opened(demo);
+        CharacteristicDraft d1 = session.draft().characteristics().get(0);
+        assertEquals("", d1.text(CharacteristicField.FLOOR), "a normal row holds none");
+        // an invented stop 0.5 below the lower limit, known only as a floor
+        double floor = demo.characteristics().get(0).limits().lower().getAsDouble() - 0.5;
+        String typed = java.math.BigDecimal.valueOf(floor).toPlainString();
+        d1.cell(CharacteristicField.SHAPE).set("weibull3");
+        d1.cell(CharacteristicField.FLOOR).set(typed);
+        StudyPlan composed = composed(session, demo);
+        String id = d1.id();
+        assertEquals(java.util.OptionalDouble.of(floor), composed.characteristic(id).orElseThrow().floor());
+        assertEquals(java.util.OptionalDouble.empty(), composed.characteristic(id).orElseThrow().threshold());
+
+        // the plan written with it opens with the floor in its cell, not lost when the draft is rebuilt
+        Path issued = Files.createDirectories(home.resolve("issued")).resolve("floor.json");
+        PlanFiles.write(issued, composed);
+        Session reader = new Session(new AppHome(home.resolve("other"), home.resolve("issued")));
+        reader.open(issued);
+        CharacteristicDraft reopened = reader.draft().characteristics().get(0);
+        assertEquals(floor, Double.parseDouble(reopened.text(CharacteristicField.FLOOR)), 0.0, "exact");
+        assertEquals("", reopened.text(CharacteristicField.THRESHOLD));
+        assertEquals(composed.characteristics(), composed(reader, demo).characteristics());
+    }
 }
