@@ -62,12 +62,23 @@ public record PlanDesign(Design design, String reason, Optional<SharedDesign> so
         SharedDesign best = designs.get(0);
         int n = best.subgroupSize();
         int k = subgroups.orElse(best.subgroups());
-        String reason = subgroups.isPresent()
-                ? String.format(Locale.ROOT, "subgroups of %d as sized by the designer; %d subgroups as given (the designer asked for %d).",
-                        n, k, best.subgroups())
-                : String.format(Locale.ROOT, "%d subgroups of %d (%d readings): the fewest readings that give every characteristic"
-                        + " the wanted power of %.2f; %s needs the most subgroups.", k, n, n * k, power,
-                        characteristics.get(best.driver()).id());
+        List<String> floors = characteristics.stream().filter(c -> c.floor().isPresent()).map(Characteristic::id).toList();
+        String reason;
+        if (subgroups.isPresent()) {
+            reason = String.format(Locale.ROOT, "subgroups of %d as sized by the designer; %d subgroups as given (the designer asked for %d).",
+                    n, k, best.subgroups());
+        } else if (floors.size() == characteristics.size()) {
+            // a floor's power is not what the normal model says (stats.FloorBound): never called the wanted power
+            reason = String.format(Locale.ROOT, "%d subgroups of %d (%d readings): sized as the normal model would for a power of"
+                    + " %.2f, but no power is promised: every characteristic is planned with a floor.", k, n, n * k, power);
+        } else {
+            String those = floors.isEmpty() ? "every characteristic" : "every characteristic without a floor";
+            String unpromised = floors.isEmpty() ? "" : String.format(Locale.ROOT, " (none is promised for %s, planned with a floor)",
+                    String.join(", ", floors));
+            reason = String.format(Locale.ROOT, "%d subgroups of %d (%d readings): the fewest readings that give %s"
+                    + " the wanted power of %.2f%s; %s needs the most subgroups.", k, n, n * k, those, power, unpromised,
+                    characteristics.get(best.driver()).id());
+        }
         return new PlanDesign(Design.of(n, k), reason, Optional.of(best));
     }
 

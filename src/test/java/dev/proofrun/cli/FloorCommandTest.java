@@ -49,6 +49,13 @@ class FloorCommandTest {
         Path file = dir.resolve("p.json");
         assertEquals(0, cli.run(single(file, "--shape", "lognormal3", "--floor", "9.95")), cli.err());
         assertTrue(cli.out().contains("no power is promised for a floor"), cli.out());
+        assertFalse(cli.out().contains("the wanted power of"), "the design line never calls a floor's power the wanted one");
+        Path sized = dir.resolve("sized.json");
+        assertEquals(0, cli.run("plan", "new", "--out", sized.toString(), "--part", "pressed sleeve", "--characteristic",
+                "seated height", "--unit", "mm", "--usl", "10.10", "--target", "1.33", "--expected", "1.8", "--shape",
+                "lognormal3", "--floor", "9.95", "--subgroup-size", "5", "--start", "2027-05-03T06:00"), cli.err());
+        assertTrue(cli.out().contains("sized as the normal model would for a power of 0.90, but no power is promised: every"
+                + " characteristic is planned with a floor."), cli.out());
         String json = Files.readString(file);
         assertTrue(json.contains("\"floor\"") && !json.contains("\"threshold\""), json);
         assertEquals(OptionalDouble.of(9.95), PlanFiles.read(file).characteristics().get(0).floor());
@@ -89,6 +96,12 @@ class FloorCommandTest {
                 "--subgroup-size", "5", "--subgroups", "25", "--zone", "Europe/Berlin", "--start", "2027-05-03T06:00"), cli.err());
         assertEquals(List.of(OptionalDouble.empty(), OptionalDouble.of(9.95)),
                 PlanFiles.read(file).characteristics().stream().map(c -> c.floor()).toList());
+        // sized by the designer, the design line promises the power to D1 only
+        Path sized = dir.resolve("sized.json");
+        assertEquals(0, cli.run("plan", "new", "--out", sized.toString(), "--part", "sleeve", "--characteristics", csv.toString(),
+                "--subgroup-size", "5", "--zone", "Europe/Berlin", "--start", "2027-05-03T06:00"), cli.err());
+        assertTrue(cli.out().contains("the fewest readings that give every characteristic without a floor the wanted power of"
+                + " 0.90 (none is promised for H2, planned with a floor)"), cli.out());
 
         assertEquals(0, cli.run("size", "--characteristics", csv.toString(), "--subgroup-size", "5"), cli.err());
         assertTrue(cli.out().contains("H2 is planned weibull3, floor 9.95, but its power here is the normal model's, and no"
