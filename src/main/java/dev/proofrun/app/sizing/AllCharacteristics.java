@@ -12,6 +12,7 @@ import dev.proofrun.design.Requirement;
 import dev.proofrun.design.SharedDesign;
 import dev.proofrun.design.SharedDesigner;
 import dev.proofrun.design.StudyDesigner;
+import dev.proofrun.app.session.CharacteristicField;
 import dev.proofrun.stats.ShapeFamily;
 import dev.proofrun.text.UserException;
 import java.util.ArrayList;
@@ -137,10 +138,11 @@ final class AllCharacteristics {
     /**
      * What is computed, from the rows as typed: one request per usable characteristic.
      *
-     * @param shapes the planned shape of each characteristic counted, in request order
+     * @param shapes  the planned shape of each characteristic counted, in request order
+     * @param floored the ids of those planned with a floor (no power is promised for them)
      */
     record Asked(double power, List<String> ids, List<DesignRequest> requests, List<String> leftOut,
-            List<ShapeFamily> shapes) {
+            List<ShapeFamily> shapes, java.util.Set<String> floored) {
     }
 
     /** The powers at (n, k), in request order (NaN where the designer cannot evaluate one). */
@@ -153,6 +155,7 @@ final class AllCharacteristics {
         List<DesignRequest> requests = new ArrayList<>();
         List<String> leftOut = new ArrayList<>();
         List<ShapeFamily> shapes = new ArrayList<>();
+        java.util.Set<String> floored = new java.util.HashSet<>();
         for (CharacteristicDraft row : rows) {
             Optional<Expectation> e = expectation.apply(row);
             Optional<Requirement> r = RowRequirement.of(row, plan);
@@ -164,11 +167,15 @@ final class AllCharacteristics {
                 requests.add(DesignRequest.of(row.limits().get().sides(), r.get(), e.get()).withPower(power));
                 ids.add(row.id());
                 shapes.add(shapeOrNormal(row));
+                if (!row.text(CharacteristicField.FLOOR).isBlank()) {
+                    floored.add(row.id());
+                }
             } catch (UserException | IllegalArgumentException refused) {
                 leftOut.add(row.id());
             }
         }
-        return new Asked(power, List.copyOf(ids), List.copyOf(requests), List.copyOf(leftOut), List.copyOf(shapes));
+        return new Asked(power, List.copyOf(ids), List.copyOf(requests), List.copyOf(leftOut), List.copyOf(shapes),
+                java.util.Set.copyOf(floored));
     }
 
     private static ShapeFamily shapeOrNormal(CharacteristicDraft row) {
@@ -229,8 +236,11 @@ final class AllCharacteristics {
         StringBuilder s = new StringBuilder();
         for (int i = 0; i < a.shapes().size(); i++) {
             ShapeFamily f = a.shapes().get(i);
-            if (!f.isNormal()) {
-                s.append(SizingMessage.SHAPE_NORMAL_MODEL.format(a.ids().get(i), f.token(), f.token()));
+            String id = a.ids().get(i);
+            if (a.floored().contains(id)) {
+                s.append(SizingMessage.SHAPE_FLOOR.format(id, f.token()));
+            } else if (!f.isNormal()) {
+                s.append(SizingMessage.SHAPE_NORMAL_MODEL.format(id, f.token(), f.token()));
             }
         }
         return s.toString();

@@ -111,6 +111,20 @@ class SizingSharedTest {
     }
 
     @Test
+    void aCharacteristicWithAFloorIsPromisedNoPower() {
+        CharacteristicDraft seat = CharacteristicDraft.of(Map.of("id", "H6", "unit", "mm", "usl", "10.10",
+                "expected", "1.8", "shape", "weibull3", "floor", "9.95"));
+        draft.characteristics().addAll(bore, seat);
+        String line = vm.togetherProperty().get();
+        assertTrue(line.contains("H6 is planned weibull3 with a floor: no power is promised for it"), line);
+        assertFalse(line.contains("H6 is planned weibull3: its power here"), line);
+        seat.cell(CharacteristicField.FLOOR).set("");
+        seat.cell(CharacteristicField.THRESHOLD).set("9.95");
+        assertTrue(vm.togetherProperty().get().contains("H6 is planned weibull3: its power here is the normal model's"),
+                vm.togetherProperty().get());
+    }
+
+    @Test
     void theTablesHeadersAreTheCommandLinesWords() throws Exception {
         StringWriter out = new StringWriter();
         int code = ProofrunCommand.run(new PrintWriter(out, true), new PrintWriter(new StringWriter(), true),
