@@ -214,9 +214,11 @@ final class AllCharacteristics {
         StringBuilder shortOf = new StringBuilder();
         double all = 1;
         for (int i = 0; i < powers.length; i++) {
-            each.append(i == 0 ? "" : ", ").append(a.ids().get(i)).append(' ').append(SizingViewModel.fmtOrDash(powers[i]));
-            all *= powers[i];
-            if (!(powers[i] >= a.power())) {
+            // a floor's power is not the normal model's figure and is not computed here: a dash, and not reached
+            double power = a.floored().contains(a.ids().get(i)) ? Double.NaN : powers[i];
+            each.append(i == 0 ? "" : ", ").append(a.ids().get(i)).append(' ').append(SizingViewModel.fmtOrDash(power));
+            all *= power;
+            if (!(power >= a.power())) {
                 shortOf.append(shortOf.length() == 0 ? "" : ", ").append(a.ids().get(i));
             }
         }

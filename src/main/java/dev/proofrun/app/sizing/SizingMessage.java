@@ -22,9 +22,9 @@ public enum SizingMessage implements MessageKey {
     SHAPE_NORMAL_MODEL(" %s is planned %s: its power here is the normal model's, as plan new sizes it; the percentile"
             + " bound of a skewed shape needs its expected skewness, which the plan does not keep (size it with"
             + " size --shape %s --skewness G)."),
-    SHAPE_FLOOR(" %s is planned %s with a floor: no power is promised for it, and the figure here is the normal model's;"
-            + " not knowing the threshold costs most of the power (plan a much larger study, or give the threshold where"
-            + " it is known exactly)."),
+    SHAPE_FLOOR(" %s is planned %s with a floor: no power is promised for it (a dash above), and the design is the normal"
+            + " model's; not knowing the threshold costs most of the power (plan a much larger study, or give the"
+            + " threshold where it is known exactly)."),
     /** The looks chooser's label and choices. */
     LOOKS_LABEL("Looks at the data (the study may stop early at a look when the answer is clear)"),
     LOOKS_ONE("1: grade once, at the end"),

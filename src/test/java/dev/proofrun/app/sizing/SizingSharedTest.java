@@ -118,6 +118,7 @@ class SizingSharedTest {
         String line = vm.togetherProperty().get();
         assertTrue(line.contains("H6 is planned weibull3 with a floor: no power is promised for it"), line);
         assertFalse(line.contains("H6 is planned weibull3: its power here"), line);
+        assertTrue(line.contains("H6 —") && line.contains("that all are, in the one study (taken as independent): —"), line);
         seat.cell(CharacteristicField.FLOOR).set("");
         seat.cell(CharacteristicField.THRESHOLD).set("9.95");
         assertTrue(vm.togetherProperty().get().contains("H6 is planned weibull3: its power here is the normal model's"),
