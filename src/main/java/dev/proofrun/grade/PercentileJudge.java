@@ -3,6 +3,7 @@ package dev.proofrun.grade;
 import dev.proofrun.design.Requirement;
 import dev.proofrun.stats.BoundEngine;
 import dev.proofrun.stats.IndexKind;
+import dev.proofrun.stats.PercentileEstimate;
 import dev.proofrun.stats.PercentileIndex;
 import dev.proofrun.stats.FoldedNormalBound;
 import dev.proofrun.stats.PivotalBound;
@@ -64,8 +65,7 @@ final class PercentileJudge {
         }
         long seed = PivotalBound.DEFAULT_SEED;
         boolean pivotal = family.isLocationScale();
-        BoundEngine bound = pivotal ? PivotalBound.Estimate.of(fit, kind, limits, readings, seed)
-                : FoldedNormalBound.Estimate.of(fit, kind, limits, readings, seed);
+        BoundEngine bound = PercentileEstimate.of(fit, kind, limits, readings, seed);
         double estimate = bound.estimate();
         if (Double.isNaN(estimate)) {
             return null;

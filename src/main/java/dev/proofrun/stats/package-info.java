@@ -30,8 +30,9 @@
  * 94.8–95.1 %, centred 96.0–96.6 % (conservative); see {@code CapabilityBoundsCoverageTest}.</li>
  * <li>{@code BoundEngine}: the one entry point for a bound — {@code NormalTheoryBound} (which formula of
  * {@code CapabilityBounds} applies, decided once; its inverse {@code passingEstimate} for the designer) and
- * {@code PivotalBound.Estimate} (the shapes' generalized pivotal bound). {@code Confidence} holds the two ranges:
- * stated (0.5, 0.9999) and computable (0.5, 1), the latter for a staged study's per-look confidence.</li>
+ * {@code PercentileEstimate} (the shapes' bound: generalized pivotal, or inverted for the folded normal).
+ * {@code Confidence} holds the two ranges: stated (0.5, 0.9999) and computable (0.5, 1), the latter for a staged
+ * study's per-look confidence.</li>
  * </ul>
  */
 package dev.proofrun.stats;
