@@ -10,6 +10,7 @@ import dev.proofrun.stats.SampleMoments;
 import dev.proofrun.stats.SigmaEstimate;
 import dev.proofrun.stats.SigmaMethod;
 import dev.proofrun.stats.SpecLimits;
+import dev.proofrun.stats.Subgroups;
 import dev.proofrun.stats.WithinSigma;
 import dev.proofrun.text.UserException;
 import java.util.List;
@@ -117,7 +118,7 @@ public final class CapabilityAnalysis {
                 Nonconforming.expectedPpm(limits, mean, s),
                 Nonconforming.observedOutside(limits, subgroups), total);
         Optional<AndersonDarling.Result> normality = testNormality && total >= AndersonDarling.MIN_READINGS
-                ? Optional.of(AndersonDarling.test(flatten(subgroups, n))) : Optional.empty();
+                ? Optional.of(AndersonDarling.test(Subgroups.flatten(subgroups))) : Optional.empty();
         return new CapabilityResult(total, subgroups.size(), size, mean, within, s, limits, target, idx, lower,
                 confidence, bound, ppm, normality);
     }
@@ -192,15 +193,5 @@ public final class CapabilityAnalysis {
             }
         }
         return OptionalInt.of(n);
-    }
-
-    private static double[] flatten(List<double[]> subgroups, int total) {
-        double[] all = new double[total];
-        int i = 0;
-        for (double[] g : subgroups) {
-            System.arraycopy(g, 0, all, i, g.length);
-            i += g.length;
-        }
-        return all;
     }
 }

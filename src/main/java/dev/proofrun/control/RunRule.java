@@ -1,5 +1,6 @@
 package dev.proofrun.control;
 
+import dev.proofrun.text.Tokens;
 import java.util.Locale;
 
 /**
@@ -57,11 +58,7 @@ public enum RunRule {
 
     /** @throws IllegalArgumentException for an unknown id */
     public static RunRule fromId(String id) {
-        for (RunRule r : values()) {
-            if (r.id.equalsIgnoreCase(id.trim())) {
-                return r;
-            }
-        }
-        throw new IllegalArgumentException(String.format(Locale.ROOT, "unknown run rule '%s'", id));
+        return Tokens.find(RunRule.class, RunRule::id, id)
+                .orElseThrow(() -> new IllegalArgumentException(String.format(Locale.ROOT, "unknown run rule '%s'", id)));
     }
 }

@@ -3,6 +3,7 @@ package dev.proofrun.grade;
 import dev.proofrun.design.Design;
 import dev.proofrun.stats.IndexKind;
 import dev.proofrun.stats.SpecLimits;
+import dev.proofrun.stats.Subgroups;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.OptionalDouble;
@@ -32,7 +33,7 @@ final class CapabilityJudge {
         IndexKind kind = gc.requirement().index();
         List<double[]> data = subgroups;
         SpecLimits limits = gc.limits();
-        double[] x = ShapeJudge.flatten(data);
+        double[] x = Subgroups.flatten(data);
         int n = x.length;
         double mean = 0;
         for (double v : x) {

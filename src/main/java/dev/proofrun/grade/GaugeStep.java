@@ -3,6 +3,7 @@ package dev.proofrun.grade;
 import dev.proofrun.control.StabilityRule;
 import dev.proofrun.stats.ReadingGrid;
 import dev.proofrun.stats.ShapeFamily;
+import dev.proofrun.stats.Subgroups;
 import java.util.List;
 import java.util.Locale;
 
@@ -39,7 +40,7 @@ record GaugeStep(double step, boolean detected, double sigma) {
         if (recorded > 0) {
             return new GaugeStep(recorded, false, sigma);
         }
-        return new GaugeStep(ReadingGrid.step(ShapeJudge.flatten(subgroups)), true, sigma);
+        return new GaugeStep(ReadingGrid.step(Subgroups.flatten(subgroups)), true, sigma);
     }
 
     /** The shape when it cannot be judged (a too coarse step): no model fits, no capability statement. */

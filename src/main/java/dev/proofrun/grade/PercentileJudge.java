@@ -4,6 +4,7 @@ import dev.proofrun.design.Requirement;
 import dev.proofrun.stats.BoundEngine;
 import dev.proofrun.stats.FloorBound;
 import dev.proofrun.stats.IndexKind;
+import dev.proofrun.stats.PercentileEstimate;
 import dev.proofrun.stats.PercentileIndex;
 import dev.proofrun.stats.FoldedNormalBound;
 import dev.proofrun.stats.PivotalBound;
@@ -68,8 +69,7 @@ final class PercentileJudge {
         FloorBound.ThresholdSet floorSet = shape.thresholds();
         BoundEngine bound = floorSet != null
                 ? new FloorBound.Estimate(floorSet, kind, limits, seed, PercentileIndex.of(kind, limits, fit))
-                : pivotal ? PivotalBound.Estimate.of(fit, kind, limits, readings, seed)
-                : FoldedNormalBound.Estimate.of(fit, kind, limits, readings, seed);
+                : PercentileEstimate.of(fit, kind, limits, readings, seed);
         double estimate = bound.estimate();
         if (Double.isNaN(estimate)) {
             return null;

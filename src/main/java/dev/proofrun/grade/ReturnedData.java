@@ -2,7 +2,6 @@ package dev.proofrun.grade;
 
 import dev.proofrun.plan.OffsetTimes;
 import dev.proofrun.text.CsvDialect;
-import dev.proofrun.text.Decimals;
 import dev.proofrun.text.FormulaGuard;
 import dev.proofrun.text.Location;
 import dev.proofrun.text.Shown;
@@ -250,7 +249,7 @@ final class ReturnedData implements RowHandler {
 
     private void reading(SlotReadings col, int ci, int si, long row, String text, int column, String id) {
         double v = CsvDialect.number(text);
-        if (Double.isInfinite(v) || Decimals.namesNonFinite(text)) { // 1e309 overflows; a gauge may write "Infinity"
+        if (CsvDialect.namesNonFinite(text, v)) { // 1e309 overflows; a gauge may write "Infinity"
             col.spoiled[si] = true;
             col.outOfReach++;
             log.add(Location.cell(display, row, name(column)), Severity.ERROR, id, GradeMessage.NOT_FINITE, Shown.cell(text));

@@ -8,6 +8,7 @@ import dev.proofrun.stats.ShapeFamily;
 import dev.proofrun.stats.ShapeFit;
 import dev.proofrun.stats.ShapeFitter;
 import dev.proofrun.stats.SpecLimits;
+import dev.proofrun.stats.Subgroups;
 import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
@@ -64,20 +65,6 @@ final class ShapeJudge {
     private ShapeJudge() {
     }
 
-    static double[] flatten(List<double[]> subgroups) {
-        int total = 0;
-        for (double[] g : subgroups) {
-            total += g.length;
-        }
-        double[] x = new double[total];
-        int i = 0;
-        for (double[] g : subgroups) {
-            System.arraycopy(g, 0, x, i, g.length);
-            i += g.length;
-        }
-        return x;
-    }
-
     /** The readings spread over their resolution cells (a copy; unchanged when r = 0), kept above {@code floor}. */
     static double[] spread(double[] x, double resolution, double floor) {
         if (!(resolution > 0)) {
@@ -111,7 +98,7 @@ final class ShapeJudge {
      */
     static Shape judge(List<double[]> subgroups, List<String> slots, double resolution, ShapeFamily family,
             double threshold, SpecLimits limits, List<Reason> reasons) {
-        double[] x = flatten(subgroups);
+        double[] x = Subgroups.flatten(subgroups);
         ShapeModel model = ShapeModel.of(family);
         ShapeFitter.Outcome o = ShapeFitter.fit(family, threshold, x);
         if (!o.fitted()) {
@@ -162,7 +149,7 @@ final class ShapeJudge {
      */
     static Shape judgeFloor(List<double[]> subgroups, List<String> slots, double resolution, ShapeFamily family,
             double floor, double gamma, SpecLimits limits, List<Reason> reasons) {
-        double[] x = flatten(subgroups);
+        double[] x = Subgroups.flatten(subgroups);
         ShapeModel model = ShapeModel.of(family);
         ShapeFitter.Outcome atFloor = ShapeFitter.fit(family, floor, x);
         if (!atFloor.fitted()) {

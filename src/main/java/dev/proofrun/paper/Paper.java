@@ -1,5 +1,6 @@
 package dev.proofrun.paper;
 
+import dev.proofrun.text.Tokens;
 import java.util.Locale;
 import org.apache.pdfbox.pdmodel.common.PDRectangle;
 
@@ -37,11 +38,7 @@ public enum Paper {
      * @throws IllegalArgumentException for any other word
      */
     public static Paper of(String word) {
-        for (Paper p : values()) {
-            if (p.name().equalsIgnoreCase(word.trim())) {
-                return p;
-            }
-        }
-        throw new IllegalArgumentException(String.format(Locale.ROOT, "unknown paper '%s' (a4 or letter)", word));
+        return Tokens.find(Paper.class, Paper::name, word)
+                .orElseThrow(() -> new IllegalArgumentException(String.format(Locale.ROOT, "unknown paper '%s' (a4 or letter)", word)));
     }
 }

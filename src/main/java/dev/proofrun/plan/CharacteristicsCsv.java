@@ -7,7 +7,6 @@ import dev.proofrun.stats.ShapeFamily;
 import dev.proofrun.stats.SpecLimits;
 import dev.proofrun.text.CsvDialect;
 import dev.proofrun.text.CsvReader;
-import dev.proofrun.text.Decimals;
 import dev.proofrun.text.Location;
 import dev.proofrun.text.UserException;
 import java.nio.file.NoSuchFileException;
@@ -146,7 +145,7 @@ public final class CharacteristicsCsv {
                 return OptionalDouble.empty();
             }
             double x = CsvDialect.number(v);
-            if (!Double.isFinite(x) || Decimals.namesNonFinite(v)) {
+            if (Double.isNaN(x) || CsvDialect.namesNonFinite(v, x)) {
                 throw new UserException(Location.cell(file, row, col), PlanMessage.CSV_BAD_CELL, "not a number: '" + v + "'");
             }
             return OptionalDouble.of(x);

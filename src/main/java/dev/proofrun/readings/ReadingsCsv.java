@@ -2,7 +2,6 @@ package dev.proofrun.readings;
 
 import dev.proofrun.text.CsvDialect;
 import dev.proofrun.text.CsvReader;
-import dev.proofrun.text.Decimals;
 import dev.proofrun.text.Location;
 import dev.proofrun.text.Shown;
 import dev.proofrun.text.UserException;
@@ -212,7 +211,7 @@ public final class ReadingsCsv {
         }
         double x = CsvDialect.number(text);
         Location where = Location.cell(name, r.number(), column);
-        if (Double.isInfinite(x) || Decimals.namesNonFinite(text)) {
+        if (CsvDialect.namesNonFinite(text, x)) {
             throw new UserException(where, ReadingsMessage.NOT_FINITE, Shown.cell(text));
         }
         if (Double.isNaN(x)) {

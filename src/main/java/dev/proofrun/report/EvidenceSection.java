@@ -17,6 +17,7 @@ import dev.proofrun.paper.TextTable;
 import dev.proofrun.paper.TextTable.Column;
 import dev.proofrun.paper.Typeface;
 import dev.proofrun.stats.IndexKind;
+import dev.proofrun.stats.Subgroups;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -96,7 +97,7 @@ final class EvidenceSection {
 
         List<Block> h = new ArrayList<>();
         Shape sh = g.shape();
-        double[] x = flatten(g.subgroups());
+        double[] x = Subgroups.flatten(g.subgroups());
         if (sh != null && x.length > 0) {
             ModelCurve curve = Histogram.curve(sh, x);
             h.add(new HistogramBlock(x, g.limits(), nominal, step, curve, "Readings against the limits", regular, bold));
@@ -236,20 +237,6 @@ final class EvidenceSection {
     /** One entry per pattern (a run of one rule over consecutive subgroups), as the reasons say it. */
     private static String signals(List<SlotSignal> signals) {
         return dev.proofrun.grade.SignalPatterns.describe(signals);
-    }
-
-    static double[] flatten(List<double[]> subgroups) {
-        int n = 0;
-        for (double[] s : subgroups) {
-            n += s.length;
-        }
-        double[] x = new double[n];
-        int i = 0;
-        for (double[] s : subgroups) {
-            System.arraycopy(s, 0, x, i, s.length);
-            i += s.length;
-        }
-        return x;
     }
 
     static double mean(double[] x) {

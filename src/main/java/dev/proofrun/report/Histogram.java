@@ -4,6 +4,7 @@ import dev.proofrun.grade.CharacteristicGrade;
 import dev.proofrun.grade.ModelFit;
 import dev.proofrun.grade.Shape;
 import dev.proofrun.stats.SpecLimits;
+import dev.proofrun.stats.Subgroups;
 import java.util.Optional;
 import java.util.OptionalDouble;
 
@@ -39,7 +40,7 @@ public record Histogram(Bins bins, long[] counts, double lo, double hi, double[]
      */
     public static Optional<Histogram> of(CharacteristicGrade g, double nominal, double step) {
         Shape sh = g.shape();
-        double[] x = EvidenceSection.flatten(g.subgroups());
+        double[] x = Subgroups.flatten(g.subgroups());
         if (sh == null || x.length == 0) {
             return Optional.empty();
         }

@@ -1,5 +1,6 @@
 package dev.proofrun.schedule;
 
+import dev.proofrun.text.Tokens;
 import java.util.Locale;
 
 /**
@@ -36,11 +37,7 @@ public enum Spacing {
 
     /** @throws IllegalArgumentException for an unknown token */
     public static Spacing fromToken(String token) {
-        for (Spacing s : values()) {
-            if (s.token.equalsIgnoreCase(token.trim())) {
-                return s;
-            }
-        }
-        throw new IllegalArgumentException(String.format(Locale.ROOT, "unknown spacing '%s' (even or random)", token));
+        return Tokens.find(Spacing.class, Spacing::token, token)
+                .orElseThrow(() -> new IllegalArgumentException(String.format(Locale.ROOT, "unknown spacing '%s' (even or random)", token)));
     }
 }

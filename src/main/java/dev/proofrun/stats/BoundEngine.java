@@ -7,8 +7,9 @@ package dev.proofrun.stats;
  * <ul>
  * <li>{@link NormalTheoryBound}: normal theory — Cp/Pp exact chi-square, one-sided indices exact noncentral t,
  *     two-sided Cpk/Ppk by the chosen {@link BoundMethod} (exact or Bissell); formulas in {@link CapabilityBounds}.</li>
- * <li>{@link PivotalBound.Estimate}: the percentile index of a fitted lognormal or Weibull model by generalized
- *     pivotal quantities ({@link PivotalBound}).</li>
+ * <li>{@link PercentileEstimate}: the percentile index of a fitted model, by generalized pivotal quantities
+ *     ({@link PivotalBound}) for lognormal and Weibull, by test inversion ({@link FoldedNormalBound}) for the
+ *     folded normal.</li>
  * </ul>
  *
  * <p>The confidence is a parameter of every call, so a staged study can ask for the usual bound at a look's own

@@ -1,5 +1,6 @@
 package dev.proofrun.stats;
 
+import dev.proofrun.text.Tokens;
 import java.util.Locale;
 
 /**
@@ -30,11 +31,7 @@ public enum BoundMethod {
 
     /** @throws IllegalArgumentException for an unknown token */
     public static BoundMethod fromToken(String token) {
-        for (BoundMethod m : values()) {
-            if (m.token.equalsIgnoreCase(token.trim())) {
-                return m;
-            }
-        }
-        throw new IllegalArgumentException(String.format(Locale.ROOT, "unknown bound method '%s' (exact or bissell)", token));
+        return Tokens.find(BoundMethod.class, BoundMethod::token, token)
+                .orElseThrow(() -> new IllegalArgumentException(String.format(Locale.ROOT, "unknown bound method '%s' (exact or bissell)", token)));
     }
 }

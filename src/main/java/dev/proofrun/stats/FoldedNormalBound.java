@@ -284,28 +284,4 @@ public final class FoldedNormalBound {
         }
         return FoldedNormal.fit(x);
     }
-
-    /**
-     * The inverted bounds of one fitted folded-normal model's percentile index as a {@link BoundEngine}.
-     *
-     * @param estimate the index of the fitted model, {@link PercentileIndex#of(IndexKind, SpecLimits, ShapeFit)}
-     */
-    public record Estimate(ShapeFit fit, IndexKind kind, SpecLimits limits, int readings, long seed, double estimate)
-            implements BoundEngine {
-
-        /** The estimate of {@code kind} from the fit, with its inverted bounds. */
-        public static Estimate of(ShapeFit fit, IndexKind kind, SpecLimits limits, int readings, long seed) {
-            return new Estimate(fit, kind, limits, readings, seed, PercentileIndex.of(kind, limits, fit));
-        }
-
-        @Override
-        public double lower(double confidence) {
-            return bounds(fit, kind, limits, readings, confidence, seed)[0];
-        }
-
-        @Override
-        public double upper(double confidence) {
-            return bounds(fit, kind, limits, readings, confidence, seed)[1];
-        }
-    }
 }

@@ -1,5 +1,6 @@
 package dev.proofrun.stats;
 
+import dev.proofrun.text.Tokens;
 import java.util.Locale;
 
 /**
@@ -57,11 +58,7 @@ public enum IndexKind {
 
     /** @throws IllegalArgumentException for an unknown token */
     public static IndexKind fromToken(String token) {
-        for (IndexKind k : values()) {
-            if (k.token.equalsIgnoreCase(token.trim())) {
-                return k;
-            }
-        }
-        throw new IllegalArgumentException(String.format(Locale.ROOT, "unknown index '%s'", token));
+        return Tokens.find(IndexKind.class, IndexKind::token, token)
+                .orElseThrow(() -> new IllegalArgumentException(String.format(Locale.ROOT, "unknown index '%s'", token)));
     }
 }

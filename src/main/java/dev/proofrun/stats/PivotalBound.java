@@ -84,35 +84,6 @@ public final class PivotalBound {
         return new double[] {orderStatistic(c, alpha), orderStatistic(c, 1 - alpha)};
     }
 
-    /**
-     * The pivotal bounds of one fitted model's index as a {@link BoundEngine}.
-     *
-     * @param fit      the fitted model
-     * @param kind     the index
-     * @param limits   the specification limits the index is taken against
-     * @param readings N, the number of readings the fit came from
-     * @param seed     the seed of the pivot draws
-     * @param estimate the index of the fitted model, {@link PercentileIndex#of(IndexKind, SpecLimits, ShapeFit)}
-     */
-    public record Estimate(ShapeFit fit, IndexKind kind, SpecLimits limits, int readings, long seed, double estimate)
-            implements BoundEngine {
-
-        /** The estimate of {@code kind} from the fit, with its pivotal bounds. */
-        public static Estimate of(ShapeFit fit, IndexKind kind, SpecLimits limits, int readings, long seed) {
-            return new Estimate(fit, kind, limits, readings, seed, PercentileIndex.of(kind, limits, fit));
-        }
-
-        @Override
-        public double lower(double confidence) {
-            return bounds(fit, kind, limits, readings, confidence, seed)[0];
-        }
-
-        @Override
-        public double upper(double confidence) {
-            return bounds(fit, kind, limits, readings, confidence, seed)[1];
-        }
-    }
-
     /** The p-quantile of sorted values by linear interpolation between order statistics (Hyndman–Fan type 7). */
     static double orderStatistic(double[] sorted, double p) {
         double h = (sorted.length - 1) * p;

@@ -1,5 +1,6 @@
 package dev.proofrun.stats;
 
+import dev.proofrun.text.Tokens;
 import java.util.Arrays;
 import java.util.Locale;
 import java.util.stream.Collectors;
@@ -102,12 +103,8 @@ public enum ShapeFamily {
      * @throws IllegalArgumentException for an unknown name, listing the known ones
      */
     public static ShapeFamily fromToken(String token) {
-        String t = token == null ? "" : token.trim();
-        for (ShapeFamily f : values()) {
-            if (f.token.equalsIgnoreCase(t)) {
-                return f;
-            }
-        }
-        throw new IllegalArgumentException(String.format(Locale.ROOT, "unknown shape '%s'; the shapes are %s", t, names()));
+        return Tokens.find(ShapeFamily.class, ShapeFamily::token, token)
+                .orElseThrow(() -> new IllegalArgumentException(String.format(Locale.ROOT,
+                        "unknown shape '%s'; the shapes are %s", token == null ? "" : token.trim(), names())));
     }
 }

@@ -1,5 +1,6 @@
 package dev.proofrun.stats;
 
+import dev.proofrun.text.Tokens;
 import java.util.Locale;
 
 /**
@@ -48,12 +49,8 @@ public enum SigmaMethod {
 
     /** @throws IllegalArgumentException for an unknown token */
     public static SigmaMethod fromToken(String token) {
-        for (SigmaMethod m : values()) {
-            if (m.token.equalsIgnoreCase(token.trim())) {
-                return m;
-            }
-        }
-        throw new IllegalArgumentException(String.format(Locale.ROOT,
-                "unknown sigma method '%s' (rbar, sbar, pooled or mr)", token));
+        return Tokens.find(SigmaMethod.class, SigmaMethod::token, token)
+                .orElseThrow(() -> new IllegalArgumentException(String.format(Locale.ROOT,
+                        "unknown sigma method '%s' (rbar, sbar, pooled or mr)", token)));
     }
 }

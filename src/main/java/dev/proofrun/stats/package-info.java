@@ -30,9 +30,9 @@
  * 94.8–95.1 %, centred 96.0–96.6 % (conservative); see {@code CapabilityBoundsCoverageTest}.</li>
  * <li>{@code BoundEngine}: the one entry point for a bound — {@code NormalTheoryBound} (which formula of
  * {@code CapabilityBounds} applies, decided once; its inverse {@code passingEstimate} for the designer) and
- * {@code PivotalBound.Estimate} (the shapes' generalized pivotal bound), {@code FloorBound.Estimate} (a threshold
- * shape with only a floor for its threshold: the least pivotal bound over the thresholds the readings' skewness
- * leaves possible, Berger &amp; Boos 1994). {@code Confidence} holds the two ranges:
+ * {@code PercentileEstimate} (the shapes' bound: generalized pivotal, or inverted for the folded normal),
+ * {@code FloorBound.Estimate} (a threshold shape with only a floor for its threshold: the least pivotal bound over the
+ * thresholds the readings' skewness leaves possible, Berger &amp; Boos 1994). {@code Confidence} holds the two ranges:
  * stated (0.5, 0.9999) and computable (0.5, 1), the latter for a staged study's per-look confidence.</li>
  * </ul>
  */

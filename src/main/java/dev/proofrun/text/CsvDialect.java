@@ -31,4 +31,13 @@ public final class CsvDialect {
     public static double number(String cell) {
         return Decimals.parse(cell, true);
     }
+
+    /**
+     * Whether a cell, read as {@code number} by {@link #number}, holds a value that is not finite: a number that
+     * overflows ({@code 1e309}) or a name of one ({@code Infinity}, {@code NaN}: {@link Decimals#namesNonFinite}).
+     * Every reader says "not a finite number" for these, and "not a number" for any other NaN.
+     */
+    public static boolean namesNonFinite(String cell, double number) {
+        return Double.isInfinite(number) || Decimals.namesNonFinite(cell);
+    }
 }

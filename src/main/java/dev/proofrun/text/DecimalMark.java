@@ -52,12 +52,8 @@ public enum DecimalMark {
 
     /** @throws IllegalArgumentException for an unknown token */
     public static DecimalMark fromToken(String token) {
-        for (DecimalMark m : values()) {
-            if (m.token.equalsIgnoreCase(token.trim())) {
-                return m;
-            }
-        }
-        throw new IllegalArgumentException(String.format(Locale.ROOT, "unknown decimal mark '%s' (point or comma)", token));
+        return Tokens.find(DecimalMark.class, DecimalMark::token, token)
+                .orElseThrow(() -> new IllegalArgumentException(String.format(Locale.ROOT, "unknown decimal mark '%s' (point or comma)", token)));
     }
 
     /** The number in the text (already trimmed): NaN when it is not one, infinite when it overflows. */

@@ -5,17 +5,12 @@ import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertSame;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import dev.proofrun.app.session.AppHome;
-import java.nio.file.Files;
-import java.nio.file.Path;
 import java.util.concurrent.TimeUnit;
 import javafx.scene.Node;
 import javafx.scene.Parent;
 import javafx.scene.control.Control;
 import javafx.stage.Stage;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.extension.ExtendWith;
-import org.testfx.framework.junit5.ApplicationExtension;
 import org.testfx.framework.junit5.Start;
 import org.testfx.util.WaitForAsyncUtils;
 
@@ -24,16 +19,11 @@ import org.testfx.util.WaitForAsyncUtils;
  * styled (its controls have their skins) and laid out, and showing the step later shows that very page.
  * The page after it is not built until that step has been shown.
  */
-@ExtendWith(ApplicationExtension.class)
-class BuildAheadTest {
-
-    private WizardApp app;
+class BuildAheadTest extends WizardRobotTest {
 
     @Start
     void start(Stage stage) throws Exception {
-        Path home = Files.createTempDirectory("proofrun-ahead");
-        app = new WizardApp();
-        app.start(stage, new AppHome(home, home.resolve("plans")));
+        startWizard(stage);
     }
 
     private Node page(int index) throws Exception {

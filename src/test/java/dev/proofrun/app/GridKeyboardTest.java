@@ -5,13 +5,9 @@ import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import dev.proofrun.app.session.AppHome;
 import dev.proofrun.app.session.CharacteristicDraft;
 import dev.proofrun.app.session.CharacteristicField;
-import java.nio.file.Files;
 import java.util.List;
-import java.util.concurrent.Callable;
-import java.util.concurrent.TimeUnit;
 import javafx.scene.Node;
 import javafx.scene.control.TableColumn;
 import javafx.scene.control.TablePosition;
@@ -22,35 +18,21 @@ import javafx.scene.input.ClipboardContent;
 import javafx.scene.input.KeyCode;
 import javafx.stage.Stage;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.extension.ExtendWith;
 import org.testfx.api.FxRobot;
-import org.testfx.framework.junit5.ApplicationExtension;
 import org.testfx.framework.junit5.Start;
-import org.testfx.util.WaitForAsyncUtils;
 
 /**
  * The characteristics grid by keyboard, on the demo plan: Tab, Shift+Tab, Enter, Escape, Delete, a pasted
  * 3 × 4 block and undo, while the fields above the grid (plan id, part number, name, prepared by) never
  * change and never take the focus.
  */
-@ExtendWith(ApplicationExtension.class)
-class GridKeyboardTest {
+class GridKeyboardTest extends WizardRobotTest {
 
     private static final List<String> FIELDS = List.of("#plan-id", "#part-number", "#part-name", "#prepared-by");
 
-    private WizardApp app;
-    private Stage stage;
-
     @Start
     void start(Stage stage) throws Exception {
-        this.stage = stage;
-        var home = Files.createTempDirectory("proofrun-grid");
-        app = new WizardApp();
-        app.start(stage, new AppHome(home, home.resolve("plans")));
-    }
-
-    private static <T> T fx(Callable<T> read) throws Exception {
-        return WaitForAsyncUtils.asyncFx(read).get(Settle.TIMEOUT_S, TimeUnit.SECONDS);
+        startWizard(stage);
     }
 
     private List<String> fields(FxRobot robot) throws Exception {

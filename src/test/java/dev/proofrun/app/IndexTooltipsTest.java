@@ -3,12 +3,10 @@ package dev.proofrun.app;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import dev.proofrun.app.session.AppHome;
 import dev.proofrun.app.shell.IndexTip;
 import dev.proofrun.app.shell.IndexTooltips;
 import dev.proofrun.grade.DemoReturn;
 import dev.proofrun.grade.GradingPlans;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.EnumSet;
@@ -22,8 +20,6 @@ import javafx.scene.control.Labeled;
 import javafx.scene.control.Tooltip;
 import javafx.stage.Stage;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.extension.ExtendWith;
-import org.testfx.framework.junit5.ApplicationExtension;
 import org.testfx.framework.junit5.Start;
 import org.testfx.util.WaitForAsyncUtils;
 
@@ -32,17 +28,11 @@ import org.testfx.util.WaitForAsyncUtils;
  * that index's formula and meaning, taken from {@link IndexTip} (the one source of those words). Walks
  * every step of the demo plan, the Grading step after grading the demo's returned file.
  */
-@ExtendWith(ApplicationExtension.class)
-class IndexTooltipsTest {
-
-    private WizardApp app;
-    private Path home;
+class IndexTooltipsTest extends WizardRobotTest {
 
     @Start
     void start(Stage stage) throws Exception {
-        home = Files.createTempDirectory("proofrun-tips");
-        app = new WizardApp();
-        app.start(stage, new AppHome(home, home.resolve("plans")));
+        startWizard(stage);
     }
 
     @Test

@@ -4,21 +4,15 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import dev.proofrun.app.session.AppHome;
 import dev.proofrun.grade.DemoReturn;
 import dev.proofrun.grade.GradingPlans;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.concurrent.Callable;
-import java.util.concurrent.TimeUnit;
 import javafx.scene.Node;
 import javafx.scene.control.TextField;
 import javafx.scene.input.KeyCode;
 import javafx.stage.Stage;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.extension.ExtendWith;
 import org.testfx.api.FxRobot;
-import org.testfx.framework.junit5.ApplicationExtension;
 import org.testfx.framework.junit5.Start;
 import org.testfx.util.WaitForAsyncUtils;
 
@@ -27,22 +21,11 @@ import org.testfx.util.WaitForAsyncUtils;
  * Ctrl+1…7), each step puts the focus in its first field, Tab stays in the step (the rail is not in the
  * Tab order), a label's mnemonic focuses its field, and Enter in the returned-file field grades.
  */
-@ExtendWith(ApplicationExtension.class)
-class KeyboardTest {
-
-    private WizardApp app;
-    private Path home;
+class KeyboardTest extends WizardRobotTest {
 
     @Start
     void start(Stage stage) throws Exception {
-        home = Files.createTempDirectory("proofrun-keys");
-        app = new WizardApp();
-        app.start(stage, new AppHome(home, home.resolve("plans")));
-    }
-
-    private static void await(Callable<Boolean> condition) throws Exception {
-        WaitForAsyncUtils.waitFor(Settle.TIMEOUT_S, TimeUnit.SECONDS, () -> WaitForAsyncUtils.asyncFx(condition).get());
-        WaitForAsyncUtils.waitForFxEvents();
+        startWizard(stage);
     }
 
     private int step() throws Exception {

@@ -5,7 +5,6 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import dev.proofrun.app.session.AppHome;
 import dev.proofrun.grade.DemoReturn;
 import dev.proofrun.grade.GradingPlans;
 import dev.proofrun.plan.StudyPlan;
@@ -13,17 +12,13 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.concurrent.Callable;
-import java.util.concurrent.TimeUnit;
 import javafx.scene.Node;
 import javafx.scene.Parent;
 import javafx.scene.control.Labeled;
 import javafx.scene.control.TextField;
 import javafx.stage.Stage;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.extension.ExtendWith;
 import org.testfx.api.FxRobot;
-import org.testfx.framework.junit5.ApplicationExtension;
 import org.testfx.framework.junit5.Start;
 import org.testfx.util.WaitForAsyncUtils;
 
@@ -31,28 +26,11 @@ import org.testfx.util.WaitForAsyncUtils;
  * What a step shows belongs to the plan on the desk and the returned file just graded: a failed grade
  * leaves no verdict and nothing to export, and after switching plans no word of the other plan remains.
  */
-@ExtendWith(ApplicationExtension.class)
-class PlanStateTest {
-
-    private WizardApp app;
-    private Stage stage;
-    private Path home;
+class PlanStateTest extends WizardRobotTest {
 
     @Start
     void start(Stage stage) throws Exception {
-        this.stage = stage;
-        home = Files.createTempDirectory("proofrun-state");
-        app = new WizardApp();
-        app.start(stage, new AppHome(home, home.resolve("plans")));
-    }
-
-    private static <T> T fx(Callable<T> read) throws Exception {
-        return WaitForAsyncUtils.asyncFx(read).get(Settle.TIMEOUT_S, TimeUnit.SECONDS);
-    }
-
-    private static void await(Callable<Boolean> condition) throws Exception {
-        WaitForAsyncUtils.waitFor(Settle.TIMEOUT_S, TimeUnit.SECONDS, () -> fx(condition));
-        WaitForAsyncUtils.waitForFxEvents();
+        startWizard(stage);
     }
 
     private void gradeFile(FxRobot robot, Path file) throws Exception {

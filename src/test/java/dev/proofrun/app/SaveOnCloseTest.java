@@ -4,20 +4,16 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import dev.proofrun.app.session.AppHome;
 import dev.proofrun.app.session.DraftField;
 import dev.proofrun.plan.PlanFiles;
 import dev.proofrun.plan.StudyPlan;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Optional;
 import javafx.application.Platform;
 import javafx.stage.Stage;
 import javafx.stage.WindowEvent;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.extension.ExtendWith;
 import org.testfx.api.FxRobot;
-import org.testfx.framework.junit5.ApplicationExtension;
 import org.testfx.framework.junit5.Start;
 import org.testfx.util.WaitForAsyncUtils;
 
@@ -25,19 +21,11 @@ import org.testfx.util.WaitForAsyncUtils;
  * "Save the plan" on close writes the plan the steps describe and closes the window; when there is no plan
  * to write yet, nothing is written, the window stays open and the status line says why.
  */
-@ExtendWith(ApplicationExtension.class)
-class SaveOnCloseTest {
-
-    private WizardApp app;
-    private Stage stage;
-    private Path home;
+class SaveOnCloseTest extends WizardRobotTest {
 
     @Start
     void start(Stage stage) throws Exception {
-        this.stage = stage;
-        home = Files.createTempDirectory("proofrun-close");
-        app = new WizardApp();
-        app.start(stage, new AppHome(home, home.resolve("plans")));
+        startWizard(stage);
     }
 
     private void closeAndAnswer(FxRobot robot, String answer) {

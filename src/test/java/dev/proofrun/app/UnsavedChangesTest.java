@@ -7,7 +7,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import dev.proofrun.app.session.AppHome;
 import dev.proofrun.app.session.CharacteristicField;
 import dev.proofrun.app.session.Session;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import javafx.application.Platform;
 import javafx.scene.control.Label;
@@ -15,26 +14,16 @@ import javafx.scene.control.TableView;
 import javafx.stage.Stage;
 import javafx.stage.WindowEvent;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.extension.ExtendWith;
 import org.testfx.api.FxRobot;
-import org.testfx.framework.junit5.ApplicationExtension;
 import org.testfx.framework.junit5.Start;
 import org.testfx.util.WaitForAsyncUtils;
 
 /** Typing into a table cell is checked as typed; closing with changes asks, and no answer loses the edit. */
-@ExtendWith(ApplicationExtension.class)
-class UnsavedChangesTest {
-
-    private WizardApp app;
-    private Stage stage;
-    private Path home;
+class UnsavedChangesTest extends WizardRobotTest {
 
     @Start
     void start(Stage stage) throws Exception {
-        this.stage = stage;
-        home = Files.createTempDirectory("proofrun-unsaved");
-        app = new WizardApp();
-        app.start(stage, new AppHome(home, home.resolve("plans")));
+        startWizard(stage);
     }
 
     @Test

@@ -4,31 +4,21 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import dev.proofrun.app.session.AppHome;
-import java.nio.file.Files;
-import java.nio.file.Path;
 import javafx.scene.control.Button;
 import javafx.scene.control.Label;
 import javafx.scene.control.TextField;
 import javafx.stage.Stage;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.extension.ExtendWith;
 import org.testfx.api.FxRobot;
-import org.testfx.framework.junit5.ApplicationExtension;
 import org.testfx.framework.junit5.Start;
 import org.testfx.util.WaitForAsyncUtils;
 
 /** The wizard in a real (headless) window: the first start opens the demo plan; fields validate as typed. */
-@ExtendWith(ApplicationExtension.class)
-class WizardSmokeTest {
-
-    private WizardApp app;
+class WizardSmokeTest extends WizardRobotTest {
 
     @Start
     void start(Stage stage) throws Exception {
-        Path home = Files.createTempDirectory("proofrun-home");
-        app = new WizardApp();
-        app.start(stage, new AppHome(home, home.resolve("plans")));
+        startWizard(stage);
     }
 
     @Test

@@ -4,8 +4,11 @@ import com.tngtech.archunit.core.domain.JavaClasses;
 import com.tngtech.archunit.core.importer.ClassFileImporter;
 import com.tngtech.archunit.core.importer.ImportOption;
 
-/** The product's classes (tests left out) as the architecture tests check them, imported once for all of them. */
-final class ProductClasses {
+/**
+ * The product's classes (tests left out) as the architecture tests and the message-key test read them, imported once
+ * for all of them.
+ */
+public final class ProductClasses {
 
     private ProductClasses() {
     }
@@ -17,7 +20,7 @@ final class ProductClasses {
     }
 
     /** The classes of {@code dev.proofrun}, imported on first use. */
-    static JavaClasses get() {
+    public static JavaClasses get() {
         return Holder.CLASSES;
     }
 }

@@ -98,7 +98,7 @@ class LayoutTest {
                 }
             }
             BufferedImage image = new PDFRenderer(doc).renderImage(0, 0.5f);
-            assertTrue(darkPixels(image) > 500, "the first page has ink");
+            assertTrue(Ink.darkPixels(image) > 500, "the first page has ink");
         }
     }
 
@@ -118,19 +118,5 @@ class LayoutTest {
         stripper.setStartPage(page);
         stripper.setEndPage(page);
         return stripper.getText(doc);
-    }
-
-    static long darkPixels(BufferedImage image) {
-        long dark = 0;
-        for (int y = 0; y < image.getHeight(); y++) {
-            for (int x = 0; x < image.getWidth(); x++) {
-                int rgb = image.getRGB(x, y);
-                int grey = ((rgb >> 16 & 0xff) + (rgb >> 8 & 0xff) + (rgb & 0xff)) / 3;
-                if (grey < 128) {
-                    dark++;
-                }
-            }
-        }
-        return dark;
     }
 }

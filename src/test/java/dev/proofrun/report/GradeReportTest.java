@@ -9,10 +9,10 @@ import dev.proofrun.grade.GradingPlan;
 import dev.proofrun.grade.GradingPlans;
 import dev.proofrun.grade.Reason;
 import dev.proofrun.grade.SimulatedReturn;
+import dev.proofrun.paper.Ink;
 import dev.proofrun.plan.DemoPlan;
 import dev.proofrun.plan.StudyPlan;
 import dev.proofrun.paper.Paper;
-import java.awt.image.BufferedImage;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.nio.file.Files;
@@ -73,17 +73,7 @@ class GradeReportTest {
             assertTrue(all.contains("USL") && all.contains("LSL"));
             PDFRenderer r = new PDFRenderer(doc);
             for (int p = 0; p < doc.getNumberOfPages(); p++) {
-                BufferedImage image = r.renderImage(p, 0.4f);
-                long dark = 0;
-                for (int y = 0; y < image.getHeight(); y++) {
-                    for (int x = 0; x < image.getWidth(); x++) {
-                        int rgb = image.getRGB(x, y);
-                        if (((rgb >> 16 & 0xff) + (rgb >> 8 & 0xff) + (rgb & 0xff)) / 3 < 128) {
-                            dark++;
-                        }
-                    }
-                }
-                assertTrue(dark > 300, "page " + (p + 1) + " has ink");
+                assertTrue(Ink.darkPixels(r.renderImage(p, 0.4f)) > 300, "page " + (p + 1) + " has ink");
             }
         }
     }

@@ -7,6 +7,7 @@ import dev.proofrun.plan.Characteristic;
 import dev.proofrun.plan.DemoPlan;
 import dev.proofrun.plan.StudyPlan;
 import dev.proofrun.schedule.Slot;
+import dev.proofrun.paper.Ink;
 import dev.proofrun.paper.Paper;
 import java.awt.image.BufferedImage;
 import java.io.ByteArrayOutputStream;
@@ -168,7 +169,7 @@ class SheetPdfTest {
             PDFRenderer r = new PDFRenderer(doc);
             for (int p : List.of(0, 1)) {
                 BufferedImage image = r.renderImage(p, 0.5f);
-                long dark = darkPixels(image);
+                long dark = Ink.darkPixels(image);
                 long total = (long) image.getWidth() * image.getHeight();
                 assertTrue(dark > total / 100, "page " + (p + 1) + " has ink: " + dark + " of " + total);
                 assertTrue(dark < total / 2, "page " + (p + 1) + " is not a black block");
@@ -193,18 +194,5 @@ class SheetPdfTest {
             n++;
         }
         return n;
-    }
-
-    static long darkPixels(BufferedImage image) {
-        long dark = 0;
-        for (int y = 0; y < image.getHeight(); y++) {
-            for (int x = 0; x < image.getWidth(); x++) {
-                int rgb = image.getRGB(x, y);
-                if (((rgb >> 16 & 0xff) + (rgb >> 8 & 0xff) + (rgb & 0xff)) / 3 < 128) {
-                    dark++;
-                }
-            }
-        }
-        return dark;
     }
 }

@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.proofrun.plan.StudyPlan;
+import dev.proofrun.paper.Ink;
 import dev.proofrun.paper.Paper;
 import java.awt.image.BufferedImage;
 import java.io.ByteArrayOutputStream;
@@ -35,7 +36,7 @@ class SheetPreviewTest {
         BufferedImage letter = SheetPreview.pages(plan, Paper.LETTER, 60f, () -> false).get(0);
         assertEquals(510, letter.getWidth());
         assertEquals(660, letter.getHeight());
-        assertTrue(darkPixels(pages.get(0)) > 1000, "the first page carries print");
+        assertTrue(Ink.darkPixels(pages.get(0)) > 1000, "the first page carries print");
     }
 
     @Test
@@ -47,19 +48,5 @@ class SheetPreviewTest {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
                 () -> SheetPreview.pages(plan, Paper.A4, 0f, () -> false));
         assertEquals("dpi must be positive: 0.0", e.getMessage());
-    }
-
-    private static int darkPixels(BufferedImage img) {
-        int dark = 0;
-        for (int y = 0; y < img.getHeight(); y++) {
-            for (int x = 0; x < img.getWidth(); x++) {
-                int rgb = img.getRGB(x, y);
-                int grey = ((rgb >> 16 & 0xff) + (rgb >> 8 & 0xff) + (rgb & 0xff)) / 3;
-                if (grey < 128) {
-                    dark++;
-                }
-            }
-        }
-        return dark;
     }
 }

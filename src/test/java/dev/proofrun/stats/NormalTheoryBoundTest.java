@@ -79,7 +79,7 @@ class NormalTheoryBoundTest {
             0.017, 0.027, 0.020, 0.024, 0.023, 0.019}).fit(); // invented flatness readings, mm
         SpecLimits upper = SpecLimits.upperOnly(0.08);
         IndexKind ppk = IndexKind.fromToken("ppk");
-        BoundEngine e = PivotalBound.Estimate.of(fit, ppk, upper, 12, PivotalBound.DEFAULT_SEED);
+        BoundEngine e = PercentileEstimate.of(fit, ppk, upper, 12, PivotalBound.DEFAULT_SEED);
         double[] b = PivotalBound.bounds(fit, ppk, upper, 12, 0.95, PivotalBound.DEFAULT_SEED);
         assertEquals(b[0], e.lower(0.95), 0);
         assertEquals(b[1], e.upper(0.95), 0);

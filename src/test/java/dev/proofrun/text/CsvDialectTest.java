@@ -1,6 +1,7 @@
 package dev.proofrun.text;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.junit.jupiter.api.Test;
@@ -22,5 +23,15 @@ class CsvDialectTest {
         assertEquals(22.001, CsvDialect.number("22,001"), 0.0);
         assertEquals(22.001, CsvDialect.number("22.001"), 0.0);
         assertTrue(Double.isNaN(CsvDialect.number("22,001.5")));
+    }
+
+    @Test
+    void anOverflowOrANameOfInfinityIsNotFiniteAndOtherTextIsMerelyNotANumber() {
+        for (String cell : new String[] {"1e309", "-1e309", "Infinity", "-inf", "NaN", "\u221E"}) {
+            assertTrue(CsvDialect.namesNonFinite(cell, CsvDialect.number(cell)), cell);
+        }
+        for (String cell : new String[] {"22,001", "1e308", "n/a", "22,001.5", ""}) {
+            assertFalse(CsvDialect.namesNonFinite(cell, CsvDialect.number(cell)), cell);
+        }
     }
 }

@@ -5,8 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.tngtech.archunit.core.domain.JavaClass;
-import com.tngtech.archunit.core.importer.ClassFileImporter;
-import com.tngtech.archunit.core.importer.ImportOption;
+import dev.proofrun.arch.ProductClasses;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Set;
@@ -21,8 +20,7 @@ class MessageKeysTest {
     private static final Pattern CONVERSION = Pattern.compile("%(\\d+\\$)?[-#+ 0,(]*\\d*(\\.\\d+)?([a-zA-Z%])");
 
     static List<MessageKey> allKeys() {
-        return new ClassFileImporter().withImportOption(ImportOption.Predefined.DO_NOT_INCLUDE_TESTS)
-                .importPackages("dev.proofrun").stream()
+        return ProductClasses.get().stream()
                 .filter(c -> c.isEnum() && c.isAssignableTo(MessageKey.class))
                 .map(JavaClass::reflect)
                 .flatMap(c -> java.util.Arrays.stream(c.getEnumConstants()))

@@ -71,6 +71,7 @@ public final class GoalViewModel extends StepViewModel {
 
     /** @param background reads and analyses pilot readings off the FX thread */
     public GoalViewModel(StudyDraft draft, ObservableValue<StudyPlan> base, Background background) {
+        super(AppMessage.STEP_GOAL.english(), AppMessage.STEP_GOAL_HINT.english());
         this.draft = draft;
         this.base = base;
         this.background = background;
@@ -139,16 +140,6 @@ public final class GoalViewModel extends StepViewModel {
                 text.set(token.apply(now));
             }
         });
-    }
-
-    @Override
-    public String title() {
-        return AppMessage.STEP_GOAL.english();
-    }
-
-    @Override
-    public String hint() {
-        return AppMessage.STEP_GOAL_HINT.english();
     }
 
     public ObjectProperty<IndexKind> indexProperty() {

@@ -67,6 +67,7 @@ public final class GradingViewModel extends StepViewModel {
     private String gradedFile;
 
     public GradingViewModel(Session session, Background background) {
+        super(AppMessage.STEP_GRADING.english(), AppMessage.STEP_GRADING_HINT.english());
         this.session = session;
         this.background = background;
         bindMissing(Bindings.createStringBinding(() -> "", result));
@@ -104,16 +105,6 @@ public final class GradingViewModel extends StepViewModel {
         selected.set(null);
         gradedAgainst = null;
         gradedFile = null;
-    }
-
-    @Override
-    public String title() {
-        return AppMessage.STEP_GRADING.english();
-    }
-
-    @Override
-    public String hint() {
-        return AppMessage.STEP_GRADING_HINT.english();
     }
 
     public StringProperty returnedFile() {

@@ -68,6 +68,7 @@ public final class HandoutViewModel extends StepViewModel {
      */
     public HandoutViewModel(Session session, GoalViewModel goal, SizingViewModel sizing, TimingViewModel timing,
             Background background, Background files) {
+        super(AppMessage.STEP_HANDOUT.english(), AppMessage.STEP_HANDOUT_HINT.english());
         this.session = session;
         this.background = background;
         plans = new ComposedPlan(session, goal, sizing, timing);
@@ -94,16 +95,6 @@ public final class HandoutViewModel extends StepViewModel {
             exported.set(null);
             message.set("");
         });
-    }
-
-    @Override
-    public String title() {
-        return AppMessage.STEP_HANDOUT.english();
-    }
-
-    @Override
-    public String hint() {
-        return AppMessage.STEP_HANDOUT_HINT.english();
     }
 
     @Override

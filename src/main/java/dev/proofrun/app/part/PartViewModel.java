@@ -52,6 +52,7 @@ public final class PartViewModel extends StepViewModel {
     private final StringBinding selectedProblem;
 
     public PartViewModel(StudyDraft draft) {
+        super(AppMessage.STEP_PART.english(), AppMessage.STEP_PART_HINT.english());
         this.draft = draft;
         ObservableList<CharacteristicDraft> rows = draft.characteristics();
         firstProblem = Bindings.createStringBinding(this::computeFirstProblem, rows,
@@ -61,16 +62,6 @@ public final class PartViewModel extends StepViewModel {
             return i >= 0 && i < rows.size() ? rowProblem(i).orElse("") : "";
         }, rows, selected);
         bindMissing(firstProblem);
-    }
-
-    @Override
-    public String title() {
-        return AppMessage.STEP_PART.english();
-    }
-
-    @Override
-    public String hint() {
-        return AppMessage.STEP_PART_HINT.english();
     }
 
     public StringProperty planId() {

@@ -1,6 +1,6 @@
 package dev.proofrun.app.session;
 
-import java.util.Locale;
+import dev.proofrun.text.Tokens;
 
 /** Where the expected value of the index comes from on the Goal step. */
 public enum ExpectationSource {
@@ -23,11 +23,6 @@ public enum ExpectationSource {
 
     /** The source for a token; {@link #VALUE} for anything unknown (drafts are forgiving). */
     public static ExpectationSource fromToken(String token) {
-        for (ExpectationSource s : values()) {
-            if (s.token.equals(token == null ? "" : token.trim().toLowerCase(Locale.ROOT))) {
-                return s;
-            }
-        }
-        return VALUE;
+        return Tokens.find(ExpectationSource.class, ExpectationSource::token, token).orElse(VALUE);
     }
 }

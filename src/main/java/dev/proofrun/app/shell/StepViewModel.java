@@ -16,9 +16,22 @@ public abstract class StepViewModel {
     private final ReadOnlyStringWrapper missing = new ReadOnlyStringWrapper(this, "missing", "");
     private final BooleanBinding complete = Bindings.createBooleanBinding(() -> missing.get().isEmpty(), missing);
 
-    public abstract String title();
+    private final String title;
+    private final String hint;
 
-    public abstract String hint();
+    /** A step with its title (a word or two) and its one-line hint. */
+    protected StepViewModel(String title, String hint) {
+        this.title = title;
+        this.hint = hint;
+    }
+
+    public final String title() {
+        return title;
+    }
+
+    public final String hint() {
+        return hint;
+    }
 
     /** Empty when the step is complete, else a short sentence of what to do. */
     public final ReadOnlyStringProperty missingProperty() {

@@ -78,6 +78,7 @@ public final class SizingViewModel extends StepViewModel {
 
     /** @param looks the worker of the planned looks (they cost seconds; the design table should not wait) */
     public SizingViewModel(StudyDraft draft, GoalViewModel goal, Background background, Background looks) {
+        super(AppMessage.STEP_SIZING.english(), AppMessage.STEP_SIZING_HINT.english());
         this.draft = draft;
         sized = new SizingTable(background, this::drawCurves);
         table = sized.table();
@@ -127,16 +128,6 @@ public final class SizingViewModel extends StepViewModel {
             }
             return looks() > 1 && design().isEmpty() ? dev.proofrun.design.StagedMessage.STAGED_BUSY.format() : "";
         }, goal.requirementBinding(), goal.expectationBinding(), refusal, busy, chosen, staged.refusal(), designBinding));
-    }
-
-    @Override
-    public String title() {
-        return AppMessage.STEP_SIZING.english();
-    }
-
-    @Override
-    public String hint() {
-        return AppMessage.STEP_SIZING_HINT.english();
     }
 
     @Override

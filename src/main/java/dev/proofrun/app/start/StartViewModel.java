@@ -35,6 +35,7 @@ public final class StartViewModel extends StepViewModel {
 
     /** Plan files are read by {@code files}; the draft changes on the FX thread when the reading is done. */
     public StartViewModel(Session session, Background files) {
+        super(AppMessage.STEP_START.english(), AppMessage.STEP_START_HINT.english());
         this.session = session;
         this.files = files;
         bindMissing(Bindings.when(loaded).then("").otherwise(AppMessage.NO_PLAN.english()));
@@ -76,16 +77,6 @@ public final class StartViewModel extends StepViewModel {
     /** "this computer's language writes 1,33": the locale's own mark, beside the choice. */
     public String localeNote() {
         return AppMessage.DECIMAL_MARK_LOCALE.format(DecimalMark.of(java.util.Locale.getDefault(java.util.Locale.Category.FORMAT)).example());
-    }
-
-    @Override
-    public String title() {
-        return AppMessage.STEP_START.english();
-    }
-
-    @Override
-    public String hint() {
-        return AppMessage.STEP_START_HINT.english();
     }
 
     public ObservableList<Path> recent() {

@@ -66,6 +66,7 @@ public final class TimingViewModel extends StepViewModel {
     }
 
     public TimingViewModel(StudyDraft draft, ObservableValue<Optional<Design>> design, Background background) {
+        super(AppMessage.STEP_TIMING.english(), AppMessage.STEP_TIMING_HINT.english());
         this.draft = draft;
         this.design = design;
         this.background = background;
@@ -80,16 +81,6 @@ public final class TimingViewModel extends StepViewModel {
         request.addListener((o, a, b) -> reschedule());
         bindMissing(Bindings.createStringBinding(this::computeMissing, outcome, calendar, span, design, busy));
         reschedule();
-    }
-
-    @Override
-    public String title() {
-        return AppMessage.STEP_TIMING.english();
-    }
-
-    @Override
-    public String hint() {
-        return AppMessage.STEP_TIMING_HINT.english();
     }
 
     public StringProperty field(DraftField f) {

@@ -25,18 +25,9 @@ class ShellViewModelTest {
         final StringProperty lack = new SimpleStringProperty("");
 
         FakeStep(String lack) {
+            super("step", "hint");
             this.lack.set(lack);
             bindMissing(this.lack);
-        }
-
-        @Override
-        public String title() {
-            return "step";
-        }
-
-        @Override
-        public String hint() {
-            return "hint";
         }
     }
 

@@ -5,12 +5,9 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.proofrun.app.Settle;
-import dev.proofrun.app.WizardApp;
+import dev.proofrun.app.WizardRobotTest;
 import dev.proofrun.app.chart.CurvePlot;
-import dev.proofrun.app.session.AppHome;
 import dev.proofrun.app.session.DraftField;
-import java.nio.file.Files;
-import java.nio.file.Path;
 import java.util.List;
 import javafx.geometry.Bounds;
 import javafx.scene.Node;
@@ -18,9 +15,7 @@ import javafx.scene.control.ComboBox;
 import javafx.scene.control.Label;
 import javafx.stage.Stage;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.extension.ExtendWith;
 import org.testfx.api.FxRobot;
-import org.testfx.framework.junit5.ApplicationExtension;
 import org.testfx.framework.junit5.Start;
 import org.testfx.util.WaitForAsyncUtils;
 
@@ -30,19 +25,13 @@ import org.testfx.util.WaitForAsyncUtils;
  * chart beside the operating characteristic appear, the choice is in the draft, and at 1280 × 800 and 1024 × 640 the
  * three charts lie side by side within the page without overlapping.
  */
-@ExtendWith(ApplicationExtension.class)
-class SizingLooksScreenTest {
+class SizingLooksScreenTest extends WizardRobotTest {
 
     private static final int SIZING = 3;
-    private WizardApp app;
-    private Stage stage;
 
     @Start
     void start(Stage stage) throws Exception {
-        this.stage = stage;
-        Path home = Files.createTempDirectory("proofrun-looks");
-        app = new WizardApp();
-        app.start(stage, new AppHome(home, home.resolve("plans")));
+        startWizard(stage);
     }
 
     @Test

@@ -5,11 +5,8 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.proofrun.app.Settle;
-import dev.proofrun.app.WizardApp;
-import dev.proofrun.app.session.AppHome;
+import dev.proofrun.app.WizardRobotTest;
 import dev.proofrun.app.session.DraftField;
-import java.nio.file.Files;
-import java.nio.file.Path;
 import java.util.List;
 import javafx.geometry.BoundingBox;
 import javafx.scene.Node;
@@ -17,9 +14,7 @@ import javafx.scene.control.Label;
 import javafx.scene.control.ScrollPane;
 import javafx.stage.Stage;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.extension.ExtendWith;
 import org.testfx.api.FxRobot;
-import org.testfx.framework.junit5.ApplicationExtension;
 import org.testfx.framework.junit5.Start;
 import org.testfx.util.WaitForAsyncUtils;
 
@@ -27,19 +22,13 @@ import org.testfx.util.WaitForAsyncUtils;
  * The Timing step on the demo plan at the two window sizes the wizard is checked at (1280 × 800 and
  * 1024 × 640): slot ids never overlap, the step comes back at its top, an empty start says what to enter.
  */
-@ExtendWith(ApplicationExtension.class)
-class TimingScreenTest {
+class TimingScreenTest extends WizardRobotTest {
 
     private static final int TIMING = 4;
-    private WizardApp app;
-    private Stage stage;
 
     @Start
     void start(Stage stage) throws Exception {
-        this.stage = stage;
-        Path home = Files.createTempDirectory("proofrun-timing");
-        app = new WizardApp();
-        app.start(stage, new AppHome(home, home.resolve("plans")));
+        startWizard(stage);
     }
 
     private void goTo(FxRobot robot, int step) throws Exception {
