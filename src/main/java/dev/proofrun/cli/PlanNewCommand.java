@@ -158,11 +158,11 @@ public final class PlanNewCommand implements Callable<Integer> {
     @ArgGroup(exclusive = true, multiplicity = "0..1")
     SpanChoice span;
 
-    /** The span options, one at most (default: one working day). */
+    /** The span options, one at most (default: {@link CalendarDefaults#SPAN_DAYS} working days, as the wizard's). */
     static final class SpanChoice {
         @Option(names = "--span-shifts", paramLabel = "S", description = "Span at least S shifts.")
         Integer shifts;
-        @Option(names = "--span-days", paramLabel = "D", description = "Span D working days.")
+        @Option(names = "--span-days", paramLabel = "D", description = "Span D working days (default " + CalendarDefaults.SPAN_DAYS + ").")
         Integer days;
         @ArgGroup(exclusive = false)
         Lots lots;
@@ -329,7 +329,7 @@ public final class PlanNewCommand implements Callable<Integer> {
     private StudySpan studySpan() {
         LocalDateTime t = option("--start", () -> LocalDateTime.parse(start));
         if (span == null) {
-            return StudySpan.days(t, 1);
+            return StudySpan.days(t, CalendarDefaults.SPAN_DAYS);
         }
         if (span.shifts != null) {
             return option("--span-shifts", () -> StudySpan.shifts(t, span.shifts));

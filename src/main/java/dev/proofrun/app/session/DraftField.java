@@ -40,7 +40,8 @@ public enum DraftField {
     START(""),
     /** "days" or "shifts". */
     SPAN_KIND("days"),
-    SPAN_COUNT("5"),
+    /** The command line's default ({@link CalendarDefaults#SPAN_DAYS} working days). */
+    SPAN_COUNT(Integer.toString(CalendarDefaults.SPAN_DAYS)),
     /** The command line's default: this computer's zone ({@link CalendarDefaults#zone()}). */
     ZONE(CalendarDefaults.zone().getId()),
     /** "Mon-Fri" or a list "Mon, Tue, Thu". */
