@@ -12,11 +12,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import java.util.OptionalDouble;
-import org.apache.commons.rng.UniformRandomProvider;
-import org.apache.commons.rng.sampling.distribution.ZigguratSampler;
-import org.apache.commons.rng.simple.RandomSource;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -120,25 +116,7 @@ class FloorCommandTest {
 
     /** Readings 9.96 + 0.02·exp(0.4·Z): the real start 9.96 lies 0.01 above the floor (Ppu about 3). */
     private Path returned(Path plan, long seed, String replaceFirst) throws Exception {
-        assertEquals(0, cli.run("plan", "issue", plan.toString()), cli.err());
-        var gp = dev.proofrun.grade.GradingPlans.of(PlanFiles.read(plan));
-        UniformRandomProvider rng = RandomSource.XO_RO_SHI_RO_128_PP.create(seed);
-        ZigguratSampler.NormalizedGaussian g = ZigguratSampler.NormalizedGaussian.of(rng);
-        StringBuilder sb = new StringBuilder("plan,slot,characteristic,planned,taken,lot,operator,x1,x2,x3,x4,x5,remark\n");
-        boolean first = true;
-        for (var slot : gp.slots()) {
-            String t = slot.start().toOffsetDateTime().toString();
-            sb.append(gp.reference()).append(',').append(slot.id()).append(",C1,").append(t).append(',').append(t).append(",L1,MK");
-            for (int j = 0; j < 5; j++) {
-                String x = String.format(Locale.ROOT, "%.5f", 9.96 + 0.02 * Math.exp(0.4 * g.sample()));
-                sb.append(',').append(first && j == 2 && replaceFirst != null ? replaceFirst : x);
-            }
-            first = false;
-            sb.append(",\n");
-        }
-        Path data = dir.resolve("returned.csv");
-        Files.writeString(data, sb.toString(), StandardCharsets.UTF_8);
-        return data;
+        return SkewedReturn.write(cli, plan, dir, seed, 9.96, 2, replaceFirst);
     }
 
     @Test
