@@ -39,20 +39,11 @@ class FloorCoverageTest {
     }
 
     private static double limit(int studies) {
-        return ALPHA + 2 * Math.sqrt(ALPHA * (1 - ALPHA) / studies);
+        return ShapeStudies.limit(ALPHA, studies);
     }
 
     private String atMostAlpha(List<ShapeStudies.Case> cases, int studies, long seed) {
-        StringBuilder all = new StringBuilder();
-        boolean ok = true;
-        for (ShapeStudies.Case c : cases) {
-            Map<Verdict, Integer> v = ShapeStudies.run(c, C0, studies, seed, dir);
-            double pass = v.getOrDefault(Verdict.DEMONSTRATED, 0) / (double) studies;
-            all.append(c.label()).append(": demonstrated ").append(pass).append(' ').append(v).append('\n');
-            ok &= pass <= limit(studies);
-        }
-        assertTrue(ok, "more than " + limit(studies) + " demonstrated at c0:\n" + all);
-        return all.toString();
+        return ShapeStudies.assertAtMostAlpha(cases, C0, ALPHA, studies, seed, dir);
     }
 
     /** The floor at the real start, 0.005 below it (a tenth of the scale) and 0.05 below it (one scale). */

@@ -12,6 +12,7 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.EnumMap;
+import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import org.apache.commons.rng.UniformRandomProvider;
@@ -187,5 +188,27 @@ final class ShapeStudies {
         } catch (IOException ex) {
             throw new UncheckedIOException(ex);
         }
+    }
+
+    /** α + 2 SE with SE = √(α(1 − α)/S): the most a check at the boundary lets through in S studies. */
+    static double limit(double alpha, int studies) {
+        return alpha + 2 * Math.sqrt(alpha * (1 - alpha) / studies);
+    }
+
+    /**
+     * Grades {@code studies} seeded studies of each case at c₀ and fails unless every case's share demonstrated is at
+     * most {@link #limit}; returns one line a case for the log.
+     */
+    static String assertAtMostAlpha(List<Case> cases, double c0, double alpha, int studies, long seed, Path dir) {
+        StringBuilder all = new StringBuilder();
+        boolean ok = true;
+        for (Case c : cases) {
+            Map<Verdict, Integer> v = run(c, c0, studies, seed, dir);
+            double pass = v.getOrDefault(Verdict.DEMONSTRATED, 0) / (double) studies;
+            all.append(c.label()).append(": demonstrated ").append(pass).append(' ').append(v).append('\n');
+            ok &= pass <= limit(alpha, studies);
+        }
+        org.junit.jupiter.api.Assertions.assertTrue(ok, "more than " + limit(alpha, studies) + " demonstrated at c0:\n" + all);
+        return all.toString();
     }
 }
