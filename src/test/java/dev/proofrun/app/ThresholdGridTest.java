@@ -108,5 +108,14 @@ class ThresholdGridTest {
         robot.type(KeyCode.ESCAPE);
         assertTrue(fx(() -> robot.lookup(".pr-unused").queryAll().size()) >= 1, "the shut cell is greyed");
         assertEquals("", fx(() -> rows().get(1).text(CharacteristicField.THRESHOLD)));
+
+        // after Escape, Add characteristic by its mnemonic takes the typing into the new row's name
+        robot.press(KeyCode.ALT).type(KeyCode.A).release(KeyCode.ALT);
+        WaitForAsyncUtils.waitFor(Settle.TIMEOUT_S, TimeUnit.SECONDS,
+                () -> fx(() -> rows().size()) == 3 && editingColumn(table) == CharacteristicField.NAME.ordinal());
+        robot.write("Seat height");
+        robot.type(KeyCode.ENTER);
+        WaitForAsyncUtils.waitForFxEvents();
+        assertEquals("Seat height", fx(() -> rows().get(2).text(CharacteristicField.NAME)));
     }
 }

@@ -117,7 +117,10 @@ public final class PartView implements StepView {
         add.setId("add-row");
         add.setOnAction(e -> {
             vm.addRow();
-            table.edit(vm.rows().size() - 1, table.getColumns().get(1));
+            // after the button's own handling: fired by its mnemonic (Alt+A) the button takes the focus once the action
+            // has run, and the new row's name would be in edit with nowhere for the typing to go
+            int row = vm.rows().size() - 1;
+            javafx.application.Platform.runLater(() -> grid.go(row, CharacteristicField.NAME.ordinal(), true));
         });
         Button remove = new Button("_Remove");
         remove.setId("remove-row");
