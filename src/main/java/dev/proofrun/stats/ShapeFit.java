@@ -154,7 +154,10 @@ public record ShapeFit(ShapeFamily family, double location, double scale, double
 
     /** "mu = …, sigma = …" in the words of the family, with ", threshold = θ" for a three-parameter fit. */
     public String describe() {
-        return threshold == 0 ? describeTwo() : describeTwo() + String.format(Locale.ROOT, ", threshold = %s", threshold);
+        // seven significant digits: a declared threshold shows as typed, one fitted within a floor's set not to 1e-12
+        String theta = java.math.BigDecimal.valueOf(threshold).round(new java.math.MathContext(7)).stripTrailingZeros()
+                .toPlainString();
+        return threshold == 0 ? describeTwo() : describeTwo() + ", threshold = " + theta;
     }
 
     private String describeTwo() {

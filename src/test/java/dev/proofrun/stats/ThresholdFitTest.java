@@ -93,5 +93,8 @@ class ThresholdFitTest {
         assertEquals(0, fit.cdf(THETA), 0);
         assertEquals(Double.NEGATIVE_INFINITY, fit.logDensity(9.9), 0);
         assertTrue(fit.describe().endsWith("of ln(x - threshold), threshold = 9.95"), fit.describe());
+        // a threshold fitted within a floor's set shows seven significant digits, not the double's seventeen
+        assertTrue(fit.withThreshold(9.955627584768).describe().endsWith("threshold = 9.955628"),
+                fit.withThreshold(9.955627584768).describe());
     }
 }
