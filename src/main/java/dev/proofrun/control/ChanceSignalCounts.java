@@ -1,5 +1,6 @@
 package dev.proofrun.control;
 
+import dev.proofrun.stats.SampleMoments;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
@@ -172,11 +173,11 @@ public final class ChanceSignalCounts {
     }
 
     public double expectedLocation() {
-        return mean(location) * scale;
+        return SampleMoments.meanOf(location) * scale;
     }
 
     public double expectedSpread() {
-        return mean(spread) * scale;
+        return SampleMoments.meanOf(spread) * scale;
     }
 
     /**
@@ -245,14 +246,6 @@ public final class ChanceSignalCounts {
         return (atOthers + 1.0) / sorted.length;
     }
 
-    private static double mean(double[] a) {
-        double s = 0;
-        for (double v : a) {
-            s += v;
-        }
-        return s / a.length;
-    }
-
     private double tail(double[] counts, int observed) {
         if (observed <= 0) {
             return 1.0;
@@ -267,7 +260,7 @@ public final class ChanceSignalCounts {
             // (at + 1)/(studies + 1): never exactly zero from a finite simulation
             return (at + 1.0) / (counts.length + 1.0);
         }
-        double m0 = mean(counts);
+        double m0 = SampleMoments.meanOf(counts);
         double v = 0;
         for (double c : counts) {
             v += (c - m0) * (c - m0);

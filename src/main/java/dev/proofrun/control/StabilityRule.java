@@ -111,7 +111,7 @@ public final class StabilityRule {
         ChanceSignalCounts chance = ChanceSignalCounts.simulate(kind, n, k, rules);
         ChanceSignalCounts meansChance = null;
         if (overallIndex && n > 1) {
-            List<double[]> means = subgroups.stream().map(g -> new double[] {mean(g)}).toList();
+            List<double[]> means = subgroups.stream().map(g -> new double[] {dev.proofrun.stats.SampleMoments.meanOf(g)}).toList();
             ChartPair ofMeans = ControlCharts.of(ChartKind.INDIVIDUALS, means, rules);
             charts = new ChartPair(kind, ofMeans.location(), charts.spread(), charts.sigmaWithin());
             meansChance = ChanceSignalCounts.simulate(ChartKind.INDIVIDUALS, 1, k, rules);
@@ -134,14 +134,6 @@ public final class StabilityRule {
                 && ratio >= RATIO_LIMIT;
         return new Decision(charts, locationPoints, spreadPoints, chance, pLocation, pSpread, ratio, f, p,
                 signalled, between, meansChance);
-    }
-
-    private static double mean(double[] g) {
-        double s = 0;
-        for (double v : g) {
-            s += v;
-        }
-        return s / g.length;
     }
 
     /** The number of distinct points of a chart at which some rule fired. */

@@ -238,21 +238,4 @@ final class EvidenceSection {
     private static String signals(List<SlotSignal> signals) {
         return dev.proofrun.grade.SignalPatterns.describe(signals);
     }
-
-    static double mean(double[] x) {
-        double sum = 0;
-        for (double v : x) {
-            sum += v;
-        }
-        return sum / x.length;
-    }
-
-    static double sd(double[] x) {
-        double m = mean(x);
-        double ss = 0;
-        for (double v : x) {
-            ss += (v - m) * (v - m);
-        }
-        return x.length > 1 ? Math.sqrt(ss / (x.length - 1)) : Double.NaN;
-    }
 }

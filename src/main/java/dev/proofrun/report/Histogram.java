@@ -54,7 +54,8 @@ public record Histogram(Bins bins, long[] counts, double lo, double hi, double[]
                 return ModelCurve.of(f);
             }
         }
-        return ModelCurve.normal(EvidenceSection.mean(x), EvidenceSection.sd(x));
+        return ModelCurve.normal(dev.proofrun.stats.SampleMoments.meanOf(x),
+                dev.proofrun.stats.SampleMoments.standardDeviationOf(x));
     }
 
     static Histogram of(double[] readings, SpecLimits limits, double nominal, double step, ModelCurve curve) {

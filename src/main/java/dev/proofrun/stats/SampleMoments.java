@@ -49,6 +49,28 @@ public record SampleMoments(long count, double mean, double standardDeviation) {
         return new SampleMoments(n, mean, Math.sqrt(Math.max(ss, 0) / (n - 1)));
     }
 
+    /** The mean of one array of readings (NaN for none). */
+    public static double meanOf(double[] x) {
+        double sum = 0;
+        for (double v : x) {
+            sum += v;
+        }
+        return sum / x.length;
+    }
+
+    /** The sample standard deviation of one array (divisor n − 1, two passes); NaN for fewer than 2 readings. */
+    public static double standardDeviationOf(double[] x) {
+        if (x.length < 2) {
+            return Double.NaN;
+        }
+        double m = meanOf(x);
+        double ss = 0;
+        for (double v : x) {
+            ss += (v - m) * (v - m);
+        }
+        return Math.sqrt(ss / (x.length - 1));
+    }
+
     /** Degrees of freedom of s: N − 1. */
     public double degreesOfFreedom() {
         return count - 1.0;

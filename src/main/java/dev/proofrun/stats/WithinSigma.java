@@ -176,7 +176,7 @@ public final class WithinSigma {
                         "S-bar/c4 needs subgroups of at least 2 readings, found one of %d", g.length));
             }
             equal &= g.length == n;
-            double s = standardDeviation(g);
+            double s = SampleMoments.standardDeviationOf(g);
             double c4 = ChartConstants.c4(g.length);
             double h = 1 / ChartConstants.chiCv2(g.length);
             weighted += h * s / c4;
@@ -195,7 +195,7 @@ public final class WithinSigma {
         double sumSquares = 0;
         long nu = 0;
         for (double[] g : subgroups) {
-            double mean = mean(g);
+            double mean = SampleMoments.meanOf(g);
             for (double x : g) {
                 sumSquares += (x - mean) * (x - mean);
             }
@@ -269,23 +269,5 @@ public final class WithinSigma {
                 }
             }
         }
-    }
-
-    private static double mean(double[] g) {
-        double sum = 0;
-        for (double x : g) {
-            sum += x;
-        }
-        return sum / g.length;
-    }
-
-    /** Sample standard deviation (divisor n − 1), two passes. */
-    static double standardDeviation(double[] g) {
-        double mean = mean(g);
-        double ss = 0;
-        for (double x : g) {
-            ss += (x - mean) * (x - mean);
-        }
-        return Math.sqrt(ss / (g.length - 1));
     }
 }
