@@ -33,7 +33,7 @@ public enum ChartKind implements Token {
         this.spread = spread;
     }
 
-    /** The word in JSON: {@code xbar-r}, {@code xbar-s}, and {@code individuals-mr} for the individuals and moving range. */
+    /** The word in JSON: {@code xbar-r}, {@code xbar-s}, and {@code individuals-mr} for individuals and moving range. */
     @Override
     public String token() {
         return this == INDIVIDUALS ? "individuals-mr" : Token.super.token();

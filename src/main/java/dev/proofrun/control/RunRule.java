@@ -51,7 +51,7 @@ public enum RunRule implements Token {
         return span;
     }
 
-    /** The rule named by its word in JSON and on the command line ({@code run-one-side}, …), as {@link Tokens#parse} reads it. */
+    /** The rule named by its word ({@code run-one-side}, …), as {@link Tokens#parse} reads it. */
     public static RunRule fromToken(String token) {
         return Tokens.parse(RunRule.class, "run rule", token);
     }

@@ -24,7 +24,7 @@ public enum Spacing implements Token {
     EVEN,
     RANDOM;
 
-    /** The spacing named by its word on the command line and in plan files ({@code even}, {@code random}), as {@link Tokens#parse} reads it. */
+    /** The spacing named by its word on the command line and in plan files, as {@link Tokens#parse} reads it. */
     public static Spacing fromToken(String token) {
         return Tokens.parse(Spacing.class, "spacing", token);
     }

@@ -23,7 +23,7 @@ public enum SigmaMethod implements Token {
     /** Individuals (n = 1): σ̂_w = MR̄/d2(2), MR̄ the average moving range of span 2, d2(2) = 2/√π. */
     MOVING_RANGE;
 
-    /** The word used on the command line and in plan files: the name as {@link Token} makes it, {@code mr} for the moving range. */
+    /** The word on the command line and in plan files: the name as {@link Token} makes it, {@code mr} for the moving range. */
     @Override
     public String token() {
         return this == MOVING_RANGE ? "mr" : Token.super.token();
@@ -43,7 +43,7 @@ public enum SigmaMethod implements Token {
         return subgroupSize <= 10 ? RBAR : SBAR;
     }
 
-    /** The method named by its word on the command line and in plan files ({@code rbar}, {@code mr}, …), as {@link Tokens#parse} reads it. */
+    /** The method named by its word ({@code rbar}, {@code mr}, …), as {@link Tokens#parse} reads it. */
     public static SigmaMethod fromToken(String token) {
         return Tokens.parse(SigmaMethod.class, "sigma method", token);
     }

@@ -21,7 +21,7 @@ public final class Tokens {
      * The constant of {@code type} whose word equals {@code text}, ignoring case and the white space around it.
      *
      * @param type the enum
-     * @param word the constant's word ({@code Paper::name})
+     * @param word the constant's word ({@code Token::token}, or another word of its own)
      * @param text what the user wrote; {@code null} matches nothing
      * @return the constant, or empty when no constant has that word
      */
