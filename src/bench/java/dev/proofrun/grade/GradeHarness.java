@@ -118,7 +118,7 @@ public final class GradeHarness {
         long t2 = System.nanoTime();
         CharacteristicGrade g = r.characteristics().get(0);
         System.out.printf("plan built %.0f ms, graded %.0f ms; %d readings, verdict %s, problems %d%n",
-                (t1 - t0) / 1e6, (t2 - t1) / 1e6, g.completeness().readings(), g.verdict().id(), r.problems().size());
+                (t1 - t0) / 1e6, (t2 - t1) / 1e6, g.completeness().readings(), g.verdict().token(), r.problems().size());
         g.reasons().forEach(x -> System.out.println("  " + x.text()));
         Runtime rt = Runtime.getRuntime();
         System.out.printf("heap used at end %.0f MB (max %.0f MB)%n", (rt.totalMemory() - rt.freeMemory()) / 1e6, rt.maxMemory() / 1e6);

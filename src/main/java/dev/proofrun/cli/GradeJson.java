@@ -50,7 +50,7 @@ final class GradeJson {
             m.put("file", p.location().file());
             m.put("row", p.location().row() > 0 ? p.location().row() : null);
             m.put("column", p.location().column());
-            m.put("severity", p.severity().id());
+            m.put("severity", p.severity().token());
             m.put("message", p.message());
             problems.add(m);
         }
@@ -60,7 +60,7 @@ final class GradeJson {
             cs.add(characteristic(g));
         }
         root.put("characteristics", cs);
-        root.put("verdict", r.verdict().id());
+        root.put("verdict", r.verdict().token());
         root.put("look", look(r.look(), r.characteristics().isEmpty() ? Double.NaN
                 : r.characteristics().get(0).requirement().minimum()));
         root.put("caution", r.caution());
@@ -73,8 +73,8 @@ final class GradeJson {
         m.put("name", g.name());
         IndexEvidence e = g.judged();
         m.put("index", g.requirement().index().symbol());
-        m.put("method", e == null ? null : e.method().id());
-        m.put("model", e == null ? null : e.model().id());
+        m.put("method", e == null ? null : e.method().token());
+        m.put("model", e == null ? null : e.model().token());
         if (g.shape() != null && g.shape().family().hasThreshold() && g.shape().fit() != null) {
             m.put("threshold", g.shape().fit().threshold()); // only for lognormal3/weibull3: other outputs keep their bytes
         }
@@ -90,7 +90,7 @@ final class GradeJson {
         m.put("upper", e == null ? null : finite(e.upper()));
         m.put("required", g.requirement().minimum());
         m.put("confidence", g.requirement().confidence());
-        m.put("verdict", g.verdict().id());
+        m.put("verdict", g.verdict().token());
         m.put("expectedPpm", e == null ? null : finite(e.expectedPpm()));
         m.put("seed", e == null ? null : e.seed());
         m.put("readings", g.completeness().readings());
@@ -110,8 +110,8 @@ final class GradeJson {
             List<Object> signals = new ArrayList<>();
             for (SlotSignal s : g.stability().signals()) {
                 Map<String, Object> sm = new LinkedHashMap<>();
-                sm.put("chart", s.chart().id());
-                sm.put("rule", s.rule().id());
+                sm.put("chart", s.chart().token());
+                sm.put("rule", s.rule().token());
                 sm.put("subgroup", s.slot());
                 signals.add(sm);
             }
@@ -126,7 +126,7 @@ final class GradeJson {
             normality = new LinkedHashMap<>();
             normality.put("andersonDarling", finite(g.shape().andersonDarling()));
             normality.put("pValue", finite(g.shape().pValue()));
-            normality.put("model", g.shape().model().id());
+            normality.put("model", g.shape().model().token());
             normality.put("fits", g.shape().modelFits());
         }
         m.put("normality", normality);

@@ -240,8 +240,8 @@ public final class PlanNewCommand implements Callable<Integer> {
             }
             return Optional.empty();
         }
-        Spending how = spending == null ? Spending.byDefault() : Spending.fromToken(spending).orElseThrow(
-                () -> new UserException(PlanOptionMessage.UNKNOWN_SPENDING, spending, Spending.tokens()));
+        Spending how = spending == null ? Spending.byDefault()
+                : OptionValues.option("--spending", () -> Spending.fromToken(spending));
         for (Characteristic c : chars) {
             if (c.requirement().confidence() != chars.get(0).requirement().confidence()) {
                 throw new UserException(PlanOptionMessage.STAGES_ONE_CONFIDENCE);

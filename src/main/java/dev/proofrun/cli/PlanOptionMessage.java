@@ -16,7 +16,6 @@ public enum PlanOptionMessage implements MessageKey {
             + " the file as found is kept as %s.bak"),
     STAGES_RANGE("--stages: a study has 1 to %d stages, not %d"),
     STAGES_TOO_CLOSE("--stages %d: %d subgroups cannot be split into stages at least %d subgroups apart; plan at least %d subgroups or fewer stages"),
-    UNKNOWN_SPENDING("--spending: unknown spending function '%s' (known: %s)"),
     SPENDING_WITHOUT_STAGES("--spending applies to a staged plan: give --stages 2 to %d with it"),
     STAGES_ONE_CONFIDENCE("--stages: a staged plan needs one confidence for all characteristics (each look's boundary serves them all)"),
     STAGES_PLANNED("stages: %d looks at %s subgroups, bounds at %s %% confidence (%s spending, calibrated on the looks' joint distribution so the whole study keeps its false-pass risk); %d subgroups of %d (%d readings) at most"),

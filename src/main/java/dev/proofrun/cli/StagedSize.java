@@ -38,8 +38,7 @@ final class StagedSize {
 
     /** The spending function from the option, checked. */
     static Spending spending(String token) {
-        return Spending.fromToken(token).orElseThrow(
-                () -> new UserException(StagedMessage.UNKNOWN_SPENDING, token, Spending.tokens()));
+        return OptionValues.option("--spending", () -> Spending.fromToken(token));
     }
 
     /** The sentence that says whether the staged design is recommended, and why. */

@@ -1,6 +1,7 @@
 package dev.proofrun.control;
 
 import dev.proofrun.stats.SigmaMethod;
+import dev.proofrun.text.Token;
 import java.util.Locale;
 
 /**
@@ -19,23 +20,23 @@ import java.util.Locale;
  * Sources: Montgomery, <em>Introduction to Statistical Quality Control</em>, chapter 6 (X̄–R, X̄–S) and
  * the individuals chart; ASTM E2587 (the factors).
  */
-public enum ChartKind {
-    XBAR_R("xbar-r", ChartStatistic.MEAN, ChartStatistic.RANGE),
-    XBAR_S("xbar-s", ChartStatistic.MEAN, ChartStatistic.STANDARD_DEVIATION),
-    INDIVIDUALS("individuals-mr", ChartStatistic.INDIVIDUAL, ChartStatistic.MOVING_RANGE);
+public enum ChartKind implements Token {
+    XBAR_R(ChartStatistic.MEAN, ChartStatistic.RANGE),
+    XBAR_S(ChartStatistic.MEAN, ChartStatistic.STANDARD_DEVIATION),
+    INDIVIDUALS(ChartStatistic.INDIVIDUAL, ChartStatistic.MOVING_RANGE);
 
-    private final String id;
     private final ChartStatistic location;
     private final ChartStatistic spread;
 
-    ChartKind(String id, ChartStatistic location, ChartStatistic spread) {
-        this.id = id;
+    ChartKind(ChartStatistic location, ChartStatistic spread) {
         this.location = location;
         this.spread = spread;
     }
 
-    public String id() {
-        return id;
+    /** The word in JSON: {@code xbar-r}, {@code xbar-s}, and {@code individuals-mr} for individuals and moving range. */
+    @Override
+    public String token() {
+        return this == INDIVIDUALS ? "individuals-mr" : Token.super.token();
     }
 
     public ChartStatistic location() {

@@ -1,26 +1,23 @@
 package dev.proofrun.control;
 
+import dev.proofrun.text.Token;
+
 /** The statistic a control chart plots, one point per subgroup (moving range: per pair of subgroups). */
-public enum ChartStatistic {
+public enum ChartStatistic implements Token {
     /** Subgroup mean x̄ᵢ. */
-    MEAN("mean"),
+    MEAN,
     /** Subgroup range Rᵢ = max − min. */
-    RANGE("range"),
+    RANGE,
     /** Subgroup standard deviation sᵢ (divisor nᵢ − 1). */
-    STANDARD_DEVIATION("sd"),
+    STANDARD_DEVIATION,
     /** The single reading of an individuals chart. */
-    INDIVIDUAL("individual"),
+    INDIVIDUAL,
     /** |xᵢ − xᵢ₋₁|, the moving range of span 2. */
-    MOVING_RANGE("moving-range");
+    MOVING_RANGE;
 
-    private final String id;
-
-    ChartStatistic(String id) {
-        this.id = id;
-    }
-
-    /** The word used in JSON, e.g. {@code mean}. */
-    public String id() {
-        return id;
+    /** The word used in JSON, e.g. {@code mean}, {@code moving-range}; {@code sd} for the standard deviation. */
+    @Override
+    public String token() {
+        return this == STANDARD_DEVIATION ? "sd" : Token.super.token();
     }
 }

@@ -59,7 +59,7 @@ public final class ControlCharts {
             }
             if (kind == ChartKind.INDIVIDUALS ? g.length != 1 : g.length < 2) {
                 throw new IllegalArgumentException(String.format(Locale.ROOT,
-                        "subgroup %d has %d readings, which does not suit a %s chart", i + 1, g.length, kind.id()));
+                        "subgroup %d has %d readings, which does not suit a %s chart", i + 1, g.length, kind.token()));
             }
             if (kind == ChartKind.XBAR_R && g.length > ChartConstants.MAX_SIZE) {
                 throw new IllegalArgumentException(String.format(Locale.ROOT,

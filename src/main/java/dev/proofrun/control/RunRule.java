@@ -1,7 +1,7 @@
 package dev.proofrun.control;
 
+import dev.proofrun.text.Token;
 import dev.proofrun.text.Tokens;
-import java.util.Locale;
 
 /**
  * The eight run rules for a control chart, named by what they detect. Each works on points standardized to
@@ -18,37 +18,32 @@ import java.util.Locale;
  * its zone line, so the flagged point is always one of the offending points; near the start of the series
  * the window simply holds fewer points. A point exactly on the centre line belongs to neither side; two
  * equal neighbours are neither rising nor falling. Both break the runs that need a side or a direction.
+ *
+ * <p>Each rule's {@link #token() token} is its stable word in JSON and on the command line, e.g. {@code run-one-side}.
  */
-public enum RunRule {
+public enum RunRule implements Token {
 
     /** One point beyond a control limit, |z| &gt; 3. Detects a sudden large shift or a single outlier. */
-    BEYOND_LIMITS("beyond-limits", 1),
+    BEYOND_LIMITS(1),
     /** Nine points in a row on the same side of the centre line. Detects a sustained small shift of the mean. */
-    RUN_ONE_SIDE("run-one-side", 9),
+    RUN_ONE_SIDE(9),
     /** Six points in a row steadily rising or steadily falling (five rises or five falls in a row). Detects drift, e.g. tool wear. */
-    TREND("trend", 6),
+    TREND(6),
     /** Fourteen points in a row alternating up and down. Detects over-adjustment or two alternating streams (two machines, two gauges). */
-    ALTERNATING("alternating", 14),
+    ALTERNATING(14),
     /** Two of three points in a row beyond 2σ (|z| &gt; 2) on the same side. Detects a moderate shift early. */
-    TWO_OF_THREE_OUTER("two-of-three-outer", 3),
+    TWO_OF_THREE_OUTER(3),
     /** Four of five points in a row beyond 1σ (|z| &gt; 1) on the same side. Detects a small shift early. */
-    FOUR_OF_FIVE_MIDDLE("four-of-five-middle", 5),
+    FOUR_OF_FIVE_MIDDLE(5),
     /** Fifteen points in a row within 1σ (|z| &lt; 1) on either side. Detects stratification: limits too wide, e.g. subgroups that mix streams. */
-    HUGGING_CENTRE("hugging-centre", 15),
+    HUGGING_CENTRE(15),
     /** Eight points in a row beyond 1σ (|z| &gt; 1) on either side, none within. Detects a mixture of two distributions, e.g. two set-ups. */
-    AVOIDING_CENTRE("avoiding-centre", 8);
+    AVOIDING_CENTRE(8);
 
-    private final String id;
     private final int span;
 
-    RunRule(String id, int span) {
-        this.id = id;
+    RunRule(int span) {
         this.span = span;
-    }
-
-    /** The stable id used in JSON and on the command line, e.g. {@code run-one-side}. */
-    public String id() {
-        return id;
     }
 
     /** How many consecutive points the pattern spans (the earliest index at which it can fire is span − 1). */
@@ -56,9 +51,8 @@ public enum RunRule {
         return span;
     }
 
-    /** @throws IllegalArgumentException for an unknown id */
-    public static RunRule fromId(String id) {
-        return Tokens.find(RunRule.class, RunRule::id, id)
-                .orElseThrow(() -> new IllegalArgumentException(String.format(Locale.ROOT, "unknown run rule '%s'", id)));
+    /** The rule named by its word ({@code run-one-side}, …), as {@link Tokens#parse} reads it. */
+    public static RunRule fromToken(String token) {
+        return Tokens.parse(RunRule.class, "run rule", token);
     }
 }

@@ -1,9 +1,7 @@
 package dev.proofrun.design;
 
-import java.util.Arrays;
-import java.util.Optional;
-import java.util.stream.Collectors;
-
+import dev.proofrun.text.Token;
+import dev.proofrun.text.Tokens;
 import org.apache.commons.statistics.distribution.NormalDistribution;
 
 /**
@@ -20,40 +18,27 @@ import org.apache.commons.statistics.distribution.NormalDistribution;
  * recommended design saves at least 20 % of the expected readings at c₁ within the designer's 20 %-more cap
  * (docs/decisions/staged-studies-design.md); O'Brien–Fleming and Pocock stay available by name.
  */
-public enum Spending {
-    OBRIEN_FLEMING("obrien-fleming"),
-    POCOCK("pocock"),
-    KIM_DEMETS_2("kim-demets-2");
+public enum Spending implements Token {
+    OBRIEN_FLEMING,
+    POCOCK,
+    KIM_DEMETS_2;
 
     /** The token used when none is named: {@code size}, {@code plan new} and the wizard share it. */
     public static final String DEFAULT_TOKEN = "kim-demets-2";
 
     private static final NormalDistribution STANDARD = NormalDistribution.of(0, 1);
 
-    private final String token;
-
-    Spending(String token) {
-        this.token = token;
-    }
-
-    /** The name in plan files and on the command line. */
-    public String token() {
-        return token;
-    }
-
-    /** The spending function named by {@code token}, if any. */
-    public static Optional<Spending> fromToken(String token) {
-        return Arrays.stream(values()).filter(s -> s.token.equals(token)).findFirst();
+    /**
+     * The spending function named by its word in plan files and on the command line ({@code obrien-fleming},
+     * {@code pocock}, {@code kim-demets-2}), as {@link Tokens#parse} reads it.
+     */
+    public static Spending fromToken(String token) {
+        return Tokens.parse(Spending.class, "spending function", token);
     }
 
     /** The spending used when none is named ({@link #DEFAULT_TOKEN}). */
     public static Spending byDefault() {
-        return fromToken(DEFAULT_TOKEN).orElseThrow();
-    }
-
-    /** Every token, comma-separated, for messages. */
-    public static String tokens() {
-        return Arrays.stream(values()).map(Spending::token).collect(Collectors.joining(", "));
+        return fromToken(DEFAULT_TOKEN);
     }
 
     /**

@@ -5,7 +5,6 @@ import dev.proofrun.text.MessageKey;
 /** What the staged designer tells people: refusals and the recommendation (English inline, Locale.ROOT). */
 public enum StagedMessage implements MessageKey {
     BAD_STAGES("--stages must be between 1 and %d: %s"),
-    UNKNOWN_SPENDING("unknown spending function '%s' (%s)"),
     LOOKS_TOO_CLOSE("%d looks over %d subgroups are fewer than %d subgroups apart; plan fewer looks"),
     STAGES_NEED_NORMAL("--stages plans normal-theory bounds only; for --shape %s plan a single stage"),
     STAGES_NEED_ONE_CHARACTERISTIC("--stages plans one characteristic at a time; leave out --characteristics"),

@@ -42,7 +42,7 @@ public record IndexEvidence(IndexKind index, double required, double confidence,
 
     /** "Cpk under the normal model by normal theory, exact bounds: estimate 1.473, lower 95 % bound 1.285, required 1.33". */
     public String summary() {
-        return GradeMessage.JUDGED.format(index.symbol(), model.id(), method.words(), estimate,
+        return GradeMessage.JUDGED.format(index.symbol(), model.token(), method.words(), estimate,
                 GradedLook.percent(confidence), lower, required);
     }
 

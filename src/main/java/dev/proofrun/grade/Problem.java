@@ -29,6 +29,6 @@ public record Problem(Location location, Severity severity, GradeMessage key, St
     /** "data.csv, row 12, column x3: error: ..." */
     @Override
     public String toString() {
-        return location + ": " + severity.id() + ": " + message;
+        return location + ": " + severity.token() + ": " + message;
     }
 }

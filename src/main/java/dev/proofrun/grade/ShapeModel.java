@@ -1,5 +1,7 @@
 package dev.proofrun.grade;
 
+import dev.proofrun.text.Token;
+
 /**
  * The distribution model under which the capability is computed: the plan's declared
  * {@link dev.proofrun.stats.ShapeFamily}, as the result and the report name it.
@@ -15,24 +17,16 @@ package dev.proofrun.grade;
  * Under the lognormal, Weibull and folded-normal models the index is the percentile index of ISO 22514-2 (Clements 1989,
  * Quality Progress 22(9):95–100): Ppu = (USL − X₅₀)/(X₉₉.₈₆₅ − X₅₀), Ppl = (X₅₀ − LSL)/(X₅₀ − X₀.₁₃₅),
  * Pp = (USL − LSL)/(X₉₉.₈₆₅ − X₀.₁₃₅).
+ *
+ * <p>Its {@link #token() token} is the word in JSON, the same as the shape's.
  */
-public enum ShapeModel {
-    NORMAL("normal"),
-    LOGNORMAL("lognormal"),
-    WEIBULL("weibull"),
-    FOLDED_NORMAL("folded-normal"),
-    LOGNORMAL3("lognormal3"),
-    WEIBULL3("weibull3");
-
-    private final String id;
-
-    ShapeModel(String id) {
-        this.id = id;
-    }
-
-    public String id() {
-        return id;
-    }
+public enum ShapeModel implements Token {
+    NORMAL,
+    LOGNORMAL,
+    WEIBULL,
+    FOLDED_NORMAL,
+    LOGNORMAL3,
+    WEIBULL3;
 
     /** The two-parameter model x − θ follows for a threshold model; itself otherwise. */
     public ShapeModel base() {

@@ -28,9 +28,9 @@ public final class SignalPatterns {
     public static String describe(List<SlotSignal> signals) {
         Map<String, List<SlotSignal>> byRule = new LinkedHashMap<>();
         for (SlotSignal s : signals) {
-            String id = s.chart().id();
+            String id = s.chart().token();
             boolean location = id.equals("mean") || id.equals("individual");
-            byRule.computeIfAbsent(s.rule().id() + (location ? "" : " (" + id + ")"), r -> new ArrayList<>()).add(s);
+            byRule.computeIfAbsent(s.rule().token() + (location ? "" : " (" + id + ")"), r -> new ArrayList<>()).add(s);
         }
         StringBuilder sb = new StringBuilder();
         byRule.entrySet().stream().sorted(Map.Entry.comparingByKey()).forEach(e -> {
@@ -51,7 +51,7 @@ public final class SignalPatterns {
     public static int count(List<SlotSignal> signals) {
         Map<String, List<SlotSignal>> byRule = new LinkedHashMap<>();
         for (SlotSignal s : signals) {
-            byRule.computeIfAbsent(s.chart().id() + " " + s.rule().id(), r -> new ArrayList<>()).add(s);
+            byRule.computeIfAbsent(s.chart().token() + " " + s.rule().token(), r -> new ArrayList<>()).add(s);
         }
         return byRule.values().stream().mapToInt(l -> runs(l).size()).sum();
     }

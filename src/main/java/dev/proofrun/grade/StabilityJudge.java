@@ -60,8 +60,8 @@ final class StabilityJudge {
         double ratio = d.ratio();
         boolean signalled = d.signalled();
         boolean between = d.between();
-        String loc = d.meansOnOwnChart() ? "subgroup means' own" : kind.location().id();
-        String spr = kind.spread().id();
+        String loc = d.meansOnOwnChart() ? "subgroup means' own" : kind.location().token();
+        String spr = kind.spread().token();
         if (signalled) {
             reasons.add(new Reason(Step.STABILITY, true, GradeMessage.REASON_UNSTABLE_SIGNALS.format(SignalPatterns.points(locationPoints), loc,
                     spreadPoints, spr, k, locationChance.expectedLocation(), chance.expectedSpread(),

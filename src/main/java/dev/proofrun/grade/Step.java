@@ -1,23 +1,15 @@
 package dev.proofrun.grade;
 
-/** The steps of the argument, in the order the reasons are given. */
-public enum Step {
+import dev.proofrun.text.Token;
+
+/** The steps of the argument, in the order the reasons are given; its {@link #token() token} is the word in JSON. */
+public enum Step implements Token {
     /** Was the plan followed: every slot, every reading, on time. */
-    COMPLETENESS("completeness"),
+    COMPLETENESS,
     /** Was the process in statistical control during the study. */
-    STABILITY("stability"),
+    STABILITY,
     /** Is the distribution model fair. */
-    SHAPE("shape"),
+    SHAPE,
     /** Does the confidence bound reach the requirement. */
-    CAPABILITY("capability");
-
-    private final String id;
-
-    Step(String id) {
-        this.id = id;
-    }
-
-    public String id() {
-        return id;
-    }
+    CAPABILITY
 }

@@ -1,5 +1,7 @@
 package dev.proofrun.grade;
 
+import dev.proofrun.text.Token;
+
 /**
  * What a study shows for one characteristic, ordered from best to worst; the part's verdict is the worst
  * of its characteristics ({@link #worse}).
@@ -20,29 +22,20 @@ package dev.proofrun.grade;
  *     Worst, because nothing about the process is known from it.</li>
  * </ul>
  */
-public enum Verdict {
-    DEMONSTRATED("demonstrated", "Demonstrated"),
-    CONTINUE("continue", "Continue"),
-    INCONCLUSIVE("inconclusive", "Inconclusive"),
-    NOT_DEMONSTRATED("not-demonstrated", "Not demonstrated"),
-    NOT_VALID("not-valid", "Not valid");
+public enum Verdict implements Token {
+    DEMONSTRATED,
+    CONTINUE,
+    INCONCLUSIVE,
+    NOT_DEMONSTRATED,
+    NOT_VALID;
 
-    private final String id;
-    private final String words;
-
-    Verdict(String id, String words) {
-        this.id = id;
-        this.words = words;
-    }
-
-    /** The verdict as a reader sees it on paper and on screen, e.g. "Not valid" (the id stays in JSON). */
+    /**
+     * The verdict as a reader sees it on paper and on screen: its {@link #token() token} (the word in JSON and in
+     * scripts, e.g. {@code not-valid}) with a capital first letter and spaces for hyphens, e.g. "Not valid".
+     */
     public String words() {
-        return words;
-    }
-
-    /** The token used in JSON and in scripts, e.g. {@code not-valid}. */
-    public String id() {
-        return id;
+        String token = token();
+        return Character.toUpperCase(token.charAt(0)) + token.substring(1).replace('-', ' ');
     }
 
     /** The worse of the two. */

@@ -1,11 +1,11 @@
 package dev.proofrun.paper;
 
+import dev.proofrun.text.Token;
 import dev.proofrun.text.Tokens;
-import java.util.Locale;
 import org.apache.pdfbox.pdmodel.common.PDRectangle;
 
 /** Paper sizes we print on, portrait, in PDF points (1/72 inch). */
-public enum Paper {
+public enum Paper implements Token {
     /** ISO 216 A4, 210 mm × 297 mm = 595.28 pt × 841.89 pt. */
     A4(PDRectangle.A4),
     /** US Letter (ANSI/ASME Y14.1 size A), 8.5 in × 11 in = 612 pt × 792 pt. */
@@ -38,7 +38,6 @@ public enum Paper {
      * @throws IllegalArgumentException for any other word
      */
     public static Paper of(String word) {
-        return Tokens.find(Paper.class, Paper::name, word)
-                .orElseThrow(() -> new IllegalArgumentException(String.format(Locale.ROOT, "unknown paper '%s' (a4 or letter)", word)));
+        return Tokens.parse(Paper.class, "paper", word);
     }
 }

@@ -31,7 +31,7 @@ public final class PlanDocument {
             out.putNull("revision");
         }
         out.put("revisionNumber", plan.revisionNumber());
-        out.put("integrity", integrity.name().toLowerCase(java.util.Locale.ROOT).replace('_', '-'));
+        out.put("integrity", integrity.token());
         out.put("summary", plan.summary());
         ArrayNode slots = (ArrayNode) file.path("schedule").path("slots");
         out.set("slots", slots.deepCopy());

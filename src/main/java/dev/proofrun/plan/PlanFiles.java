@@ -15,6 +15,7 @@ import com.fasterxml.jackson.databind.exc.UnrecognizedPropertyException;
 import com.fasterxml.jackson.databind.json.JsonMapper;
 import dev.proofrun.text.AtomicFile;
 import dev.proofrun.text.Location;
+import dev.proofrun.text.Token;
 import dev.proofrun.text.UserException;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
@@ -71,8 +72,8 @@ public final class PlanFiles {
     private PlanFiles() {
     }
 
-    /** How a plan file stands. */
-    public enum Integrity {
+    /** How a plan file stands; its {@link Token#token() token} is the word {@code plan show --json} writes. */
+    public enum Integrity implements Token {
         /** A draft: no revision to check. */
         DRAFT,
         /** Issued, and the content still gives the recorded revision. */

@@ -24,8 +24,7 @@ final class PlanStagesCodec {
 
     static Stages read(PlanJson.StagesJ sj, int subgroups, List<Characteristic> characteristics, Location file) {
         String token = required(sj.spending(), "$.stages.spending", file);
-        Spending spending = Spending.fromToken(token).orElseThrow(() -> bad(file, "$.stages.spending",
-                String.format(Locale.ROOT, "unknown spending function '%s' (known: %s)", token, Spending.tokens())));
+        Spending spending = value(file, "$.stages.spending", () -> Spending.fromToken(token));
         List<PlanJson.LookJ> lj = required(sj.looks(), "$.stages.looks", file);
         if (lj.size() < 2 || lj.size() > Stages.MOST) {
             throw bad(file, "$.stages.looks", String.format(Locale.ROOT,

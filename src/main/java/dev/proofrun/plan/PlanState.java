@@ -1,34 +1,19 @@
 package dev.proofrun.plan;
 
-import java.util.Locale;
+import dev.proofrun.text.Token;
+import dev.proofrun.text.Tokens;
 
 /**
  * Where a plan is in its life. A {@link #DRAFT} may be changed freely. {@link #ISSUED} is frozen: it
  * carries a revision fingerprint that the sheets print and the returned data must quote; changing it
  * afterwards makes a new revision (see {@link PlanFiles#issue(java.nio.file.Path)}).
  */
-public enum PlanState {
-    DRAFT("draft"),
-    ISSUED("issued");
+public enum PlanState implements Token {
+    DRAFT,
+    ISSUED;
 
-    private final String token;
-
-    PlanState(String token) {
-        this.token = token;
-    }
-
-    /** The word in plan files. */
-    public String token() {
-        return token;
-    }
-
-    /** @throws IllegalArgumentException for an unknown token */
+    /** The state named by its word in plan files ({@code draft}, {@code issued}), as {@link Tokens#parse} reads it. */
     public static PlanState fromToken(String token) {
-        for (PlanState s : values()) {
-            if (s.token.equals(token)) {
-                return s;
-            }
-        }
-        throw new IllegalArgumentException(String.format(Locale.ROOT, "unknown plan state '%s' (draft or issued)", token));
+        return Tokens.parse(PlanState.class, "plan state", token);
     }
 }

@@ -73,9 +73,9 @@ final class EvidenceSection {
         Stability st = g.stability();
         if (st != null) {
             var charts = st.charts();
-            s.add(new ControlChartBlock(charts.location(), chartTitle(charts.location().statistic().id()), regular, bold));
+            s.add(new ControlChartBlock(charts.location(), chartTitle(charts.location().statistic().token()), regular, bold));
             s.add(Block.space(4));
-            s.add(new ControlChartBlock(charts.spread(), chartTitle(charts.spread().statistic().id()), regular, bold));
+            s.add(new ControlChartBlock(charts.spread(), chartTitle(charts.spread().statistic().token()), regular, bold));
             TextTable t = table();
             s.add(Block.space(4));
             s.add(t.header());
@@ -102,14 +102,14 @@ final class EvidenceSection {
             ModelCurve curve = Histogram.curve(sh, x);
             h.add(new HistogramBlock(x, g.limits(), nominal, step, curve, "Readings against the limits", regular, bold));
             h.add(Block.space(4));
-            h.add(new ProbabilityPlotBlock(x, curve, "Probability plot under the " + curve.model().id() + " model", regular, bold));
+            h.add(new ProbabilityPlotBlock(x, curve, "Probability plot under the " + curve.model().token() + " model", regular, bold));
             h.add(Block.space(4));
             TextTable t = TextTable.of(List.of(Column.left("Planned model", 2), Column.right("parameter 1", 2),
                     Column.right("parameter 2", 2), Column.right("A\u00b2", 1.5f), Column.left("fits at 1 %", 2)),
                     regular, bold, 8);
             h.add(t.header());
             for (ModelFit f : sh.fits()) {
-                h.add(t.row(f.model().id(), ReportNumbers.value(f.first()), ReportNumbers.value(f.second()),
+                h.add(t.row(f.model().token(), ReportNumbers.value(f.first()), ReportNumbers.value(f.second()),
                         ReportNumbers.fixed(sh.andersonDarling(), 3), (f.fits() ? "yes" : "no")
                                 + (Double.isNaN(sh.pValue()) ? "" : ", p " + ReportNumbers.p(sh.pValue()))));
             }

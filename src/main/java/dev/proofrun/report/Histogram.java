@@ -97,7 +97,7 @@ public record Histogram(Bins bins, long[] counts, double lo, double hi, double[]
             }
         }
         double yMax = Math.max(most, Math.min(peak, most * 3.0)) * 1.12;
-        return new Histogram(b, counts, lo, hi, xs, ys, yMax, limits, nominal, curve.model().id());
+        return new Histogram(b, counts, lo, hi, xs, ys, yMax, limits, nominal, curve.model().token());
     }
 
     /** Left edge of bin i. */

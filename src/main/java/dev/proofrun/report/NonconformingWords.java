@@ -46,10 +46,10 @@ final class NonconformingWords {
                     ReportNumbers.ppm(bound.getAsDouble()), conf, e.index().symbol(), counted);
         }
         String expected = Double.isFinite(e.expectedPpm()) ? String.format(Locale.ROOT,
-                "; about %s ppm expected under the fitted %s model", ReportNumbers.ppm(e.expectedPpm()), e.model().id()) : "";
+                "; about %s ppm expected under the fitted %s model", ReportNumbers.ppm(e.expectedPpm()), e.model().token()) : "";
         return String.format(Locale.ROOT, "Nonconforming parts: %s%s. No upper bound is stated: %s.", counted,
                 expected, e.model() == ShapeModel.NORMAL ? "the required " + e.index().symbol()
-                        + " does not bound the fraction outside" : "under the " + e.model().id()
+                        + " does not bound the fraction outside" : "under the " + e.model().token()
                         + " model the percentile index does not turn into a fraction outside");
     }
 }

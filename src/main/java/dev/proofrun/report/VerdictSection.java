@@ -98,7 +98,7 @@ final class VerdictSection {
                     Column.left("Problem", 6)), regular, bold, 8);
             flow.startTable(t.header());
             for (Problem p : problems.subList(0, Math.min(PROBLEMS_LISTED, problems.size()))) {
-                flow.place(t.row(p.location().toString(), p.severity().id(), p.message()));
+                flow.place(t.row(p.location().toString(), p.severity().token(), p.message()));
             }
             flow.endTable();
             if (problems.size() > PROBLEMS_LISTED) {
@@ -131,7 +131,7 @@ final class VerdictSection {
         }
         return String.format(Locale.ROOT, " (%s \u2265 %s required: estimate %s, lower bound %s; %s model, %s)",
                 e.index().symbol(), ReportNumbers.index(e.required()), ReportNumbers.index(e.estimate()), ReportNumbers.index(e.lower()),
-                e.model().id(), e.method().words());
+                e.model().token(), e.method().words());
     }
 
     /**

@@ -1,7 +1,7 @@
 package dev.proofrun.schedule;
 
+import dev.proofrun.text.Token;
 import dev.proofrun.text.Tokens;
-import java.util.Locale;
 
 /**
  * How the k slots are spread over the working time W of the span. The working time is cut into k equal
@@ -20,24 +20,12 @@ import java.util.Locale;
  * </ul>
  * Working time skips breaks, non-working days and time between shifts; see {@link Scheduler}.
  */
-public enum Spacing {
-    EVEN("even"),
-    RANDOM("random");
+public enum Spacing implements Token {
+    EVEN,
+    RANDOM;
 
-    private final String token;
-
-    Spacing(String token) {
-        this.token = token;
-    }
-
-    /** The word used on the command line and in plan files. */
-    public String token() {
-        return token;
-    }
-
-    /** @throws IllegalArgumentException for an unknown token */
+    /** The spacing named by its word on the command line and in plan files, as {@link Tokens#parse} reads it. */
     public static Spacing fromToken(String token) {
-        return Tokens.find(Spacing.class, Spacing::token, token)
-                .orElseThrow(() -> new IllegalArgumentException(String.format(Locale.ROOT, "unknown spacing '%s' (even or random)", token)));
+        return Tokens.parse(Spacing.class, "spacing", token);
     }
 }

@@ -47,7 +47,7 @@ public final class SheetPdf {
                     pages.bold(), flow.width());
             float room = pages.bodyHeight() - table.header().height(flow.width());
             if (table.blockHeight() > room) {
-                String sheet = paper.name().toLowerCase(java.util.Locale.ROOT);
+                String sheet = paper.token();
                 int largest = table.largestSubgroupSize(room);
                 throw largest > 0
                         ? new UserException(SheetMessage.SLOT_TOO_TALL, plan.characteristics().size(), plan.design().subgroupSize(),

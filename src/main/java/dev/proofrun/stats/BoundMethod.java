@@ -1,7 +1,7 @@
 package dev.proofrun.stats;
 
+import dev.proofrun.text.Token;
 import dev.proofrun.text.Tokens;
-import java.util.Locale;
 
 /**
  * How the lower confidence bound of an index is computed.
@@ -15,23 +15,12 @@ import java.util.Locale;
  * (Bissell 1990, Applied Statistics 39:331–340); Cp/Pp stay exact.</li>
  * </ul>
  */
-public enum BoundMethod {
-    EXACT("exact"),
-    BISSELL("bissell");
+public enum BoundMethod implements Token {
+    EXACT,
+    BISSELL;
 
-    private final String token;
-
-    BoundMethod(String token) {
-        this.token = token;
-    }
-
-    public String token() {
-        return token;
-    }
-
-    /** @throws IllegalArgumentException for an unknown token */
+    /** The method named by its word ({@code exact}, {@code bissell}), as {@link Tokens#parse} reads it. */
     public static BoundMethod fromToken(String token) {
-        return Tokens.find(BoundMethod.class, BoundMethod::token, token)
-                .orElseThrow(() -> new IllegalArgumentException(String.format(Locale.ROOT, "unknown bound method '%s' (exact or bissell)", token)));
+        return Tokens.parse(BoundMethod.class, "bound method", token);
     }
 }

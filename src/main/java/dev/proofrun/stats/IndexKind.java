@@ -1,45 +1,39 @@
 package dev.proofrun.stats;
 
+import dev.proofrun.text.Token;
 import dev.proofrun.text.Tokens;
-import java.util.Locale;
 
 /**
  * The capability and performance indices (symbols as in ISO 22514-2).
  * "Within" indices use σ_w, "overall" ones the sample standard deviation s of all readings.
  */
-public enum IndexKind {
+public enum IndexKind implements Token {
     /** (USL−LSL)/(6σ_w); two-sided only. */
-    CP("cp", true, Side.BOTH),
+    CP(true, Side.BOTH),
     /** (USL−μ)/(3σ_w). */
-    CPU("cpu", true, Side.UPPER),
+    CPU(true, Side.UPPER),
     /** (μ−LSL)/(3σ_w). */
-    CPL("cpl", true, Side.LOWER),
+    CPL(true, Side.LOWER),
     /** min(Cpu, Cpl); for a one-sided specification the one that exists. */
-    CPK("cpk", true, Side.NEAREST),
+    CPK(true, Side.NEAREST),
     /** (USL−LSL)/(6s); two-sided only. */
-    PP("pp", false, Side.BOTH),
+    PP(false, Side.BOTH),
     /** (USL−μ)/(3s). */
-    PPU("ppu", false, Side.UPPER),
+    PPU(false, Side.UPPER),
     /** (μ−LSL)/(3s). */
-    PPL("ppl", false, Side.LOWER),
+    PPL(false, Side.LOWER),
     /** min(Ppu, Ppl); for a one-sided specification the one that exists. */
-    PPK("ppk", false, Side.NEAREST);
+    PPK(false, Side.NEAREST);
 
     /** Which limit(s) an index uses. */
     public enum Side { BOTH, UPPER, LOWER, NEAREST }
 
-    private final String token;
     private final boolean within;
     private final Side side;
 
-    IndexKind(String token, boolean within, Side side) {
-        this.token = token;
+    IndexKind(boolean within, Side side) {
         this.within = within;
         this.side = side;
-    }
-
-    public String token() {
-        return token;
     }
 
     /** True for indices on σ_w (Cp family), false for those on s (Pp family). */
@@ -53,12 +47,12 @@ public enum IndexKind {
 
     /** Upper-case symbol as printed: "Cpk", "Ppu". */
     public String symbol() {
+        String token = token();
         return Character.toUpperCase(token.charAt(0)) + token.substring(1);
     }
 
-    /** @throws IllegalArgumentException for an unknown token */
+    /** The index named by its word ({@code cpk}, {@code ppu}, …), as {@link Tokens#parse} reads it. */
     public static IndexKind fromToken(String token) {
-        return Tokens.find(IndexKind.class, IndexKind::token, token)
-                .orElseThrow(() -> new IllegalArgumentException(String.format(Locale.ROOT, "unknown index '%s'", token)));
+        return Tokens.parse(IndexKind.class, "index", token);
     }
 }

@@ -1,9 +1,7 @@
 package dev.proofrun.stats;
 
+import dev.proofrun.text.Token;
 import dev.proofrun.text.Tokens;
-import java.util.Arrays;
-import java.util.Locale;
-import java.util.stream.Collectors;
 
 /**
  * The distribution model a characteristic's readings are planned to follow. The shape belongs to the plan:
@@ -32,31 +30,24 @@ import java.util.stream.Collectors;
  * ({@code grade.PercentileBound}). Tokens are the words in plan files, the characteristics CSV and
  * {@code --shape}.
  */
-public enum ShapeFamily {
+public enum ShapeFamily implements Token {
     /** Normal: the readings as they are. */
-    NORMAL("normal", Double.NEGATIVE_INFINITY),
+    NORMAL(Double.NEGATIVE_INFINITY),
     /** Lognormal: ln x is normal; readings must be positive. */
-    LOGNORMAL("lognormal", 0),
+    LOGNORMAL(0),
     /** Two-parameter Weibull: ln x is smallest-extreme-value; readings must be positive. */
-    WEIBULL("weibull", 0),
+    WEIBULL(0),
     /** Folded normal |Y|, Y normal(μ, σ): readings must not be negative ({@link FoldedNormal}). Not location–scale. */
-    FOLDED_NORMAL("folded-normal", 0),
+    FOLDED_NORMAL(0),
     /** Lognormal of x − θ with a declared threshold θ: readings must lie above θ. */
-    LOGNORMAL3("lognormal3", 0),
+    LOGNORMAL3(0),
     /** Two-parameter Weibull of x − θ with a declared threshold θ: readings must lie above θ. */
-    WEIBULL3("weibull3", 0);
+    WEIBULL3(0);
 
-    private final String token;
     private final double lowerBound;
 
-    ShapeFamily(String token, double lowerBound) {
-        this.token = token;
+    ShapeFamily(double lowerBound) {
         this.lowerBound = lowerBound;
-    }
-
-    /** The word in files and options: "normal", "lognormal", "weibull", "folded-normal", "lognormal3", "weibull3". */
-    public String token() {
-        return token;
     }
 
     /**
@@ -94,17 +85,11 @@ public enum ShapeFamily {
         return this != FOLDED_NORMAL;
     }
 
-    /** The tokens, comma separated, for messages: "normal, lognormal, weibull, folded-normal, lognormal3, weibull3". */
-    public static String names() {
-        return Arrays.stream(values()).map(ShapeFamily::token).collect(Collectors.joining(", "));
-    }
-
     /**
-     * @throws IllegalArgumentException for an unknown name, listing the known ones
+     * The shape named by its word in files and options ("normal", "lognormal", "weibull", "folded-normal",
+     * "lognormal3", "weibull3"), as {@link Tokens#parse} reads it.
      */
     public static ShapeFamily fromToken(String token) {
-        return Tokens.find(ShapeFamily.class, ShapeFamily::token, token)
-                .orElseThrow(() -> new IllegalArgumentException(String.format(Locale.ROOT,
-                        "unknown shape '%s'; the shapes are %s", token == null ? "" : token.trim(), names())));
+        return Tokens.parse(ShapeFamily.class, "shape", token);
     }
 }

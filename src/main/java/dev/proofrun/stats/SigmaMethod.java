@@ -1,5 +1,6 @@
 package dev.proofrun.stats;
 
+import dev.proofrun.text.Token;
 import dev.proofrun.text.Tokens;
 import java.util.Locale;
 
@@ -11,26 +12,21 @@ import java.util.Locale;
  * {@link #MOVING_RANGE} have an <em>effective</em> ν found by matching the estimator's coefficient of
  * variation to that of a scaled chi variable (Patnaik 1950, Biometrika 37:78–87).
  */
-public enum SigmaMethod {
+public enum SigmaMethod implements Token {
 
     /** σ̂_w = R̄/d2(n), the average subgroup range over d2. Equal subgroup sizes, 2 ≤ n ≤ 50. */
-    RBAR("rbar"),
+    RBAR,
     /** σ̂_w = S̄/c4(n), the average subgroup standard deviation over c4; unequal sizes weighted. n ≥ 2. */
-    SBAR("sbar"),
+    SBAR,
     /** σ̂_w = s_p/c4(ν+1), s_p the pooled standard deviation with ν = Σ(nᵢ−1). n ≥ 2. */
-    POOLED("pooled"),
+    POOLED,
     /** Individuals (n = 1): σ̂_w = MR̄/d2(2), MR̄ the average moving range of span 2, d2(2) = 2/√π. */
-    MOVING_RANGE("mr");
+    MOVING_RANGE;
 
-    private final String token;
-
-    SigmaMethod(String token) {
-        this.token = token;
-    }
-
-    /** The word used on the command line and in plan files. */
+    /** The word on the command line and in plan files: the name as {@link Token} makes it, {@code mr} for the moving range. */
+    @Override
     public String token() {
-        return token;
+        return this == MOVING_RANGE ? "mr" : Token.super.token();
     }
 
     /**
@@ -47,10 +43,8 @@ public enum SigmaMethod {
         return subgroupSize <= 10 ? RBAR : SBAR;
     }
 
-    /** @throws IllegalArgumentException for an unknown token */
+    /** The method named by its word ({@code rbar}, {@code mr}, …), as {@link Tokens#parse} reads it. */
     public static SigmaMethod fromToken(String token) {
-        return Tokens.find(SigmaMethod.class, SigmaMethod::token, token)
-                .orElseThrow(() -> new IllegalArgumentException(String.format(Locale.ROOT,
-                        "unknown sigma method '%s' (rbar, sbar, pooled or mr)", token)));
+        return Tokens.parse(SigmaMethod.class, "sigma method", token);
     }
 }

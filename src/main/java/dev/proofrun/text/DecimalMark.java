@@ -16,23 +16,16 @@ import java.util.Locale;
  * decimal mark (a point too), a {@code ,}-separated one a point (a comma only inside quotes); the grader
  * says which it found.
  */
-public enum DecimalMark {
+public enum DecimalMark implements Token {
     /** {@code 1.33}. */
-    POINT("point", '.'),
+    POINT('.'),
     /** {@code 1,33}. */
-    COMMA("comma", ',');
+    COMMA(',');
 
-    private final String token;
     private final char mark;
 
-    DecimalMark(String token, char mark) {
-        this.token = token;
+    DecimalMark(char mark) {
         this.mark = mark;
-    }
-
-    /** The word in settings files. */
-    public String token() {
-        return token;
     }
 
     /** The character itself. */
@@ -50,10 +43,9 @@ public enum DecimalMark {
         return DecimalFormatSymbols.getInstance(locale).getDecimalSeparator() == ',' ? COMMA : POINT;
     }
 
-    /** @throws IllegalArgumentException for an unknown token */
+    /** The mark named by its word in settings files ({@code point}, {@code comma}), as {@link Tokens#parse} reads it. */
     public static DecimalMark fromToken(String token) {
-        return Tokens.find(DecimalMark.class, DecimalMark::token, token)
-                .orElseThrow(() -> new IllegalArgumentException(String.format(Locale.ROOT, "unknown decimal mark '%s' (point or comma)", token)));
+        return Tokens.parse(DecimalMark.class, "decimal mark", token);
     }
 
     /** The number in the text (already trimmed): NaN when it is not one, infinite when it overflows. */

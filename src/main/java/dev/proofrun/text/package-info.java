@@ -16,6 +16,10 @@
  * <li>{@code CsvReader} (over {@code CsvLines}) in the dialect of {@code CsvDialect}: the one CSV reader — returned
  * files, files of readings, characteristic lists; {@code Decimals} (and {@code DecimalMark} for fields people
  * type): the one number rule.</li>
+ * <li>{@code Token} and {@code Tokens}: the one word rule for enums named in files, options and JSON. The word is the
+ * constant's name in lower case with {@code _} as {@code -} ({@code NOT_VALID} is {@code not-valid}) unless the enum
+ * overrides {@code token()} ({@code SigmaMethod.MOVING_RANGE} is {@code mr}); {@code Tokens.parse} reads it back in
+ * any case, space around it ignored, and refuses an unknown word with one message that lists the known ones.</li>
  * </ul>
  */
 package dev.proofrun.text;

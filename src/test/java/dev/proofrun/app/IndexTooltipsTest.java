@@ -91,7 +91,7 @@ class IndexTooltipsTest extends WizardRobotTest {
                 for (IndexTip t : tips) {
                     seen.add(t);
                     if (!tip.contains(t.english())) {
-                        bare.add(where + ": '" + l.getText() + "' lacks the " + t.symbol() + " tip");
+                        bare.add(where + ": '" + l.getText() + "' lacks the " + t.name() + " tip");
                     }
                 }
             }

@@ -65,7 +65,7 @@ class OptionValuesCommandTest {
     @Test
     void anUnknownIndexIsRefusedAlikeBySizeAndPlanNew() throws Exception {
         List<String[]> c = everyCommand("--lsl", "1", "--usl", "2", "--index", "cpq");
-        refusedAlike("--index: unknown index 'cpq'", c.get(0), c.get(2));
+        refusedAlike("--index: unknown index 'cpq' (cp, cpu, cpl, cpk, pp, ppu, ppl or ppk)", c.get(0), c.get(2));
     }
 
     @Test

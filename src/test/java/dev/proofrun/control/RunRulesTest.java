@@ -138,9 +138,9 @@ class RunRulesTest {
         assertTrue(only(RunRule.TREND, z).isEmpty());
         assertEquals(1, RunRules.scan(z, EnumSet.allOf(RunRule.class)).size());
         for (RunRule r : RunRule.values()) {
-            assertEquals(r, RunRule.fromId(r.id()));
+            assertEquals(r, RunRule.fromToken(r.token()));
         }
-        assertThrows(IllegalArgumentException.class, () -> RunRule.fromId("nine"));
+        assertThrows(IllegalArgumentException.class, () -> RunRule.fromToken("nine"));
         assertThrows(IllegalArgumentException.class, () -> RunRules.scan(new double[] {Double.NaN}, Set.of(RunRule.TREND)));
     }
 

@@ -108,7 +108,7 @@ class StagedGradingTest {
         assertEquals(2, r.look().orElseThrow().number());
         assertEquals(30, g.completeness().completeSubgroups());
         assertEquals(0.96, g.judged().confidence());
-        assertTrue(g.verdict() == Verdict.DEMONSTRATED || g.verdict() == Verdict.NOT_DEMONSTRATED, g.verdict().id());
+        assertTrue(g.verdict() == Verdict.DEMONSTRATED || g.verdict() == Verdict.NOT_DEMONSTRATED, g.verdict().token());
         assertTrue(says(g, "graded at look 2, the furthest look the file completes"), g.reasons().toString());
     }
 

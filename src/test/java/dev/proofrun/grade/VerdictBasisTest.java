@@ -44,7 +44,7 @@ class VerdictBasisTest {
         assertTrue(e.otherThanNormalTheory(), e.toString());
         assertEquals(ShapeModel.LOGNORMAL, e.model());
         assertEquals(IndexMethod.PERCENTILE, e.method());
-        assertTrue(e.summary().contains("under the " + e.model().id() + " model"), e.summary());
+        assertTrue(e.summary().contains("under the " + e.model().token() + " model"), e.summary());
     }
 
     private CharacteristicGrade gradeOf(SimulatedReturn.Process p, long seed) {

@@ -62,7 +62,7 @@ class ReportPiecesTest {
             String all = new PDFTextStripper().getText(doc).replaceAll("\\s+", " ");
             assertTrue(all.contains("Sign-off Name Date Signature Prepared by Reviewed by"), "block to sign");
             for (Verdict v : Verdict.values()) {
-                assertFalse(all.contains(" " + v.id() + " ") && v.id().contains("-"), "token " + v.id());
+                assertFalse(all.contains(" " + v.token() + " ") && v.token().contains("-"), "token " + v.token());
             }
             CharacteristicGrade d1 = result.characteristics().get(0);
             double bound = Nonconforming.upperPpm(d1.judged().index(), d1.limits(), d1.judged().lower()).getAsDouble();

@@ -114,7 +114,7 @@ class StagedSheetTest {
         assertTrue(r.problems().isEmpty(), r.problems().toString());
         assertEquals(1, r.look().orElseThrow().number());
         assertEquals(15, r.characteristics().get(0).completeness().completeSubgroups());
-        assertTrue(r.verdict() == Verdict.DEMONSTRATED || r.verdict() == Verdict.CONTINUE, r.verdict().id());
+        assertTrue(r.verdict() == Verdict.DEMONSTRATED || r.verdict() == Verdict.CONTINUE, r.verdict().token());
     }
 
     /** A standard normal draw (Box–Muller). */

@@ -105,7 +105,7 @@ class ShapeFitterTest {
     @Test
     void unknownShapesAreRefusedWithTheNames() {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> ShapeFamily.fromToken("gamma"));
-        assertEquals("unknown shape 'gamma'; the shapes are normal, lognormal, weibull, folded-normal, lognormal3, weibull3", e.getMessage());
+        assertEquals("unknown shape 'gamma' (normal, lognormal, weibull, folded-normal, lognormal3 or weibull3)", e.getMessage());
         assertEquals(ShapeFamily.WEIBULL, ShapeFamily.fromToken(" Weibull "));
     }
 }

@@ -65,9 +65,9 @@ final class EvidenceDisplay {
         for (Step step : Step.values()) {
             List<String> reasons = g.reasons().stream().filter(r -> r.step() == step).map(Reason::text).toList();
             if (reasons.isEmpty()) {
-                notReached.add(step.id());
+                notReached.add(step.token());
             } else {
-                steps.add(new StepEvidence(step.id(), ReportMessage.heading(step).format(), String.join("\n", reasons)));
+                steps.add(new StepEvidence(step.token(), ReportMessage.heading(step).format(), String.join("\n", reasons)));
             }
         }
         String unit = g.unit() == null || g.unit().isEmpty() ? "" : " (" + g.unit() + ")";

@@ -263,7 +263,7 @@ public final class GradingViewModel extends StepViewModel {
 
     private static ProblemRow row(Problem p) {
         return new ProblemRow(p.location().row() > 0 ? Long.toString(p.location().row()) : "",
-                p.location().column() == null ? "" : p.location().column(), p.severity().id(),
+                p.location().column() == null ? "" : p.location().column(), p.severity().token(),
                 p.characteristic() == null ? "" : p.characteristic(), p.message());
     }
 

@@ -9,37 +9,30 @@ import dev.proofrun.text.MessageKey;
  * deviation of all readings, μ the mean, T the target. {@link IndexTooltips} puts them on screen.
  */
 public enum IndexTip implements MessageKey {
-    CP("Cp", "Cp = (USL − LSL) / (6 σ_w)\nHow many times the short-term spread fits into the tolerance, "
+    CP("Cp = (USL − LSL) / (6 σ_w)\nHow many times the short-term spread fits into the tolerance, "
             + "ignoring where the process is centred. Needs both limits."),
-    CPU("Cpu", "Cpu = (USL − μ) / (3 σ_w)\nRoom between the mean and the upper limit, in units of three "
+    CPU("Cpu = (USL − μ) / (3 σ_w)\nRoom between the mean and the upper limit, in units of three "
             + "short-term sigmas."),
-    CPL("Cpl", "Cpl = (μ − LSL) / (3 σ_w)\nRoom between the lower limit and the mean, in units of three "
+    CPL("Cpl = (μ − LSL) / (3 σ_w)\nRoom between the lower limit and the mean, in units of three "
             + "short-term sigmas."),
-    CPK("Cpk", "Cpk = min(Cpu, Cpl)\nThe short-term capability at the nearer limit: spread and centring "
+    CPK("Cpk = min(Cpu, Cpl)\nThe short-term capability at the nearer limit: spread and centring "
             + "together. With one limit it is the index of that limit."),
-    PP("Pp", "Pp = (USL − LSL) / (6 s)\nLike Cp, with the overall standard deviation s of all readings "
+    PP("Pp = (USL − LSL) / (6 s)\nLike Cp, with the overall standard deviation s of all readings "
             + "(includes the drift between subgroups)."),
-    PPU("Ppu", "Ppu = (USL − μ) / (3 s)\nRoom to the upper limit in units of three overall sigmas."),
-    PPL("Ppl", "Ppl = (μ − LSL) / (3 s)\nRoom to the lower limit in units of three overall sigmas."),
-    PPK("Ppk", "Ppk = min(Ppu, Ppl)\nWhat the process delivered over the whole span: spread between and "
+    PPU("Ppu = (USL − μ) / (3 s)\nRoom to the upper limit in units of three overall sigmas."),
+    PPL("Ppl = (μ − LSL) / (3 s)\nRoom to the lower limit in units of three overall sigmas."),
+    PPK("Ppk = min(Ppu, Ppl)\nWhat the process delivered over the whole span: spread between and "
             + "within subgroups, and centring."),
-    CPM("Cpm", "Cpm = (USL − LSL) / (6 √(s² + (μ − T)²))\nLike Pp, but every step the mean takes away from the "
+    CPM("Cpm = (USL − LSL) / (6 √(s² + (μ − T)²))\nLike Pp, but every step the mean takes away from the "
             + "target T counts as spread; equals Pp when the process runs on target."),
-    LOWER_BOUND("lower bound", "Lower confidence bound: the value the true index exceeds with the stated "
+    LOWER_BOUND("Lower confidence bound: the value the true index exceeds with the stated "
             + "confidence, given the readings. The requirement is shown when this bound reaches the required "
             + "minimum; with few readings it lies well below the estimate.");
 
-    private final String symbol;
     private final String english;
 
-    IndexTip(String symbol, String english) {
-        this.symbol = symbol;
+    IndexTip(String english) {
         this.english = english;
-    }
-
-    /** The symbol as printed ("Cpk"), or the words the tip explains. */
-    public String symbol() {
-        return symbol;
     }
 
     @Override

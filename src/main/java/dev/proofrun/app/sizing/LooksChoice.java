@@ -4,6 +4,7 @@ import dev.proofrun.app.session.DraftField;
 import dev.proofrun.app.session.StudyDraft;
 import dev.proofrun.design.Spending;
 import dev.proofrun.design.Stages;
+import dev.proofrun.text.Tokens;
 import java.util.ArrayList;
 import java.util.List;
 import javafx.beans.binding.Bindings;
@@ -101,6 +102,6 @@ public final class LooksChoice {
 
     /** The spending the draft holds. */
     Spending spending() {
-        return Spending.fromToken(draft.text(DraftField.SPENDING)).orElse(Spending.byDefault());
+        return Tokens.find(Spending.class, draft.text(DraftField.SPENDING)).orElse(Spending.byDefault());
     }
 }

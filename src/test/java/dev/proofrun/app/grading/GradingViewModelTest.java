@@ -131,8 +131,8 @@ class GradingViewModelTest {
         CharacteristicGrade g = vm.grade("D1").orElseThrow();
         for (Step step : Step.values()) {
             boolean has = g.reasons().stream().anyMatch(r -> r.step() == step);
-            assertEquals(has, shown.contains(step.id()), step + " shown exactly when it has reasons");
-            assertEquals(!has, d1.notReached().contains(step.id()), d1.notReached());
+            assertEquals(has, shown.contains(step.token()), step + " shown exactly when it has reasons");
+            assertEquals(!has, d1.notReached().contains(step.token()), d1.notReached());
         }
         assertTrue(d1.notReached().startsWith("Not judged: "), d1.notReached());
         assertTrue(d1.histogram().lines().isEmpty(), "no shape evidence, no histogram");

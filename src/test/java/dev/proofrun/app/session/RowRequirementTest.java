@@ -100,7 +100,7 @@ class RowRequirementTest {
         CharacteristicDraft f7 = row(s, "F7");
         CharacteristicDraft d1 = row(s, "D1");
         f7.cell(CharacteristicField.INDEX).set("cpx");
-        assertEquals(Optional.of("unknown index 'cpx'"), vm.problem(f7, CharacteristicField.INDEX));
+        assertEquals(Optional.of("unknown index 'cpx' (cp, cpu, cpl, cpk, pp, ppu, ppl or ppk)"), vm.problem(f7, CharacteristicField.INDEX));
         f7.cell(CharacteristicField.INDEX).set("cp");
         assertEquals(Optional.of("Cp needs both limits, and F7 has only one"), vm.problem(f7, CharacteristicField.INDEX));
         f7.cell(CharacteristicField.CONFIDENCE).set("0.4");
