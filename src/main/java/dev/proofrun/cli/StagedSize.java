@@ -36,8 +36,11 @@ final class StagedSize {
         return given;
     }
 
-    /** The spending function from the option, checked. */
+    /** The spending function from the option, checked; {@link Spending#byDefault()} when none is given. */
     static Spending spending(String token) {
+        if (token == null) {
+            return Spending.byDefault();
+        }
         return Spending.fromToken(token).orElseThrow(
                 () -> new UserException(StagedMessage.UNKNOWN_SPENDING, token, Spending.tokens()));
     }
