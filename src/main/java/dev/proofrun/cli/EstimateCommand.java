@@ -41,9 +41,8 @@ public final class EstimateCommand implements Callable<Integer> {
     @Mixin
     SpecLimitOptions limits;
 
-    @Option(names = "--nominal", paramLabel = "T",
-            description = "Target for Cpm (default: the midpoint of two-sided limits; none for one-sided).")
-    Double nominal;
+    @Mixin
+    NominalOption target;
 
     @Option(names = "--subgroup-size", paramLabel = "N",
             description = "Group consecutive readings of a 'value' column into subgroups of N (default: individuals).")
@@ -69,7 +68,7 @@ public final class EstimateCommand implements Callable<Integer> {
                 subgroupSize == null ? OptionalInt.empty() : OptionalInt.of(subgroupSize));
         CapabilityResult result;
         try {
-            result = CapabilityAnalysis.of(readings.subgroups(), specLimits, nominal, method, confidence, boundMethod);
+            result = CapabilityAnalysis.of(readings.subgroups(), specLimits, target.nominal, method, confidence, boundMethod);
         } catch (UserException e) {
             throw e.placedIn(Location.file(file.toString()));
         }

@@ -87,14 +87,13 @@ public final class PlanNewCommand implements Callable<Integer> {
     String unit;
     @Mixin
     SpecLimitOptions limits;
-    @Option(names = "--nominal", paramLabel = "X", description = "Nominal value.")
-    Double nominal;
-    @Option(names = "--shape", paramLabel = "NAME",
-            description = "The distribution the readings are planned to follow: normal (default), lognormal, weibull,"
-                    + " folded-normal, lognormal3 or weibull3 (the last two with --threshold or --floor).")
-    String shape;
-    @Option(names = "--threshold", paramLabel = "X", description = "The declared threshold of a lognormal3 or weibull3 shape:"
-            + " the stop or datum the readings cannot go below (a plan value, not estimated from the readings).")
+    @Mixin
+    NominalOption nominal;
+    @Mixin
+    ShapeOption planned;
+    @Option(names = "--threshold", paramLabel = "X", description = "The declared threshold a lognormal3 or weibull3 shape"
+            + " needs (or --floor): the stop or datum the readings cannot go below (a plan value, not estimated from the"
+            + " readings).")
     Double threshold;
     @Option(names = "--floor", paramLabel = "X", description = "In place of --threshold when the real start of the readings"
             + " is not known exactly: a stop the threshold cannot lie below; the grade lets the readings say where above"
@@ -264,7 +263,7 @@ public final class PlanNewCommand implements Callable<Integer> {
         IndexKind kind = OptionValues.index(goal.index);
         OptionValues.confidence(goal.confidence());
         if (characteristicsCsv != null) {
-            if (characteristic != null || goal.target != null || goal.expected != null || shape != null || threshold != null
+            if (characteristic != null || goal.target != null || goal.expected != null || planned.shape != null || threshold != null
                     || floor != null || limits.given()) {
                 throw new UserException(PlanOptionMessage.BOTH_CHARACTERISTIC_FORMS);
             }
@@ -282,7 +281,7 @@ public final class PlanNewCommand implements Callable<Integer> {
                 : Optional.of(option(gauge != null ? "--gauge" : "--resolution", () -> new Gauge(
                         gauge != null ? gauge : UNNAMED_GAUGE, gaugeFacts.resolution == null ? Double.NaN : gaugeFacts.resolution,
                         gaugeFacts.gaugeSd == null ? OptionalDouble.empty() : OptionalDouble.of(gaugeFacts.gaugeSd))));
-        ShapeFamily family = shape == null ? ShapeFamily.NORMAL : OptionValues.shape(shape);
+        ShapeFamily family = planned.shape == null ? ShapeFamily.NORMAL : OptionValues.shape(planned.shape);
         String id = characteristicId == null ? "C1" : characteristicId;
         OptionalDouble theta = threshold == null ? OptionalDouble.empty() : OptionalDouble.of(threshold);
         OptionalDouble stop = floor == null ? OptionalDouble.empty() : OptionalDouble.of(floor);
@@ -291,8 +290,8 @@ public final class PlanNewCommand implements Callable<Integer> {
             return theta;
         });
         return List.of(option("--characteristic", () -> new Characteristic(id,
-                characteristic, unit, nominal == null ? OptionalDouble.empty() : OptionalDouble.of(nominal), specLimits, g, req, exp,
-                family, theta, stop)));
+                characteristic, unit, nominal.nominal == null ? OptionalDouble.empty() : OptionalDouble.of(nominal.nominal),
+                specLimits, g, req, exp, family, theta, stop)));
     }
 
     private ProductionCalendar calendar() {

@@ -103,11 +103,11 @@ public final class SizeCommand implements Callable<Integer> {
                     + " reads, for one shared design (--index and --confidence are the defaults for empty cells).")
     java.nio.file.Path characteristics;
 
-    @Option(names = "--shape", paramLabel = "normal|lognormal|weibull|folded-normal",
-            description = "The shape the readings are planned to follow (default normal); lognormal, weibull and folded-normal need --skewness.")
-    String shape;
+    @Mixin
+    ShapeOption planned;
 
-    @Option(names = "--skewness", paramLabel = "G", description = "The expected skewness of the readings (with --shape).")
+    @Option(names = "--skewness", paramLabel = "G", description = "The expected skewness of the readings, which a --shape"
+            + " other than normal needs (or --pilot, for a shape without a threshold).")
     Double skewness;
 
     @Option(names = "--floor", paramLabel = "X", description = "Refused, with the reason: a threshold shape planned with a"
@@ -132,8 +132,8 @@ public final class SizeCommand implements Callable<Integer> {
         if (looks > 1 && characteristics != null) {
             throw new UserException(StagedMessage.STAGES_NEED_ONE_CHARACTERISTIC);
         }
-        if (looks > 1 && shape != null && !OptionValues.shape(shape).isNormal()) {
-            throw new UserException(StagedMessage.STAGES_NEED_NORMAL, shape);
+        if (looks > 1 && planned.shape != null && !OptionValues.shape(planned.shape).isNormal()) {
+            throw new UserException(StagedMessage.STAGES_NEED_NORMAL, planned.shape);
         }
         if (characteristics != null) {
             SharedSize shared = SharedSize.design(characteristics, this::sharedRequest, OptionValues.index(goal.index),
@@ -150,7 +150,7 @@ public final class SizeCommand implements Callable<Integer> {
         if (goal.target == null) {
             throw new UserException(SizeMessage.TARGET_NEEDED);
         }
-        ShapeFamily family = shape == null ? ShapeFamily.NORMAL : OptionValues.shape(shape);
+        ShapeFamily family = planned.shape == null ? ShapeFamily.NORMAL : OptionValues.shape(planned.shape);
         if (!family.isNormal() && !ShapeSize.plans(family)) {
             throw new UserException(SizeMessage.SHAPE_NOT_SIZED, family.token(), ShapeSize.plannable());
         }
@@ -170,8 +170,8 @@ public final class SizeCommand implements Callable<Integer> {
                         ? OptionalInt.empty() : OptionalInt.of(pilotSubgroupSize)), limits.limits(),
                         OptionValues.index(goal.index), goal.target, goal.expected, goal.confidence(), goal.power, sizes, floors);
             } else {
-                sized = ShapeSize.design(family.base(), skewness, OptionValues.sides(sides, limits.lsl, limits.usl), goal.target, goal.expected,
-                        goal.confidence(), goal.power, sizes, floors);
+                sized = ShapeSize.design(family.base(), skewness, OptionValues.sides(sides, limits.lsl, limits.usl),
+                        goal.target, goal.expected, goal.confidence(), goal.power, sizes, floors);
                 if (family.hasThreshold()) {
                     sized.asThresholdShape(family);
                 }
@@ -256,7 +256,8 @@ public final class SizeCommand implements Callable<Integer> {
             }
             expectation = fromPilot(kind, notes);
         } else if (goal.expected != null) {
-            expectation = goal.expectedCp == null ? Expectation.centred(goal.expected) : wrap(() -> Expectation.offCentre(goal.expected, goal.expectedCp));
+            expectation = goal.expectedCp == null ? Expectation.centred(goal.expected)
+                    : wrap(() -> Expectation.offCentre(goal.expected, goal.expectedCp));
         } else {
             if (mean == null || sd == null) {
                 throw new UserException(DesignMessage.BAD_EXPECTATION,
