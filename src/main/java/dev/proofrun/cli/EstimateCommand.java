@@ -41,43 +41,38 @@ public final class EstimateCommand implements Callable<Integer> {
     @Mixin
     SpecLimitOptions limits;
 
-    @Option(names = "--nominal", paramLabel = "T",
-            description = "Target for Cpm (default: the midpoint of two-sided limits; none for one-sided).")
-    Double nominal;
+    @Mixin
+    NominalOption target;
 
     @Option(names = "--subgroup-size", paramLabel = "N",
             description = "Group consecutive readings of a 'value' column into subgroups of N (default: individuals).")
     Integer subgroupSize;
 
-    @Option(names = "--sigma", paramLabel = "rbar|sbar|pooled|mr",
-            description = "Within-sigma estimator (default rbar for n <= 10, sbar above or for unequal sizes, mr for individuals).")
-    String sigma;
+    @Mixin
+    EstimatorOptions estimator;
 
-    @Option(names = "--confidence", defaultValue = "0.95", description = "Confidence of the lower bounds (default ${DEFAULT-VALUE}).")
-    double confidence;
+    @Mixin
+    ConfidenceOption level;
 
-    @Option(names = "--bound", defaultValue = "exact", paramLabel = "exact|bissell",
-            description = "Bound for two-sided Cpk/Ppk (default ${DEFAULT-VALUE}); one-sided ones are always exact.")
-    String bound;
-
-    @Option(names = "--json", description = "Print one JSON object.")
-    boolean json;
+    @Mixin
+    JsonOption output;
 
     @Override
     public Integer call() throws JsonProcessingException {
         SpecLimits specLimits = limits.limits();
-        SigmaMethod method = OptionValues.sigma(sigma).orElse(null);
-        BoundMethod boundMethod = OptionValues.bound(bound);
+        SigmaMethod method = OptionValues.sigma(estimator.sigma).orElse(null);
+        BoundMethod boundMethod = OptionValues.bound(estimator.bound);
+        double confidence = level.confidence;
         OptionValues.confidence(confidence);
         Readings readings = ReadingsCsv.read(file,
                 subgroupSize == null ? OptionalInt.empty() : OptionalInt.of(subgroupSize));
         CapabilityResult result;
         try {
-            result = CapabilityAnalysis.of(readings.subgroups(), specLimits, nominal, method, confidence, boundMethod);
+            result = CapabilityAnalysis.of(readings.subgroups(), specLimits, target.nominal, method, confidence, boundMethod);
         } catch (UserException e) {
             throw e.placedIn(Location.file(file.toString()));
         }
-        String text = json
+        String text = output.json
                 ? new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT).writeValueAsString(CapabilityJson.of(result))
                 : EstimateText.of(file.toString(), result, result.normality().isPresent()
                         && result.normality().get().pValue() < 0.05 ? RoundingCheck.explain(readings.subgroups())

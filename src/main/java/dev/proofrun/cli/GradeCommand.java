@@ -23,6 +23,7 @@ import java.util.Locale;
 import java.util.concurrent.Callable;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 
@@ -65,15 +66,14 @@ public final class GradeCommand implements Callable<Integer> {
     @Parameters(index = "1", paramLabel = "DATA", description = "The returned fill-in file (.csv or .xlsx) or a gauge's long-form CSV.")
     Path dataFile;
 
-    @Option(names = "--json", description = "Print one JSON object instead of text.")
-    boolean json;
+    @Mixin
+    JsonOption output;
 
     @Option(names = "--report", paramLabel = "FILE.pdf", description = "Also write the grade report as PDF.")
     Path report;
 
-    @Option(names = "--paper", paramLabel = "a4|letter", defaultValue = "a4",
-            description = "Paper size of the --report PDF (default: ${DEFAULT-VALUE}).")
-    String paper;
+    @Mixin
+    PaperOption paper;
 
     @Option(names = "--require-demonstrated", description = "Exit 1 unless every characteristic is demonstrated"
             + " (at a staged plan's look, 'continue' exits 1 too).")
@@ -81,7 +81,7 @@ public final class GradeCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        Paper size = Paper.of(paper); // refused before anything is read or written
+        Paper size = Paper.of(paper.paper); // refused before anything is read or written
         // the plan's revision is checked while the returned file is read; the check speaks first, as before
         PlanFiles.Pending pending = PlanFiles.readPending(planFile);
         StudyPlan plan = pending.plan();
@@ -101,7 +101,7 @@ public final class GradeCommand implements Callable<Integer> {
         if (report != null) {
             GradeReports.write(result, plan, report, size);
         }
-        if (json) {
+        if (output.json) {
             try {
                 out.println(new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT).writeValueAsString(GradeJson.of(result, plan)));
             } catch (IOException e) {
@@ -112,7 +112,7 @@ public final class GradeCommand implements Callable<Integer> {
         }
         if (report != null) {
             // stdout stays one JSON object with --json; the note then goes to stderr
-            PrintWriter note = json ? spec.commandLine().getErr() : out;
+            PrintWriter note = output.json ? spec.commandLine().getErr() : out;
             note.println("Wrote the grade report " + report);
             note.flush();
         }

@@ -87,14 +87,13 @@ public final class PlanNewCommand implements Callable<Integer> {
     String unit;
     @Mixin
     SpecLimitOptions limits;
-    @Option(names = "--nominal", paramLabel = "X", description = "Nominal value.")
-    Double nominal;
-    @Option(names = "--shape", paramLabel = "NAME",
-            description = "The distribution the readings are planned to follow: normal (default), lognormal, weibull,"
-                    + " folded-normal, lognormal3 or weibull3 (the last two with --threshold or --floor).")
-    String shape;
-    @Option(names = "--threshold", paramLabel = "X", description = "The declared threshold of a lognormal3 or weibull3 shape:"
-            + " the stop or datum the readings cannot go below (a plan value, not estimated from the readings).")
+    @Mixin
+    NominalOption nominal;
+    @Mixin
+    ShapeOption planned;
+    @Option(names = "--threshold", paramLabel = "X", description = "The declared threshold a lognormal3 or weibull3 shape"
+            + " needs (or --floor): the stop or datum the readings cannot go below (a plan value, not estimated from the"
+            + " readings).")
     Double threshold;
     @Option(names = "--floor", paramLabel = "X", description = "In place of --threshold when the real start of the readings"
             + " is not known exactly: a stop the threshold cannot lie below; the grade lets the readings say where above"
@@ -103,35 +102,17 @@ public final class PlanNewCommand implements Callable<Integer> {
     @Option(names = "--gauge", paramLabel = "NAME", description = "Gauge name (with --resolution; a resolution alone"
             + " is kept for an unnamed gauge).")
     String gauge;
-    @Option(names = "--resolution", paramLabel = "R", description = "Gauge resolution.")
-    Double resolution;
-    @Option(names = "--gauge-sd", paramLabel = "SD", description = "Gauge standard deviation, if known.")
-    Double gaugeSd;
-    @Option(names = "--index", defaultValue = "cpk", paramLabel = "INDEX",
-            description = "Required index: cpk, ppk, cp, pp, cpu, cpl, ppu or ppl (default ${DEFAULT-VALUE}).")
-    String index;
-    @Option(names = "--target", paramLabel = "C0", description = "Required minimum of the index.")
-    Double target;
-    @Option(names = "--confidence", defaultValue = "0.95", description = "Confidence of the lower bound (default ${DEFAULT-VALUE}).")
-    double confidence;
-    @Option(names = "--expected", paramLabel = "C1", description = "The index the process is believed to have.")
-    Double expected;
-    @Option(names = "--expected-cp", paramLabel = "CP1", description = "Expected Cp for a two-sided Cpk (default: centred).")
-    Double expectedCp;
-    @Option(names = "--power", defaultValue = "0.9", description = "Wanted power when the design is solved (default ${DEFAULT-VALUE}).")
-    double power;
+    @Mixin
+    GaugeOptions gaugeFacts;
+    @Mixin
+    StudyGoalOptions goal;
     @Option(names = "--subgroup-size", paramLabel = "N", description = "Subgroup size n (default: solved).")
     Integer subgroupSize;
     @Option(names = "--subgroups", paramLabel = "K", description = "Number of subgroups k (fixes k instead of solving for it).")
     Integer subgroups;
 
-    @Option(names = "--stages", defaultValue = "1", paramLabel = "S",
-            description = "Planned looks: 1 (default, one grade at the end) to 4; the study may stop at a look when the"
-                    + " answer is clear.")
-    int stages;
-    @Option(names = "--spending", paramLabel = "kim-demets-2|obrien-fleming|pocock",
-            description = "How a staged plan spends its false-pass risk across the looks (default " + Spending.DEFAULT_TOKEN + ").")
-    String spending;
+    @Mixin
+    StagesOptions staging;
 
     @Option(names = "--zone", paramLabel = "ZONE", description = "Time zone of the plant (default: this computer's).")
     String zone;
@@ -231,17 +212,17 @@ public final class PlanNewCommand implements Callable<Integer> {
 
     /** The planned looks for --stages and --spending; empty for one stage. */
     private Optional<StagedLooks.Planned> stages(Design design, List<Characteristic> chars) {
-        if (stages < 1 || stages > Stages.MOST) {
-            throw new UserException(PlanOptionMessage.STAGES_RANGE, Stages.MOST, stages);
+        if (staging.stages < 1 || staging.stages > Stages.MOST) {
+            throw new UserException(PlanOptionMessage.STAGES_RANGE, Stages.MOST, staging.stages);
         }
-        if (stages == 1) {
-            if (spending != null) {
+        if (staging.stages == 1) {
+            if (staging.spending != null) {
                 throw new UserException(PlanOptionMessage.SPENDING_WITHOUT_STAGES, Stages.MOST);
             }
             return Optional.empty();
         }
-        Spending how = spending == null ? Spending.byDefault()
-                : OptionValues.option("--spending", () -> Spending.fromToken(spending));
+        Spending how = staging.spending == null ? Spending.byDefault()
+                : OptionValues.option("--spending", () -> Spending.fromToken(staging.spending));
         for (Characteristic c : chars) {
             if (c.requirement().confidence() != chars.get(0).requirement().confidence()) {
                 throw new UserException(PlanOptionMessage.STAGES_ONE_CONFIDENCE);
@@ -250,17 +231,17 @@ public final class PlanNewCommand implements Callable<Integer> {
         if (subgroups != null) {
             requireApart(subgroups);
         }
-        return Optional.of(StagedLooks.of(chars, design, subgroups != null, power, stages, how));
+        return Optional.of(StagedLooks.of(chars, design, subgroups != null, goal.power, staging.stages, how));
     }
 
     /** A given k must split into looks at least {@value Stages#LEAST_APART} subgroups apart. */
     private void requireApart(int k) {
         int before = 0;
-        for (int j = 1; j <= stages; j++) {
-            int at = (int) Math.round(k * (double) j / stages);
+        for (int j = 1; j <= staging.stages; j++) {
+            int at = (int) Math.round(k * (double) j / staging.stages);
             if (at - before < Stages.LEAST_APART) {
-                throw new UserException(PlanOptionMessage.STAGES_TOO_CLOSE, stages, k, Stages.LEAST_APART,
-                        Stages.LEAST_APART * stages);
+                throw new UserException(PlanOptionMessage.STAGES_TOO_CLOSE, staging.stages, k, Stages.LEAST_APART,
+                        Stages.LEAST_APART * staging.stages);
             }
             before = at;
         }
@@ -269,7 +250,7 @@ public final class PlanNewCommand implements Callable<Integer> {
     /** The plan's design; a characteristic refused from --characteristics is named with its file. */
     private PlanDesign design(List<Characteristic> chars) {
         try {
-            return PlanDesign.choose(chars, power,
+            return PlanDesign.choose(chars, goal.power,
                     subgroupSize == null ? OptionalInt.empty() : OptionalInt.of(subgroupSize),
                     subgroups == null ? OptionalInt.empty() : OptionalInt.of(subgroups));
         } catch (UserException e) {
@@ -279,28 +260,28 @@ public final class PlanNewCommand implements Callable<Integer> {
     }
 
     private List<Characteristic> characteristics() {
-        IndexKind kind = OptionValues.index(index);
-        OptionValues.confidence(confidence);
+        IndexKind kind = OptionValues.index(goal.index);
+        OptionValues.confidence(goal.confidence());
         if (characteristicsCsv != null) {
-            if (characteristic != null || target != null || expected != null || shape != null || threshold != null
+            if (characteristic != null || goal.target != null || goal.expected != null || planned.shape != null || threshold != null
                     || floor != null || limits.given()) {
                 throw new UserException(PlanOptionMessage.BOTH_CHARACTERISTIC_FORMS);
             }
-            return CharacteristicsCsv.read(characteristicsCsv, kind, confidence);
+            return CharacteristicsCsv.read(characteristicsCsv, kind, goal.confidence());
         }
-        if (characteristic == null || unit == null || target == null || expected == null) {
+        if (characteristic == null || unit == null || goal.target == null || goal.expected == null) {
             throw new UserException(PlanOptionMessage.NEED_CHARACTERISTIC);
         }
         SpecLimits specLimits = limits.limits();
-        Requirement req = option("--target", () -> Requirement.of(kind, target, confidence));
-        Expectation exp = option("--expected", () -> expectedCp == null ? Expectation.centred(expected)
-                : Expectation.offCentre(expected, expectedCp));
+        Requirement req = option("--target", () -> Requirement.of(kind, goal.target, goal.confidence()));
+        Expectation exp = option("--expected", () -> goal.expectedCp == null ? Expectation.centred(goal.expected)
+                : Expectation.offCentre(goal.expected, goal.expectedCp));
         // a resolution without a gauge name is kept (for an unnamed gauge): grading needs the step either way
-        Optional<Gauge> g = gauge == null && resolution == null ? Optional.empty()
+        Optional<Gauge> g = gauge == null && gaugeFacts.resolution == null ? Optional.empty()
                 : Optional.of(option(gauge != null ? "--gauge" : "--resolution", () -> new Gauge(
-                        gauge != null ? gauge : UNNAMED_GAUGE, resolution == null ? Double.NaN : resolution,
-                        gaugeSd == null ? OptionalDouble.empty() : OptionalDouble.of(gaugeSd))));
-        ShapeFamily family = shape == null ? ShapeFamily.NORMAL : OptionValues.shape(shape);
+                        gauge != null ? gauge : UNNAMED_GAUGE, gaugeFacts.resolution == null ? Double.NaN : gaugeFacts.resolution,
+                        gaugeFacts.gaugeSd == null ? OptionalDouble.empty() : OptionalDouble.of(gaugeFacts.gaugeSd))));
+        ShapeFamily family = planned.shape == null ? ShapeFamily.NORMAL : OptionValues.shape(planned.shape);
         String id = characteristicId == null ? "C1" : characteristicId;
         OptionalDouble theta = threshold == null ? OptionalDouble.empty() : OptionalDouble.of(threshold);
         OptionalDouble stop = floor == null ? OptionalDouble.empty() : OptionalDouble.of(floor);
@@ -309,8 +290,8 @@ public final class PlanNewCommand implements Callable<Integer> {
             return theta;
         });
         return List.of(option("--characteristic", () -> new Characteristic(id,
-                characteristic, unit, nominal == null ? OptionalDouble.empty() : OptionalDouble.of(nominal), specLimits, g, req, exp,
-                family, theta, stop)));
+                characteristic, unit, nominal.nominal == null ? OptionalDouble.empty() : OptionalDouble.of(nominal.nominal),
+                specLimits, g, req, exp, family, theta, stop)));
     }
 
     private ProductionCalendar calendar() {

@@ -9,6 +9,7 @@ import dev.proofrun.paper.Paper;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
@@ -31,16 +32,15 @@ public final class SheetCommand implements Callable<Integer> {
     @Option(names = "--out", required = true, paramLabel = "DIR", description = "Directory for the three files.")
     Path out;
 
-    @Option(names = "--paper", paramLabel = "a4|letter", defaultValue = "a4",
-            description = "Paper size of the sheet (default: ${DEFAULT-VALUE}).")
-    String paper;
+    @Mixin
+    PaperOption paper;
 
     @Option(names = "--draft", description = "Allow an unissued plan; every page is marked DRAFT.")
     boolean draft;
 
     @Override
     public Integer call() {
-        Paper size = Paper.of(paper);
+        Paper size = Paper.of(paper.paper);
         StudyPlan p = PlanFiles.read(plan);
         SheetFiles.Written written;
         try {

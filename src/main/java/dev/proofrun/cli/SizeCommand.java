@@ -37,6 +37,7 @@ import java.util.concurrent.Callable;
 import java.util.stream.IntStream;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 
 /** {@code proofrun size}: how many subgroups of what size demonstrate the required index. */
@@ -51,53 +52,27 @@ public final class SizeCommand implements Callable<Integer> {
             description = "Which specification limits exist (default two-sided, or as --lsl/--usl give).")
     String sides;
 
-    @Option(names = "--index", paramLabel = "cpk|ppk|cp|pp|cpu|cpl|ppu|ppl", defaultValue = "cpk",
-            description = "The required index (default ${DEFAULT-VALUE}).")
-    String index;
+    @Mixin
+    StudyGoalOptions goal;
 
-    @Option(names = "--target", paramLabel = "C0", description = "The required minimum c0 (one characteristic).")
-    Double target;
+    @Mixin
+    SpecLimitOptions limits;
 
-    @Option(names = "--confidence", defaultValue = "0.95", description = "Confidence of the lower bound (default ${DEFAULT-VALUE}).")
-    double confidence;
-
-    @Option(names = "--expected", paramLabel = "C1", description = "The index the process is believed to have.")
-    Double expected;
-
-    @Option(names = "--expected-cp", paramLabel = "CP1",
-            description = "The expected Cp (Pp) for a two-sided Cpk/Ppk; without it the process is taken as centred.")
-    Double expectedCp;
-
-    @Option(names = "--lsl", description = "Lower specification limit (with --mean and --sd instead of --expected).")
-    Double lsl;
-
-    @Option(names = "--usl", description = "Upper specification limit (with --mean and --sd instead of --expected).")
-    Double usl;
-
-    @Option(names = "--mean", description = "Expected process mean.")
+    @Option(names = "--mean", description = "Expected process mean (with --sd and --lsl/--usl, instead of --expected).")
     Double mean;
 
-    @Option(names = "--sd", description = "Expected process standard deviation.")
+    @Option(names = "--sd", description = "Expected process standard deviation; with --gauge-sd the plan is for the"
+            + " observed index (process and gauge together).")
     Double sd;
 
-    @Option(names = "--gauge-sd", description = "Gauge standard deviation (needs --sd): plan for the observed index.")
-    Double gaugeSd;
-
-    @Option(names = "--resolution", description = "Gauge resolution; warned above a tenth of the tolerance.")
-    Double resolution;
-
-    @Option(names = "--power", defaultValue = "0.9", description = "Wanted power (default ${DEFAULT-VALUE}).")
-    double power;
+    @Mixin
+    GaugeOptions gauge;
 
     @Option(names = "--subgroup-size", paramLabel = "N", description = "Candidate subgroup size (repeatable; default 1-10).")
     List<Integer> subgroupSizes;
 
-    @Option(names = "--sigma", paramLabel = "rbar|sbar|pooled|mr",
-            description = "Within-sigma estimator for n >= 2 (default rbar up to 10, sbar above; n = 1 uses mr).")
-    String sigma;
-
-    @Option(names = "--bound", defaultValue = "exact", paramLabel = "exact|bissell", description = "Bound method (default ${DEFAULT-VALUE}).")
-    String bound;
+    @Mixin
+    EstimatorOptions estimator;
 
     @Option(names = "--min-subgroups", defaultValue = "25", description = "Floor on subgroups (default ${DEFAULT-VALUE}).")
     int minSubgroups;
@@ -125,31 +100,25 @@ public final class SizeCommand implements Callable<Integer> {
 
     @Option(names = "--characteristics", paramLabel = "FILE.csv",
             description = "Several characteristics measured on the same parts, in the columns 'plan new --characteristics'"
-                    + " reads: one shared design (--index and --confidence are the defaults for empty cells).")
+                    + " reads, for one shared design (--index and --confidence are the defaults for empty cells).")
     java.nio.file.Path characteristics;
 
-    @Option(names = "--shape", paramLabel = "normal|lognormal|weibull|folded-normal",
-            description = "The shape the readings are planned to follow (default normal); lognormal, weibull and folded-normal need --skewness.")
-    String shape;
+    @Mixin
+    ShapeOption planned;
 
-    @Option(names = "--skewness", paramLabel = "G", description = "The expected skewness of the readings (with --shape).")
+    @Option(names = "--skewness", paramLabel = "G", description = "The expected skewness of the readings, which a --shape"
+            + " other than normal needs (or --pilot, for a shape without a threshold).")
     Double skewness;
 
     @Option(names = "--floor", paramLabel = "X", description = "Refused, with the reason: a threshold shape planned with a"
             + " floor has no computed power (see plan new --floor).")
     Double floor;
 
-    @Option(names = "--stages", defaultValue = "1", paramLabel = "S",
-            description = "Planned looks, 1 to 4 (default ${DEFAULT-VALUE}): with 2 or more, the staged design of the"
-                    + " recommended subgroup size, which may stop early at a look (simulated; takes some seconds).")
-    int stages;
+    @Mixin
+    StagesOptions staging;
 
-    @Option(names = "--spending", defaultValue = Spending.DEFAULT_TOKEN, paramLabel = "kim-demets-2|obrien-fleming|pocock",
-            description = "How a staged study spends its false-pass risk across the looks (default ${DEFAULT-VALUE}).")
-    String spending;
-
-    @Option(names = "--json", description = "Print one JSON object.")
-    boolean json;
+    @Mixin
+    JsonOption output;
 
     @Override
     public Integer call() throws Exception {
@@ -157,19 +126,19 @@ public final class SizeCommand implements Callable<Integer> {
         if (floor != null) {
             throw new UserException(SizeMessage.FLOOR_REFUSED);
         }
-        OptionValues.confidence(confidence);
-        int looks = StagedSize.stages(stages);
-        Spending spendingFunction = StagedSize.spending(spending);
+        OptionValues.confidence(goal.confidence());
+        int looks = StagedSize.stages(staging.stages);
+        Spending spendingFunction = StagedSize.spending(staging.spending);
         if (looks > 1 && characteristics != null) {
             throw new UserException(StagedMessage.STAGES_NEED_ONE_CHARACTERISTIC);
         }
-        if (looks > 1 && shape != null && !OptionValues.shape(shape).isNormal()) {
-            throw new UserException(StagedMessage.STAGES_NEED_NORMAL, shape);
+        if (looks > 1 && planned.shape != null && !OptionValues.shape(planned.shape).isNormal()) {
+            throw new UserException(StagedMessage.STAGES_NEED_NORMAL, planned.shape);
         }
         if (characteristics != null) {
-            SharedSize shared = SharedSize.design(characteristics, this::sharedRequest, OptionValues.index(index),
-                    confidence, refusedBesideFile());
-            if (json) {
+            SharedSize shared = SharedSize.design(characteristics, this::sharedRequest, OptionValues.index(goal.index),
+                    goal.confidence(), refusedBesideFile());
+            if (output.json) {
                 ObjectMapper mapper = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
                 out.println(mapper.writeValueAsString(shared.json()));
             } else {
@@ -178,10 +147,10 @@ public final class SizeCommand implements Callable<Integer> {
             out.flush();
             return 0;
         }
-        if (target == null) {
+        if (goal.target == null) {
             throw new UserException(SizeMessage.TARGET_NEEDED);
         }
-        ShapeFamily family = shape == null ? ShapeFamily.NORMAL : OptionValues.shape(shape);
+        ShapeFamily family = planned.shape == null ? ShapeFamily.NORMAL : OptionValues.shape(planned.shape);
         if (!family.isNormal() && !ShapeSize.plans(family)) {
             throw new UserException(SizeMessage.SHAPE_NOT_SIZED, family.token(), ShapeSize.plannable());
         }
@@ -194,20 +163,20 @@ public final class SizeCommand implements Callable<Integer> {
                         + " shape is planned from --skewness G (the pilot's fit would need the plan's threshold)");
             }
             if (pilot != null && skewness == null) {
-                if (lsl == null && usl == null) {
+                if (!limits.given()) {
                     throw new UserException(DesignMessage.BAD_EXPECTATION, "--pilot needs the specification limits --lsl/--usl");
                 }
                 sized = ShapeSize.fromPilot(family, dev.proofrun.readings.ReadingsCsv.read(pilot, pilotSubgroupSize == null
-                        ? OptionalInt.empty() : OptionalInt.of(pilotSubgroupSize)), OptionValues.limits(lsl, usl),
-                        OptionValues.index(index), target, expected, confidence, power, sizes, floors);
+                        ? OptionalInt.empty() : OptionalInt.of(pilotSubgroupSize)), limits.limits(),
+                        OptionValues.index(goal.index), goal.target, goal.expected, goal.confidence(), goal.power, sizes, floors);
             } else {
-                sized = ShapeSize.design(family.base(), skewness, OptionValues.sides(sides, lsl, usl), target, expected,
-                        confidence, power, sizes, floors);
+                sized = ShapeSize.design(family.base(), skewness, OptionValues.sides(sides, limits.lsl, limits.usl),
+                        goal.target, goal.expected, goal.confidence(), goal.power, sizes, floors);
                 if (family.hasThreshold()) {
                     sized.asThresholdShape(family);
                 }
             }
-            if (json) {
+            if (output.json) {
                 out.println(new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT).writeValueAsString(sized.json()));
             } else {
                 sized.print(out);
@@ -225,7 +194,7 @@ public final class SizeCommand implements Callable<Integer> {
         DesignTable table = StudyDesigner.design(request);
         StagedDesign staged = looks > 1
                 ? StagedDesigner.design(request, table.recommended().subgroupSize(), looks, spendingFunction) : null;
-        if (json) {
+        if (output.json) {
             ObjectMapper mapper = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
             java.util.Map<String, Object> root = SizeJson.of(table);
             if (staged != null) {
@@ -242,9 +211,9 @@ public final class SizeCommand implements Callable<Integer> {
     /** The options that describe one characteristic, which --characteristics takes from its file instead. */
     private List<String> refusedBesideFile() {
         List<String> given = new ArrayList<>();
-        Object[][] options = {{"--target", target}, {"--expected", expected}, {"--expected-cp", expectedCp},
-            {"--lsl", lsl}, {"--usl", usl}, {"--mean", mean}, {"--sd", sd}, {"--gauge-sd", gaugeSd},
-            {"--resolution", resolution}, {"--pilot", pilot}, {"--spec", sides}};
+        Object[][] options = {{"--target", goal.target}, {"--expected", goal.expected}, {"--expected-cp", goal.expectedCp},
+            {"--lsl", limits.lsl}, {"--usl", limits.usl}, {"--mean", mean}, {"--sd", sd}, {"--gauge-sd", gauge.gaugeSd},
+            {"--resolution", gauge.resolution}, {"--pilot", pilot}, {"--spec", sides}};
         for (Object[] o : options) {
             if (o[1] != null) {
                 given.add((String) o[0]);
@@ -261,8 +230,8 @@ public final class SizeCommand implements Callable<Integer> {
     /** The design options of this command (power, sizes, estimator, bound, floors, shift) around one characteristic. */
     private DesignRequest designOptions(SpecLimits.Sides specSides, Requirement requirement, Expectation expectation,
             List<String> notes) {
-        return new DesignRequest(specSides, requirement, expectation, power, candidateSizes(), OptionValues.sigma(sigma),
-                OptionValues.bound(bound), floors(), shift, lossRate, notes);
+        return new DesignRequest(specSides, requirement, expectation, goal.power, candidateSizes(), OptionValues.sigma(estimator.sigma),
+                OptionValues.bound(estimator.bound), floors(), shift, lossRate, notes);
     }
 
     /** The subgroup sizes given with --subgroup-size, or 1 to 10. */
@@ -276,46 +245,47 @@ public final class SizeCommand implements Callable<Integer> {
     }
 
     DesignRequest request() {
-        IndexKind kind = OptionValues.index(index);
-        SpecLimits.Sides specSides = OptionValues.sides(sides, lsl, usl);
+        IndexKind kind = OptionValues.index(goal.index);
+        SpecLimits.Sides specSides = OptionValues.sides(sides, limits.lsl, limits.usl);
         List<String> notes = new ArrayList<>();
         Expectation expectation;
         if (pilot != null) {
-            if (expected != null || mean != null || sd != null || gaugeSd != null) {
+            if (goal.expected != null || mean != null || sd != null || gauge.gaugeSd != null) {
                 throw new UserException(DesignMessage.BAD_EXPECTATION,
                         "--pilot replaces --expected, --mean, --sd and --gauge-sd; give one of them");
             }
             expectation = fromPilot(kind, notes);
-        } else if (expected != null) {
-            expectation = expectedCp == null ? Expectation.centred(expected) : wrap(() -> Expectation.offCentre(expected, expectedCp));
+        } else if (goal.expected != null) {
+            expectation = goal.expectedCp == null ? Expectation.centred(goal.expected)
+                    : wrap(() -> Expectation.offCentre(goal.expected, goal.expectedCp));
         } else {
             if (mean == null || sd == null) {
                 throw new UserException(DesignMessage.BAD_EXPECTATION,
                         "give --expected (with --expected-cp if off centre), or --mean and --sd with --lsl/--usl");
             }
-            ProcessFacts facts = ProcessFacts.of(OptionValues.limits(lsl, usl), mean, sd)
-                    .withGauge(optional(gaugeSd), optional(resolution));
+            ProcessFacts facts = ProcessFacts.of(limits.limits(), mean, sd)
+                    .withGauge(optional(gauge.gaugeSd), optional(gauge.resolution));
             expectation = facts.expectationFor(kind, notes);
         }
-        if (expected != null && (gaugeSd != null || resolution != null)) {
+        if (goal.expected != null && (gauge.gaugeSd != null || gauge.resolution != null)) {
             throw new UserException(DesignMessage.BAD_EXPECTATION, "--gauge-sd and --resolution need --mean, --sd and the limits");
         }
-        return designOptions(specSides, Requirement.of(kind, target, confidence), expectation, notes);
+        return designOptions(specSides, Requirement.of(kind, goal.target, goal.confidence()), expectation, notes);
     }
 
     private Expectation fromPilot(IndexKind kind, List<String> notes) {
-        if (lsl == null && usl == null) {
+        if (!limits.given()) {
             throw new UserException(DesignMessage.BAD_EXPECTATION, "--pilot needs the specification limits --lsl/--usl");
         }
-        SpecLimits limits = OptionValues.limits(lsl, usl);
-        SigmaMethod method = OptionValues.sigma(sigma).orElse(null);
-        BoundMethod boundMethod = OptionValues.bound(bound);
+        SpecLimits specLimits = limits.limits();
+        SigmaMethod method = OptionValues.sigma(estimator.sigma).orElse(null);
+        BoundMethod boundMethod = OptionValues.bound(estimator.bound);
         dev.proofrun.readings.Readings readings = dev.proofrun.readings.ReadingsCsv.read(pilot,
                 pilotSubgroupSize == null ? OptionalInt.empty() : OptionalInt.of(pilotSubgroupSize));
         dev.proofrun.capability.CapabilityResult result;
         try {
-            result = dev.proofrun.capability.CapabilityAnalysis.of(readings.subgroups(), limits, null, method,
-                    confidence, boundMethod);
+            result = dev.proofrun.capability.CapabilityAnalysis.of(readings.subgroups(), specLimits, null, method,
+                    goal.confidence(), boundMethod);
         } catch (UserException e) {
             throw e.placedIn(dev.proofrun.text.Location.file(pilot.toString()));
         }

@@ -4,8 +4,8 @@ import dev.proofrun.stats.SpecLimits;
 import picocli.CommandLine.Option;
 
 /**
- * {@code --lsl} and {@code --usl} as {@code estimate} and {@code plan new} declare them (a picocli mixin);
- * {@code size} words them for its own use and reads them with the same {@link OptionValues#limits}.
+ * {@code --lsl} and {@code --usl} as {@code estimate}, {@code size} and {@code plan new} declare them (a picocli
+ * mixin), read with {@link OptionValues#limits}.
  */
 final class SpecLimitOptions {
 

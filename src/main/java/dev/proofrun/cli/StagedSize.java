@@ -36,8 +36,11 @@ final class StagedSize {
         return given;
     }
 
-    /** The spending function from the option, checked. */
+    /** The spending function from the option, checked; {@link Spending#byDefault()} when none is given. */
     static Spending spending(String token) {
+        if (token == null) {
+            return Spending.byDefault();
+        }
         return OptionValues.option("--spending", () -> Spending.fromToken(token));
     }
 

@@ -7,8 +7,12 @@
  * <ul>
  * <li>{@code OptionValues} reads every convention option ({@code --index}, {@code --sigma}, {@code --bound},
  * {@code --spacing}, {@code --spec}), the limits and {@code --confidence} in one place, so a bad value is the
- * same line from every command ({@code OptionMessage}); options worded alike are mixins
- * ({@code SpecLimitOptions}).</li>
+ * same line from every command ({@code OptionMessage}). An option that means the same in several commands is
+ * declared once, with one help text, as a picocli mixin ({@code StudyGoalOptions}, {@code ConfidenceOption},
+ * {@code SpecLimitOptions}, {@code NominalOption}, {@code GaugeOptions}, {@code ShapeOption},
+ * {@code EstimatorOptions}, {@code StagesOptions}, {@code JsonOption}, {@code PaperOption}); one that means
+ * something else in a command ({@code --subgroup-size}, {@code --characteristics}, {@code --floor}, {@code --out})
+ * stays declared there.</li>
  * <li>A run naming one job registers only that job's command (help and refusals are the same as the full
  * command line's, {@code ProofrunCommandTest}).</li>
  * <li>JSON views: {@code SizeJson}, {@code GradeJson}, {@code capability.CapabilityJson} (shared by

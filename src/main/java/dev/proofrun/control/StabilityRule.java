@@ -1,5 +1,6 @@
 package dev.proofrun.control;
 
+import dev.proofrun.stats.SampleMoments;
 import java.util.EnumSet;
 import java.util.List;
 import java.util.OptionalDouble;
@@ -111,7 +112,7 @@ public final class StabilityRule {
         ChanceSignalCounts chance = ChanceSignalCounts.simulate(kind, n, k, rules);
         ChanceSignalCounts meansChance = null;
         if (overallIndex && n > 1) {
-            List<double[]> means = subgroups.stream().map(g -> new double[] {dev.proofrun.stats.SampleMoments.meanOf(g)}).toList();
+            List<double[]> means = subgroups.stream().map(g -> new double[] {SampleMoments.meanOf(g)}).toList();
             ChartPair ofMeans = ControlCharts.of(ChartKind.INDIVIDUALS, means, rules);
             charts = new ChartPair(kind, ofMeans.location(), charts.spread(), charts.sigmaWithin());
             meansChance = ChanceSignalCounts.simulate(ChartKind.INDIVIDUALS, 1, k, rules);
@@ -151,15 +152,8 @@ public final class StabilityRule {
 
     /** The sample standard deviation of all readings (divisor N − 1), two-pass. */
     public static double overallSd(List<double[]> subgroups) {
-        double sum = 0;
-        long count = 0;
-        for (double[] g : subgroups) {
-            for (double v : g) {
-                sum += v;
-            }
-            count += g.length;
-        }
-        double mean = sum / count;
+        long count = readings(subgroups);
+        double mean = grandMean(subgroups);
         double ss = 0;
         for (double[] g : subgroups) {
             for (double v : g) {
@@ -172,23 +166,12 @@ public final class StabilityRule {
     /** One-way ANOVA of the subgroups: {F, p}. */
     public static double[] anova(List<double[]> subgroups) {
         int k = subgroups.size();
-        double total = 0;
-        long count = 0;
-        for (double[] g : subgroups) {
-            for (double v : g) {
-                total += v;
-            }
-            count += g.length;
-        }
-        double grand = total / count;
+        long count = readings(subgroups);
+        double grand = grandMean(subgroups);
         double between = 0;
         double within = 0;
         for (double[] g : subgroups) {
-            double s = 0;
-            for (double v : g) {
-                s += v;
-            }
-            double m = s / g.length;
+            double m = SampleMoments.meanOf(g);
             between += g.length * (m - grand) * (m - grand);
             for (double v : g) {
                 within += (v - m) * (v - m);
@@ -203,5 +186,25 @@ public final class StabilityRule {
         // upper tail without cancellation: P(F > f) = I_{df2/(df2 + df1 f)}(df2/2, df1/2)
         double p = Beta.regularizedBeta(df2 / (df2 + df1 * f), df2 / 2, df1 / 2);
         return new double[] {f, p};
+    }
+
+    /** N, the number of readings in all subgroups. */
+    private static long readings(List<double[]> subgroups) {
+        long count = 0;
+        for (double[] g : subgroups) {
+            count += g.length;
+        }
+        return count;
+    }
+
+    /** The mean of all readings, summed in reading order. */
+    private static double grandMean(List<double[]> subgroups) {
+        double sum = 0;
+        for (double[] g : subgroups) {
+            for (double v : g) {
+                sum += v;
+            }
+        }
+        return sum / readings(subgroups);
     }
 }
