@@ -3,10 +3,8 @@ package dev.proofrun.app.session;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import dev.proofrun.plan.DemoPlan;
-import dev.proofrun.plan.PlanFiles;
 import dev.proofrun.plan.StudyPlan;
 import dev.proofrun.stats.ShapeFamily;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -122,10 +120,7 @@ class PlanDraftsShapeTest {
         assertEquals(typed, back.text(CharacteristicField.THRESHOLD));
 
         // the plan written with it (as the hand-out writes it) opens with the same threshold in the cell
-        Path issued = Files.createDirectories(home.resolve("issued")).resolve("threshold.json");
-        PlanFiles.write(issued, composed);
-        Session reader = new Session(new AppHome(home.resolve("other"), home.resolve("issued")));
-        reader.open(issued);
+        Session reader = OpenedPlans.openIssued(home, composed, "threshold.json");
         CharacteristicDraft reopened = reader.draft().characteristics().get(0);
         assertEquals(theta, Double.parseDouble(reopened.text(CharacteristicField.THRESHOLD)), 0.0, "exact");
         assertEquals(composed.characteristics(), composed(reader, demo).characteristics());
@@ -145,12 +140,7 @@ class PlanDraftsShapeTest {
 
     /** A session with {@code plan} written to the plans folder and opened. */
     private Session opened(StudyPlan plan) throws Exception {
-        Path plans = Files.createDirectories(home.resolve("plans"));
-        Path file = plans.resolve(DemoPlan.FILE_NAME);
-        PlanFiles.write(file, plan);
-        Session session = new Session(new AppHome(home, plans));
-        session.open(file);
-        return session;
+        return OpenedPlans.open(home, plan);
     }
 
     /** The session's draft composed into a plan, with the demo's requirement, expectations, calendar and design. */
@@ -177,10 +167,7 @@ class PlanDraftsShapeTest {
         assertEquals(java.util.OptionalDouble.empty(), composed.characteristic(id).orElseThrow().threshold());
 
         // the plan written with it opens with the floor in its cell, not lost when the draft is rebuilt
-        Path issued = Files.createDirectories(home.resolve("issued")).resolve("floor.json");
-        PlanFiles.write(issued, composed);
-        Session reader = new Session(new AppHome(home.resolve("other"), home.resolve("issued")));
-        reader.open(issued);
+        Session reader = OpenedPlans.openIssued(home, composed, "floor.json");
         CharacteristicDraft reopened = reader.draft().characteristics().get(0);
         assertEquals(floor, Double.parseDouble(reopened.text(CharacteristicField.FLOOR)), 0.0, "exact");
         assertEquals("", reopened.text(CharacteristicField.THRESHOLD));
