@@ -23,10 +23,16 @@ class GradeShapeCommandTest {
 
     private final LastRun cli = new LastRun();
 
+    /** The lognormal face flatness, planned and issued. */
     private Path issuedPlan() {
-        Path plan = dir.resolve("plan.json");
-        assertEquals(0, cli.run(new UpperLimitPlan("PR-2027-0078", "pump lid", "face flatness", "0.08", "2027-03-01T06:00")
-                .args(plan, "--shape", "lognormal")), cli.err());
+        return issued("plan.json", new UpperLimitPlan("PR-2027-0078", "pump lid", "face flatness", "0.08", "2027-03-01T06:00"),
+                "lognormal");
+    }
+
+    /** {@code plan new} of one characteristic planned with {@code shape}, written to {@code name} and issued. */
+    private Path issued(String name, UpperLimitPlan planned, String shape) {
+        Path plan = dir.resolve(name);
+        assertEquals(0, cli.run(planned.args(plan, "--shape", shape)), cli.err());
         assertEquals(0, cli.run("plan", "issue", plan.toString()), cli.err());
         return plan;
     }
@@ -53,10 +59,8 @@ class GradeShapeCommandTest {
 
     @Test
     void aFoldedNormalCharacteristicNamesItsBound() throws Exception {
-        Path plan = dir.resolve("folded.json");
-        assertEquals(0, cli.run(new UpperLimitPlan("PR-2027-0079", "pump lid", "bore position", "0.2", "2027-03-01T06:00")
-                .args(plan, "--shape", "folded-normal")), cli.err());
-        assertEquals(0, cli.run("plan", "issue", plan.toString()), cli.err());
+        Path plan = issued("folded.json", new UpperLimitPlan("PR-2027-0079", "pump lid", "bore position", "0.2",
+                "2027-03-01T06:00"), "folded-normal");
         Path data = dir.resolve("returned.csv");
         // invented: readings about 0.05 mm apart from zero, sd 0.01 (mean/sigma 5): Ppu about (0.2 - 0.05)/0.03 = 5
         SimulatedReturn.writeCsv(GradingPlans.of(PlanFiles.read(plan)), Map.of("C1", SimulatedReturn.Process.stable(0.05, 0.01)),

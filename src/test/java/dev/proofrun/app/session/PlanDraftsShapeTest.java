@@ -100,12 +100,9 @@ class PlanDraftsShapeTest {
         StudyPlan demo = DemoPlan.create();
         Session session = opened(demo);
         CharacteristicDraft d1 = session.draft().characteristics().get(0);
-        assertEquals("", d1.text(CharacteristicField.THRESHOLD), "a normal row holds none");
-        // an invented stop 0.5 below the lower limit (the plan model asks only that it lie below the upper one)
-        double theta = demo.characteristics().get(0).limits().lower().getAsDouble() - 0.5;
+        // the plan model asks only that the threshold lie below the upper limit
+        double theta = typeStop(d1, demo, "lognormal3", CharacteristicField.THRESHOLD);
         String typed = java.math.BigDecimal.valueOf(theta).toPlainString();
-        d1.cell(CharacteristicField.SHAPE).set("lognormal3");
-        d1.cell(CharacteristicField.THRESHOLD).set(typed);
         StudyPlan composed = composed(session, demo);
         String id = d1.id();
         assertEquals(ShapeFamily.LOGNORMAL3, composed.characteristic(id).orElseThrow().shape());
@@ -138,6 +135,18 @@ class PlanDraftsShapeTest {
         assertEquals(d1.id() + ": the threshold is not a number: 'stop'", e.getMessage());
     }
 
+    /**
+     * Types {@code shape} and an invented stop 0.5 below the demo's first lower limit into {@code field} of the
+     * normal row {@code d1} (which holds none before) and returns the stop.
+     */
+    private static double typeStop(CharacteristicDraft d1, StudyPlan demo, String shape, CharacteristicField field) {
+        assertEquals("", d1.text(field), "a normal row holds none");
+        double stop = demo.characteristics().get(0).limits().lower().getAsDouble() - 0.5;
+        d1.cell(CharacteristicField.SHAPE).set(shape);
+        d1.cell(field).set(java.math.BigDecimal.valueOf(stop).toPlainString());
+        return stop;
+    }
+
     /** A session with {@code plan} written to the plans folder and opened. */
     private Session opened(StudyPlan plan) throws Exception {
         return OpenedPlans.open(home, plan);
@@ -155,12 +164,8 @@ class PlanDraftsShapeTest {
         StudyPlan demo = DemoPlan.create();
         Session session = opened(demo);
         CharacteristicDraft d1 = session.draft().characteristics().get(0);
-        assertEquals("", d1.text(CharacteristicField.FLOOR), "a normal row holds none");
-        // an invented stop 0.5 below the lower limit, known only as a floor
-        double floor = demo.characteristics().get(0).limits().lower().getAsDouble() - 0.5;
-        String typed = java.math.BigDecimal.valueOf(floor).toPlainString();
-        d1.cell(CharacteristicField.SHAPE).set("weibull3");
-        d1.cell(CharacteristicField.FLOOR).set(typed);
+        // the stop known only as a floor
+        double floor = typeStop(d1, demo, "weibull3", CharacteristicField.FLOOR);
         StudyPlan composed = composed(session, demo);
         String id = d1.id();
         assertEquals(java.util.OptionalDouble.of(floor), composed.characteristic(id).orElseThrow().floor());
