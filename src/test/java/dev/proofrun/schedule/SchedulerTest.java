@@ -16,7 +16,11 @@ import java.util.EnumSet;
 import java.util.List;
 import java.util.TreeSet;
 import java.util.stream.Collectors;
+import java.util.stream.Stream;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.Arguments;
+import org.junit.jupiter.params.provider.MethodSource;
 
 class SchedulerTest {
 
@@ -130,28 +134,29 @@ class SchedulerTest {
     // 2027-03-28 and 2027-10-31. US Energy Policy Act of 2005 (second Sunday of March, first Sunday of
     // November, 02:00 local): 2027-03-14 and 2027-11-07.
 
-    @Test
-    void springForwardNightShiftInBerlinRunsSevenHours() {
-        ProductionCalendar cal = nightsOnly("Europe/Berlin", List.of());
-        Schedule s = oneShift(cal, LocalDateTime.of(2027, 3, 27, 22, 0), 7);
-        assertEquals(420.0, s.workingMinutes(), 1e-9);
-        // one part per hour at 60/h: t_i = 60 i + 29.5 minutes of running time
-        List<String> starts = starts(s);
-        assertEquals(List.of("2027-03-27T22:29+01:00", "2027-03-27T23:29+01:00", "2027-03-28T00:29+01:00",
-                "2027-03-28T01:29+01:00", "2027-03-28T03:29+02:00", "2027-03-28T04:29+02:00",
-                "2027-03-28T05:29+02:00"), starts);
-        assertEquals(OffsetDateTime.parse("2027-03-28T06:00+02:00"), s.end());
+    /**
+     * A Berlin night shift 22:00–06:00 across each clock change, one part an hour at 60/h (t_i = 60 i + 29.5 minutes
+     * of running time): spring forward runs seven hours, fall back nine, through the repeated hour.
+     */
+    static Stream<Arguments> berlinClockChanges() {
+        return Stream.of(
+                Arguments.of(LocalDateTime.of(2027, 3, 27, 22, 0), 7, 420.0, List.of("2027-03-27T22:29+01:00",
+                        "2027-03-27T23:29+01:00", "2027-03-28T00:29+01:00", "2027-03-28T01:29+01:00", "2027-03-28T03:29+02:00",
+                        "2027-03-28T04:29+02:00", "2027-03-28T05:29+02:00"), "2027-03-28T06:00+02:00"),
+                Arguments.of(LocalDateTime.of(2027, 10, 30, 22, 0), 9, 540.0, List.of("2027-10-30T22:29+02:00",
+                        "2027-10-30T23:29+02:00", "2027-10-31T00:29+02:00", "2027-10-31T01:29+02:00", "2027-10-31T02:29+02:00",
+                        "2027-10-31T02:29+01:00", "2027-10-31T03:29+01:00", "2027-10-31T04:29+01:00", "2027-10-31T05:29+01:00"),
+                        "2027-10-31T06:00+01:00"));
     }
 
-    @Test
-    void fallBackNightShiftInBerlinRunsNineHoursThroughTheRepeatedHour() {
-        ProductionCalendar cal = nightsOnly("Europe/Berlin", List.of());
-        Schedule s = oneShift(cal, LocalDateTime.of(2027, 10, 30, 22, 0), 9);
-        assertEquals(540.0, s.workingMinutes(), 1e-9);
-        List<String> starts = starts(s);
-        assertEquals(List.of("2027-10-30T22:29+02:00", "2027-10-30T23:29+02:00", "2027-10-31T00:29+02:00",
-                "2027-10-31T01:29+02:00", "2027-10-31T02:29+02:00", "2027-10-31T02:29+01:00",
-                "2027-10-31T03:29+01:00", "2027-10-31T04:29+01:00", "2027-10-31T05:29+01:00"), starts);
+    @ParameterizedTest(name = "night from {0}: {2} running minutes")
+    @MethodSource("berlinClockChanges")
+    void aNightShiftInBerlinRunsItsRealHoursAcrossTheClockChange(LocalDateTime start, int k, double minutes,
+            List<String> starts, String end) {
+        Schedule s = oneShift(nightsOnly("Europe/Berlin", List.of()), start, k);
+        assertEquals(minutes, s.workingMinutes(), 1e-9);
+        assertEquals(starts, starts(s));
+        assertEquals(OffsetDateTime.parse(end), s.end());
     }
 
     @Test
