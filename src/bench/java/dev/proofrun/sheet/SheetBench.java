@@ -28,6 +28,9 @@ import org.openjdk.jmh.annotations.Warmup;
 @State(Scope.Benchmark)
 @BenchmarkMode(Mode.SingleShotTime)
 @OutputTimeUnit(TimeUnit.MILLISECONDS)
+@Fork(1)
+@Warmup(iterations = 5)
+@Measurement(iterations = 10)
 public class SheetBench {
 
     private StudyPlan plan;
@@ -39,7 +42,7 @@ public class SheetBench {
         dir = Files.createTempDirectory("sheet-bench");
     }
 
-    /** All three files into a directory, first call in a fresh JVM. */
+    /** All three files into a directory, first call in a fresh JVM (its own forks, no warm-up). */
     @Benchmark
     @Fork(3)
     @Warmup(iterations = 0)
@@ -50,18 +53,12 @@ public class SheetBench {
 
     /** All three files into a directory, after warm-up. */
     @Benchmark
-    @Fork(1)
-    @Warmup(iterations = 5)
-    @Measurement(iterations = 10)
     public Object warm() {
         return SheetFiles.write(plan, dir, Paper.A4, false);
     }
 
     /** The PDF alone, after warm-up. */
     @Benchmark
-    @Fork(1)
-    @Warmup(iterations = 5)
-    @Measurement(iterations = 10)
     public int pdfOnly() {
         ByteArrayOutputStream out = new ByteArrayOutputStream();
         SheetPdf.write(plan, Paper.A4, out);

@@ -11,8 +11,12 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.stream.Stream;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.Arguments;
+import org.junit.jupiter.params.provider.MethodSource;
 
 class EstimateCommandTest {
 
@@ -95,57 +99,45 @@ class EstimateCommandTest {
         refused("none.csv: file not found", "estimate", dir.resolve("none.csv").toString(), "--usl", "1");
     }
 
-    @Test
-    void noHeader() throws IOException {
-        Path p = Files.writeString(dir.resolve("h.csv"), "1.0\n2.0\n");
-        refused("h.csv, row 1: no header", "estimate", p.toString(), "--usl", "3");
+    /** Files that are not readings: the file's name, its content, the options, the words of the refusal. */
+    static Stream<Arguments> badFiles() {
+        return Stream.of(
+                Arguments.of("h.csv", "1.0\n2.0\n", List.of("--usl", "3"), "h.csv, row 1: no header"),
+                Arguments.of("n.csv", "value\n1.0\n2,0\n", List.of("--usl", "3"), "n.csv, row 3: 2 cells but the header has 1"),
+                Arguments.of("m.csv", "value\n1.0\n2.0 mm\n", List.of("--usl", "3"),
+                        "m.csv, row 3, column value: not a number: '2.0 mm'"),
+                Arguments.of("e.csv", "", List.of("--usl", "3"), "e.csv: the file is empty"),
+                Arguments.of("one.csv", "value\n1.0\n", List.of("--usl", "3"), "one.csv: need at least 2 readings, found 1"),
+                Arguments.of("u.csv", "x1,x2,x3\n1,2,3\n2,3,\n1,2,2\n", List.of("--usl", "9", "--sigma", "rbar"),
+                        "R-bar/d2 needs equal subgroup sizes"));
     }
 
-    @Test
-    void nonNumericCell() throws IOException {
-        Path p = Files.writeString(dir.resolve("n.csv"), "value\n1.0\n2,0\n");
-        refused("n.csv, row 3: 2 cells but the header has 1", "estimate", p.toString(), "--usl", "3");
-        Path q = Files.writeString(dir.resolve("m.csv"), "value\n1.0\n2.0 mm\n");
-        refused("m.csv, row 3, column value: not a number: '2.0 mm'", "estimate", q.toString(), "--usl", "3");
+    @ParameterizedTest(name = "{0}: {3}")
+    @MethodSource("badFiles")
+    void aBadFileIsRefused(String name, String content, List<String> options, String expected) throws IOException {
+        Path p = Files.writeString(dir.resolve(name), content);
+        refused(expected, args(p, options));
     }
 
-    @Test
-    void emptyFile() throws IOException {
-        Path p = Files.writeString(dir.resolve("e.csv"), "");
-        refused("e.csv: the file is empty", "estimate", p.toString(), "--usl", "3");
+    /** Bad options on the shaft's good readings: the options, the words of the refusal. */
+    static Stream<Arguments> badOptions() {
+        return Stream.of(
+                Arguments.of(List.of("--lsl", "12.03", "--usl", "11.97"), "--lsl 12.03 must be below --usl 11.97"),
+                Arguments.of(List.of(), "give at least one specification limit"),
+                Arguments.of(List.of("--usl", "12.03", "--sigma", "foo"), "unknown sigma method 'foo'"),
+                Arguments.of(List.of("--usl", "12.03", "--confidence", "1.5"), "confidence must lie between 0.5 and 0.9999"));
     }
 
-    @Test
-    void reversedLimits() throws IOException {
-        refused("--lsl 12.03 must be below --usl 11.97", "estimate", shaft().toString(), "--lsl", "12.03", "--usl", "11.97");
+    @ParameterizedTest(name = "{0}: {1}")
+    @MethodSource("badOptions")
+    void aBadOptionIsRefused(List<String> options, String expected) throws IOException {
+        refused(expected, args(shaft(), options));
     }
 
-    @Test
-    void noLimit() throws IOException {
-        refused("give at least one specification limit", "estimate", shaft().toString());
-    }
-
-    @Test
-    void fewerThanTwoReadings() throws IOException {
-        Path p = Files.writeString(dir.resolve("one.csv"), "value\n1.0\n");
-        refused("one.csv: need at least 2 readings, found 1", "estimate", p.toString(), "--usl", "3");
-    }
-
-    @Test
-    void unequalSizesRefusedForRanges() throws IOException {
-        Path p = Files.writeString(dir.resolve("u.csv"), "x1,x2,x3\n1,2,3\n2,3,\n1,2,2\n");
-        refused("R-bar/d2 needs equal subgroup sizes", "estimate", p.toString(), "--usl", "9", "--sigma", "rbar");
-    }
-
-    @Test
-    void badOptions() throws IOException {
-        refused("unknown sigma method 'foo'", "estimate", shaft().toString(), "--usl", "12.03", "--sigma", "foo");
-    }
-
-    @Test
-    void badConfidence() throws IOException {
-        refused("confidence must lie between 0.5 and 0.9999", "estimate", shaft().toString(), "--usl", "12.03",
-                "--confidence", "1.5");
+    private static String[] args(Path file, List<String> options) {
+        List<String> a = new ArrayList<>(List.of("estimate", file.toString()));
+        a.addAll(options);
+        return a.toArray(new String[0]);
     }
 
     @Test

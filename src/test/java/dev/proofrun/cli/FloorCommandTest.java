@@ -5,12 +5,10 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
-import com.fasterxml.jackson.databind.ObjectMapper;
 import dev.proofrun.plan.PlanFiles;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.List;
 import java.util.OptionalDouble;
 import org.junit.jupiter.api.Test;
@@ -30,14 +28,11 @@ class FloorCommandTest {
 
     private final LastRun cli = new LastRun();
 
+    private static final UpperLimitPlan PLAN =
+            new UpperLimitPlan("PR-2027-0142", "pressed sleeve", "seated height", "10.10", "2027-05-03T06:00");
+
     private String[] single(Path file, String... extra) {
-        List<String> a = new ArrayList<>(List.of("plan", "new", "--out", file.toString(), "--id", "PR-2027-0142",
-                "--part", "pressed sleeve", "--characteristic", "seated height", "--unit", "mm",
-                "--usl", "10.10", "--target", "1.33", "--expected", "1.8",
-                "--subgroup-size", "5", "--subgroups", "25", "--zone", "Europe/Berlin",
-                "--start", "2027-05-03T06:00"));
-        a.addAll(List.of(extra));
-        return a.toArray(new String[0]);
+        return PLAN.args(file, extra);
     }
 
     @Test
@@ -72,12 +67,7 @@ class FloorCommandTest {
             "the floor 10.1 must lie below the upper limit 10.1", "the floor must be a number"};
         for (int i = 0; i < cases.length; i++) {
             Path file = dir.resolve("bad" + i + ".json");
-            assertEquals(2, cli.run(single(file, cases[i])), String.join(" ", cases[i]) + ": " + cli.out() + cli.err());
-            String e = cli.err().trim();
-            assertEquals(1, e.lines().count(), e);
-            assertTrue(e.contains(words[i]) && e.contains("--floor"), e);
-            assertFalse(e.contains("Exception"), e);
-            assertFalse(Files.exists(file), e);
+            CommandChecks.assertRefusedInOneLine(cli, single(file, cases[i]), words[i], "--floor", file);
         }
     }
 
@@ -133,8 +123,7 @@ class FloorCommandTest {
         assertTrue(out.contains("fitted lognormal3 (floor 9.95; fitted at the threshold "), out);
         assertTrue(out.contains("takes 9.95 as a floor of the process's threshold"), out);
         assertFalse(out.contains("as the real stop"), out);
-        assertEquals(0, cli.run("grade", plan.toString(), data.toString(), "--json"), cli.err());
-        JsonNode j = new ObjectMapper().readTree(cli.out()).get("characteristics").get(0);
+        JsonNode j = CommandChecks.firstGradedJson(cli, plan, data);
         assertEquals("lognormal3", j.get("model").asText());
         assertEquals(9.95, j.get("floor").asDouble(), 0);
         double from = j.get("thresholdsFrom").asDouble();
@@ -146,14 +135,10 @@ class FloorCommandTest {
         assertTrue(from <= at && at <= to && to < smallest, smallest + " " + j);
         assertTrue(j.get("lower").asDouble() < j.get("estimate").asDouble(), j.toString());
 
-        Path pdf = dir.resolve("report.pdf");
-        assertEquals(0, cli.run("grade", plan.toString(), data.toString(), "--report", pdf.toString()), cli.err());
-        try (org.apache.pdfbox.pdmodel.PDDocument doc = org.apache.pdfbox.Loader.loadPDF(Files.readAllBytes(pdf))) {
-            String text = new org.apache.pdfbox.text.PDFTextStripper().getText(doc).replaceAll("\\s+", " ");
-            assertTrue(text.contains("lognormal3 (floor 9.95; fitted at the threshold"), text);
-            assertTrue(text.contains("the lower bound is the least over the thresholds"), text);
-            assertTrue(text.contains("as a floor of the process's threshold"), text);
-        }
+        String text = CommandChecks.reportText(cli, plan, data, dir.resolve("report.pdf"));
+        assertTrue(text.contains("lognormal3 (floor 9.95; fitted at the threshold"), text);
+        assertTrue(text.contains("the lower bound is the least over the thresholds"), text);
+        assertTrue(text.contains("as a floor of the process's threshold"), text);
     }
 
     @Test

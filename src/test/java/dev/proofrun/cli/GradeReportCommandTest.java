@@ -12,6 +12,7 @@ import java.nio.file.Path;
 import org.apache.pdfbox.Loader;
 import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.text.PDFTextStripper;
+import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -20,6 +21,17 @@ class GradeReportCommandTest {
 
     @TempDir
     Path tmp;
+
+    /** The demo's plan and its returned file, as {@code demo --out} writes them before each test. */
+    private Path plan;
+    private Path data;
+
+    @BeforeEach
+    void writeTheDemo() {
+        ok("demo", "--out", tmp.toString());
+        plan = tmp.resolve(DemoPlan.FILE_NAME);
+        data = tmp.resolve(DemoCommand.RETURNED);
+    }
 
     /** Runs a command that must succeed and keeps what it printed. */
     private static CommandRun ok(String... args) {
@@ -30,9 +42,6 @@ class GradeReportCommandTest {
 
     @Test
     void theDemoGradesIntoAReport() throws IOException {
-        ok("demo", "--out", tmp.toString());
-        Path plan = tmp.resolve(DemoPlan.FILE_NAME);
-        Path data = tmp.resolve(DemoCommand.RETURNED);
         Path pdf = tmp.resolve("grade.pdf");
         CommandRun graded = ok("grade", plan.toString(), data.toString(), "--report", pdf.toString());
         assertFalse(graded.err().contains("not available"), graded.err());
@@ -63,9 +72,6 @@ class GradeReportCommandTest {
 
     @Test
     void aReportThatCannotBeWrittenIsOneLineAndExitTwo() throws IOException {
-        ok("demo", "--out", tmp.toString());
-        Path plan = tmp.resolve(DemoPlan.FILE_NAME);
-        Path data = tmp.resolve(DemoCommand.RETURNED);
         Path pdf = tmp.resolve("no-such-dir").resolve("grade.pdf");
         CommandRun r = run("grade", plan.toString(), data.toString(), "--report", pdf.toString());
         assertEquals(2, r.code());
@@ -76,9 +82,6 @@ class GradeReportCommandTest {
 
     @Test
     void paperLetterGivesLetterPagesAndAnUnknownPaperWritesNothing() throws IOException {
-        ok("demo", "--out", tmp.toString());
-        Path plan = tmp.resolve(DemoPlan.FILE_NAME);
-        Path data = tmp.resolve(DemoCommand.RETURNED);
         Path letter = tmp.resolve("letter.pdf");
         Path a4 = tmp.resolve("a4.pdf");
         ok("grade", plan.toString(), data.toString(), "--report", letter.toString(), "--paper", "letter");

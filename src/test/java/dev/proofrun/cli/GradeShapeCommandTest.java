@@ -4,7 +4,6 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
-import com.fasterxml.jackson.databind.ObjectMapper;
 import dev.proofrun.grade.GradingPlans;
 import dev.proofrun.grade.SimulatedReturn;
 import dev.proofrun.plan.PlanFiles;
@@ -24,12 +23,16 @@ class GradeShapeCommandTest {
 
     private final LastRun cli = new LastRun();
 
+    /** The lognormal face flatness, planned and issued. */
     private Path issuedPlan() {
-        Path plan = dir.resolve("plan.json");
-        assertEquals(0, cli.run("plan", "new", "--out", plan.toString(), "--id", "PR-2027-0078", "--part", "pump lid",
-                "--characteristic", "face flatness", "--unit", "mm", "--usl", "0.08", "--target", "1.33", "--expected", "1.8",
-                "--shape", "lognormal", "--subgroup-size", "5", "--subgroups", "25", "--zone", "Europe/Berlin",
-                "--start", "2027-03-01T06:00"), cli.err());
+        return issued("plan.json", new UpperLimitPlan("PR-2027-0078", "pump lid", "face flatness", "0.08", "2027-03-01T06:00"),
+                "lognormal");
+    }
+
+    /** {@code plan new} of one characteristic planned with {@code shape}, written to {@code name} and issued. */
+    private Path issued(String name, UpperLimitPlan planned, String shape) {
+        Path plan = dir.resolve(name);
+        assertEquals(0, cli.run(planned.args(plan, "--shape", shape)), cli.err());
         assertEquals(0, cli.run("plan", "issue", plan.toString()), cli.err());
         return plan;
     }
@@ -46,8 +49,7 @@ class GradeShapeCommandTest {
         assertTrue(cli.out().contains("Cpk under the lognormal model by the ISO 22514-2 percentile method, generalized pivotal bounds"), cli.out());
         assertTrue(cli.out().contains("seed " + PivotalBound.DEFAULT_SEED), cli.out());
 
-        assertEquals(0, cli.run("grade", plan.toString(), data.toString(), "--json"), cli.err());
-        JsonNode j = new ObjectMapper().readTree(cli.out()).get("characteristics").get(0);
+        JsonNode j = CommandChecks.firstGradedJson(cli, plan, data);
         assertEquals("iso-22514-2-percentile", j.get("method").asText());
         assertEquals("lognormal", j.get("model").asText());
         assertEquals(PivotalBound.DEFAULT_SEED, j.get("seed").asLong());
@@ -57,12 +59,8 @@ class GradeShapeCommandTest {
 
     @Test
     void aFoldedNormalCharacteristicNamesItsBound() throws Exception {
-        Path plan = dir.resolve("folded.json");
-        assertEquals(0, cli.run("plan", "new", "--out", plan.toString(), "--id", "PR-2027-0079", "--part", "pump lid",
-                "--characteristic", "bore position", "--unit", "mm", "--usl", "0.2", "--target", "1.33", "--expected", "1.8",
-                "--shape", "folded-normal", "--subgroup-size", "5", "--subgroups", "25", "--zone", "Europe/Berlin",
-                "--start", "2027-03-01T06:00"), cli.err());
-        assertEquals(0, cli.run("plan", "issue", plan.toString()), cli.err());
+        Path plan = issued("folded.json", new UpperLimitPlan("PR-2027-0079", "pump lid", "bore position", "0.2",
+                "2027-03-01T06:00"), "folded-normal");
         Path data = dir.resolve("returned.csv");
         // invented: readings about 0.05 mm apart from zero, sd 0.01 (mean/sigma 5): Ppu about (0.2 - 0.05)/0.03 = 5
         SimulatedReturn.writeCsv(GradingPlans.of(PlanFiles.read(plan)), Map.of("C1", SimulatedReturn.Process.stable(0.05, 0.01)),
@@ -70,8 +68,7 @@ class GradeShapeCommandTest {
         assertEquals(0, cli.run("grade", plan.toString(), data.toString()), cli.err());
         assertTrue(cli.out().contains("C1 bore position: Demonstrated"), cli.out());
         assertTrue(cli.out().contains("under the folded-normal model by the ISO 22514-2 percentile method, bounds at the least favourable mean/sigma"), cli.out());
-        assertEquals(0, cli.run("grade", plan.toString(), data.toString(), "--json"), cli.err());
-        JsonNode j = new ObjectMapper().readTree(cli.out()).get("characteristics").get(0);
+        JsonNode j = CommandChecks.firstGradedJson(cli, plan, data);
         assertEquals("iso-22514-2-percentile", j.get("method").asText());
         assertEquals("folded-normal", j.get("model").asText());
         assertTrue(j.get("lower").asDouble() < j.get("estimate").asDouble());

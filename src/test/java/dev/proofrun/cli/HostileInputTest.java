@@ -122,9 +122,7 @@ class HostileInputTest {
         // the one CSV reader takes no field across lines (docs/decisions/one-csv-reader.md): refused where it opens
         assertEquals("proofrun: " + csv + ", row 3: not valid CSV: a quoted field is not closed on its line", r.err().strip());
 
-        Path xlsx = dir.resolve("newline.xlsx");
-        Workbooks.fromCsv(dir.resolve(DemoCommand.RETURNED), xlsx, false);
-        Workbooks.editSheets(xlsx, x -> x.replaceFirst("<v>22.001</v>", "<v>22.001&#10;1</v>").replaceFirst(
+        Path xlsx = demoWorkbook("newline.xlsx", false, x -> x.replaceFirst("<v>22.001</v>", "<v>22.001&#10;1</v>").replaceFirst(
                 "(<c r=\"H2\")( t=\"n\")?", "$1 t=\"inlineStr\"").replaceFirst("<v>22.001&#10;1</v>", "<is><t>22.001&#10;1</t></is>"));
         CommandRun g = run("grade", plan.toString(), xlsx.toString());
         assertEquals(0, g.code(), g.err());
@@ -144,10 +142,23 @@ class HostileInputTest {
         assertTrue(inf.err().contains("row 3, column value: not a finite number: '1e309'"), inf.err());
     }
 
+    /**
+     * The demo's returned file as a workbook {@code name} (the notes sheet first or not), its sheets' XML rewritten by
+     * {@code edit} (null: written as it is).
+     */
+    private Path demoWorkbook(String name, boolean notesFirst, java.util.function.UnaryOperator<String> edit)
+            throws java.io.IOException {
+        Path xlsx = dir.resolve(name);
+        Workbooks.fromCsv(dir.resolve(DemoCommand.RETURNED), xlsx, notesFirst);
+        if (edit != null) {
+            Workbooks.editSheets(xlsx, edit);
+        }
+        return xlsx;
+    }
+
     @Test
     void theFillInSheetIsFoundByItsHeaderWhenNotFirst() throws Exception {
-        Path xlsx = dir.resolve("reordered.xlsx");
-        Workbooks.fromCsv(dir.resolve(DemoCommand.RETURNED), xlsx, true);
+        Path xlsx = demoWorkbook("reordered.xlsx", true, null);
         CommandRun r = run("grade", plan.toString(), xlsx.toString());
         assertEquals(0, r.code(), r.err());
         assertTrue(r.out().contains("D1 bore diameter: Demonstrated"), r.out());
@@ -155,9 +166,8 @@ class HostileInputTest {
 
     @Test
     void cellsWithoutReferencesAreReadInOrder() throws Exception {
-        Path xlsx = dir.resolve("norefs.xlsx");
-        Workbooks.fromCsv(dir.resolve(DemoCommand.RETURNED), xlsx, false);
-        Workbooks.editSheets(xlsx, x -> x.replaceAll("<c r=\"[A-Z]+[0-9]+\"", "<c").replaceAll("<row r=\"[0-9]+\"", "<row"));
+        Path xlsx = demoWorkbook("norefs.xlsx", false,
+                x -> x.replaceAll("<c r=\"[A-Z]+[0-9]+\"", "<c").replaceAll("<row r=\"[0-9]+\"", "<row"));
         CommandRun r = run("grade", plan.toString(), xlsx.toString());
         assertEquals(0, r.code(), r.err());
         assertTrue(r.out().contains("D1 bore diameter: Demonstrated"), r.out());
@@ -165,24 +175,18 @@ class HostileInputTest {
 
     @Test
     void damagedWorkbooksAreSaidInOurWords() throws Exception {
-        Path bomb = dir.resolve("inflating.xlsx");
-        Workbooks.fromCsv(dir.resolve(DemoCommand.RETURNED), bomb, false);
-        Workbooks.editSheets(bomb, x -> x.replace("<sheetData>", "<sheetData>" + " ".repeat(4_000_000)));
+        Path bomb = demoWorkbook("inflating.xlsx", false, x -> x.replace("<sheetData>", "<sheetData>" + " ".repeat(4_000_000)));
         CommandRun r = run("grade", plan.toString(), bomb.toString());
         oneLine(r);
         assertEquals("proofrun: " + bomb + ": cannot read the file: a part of the workbook expands far more than spreadsheet data"
                 + " does, so it is not opened (save the workbook again from the spreadsheet program, or return the CSV file)", r.err().strip());
 
-        Path far = dir.resolve("beyond-xfd.xlsx");
-        Workbooks.fromCsv(dir.resolve(DemoCommand.RETURNED), far, false);
-        Workbooks.editSheets(far, x -> x.replaceFirst("<c r=\"B2\"", "<c r=\"ZZZZZZZ2\""));
+        Path far = demoWorkbook("beyond-xfd.xlsx", false, x -> x.replaceFirst("<c r=\"B2\"", "<c r=\"ZZZZZZZ2\""));
         CommandRun f = run("grade", plan.toString(), far.toString());
         oneLine(f);
         assertTrue(f.err().contains("beyond the last column a sheet can have (XFD)"), f.err());
 
-        Path cut = dir.resolve("cut.xlsx");
-        Workbooks.fromCsv(dir.resolve(DemoCommand.RETURNED), cut, false);
-        Workbooks.editSheets(cut, x -> x.substring(0, x.length() / 2));
+        Path cut = demoWorkbook("cut.xlsx", false, x -> x.substring(0, x.length() / 2));
         CommandRun c = run("grade", plan.toString(), cut.toString());
         oneLine(c);
         assertTrue(c.err().contains("cut.xlsx: cannot read the file: the sheet's content is damaged"), c.err());

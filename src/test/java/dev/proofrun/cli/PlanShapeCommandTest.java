@@ -9,7 +9,6 @@ import dev.proofrun.stats.ShapeFamily;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -22,14 +21,11 @@ class PlanShapeCommandTest {
 
     private final LastRun cli = new LastRun();
 
+    private static final UpperLimitPlan PLAN =
+            new UpperLimitPlan("PR-2027-0077", "pump lid", "face flatness", "0.05", "2027-03-01T06:00");
+
     private String[] single(Path file, String... extra) {
-        List<String> a = new ArrayList<>(List.of("plan", "new", "--out", file.toString(), "--id", "PR-2027-0077",
-                "--part", "pump lid", "--characteristic", "face flatness", "--unit", "mm",
-                "--usl", "0.05", "--target", "1.33", "--expected", "1.8",
-                "--subgroup-size", "5", "--subgroups", "25", "--zone", "Europe/Berlin",
-                "--start", "2027-03-01T06:00"));
-        a.addAll(List.of(extra));
-        return a.toArray(new String[0]);
+        return PLAN.args(file, extra);
     }
 
     @Test

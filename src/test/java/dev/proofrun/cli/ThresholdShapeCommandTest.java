@@ -5,13 +5,11 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
-import com.fasterxml.jackson.databind.ObjectMapper;
 import dev.proofrun.plan.PlanFiles;
 import dev.proofrun.stats.ShapeFamily;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.List;
 import java.util.OptionalDouble;
 import org.junit.jupiter.api.Test;
@@ -30,14 +28,11 @@ class ThresholdShapeCommandTest {
 
     private final LastRun cli = new LastRun();
 
+    private static final UpperLimitPlan PLAN =
+            new UpperLimitPlan("PR-2027-0091", "locating pin", "seat height", "10.10", "2027-03-01T06:00");
+
     private String[] single(Path file, String... extra) {
-        List<String> a = new ArrayList<>(List.of("plan", "new", "--out", file.toString(), "--id", "PR-2027-0091",
-                "--part", "locating pin", "--characteristic", "seat height", "--unit", "mm",
-                "--usl", "10.10", "--target", "1.33", "--expected", "1.8",
-                "--subgroup-size", "5", "--subgroups", "25", "--zone", "Europe/Berlin",
-                "--start", "2027-03-01T06:00"));
-        a.addAll(List.of(extra));
-        return a.toArray(new String[0]);
+        return PLAN.args(file, extra);
     }
 
     @Test
@@ -73,12 +68,7 @@ class ThresholdShapeCommandTest {
             "not normal", "must lie below the upper limit 10.1", "must be a number"};
         for (int i = 0; i < cases.length; i++) {
             Path file = dir.resolve("bad" + i + ".json");
-            assertEquals(2, cli.run(single(file, cases[i])), String.join(" ", cases[i]) + ": " + cli.out() + cli.err());
-            String e = cli.err().trim();
-            assertEquals(1, e.lines().count(), e);
-            assertTrue(e.contains(words[i].replace("not normal", "not normal")) && e.contains(i == 0 ? "--shape" : "--threshold"), e);
-            assertFalse(e.contains("Exception"), e);
-            assertFalse(Files.exists(file), e);
+            CommandChecks.assertRefusedInOneLine(cli, single(file, cases[i]), words[i], i == 0 ? "--shape" : "--threshold", file);
         }
     }
 
@@ -121,20 +111,15 @@ class ThresholdShapeCommandTest {
         assertTrue(cli.out().contains("fitted lognormal3 (threshold 9.95) model"), cli.out());
         assertTrue(cli.out().contains("lower limit 9.9 lies at or below the declared threshold 9.95"), cli.out());
         assertTrue(cli.out().contains("threshold 9.95 as the real stop"), cli.out());
-        assertEquals(0, cli.run("grade", plan.toString(), data.toString(), "--json"), cli.err());
-        JsonNode j = new ObjectMapper().readTree(cli.out()).get("characteristics").get(0);
+        JsonNode j = CommandChecks.firstGradedJson(cli, plan, data);
         assertEquals("lognormal3", j.get("model").asText());
         assertEquals(9.95, j.get("threshold").asDouble(), 0);
         assertEquals("iso-22514-2-percentile", j.get("method").asText());
 
-        Path pdf = dir.resolve("report.pdf");
-        assertEquals(0, cli.run("grade", plan.toString(), data.toString(), "--report", pdf.toString()), cli.err());
-        try (org.apache.pdfbox.pdmodel.PDDocument doc = org.apache.pdfbox.Loader.loadPDF(Files.readAllBytes(pdf))) {
-            String text = new org.apache.pdfbox.text.PDFTextStripper().getText(doc).replaceAll("\\s+", " ");
-            assertTrue(text.contains("lognormal3"), text);
-            assertTrue(text.contains("threshold 9.95"), text);
-            assertTrue(text.contains("ln(reading \u2212 threshold)"), text);
-        }
+        String text = CommandChecks.reportText(cli, plan, data, dir.resolve("report.pdf"));
+        assertTrue(text.contains("lognormal3"), text);
+        assertTrue(text.contains("threshold 9.95"), text);
+        assertTrue(text.contains("ln(reading \u2212 threshold)"), text);
     }
 
     @Test

@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import dev.proofrun.stats.Subgroups;
 import java.util.Arrays;
 import java.util.EnumSet;
 import java.util.List;
@@ -35,17 +36,7 @@ class RunRulesTest {
     }
 
     private static double[] concat(double[]... parts) {
-        int n = 0;
-        for (double[] p : parts) {
-            n += p.length;
-        }
-        double[] out = new double[n];
-        int k = 0;
-        for (double[] p : parts) {
-            System.arraycopy(p, 0, out, k, p.length);
-            k += p.length;
-        }
-        return out;
+        return Subgroups.flatten(Arrays.asList(parts));
     }
 
     @Test

@@ -35,28 +35,23 @@ class DesignReferenceTest {
                 .withFloors(PracticeFloors.none()).withSubgroupSizes(List.of(1));
     }
 
-    @ParameterizedTest(name = "Pp {0} -> {1}, conf {2}, power {3}: N = {4}")
+    /** Pp two-sided against the chi-square test, Ppu (Ppk, upper limit only) against the noncentral t. */
+    @ParameterizedTest(name = "{0} {1} {2} -> {3}, conf {4}, power {5}: N = {6} (the {7})")
     @CsvSource({
         // reference_sizes.py, pp_size(c0, c1, conf, power)
-        "1.0, 1.33, 0.95, 0.90, 56",
-        "1.33, 1.67, 0.95, 0.90, 86",
-        "1.33, 1.67, 0.95, 0.95, 107",
-        "1.33, 2.0, 0.99, 0.90, 45",
-        "1.67, 2.0, 0.95, 0.80, 101"})
-    void ppSampleSizeMatchesTheChiSquareTest(double c0, double c1, double conf, double power, int n) {
-        SizeSearch search = new SizeSearch(request(SpecLimits.Sides.TWO_SIDED, IndexKind.PP, c0, c1, conf, power), 1);
-        assertEquals(n, search.boundOnlySubgroups());
-    }
-
-    @ParameterizedTest(name = "Ppu {0} -> {1}, conf {2}, power {3}: N = {4}")
-    @CsvSource({
+        "TWO_SIDED,  PP,  1.0,  1.33, 0.95, 0.90, 56,  chi-square test",
+        "TWO_SIDED,  PP,  1.33, 1.67, 0.95, 0.90, 86,  chi-square test",
+        "TWO_SIDED,  PP,  1.33, 1.67, 0.95, 0.95, 107, chi-square test",
+        "TWO_SIDED,  PP,  1.33, 2.0,  0.99, 0.90, 45,  chi-square test",
+        "TWO_SIDED,  PP,  1.67, 2.0,  0.95, 0.80, 101, chi-square test",
         // reference_sizes.py, ppu_size(c0, c1, conf, power)  (scipy.stats.nct.ppf / nct.sf)
-        "1.0, 1.33, 0.95, 0.90, 65",
-        "1.33, 1.67, 0.95, 0.90, 95",
-        "1.33, 1.67, 0.99, 0.90, 146"})
-    void oneSidedSampleSizeMatchesTheNoncentralT(double c0, double c1, double conf, double power, int n) {
-        SizeSearch search = new SizeSearch(request(SpecLimits.Sides.UPPER_ONLY, IndexKind.PPK, c0, c1, conf, power), 1);
-        assertEquals(n, search.boundOnlySubgroups());
+        "UPPER_ONLY, PPK, 1.0,  1.33, 0.95, 0.90, 65,  noncentral t",
+        "UPPER_ONLY, PPK, 1.33, 1.67, 0.95, 0.90, 95,  noncentral t",
+        "UPPER_ONLY, PPK, 1.33, 1.67, 0.99, 0.90, 146, noncentral t"})
+    void sampleSizeMatchesTheReference(SpecLimits.Sides sides, IndexKind kind, double c0, double c1, double conf,
+            double power, int n, String reference) {
+        SizeSearch search = new SizeSearch(request(sides, kind, c0, c1, conf, power), 1);
+        assertEquals(n, search.boundOnlySubgroups(), reference);
     }
 
     @ParameterizedTest(name = "Ppk {0} -> {1} (Cp {2}), N = {3}: power {4}")

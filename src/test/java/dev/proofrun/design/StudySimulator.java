@@ -2,6 +2,7 @@ package dev.proofrun.design;
 
 import dev.proofrun.stats.BoundMethod;
 import dev.proofrun.stats.CapabilityBounds;
+import dev.proofrun.stats.SampleMoments;
 import dev.proofrun.stats.SigmaMethod;
 import dev.proofrun.stats.WithinSigma;
 import java.util.ArrayList;
@@ -44,8 +45,8 @@ final class StudySimulator {
             for (int i = 0; i < readings; i++) {
                 x[i] = mu + gauss.sample();
             }
-            double sd = index == Index.PPK ? overall(x) : within(x, n, k, sigma);
-            double mean = mean(x);
+            double sd = index == Index.PPK ? SampleMoments.standardDeviationOf(x) : within(x, n, k, sigma);
+            double mean = SampleMoments.meanOf(x);
             double bound;
             switch (index) {
                 case CP:
@@ -68,23 +69,6 @@ final class StudySimulator {
             }
         }
         return pass / (double) draws;
-    }
-
-    private static double mean(double[] x) {
-        double s = 0;
-        for (double v : x) {
-            s += v;
-        }
-        return s / x.length;
-    }
-
-    private static double overall(double[] x) {
-        double m = mean(x);
-        double ss = 0;
-        for (double v : x) {
-            ss += (v - m) * (v - m);
-        }
-        return Math.sqrt(ss / (x.length - 1));
     }
 
     private static double within(double[] x, int n, int k, SigmaMethod sigma) {

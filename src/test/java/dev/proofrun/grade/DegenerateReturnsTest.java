@@ -11,6 +11,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.function.IntFunction;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -38,40 +39,36 @@ class DegenerateReturnsTest {
         return sb.toString();
     }
 
-    @Test
-    void constantReadingsAreAFindingNotACrash() {
+    /** Grades the {@code k} subgroups {@code subgroup(0..k-1)}, checks the verdict is not valid and returns the reasons. */
+    private static String notValidReasons(int k, IntFunction<double[]> subgroup) {
         List<double[]> groups = new ArrayList<>();
-        for (int i = 0; i < 25; i++) {
-            groups.add(new double[] {10.001, 10.001, 10.001, 10.001, 10.001});
+        for (int i = 0; i < k; i++) {
+            groups.add(subgroup.apply(i));
         }
         CharacteristicGrade g = grade(groups);
         assertEquals(Verdict.NOT_VALID, g.verdict());
-        String t = text(g);
+        return text(g);
+    }
+
+    @Test
+    void constantReadingsAreAFindingNotACrash() {
+        String t = notValidReasons(25, i -> new double[] {10.001, 10.001, 10.001, 10.001, 10.001});
         assertTrue(t.contains("No spread in the readings: all 125 readings are 10.001."), t);
         assertFalse(t.contains("Infinity"), t);
     }
 
     @Test
     void constantIndividualsAreAFindingToo() {
-        List<double[]> groups = new ArrayList<>();
-        for (int i = 0; i < 30; i++) {
-            groups.add(new double[] {10.0});
-        }
-        CharacteristicGrade g = grade(groups);
-        assertEquals(Verdict.NOT_VALID, g.verdict());
-        assertTrue(text(g).contains("No spread in the readings: all 30 readings are 10."), text(g));
+        String t = notValidReasons(30, i -> new double[] {10.0});
+        assertTrue(t.contains("No spread in the readings: all 30 readings are 10."), t);
     }
 
     @Test
     void equalReadingsWithinEverySubgroupAreAFinding() {
-        List<double[]> groups = new ArrayList<>();
-        for (int i = 0; i < 25; i++) {
+        String t = notValidReasons(25, i -> {
             double v = 10.0 + 0.001 * (i % 3);
-            groups.add(new double[] {v, v, v, v, v});
-        }
-        CharacteristicGrade g = grade(groups);
-        assertEquals(Verdict.NOT_VALID, g.verdict());
-        String t = text(g);
+            return new double[] {v, v, v, v, v};
+        });
         assertTrue(t.contains("No spread within the subgroups: the 5 readings of each subgroup are equal"), t);
         assertFalse(t.contains("Infinity"), t);
     }

@@ -14,7 +14,8 @@ import dev.proofrun.stats.SpecLimits;
 import java.util.List;
 import java.util.Locale;
 import org.junit.jupiter.api.Tag;
-import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
 
 /**
  * The staged designer's looks (what {@code plan new --stages} writes), graded look by look through the grader's
@@ -31,32 +32,41 @@ class DesignedStagesThroughGraderTest {
     private static final double C1 = 1.67;
     private static final double ALPHA = 0.05;
 
-    @Test
-    void twoObrienFlemingLooksOfFiveKeepTheRiskAndThePower() {
-        check(Spending.OBRIEN_FLEMING, 2, 5, 600, 300, 61L);
+    /** The default suite: two designs of subgroups of 5, 600 studies at c₀ and 300 at c₁ each. */
+    @ParameterizedTest(name = "{1} {0} looks of {2}")
+    @CsvSource({
+        "2, OBRIEN_FLEMING, 5, 600, 300, 61",
+        "3, KIM_DEMETS_2,   5, 600, 300, 71",
+    })
+    void stagedDesignsKeepTheRiskAndThePower(int looks, Spending spending, int n, int atTarget, int atExpected,
+            long seed) {
+        check(spending, looks, n, atTarget, atExpected, seed);
     }
 
-    @Test
-    void threeKimDemetsLooksOfFiveKeepTheRiskAndThePower() {
-        check(Spending.KIM_DEMETS_2, 3, 5, 600, 300, 71L);
-    }
-
-    @Test
+    @ParameterizedTest(name = "{1} {0} looks of {2}")
+    @CsvSource({
+        "2, KIM_DEMETS_2, 5, 2000, 800, 72",
+        "3, KIM_DEMETS_2, 5, 2000, 800, 73",
+        "2, KIM_DEMETS_2, 1, 2000, 800, 74",
+        "3, KIM_DEMETS_2, 1, 2000, 800, 75",
+    })
     @Tag("long")
-    void kimDemetsLooksKeepTheRiskAndThePower() {
-        check(Spending.KIM_DEMETS_2, 2, 5, 2000, 800, 72L);
-        check(Spending.KIM_DEMETS_2, 3, 5, 2000, 800, 73L);
-        check(Spending.KIM_DEMETS_2, 2, 1, 2000, 800, 74L);
-        check(Spending.KIM_DEMETS_2, 3, 1, 2000, 800, 75L);
+    void kimDemetsLooksKeepTheRiskAndThePower(int looks, Spending spending, int n, int atTarget, int atExpected,
+            long seed) {
+        check(spending, looks, n, atTarget, atExpected, seed);
     }
 
-    @Test
+    @ParameterizedTest(name = "{1} {0} looks of {2}")
+    @CsvSource({
+        "2, POCOCK,         5, 2000, 800, 62",
+        "3, OBRIEN_FLEMING, 5, 2000, 800, 63",
+        "3, POCOCK,         5, 2000, 800, 64",
+        "2, OBRIEN_FLEMING, 1, 2000, 800, 65",
+    })
     @Tag("long")
-    void everyDesignKeepsTheRiskAndThePower() {
-        check(Spending.POCOCK, 2, 5, 2000, 800, 62L);
-        check(Spending.OBRIEN_FLEMING, 3, 5, 2000, 800, 63L);
-        check(Spending.POCOCK, 3, 5, 2000, 800, 64L);
-        check(Spending.OBRIEN_FLEMING, 2, 1, 2000, 800, 65L);
+    void everyDesignKeepsTheRiskAndThePower(int looks, Spending spending, int n, int atTarget, int atExpected,
+            long seed) {
+        check(spending, looks, n, atTarget, atExpected, seed);
     }
 
     private static void check(Spending spending, int looks, int n, int atTarget, int atExpected, long seed) {
@@ -72,9 +82,9 @@ class DesignedStagesThroughGraderTest {
         double sdOff = (USL - LSL) / (6 * 2.0); // Cp 2.0
         double meanOff = USL - 3 * C0 * sdOff;  // Cpk 1.33
         double se = Math.sqrt(ALPHA * (1 - ALPHA) / atTarget);
-        double centred = share(plan, stages, n, mid, sdCentred, atTarget, seed);
-        double off = share(plan, stages, n, meanOff, sdOff, atTarget, seed + 1000);
-        double power = share(plan, stages, n, mid, (USL - LSL) / (6 * C1), atExpected, seed + 2000);
+        double centred = StagedStudies.run(plan, mid, sdCentred, atTarget, seed).passed();
+        double off = StagedStudies.run(plan, meanOff, sdOff, atTarget, seed + 1000).passed();
+        double power = StagedStudies.run(plan, mid, (USL - LSL) / (6 * C1), atExpected, seed + 2000).passed();
         double floor = design.power() - 0.02 - 2 * Math.sqrt(design.power() * (1 - design.power()) / atExpected);
         System.out.printf(Locale.ROOT, "designed-stages %s %d looks at %s of %d: at c0 centred %.4f, off centre %.4f"
                 + " (limit %.4f, %d studies); at c1 %.4f (promised %.4f, floor %.4f, %d studies)%n", spending.token(),
@@ -83,9 +93,5 @@ class DesignedStagesThroughGraderTest {
         assertTrue(centred <= ALPHA + 2 * se, "false passes centred " + centred);
         assertTrue(off <= ALPHA + 2 * se, "false passes off centre " + off);
         assertTrue(power >= floor, "power " + power + " below the promise " + design.power());
-    }
-
-    private static double share(GradingPlan plan, Stages stages, int n, double mean, double sd, int studies, long seed) {
-        return StagedStudies.run(plan, mean, sd, studies, seed).passed();
     }
 }

@@ -38,10 +38,6 @@ class FloorCoverageTest {
         return out;
     }
 
-    private static double limit(int studies) {
-        return ShapeStudies.limit(ALPHA, studies);
-    }
-
     private String atMostAlpha(List<ShapeStudies.Case> cases, int studies, long seed) {
         return ShapeStudies.assertAtMostAlpha(cases, C0, ALPHA, studies, seed, dir);
     }

@@ -42,14 +42,10 @@ class FoldedNormalCoverageTest {
         return cases;
     }
 
-    static double limit(int studies) {
-        return ALPHA + 2 * Math.sqrt(ALPHA * (1 - ALPHA) / studies);
-    }
-
     private Map<Verdict, Integer> atTheBoundary(ShapeStudies.Case c, int studies, long seed) {
         Map<Verdict, Integer> v = ShapeStudies.run(c, C0, studies, seed, dir);
         double pass = v.getOrDefault(Verdict.DEMONSTRATED, 0) / (double) studies;
-        assertTrue(pass <= limit(studies), c.label() + ": demonstrated " + pass + " " + v);
+        assertTrue(pass <= ShapeStudies.limit(ALPHA, studies), c.label() + ": demonstrated " + pass + " " + v);
         return v;
     }
 

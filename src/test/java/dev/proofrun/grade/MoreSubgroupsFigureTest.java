@@ -5,7 +5,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import dev.proofrun.design.Requirement;
 import dev.proofrun.stats.IndexKind;
 import dev.proofrun.stats.SpecLimits;
-import java.util.ArrayList;
 import java.util.List;
 import org.apache.commons.rng.UniformRandomProvider;
 import org.apache.commons.rng.sampling.distribution.ZigguratSampler;
@@ -35,14 +34,7 @@ class MoreSubgroupsFigureTest {
         int figures = 0;
         int dropped = 0;
         for (int s = 0; s < 150; s++) {
-            List<double[]> subgroups = new ArrayList<>();
-            for (int i = 0; i < k; i++) {
-                double[] x = new double[n];
-                for (int j = 0; j < n; j++) {
-                    x[j] = 10.0 + sd * g.sample();
-                }
-                subgroups.add(x);
-            }
+            List<double[]> subgroups = NormalReadings.subgroups(g, k, n, 10.0, sd);
             Completeness c = new Completeness(k, n, k, 0, 0, (long) n * k, 0, 0, plan.allowedShortfall());
             CharacteristicGrade grade = CharacteristicGrader.grade(gc, plan.design(), plan.interval(),
                     new ReturnedData.Collection(c, subgroups, slots));

@@ -119,11 +119,7 @@ class ProcedurePowerSimulationTest {
                     continue;
                 }
                 slots.add(planned.get(i));
-                double[] x = new double[n];
-                for (int j = 0; j < n; j++) {
-                    x[j] = mean + sd * g.sample();
-                }
-                subgroups.add(x);
+                subgroups.add(NormalReadings.subgroup(g, n, mean, sd));
             }
             int kept = subgroups.size();
             Completeness c = new Completeness(k, n, kept, 0, k - kept, (long) n * kept, 0, 0, plan.allowedShortfall());

@@ -34,6 +34,14 @@ class ReturnedFileTest {
         return Grader.grade(plan, f, name);
     }
 
+    /** Every expected problem is among {@code p}, and {@code p} holds no other. */
+    private static void assertExactly(String[] expected, List<String> p) {
+        for (String e : expected) {
+            assertTrue(p.contains(e), () -> "missing: " + e + "\nin " + p);
+        }
+        assertEquals(expected.length, p.size(), p.toString());
+    }
+
     private static List<String> problems(GradeResult r) {
         return r.problems().stream().map(Problem::toString).collect(Collectors.toList());
     }
@@ -123,10 +131,7 @@ class ReturnedFileTest {
             "bad.csv, row 7, column taken: warning: slot S03 was taken 2027-03-01T06:20+01:00, before slot S02 (taken 2027-03-01T06:55+01:00); kept",
             "bad.csv, row 7: error: slot S03 of D1 has 1 of 2 readings; the subgroup is not graded",
         };
-        for (String e : expected) {
-            assertTrue(p.contains(e), () -> "missing: " + e + "\nin " + p);
-        }
-        assertEquals(expected.length, p.size(), p.toString());
+        assertExactly(expected, p);
     }
 
     @Test
@@ -175,10 +180,7 @@ class ReturnedFileTest {
             "extra.csv, row 3, column taken: warning: 'half past six' is not a time (ISO-8601, yyyy-MM-dd HH:mm, or HH:mm on the planned day)",
             "extra.csv, row 2: error: slot S01 of D1 has 3 readings, the plan asks for 2; the subgroup is not graded",
         };
-        for (String e : expected) {
-            assertTrue(p.contains(e), () -> "missing: " + e + "\nin " + p);
-        }
-        assertEquals(expected.length, p.size(), p.toString());
+        assertExactly(expected, p);
     }
 
     @Test

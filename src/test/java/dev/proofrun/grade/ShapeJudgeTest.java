@@ -31,6 +31,17 @@ class ShapeJudgeTest {
         return out;
     }
 
+    /** {@code count} invented lognormal readings exp(σ·Z) with median 1, Z from a stream seeded with {@code seed}. */
+    private static double[] lognormal(long seed, int count, double sigma) {
+        UniformRandomProvider rng = RandomSource.XO_RO_SHI_RO_128_PP.create(seed);
+        ZigguratSampler.NormalizedGaussian g = ZigguratSampler.NormalizedGaussian.of(rng);
+        double[] x = new double[count];
+        for (int i = 0; i < x.length; i++) {
+            x[i] = Math.exp(sigma * g.sample());
+        }
+        return x;
+    }
+
     private static List<String> slots(int k) {
         List<String> s = new ArrayList<>();
         for (int i = 1; i <= k; i++) {
@@ -83,12 +94,7 @@ class ShapeJudgeTest {
     @Test
     void aLargeStudyWithAMaterialDepartureIsStillRejected() {
         // lognormal readings (sigma of ln x = 0.5) declared normal, N = 5,000: the tails are far from the normal's
-        UniformRandomProvider rng = RandomSource.XO_RO_SHI_RO_128_PP.create(21L);
-        ZigguratSampler.NormalizedGaussian g = ZigguratSampler.NormalizedGaussian.of(rng);
-        double[] x = new double[5_000];
-        for (int i = 0; i < x.length; i++) {
-            x[i] = Math.exp(0.5 * g.sample());
-        }
+        double[] x = lognormal(21L, 5_000, 0.5);
         List<Reason> reasons = new ArrayList<>();
         Shape sh = ShapeJudge.judge(subgroups(x, 5), slots(1000), 0, ShapeFamily.NORMAL, SpecLimits.upperOnly(6), reasons);
         assertFalse(sh.modelFits());
@@ -132,12 +138,7 @@ class ShapeJudgeTest {
 
     @Test
     void aLowerLimitAtZeroIsDroppedUnderASkewedShape() {
-        UniformRandomProvider rng = RandomSource.XO_RO_SHI_RO_128_PP.create(5L);
-        ZigguratSampler.NormalizedGaussian g = ZigguratSampler.NormalizedGaussian.of(rng);
-        double[] x = new double[125];
-        for (int i = 0; i < x.length; i++) {
-            x[i] = Math.exp(0.25 * g.sample());
-        }
+        double[] x = lognormal(5L, 125, 0.25);
         PlannedCharacteristic gc = new PlannedCharacteristic("R1", "runout", "mm", SpecLimits.twoSided(0, 4), null, 0,
                 Requirement.of(IndexKind.PPK, 1.33, 0.95), ShapeFamily.LOGNORMAL);
         List<Reason> reasons = new ArrayList<>();

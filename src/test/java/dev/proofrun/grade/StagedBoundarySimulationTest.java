@@ -13,6 +13,8 @@ import java.util.List;
 import java.util.Locale;
 import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
 
 /**
  * At the requirement (true Cpk = c₀ = 1.33, 95 %), staged studies graded look by look through the grader's own
@@ -37,14 +39,17 @@ class StagedBoundarySimulationTest {
         check(Spending.OBRIEN_FLEMING, 2, 5, 30, 500, 41L);
     }
 
-    @Test
+    @ParameterizedTest(name = "{0} {1} looks of {2}")
+    @CsvSource({
+        "POCOCK,         2, 5, 30,  2000, 42",
+        "OBRIEN_FLEMING, 3, 5, 30,  2000, 43",
+        "POCOCK,         3, 5, 30,  2000, 44",
+        "OBRIEN_FLEMING, 2, 1, 100, 2000, 45",
+        "POCOCK,         3, 1, 100, 2000, 46",
+    })
     @Tag("long")
-    void everySplitKeepsAlphaAtTheRequirement() {
-        check(Spending.POCOCK, 2, 5, 30, 2000, 42L);
-        check(Spending.OBRIEN_FLEMING, 3, 5, 30, 2000, 43L);
-        check(Spending.POCOCK, 3, 5, 30, 2000, 44L);
-        check(Spending.OBRIEN_FLEMING, 2, 1, 100, 2000, 45L);
-        check(Spending.POCOCK, 3, 1, 100, 2000, 46L);
+    void everySplitKeepsAlphaAtTheRequirement(Spending spending, int looks, int n, int k, int studies, long seed) {
+        check(spending, looks, n, k, studies, seed);
     }
 
     /** Equally spaced looks with the Bonferroni split of the spending; futility below 1.0 at every look but the last. */

@@ -95,14 +95,7 @@ class StagedGradingSimulationTest {
         ZigguratSampler.NormalizedGaussian g = ZigguratSampler.NormalizedGaussian.of(rng);
         int passed = 0;
         for (int s = 0; s < studies; s++) {
-            List<double[]> subgroups = new ArrayList<>(k);
-            for (int i = 0; i < k; i++) {
-                double[] x = new double[n];
-                for (int j = 0; j < n; j++) {
-                    x[j] = mean + sd * g.sample();
-                }
-                subgroups.add(x);
-            }
+            List<double[]> subgroups = NormalReadings.subgroups(g, k, n, mean, sd);
             for (int j = 0; j < looks.size(); j++) {
                 Verdict v = gradeAt(plans.get(j), subgroups.subList(0, looks.get(j).subgroups()), looks.get(j));
                 if (v == Verdict.DEMONSTRATED) {

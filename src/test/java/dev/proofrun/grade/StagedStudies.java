@@ -1,6 +1,5 @@
 package dev.proofrun.grade;
 
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import org.apache.commons.rng.UniformRandomProvider;
@@ -43,14 +42,7 @@ final class StagedStudies {
         int[] passedAt = new int[stages.count()];
         int[] stoppedAt = new int[stages.count()];
         for (int s = 0; s < studies; s++) {
-            List<double[]> all = new ArrayList<>(k);
-            for (int i = 0; i < k; i++) {
-                double[] x = new double[n];
-                for (int j = 0; j < n; j++) {
-                    x[j] = mean + sd * g.sample();
-                }
-                all.add(x);
-            }
+            List<double[]> all = NormalReadings.subgroups(g, k, n, mean, sd);
             for (int j = 0; j < stages.count(); j++) {
                 int m = stages.looks().get(j).subgroups();
                 GradedLook look = Grader.look(plan, m);

@@ -37,10 +37,6 @@ class ThresholdShapeCoverageTest {
                 ShapeStudies.Case.threshold(ShapeFamily.WEIBULL3, 1.5, THETA, C0, 5, 25));
     }
 
-    private static double limit(int studies) {
-        return ShapeStudies.limit(ALPHA, studies);
-    }
-
     private String atMostAlpha(List<ShapeStudies.Case> cases, int studies, long seed) {
         return ShapeStudies.assertAtMostAlpha(cases, C0, ALPHA, studies, seed, dir);
     }
@@ -103,7 +99,7 @@ class ThresholdShapeCoverageTest {
         // it shows up here) and that every such grade carries the caution.
         ShapeStudies.Case low = new ShapeStudies.Case(ShapeFamily.WEIBULL3, 1.5, C0, 5, 25, false, THETA, 9.945);
         Map<Verdict, Integer> v = ShapeStudies.run(low, C0, 200, 5_000L, dir);
-        assertTrue(v.getOrDefault(Verdict.DEMONSTRATED, 0) / 200.0 > limit(200), v.toString());
+        assertTrue(v.getOrDefault(Verdict.DEMONSTRATED, 0) / 200.0 > ShapeStudies.limit(ALPHA, 200), v.toString());
         GradingPlan plan = low.plan(C0);
         Path f = dir.resolve("one.csv");
         ShapeStudies.write(plan, low, 5_000L, f);

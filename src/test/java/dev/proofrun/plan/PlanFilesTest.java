@@ -42,6 +42,14 @@ class PlanFilesTest {
         return assertThrows(UserException.class, () -> PlanFiles.read(p));
     }
 
+    /** The demo's file with {@code from} replaced by {@code to}, refused as {@code key} with a message that holds {@code words}. */
+    private UserException refused(String from, String to, PlanMessage key, String words) throws Exception {
+        UserException e = refused(demoText().replace(from, to));
+        assertEquals(key, e.key());
+        assertTrue(e.getMessage().contains(words), e.getMessage());
+        return e;
+    }
+
     @Test
     void roundTripFileModelFileIsByteIdentical() throws Exception {
         for (StudyPlan plan : new StudyPlan[] {DemoPlan.draft(), DemoPlan.create()}) {
@@ -162,18 +170,11 @@ class PlanFilesTest {
     @Test
     void handBrokenFilesAreRefusedWithThePath() throws Exception {
         String text = demoText();
-        UserException type = refused(text.replace("\"usl\": 0.8", "\"usl\": \"zero point eight\""));
-        assertEquals(PlanMessage.WRONG_TYPE, type.key());
-        assertTrue(type.getMessage().contains("$.characteristics[1].usl"), type.getMessage());
-
-        UserException unknown = refused(text.replace("\"unit\": \"kN\"", "\"unit\": \"kN\", \"colour\": \"red\""));
-        assertEquals(PlanMessage.UNKNOWN_FIELD, unknown.key());
-        assertTrue(unknown.getMessage().contains("$.characteristics[2].colour"), unknown.getMessage());
-
-        UserException reversed = refused(text.replace("\"lsl\": 21.987", "\"lsl\": 22.02"));
-        assertEquals(PlanMessage.BAD_VALUE, reversed.key());
-        assertTrue(reversed.getMessage().contains("$.characteristics[0]") && reversed.getMessage().contains("LSL must be below USL"),
-                reversed.getMessage());
+        refused("\"usl\": 0.8", "\"usl\": \"zero point eight\"", PlanMessage.WRONG_TYPE, "$.characteristics[1].usl");
+        refused("\"unit\": \"kN\"", "\"unit\": \"kN\", \"colour\": \"red\"", PlanMessage.UNKNOWN_FIELD,
+                "$.characteristics[2].colour");
+        UserException reversed = refused("\"lsl\": 21.987", "\"lsl\": 22.02", PlanMessage.BAD_VALUE, "$.characteristics[0]");
+        assertTrue(reversed.getMessage().contains("LSL must be below USL"), reversed.getMessage());
 
         UserException zone = refused(text.replace("Europe/Berlin", "Europe/Atlantis"));
         assertTrue(zone.getMessage().contains("$.calendar.zone"), zone.getMessage());
@@ -181,13 +182,8 @@ class PlanFilesTest {
         UserException time = refused(text.replace("\"start\": \"2027-03-24T07:53+01:00\"", "\"start\": \"yesterday\""));
         assertTrue(time.getMessage().contains("$.schedule.slots[0].start"), time.getMessage());
 
-        UserException missing = refused(text.replace("\"subgroups\": 25,", ""));
-        assertEquals(PlanMessage.MISSING, missing.key());
-        assertTrue(missing.getMessage().contains("$.design.subgroups"), missing.getMessage());
-
-        UserException syntax = refused(text.replace("\"days\": 3", "\"days\": 3,,"));
-        assertEquals(PlanMessage.NOT_JSON, syntax.key());
-        assertTrue(syntax.getMessage().contains("$.span"), syntax.getMessage());
+        refused("\"subgroups\": 25,", "", PlanMessage.MISSING, "$.design.subgroups");
+        refused("\"days\": 3", "\"days\": 3,,", PlanMessage.NOT_JSON, "$.span");
 
         UserException typing = refused(text.replace("\"part\": {", "\"part\": {\"@class\": \"java.lang.ProcessBuilder\","));
         assertEquals(PlanMessage.UNKNOWN_FIELD, typing.key(), "no type information is taken from the file");
@@ -196,9 +192,8 @@ class PlanFilesTest {
     @Test
     void unknownVersionAndOtherFormatsAreRefused() throws Exception {
         String text = demoText();
-        UserException v2 = refused(text.replace("\"formatVersion\": 1", "\"formatVersion\": 2"));
-        assertEquals(PlanMessage.UNKNOWN_VERSION, v2.key());
-        assertTrue(v2.getMessage().contains("$.formatVersion") && v2.getMessage().contains(" 2 "), v2.getMessage());
+        UserException v2 = refused("\"formatVersion\": 1", "\"formatVersion\": 2", PlanMessage.UNKNOWN_VERSION, "$.formatVersion");
+        assertTrue(v2.getMessage().contains(" 2 "), v2.getMessage());
         assertEquals(PlanMessage.NOT_A_PLAN, refused(text.replace("proofrun-plan", "shopping-list")).key());
         assertEquals(PlanMessage.WRONG_TYPE, refused("[1, 2, 3]").key());
     }
@@ -231,9 +226,8 @@ class PlanFilesTest {
         UserException id = refused(text.replace("\"id\": \"PR-2027-0311\"", "\"id\": \"DUP\", \"id\": \"PR-2027-0311\""));
         assertEquals(PlanMessage.DUPLICATE_KEY, id.key());
         assertTrue(id.getMessage().startsWith(dir.resolve("broken.json") + ": at $.id: the key \"id\" appears twice"), id.getMessage());
-        UserException lsl = refused(text.replace("\"lsl\": 21.987", "\"lsl\": 21.987, \"lsl\": 21.0"));
-        assertEquals(PlanMessage.DUPLICATE_KEY, lsl.key());
-        assertTrue(lsl.getMessage().contains("at $.characteristics[0].lsl: the key \"lsl\""), lsl.getMessage());
+        refused("\"lsl\": 21.987", "\"lsl\": 21.987, \"lsl\": 21.0", PlanMessage.DUPLICATE_KEY,
+                "at $.characteristics[0].lsl: the key \"lsl\"");
     }
 
     @Test

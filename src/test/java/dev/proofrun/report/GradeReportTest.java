@@ -17,7 +17,6 @@ import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.Map;
 import org.apache.pdfbox.Loader;
 import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.rendering.PDFRenderer;
@@ -39,11 +38,8 @@ class GradeReportTest {
     void theReportStatesVerdictsAndReasonsAndDrawsItsCharts() throws IOException {
         StudyPlan plan = DemoPlan.create();
         GradingPlan gp = GradingPlans.of(plan);
-        Path returned = dir.resolve("returned.csv");
-        SimulatedReturn.writeCsv(gp, Map.of(
-                "D1", SimulatedReturn.Process.stable(22.0, 0.002),
-                "R4", SimulatedReturn.Process.skewed(0.35, 0.2),
-                "F7", SimulatedReturn.Process.stepping(6.0, 0.2, 0.5, 1.0)), 7L, returned);
+        Path returned = DemoReturns.write(gp, dir.resolve("returned.csv"), 7L, SimulatedReturn.Process.skewed(0.35, 0.2),
+                SimulatedReturn.Process.stepping(6.0, 0.2, 0.5, 1.0));
         GradeResult result = Grader.grade(gp, returned, "returned.csv");
 
         ByteArrayOutputStream out = new ByteArrayOutputStream();
@@ -82,11 +78,8 @@ class GradeReportTest {
     void aReturnWithTooLittleDataStillGivesAReport() throws IOException {
         StudyPlan plan = DemoPlan.create();
         GradingPlan gp = GradingPlans.of(plan);
-        Path full = dir.resolve("full.csv");
-        SimulatedReturn.writeCsv(gp, Map.of(
-                "D1", SimulatedReturn.Process.stable(22.0, 0.002),
-                "R4", SimulatedReturn.Process.stable(0.4, 0.05),
-                "F7", SimulatedReturn.Process.stable(6.0, 0.2)), 11L, full);
+        Path full = DemoReturns.write(gp, dir.resolve("full.csv"), 11L, SimulatedReturn.Process.stable(0.4, 0.05),
+                SimulatedReturn.Process.stable(6.0, 0.2));
         // only the header and slot S01 come back: one subgroup per characteristic, no stability or shape evidence
         Path shortFile = dir.resolve("short.csv");
         Files.write(shortFile, Files.readAllLines(full).subList(0, 4));

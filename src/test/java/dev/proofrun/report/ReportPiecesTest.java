@@ -20,7 +20,6 @@ import java.io.IOException;
 import java.nio.file.Path;
 import java.time.OffsetDateTime;
 import java.time.ZoneOffset;
-import java.util.Map;
 import org.apache.pdfbox.Loader;
 import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.text.PDFTextStripper;
@@ -37,11 +36,8 @@ class ReportPiecesTest {
     void everyPageCarriesTheStampAndNoFolderOfTheGradingMachine() throws IOException {
         StudyPlan plan = DemoPlan.create();
         GradingPlan gp = GradingPlans.of(plan);
-        Path returned = dir.resolve("returned.csv");
-        SimulatedReturn.writeCsv(gp, Map.of(
-                "D1", SimulatedReturn.Process.stable(22.0, 0.002),
-                "R4", SimulatedReturn.Process.skewed(0.35, 0.2),
-                "F7", SimulatedReturn.Process.stable(6.0, 0.2)), 11L, returned);
+        Path returned = DemoReturns.write(gp, dir.resolve("returned.csv"), 11L, SimulatedReturn.Process.skewed(0.35, 0.2),
+                SimulatedReturn.Process.stable(6.0, 0.2));
         // the grade keeps the name as the user typed it: here the full path
         GradeResult result = Grader.grade(gp, returned, returned.toAbsolutePath().toString());
         ReportStamp stamp = new ReportStamp(OffsetDateTime.of(2027, 4, 2, 14, 7, 0, 0, ZoneOffset.ofHours(2)), "9.8.7");

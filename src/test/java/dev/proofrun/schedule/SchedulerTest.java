@@ -16,7 +16,11 @@ import java.util.EnumSet;
 import java.util.List;
 import java.util.TreeSet;
 import java.util.stream.Collectors;
+import java.util.stream.Stream;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.Arguments;
+import org.junit.jupiter.params.provider.MethodSource;
 
 class SchedulerTest {
 
@@ -29,6 +33,16 @@ class SchedulerTest {
                         Shift.of("night", "22:00", "06:00")),
                 List.of(BreakWindow.of("09:30", "09:45"), BreakWindow.of("18:00", "18:30"), BreakWindow.of("04:00", "04:20")),
                 new TreeSet<>(List.of(LocalDate.of(2027, 3, 3))), ProductionRate.perHour(60));
+    }
+
+    /** {@code k} evenly spaced slots of one part each over the one shift that starts at {@code start}. */
+    private static Schedule oneShift(ProductionCalendar cal, LocalDateTime start, int k) {
+        return Scheduler.schedule(cal, StudySpan.shifts(start, 1), k, 1, Spacing.EVEN, 0);
+    }
+
+    /** The slots' start times as written (offset included). */
+    private static List<String> starts(Schedule s) {
+        return s.slots().stream().map(x -> x.start().toString()).collect(Collectors.toList());
     }
 
     static ProductionCalendar nightsOnly(String zone, List<BreakWindow> breaks) {
@@ -120,36 +134,37 @@ class SchedulerTest {
     // 2027-03-28 and 2027-10-31. US Energy Policy Act of 2005 (second Sunday of March, first Sunday of
     // November, 02:00 local): 2027-03-14 and 2027-11-07.
 
-    @Test
-    void springForwardNightShiftInBerlinRunsSevenHours() {
-        ProductionCalendar cal = nightsOnly("Europe/Berlin", List.of());
-        Schedule s = Scheduler.schedule(cal, StudySpan.shifts(LocalDateTime.of(2027, 3, 27, 22, 0), 1), 7, 1, Spacing.EVEN, 0);
-        assertEquals(420.0, s.workingMinutes(), 1e-9);
-        // one part per hour at 60/h: t_i = 60 i + 29.5 minutes of running time
-        List<String> starts = s.slots().stream().map(x -> x.start().toString()).collect(Collectors.toList());
-        assertEquals(List.of("2027-03-27T22:29+01:00", "2027-03-27T23:29+01:00", "2027-03-28T00:29+01:00",
-                "2027-03-28T01:29+01:00", "2027-03-28T03:29+02:00", "2027-03-28T04:29+02:00",
-                "2027-03-28T05:29+02:00"), starts);
-        assertEquals(OffsetDateTime.parse("2027-03-28T06:00+02:00"), s.end());
+    /**
+     * A Berlin night shift 22:00–06:00 across each clock change, one part an hour at 60/h (t_i = 60 i + 29.5 minutes
+     * of running time): spring forward runs seven hours, fall back nine, through the repeated hour.
+     */
+    static Stream<Arguments> berlinClockChanges() {
+        return Stream.of(
+                Arguments.of(LocalDateTime.of(2027, 3, 27, 22, 0), 7, 420.0, List.of("2027-03-27T22:29+01:00",
+                        "2027-03-27T23:29+01:00", "2027-03-28T00:29+01:00", "2027-03-28T01:29+01:00", "2027-03-28T03:29+02:00",
+                        "2027-03-28T04:29+02:00", "2027-03-28T05:29+02:00"), "2027-03-28T06:00+02:00"),
+                Arguments.of(LocalDateTime.of(2027, 10, 30, 22, 0), 9, 540.0, List.of("2027-10-30T22:29+02:00",
+                        "2027-10-30T23:29+02:00", "2027-10-31T00:29+02:00", "2027-10-31T01:29+02:00", "2027-10-31T02:29+02:00",
+                        "2027-10-31T02:29+01:00", "2027-10-31T03:29+01:00", "2027-10-31T04:29+01:00", "2027-10-31T05:29+01:00"),
+                        "2027-10-31T06:00+01:00"));
     }
 
-    @Test
-    void fallBackNightShiftInBerlinRunsNineHoursThroughTheRepeatedHour() {
-        ProductionCalendar cal = nightsOnly("Europe/Berlin", List.of());
-        Schedule s = Scheduler.schedule(cal, StudySpan.shifts(LocalDateTime.of(2027, 10, 30, 22, 0), 1), 9, 1, Spacing.EVEN, 0);
-        assertEquals(540.0, s.workingMinutes(), 1e-9);
-        List<String> starts = s.slots().stream().map(x -> x.start().toString()).collect(Collectors.toList());
-        assertEquals(List.of("2027-10-30T22:29+02:00", "2027-10-30T23:29+02:00", "2027-10-31T00:29+02:00",
-                "2027-10-31T01:29+02:00", "2027-10-31T02:29+02:00", "2027-10-31T02:29+01:00",
-                "2027-10-31T03:29+01:00", "2027-10-31T04:29+01:00", "2027-10-31T05:29+01:00"), starts);
+    @ParameterizedTest(name = "night from {0}: {2} running minutes")
+    @MethodSource("berlinClockChanges")
+    void aNightShiftInBerlinRunsItsRealHoursAcrossTheClockChange(LocalDateTime start, int k, double minutes,
+            List<String> starts, String end) {
+        Schedule s = oneShift(nightsOnly("Europe/Berlin", List.of()), start, k);
+        assertEquals(minutes, s.workingMinutes(), 1e-9);
+        assertEquals(starts, starts(s));
+        assertEquals(OffsetDateTime.parse(end), s.end());
     }
 
     @Test
     void chicagoSpringAndAutumnNights() {
         ProductionCalendar cal = nightsOnly("America/Chicago", List.of(BreakWindow.of("04:00", "04:30")));
-        Schedule spring = Scheduler.schedule(cal, StudySpan.shifts(LocalDateTime.of(2027, 3, 13, 22, 0), 1), 6, 1, Spacing.EVEN, 0);
+        Schedule spring = oneShift(cal, LocalDateTime.of(2027, 3, 13, 22, 0), 6);
         assertEquals(390.0, spring.workingMinutes(), 1e-9); // 7 h - 30 min break
-        Schedule autumn = Scheduler.schedule(cal, StudySpan.shifts(LocalDateTime.of(2027, 11, 6, 22, 0), 1), 6, 1, Spacing.EVEN, 0);
+        Schedule autumn = oneShift(cal, LocalDateTime.of(2027, 11, 6, 22, 0), 6);
         assertEquals(510.0, autumn.workingMinutes(), 1e-9); // 9 h - 30 min break
         WorkingClock clock = new WorkingClock(cal);
         for (Schedule s : List.of(spring, autumn)) {
@@ -171,12 +186,12 @@ class SchedulerTest {
     @Test
     void breaksInsideTheClockChangeFollowTheDocumentedRule() {
         // spring: a break 02:15-02:45 does not exist on 28 March in Berlin, so it takes no time that night
-        Schedule spring = Scheduler.schedule(nightsOnly("Europe/Berlin", List.of(BreakWindow.of("02:15", "02:45"))),
-                StudySpan.shifts(LocalDateTime.of(2027, 3, 27, 22, 0), 1), 7, 1, Spacing.EVEN, 0);
+        Schedule spring = oneShift(nightsOnly("Europe/Berlin", List.of(BreakWindow.of("02:15", "02:45"))),
+                LocalDateTime.of(2027, 3, 27, 22, 0), 7);
         assertEquals(420.0, spring.workingMinutes(), 1e-9);
         // autumn: 02:15-02:45 happens twice; the break is its first occurrence only
-        Schedule autumn = Scheduler.schedule(nightsOnly("Europe/Berlin", List.of(BreakWindow.of("02:15", "02:45"))),
-                StudySpan.shifts(LocalDateTime.of(2027, 10, 30, 22, 0), 1), 9, 1, Spacing.EVEN, 0);
+        Schedule autumn = oneShift(nightsOnly("Europe/Berlin", List.of(BreakWindow.of("02:15", "02:45"))),
+                LocalDateTime.of(2027, 10, 30, 22, 0), 9);
         assertEquals(510.0, autumn.workingMinutes(), 1e-9);
     }
 

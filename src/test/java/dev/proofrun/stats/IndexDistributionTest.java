@@ -84,16 +84,8 @@ class IndexDistributionTest {
         ZigguratSampler.NormalizedGaussian normal = ZigguratSampler.NormalizedGaussian.of(rng);
         int[] hits = new int[thresholds.length];
         for (int s = 0; s < studies; s++) {
-            double sum = 0;
-            double sumSq = 0;
-            for (int i = 0; i < n; i++) {
-                double x = mu + normal.sample();
-                sum += x;
-                sumSq += x * x;
-            }
-            double mean = sum / n;
-            double sd = Math.sqrt((sumSq - n * mean * mean) / (n - 1));
-            double cpkHat = (half - Math.abs(mean)) / (3 * sd);
+            NormalStudy study = NormalStudy.draw(normal, n, mu);
+            double cpkHat = (half - Math.abs(study.mean())) / (3 * study.sd());
             for (int j = 0; j < thresholds.length; j++) {
                 if (cpkHat >= thresholds[j]) {
                     hits[j]++;

@@ -49,9 +49,7 @@ class WithinSigmaBoundsCoverageTest {
      * covers 93.5 % or less still fails it. Measured with 8,000 (n = 2, k = 25, off centre): Cp 0.9596, Cpk 0.9606.
      */
     private static final int DEFAULT_STUDIES = 8_000;
-    private static final double CONFIDENCE = 0.95;
-    private static final double LOWEST = 0.94;
-    private static final double HIGHEST = 0.975;
+    private static final double CONFIDENCE = CoverageBand.CONFIDENCE;
 
     /** The default run: the smallest subgroups (where the effective-ν model is weakest), off centre. */
     @ParameterizedTest(name = "n={0} k={1}")
@@ -85,7 +83,7 @@ class WithinSigmaBoundsCoverageTest {
     }
 
     private static void inBand(String what, double rate, List<String> failures) {
-        if (!(rate >= LOWEST && rate <= HIGHEST)) {
+        if (!CoverageBand.holds(rate)) {
             failures.add(what);
         }
     }

@@ -16,6 +16,8 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
 
 /**
  * The Threshold column of the Part table: open for lognormal3/weibull3 and required there, greyed for the other
@@ -100,20 +102,26 @@ class PartThresholdTest {
         assertEquals("", vm.missingProperty().get());
     }
 
-    @Test
-    void choosingAShapeThatTakesNoneEmptiesTheThresholdAndOneUndoBringsBothBack() {
+    /** The threshold, and the floor that stands for it, in the same undoable edit as the shape. */
+    @ParameterizedTest(name = "{0}: {1} {2}, then {3}")
+    @CsvSource({
+        "THRESHOLD, lognormal3, 0.002, lognormal, weibull3",
+        "FLOOR,     weibull3,   0,     normal,    lognormal3",
+    })
+    void choosingAShapeThatTakesNoneEmptiesTheCellAndOneUndoBringsBothBack(CharacteristicField field, String shape,
+            String value, String shapeTakingNone, String otherThresholdShape) {
         CharacteristicDraft row = runout();
-        vm.setCell(0, SHAPE, "lognormal3");
-        vm.setCell(0, THRESHOLD, "0.002");
-        vm.setCell(0, SHAPE, "lognormal");
-        assertEquals("", row.text(THRESHOLD));
-        assertFalse(vm.cellOpen(row, THRESHOLD));
+        vm.setCell(0, SHAPE, shape);
+        vm.setCell(0, field, value);
+        vm.setCell(0, SHAPE, shapeTakingNone);
+        assertEquals("", row.text(field));
+        assertFalse(vm.cellOpen(row, field));
         assertTrue(vm.undo());
-        assertEquals("lognormal3", row.text(SHAPE));
-        assertEquals("0.002", row.text(THRESHOLD));
+        assertEquals(shape, row.text(SHAPE));
+        assertEquals(value, row.text(field), "one undo brings shape and " + field + " back");
         // from one threshold shape to the other the number stays
-        vm.setCell(0, SHAPE, "weibull3");
-        assertEquals("0.002", row.text(THRESHOLD));
+        vm.setCell(0, SHAPE, otherThresholdShape);
+        assertEquals(value, row.text(field));
     }
 
     @Test
@@ -185,18 +193,5 @@ class PartThresholdTest {
         assertEquals("Floor 'stop' is not a number", vm.problem(row, FLOOR).orElseThrow());
         row.cell(FLOOR).set("0.080");
         assertEquals("the floor 0.08 must lie below the upper limit 0.08", vm.problem(row, FLOOR).orElseThrow());
-    }
-
-    @Test
-    void aShapeThatTakesNoThresholdEmptiesTheFloorInTheSameUndoableEdit() {
-        CharacteristicDraft row = runout();
-        vm.setCell(0, SHAPE, "weibull3");
-        vm.setCell(0, FLOOR, "0");
-        vm.setCell(0, SHAPE, "normal");
-        assertEquals("", row.text(FLOOR));
-        assertFalse(vm.cellOpen(row, FLOOR));
-        vm.undo();
-        assertEquals("weibull3", row.text(SHAPE));
-        assertEquals("0", row.text(FLOOR), "one undo brings shape and floor back");
     }
 }

@@ -3,10 +3,8 @@ package dev.proofrun.app.session;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import dev.proofrun.plan.DemoPlan;
-import dev.proofrun.plan.PlanFiles;
 import dev.proofrun.plan.StudyPlan;
 import dev.proofrun.stats.ShapeFamily;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -102,12 +100,9 @@ class PlanDraftsShapeTest {
         StudyPlan demo = DemoPlan.create();
         Session session = opened(demo);
         CharacteristicDraft d1 = session.draft().characteristics().get(0);
-        assertEquals("", d1.text(CharacteristicField.THRESHOLD), "a normal row holds none");
-        // an invented stop 0.5 below the lower limit (the plan model asks only that it lie below the upper one)
-        double theta = demo.characteristics().get(0).limits().lower().getAsDouble() - 0.5;
+        // the plan model asks only that the threshold lie below the upper limit
+        double theta = typeStop(d1, demo, "lognormal3", CharacteristicField.THRESHOLD);
         String typed = java.math.BigDecimal.valueOf(theta).toPlainString();
-        d1.cell(CharacteristicField.SHAPE).set("lognormal3");
-        d1.cell(CharacteristicField.THRESHOLD).set(typed);
         StudyPlan composed = composed(session, demo);
         String id = d1.id();
         assertEquals(ShapeFamily.LOGNORMAL3, composed.characteristic(id).orElseThrow().shape());
@@ -122,10 +117,7 @@ class PlanDraftsShapeTest {
         assertEquals(typed, back.text(CharacteristicField.THRESHOLD));
 
         // the plan written with it (as the hand-out writes it) opens with the same threshold in the cell
-        Path issued = Files.createDirectories(home.resolve("issued")).resolve("threshold.json");
-        PlanFiles.write(issued, composed);
-        Session reader = new Session(new AppHome(home.resolve("other"), home.resolve("issued")));
-        reader.open(issued);
+        Session reader = OpenedPlans.openIssued(home, composed, "threshold.json");
         CharacteristicDraft reopened = reader.draft().characteristics().get(0);
         assertEquals(theta, Double.parseDouble(reopened.text(CharacteristicField.THRESHOLD)), 0.0, "exact");
         assertEquals(composed.characteristics(), composed(reader, demo).characteristics());
@@ -143,14 +135,21 @@ class PlanDraftsShapeTest {
         assertEquals(d1.id() + ": the threshold is not a number: 'stop'", e.getMessage());
     }
 
+    /**
+     * Types {@code shape} and an invented stop 0.5 below the demo's first lower limit into {@code field} of the
+     * normal row {@code d1} (which holds none before) and returns the stop.
+     */
+    private static double typeStop(CharacteristicDraft d1, StudyPlan demo, String shape, CharacteristicField field) {
+        assertEquals("", d1.text(field), "a normal row holds none");
+        double stop = demo.characteristics().get(0).limits().lower().getAsDouble() - 0.5;
+        d1.cell(CharacteristicField.SHAPE).set(shape);
+        d1.cell(field).set(java.math.BigDecimal.valueOf(stop).toPlainString());
+        return stop;
+    }
+
     /** A session with {@code plan} written to the plans folder and opened. */
     private Session opened(StudyPlan plan) throws Exception {
-        Path plans = Files.createDirectories(home.resolve("plans"));
-        Path file = plans.resolve(DemoPlan.FILE_NAME);
-        PlanFiles.write(file, plan);
-        Session session = new Session(new AppHome(home, plans));
-        session.open(file);
-        return session;
+        return OpenedPlans.open(home, plan);
     }
 
     /** The session's draft composed into a plan, with the demo's requirement, expectations, calendar and design. */
@@ -165,22 +164,15 @@ class PlanDraftsShapeTest {
         StudyPlan demo = DemoPlan.create();
         Session session = opened(demo);
         CharacteristicDraft d1 = session.draft().characteristics().get(0);
-        assertEquals("", d1.text(CharacteristicField.FLOOR), "a normal row holds none");
-        // an invented stop 0.5 below the lower limit, known only as a floor
-        double floor = demo.characteristics().get(0).limits().lower().getAsDouble() - 0.5;
-        String typed = java.math.BigDecimal.valueOf(floor).toPlainString();
-        d1.cell(CharacteristicField.SHAPE).set("weibull3");
-        d1.cell(CharacteristicField.FLOOR).set(typed);
+        // the stop known only as a floor
+        double floor = typeStop(d1, demo, "weibull3", CharacteristicField.FLOOR);
         StudyPlan composed = composed(session, demo);
         String id = d1.id();
         assertEquals(java.util.OptionalDouble.of(floor), composed.characteristic(id).orElseThrow().floor());
         assertEquals(java.util.OptionalDouble.empty(), composed.characteristic(id).orElseThrow().threshold());
 
         // the plan written with it opens with the floor in its cell, not lost when the draft is rebuilt
-        Path issued = Files.createDirectories(home.resolve("issued")).resolve("floor.json");
-        PlanFiles.write(issued, composed);
-        Session reader = new Session(new AppHome(home.resolve("other"), home.resolve("issued")));
-        reader.open(issued);
+        Session reader = OpenedPlans.openIssued(home, composed, "floor.json");
         CharacteristicDraft reopened = reader.draft().characteristics().get(0);
         assertEquals(floor, Double.parseDouble(reopened.text(CharacteristicField.FLOOR)), 0.0, "exact");
         assertEquals("", reopened.text(CharacteristicField.THRESHOLD));

@@ -9,7 +9,6 @@ import dev.proofrun.plan.DemoPlan;
 import dev.proofrun.plan.PlanFiles;
 import dev.proofrun.plan.StudyPlan;
 import dev.proofrun.stats.IndexKind;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Optional;
 import java.util.OptionalDouble;
@@ -27,13 +26,7 @@ class RowRequirementTest {
     Path home;
 
     private Session openDemo() throws Exception {
-        StudyPlan demo = DemoPlan.create();
-        Path plans = Files.createDirectories(home.resolve("plans"));
-        Path file = plans.resolve(DemoPlan.FILE_NAME);
-        PlanFiles.write(file, demo);
-        Session session = new Session(new AppHome(home, plans));
-        session.open(file);
-        return session;
+        return OpenedPlans.open(home, DemoPlan.create());
     }
 
     private static CharacteristicDraft row(Session s, String id) {
