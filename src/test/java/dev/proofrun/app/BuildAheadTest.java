@@ -19,6 +19,7 @@ import org.testfx.util.WaitForAsyncUtils;
  * styled (its controls have their skins) and laid out, and showing the step later shows that very page.
  * The page after it is not built until that step has been shown.
  */
+@UsesToolkit
 class BuildAheadTest extends WizardRobotTest {
 
     @Start

@@ -39,6 +39,7 @@ import org.testfx.util.WaitForAsyncUtils;
  * the design table change, pick another design, set the calendar, issue, export the three files, grade a
  * returned file, and read the verdict. An {@link FxProbe} records the FX thread's worst latency.
  */
+@UsesToolkit
 @ExtendWith(ApplicationExtension.class)
 class FullFlowTest {
 

@@ -26,6 +26,7 @@ import org.testfx.framework.junit5.Start;
  * 3 × 4 block and undo, while the fields above the grid (plan id, part number, name, prepared by) never
  * change and never take the focus.
  */
+@UsesToolkit
 class GridKeyboardTest extends WizardRobotTest {
 
     private static final List<String> FIELDS = List.of("#plan-id", "#part-number", "#part-name", "#prepared-by");

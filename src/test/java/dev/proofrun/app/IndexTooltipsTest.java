@@ -28,6 +28,7 @@ import org.testfx.util.WaitForAsyncUtils;
  * that index's formula and meaning, taken from {@link IndexTip} (the one source of those words). Walks
  * every step of the demo plan, the Grading step after grading the demo's returned file.
  */
+@UsesToolkit
 class IndexTooltipsTest extends WizardRobotTest {
 
     @Start

@@ -21,6 +21,7 @@ import org.testfx.util.WaitForAsyncUtils;
  * Ctrl+1…7), each step puts the focus in its first field, Tab stays in the step (the rail is not in the
  * Tab order), a label's mnemonic focuses its field, and Enter in the returned-file field grades.
  */
+@UsesToolkit
 class KeyboardTest extends WizardRobotTest {
 
     @Start

@@ -26,6 +26,7 @@ import org.testfx.util.WaitForAsyncUtils;
  * What a step shows belongs to the plan on the desk and the returned file just graded: a failed grade
  * leaves no verdict and nothing to export, and after switching plans no word of the other plan remains.
  */
+@UsesToolkit
 class PlanStateTest extends WizardRobotTest {
 
     @Start

@@ -21,6 +21,7 @@ import org.testfx.util.WaitForAsyncUtils;
  * "Save the plan" on close writes the plan the steps describe and closes the window; when there is no plan
  * to write yet, nothing is written, the window stays open and the status line says why.
  */
+@UsesToolkit
 class SaveOnCloseTest extends WizardRobotTest {
 
     @Start

@@ -27,6 +27,7 @@ import org.testfx.util.WaitForAsyncUtils;
  * Shape cell edits the Threshold cell once the shape takes one, and passes over it (greyed) while the shape takes
  * none.
  */
+@UsesToolkit
 @ExtendWith(ApplicationExtension.class)
 class ThresholdGridTest {
 

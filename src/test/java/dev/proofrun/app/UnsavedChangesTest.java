@@ -19,6 +19,7 @@ import org.testfx.framework.junit5.Start;
 import org.testfx.util.WaitForAsyncUtils;
 
 /** Typing into a table cell is checked as typed; closing with changes asks, and no answer loses the edit. */
+@UsesToolkit
 class UnsavedChangesTest extends WizardRobotTest {
 
     @Start

@@ -33,6 +33,7 @@ import org.testfx.util.WaitForAsyncUtils;
  * revisions go there, and "Save as…" writes where the user chose; nothing lands in the working folder
  * (the checkout, with its tracked demo plan) unless chosen.
  */
+@UsesToolkit
 @ExtendWith(ApplicationExtension.class)
 class UserFolderTest {
 

@@ -14,6 +14,7 @@ import org.testfx.framework.junit5.Start;
 import org.testfx.util.WaitForAsyncUtils;
 
 /** The wizard in a real (headless) window: the first start opens the demo plan; fields validate as typed. */
+@UsesToolkit
 class WizardSmokeTest extends WizardRobotTest {
 
     @Start

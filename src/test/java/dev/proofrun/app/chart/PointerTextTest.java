@@ -2,12 +2,14 @@ package dev.proofrun.app.chart;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
+import dev.proofrun.app.UsesToolkit;
 import dev.proofrun.app.chart.CurvePlot.Line;
 import dev.proofrun.app.chart.CurvePlot.Pen;
 import java.util.List;
 import org.junit.jupiter.api.Test;
 
 /** The tooltip under the pointer names each curve's nearest point and each reference line. */
+@UsesToolkit
 class PointerTextTest {
 
     @Test

@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import dev.proofrun.app.UsesToolkit;
 import dev.proofrun.app.goal.GoalViewModel;
 import dev.proofrun.app.session.AppHome;
 import dev.proofrun.app.session.Background;
@@ -28,6 +29,7 @@ import org.junit.jupiter.api.io.TempDir;
  * Issuing writes the plan file in the background: the revision appears when the file is written, edits
  * made meanwhile stay unsaved and autosaved, and a failed write is said inline.
  */
+@UsesToolkit
 class HandoutViewModelTest {
 
     /** Holds the submitted jobs until {@link #runAll()}: "the file is being written" for as long as we like. */

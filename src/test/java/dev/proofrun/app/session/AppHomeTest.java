@@ -2,11 +2,13 @@ package dev.proofrun.app.session;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
+import dev.proofrun.app.UsesToolkit;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
 
 /** The user's folder is set in one place, and plans default into it, never into the working folder. */
+@UsesToolkit
 class AppHomeTest {
 
     @Test

@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import dev.proofrun.app.UsesToolkit;
 import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.TimeUnit;
 import org.junit.jupiter.api.BeforeAll;
@@ -15,6 +16,7 @@ import org.testfx.util.WaitForAsyncUtils;
  * The two kinds of worker: {@link Background#fx} may be cut off when the window closes (previews, designs),
  * {@link Background#fxFinishing} may not (a plan file being written), yet must not keep the JVM alive when idle.
  */
+@UsesToolkit
 class BackgroundTest {
 
     @BeforeAll

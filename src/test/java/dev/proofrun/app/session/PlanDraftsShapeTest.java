@@ -2,6 +2,7 @@ package dev.proofrun.app.session;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
+import dev.proofrun.app.UsesToolkit;
 import dev.proofrun.plan.DemoPlan;
 import dev.proofrun.plan.StudyPlan;
 import dev.proofrun.stats.ShapeFamily;
@@ -13,6 +14,7 @@ import org.junit.jupiter.api.io.TempDir;
  * A characteristic's planned shape and gauge are columns of the Part table: opening a plan and composing it
  * again keeps them, an edit changes them.
  */
+@UsesToolkit
 class PlanDraftsShapeTest {
 
     @TempDir

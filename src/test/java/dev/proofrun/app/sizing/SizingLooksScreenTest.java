@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.proofrun.app.Settle;
+import dev.proofrun.app.UsesToolkit;
 import dev.proofrun.app.WizardRobotTest;
 import dev.proofrun.app.chart.CurvePlot;
 import dev.proofrun.app.session.DraftField;
@@ -25,6 +26,7 @@ import org.testfx.util.WaitForAsyncUtils;
  * chart beside the operating characteristic appear, the choice is in the draft, and at 1280 × 800 and 1024 × 640 the
  * three charts lie side by side within the page without overlapping.
  */
+@UsesToolkit
 class SizingLooksScreenTest extends WizardRobotTest {
 
     private static final int SIZING = 3;

@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.proofrun.app.Settle;
+import dev.proofrun.app.UsesToolkit;
 import dev.proofrun.app.WizardRobotTest;
 import dev.proofrun.app.session.DraftField;
 import java.util.List;
@@ -22,6 +23,7 @@ import org.testfx.util.WaitForAsyncUtils;
  * The Timing step on the demo plan at the two window sizes the wizard is checked at (1280 × 800 and
  * 1024 × 640): slot ids never overlap, the step comes back at its top, an empty start says what to enter.
  */
+@UsesToolkit
 class TimingScreenTest extends WizardRobotTest {
 
     private static final int TIMING = 4;
