@@ -28,7 +28,6 @@ import org.junit.jupiter.api.io.TempDir;
  * wizard grades it to the verdicts {@code proofrun grade} prints for it (GradeCommandTest: D1 demonstrated,
  * R4 inconclusive, F7 not valid).
  */
-@UsesToolkit
 class DemoParityTest {
 
     @TempDir

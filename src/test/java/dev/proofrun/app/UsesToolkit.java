@@ -8,10 +8,10 @@ import java.lang.annotation.Target;
 import org.junit.jupiter.api.parallel.ResourceLock;
 
 /**
- * Marks a test class of the window's code. A JVM has one JavaFX toolkit (one FX thread, one robot, one primary
- * stage), and the view-models post to it, so these classes run one at a time; the core's classes run beside
- * them ({@code src/test/resources/junit-platform.properties}). Every test class under {@code dev.proofrun.app}
- * carries it; {@code ToolkitLockTest} checks that none is left out.
+ * Marks a test class that uses the JavaFX toolkit: the robot, the FX thread, a stage or scene, or a class of ours
+ * that does (a view, the wizard's window). A JVM has one toolkit, so these classes run one at a time; the other
+ * classes, view-model tests with inline jobs among them, run beside them
+ * ({@code src/test/resources/junit-platform.properties}). {@code ToolkitLockTest} checks that none is left out.
  */
 @Documented
 @Target(ElementType.TYPE)

@@ -4,7 +4,6 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import dev.proofrun.app.UsesToolkit;
 import dev.proofrun.app.session.CharacteristicDraft;
 import dev.proofrun.app.session.CharacteristicField;
 import dev.proofrun.app.session.DraftField;
@@ -18,7 +17,6 @@ import javafx.beans.property.SimpleObjectProperty;
 import org.junit.jupiter.api.Test;
 
 /** The goal step's validation and the expectation it hands to the designer. */
-@UsesToolkit
 class GoalViewModelTest {
 
     private final StudyDraft draft = new StudyDraft();

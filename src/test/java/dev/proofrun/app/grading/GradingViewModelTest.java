@@ -5,7 +5,6 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import dev.proofrun.app.UsesToolkit;
 import dev.proofrun.app.chart.CurvePlot.Line;
 import dev.proofrun.app.grading.GradingDisplay.Characteristic;
 import dev.proofrun.app.grading.GradingDisplay.GradeRow;
@@ -36,7 +35,6 @@ import org.junit.jupiter.api.io.TempDir;
  * What the Grading step displays, made from the real grade of the demo's return (the generator and seed of
  * {@code proofrun demo}) without a window: the words are the message keys' and the figures the grade's own.
  */
-@UsesToolkit
 class GradingViewModelTest {
 
     @TempDir

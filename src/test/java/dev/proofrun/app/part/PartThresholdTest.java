@@ -5,7 +5,6 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import dev.proofrun.app.UsesToolkit;
 import dev.proofrun.app.session.CharacteristicDraft;
 import dev.proofrun.app.session.CharacteristicField;
 import dev.proofrun.app.session.DraftField;
@@ -24,7 +23,6 @@ import org.junit.jupiter.params.provider.CsvSource;
  * The Threshold column of the Part table: open for lognormal3/weibull3 and required there, greyed for the other
  * shapes, and checked with the plan model's rules in the plan model's words (the command line's words).
  */
-@UsesToolkit
 class PartThresholdTest {
 
     private static final CharacteristicField SHAPE = CharacteristicField.SHAPE;

@@ -2,13 +2,14 @@ package dev.proofrun.app.session;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
-import dev.proofrun.app.UsesToolkit;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.parallel.ResourceLock;
+import org.junit.jupiter.api.parallel.Resources;
 
 /** The user's folder is set in one place, and plans default into it, never into the working folder. */
-@UsesToolkit
+@ResourceLock(Resources.SYSTEM_PROPERTIES) // it sets proofrun.home for a moment; test classes run in parallel
 class AppHomeTest {
 
     @Test

@@ -2,7 +2,6 @@ package dev.proofrun.app.session;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
-import dev.proofrun.app.UsesToolkit;
 import dev.proofrun.plan.DemoPlan;
 import dev.proofrun.plan.StudyPlan;
 import dev.proofrun.stats.ShapeFamily;
@@ -14,7 +13,6 @@ import org.junit.jupiter.api.io.TempDir;
  * A characteristic's planned shape and gauge are columns of the Part table: opening a plan and composing it
  * again keeps them, an edit changes them.
  */
-@UsesToolkit
 class PlanDraftsShapeTest {
 
     @TempDir

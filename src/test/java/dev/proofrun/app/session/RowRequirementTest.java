@@ -3,7 +3,6 @@ package dev.proofrun.app.session;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import dev.proofrun.app.UsesToolkit;
 import dev.proofrun.app.part.PartViewModel;
 import dev.proofrun.design.Requirement;
 import dev.proofrun.plan.DemoPlan;
@@ -21,7 +20,6 @@ import org.junit.jupiter.api.io.TempDir;
  * line's characteristics CSV: typed cells set the row's own, blank cells take the plan's; a plan opened and
  * composed again keeps them; a bad cell is marked in the plan model's words.
  */
-@UsesToolkit
 class RowRequirementTest {
 
     @TempDir

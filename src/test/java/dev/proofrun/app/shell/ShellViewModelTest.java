@@ -4,7 +4,6 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import dev.proofrun.app.UsesToolkit;
 import dev.proofrun.app.session.AppHome;
 import dev.proofrun.app.session.DraftField;
 import dev.proofrun.app.session.Session;
@@ -17,7 +16,6 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 /** Back / Next, what is missing, autosave and the close question, without a window. */
-@UsesToolkit
 class ShellViewModelTest {
 
     @TempDir

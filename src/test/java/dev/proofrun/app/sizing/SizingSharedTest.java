@@ -5,7 +5,6 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import dev.proofrun.app.UsesToolkit;
 import dev.proofrun.app.chart.CurvePlot.Line;
 import dev.proofrun.app.goal.GoalViewModel;
 import dev.proofrun.app.session.Background;
@@ -34,7 +33,6 @@ import org.junit.jupiter.api.Test;
  * design for all that {@code plan new} would choose, and one design named by the table, the cost line and both
  * charts.
  */
-@UsesToolkit
 class SizingSharedTest {
 
     private final StudyDraft draft = new StudyDraft();

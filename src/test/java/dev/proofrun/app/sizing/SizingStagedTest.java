@@ -4,7 +4,6 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import dev.proofrun.app.UsesToolkit;
 import dev.proofrun.app.goal.GoalViewModel;
 import dev.proofrun.app.session.Background;
 import dev.proofrun.app.session.CharacteristicDraft;
@@ -33,7 +32,6 @@ import org.junit.jupiter.api.io.TempDir;
  * inputs, are computed once per distinct request (an answer that changes nothing the request rests on starts no
  * new work), and come back with a reopened draft.
  */
-@UsesToolkit
 class SizingStagedTest {
 
     /** Holds the looks' jobs until {@link #runAll()}, counting submissions and cancellations. */

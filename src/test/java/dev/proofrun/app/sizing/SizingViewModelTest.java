@@ -4,7 +4,6 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import dev.proofrun.app.UsesToolkit;
 import dev.proofrun.app.goal.GoalViewModel;
 import dev.proofrun.app.session.Background;
 import dev.proofrun.app.session.CharacteristicDraft;
@@ -24,7 +23,6 @@ import javafx.beans.property.SimpleObjectProperty;
 import org.junit.jupiter.api.Test;
 
 /** The sizing step shows the core's table for the goal, recomputes on any input and keeps the user's pick. */
-@UsesToolkit
 class SizingViewModelTest {
 
     private final StudyDraft draft = new StudyDraft();

@@ -4,7 +4,6 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import dev.proofrun.app.UsesToolkit;
 import dev.proofrun.app.session.AppHome;
 import dev.proofrun.app.session.Background;
 import dev.proofrun.app.session.Session;
@@ -18,7 +17,6 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 /** Opening plan files off the FX thread: the draft changes only when the reading is done, the latest wins. */
-@UsesToolkit
 class StartViewModelTest {
 
     @TempDir

@@ -4,12 +4,10 @@ import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import dev.proofrun.app.UsesToolkit;
 import java.util.Random;
 import org.junit.jupiter.api.Test;
 
 /** Slot ids over their marks: never two in one lane closer than the gap, none outside the row. */
-@UsesToolkit
 class SlotLabelsTest {
 
     @Test

@@ -5,7 +5,6 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import dev.proofrun.app.UsesToolkit;
 import dev.proofrun.app.session.DraftField;
 import dev.proofrun.app.session.StudyDraft;
 import dev.proofrun.design.Design;
@@ -16,7 +15,6 @@ import javafx.beans.property.SimpleObjectProperty;
 import org.junit.jupiter.api.Test;
 
 /** Calendar entry, inline problems, and the schedule from the core's scheduler. */
-@UsesToolkit
 class TimingViewModelTest {
 
     private final StudyDraft draft = new StudyDraft();

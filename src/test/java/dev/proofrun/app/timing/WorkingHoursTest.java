@@ -2,7 +2,6 @@ package dev.proofrun.app.timing;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
-import dev.proofrun.app.UsesToolkit;
 import dev.proofrun.app.timing.WorkingHours.Span;
 import dev.proofrun.schedule.BreakWindow;
 import dev.proofrun.schedule.ProductionCalendar;
@@ -17,7 +16,6 @@ import java.util.TreeSet;
 import org.junit.jupiter.api.Test;
 
 /** The working minutes of a date, and a collection window clipped to them. */
-@UsesToolkit
 class WorkingHoursTest {
 
     private static ProductionCalendar calendar(List<Shift> shifts, List<BreakWindow> breaks) {
