@@ -1,5 +1,6 @@
 package dev.proofrun.design;
 
+import dev.proofrun.stats.RecentResults;
 import dev.proofrun.text.UserException;
 import java.util.ArrayList;
 import java.util.Arrays;
@@ -39,6 +40,9 @@ import java.util.List;
  * reaches the wanted power (each try steps K by what the single stage's power curve says the shortfall costs, then
  * steps back while one fewer still reaches it); the single-stage floors apply to K. A design of one look is the single-stage design,
  * unchanged.
+ *
+ * <p>The simulation's seed is fixed, so a design is a function of what was asked: the last {@value #KEPT} are kept and
+ * asking again (the wizard going back to a choice, the staged sizing and the plan of one session) costs nothing.
  */
 public final class StagedDesigner {
 
@@ -50,6 +54,14 @@ public final class StagedDesigner {
     static final double OFF_CENTRE = 1.5;
     /** The smallest per-look α: the bound engine accepts confidences below 0.9999. */
     static final double LEAST_ALPHA = 1.1e-4;
+    /** Designs kept: each costs seconds, and the wizard asks again when the user goes back to a choice. */
+    static final int KEPT = 16;
+
+    /** What a design depends on (the request as asked); {@code subgroups} is 0 when the designer chooses K. */
+    private record Asked(DesignRequest request, int subgroupSize, int subgroups, int stages, Spending spending) {
+    }
+
+    private static final RecentResults<Asked, StagedDesign> DESIGNS = new RecentResults<>(KEPT);
 
     private StagedDesigner() {
     }
@@ -62,6 +74,11 @@ public final class StagedDesigner {
      *                       reaches the power within {@value StudyDesigner#MAX_READINGS} readings
      */
     public static StagedDesign design(DesignRequest request, int n, int stages, Spending spending) {
+        return DESIGNS.get(new Asked(request, n, 0, stages, spending),
+                asked -> search(request, n, stages, spending));
+    }
+
+    private static StagedDesign search(DesignRequest request, int n, int stages, Spending spending) {
         SizeSearch search = checkedSearch(request, n, stages);
         DesignRow single = singleStageRow(request, search, n);
         if (stages == 1) {
@@ -100,10 +117,12 @@ public final class StagedDesigner {
      *                       subgroups apart
      */
     public static StagedDesign at(DesignRequest request, int n, int subgroups, int stages, Spending spending) {
-        SizeSearch search = checkedSearch(request, n, stages);
-        DesignRow single = singleStageRow(request, search, n);
-        looks(subgroups, stages);
-        return new StagedEvaluation(request, search, single, stages, spending).at(subgroups);
+        return DESIGNS.get(new Asked(request, n, subgroups, stages, spending), asked -> {
+            SizeSearch search = checkedSearch(request, n, stages);
+            DesignRow single = singleStageRow(request, search, n);
+            looks(subgroups, stages);
+            return new StagedEvaluation(request, search, single, stages, spending).at(subgroups);
+        });
     }
 
     /** The checks both entries make before searching: stages in range, no losses, an attainable request. */

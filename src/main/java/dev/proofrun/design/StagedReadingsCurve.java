@@ -1,10 +1,8 @@
 package dev.proofrun.design;
 
+import dev.proofrun.stats.RecentResults;
 import java.util.ArrayList;
-import java.util.Collections;
-import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.Map;
 
 /**
  * The expected readings of a staged study against the true index, beside the single stage's (which collects all
@@ -28,12 +26,7 @@ public final class StagedReadingsCurve {
     private record Key(DesignRequest request, int subgroupSize, Stages stages, List<Double> trueIndices) {
     }
 
-    private static final Map<Key, List<Point>> CACHE = Collections.synchronizedMap(new LinkedHashMap<>(16, 0.75f, true) {
-        @Override
-        protected boolean removeEldestEntry(Map.Entry<Key, List<Point>> eldest) {
-            return size() > KEPT;
-        }
-    });
+    private static final RecentResults<Key, List<Point>> CURVES = new RecentResults<>(KEPT);
 
     private StagedReadingsCurve() {
     }
@@ -56,11 +49,11 @@ public final class StagedReadingsCurve {
         }
         int n = design.subgroupSize();
         DesignRequest sized = request.withSubgroupSizes(List.of(n));
-        Key key = new Key(sized, n, looks, List.copyOf(at));
-        List<Point> kept = CACHE.get(key);
-        if (kept != null) {
-            return kept;
-        }
+        return CURVES.get(new Key(sized, n, looks, List.copyOf(at)), key -> curve(sized, design, looks, trueIndices));
+    }
+
+    private static List<Point> curve(DesignRequest sized, StagedDesign design, Stages looks, double[] trueIndices) {
+        int n = design.subgroupSize();
         int single = design.singleStage().readings();
         List<Point> points = new ArrayList<>();
         if (!looks.staged()) {
@@ -76,9 +69,7 @@ public final class StagedReadingsCurve {
                 points.add(new Point(trueIndices[i], figures[0][i], single, figures[1][i]));
             }
         }
-        List<Point> made = List.copyOf(points);
-        CACHE.put(key, made);
-        return made;
+        return List.copyOf(points);
     }
 
     /**

@@ -2,11 +2,8 @@ package dev.proofrun.stats;
 
 import java.util.ArrayList;
 import java.util.Arrays;
-import java.util.Collections;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
-import java.util.Map;
 import org.apache.commons.rng.UniformRandomProvider;
 import org.apache.commons.rng.sampling.distribution.ZigguratSampler;
 import org.apache.commons.rng.simple.RandomSource;
@@ -57,14 +54,7 @@ public final class FloorBound {
     /** Bisection steps in ln d at an edge of the set. */
     static final int EDGE_STEPS = 20;
 
-    private static final int CACHE_LIMIT = 16;
-    private static final Map<String, double[]> NULLS = Collections.synchronizedMap(
-            new LinkedHashMap<>(CACHE_LIMIT, 0.75f, true) {
-                @Override
-                protected boolean removeEldestEntry(Map.Entry<String, double[]> eldest) {
-                    return size() > CACHE_LIMIT;
-                }
-            });
+    private static final RecentResults<String, double[]> NULLS = new RecentResults<>(16);
 
     private FloorBound() {
     }
@@ -156,13 +146,8 @@ public final class FloorBound {
             throw new IllegalArgumentException(String.format(Locale.ROOT, "a floor is graded for 3 to %d readings: %d",
                     MAX_READINGS, readings));
         }
-        String key = family.base() + "/" + readings;
-        double[] s = NULLS.get(key);
-        if (s == null) {
-            s = simulateNull(family.base() == ShapeFamily.WEIBULL, readings);
-            NULLS.put(key, s);
-        }
-        return s;
+        return NULLS.get(family.base() + "/" + readings,
+                key -> simulateNull(family.base() == ShapeFamily.WEIBULL, readings));
     }
 
     private static double[] simulateNull(boolean extremeValue, int n) {

@@ -1,10 +1,7 @@
 package dev.proofrun.stats;
 
 import java.util.Arrays;
-import java.util.Collections;
-import java.util.LinkedHashMap;
 import java.util.Locale;
-import java.util.Map;
 import java.util.stream.IntStream;
 import org.apache.commons.rng.sampling.distribution.ZigguratSampler;
 import org.apache.commons.rng.simple.RandomSource;
@@ -45,17 +42,10 @@ public final class FoldedNormalBound {
     /** γ/α: the share of the error rate spent on the confidence set of mean/σ; the bounds use α − γ. */
     public static final double GAMMA_SHARE = 0.2;
 
-    private static final int CACHE_LIMIT = 16;
     /** Standard studies drawn before they are refitted together. */
     private static final int BLOCK = 100;
-    /** The least recently used table goes first, so a run of edits keeps the study sizes it returns to. */
-    private static final Map<String, Table> CACHE = Collections.synchronizedMap(
-            new LinkedHashMap<>(CACHE_LIMIT, 0.75f, true) {
-                @Override
-                protected boolean removeEldestEntry(Map.Entry<String, Table> eldest) {
-                    return size() > CACHE_LIMIT;
-                }
-            });
+    /** The tables of the study sizes met last, so a run of edits keeps the sizes it returns to. */
+    private static final RecentResults<String, Table> TABLES = new RecentResults<>(16);
 
     private FoldedNormalBound() {
     }
@@ -201,13 +191,7 @@ public final class FoldedNormalBound {
 
     /** The refitted standard studies for (N, seed), kept in a small cache. */
     static Table table(int readings, long seed) {
-        String id = readings + "/" + seed;
-        Table t = CACHE.get(id);
-        if (t == null) {
-            t = draw(readings, seed);
-            CACHE.put(id, t);
-        }
-        return t;
+        return TABLES.get(readings + "/" + seed, id -> draw(readings, seed));
     }
 
     private static Table draw(int n, long seed) {

@@ -1,10 +1,7 @@
 package dev.proofrun.stats;
 
 import java.util.Arrays;
-import java.util.Collections;
-import java.util.LinkedHashMap;
 import java.util.Locale;
-import java.util.Map;
 import java.util.stream.IntStream;
 import org.apache.commons.rng.sampling.distribution.ZigguratSampler;
 import org.apache.commons.rng.simple.RandomSource;
@@ -48,15 +45,8 @@ public final class FoldedNormalPower {
     static final double THETA_HIGH = 6;
 
     private static final NormalDistribution STANDARD = NormalDistribution.of(0, 1);
-    private static final int CACHE_LIMIT = 64;
-    /** The studies' fits per (θ, N), about 130 kB each; the least recently used goes first. */
-    private static final Map<String, double[][]> FITS = Collections.synchronizedMap(
-            new LinkedHashMap<>(CACHE_LIMIT, 0.75f, true) {
-                @Override
-                protected boolean removeEldestEntry(Map.Entry<String, double[][]> eldest) {
-                    return size() > CACHE_LIMIT;
-                }
-            });
+    /** The studies' fits per (θ, N), about 130 kB each. */
+    private static final RecentResults<String, double[][]> FITS = new RecentResults<>(64);
     private static final double ROOT_2_OVER_PI = Math.sqrt(2 / Math.PI);
 
     private FoldedNormalPower() {
@@ -125,15 +115,11 @@ public final class FoldedNormalPower {
      * of the requirement or the expected index refits nothing at a study size met before.
      */
     static double[][] fits(double theta, int readings) {
-        String id = Double.doubleToLongBits(theta) + "/" + readings;
-        double[][] f = FITS.get(id);
-        if (f == null) {
-            f = new double[STUDIES][];
-            double[][] out = f;
+        return FITS.get(Double.doubleToLongBits(theta) + "/" + readings, id -> {
+            double[][] out = new double[STUDIES][];
             IntStream.range(0, STUDIES).parallel().forEach(s -> out[s] = fit(study(theta, readings, s)));
-            FITS.put(id, f);
-        }
-        return f;
+            return out;
+        });
     }
 
     /** {mean/σ, low, median, high quantile} of the grader's fit of the readings, or null when it fails. */

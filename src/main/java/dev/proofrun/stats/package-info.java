@@ -34,6 +34,9 @@
  * {@code FloorBound.Estimate} (a threshold shape with only a floor for its threshold: the least pivotal bound over the
  * thresholds the readings' skewness leaves possible, Berger &amp; Boos 1994). {@code Confidence} holds the two ranges:
  * stated (0.5, 0.9999) and computable (0.5, 1), the latter for a staged study's per-look confidence.</li>
+ * <li>{@code RecentResults}: the one small least-recently-used store for simulated tables and designs, which fixed
+ * seeds make a function of their inputs (the folded-normal and floor tables here, staged designs and curves in
+ * {@code design}).</li>
  * </ul>
  */
 package dev.proofrun.stats;

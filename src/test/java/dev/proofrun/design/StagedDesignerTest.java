@@ -2,6 +2,8 @@ package dev.proofrun.design;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertNotSame;
+import static org.junit.jupiter.api.Assertions.assertSame;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -23,13 +25,21 @@ class StagedDesignerTest {
     private static final DesignRequest DEMO = DesignRequest.of(SpecLimits.Sides.TWO_SIDED,
             Requirement.of(IndexKind.CPK, 1.33, 0.95), Expectation.offCentre(1.67, 1.8))
             .withSubgroupSizes(List.of(5));
-    private static StagedDesign threeLooks;
 
-    private static synchronized StagedDesign threeLooks() {
-        if (threeLooks == null) {
-            threeLooks = StagedDesigner.design(DEMO, 5, 3, Spending.OBRIEN_FLEMING);
-        }
-        return threeLooks;
+    /** The designer keeps its last designs, so the tests share this one. */
+    private static StagedDesign threeLooks() {
+        return StagedDesigner.design(DEMO, 5, 3, Spending.OBRIEN_FLEMING);
+    }
+
+    @Test
+    void aDesignAskedAgainIsTheOneKeptAndAnotherRequestIsNot() {
+        StagedDesign d = threeLooks();
+        assertSame(d, StagedDesigner.design(DEMO, 5, 3, Spending.OBRIEN_FLEMING));
+        StagedDesign lessPower = StagedDesigner.design(DEMO.withPower(0.8), 5, 3, Spending.OBRIEN_FLEMING);
+        assertNotSame(d, lessPower);
+        assertTrue(lessPower.stages().last().subgroups() < d.stages().last().subgroups(), lessPower.toString());
+        assertSame(StagedDesigner.at(DEMO, 5, 30, 3, Spending.OBRIEN_FLEMING),
+                StagedDesigner.at(DEMO, 5, 30, 3, Spending.OBRIEN_FLEMING));
     }
 
     @Test
