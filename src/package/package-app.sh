@@ -1,7 +1,7 @@
 #!/usr/bin/env bash
 # Builds the desktop app from target/proofrun.jar (run by `mvn -B -Papp package`, after the shaded jar):
 #
-#   target/runtime/                     a Java runtime cut to the modules the jar needs (jlink), with its own
+#   target/runtime/                     a Java runtime cut to the modules the jar needs, JavaFX's among them (jlink), with its own
 #                                       default class-data-sharing archive (-Xshare:dump)
 #   target/jpackage/proofrun/           the app image (jpackage --type app-image): bin/proofrun starts the wizard
 #   target/jpackage/proofrun/lib/app/proofrun.jsa
@@ -26,6 +26,7 @@ app_version="$(printf '%s' "${version:-0.1.0}" | sed 's/[^0-9.].*//; s/\.$//')"
 for tool in jdeps jlink jpackage; do
   command -v "$tool" >/dev/null || { echo "package-app: $tool not found (a full JDK 17 is needed)" >&2; exit 2; }
 done
+command -v zip >/dev/null || { echo "package-app: zip not found (apt-get install zip)" >&2; exit 2; }
 [ -f "$jar" ] || { echo "package-app: $jar is missing; run mvn package first" >&2; exit 2; }
 
 # a command that can open a window: the display at hand, else a virtual one
@@ -63,14 +64,29 @@ echo "package-app: runtime image"
 modules="$(jdeps --ignore-missing-deps --multi-release base --print-module-deps "$jar")"
 # found by use, not by jdeps: zip file systems, every text encoding, and the locale data `java -jar` has
 modules="$modules,jdk.unsupported,jdk.zipfs,jdk.charsets,jdk.localedata"
+# JavaFX goes into the runtime as the modules it is made as (the platform jars that the build copies to
+# target/javafx), so the app runs it from named modules: no "Unsupported JavaFX configuration" warning. The
+# jar's own copies of JavaFX's packages are then never read (a package in a named module wins).
+ls target/javafx/javafx-graphics-*-*.jar >/dev/null 2>&1 \
+  || { echo "package-app: target/javafx holds no JavaFX platform jars; run mvn package first" >&2; exit 2; }
+modules="$modules,javafx.controls,javafx.swing"
 rm -rf target/runtime target/jpackage target/app-input
-jlink --add-modules "$modules" --strip-debug --no-header-files --no-man-pages --compress=2 --output target/runtime
+jlink --module-path target/javafx --add-modules "$modules" --strip-debug --no-header-files --no-man-pages \
+  --compress=2 --output target/runtime
 # the runtime's own default archive: the JDK's classes, and the base that the app's archive builds on
 target/runtime/bin/java -Xshare:dump >/dev/null
 
 echo "package-app: app image"
 mkdir -p target/app-input
 cp "$jar" target/app-input/
+# the runtime carries JavaFX, so the app's copy of the jar leaves out JavaFX's packages and native libraries
+# (a package in a named module wins anyway; this only saves the second copy)
+fx_entries=(lib*.so javafx.properties javafx-swt.jar)
+for m in javafx.base javafx.graphics javafx.controls javafx.swing; do
+  while read -r package; do fx_entries+=("${package//./\/}/*"); done \
+    < <(target/runtime/bin/java --describe-module "$m" | awk '$1 == "qualified" { print $3; next } $1 == "exports" || $1 == "opens" || $1 == "contains" { print $2 }' | sort -u)
+done
+zip -q -ws -d "target/app-input/$(basename "$jar")" "${fx_entries[@]}"
 jpackage --type app-image --name "$name" --app-version "$app_version" --dest target/jpackage \
   --input target/app-input --main-jar "$(basename "$jar")" --main-class "$main" \
   --runtime-image target/runtime \
