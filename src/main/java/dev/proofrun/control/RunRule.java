@@ -1,7 +1,6 @@
 package dev.proofrun.control;
 
 import dev.proofrun.text.Token;
-import dev.proofrun.text.Tokens;
 
 /**
  * The eight run rules for a control chart, named by what they detect. Each works on points standardized to
@@ -49,10 +48,5 @@ public enum RunRule implements Token {
     /** How many consecutive points the pattern spans (the earliest index at which it can fire is span − 1). */
     public int span() {
         return span;
-    }
-
-    /** The rule named by its word ({@code run-one-side}, …), as {@link Tokens#parse} reads it. */
-    public static RunRule fromToken(String token) {
-        return Tokens.parse(RunRule.class, "run rule", token);
     }
 }

@@ -45,7 +45,7 @@ record GaugeStep(double step, boolean detected, double sigma) {
 
     /** The shape when it cannot be judged (a too coarse step): no model fits, no capability statement. */
     static Shape unjudged(ShapeFamily family) {
-        return new Shape(Double.NaN, Double.NaN, false, ShapeModel.of(family), List.of(), false, family, null, 1);
+        return new Shape(Double.NaN, Double.NaN, false, family, List.of(), false, family, null, 1);
     }
 
     boolean known() {

@@ -1,6 +1,7 @@
 package dev.proofrun.grade;
 
 import dev.proofrun.stats.IndexKind;
+import dev.proofrun.stats.ShapeFamily;
 
 /**
  * The required index as judged: estimate and confidence bounds under the declared model.
@@ -20,17 +21,17 @@ import dev.proofrun.stats.IndexKind;
  *                    possible, at which the lower bound was reached; NaN otherwise
  */
 public record IndexEvidence(IndexKind index, double required, double confidence, double estimate, double lower,
-        double upper, ShapeModel model, IndexMethod method, double expectedPpm, Long seed, double limitedAt) {
+        double upper, ShapeFamily model, IndexMethod method, double expectedPpm, Long seed, double limitedAt) {
 
     /** Evidence without a floor. */
     public IndexEvidence(IndexKind index, double required, double confidence, double estimate, double lower,
-            double upper, ShapeModel model, IndexMethod method, double expectedPpm, Long seed) {
+            double upper, ShapeFamily model, IndexMethod method, double expectedPpm, Long seed) {
         this(index, required, confidence, estimate, lower, upper, model, method, expectedPpm, seed, Double.NaN);
     }
 
     /** Normal theory, no pivotal draws. */
     public IndexEvidence(IndexKind index, double required, double confidence, double estimate, double lower,
-            double upper, ShapeModel model) {
+            double upper, ShapeFamily model) {
         this(index, required, confidence, estimate, lower, upper, model, IndexMethod.NORMAL_THEORY, Double.NaN, null);
     }
 
@@ -48,6 +49,6 @@ public record IndexEvidence(IndexKind index, double required, double confidence,
 
     /** Whether the verdict rests on figures other than the normal-theory ones of the raw readings. */
     public boolean otherThanNormalTheory() {
-        return method != IndexMethod.NORMAL_THEORY || model != ShapeModel.NORMAL;
+        return method != IndexMethod.NORMAL_THEORY || model != ShapeFamily.NORMAL;
     }
 }

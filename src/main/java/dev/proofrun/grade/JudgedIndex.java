@@ -5,6 +5,7 @@ import dev.proofrun.stats.BoundMethod;
 import dev.proofrun.stats.CapabilityBounds;
 import dev.proofrun.stats.NormalTheoryBound;
 import dev.proofrun.stats.IndexKind;
+import dev.proofrun.stats.ShapeFamily;
 import dev.proofrun.stats.SpecLimits;
 
 /**
@@ -88,12 +89,12 @@ record JudgedIndex(IndexKind kind, double estimate, double cp, int readings, dou
     }
 
     /** The evidence record for the result. */
-    IndexEvidence evidence(Requirement r, ShapeModel model) {
+    IndexEvidence evidence(Requirement r, ShapeFamily model) {
         return evidence(r, model, r.confidence());
     }
 
     /** The evidence record with its bounds at {@code confidence} (a staged study's look) instead of the requirement's. */
-    IndexEvidence evidence(Requirement r, ShapeModel model, double confidence) {
+    IndexEvidence evidence(Requirement r, ShapeFamily model, double confidence) {
         // the upper bound only matters (and is only shown) when the estimate is below c0; the exact two-sided
         // bound costs about a second at a million readings, so it is not computed otherwise
         double up = estimate < r.minimum() ? upper(confidence) : Double.NaN;

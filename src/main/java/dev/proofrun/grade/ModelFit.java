@@ -1,5 +1,7 @@
 package dev.proofrun.grade;
 
+import dev.proofrun.stats.ShapeFamily;
+
 /**
  * One distribution fitted to a characteristic's readings.
  *
@@ -10,14 +12,14 @@ package dev.proofrun.grade;
  * @param aic            Akaike's criterion 4 − 2·logL (two parameters), for reference only: the model is never chosen by it
  * @param andersonDarling A² of the readings against the fitted model
  * @param fits           true when the declared model is kept (its check does not reject it at 1 %, or the large-study rule keeps it)
- * @param threshold      the declared threshold θ of a {@link ShapeModel#LOGNORMAL3} or {@link ShapeModel#WEIBULL3}
+ * @param threshold      the declared threshold θ of a {@link ShapeFamily#LOGNORMAL3} or {@link ShapeFamily#WEIBULL3}
  *                       model (first and second are then those of x − θ); 0 otherwise
  */
-public record ModelFit(ShapeModel model, double first, double second, double logLikelihood, double aic,
+public record ModelFit(ShapeFamily model, double first, double second, double logLikelihood, double aic,
         double andersonDarling, boolean fits, double threshold) {
 
     /** A fit without a threshold. */
-    public ModelFit(ShapeModel model, double first, double second, double logLikelihood, double aic,
+    public ModelFit(ShapeFamily model, double first, double second, double logLikelihood, double aic,
             double andersonDarling, boolean fits) {
         this(model, first, second, logLikelihood, aic, andersonDarling, fits, 0);
     }

@@ -116,7 +116,7 @@ final class PercentileJudge {
         }
         upper = estimate < req.minimum() ? upper * f : Double.NaN;
         return new IndexEvidence(kind, req.minimum(), confidence, estimate * f, lower * f, upper,
-                ShapeModel.of(declared), pivotal ? IndexMethod.PERCENTILE : IndexMethod.PERCENTILE_INVERTED, ppm, seed, limitedAt);
+                declared, pivotal ? IndexMethod.PERCENTILE : IndexMethod.PERCENTILE_INVERTED, ppm, seed, limitedAt);
     }
 
     private static String number(double v) {

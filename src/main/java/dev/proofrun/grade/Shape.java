@@ -23,7 +23,7 @@ import java.util.List;
  * @param thresholds      for a plan that gives a floor: the thresholds the readings leave possible (the fit is the
  *                        one at the set's central threshold); null otherwise
  */
-public record Shape(double andersonDarling, double pValue, boolean normal, ShapeModel model, List<ModelFit> fits,
+public record Shape(double andersonDarling, double pValue, boolean normal, ShapeFamily model, List<ModelFit> fits,
         boolean modelFits, ShapeFamily family, ShapeFit fit, double tailFactor, FloorBound.ThresholdSet thresholds) {
 
     public Shape {
@@ -31,7 +31,7 @@ public record Shape(double andersonDarling, double pValue, boolean normal, Shape
     }
 
     /** Shape evidence without a floor. */
-    public Shape(double andersonDarling, double pValue, boolean normal, ShapeModel model, List<ModelFit> fits,
+    public Shape(double andersonDarling, double pValue, boolean normal, ShapeFamily model, List<ModelFit> fits,
             boolean modelFits, ShapeFamily family, ShapeFit fit, double tailFactor) {
         this(andersonDarling, pValue, normal, model, fits, modelFits, family, fit, tailFactor, null);
     }

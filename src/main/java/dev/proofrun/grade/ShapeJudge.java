@@ -99,16 +99,15 @@ final class ShapeJudge {
     static Shape judge(List<double[]> subgroups, List<String> slots, double resolution, ShapeFamily family,
             double threshold, SpecLimits limits, List<Reason> reasons) {
         double[] x = Subgroups.flatten(subgroups);
-        ShapeModel model = ShapeModel.of(family);
         ShapeFitter.Outcome o = ShapeFitter.fit(family, threshold, x);
         if (!o.fitted()) {
             reasons.add(new Reason(Step.SHAPE, true, noFit(o, subgroups, slots, family, threshold, false, x.length)));
-            return new Shape(Double.NaN, Double.NaN, false, model, List.of(), false, family, null, 1);
+            return new Shape(Double.NaN, Double.NaN, false, family, List.of(), false, family, null, 1);
         }
         ShapeFit fit = o.fit();
         if (x.length < MIN_READINGS) {
             reasons.add(new Reason(Step.SHAPE, false, GradeMessage.REASON_TOO_FEW_FOR_SHAPE.format(x.length)));
-            return new Shape(Double.NaN, Double.NaN, family.isNormal(), model, List.of(modelFit(model, fit, x, Double.NaN, true)),
+            return new Shape(Double.NaN, Double.NaN, family.isNormal(), family, List.of(modelFit(family, fit, x, Double.NaN, true)),
                     true, family, fit, 1);
         }
         double[] checked = spread(x, resolution, fit.lowerBound());
@@ -123,19 +122,19 @@ final class ShapeJudge {
         if (!rejected) {
             reasons.add(new Reason(Step.SHAPE, false,
                     GradeMessage.REASON_SHAPE_FITS.format(family.token(), fit.describe(), test[0], evidence)));
-            return new Shape(test[0], test[1], family.isNormal(), model, List.of(modelFit(model, fit, x, test[0], true)), true,
+            return new Shape(test[0], test[1], family.isNormal(), family, List.of(modelFit(family, fit, x, test[0], true)), true,
                     family, fit, 1);
         }
         double[] tail = x.length >= TAIL_RULE_READINGS ? tailDeparture(fit, x, limits) : null;
         if (tail != null && tail[0] <= TAIL_TOLERANCE) {
             reasons.add(new Reason(Step.SHAPE, false, GradeMessage.REASON_TAIL_RULE.format(family.token(), test[0], evidence,
                     x.length, 100 * tail[0], 100 * TAIL_TOLERANCE, tail[1])));
-            return new Shape(test[0], test[1], family.isNormal(), model, List.of(modelFit(model, fit, x, test[0], true)), true,
+            return new Shape(test[0], test[1], family.isNormal(), family, List.of(modelFit(family, fit, x, test[0], true)), true,
                     family, fit, tail[1]);
         }
         reasons.add(new Reason(Step.SHAPE, true,
                 GradeMessage.REASON_SHAPE_REJECTED.format(family.token(), fit.describe(), test[0], evidence)));
-        return new Shape(test[0], test[1], false, model, List.of(modelFit(model, fit, x, test[0], false)), false, family, fit, 1);
+        return new Shape(test[0], test[1], false, family, List.of(modelFit(family, fit, x, test[0], false)), false, family, fit, 1);
     }
 
     /**
@@ -150,17 +149,16 @@ final class ShapeJudge {
     static Shape judgeFloor(List<double[]> subgroups, List<String> slots, double resolution, ShapeFamily family,
             double floor, double gamma, SpecLimits limits, List<Reason> reasons) {
         double[] x = Subgroups.flatten(subgroups);
-        ShapeModel model = ShapeModel.of(family);
         ShapeFitter.Outcome atFloor = ShapeFitter.fit(family, floor, x);
         if (!atFloor.fitted()) {
             reasons.add(new Reason(Step.SHAPE, true, noFit(atFloor, subgroups, slots, family, floor, true, x.length)));
-            return new Shape(Double.NaN, Double.NaN, false, model, List.of(), false, family, null, 1);
+            return new Shape(Double.NaN, Double.NaN, false, family, List.of(), false, family, null, 1);
         }
         String f = String.format(Locale.ROOT, "%s", floor);
         if (x.length > FloorBound.MAX_READINGS) {
             reasons.add(new Reason(Step.SHAPE, true, GradeMessage.REASON_FLOOR_TOO_MANY.format(family.token(), f, x.length,
                     FloorBound.MAX_READINGS)));
-            return new Shape(Double.NaN, Double.NaN, false, model, List.of(), false, family, atFloor.fit(), 1);
+            return new Shape(Double.NaN, Double.NaN, false, family, List.of(), false, family, atFloor.fit(), 1);
         }
         FloorBound.ThresholdSet set = FloorBound.thresholds(family, floor, x, gamma);
         if (set.empty()) {
@@ -168,7 +166,7 @@ final class ShapeJudge {
             reasons.add(new Reason(Step.SHAPE, true, GradeMessage.REASON_FLOOR_NO_THRESHOLD.format(f,
                     String.format(Locale.ROOT, "%s", min), family.token(), FloorBound.skewAt(x, floor), 100 * gamma,
                     set.critical(), FloorBound.SKEW_DRAWS, x.length, FloorBound.SKEW_SEED)));
-            return new Shape(Double.NaN, Double.NaN, false, model, List.of(), false, family, atFloor.fit(), 1, set);
+            return new Shape(Double.NaN, Double.NaN, false, family, List.of(), false, family, atFloor.fit(), 1, set);
         }
         double central = set.central();
         reasons.add(new Reason(Step.SHAPE, false, GradeMessage.REASON_FLOOR_SET.format(family.token(), f,
@@ -235,7 +233,7 @@ final class ShapeJudge {
         return sorted[i] + (h - i) * (sorted[i + 1] - sorted[i]);
     }
 
-    private static ModelFit modelFit(ShapeModel model, ShapeFit fit, double[] x, double a2, boolean fits) {
+    private static ModelFit modelFit(ShapeFamily model, ShapeFit fit, double[] x, double a2, boolean fits) {
         double logL = 0;
         for (double v : x) {
             logL += fit.logDensity(v);

@@ -1,7 +1,7 @@
 package dev.proofrun.report;
 
 import dev.proofrun.grade.ModelFit;
-import dev.proofrun.grade.ShapeModel;
+import dev.proofrun.stats.ShapeFamily;
 import org.apache.commons.statistics.distribution.NormalDistribution;
 
 /**
@@ -25,9 +25,9 @@ import org.apache.commons.statistics.distribution.NormalDistribution;
  * @param second σ (normal, lognormal, folded normal), η (Weibull)
  * @param threshold θ of a threshold model, 0 otherwise
  */
-record ModelCurve(ShapeModel model, double first, double second, double threshold) {
+record ModelCurve(ShapeFamily model, double first, double second, double threshold) {
 
-    ModelCurve(ShapeModel model, double first, double second) {
+    ModelCurve(ShapeFamily model, double first, double second) {
         this(model, first, second, 0);
     }
 
@@ -40,7 +40,7 @@ record ModelCurve(ShapeModel model, double first, double second, double threshol
 
     /** The normal model with the readings' mean and standard deviation. */
     static ModelCurve normal(double mean, double sd) {
-        return new ModelCurve(ShapeModel.NORMAL, mean, sd);
+        return new ModelCurve(ShapeFamily.NORMAL, mean, sd);
     }
 
     /** Density at x on the readings' scale (0 outside the support). */
@@ -78,10 +78,10 @@ record ModelCurve(ShapeModel model, double first, double second, double threshol
 
     /** The probability plot's horizontal value for a plotting position p. */
     double quantile(double p) {
-        if (model == ShapeModel.FOLDED_NORMAL) {
+        if (model == ShapeFamily.FOLDED_NORMAL) {
             return dev.proofrun.stats.FoldedNormal.quantile(first, second, p);
         }
-        return model.base() == ShapeModel.WEIBULL ? Math.log(-Math.log(1 - p)) : STANDARD.inverseCumulativeProbability(p);
+        return model.base() == ShapeFamily.WEIBULL ? Math.log(-Math.log(1 - p)) : STANDARD.inverseCumulativeProbability(p);
     }
 
     /** The model's line on the probability plot at horizontal value q. */
@@ -102,7 +102,7 @@ record ModelCurve(ShapeModel model, double first, double second, double threshol
     /** Axis words for the probability plot: {horizontal, vertical}. */
     String[] axisNames() {
         if (threshold != 0) {
-            return new String[] {model.base() == ShapeModel.WEIBULL ? "ln(\u2212ln(1\u2212p))" : "normal quantile", "ln(reading \u2212 threshold)"};
+            return new String[] {model.base() == ShapeFamily.WEIBULL ? "ln(\u2212ln(1\u2212p))" : "normal quantile", "ln(reading \u2212 threshold)"};
         }
         switch (model.base()) {
             case NORMAL:

@@ -3,7 +3,7 @@ package dev.proofrun.report;
 import dev.proofrun.grade.CharacteristicGrade;
 import dev.proofrun.grade.IndexEvidence;
 import dev.proofrun.grade.IndexMethod;
-import dev.proofrun.grade.ShapeModel;
+import dev.proofrun.stats.ShapeFamily;
 import dev.proofrun.grade.Verdict;
 import dev.proofrun.stats.Nonconforming;
 import java.util.Locale;
@@ -37,7 +37,7 @@ final class NonconformingWords {
             return "Nonconforming parts: " + counted + "; no bound is stated for a study that cannot carry a "
                     + "capability statement.";
         }
-        OptionalDouble bound = e.model() == ShapeModel.NORMAL && e.method() == IndexMethod.NORMAL_THEORY
+        OptionalDouble bound = e.model() == ShapeFamily.NORMAL && e.method() == IndexMethod.NORMAL_THEORY
                 ? Nonconforming.upperPpm(e.index(), g.limits(), e.lower()) : OptionalDouble.empty();
         String conf = ReportNumbers.fixed(e.confidence() * 100, 0);
         if (bound.isPresent()) {
@@ -48,7 +48,7 @@ final class NonconformingWords {
         String expected = Double.isFinite(e.expectedPpm()) ? String.format(Locale.ROOT,
                 "; about %s ppm expected under the fitted %s model", ReportNumbers.ppm(e.expectedPpm()), e.model().token()) : "";
         return String.format(Locale.ROOT, "Nonconforming parts: %s%s. No upper bound is stated: %s.", counted,
-                expected, e.model() == ShapeModel.NORMAL ? "the required " + e.index().symbol()
+                expected, e.model() == ShapeFamily.NORMAL ? "the required " + e.index().symbol()
                         + " does not bound the fraction outside" : "under the " + e.model().token()
                         + " model the percentile index does not turn into a fraction outside");
     }

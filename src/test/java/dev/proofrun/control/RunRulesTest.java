@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.proofrun.stats.Subgroups;
+import dev.proofrun.text.Tokens;
 import java.util.Arrays;
 import java.util.EnumSet;
 import java.util.List;
@@ -129,9 +130,9 @@ class RunRulesTest {
         assertTrue(only(RunRule.TREND, z).isEmpty());
         assertEquals(1, RunRules.scan(z, EnumSet.allOf(RunRule.class)).size());
         for (RunRule r : RunRule.values()) {
-            assertEquals(r, RunRule.fromToken(r.token()));
+            assertEquals(r, Tokens.parse(RunRule.class, "run rule", r.token()));
         }
-        assertThrows(IllegalArgumentException.class, () -> RunRule.fromToken("nine"));
+        assertThrows(IllegalArgumentException.class, () -> Tokens.parse(RunRule.class, "run rule", "nine"));
         assertThrows(IllegalArgumentException.class, () -> RunRules.scan(new double[] {Double.NaN}, Set.of(RunRule.TREND)));
     }
 

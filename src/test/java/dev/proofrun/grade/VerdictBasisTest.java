@@ -25,7 +25,7 @@ class VerdictBasisTest {
         IndexEvidence e = g.judged();
         assertNotNull(e);
         assertEquals(IndexMethod.NORMAL_THEORY, e.method());
-        assertEquals(ShapeModel.NORMAL, e.model());
+        assertEquals(ShapeFamily.NORMAL, e.model());
         assertTrue(e.summary().startsWith("Cpk under the normal model by normal theory, exact bounds: estimate "), e.summary());
     }
 
@@ -42,7 +42,7 @@ class VerdictBasisTest {
         IndexEvidence e = g.judged();
         assertNotNull(e, g.reasons().toString());
         assertTrue(e.otherThanNormalTheory(), e.toString());
-        assertEquals(ShapeModel.LOGNORMAL, e.model());
+        assertEquals(ShapeFamily.LOGNORMAL, e.model());
         assertEquals(IndexMethod.PERCENTILE, e.method());
         assertTrue(e.summary().contains("under the " + e.model().token() + " model"), e.summary());
     }

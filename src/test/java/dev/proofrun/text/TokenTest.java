@@ -11,7 +11,7 @@ import dev.proofrun.design.LimitedBy;
 import dev.proofrun.design.Spending;
 import dev.proofrun.grade.IndexMethod;
 import dev.proofrun.grade.Severity;
-import dev.proofrun.grade.ShapeModel;
+import dev.proofrun.stats.ShapeFamily;
 import dev.proofrun.grade.Step;
 import dev.proofrun.grade.Verdict;
 import dev.proofrun.plan.PlanState;
@@ -37,7 +37,7 @@ class TokenTest {
         assertEquals("kim-demets-2", Spending.KIM_DEMETS_2.token());
         assertEquals("two-of-three-outer", RunRule.TWO_OF_THREE_OUTER.token());
         assertEquals("folded-normal", ShapeFamily.FOLDED_NORMAL.token());
-        assertEquals("lognormal3", ShapeModel.LOGNORMAL3.token());
+        assertEquals("lognormal3", ShapeFamily.LOGNORMAL3.token());
     }
 
     @Test
@@ -68,7 +68,7 @@ class TokenTest {
         namesItsOwn(Spacing.class);
         namesItsOwn(Verdict.class);
         namesItsOwn(Severity.class);
-        namesItsOwn(ShapeModel.class);
+        namesItsOwn(ShapeFamily.class);
         namesItsOwn(IndexMethod.class);
         namesItsOwn(Step.class);
     }
