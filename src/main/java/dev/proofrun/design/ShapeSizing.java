@@ -2,6 +2,7 @@ package dev.proofrun.design;
 
 import dev.proofrun.control.ChartKind;
 import dev.proofrun.control.StabilityRisk;
+import dev.proofrun.stats.Cancellation;
 import dev.proofrun.stats.FoldedNormalPower;
 import dev.proofrun.stats.IndexKind;
 import dev.proofrun.stats.PercentilePower;
@@ -74,9 +75,14 @@ public final class ShapeSizing {
                     "the expected index %.3f is not above the required %.3f: no study size can show it", c1, c0));
         }
         Map<Integer, Double> cache = new java.util.concurrent.ConcurrentHashMap<>();
-        java.util.function.IntToDoubleFunction power = n -> cache.computeIfAbsent(n,
-                x -> family == ShapeFamily.FOLDED_NORMAL ? FoldedNormalPower.power(parameter, side, c0, c1, confidence, x)
-                        : PercentilePower.power(family, parameter, side, c0, c1, confidence, x));
+        // every power is a simulation: each asks first whether the job that wants the table was cancelled
+        Cancellation cancel = Cancellation.ofCallingThread();
+        java.util.function.IntToDoubleFunction power = n -> {
+            cancel.check();
+            return cache.computeIfAbsent(n, x -> family == ShapeFamily.FOLDED_NORMAL
+                    ? FoldedNormalPower.power(parameter, side, c0, c1, confidence, x)
+                    : PercentilePower.power(family, parameter, side, c0, c1, confidence, x));
+        };
         // the gates take about 1-2 % off the bound's power: start each row where the bound alone reaches that much more
         double start = Math.min(wanted / (1 - ProcedurePower.NORMAL_SHAPE_REJECTION) / (1 - TYPICAL_UNSTABLE), 0.999);
         OptionalInt needed = smallestReadings(power, start, Math.max(3, floors.minReadings()));

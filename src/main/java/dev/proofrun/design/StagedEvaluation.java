@@ -1,5 +1,6 @@
 package dev.proofrun.design;
 
+import dev.proofrun.stats.Cancellation;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
@@ -107,7 +108,9 @@ final class StagedEvaluation {
         Expectation exp = request.expectation();
         double ratio = exp.potentialOrIndex() / exp.index();
         double[][] out = new double[2][trueIndices.length];
+        Cancellation cancel = Cancellation.ofCallingThread();
         for (int t = 0; t < trueIndices.length; t++) {
+            cancel.check();
             Estimates e = new Estimates(paths, trueIndices[t], trueIndices[t] * ratio);
             Outcome o = outcome(paths, e, bounds, futility, gates);
             out[0][t] = o.expectedReadings(paths);
@@ -134,7 +137,9 @@ final class StagedEvaluation {
             // the smallest estimate that passes at the ceiling's level (centred: the exact bound's ĉ* rises with k̂),
             // with a margin so that no study whose p-value is below the ceiling is left out
             double screen = Math.max(c0, 0.98 * loosest.criticalEstimate(0));
+            Cancellation cancel = Cancellation.ofCallingThread();
             java.util.stream.IntStream.range(0, paths.paths()).parallel().forEach(i -> {
+                cancel.check();
                 double est = e.estimate[jj][i];
                 p[jj][i] = est < screen ? 1 : LookPValue.of(shape, request.boundMethod(), c0, est, e.cp[jj][i],
                         paths.readingsAt(jj), paths.nuAt(jj, usesWithin));

@@ -1,5 +1,6 @@
 package dev.proofrun.design;
 
+import dev.proofrun.stats.Cancellation;
 import dev.proofrun.stats.SigmaEstimate;
 import dev.proofrun.stats.SigmaMethod;
 import dev.proofrun.stats.WithinSigma;
@@ -49,7 +50,11 @@ final class StagedPaths {
         for (int j = 0; j < looks.length; j++) {
             s.withinNu[j] = WithinSigma.degreesOfFreedom(method, subgroupSize, looks[j]);
         }
-        IntStream.range(0, paths).parallel().forEach(p -> s.fill(p, method, seed));
+        Cancellation cancel = Cancellation.ofCallingThread();
+        IntStream.range(0, paths).parallel().forEach(p -> {
+            cancel.check();
+            s.fill(p, method, seed);
+        });
         return s;
     }
 

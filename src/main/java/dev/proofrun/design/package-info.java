@@ -28,7 +28,8 @@
  * {@code Stages} contract the plan and the grader share, each look's boundaries and stop chances, expected readings
  * at c0 and c1, the single stage beside it); per-look confidences from simulated joint looks ({@code StagedPaths},
  * {@code LookPValue}), see {@code docs/decisions/staged-studies-design.md}. The last designs are kept
- * ({@code stats.RecentResults}): the same request gives the same design, at once.
+ * ({@code stats.RecentResults}): the same request gives the same design, at once. The staged and the shaped
+ * simulations stop when the job that asked for them is cancelled ({@code stats.Cancellation}).
  * This package must not import {@code grade} (grade imports design).
  */
 package dev.proofrun.design;

@@ -37,6 +37,8 @@
  * <li>{@code RecentResults}: the one small least-recently-used store for simulated tables and designs, which fixed
  * seeds make a function of their inputs (the folded-normal and floor tables here, staged designs and curves in
  * {@code design}).</li>
+ * <li>{@code Cancellation}: a long simulation stops when the thread that asked for it is interrupted (the wizard
+ * cancels a job that way), checked also from the threads of a parallel stream; uninterrupted, nothing changes.</li>
  * </ul>
  */
 package dev.proofrun.stats;
