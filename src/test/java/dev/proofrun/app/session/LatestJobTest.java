@@ -6,65 +6,10 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.concurrent.Callable;
-import java.util.function.Consumer;
 import org.junit.jupiter.api.Test;
 
 /** Only the latest job's answer is passed on, whatever order the answers arrive in. */
 class LatestJobTest {
-
-    /**
-     * A worker that keeps each job until the test ends it; a cancelled job can still be ended (its answer was on
-     * its way). The next {@code answerAtOnce} jobs are ended inside submit, as {@link Background#inline} does.
-     */
-    private static final class HeldJobs implements Background {
-        final List<Held<?>> jobs = new ArrayList<>();
-        int answerAtOnce;
-
-        @Override
-        public <T> Job submit(Callable<T> work, Consumer<T> done, Consumer<Throwable> failed) {
-            Held<T> held = new Held<>(work, done, failed);
-            jobs.add(held);
-            if (answerAtOnce > 0) {
-                answerAtOnce--;
-                held.end();
-            }
-            return held;
-        }
-
-        Held<?> job(int i) {
-            return jobs.get(i);
-        }
-    }
-
-    private static final class Held<T> implements Background.Job {
-        private final Callable<T> work;
-        private final Consumer<T> done;
-        private final Consumer<Throwable> failed;
-        boolean cancelled;
-
-        Held(Callable<T> work, Consumer<T> done, Consumer<Throwable> failed) {
-            this.work = work;
-            this.done = done;
-            this.failed = failed;
-        }
-
-        void end() {
-            T value;
-            try {
-                value = work.call();
-            } catch (Exception e) {
-                failed.accept(e);
-                return;
-            }
-            done.accept(value);
-        }
-
-        @Override
-        public void cancel() {
-            cancelled = true;
-        }
-    }
 
     private final HeldJobs worker = new HeldJobs();
     private final LatestJob latest = new LatestJob(worker);
@@ -74,55 +19,52 @@ class LatestJobTest {
         latest.submit(() -> answer, heard::add, ex -> heard.add("failed: " + ex.getMessage()));
     }
 
-    private void submitFailing(String problem) {
-        latest.<String>submit(() -> {
-            throw new IllegalStateException(problem);
-        }, heard::add, ex -> heard.add("failed: " + ex.getMessage()));
+    /**
+     * Submits an older and a newer job (each answering its name, or failing with "name broke"), ends them in the
+     * order given, and returns what was heard.
+     */
+    private static List<String> race(boolean olderFails, boolean newerFails, int endedFirst) {
+        HeldJobs jobs = new HeldJobs();
+        LatestJob job = new LatestJob(jobs);
+        List<String> got = new ArrayList<>();
+        job.submit(() -> answerOrFail("older", olderFails), got::add, ex -> got.add("failed: " + ex.getMessage()));
+        job.submit(() -> answerOrFail("newer", newerFails), got::add, ex -> got.add("failed: " + ex.getMessage()));
+        jobs.job(endedFirst).end();
+        jobs.job(1 - endedFirst).end();
+        return got;
+    }
+
+    private static String answerOrFail(String name, boolean fails) {
+        if (fails) {
+            throw new IllegalStateException(name + " broke");
+        }
+        return name;
     }
 
     @Test
-    void anOlderAnswerArrivingAfterANewerSubmitIsDropped() {
-        submit("older");
-        submit("newer");
-        worker.job(0).end();
-        assertEquals(List.of(), heard, "the older answer came after the newer submit");
-        worker.job(1).end();
-        assertEquals(List.of("newer"), heard);
-    }
-
-    @Test
-    void anOlderAnswerArrivingAfterTheNewerOneIsDropped() {
-        submit("older");
-        submit("newer");
-        worker.job(1).end();
-        worker.job(0).end();
-        assertEquals(List.of("newer"), heard);
+    void anOlderAnswerIsDroppedWhetherItArrivesBeforeOrAfterTheNewerOne() {
+        assertEquals(List.of("newer"), race(false, false, 0), "the older answer came first, after the newer submit");
+        assertEquals(List.of("newer"), race(false, false, 1), "the older answer came last");
     }
 
     @Test
     void anOlderJobsFailureIsDropped() {
-        submitFailing("older broke");
-        submit("newer");
-        worker.job(0).end();
-        worker.job(1).end();
-        assertEquals(List.of("newer"), heard);
+        assertEquals(List.of("newer"), race(true, false, 0));
+        assertEquals(List.of("newer"), race(true, false, 1));
     }
 
     @Test
     void theLatestJobsFailureIsPassedOn() {
-        submit("older");
-        submitFailing("newer broke");
-        worker.job(1).end();
-        worker.job(0).end();
-        assertEquals(List.of("failed: newer broke"), heard);
+        assertEquals(List.of("failed: newer broke"), race(false, true, 0));
+        assertEquals(List.of("failed: newer broke"), race(false, true, 1));
     }
 
     @Test
     void aNewSubmitCancelsTheOlderJobOnly() {
         submit("older");
         submit("newer");
-        assertTrue(worker.job(0).cancelled);
-        assertFalse(worker.job(1).cancelled);
+        assertTrue(worker.job(0).cancelled());
+        assertFalse(worker.job(1).cancelled());
     }
 
     @Test
@@ -130,7 +72,7 @@ class LatestJobTest {
         submit("first");
         worker.job(0).end();
         submit("second");
-        assertFalse(worker.job(0).cancelled, "nothing to cancel once the answer is in");
+        assertFalse(worker.job(0).cancelled(), "nothing to cancel once the answer is in");
         assertEquals(List.of("first"), heard);
     }
 
@@ -138,7 +80,7 @@ class LatestJobTest {
     void forgetCancelsTheJobAndDropsItsAnswer() {
         submit("forgotten");
         assertTrue(latest.forget(), "an answer was awaited");
-        assertTrue(worker.job(0).cancelled);
+        assertTrue(worker.job(0).cancelled());
         worker.job(0).end();
         assertEquals(List.of(), heard);
         assertFalse(latest.forget(), "nothing awaited any more");
@@ -190,10 +132,10 @@ class LatestJobTest {
 
     @Test
     void aJobAnsweredInsideSubmitIsNotKeptAsTheOneUnderWay() {
-        worker.answerAtOnce = 1;
+        worker.answerAtOnce(1);
         submit("at once");
         submit("held");
-        assertFalse(worker.job(0).cancelled, "it had answered before submit returned");
+        assertFalse(worker.job(0).cancelled(), "it had answered before submit returned");
         assertEquals(List.of("at once"), heard);
         worker.job(1).end();
         assertEquals(List.of("at once", "held"), heard);
@@ -201,11 +143,11 @@ class LatestJobTest {
 
     @Test
     void aJobSubmittedFromAnAnswerGivenInsideSubmitIsTheOneUnderWay() {
-        worker.answerAtOnce = 1;
+        worker.answerAtOnce(1);
         latest.submit(() -> "first", first -> submit("second"), ex -> { });
         assertTrue(latest.forget(), "the second job is awaited");
-        assertTrue(worker.job(1).cancelled, "forget cancelled the second job");
-        assertFalse(worker.job(0).cancelled);
+        assertTrue(worker.job(1).cancelled(), "forget cancelled the second job");
+        assertFalse(worker.job(0).cancelled());
     }
 
     @Test
@@ -214,7 +156,7 @@ class LatestJobTest {
         latest.submit(() -> "first", first -> submit("second"), ex -> { });
         worker.job(0).end();
         assertTrue(latest.forget(), "the second job is awaited");
-        assertTrue(worker.job(1).cancelled, "forget cancelled the second job");
+        assertTrue(worker.job(1).cancelled(), "forget cancelled the second job");
     }
 
     @Test
@@ -238,7 +180,7 @@ class LatestJobTest {
     void takingAMarkNeitherCancelsNorDropsTheJobUnderWay() {
         submit("main");
         LatestJob.Mark mark = latest.mark();
-        assertFalse(worker.job(0).cancelled);
+        assertFalse(worker.job(0).cancelled());
         worker.job(0).end();
         assertEquals(List.of("main"), heard);
         assertTrue(mark.stillCurrent(), "the main job's answer does not change what the mark started from");
