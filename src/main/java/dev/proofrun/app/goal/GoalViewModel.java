@@ -8,6 +8,7 @@ import dev.proofrun.app.session.DraftField;
 import dev.proofrun.app.session.ExpectationSource;
 import dev.proofrun.app.session.ExpectedProcess;
 import dev.proofrun.app.session.FieldNumbers;
+import dev.proofrun.app.session.LatestJob;
 import dev.proofrun.app.session.StudyDraft;
 import dev.proofrun.app.shell.IndexTip;
 import dev.proofrun.app.shell.StepViewModel;
@@ -58,9 +59,7 @@ public final class GoalViewModel extends StepViewModel {
     private final StringProperty pilotMessage = new SimpleStringProperty(this, "pilotMessage", "");
     private final BooleanProperty pilotLoading = new SimpleBooleanProperty(this, "pilotLoading", false);
     private final StringProperty indexSymbol = new SimpleStringProperty(this, "indexSymbol");
-    private final Background background;
-    private Background.Job pilotJob;
-    private long pilotGeneration;
+    private final LatestJob pilotReading;
 
     private StringBinding unit;
 
@@ -74,7 +73,7 @@ public final class GoalViewModel extends StepViewModel {
         super(AppMessage.STEP_GOAL.english(), AppMessage.STEP_GOAL_HINT.english());
         this.draft = draft;
         this.base = base;
-        this.background = background;
+        this.pilotReading = new LatestJob(background);
         syncEnum(index, draft.field(DraftField.INDEX), IndexKind::token, t -> {
             try {
                 return IndexKind.fromToken(t);
@@ -262,13 +261,10 @@ public final class GoalViewModel extends StepViewModel {
      */
     public boolean loadPilot(Path file) {
         pilot.set(null);
-        if (pilotJob != null) {
-            pilotJob.cancel();
-        }
-        long mine = ++pilotGeneration;
         Optional<CharacteristicDraft> row = focus.get();
         Optional<Requirement> req = requirement.get();
         if (row.isEmpty() || row.get().limits().isEmpty() || req.isEmpty()) {
+            pilotReading.forget();
             pilotLoading.set(false);
             pilotMessage.set(AppMessage.GOAL_PILOT_BAD.format(AppMessage.HANDOUT_EARLIER.format()));
             return false;
@@ -279,20 +275,15 @@ public final class GoalViewModel extends StepViewModel {
         IndexKind k = index.get();
         pilotLoading.set(true);
         pilotMessage.set(AppMessage.GOAL_PILOT_READING.format(file.getFileName()));
-        pilotJob = background.submit(() -> ExpectedProcess.readPilot(file, limits, nominal, confidence), r -> {
-                    if (mine != pilotGeneration) {
-                        return;
-                    }
+        pilotReading.submit(() -> ExpectedProcess.readPilot(file, limits, nominal, confidence), r -> {
                     pilotLoading.set(false);
                     draft.field(DraftField.PILOT_FILE).set(file.toString());
                     pilot.set(r);
                     pilotMessage.set(ExpectedProcess.pilotShown(r, k, confidence));
                 }, ex -> {
-                    if (mine == pilotGeneration) {
-                        pilotLoading.set(false);
-                        pilotMessage.set(AppMessage.GOAL_PILOT_BAD.format(ex instanceof UserException
-                                || ex instanceof IllegalArgumentException ? ex.getMessage() : String.valueOf(ex)));
-                    }
+                    pilotLoading.set(false);
+                    pilotMessage.set(AppMessage.GOAL_PILOT_BAD.format(ex instanceof UserException
+                            || ex instanceof IllegalArgumentException ? ex.getMessage() : String.valueOf(ex)));
                 });
         return true;
     }

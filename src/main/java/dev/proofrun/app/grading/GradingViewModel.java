@@ -6,6 +6,7 @@ import dev.proofrun.app.grading.GradingDisplay.ProblemRow;
 import dev.proofrun.app.grading.GradingDisplay.Tone;
 import dev.proofrun.app.session.Background;
 import dev.proofrun.app.session.DraftField;
+import dev.proofrun.app.session.LatestJob;
 import dev.proofrun.app.session.Session;
 import dev.proofrun.app.shell.StepViewModel;
 import dev.proofrun.grade.CharacteristicGrade;
@@ -61,8 +62,7 @@ public final class GradingViewModel extends StepViewModel {
     private final BooleanProperty reporting = new SimpleBooleanProperty(this, "reporting", false);
     private final StringProperty message = new SimpleStringProperty(this, "message", "");
     private final Background background;
-    private Background.Job running;
-    private long generation;
+    private final LatestJob grading;
     private StudyPlan gradedAgainst;
     private String gradedFile;
 
@@ -70,6 +70,7 @@ public final class GradingViewModel extends StepViewModel {
         super(AppMessage.STEP_GRADING.english(), AppMessage.STEP_GRADING_HINT.english());
         this.session = session;
         this.background = background;
+        this.grading = new LatestJob(background);
         bindMissing(Bindings.createStringBinding(() -> "", result));
         session.openedProperty().addListener((o, was, now) -> forget(true));
         selected.addListener((o, was, id) -> shown.set(grade(id).map(g -> EvidenceDisplay.of(g, gradedAgainst)).orElse(null)));
@@ -85,11 +86,7 @@ public final class GradingViewModel extends StepViewModel {
      * it belonged to another plan or another returned file. The message goes too when the plan changed.
      */
     private void forget(boolean message) {
-        if (running != null) {
-            running.cancel();
-            running = null;
-        }
-        generation++;
+        grading.forget();
         busy.set(false);
         clearResult();
         if (message) {
@@ -184,26 +181,18 @@ public final class GradingViewModel extends StepViewModel {
             message.set(AppMessage.GRADING_NOT_FOUND.format(text));
             return false;
         }
-        if (running != null) {
-            running.cancel();
-        }
         String display = file.getFileName().toString();
-        long mine = ++generation;
         clearResult();
         busy.set(true);
         message.set("");
-        running = background.submit(() -> Grader.grade(GradingPlans.of(plan), file, display), r -> {
-            if (mine == generation) {
-                gradedAgainst = plan;
-                gradedFile = text;
-                apply(r);
-            }
+        grading.submit(() -> Grader.grade(GradingPlans.of(plan), file, display), r -> {
+            gradedAgainst = plan;
+            gradedFile = text;
+            apply(r);
         }, ex -> {
-            if (mine == generation) {
-                busy.set(false);
-                clearResult();
-                message.set(AppMessage.GRADING_FAILED.failure(ex));
-            }
+            busy.set(false);
+            clearResult();
+            message.set(AppMessage.GRADING_FAILED.failure(ex));
         });
         return true;
     }
@@ -230,19 +219,19 @@ public final class GradingViewModel extends StepViewModel {
             return false;
         }
         reporting.set(true);
-        long mine = generation;
+        LatestJob.Mark gradedFrom = grading.mark();
         message.set(AppMessage.GRADING_REPORTING.format(target));
         background.submit(() -> {
             GradeReport.write(r, against, Paper.A4, target);
             return target;
         }, written -> {
             reporting.set(false);
-            if (mine == generation) {
+            if (gradedFrom.stillCurrent()) {
                 message.set(AppMessage.GRADING_REPORT.format(written));
             }
         }, ex -> {
             reporting.set(false);
-            if (mine == generation) {
+            if (gradedFrom.stillCurrent()) {
                 message.set(AppMessage.GRADING_REPORT_FAILED.failure(ex));
             }
         });

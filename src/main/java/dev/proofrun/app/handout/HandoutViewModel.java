@@ -3,6 +3,7 @@ package dev.proofrun.app.handout;
 import dev.proofrun.app.AppMessage;
 import dev.proofrun.app.goal.GoalViewModel;
 import dev.proofrun.app.session.Background;
+import dev.proofrun.app.session.LatestJob;
 import dev.proofrun.app.session.Session;
 import dev.proofrun.app.shell.StepViewModel;
 import dev.proofrun.app.sizing.SizingViewModel;
@@ -55,8 +56,7 @@ public final class HandoutViewModel extends StepViewModel {
     private final ObjectBinding<Optional<StudyPlan>> issued;
     private Consumer<String> opener = uri -> { };
     private final Background background;
-    private Background.Job preview;
-    private long generation;
+    private final LatestJob preview;
 
     /** The plan the steps describe now, or why there is none. */
     public record Composed(Optional<StudyPlan> plan, String problem) {
@@ -71,6 +71,7 @@ public final class HandoutViewModel extends StepViewModel {
         super(AppMessage.STEP_HANDOUT.english(), AppMessage.STEP_HANDOUT_HINT.english());
         this.session = session;
         this.background = background;
+        this.preview = new LatestJob(background);
         plans = new ComposedPlan(session, goal, sizing, timing);
         writes = new PlanWrites(session, plans, files, issuing, message, this::getMissing, this::refreshPreview);
         composed = plans.composed();
@@ -307,12 +308,9 @@ public final class HandoutViewModel extends StepViewModel {
 
     /** Renders the sheet of the plan as it stands (issued or marked DRAFT) in the background. */
     public void refreshPreview() {
-        if (preview != null) {
-            preview.cancel();
-        }
-        long mine = ++generation;
         Optional<StudyPlan> plan = issuedNow().or(() -> composed.get().plan());
         if (plan.isEmpty()) {
+            preview.forget();
             pages.clear();
             busy.set(false);
             return;
@@ -320,7 +318,7 @@ public final class HandoutViewModel extends StepViewModel {
         StudyPlan p = plan.get();
         Paper size = paper();
         busy.set(true);
-        preview = background.submit(() -> {
+        preview.submit(() -> {
             List<Image> out = new java.util.ArrayList<>();
             for (java.awt.image.BufferedImage page : SheetPreview.pages(p, size, PREVIEW_DPI,
                     () -> Thread.currentThread().isInterrupted())) {
@@ -328,15 +326,11 @@ public final class HandoutViewModel extends StepViewModel {
             }
             return out;
         }, images -> {
-            if (mine == generation) {
-                pages.setAll(images);
-                busy.set(false);
-            }
+            pages.setAll(images);
+            busy.set(false);
         }, ex -> {
-            if (mine == generation) {
-                busy.set(false);
-                message.set(AppMessage.HANDOUT_PREVIEW_FAILED.format(String.valueOf(ex.getMessage())));
-            }
+            busy.set(false);
+            message.set(AppMessage.HANDOUT_PREVIEW_FAILED.format(String.valueOf(ex.getMessage())));
         });
     }
 }

@@ -12,8 +12,8 @@ import javafx.concurrent.Task;
 /**
  * Runs the core's long work off the FX thread. {@link #fx} wraps each job in a JavaFX {@link Task} on a
  * daemon worker, and delivers the answer on the FX thread; {@link #inline} runs the job at once on the
- * calling thread (plain view-model tests). View-models keep "latest wins" themselves: they cancel the
- * older job and drop its answer.
+ * calling thread (plain view-model tests). Work of which only the latest request counts goes through a
+ * {@link LatestJob}, which cancels the older job and drops its answer.
  */
 public interface Background {
 

@@ -10,10 +10,12 @@
  * the wizard's parsers ({@code FieldNumbers}, {@code CalendarText}), and {@code ExpectedProcess}, the Goal step's
  * expectation from a typed index, a mean and σ, or pilot readings.
  *
- * {@code Background} runs long work as a JavaFX {@code Task} on a daemon worker; the view-model cancels the
- * older job and drops its answer (latest wins). {@code Background.fxFinishing} is the plan-file writer: not a
- * daemon, so closing the window during an issue still finishes the write, and it ends itself 2 s after its
- * last job so it never holds the JVM open ({@code BackgroundTest}). {@code Background.inline()} runs jobs at
- * once, so view-models are tested in plain JUnit without a toolkit.
+ * {@code Background} runs long work as a JavaFX {@code Task} on a daemon worker; {@code LatestJob} in front of it
+ * keeps the latest request's answer (it cancels the older job and drops its answer, {@code forget} drops a
+ * pending one, and a {@code mark} tells a side job whether the answer it started from still stands).
+ * {@code Background.fxFinishing} is the plan-file writer: not a daemon, so closing the window during an issue
+ * still finishes the write, and it ends itself 2 s after its last job so it never holds the JVM open
+ * ({@code BackgroundTest}). {@code Background.inline()} runs jobs at once, so view-models are tested in plain
+ * JUnit without a toolkit.
  */
 package dev.proofrun.app.session;

@@ -13,6 +13,7 @@ import dev.proofrun.design.SharedDesign;
 import dev.proofrun.design.SharedDesigner;
 import dev.proofrun.design.StudyDesigner;
 import dev.proofrun.app.session.CharacteristicField;
+import dev.proofrun.app.session.LatestJob;
 import dev.proofrun.stats.ShapeFamily;
 import dev.proofrun.text.UserException;
 import java.util.ArrayList;
@@ -36,19 +37,17 @@ import javafx.beans.property.StringProperty;
  */
 final class AllCharacteristics {
 
-    private final Background background;
+    private final LatestJob computing;
     private final StringProperty together = new SimpleStringProperty(this, "together", "");
     private final StringProperty sharedLine = new SimpleStringProperty(this, "sharedLine", "");
     private final ObjectProperty<SharedDesign> shared = new SimpleObjectProperty<>(this, "shared");
     private String driver = "";
-    private Background.Job job;
-    private long generation;
     private Asked asked;
     private int askedN;
     private int askedK;
 
     AllCharacteristics(Background background) {
-        this.background = background;
+        this.computing = new LatestJob(background);
     }
 
     /** Each characteristic's power at the chosen design and their product; empty with one characteristic. */
@@ -94,16 +93,12 @@ final class AllCharacteristics {
         asked = now;
         askedN = n;
         askedK = k;
-        if (job != null) {
-            job.cancel();
-        }
         if (!sameCharacteristics) {
             shared.set(null);
             sharedLine.set(now.requests().size() < 2 ? "" : SizingMessage.SHARED_BUSY.format());
         }
         SharedDesign known = shared.get();
-        long mine = ++generation;
-        job = background.submit(() -> {
+        computing.submit(() -> {
             Powers powers = powers(now, n, k);
             SharedDesign all = known;
             String refused = "";
@@ -116,18 +111,14 @@ final class AllCharacteristics {
             }
             return new Answer(powers, all, refused);
         }, answer -> {
-            if (mine == generation) {
-                together.set(text(now, answer.powers()));
-                driver = answer.shared() == null ? "" : now.ids().get(answer.shared().driver());
-                shared.set(answer.shared());
-                sharedLine.set(answer.shared() != null ? sharedText(now, answer.shared())
-                        : answer.refused().isEmpty() ? "" : SizingMessage.SHARED_NONE.format(answer.refused()));
-            }
+            together.set(text(now, answer.powers()));
+            driver = answer.shared() == null ? "" : now.ids().get(answer.shared().driver());
+            shared.set(answer.shared());
+            sharedLine.set(answer.shared() != null ? sharedText(now, answer.shared())
+                    : answer.refused().isEmpty() ? "" : SizingMessage.SHARED_NONE.format(answer.refused()));
         }, ex -> {
-            if (mine == generation) {
-                together.set("");
-                sharedLine.set("");
-            }
+            together.set("");
+            sharedLine.set("");
         });
     }
 

@@ -3,6 +3,7 @@ package dev.proofrun.app.sizing;
 import dev.proofrun.app.AppMessage;
 import dev.proofrun.app.chart.CurvePlot.Line;
 import dev.proofrun.app.session.Background;
+import dev.proofrun.app.session.LatestJob;
 import dev.proofrun.design.Design;
 import dev.proofrun.design.DesignRequest;
 import dev.proofrun.design.Spending;
@@ -111,7 +112,7 @@ public final class SizingStages {
     /** True indices at which the expected readings are drawn. */
     static final int CURVE_POINTS = 9;
 
-    private final Background background;
+    private final LatestJob computing;
     private final LooksChoice choice;
     private final ObjectBinding<Asking> asking;
     private final StringBinding text;
@@ -120,8 +121,6 @@ public final class SizingStages {
     private final BooleanProperty busy = new SimpleBooleanProperty(this, "busy", false);
     private final StringProperty refusal = new SimpleStringProperty(this, "refusal", "");
     private Request asked;
-    private Background.Job running;
-    private long generation;
 
     /**
      * @param choice       the looks chosen
@@ -130,7 +129,7 @@ public final class SizingStages {
      * @param dependencies what the request rests on
      */
     SizingStages(Background background, LooksChoice choice, Supplier<Asking> build, Observable... dependencies) {
-        this.background = background;
+        this.computing = new LatestJob(background);
         this.choice = choice;
         asking = Bindings.createObjectBinding(build::get, dependencies);
         // a request equal to the last is dropped before anything is cancelled (ask)
@@ -203,34 +202,21 @@ public final class SizingStages {
             return;
         }
         asked = now;
-        if (running != null) {
-            running.cancel();
-            running = null;
-        }
-        long mine = ++generation;
         refusal.set(refused);
         answer.set(null);
         if (now == null) {
+            computing.forget();
             busy.set(false);
             return;
         }
         busy.set(true);
-        Background.Job job = background.submit(() -> compute(now), done -> {
-            if (mine == generation) {
-                running = null;
-                busy.set(false);
-                answer.set(done);
-            }
+        computing.submit(() -> compute(now), done -> {
+            busy.set(false);
+            answer.set(done);
         }, ex -> {
-            if (mine == generation) {
-                running = null;
-                busy.set(false);
-                refusal.set(AppMessage.SIZING_FAILED.failure(ex));
-            }
+            busy.set(false);
+            refusal.set(AppMessage.SIZING_FAILED.failure(ex));
         });
-        if (mine == generation && busy.get()) {
-            running = job;
-        }
     }
 
     /** The core's work, on the worker. */

@@ -2,6 +2,7 @@ package dev.proofrun.app.sizing;
 
 import dev.proofrun.app.AppMessage;
 import dev.proofrun.app.session.Background;
+import dev.proofrun.app.session.LatestJob;
 import dev.proofrun.design.DesignRequest;
 import dev.proofrun.design.DesignRow;
 import dev.proofrun.design.DesignTable;
@@ -21,7 +22,7 @@ import javafx.collections.ObservableList;
  */
 final class SizingTable {
 
-    private final Background background;
+    private final LatestJob computing;
     private final Runnable changed;
     private final ObjectProperty<DesignTable> table = new SimpleObjectProperty<>(this, "table");
     private final ObjectProperty<DesignTable> chosenTable = new SimpleObjectProperty<>(this, "chosenTable");
@@ -30,14 +31,12 @@ final class SizingTable {
     private final ObjectProperty<DesignRow> chosen = new SimpleObjectProperty<>(this, "chosen");
     private final BooleanProperty busy = new SimpleBooleanProperty(this, "busy", false);
     private final StringProperty refusal = new SimpleStringProperty(this, "refusal", "");
-    private Background.Job running;
-    private long generation;
     private SizingCost.KeptPower keptPower;
     private SizingCurves.PlanCurve planCurve;
 
     /** @param changed called on the FX thread whenever the table is applied or cleared */
     SizingTable(Background background, Runnable changed) {
-        this.background = background;
+        this.computing = new LatestJob(background);
         this.changed = changed;
     }
 
@@ -85,29 +84,19 @@ final class SizingTable {
      * @param kept   the plan's own k, if it keeps one
      */
     void recompute(Optional<DesignRequest> q, int wanted, Optional<Integer> kept) {
-        if (running != null) {
-            running.cancel();
-            running = null;
-        }
         if (q.isEmpty()) {
+            computing.forget();
             busy.set(false);
             clear();
             return;
         }
         refusal.set("");
         DesignRequest req = q.get();
-        long mine = ++generation;
         busy.set(true);
-        running = background.submit(() -> SizingJob.compute(req, wanted, kept), answer -> {
-            if (mine == generation) {
-                apply(answer);
-            }
-        }, ex -> {
-            if (mine == generation) {
-                busy.set(false);
-                refusal.set(AppMessage.SIZING_FAILED.failure(ex));
-                clear();
-            }
+        computing.submit(() -> SizingJob.compute(req, wanted, kept), this::apply, ex -> {
+            busy.set(false);
+            refusal.set(AppMessage.SIZING_FAILED.failure(ex));
+            clear();
         });
     }
 

@@ -4,6 +4,7 @@ import dev.proofrun.app.AppMessage;
 import dev.proofrun.app.session.Background;
 import dev.proofrun.app.session.DecimalSetting;
 import dev.proofrun.app.session.FieldNumbers;
+import dev.proofrun.app.session.LatestJob;
 import dev.proofrun.app.session.Session;
 import dev.proofrun.app.shell.StepViewModel;
 import dev.proofrun.text.DecimalMark;
@@ -21,8 +22,7 @@ public final class StartViewModel extends StepViewModel {
 
     private final Session session;
     private final Background files;
-    private Background.Job reading;
-    private long generation;
+    private final LatestJob reading;
     private final BooleanProperty opening = new SimpleBooleanProperty(this, "opening", false);
     private final ObservableList<Path> recent = FXCollections.observableArrayList();
     private final BooleanProperty loaded = new SimpleBooleanProperty(this, "loaded", false);
@@ -38,6 +38,7 @@ public final class StartViewModel extends StepViewModel {
         super(AppMessage.STEP_START.english(), AppMessage.STEP_START_HINT.english());
         this.session = session;
         this.files = files;
+        this.reading = new LatestJob(files);
         bindMissing(Bindings.when(loaded).then("").otherwise(AppMessage.NO_PLAN.english()));
         refresh();
         FieldNumbers.decimalMarkProperty().set(DecimalSetting.load(session.home()));
@@ -105,10 +106,7 @@ public final class StartViewModel extends StepViewModel {
      * plan file still being read is dropped: the latest request wins.
      */
     public void newPlan() {
-        if (reading != null) {
-            reading.cancel();
-            reading = null;
-            generation++;
+        if (reading.forget()) {
             opening.set(false);
         }
         boolean restored = session.startNew();
@@ -141,17 +139,9 @@ public final class StartViewModel extends StepViewModel {
      * (an earlier one still reading is cancelled and its answer dropped).
      */
     private void open(java.util.concurrent.Callable<Session.Opening> read, Runnable then) {
-        if (reading != null) {
-            reading.cancel();
-        }
-        long mine = ++generation;
         opening.set(true);
         message.set(AppMessage.OPENING.english());
-        reading = files.submit(read, o -> {
-            if (mine != generation) {
-                return;
-            }
-            reading = null;
+        reading.submit(read, o -> {
             opening.set(false);
             session.apply(o);
             message.set(o.restored() ? AppMessage.DRAFT_RESTORED.format(session.drafts().sideFile(o.file()).getFileName())
@@ -160,15 +150,8 @@ public final class StartViewModel extends StepViewModel {
             recent.setAll(o.recent());
             then.run();
         }, failure -> {
-            if (mine != generation) {
-                return;
-            }
-            reading = null;
             opening.set(false);
             message.set(AppMessage.OPEN_FAILED.failure(failure));
         });
-        if (!opening.get()) {
-            reading = null; // answered at once (a worker that runs jobs on the caller's thread)
-        }
     }
 }

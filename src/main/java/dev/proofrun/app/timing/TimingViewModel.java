@@ -4,6 +4,7 @@ import dev.proofrun.app.AppMessage;
 import dev.proofrun.app.session.Background;
 import dev.proofrun.app.session.CalendarText;
 import dev.proofrun.app.session.DraftField;
+import dev.proofrun.app.session.LatestJob;
 import dev.proofrun.app.session.StudyDraft;
 import dev.proofrun.app.shell.StepViewModel;
 import dev.proofrun.design.Design;
@@ -53,9 +54,7 @@ public final class TimingViewModel extends StepViewModel {
     private final ObjectBinding<Optional<Request>> request;
     private final ObjectProperty<Outcome> outcome = new SimpleObjectProperty<>(this, "outcome", new Outcome(Optional.empty(), ""));
     private final BooleanProperty busy = new SimpleBooleanProperty(this, "busy", false);
-    private final Background background;
-    private Background.Job running;
-    private long generation;
+    private final LatestJob scheduling;
 
     /** The schedule, or why there is none. */
     private record Outcome(Optional<Schedule> schedule, String problem) {
@@ -69,7 +68,7 @@ public final class TimingViewModel extends StepViewModel {
         super(AppMessage.STEP_TIMING.english(), AppMessage.STEP_TIMING_HINT.english());
         this.draft = draft;
         this.design = design;
-        this.background = background;
+        this.scheduling = new LatestJob(background);
         for (DraftField f : FIELDS) {
             problems.put(f, Bindings.createStringBinding(() -> check(f), draft.field(f)));
         }
@@ -237,29 +236,22 @@ public final class TimingViewModel extends StepViewModel {
 
     /** Runs the scheduler for the current inputs in the background; the latest request wins. */
     private void reschedule() {
-        if (running != null) {
-            running.cancel();
-        }
         Optional<Request> q = request.get();
-        long mine = ++generation;
         if (q.isEmpty()) {
+            scheduling.forget();
             busy.set(false);
             outcome.set(new Outcome(Optional.empty(), ""));
             return;
         }
         Request r = q.get();
         busy.set(true);
-        running = background.submit(() -> Scheduler.schedule(r.calendar(), r.span(), r.design().subgroups(),
+        scheduling.submit(() -> Scheduler.schedule(r.calendar(), r.span(), r.design().subgroups(),
                 r.design().subgroupSize(), r.spacing(), r.seed()), s -> {
-                    if (mine == generation) {
-                        busy.set(false);
-                        outcome.set(new Outcome(Optional.of(s), ""));
-                    }
+                    busy.set(false);
+                    outcome.set(new Outcome(Optional.of(s), ""));
                 }, ex -> {
-                    if (mine == generation) {
-                        busy.set(false);
-                        outcome.set(new Outcome(Optional.empty(), ex.getMessage()));
-                    }
+                    busy.set(false);
+                    outcome.set(new Outcome(Optional.empty(), ex.getMessage()));
                 });
     }
 

@@ -6,13 +6,11 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.proofrun.app.session.AppHome;
 import dev.proofrun.app.session.Background;
+import dev.proofrun.app.session.HeldJobs;
 import dev.proofrun.app.session.Session;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.List;
-import java.util.concurrent.Callable;
-import java.util.function.Consumer;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -21,31 +19,6 @@ class StartViewModelTest {
 
     @TempDir
     Path tmp;
-
-    /** Holds the submitted jobs; the test runs them and delivers their answers in the order it likes. */
-    private static final class HeldJobs implements Background {
-        record Held(Callable<Object> work, Consumer<Object> done, Consumer<Throwable> failed) {
-            void finish() {
-                Object v;
-                try {
-                    v = work.call();
-                } catch (Exception e) {
-                    failed.accept(e);
-                    return;
-                }
-                done.accept(v);
-            }
-        }
-
-        final List<Held> jobs = new ArrayList<>();
-
-        @Override
-        @SuppressWarnings("unchecked")
-        public <T> Job submit(Callable<T> work, Consumer<T> done, Consumer<Throwable> failed) {
-            jobs.add(new Held((Callable<Object>) work, (Consumer<Object>) done, failed));
-            return () -> { };
-        }
-    }
 
     @Test
     void theDraftChangesOnlyWhenTheFileIsRead() {
@@ -56,7 +29,7 @@ class StartViewModelTest {
         assertTrue(vm.openingProperty().get());
         assertFalse(vm.loadedProperty().get());
         assertTrue(session.base().isEmpty(), "nothing is on the desk while the file is read");
-        held.jobs.get(0).finish();
+        held.job(0).end();
         assertFalse(vm.openingProperty().get());
         assertTrue(vm.loadedProperty().get());
         assertEquals("PR-2027-0311", session.base().orElseThrow().id());
@@ -74,8 +47,8 @@ class StartViewModelTest {
         StartViewModel vm = new StartViewModel(session, held);
         vm.open(demo);
         vm.open(other);
-        held.jobs.get(1).finish();
-        held.jobs.get(0).finish();
+        held.job(1).end();
+        held.job(0).end();
         assertEquals(other.toAbsolutePath().normalize(), session.draft().planFileProperty().get(),
                 "the plan asked for last is on the desk");
         assertFalse(vm.openingProperty().get());
@@ -89,7 +62,7 @@ class StartViewModelTest {
         vm.openDemo();
         vm.newPlan();
         assertFalse(vm.openingProperty().get());
-        held.jobs.get(0).finish();
+        held.job(0).end();
         assertTrue(session.base().isEmpty(), "the demo read late does not replace the new plan");
         assertTrue(vm.loadedProperty().get());
     }
