@@ -37,8 +37,9 @@ import java.util.List;
  * product understates the power slightly (on the safe side). A study voided at a look stops there.
  *
  * <p><b>Size.</b> K (the most subgroups) is the smallest, from the single-stage k up, whose whole-procedure power
- * reaches the wanted power (each try steps K by what the single stage's power curve says the shortfall costs, then
- * steps back while one fewer still reaches it); the single-stage floors apply to K. A design of one look is the single-stage design,
+ * reaches the wanted power (each try steps K by what the single stage's power curve says the shortfall costs, at
+ * most doubling it, then the gap to the last K that fell short is halved until they are neighbours); the
+ * single-stage floors apply to K. A design of one look is the single-stage design,
  * unchanged.
  *
  * <p>The simulation's seed is fixed, so a design is a function of what was asked: the last {@value #KEPT} are kept and
@@ -97,13 +98,17 @@ public final class StagedDesigner {
             k = nextTry(search, k, request.power() - found.power());
             found = eval.at(k);
         }
-        while (k - 1 > fail) {
-            StagedDesign fewer = eval.at(k - 1);
-            if (fewer.power() < request.power()) {
-                break;
+        // halve the gap between the last K that fell short and the first that reached the power (a walk down one at
+        // a time once took ~2,000 evaluations, half an hour: docs/decisions/staged-search-and-cancelling.md)
+        while (k - fail > 1) {
+            int middle = (fail + k) >>> 1;
+            StagedDesign tried = eval.at(middle);
+            if (tried.power() >= request.power()) {
+                k = middle;
+                found = tried;
+            } else {
+                fail = middle;
             }
-            k--;
-            found = fewer;
         }
         return found;
     }
@@ -149,7 +154,8 @@ public final class StagedDesigner {
     /**
      * The next K to try when K = {@code k} falls {@code shortfall} short of the wanted power: the K whose
      * single-stage power is that much above k's (the staged power grows with K about as the single stage's does),
-     * at least k + 1.
+     * at least k + 1 and at most 2k: near the power's ceiling (the gates hold the single stage's below 1) no K of
+     * the single stage has that much more, and the next try would otherwise be the largest K.
      */
     private static int nextTry(SizeSearch search, int k, double shortfall) {
         double wanted = search.powerWithUnstable(k, 0) + shortfall;
@@ -157,7 +163,7 @@ public final class StagedDesigner {
         while (next < search.largestK() && search.powerWithUnstable(next, 0) < wanted) {
             next += Math.max(1, (next - k) / 2);
         }
-        return Math.min(next, search.largestK());
+        return Math.min(next, Math.min(2 * k, search.largestK()));
     }
 
     /** The looks of a study of K subgroups in S stages: k_j = round(j·K/S). */

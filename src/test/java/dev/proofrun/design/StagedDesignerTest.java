@@ -11,6 +11,7 @@ import dev.proofrun.stats.IndexKind;
 import dev.proofrun.stats.SpecLimits;
 import dev.proofrun.text.UserException;
 import java.util.List;
+import java.util.concurrent.CancellationException;
 import org.apache.commons.rng.UniformRandomProvider;
 import org.apache.commons.rng.simple.RandomSource;
 import org.junit.jupiter.api.Test;
@@ -29,6 +30,32 @@ class StagedDesignerTest {
     /** The designer keeps its last designs, so the tests share this one. */
     private static StagedDesign threeLooks() {
         return StagedDesigner.design(DEMO, 5, 3, Spending.OBRIEN_FLEMING);
+    }
+
+    @Test
+    void nearThePowersCeilingTheSearchStillFindsTheSmallestK() {
+        // three Pocock looks at power 0.92: K = 30 falls short by so much that no single-stage K makes it up (the
+        // gates hold the single stage below 0.99), the case whose search once ran on for half an hour
+        DesignRequest asked = DEMO.withPower(0.92);
+        StagedDesign d = StagedDesigner.design(asked, 5, 3, Spending.POCOCK);
+        int k = d.stages().last().subgroups();
+        assertTrue(d.power() >= 0.92, d.toString());
+        assertTrue(StagedDesigner.at(asked, 5, k - 1, 3, Spending.POCOCK).power() < 0.92, "K - 1 = " + (k - 1));
+        assertTrue(k > 30 && k < 60, "K = " + k);
+    }
+
+    @Test
+    void aCancelledJobStopsTheSimulationAndKeepsNothing() {
+        // the wizard cancels a job by interrupting its worker; the designer then stops instead of finishing
+        Thread.currentThread().interrupt();
+        try {
+            assertThrows(CancellationException.class, () -> StagedDesigner.at(DEMO, 5, 31, 2, Spending.POCOCK));
+        } finally {
+            Thread.interrupted();
+        }
+        StagedDesign whole = StagedDesigner.at(DEMO, 5, 31, 2, Spending.POCOCK);
+        assertEquals(31, whole.stages().last().subgroups());
+        assertEquals(StagedDesigner.PATHS, whole.paths());
     }
 
     @Test
