@@ -77,6 +77,7 @@ final class AllCharacteristics {
     void update(List<CharacteristicDraft> rows, Optional<Requirement> plan,
             Function<CharacteristicDraft, Optional<Expectation>> expectation, double power, Optional<Design> design) {
         if (design.isEmpty() || rows.size() < 2) {
+            computing.forget(); // an answer still on its way must not fill the lines cleared here
             asked = null;
             together.set("");
             sharedLine.set("");
