@@ -62,6 +62,7 @@ class DesignedStagesThroughGraderTest {
         "3, OBRIEN_FLEMING, 5, 2000, 800, 63",
         "3, POCOCK,         5, 2000, 800, 64",
         "2, OBRIEN_FLEMING, 1, 2000, 800, 65",
+        "4, POCOCK,         5, 2000, 800, 66",
     })
     @Tag("long")
     void everyDesignKeepsTheRiskAndThePower(int looks, Spending spending, int n, int atTarget, int atExpected,
