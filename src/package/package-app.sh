@@ -1,8 +1,8 @@
 #!/usr/bin/env bash
 # Builds the desktop app from target/proofrun.jar (run by `mvn -B -Papp package`, after the shaded jar):
 #
-#   target/runtime/                     a Java runtime cut to the modules the jar needs, JavaFX's among them (jlink), with its own
-#                                       default class-data-sharing archive (-Xshare:dump)
+#   target/runtime/                     a Java runtime cut to the modules the jar needs, JavaFX's among them
+#                                       (jlink), with its own default class-data-sharing archive (-Xshare:dump)
 #   target/jpackage/proofrun/           the app image (jpackage --type app-image): bin/proofrun starts the wizard
 #   target/jpackage/proofrun/lib/app/proofrun.jsa
 #                                       the app's class-data-sharing archive, recorded in one training run
